@@ -1,0 +1,66 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import express from 'express';
+import { pinoHttp } from 'pino-http';
+import { config } from './config.ts';
+import { getSequelize } from './db.ts';
+import { logger } from './logger.ts';
+import { loadUser } from './middlewares/authenticate.ts';
+import { errorHandler } from './middlewares/error-handler.ts';
+import { sameOrigin } from './middlewares/same-origin.ts';
+import { securityHeaders } from './middlewares/security-headers.ts';
+import { initModels } from './models/index.ts';
+import { apiRouter } from './routes/index.ts';
+import { sessionMiddleware } from './session.ts';
+
+/** Options for building the app; tests pass their own database URL. */
+export interface AppOptions {
+  databaseUrl?: string;
+  /** Serve the built client from dist/ (off in API tests). */
+  serveClient?: boolean;
+  /** Cookies get `Secure` and HSTS is sent when the app is reached over HTTPS. */
+  https?: boolean;
+}
+
+/** Builds the Express app without listening, so tests can drive it directly. */
+export function createApp(options: AppOptions = {}) {
+  const databaseUrl = options.databaseUrl ?? process.env.DATABASE_URL ?? config.databaseUrl;
+  if (!databaseUrl) throw new Error('createApp needs a database URL');
+  initModels(getSequelize());
+  const https = options.https ?? (config.publicUrl?.startsWith('https:') ?? false);
+
+  const app = express();
+  app.disable('x-powered-by');
+  // One proxy hop (a load balancer) is trusted for the client address and protocol.
+  app.set('trust proxy', 'loopback, uniquelocal');
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  app.use(securityHeaders(https));
+
+  const sessions = sessionMiddleware(databaseUrl, https);
+  app.locals.sessionPool = sessions.pool;
+
+  const api = express.Router();
+  api.use(express.json({ limit: '6mb' }));
+  api.use(sameOrigin);
+  api.use(sessions.middleware);
+  api.use(loadUser);
+  api.use(apiRouter());
+  app.use('/api', api);
+
+  if (options.serveClient) serveClient(app);
+  app.use(errorHandler);
+  return app;
+}
+
+/** The built client: hashed assets cached for a year, HTML never cached, SPA fallback. */
+function serveClient(app: express.Express) {
+  const dist = config.distDir;
+  const indexHtml = path.join(dist, 'index.html');
+  if (!fs.existsSync(indexHtml)) throw new Error('The client is not built: run `npm run build` first.');
+  app.use('/assets', express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '365d', fallthrough: false }));
+  app.use(express.static(dist, { index: false, maxAge: '1h' }));
+  app.get('/{*splat}', (_req, res) => {
+    res.set('Cache-Control', 'no-cache');
+    res.sendFile(indexHtml);
+  });
+}

@@ -1,0 +1,67 @@
+import type { Server } from 'node:http';
+import { createApp } from '../app.ts';
+import { config } from '../config.ts';
+import { closeSequelize, getSequelize } from '../db.ts';
+import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
+import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
+import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
+import { logger } from '../logger.ts';
+import { startMailCatcher } from '../mail/catcher.ts';
+import { useMailCatcher } from '../mail/mailer.ts';
+import { migrate } from '../migrations/runner.ts';
+import { initModels } from '../models/index.ts';
+
+const started = Date.now();
+const ownsPostgres = !config.databaseUrl;
+
+if (ownsPostgres) {
+  process.env.DATABASE_URL = await startLocalPostgres(config.localPostgres);
+  console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
+}
+const sequelize = initModels(getSequelize());
+const applied = await migrate(sequelize);
+if (applied.length) console.log(`Applied ${applied.length} migration(s).`);
+
+let catcher: Awaited<ReturnType<typeof startMailCatcher>> | undefined;
+if (!config.smtpUrl) {
+  catcher = await startMailCatcher(config.smtpCatcherPort);
+  useMailCatcher(catcher.port);
+  console.log(`Mail catcher on 127.0.0.1:${catcher.port}; admins read it on the Outbox page.`);
+}
+
+if (config.isProduction) {
+  const unsafe = await accountsWithDemoPasswords();
+  if (unsafe.length) {
+    console.error(`Refusing to start in production: these accounts still use demo passwords: ${unsafe.join(', ')}. Change or deactivate them first.`);
+    process.exit(1);
+  }
+} else {
+  await seedDemo();
+}
+
+const app = createApp({ serveClient: true });
+const server: Server = app.listen(config.port, config.host, () => {
+  const url = `http://${config.host}:${config.port}`;
+  console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  if (!config.isProduction) {
+    console.log('\nDemo accounts (demo data only; never used in production):');
+    for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email.padEnd(30)} ${a.password}`);
+  }
+  console.log('\nPress Ctrl+C to stop.');
+});
+
+let stopping = false;
+async function shutdown(signal: string) {
+  if (stopping) return;
+  stopping = true;
+  logger.info({ signal }, 'shutting down');
+  server.close();
+  server.closeAllConnections();
+  catcher?.server.close(() => undefined);
+  await (app.locals.sessionPool as { end(): Promise<void> }).end().catch(() => undefined);
+  await closeSequelize();
+  if (ownsPostgres) stopLocalPostgres(config.localPostgres.dataDir);
+  process.exit(0);
+}
+process.on('SIGINT', () => void shutdown('SIGINT'));
+process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -1,0 +1,33 @@
+import path from 'node:path';
+
+/** Runtime settings, read once from the environment; defaults suit one machine on loopback. */
+export const config = {
+  env: process.env.NODE_ENV ?? 'development',
+  get isProduction() {
+    return this.env === 'production';
+  },
+  host: process.env.HOST ?? '127.0.0.1',
+  port: Number(process.env.PORT ?? 4780),
+  /** Set to use an existing PostgreSQL; when unset the project runs its own on loopback. */
+  databaseUrl: process.env.DATABASE_URL,
+  localPostgres: {
+    dataDir: path.resolve(process.env.STARPROOF_PGDATA ?? '.data/postgres'),
+    port: Number(process.env.STARPROOF_PGPORT ?? 54380),
+    database: 'starproof',
+  },
+  /** Set to use a real relay; when unset a local catcher runs on loopback. */
+  smtpUrl: process.env.SMTP_URL,
+  smtpCatcherPort: Number(process.env.STARPROOF_SMTP_PORT ?? 2526),
+  mailFrom: process.env.MAIL_FROM ?? 'Starproof <no-reply@starproof.invalid>',
+  sessionSecret: process.env.SESSION_SECRET ?? 'starproof-development-secret-change-me',
+  /** Base URL used in e-mailed links. */
+  publicUrl: process.env.PUBLIC_URL,
+  uploadsDir: path.resolve(process.env.UPLOADS_DIR ?? 'uploads'),
+  distDir: path.resolve('dist'),
+  logLevel: process.env.LOG_LEVEL ?? (process.env.NODE_ENV === 'test' ? 'silent' : 'info'),
+};
+
+/** The base URL for links in e-mail. */
+export function appBaseUrl(): string {
+  return config.publicUrl ?? `http://${config.host}:${config.port}`;
+}

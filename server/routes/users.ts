@@ -1,0 +1,50 @@
+import { Router } from 'express';
+import { IdSchema } from '@shared/schemas/common.ts';
+import { UserInviteSchema, UserUpdateSchema, type UserInviteInput, type UserUpdateInput } from '@shared/schemas/user.ts';
+import { ConflictError } from '../errors.ts';
+import { currentUser, requireUser } from '../middlewares/authenticate.ts';
+import { validate } from '../middlewares/validate.ts';
+import { User } from '../models/index.ts';
+import { authorize } from '../policies/index.ts';
+import { presentUser } from '../presenters/user.ts';
+import { resendInvitation, inviteUser } from '../services/user-invite.ts';
+import { updateUser } from '../services/user-update.ts';
+
+/** Loads a user by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
+async function findUser(id: string): Promise<User | null> {
+  return IdSchema.safeParse(id).success ? User.findByPk(id) : null;
+}
+
+export const usersRouter = Router();
+usersRouter.use(requireUser);
+
+usersRouter.get('/', async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'user', 'list');
+  const users = await User.findAll({ order: [['name', 'ASC']] });
+  res.json({ data: users.map((u) => presentUser(u, viewer)) });
+});
+
+usersRouter.post('/', validate(UserInviteSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'user', 'invite');
+  const user = await inviteUser(req.body as UserInviteInput, viewer, req.ip);
+  res.status(201).json({ data: presentUser(user, viewer) });
+});
+
+usersRouter.patch('/:id', validate(UserUpdateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const target = await findUser(req.params.id as string);
+  authorize(viewer, 'user', 'update', target);
+  const updated = await updateUser(target, req.body as UserUpdateInput, viewer, req.ip);
+  res.json({ data: presentUser(updated, viewer) });
+});
+
+usersRouter.post('/:id/invitation', async (req, res) => {
+  const viewer = currentUser(req);
+  const target = await findUser(req.params.id as string);
+  authorize(viewer, 'user', 'update', target);
+  if (target.passwordHash) throw ConflictError('This person has already accepted their invitation.', 'already_accepted');
+  await resendInvitation(target, viewer);
+  res.status(202).json({ data: { message: `A new invitation has been sent to ${target.email}.` } });
+});

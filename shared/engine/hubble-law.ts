@@ -1,0 +1,44 @@
+/**
+ * The simple Hubble law, d = cz/H0: a classroom model that holds only at small
+ * redshift. Under it every distance measure is the same cz/H0 and times are z/H0;
+ * results carry a warning when z > 0.1, where the law is no longer a good guide.
+ */
+import { SPEED_OF_LIGHT } from './constants.ts';
+import { hubbleTimeGyr } from './units.ts';
+
+/** Above this redshift the Hubble law's working carries a warning. */
+export const HUBBLE_LAW_MAX_Z = 0.1;
+
+/** The warning shown when the Hubble law is used beyond its range. */
+export const HUBBLE_LAW_WARNING =
+  'The simple Hubble law d = cz/H0 only holds for small redshifts (z < 0.1); at this redshift it misstates the distance — use a cosmology model instead.';
+
+/**
+ * Distance under the Hubble law.
+ * @param z redshift
+ * @param H0 Hubble constant in km/s/Mpc
+ * @returns cz/H0 in Mpc
+ */
+export function hubbleLawDistanceMpc(z: number, H0: number): number {
+  return (SPEED_OF_LIGHT.value * z) / H0;
+}
+
+/**
+ * Light-travel time under the Hubble law: the distance divided by c, i.e. z/H0.
+ * @param z redshift
+ * @param H0 Hubble constant in km/s/Mpc
+ * @returns z/H0 in Gyr
+ */
+export function hubbleLawTimeGyr(z: number, H0: number): number {
+  return z * hubbleTimeGyr(H0);
+}
+
+/**
+ * Redshift for a distance under the Hubble law, z = H0 d / c.
+ * @param dMpc distance in Mpc
+ * @param H0 Hubble constant in km/s/Mpc
+ * @returns z
+ */
+export function hubbleLawRedshift(dMpc: number, H0: number): number {
+  return (H0 * dMpc) / SPEED_OF_LIGHT.value;
+}

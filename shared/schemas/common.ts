@@ -1,0 +1,14 @@
+import { z } from 'zod';
+
+/** The one error shape every API failure uses. */
+export const ApiErrorSchema = z.object({
+  error: z.object({
+    code: z.string(),
+    message: z.string(),
+    fields: z.record(z.string(), z.string()).optional(),
+  }),
+});
+export type ApiError = z.infer<typeof ApiErrorSchema>;
+
+/** A UUID in a URL or body. */
+export const IdSchema = z.uuid({ message: 'must be a valid id' });

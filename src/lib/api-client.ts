@@ -1,0 +1,50 @@
+import type { ApiError } from '@shared/schemas/common.ts';
+
+/** A failed API call, carrying the server's error shape. */
+export class ApiRequestError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: string,
+    message: string,
+    readonly fields?: Record<string, string>,
+  ) {
+    super(message);
+  }
+}
+
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
+async function request<T>(method: Method, url: string, body?: unknown): Promise<T> {
+  let response: Response;
+  try {
+    response = await fetch(`/api${url}`, {
+      method,
+      credentials: 'same-origin',
+      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
+  } catch {
+    throw new ApiRequestError(0, 'network_error', 'Starproof cannot be reached. Check the connection; nothing was lost.');
+  }
+  if (response.status === 204) return undefined as T;
+  const payload = (await response.json().catch(() => undefined)) as (ApiError & { data?: unknown }) | undefined;
+  if (!response.ok) {
+    const error = payload?.error;
+    throw new ApiRequestError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
+  }
+  return payload as T;
+}
+
+/** The one HTTP client: every call resolves to the response's JSON body ({ data, meta? }). */
+export const api = {
+  get: <T>(url: string) => request<T>('GET', url),
+  post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
+  put: <T>(url: string, body: unknown) => request<T>('PUT', url, body),
+  patch: <T>(url: string, body: unknown) => request<T>('PATCH', url, body),
+  delete: <T>(url: string) => request<T>('DELETE', url),
+};
+
+/** Shape of a successful response. */
+export interface ApiData<T> {
+  data: T;
+}
