@@ -8,6 +8,7 @@ import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
 import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
+import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
 
@@ -40,6 +41,7 @@ if (config.isProduction) {
 }
 
 const app = createApp({ serveClient: true });
+await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
@@ -57,6 +59,7 @@ async function shutdown(signal: string) {
   logger.info({ signal }, 'shutting down');
   server.close();
   server.closeAllConnections();
+  await stopJobQueue().catch(() => undefined);
   catcher?.server.close(() => undefined);
   await (app.locals.sessionPool as { end(): Promise<void> }).end().catch(() => undefined);
   await closeSequelize();

@@ -7,6 +7,7 @@ import { User } from './user.ts';
 import { Venue } from './venue.ts';
 
 export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
+export type { TokenPurpose } from './auth-token.ts';
 
 let initialised: Sequelize | undefined;
 

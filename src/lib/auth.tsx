@@ -1,15 +1,17 @@
-import type { ReactNode } from 'react';
+import { createContext, useContext, type ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import type { Role } from '@shared/roles.ts';
 import type { SessionUser } from '@shared/schemas/user.ts';
 import { useMe } from '@/features/auth/api/get-me.ts';
 import { paths } from '@/config/paths.ts';
 
+const CurrentUserContext = createContext<SessionUser | null>(null);
+
 /** The signed-in user; only for components rendered inside <RequireUser>. */
 export function useCurrentUser(): SessionUser {
-  const { data } = useMe();
-  if (!data) throw new Error('useCurrentUser outside <RequireUser>');
-  return data;
+  const user = useContext(CurrentUserContext);
+  if (!user) throw new Error('useCurrentUser outside <RequireUser>');
+  return user;
 }
 
 /** Shows children to a signed-in user, else sends them to sign in and back. */
@@ -19,7 +21,7 @@ export function RequireUser({ children }: { children: ReactNode }) {
   if (isPending) return <p className="p-8 text-sm text-muted">Loading…</p>;
   if (isError) return <p className="p-8 text-sm text-broken">Starproof cannot be reached. Reload the page in a moment.</p>;
   if (!user) return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
-  return <>{children}</>;
+  return <CurrentUserContext.Provider value={user}>{children}</CurrentUserContext.Provider>;
 }
 
 /**
@@ -30,7 +32,7 @@ export function RequireRole({ roles, children }: { roles: Role[]; children: Reac
   const user = useCurrentUser();
   if (!roles.includes(user.role)) {
     return (
-      <div className="mx-auto max-w-xl p-8">
+      <div className="mx-auto max-w-xl py-8">
         <h1 className="text-xl font-semibold">Not available to your role</h1>
         <p className="mt-2 text-sm text-muted">This screen is for {roles.join(' or ')} accounts. Ask an admin if you need it.</p>
       </div>

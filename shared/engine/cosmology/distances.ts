@@ -172,7 +172,7 @@ export function brent(f: (x: number) => number, lo: number, hi: number, tol = 1e
       ? (a * fb * fc) / ((fa - fb) * (fa - fc)) + (b * fa * fc) / ((fb - fa) * (fb - fc)) + (c * fa * fb) / ((fc - fa) * (fc - fb))
       : b - (fb * (b - a)) / (fb - fa);
     const lowBound = (3 * a + b) / 4;
-    const bisect = !((s > Math.min(lowBound, b) && s < Math.max(lowBound, b))) ||
+    const bisect: boolean = !((s > Math.min(lowBound, b) && s < Math.max(lowBound, b))) ||
       (mflag && Math.abs(s - b) >= Math.abs(b - c) / 2) || (!mflag && Math.abs(s - b) >= Math.abs(c - d) / 2);
     if (bisect) s = (a + b) / 2;
     mflag = bisect;

@@ -62,7 +62,7 @@ export function AppShell() {
             <ThemeSwitch />
             <button
               type="button"
-              onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn.href()) })}
+              onClick={() => signOut.mutate(undefined, { onSuccess: () => navigate(paths.signIn.href(), { replace: true }) })}
               className="mt-1 flex w-full items-center gap-2.5 rounded-md px-2.5 py-2 text-sm text-muted hover:bg-wash hover:text-ink"
             >
               <Icon name="out" className="size-[18px]" />

@@ -1,0 +1,53 @@
+import PgBoss from 'pg-boss';
+import { logger } from '../logger.ts';
+
+/** A background job's handler; throwing makes pg-boss retry it with backoff. */
+export type JobHandler<T extends object> = (data: T) => Promise<void>;
+
+const handlers = new Map<string, JobHandler<object>>();
+let boss: PgBoss | undefined;
+
+/**
+ * Declares a job kind. Call at module load from the feature that owns the job; the worker starts
+ * when the queue starts (server start-up, or tests that call startJobQueue).
+ */
+export function defineJob<T extends object>(name: string, handler: JobHandler<T>): (data: T) => Promise<void> {
+  handlers.set(name, handler as JobHandler<object>);
+  return async (data: T) => {
+    await enqueue(name, data);
+  };
+}
+
+/** Starts pg-boss on the app's database (its tables live in their own `pgboss` schema) and the workers. */
+export async function startJobQueue(databaseUrl: string, { pollingIntervalSeconds = 0.5 } = {}): Promise<PgBoss> {
+  if (boss) return boss;
+  const instance = new PgBoss({ connectionString: databaseUrl, max: 4 });
+  instance.on('error', (err) => logger.warn({ err }, 'job queue error'));
+  await instance.start();
+  for (const [name, handler] of handlers) {
+    await instance.createQueue(name, { name, retryLimit: 5, retryDelay: 2, retryBackoff: true });
+    await instance.work<object>(name, { pollingIntervalSeconds, batchSize: 1 }, async (jobs) => {
+      for (const job of jobs) await handler(job.data);
+    });
+  }
+  boss = instance;
+  return instance;
+}
+
+/** Puts a job on the queue. Without a running queue (a CLI, some tests) the job runs inline. */
+export async function enqueue(name: string, data: object, options: PgBoss.SendOptions = {}): Promise<void> {
+  if (boss) {
+    await boss.send(name, data, options);
+    return;
+  }
+  const handler = handlers.get(name);
+  if (!handler) throw new Error(`Unknown job ${name}`);
+  await handler(data);
+}
+
+/** Stops the workers, letting running jobs finish. */
+export async function stopJobQueue(): Promise<void> {
+  if (!boss) return;
+  await boss.stop({ graceful: true, wait: true, timeout: 10_000 });
+  boss = undefined;
+}

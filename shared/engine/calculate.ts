@@ -1,0 +1,170 @@
+/**
+ * The calculation contract: `calculate(request)` validates an untrusted request,
+ * computes the quantity with its working and, when inputs carry uncertainties,
+ * a 68 % interval. It never throws and never returns NaN or Infinity: every
+ * failure becomes `{ error: { code, message } }`.
+ */
+import type { CalcQuantity, CalcRequest, CalcResult, CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
+import { CalcError } from './errors.ts';
+import { resolveModel } from './model-resolve.ts';
+import type { Ctx } from './quantities/context.ts';
+import type { Values } from './quantities/photometry.ts';
+import { QUANTITY_SPECS, checkInputs } from './quantities/registry.ts';
+import { parseRequest, requestId } from './request.ts';
+import { SAMPLES, SEED, monteCarlo, type Measurement } from './uncertainty.ts';
+import { conversionsFor } from './units.ts';
+import type { Step } from './working.ts';
+
+// More failed draws than this and an interval would misrepresent the uncertainty.
+const MAX_FAILED_FRACTION = 0.01;
+const H0_KEY = 'H0';
+
+function toMeasurement(x: MeasuredInput): Measurement {
+  if (typeof x === 'number') return { value: x, minus: 0, plus: 0, source: 'request' };
+  const source = x.source ?? 'request';
+  if ('minus' in x) return { value: x.value, minus: x.minus, plus: x.plus, source };
+  return { value: x.value, minus: x.sigma ?? 0, plus: x.sigma ?? 0, source };
+}
+
+/** Where each input is defined, to say which input pushed a Monte Carlo draw out of range. */
+const DOMAIN: Record<string, (x: number) => boolean> = {
+  z: (x) => x > -1,
+  parallax_mas: (x) => x > 0,
+  lookback_gyr: (x) => x > 0,
+  distance_mpc: (x) => x > 0,
+  distance_1: (x) => x > 0,
+  distance_2: (x) => x > 0,
+  extinction: (x) => x >= 0,
+  [H0_KEY]: (x) => x > 0,
+};
+
+function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
+  const r = req.H0_range;
+  if (r === undefined) return undefined;
+  if (!(r.low > 0 && r.low <= H0 && H0 <= r.high)) {
+    throw new CalcError('invalid_model', `H0_range must satisfy 0 < low ≤ H0 ≤ high with H0 = ${H0} (got low ${r.low}, high ${r.high})`);
+  }
+  return { value: H0, minus: H0 - r.low, plus: r.high - H0, source: 'H0_range in the request' };
+}
+
+function uncertaintyStep(measured: Record<string, Measurement>, quantity: string, low: number, high: number, unit: string): Step {
+  const varied = Object.entries(measured).filter(([, m]) => m.minus > 0 || m.plus > 0);
+  return {
+    title: 'Uncertainty: 68 % interval by Monte Carlo propagation',
+    formula: 'interval = [16th, 84th] percentile of the result over random draws of the inputs',
+    inputs: varied.map(([k, m]) => ({
+      symbol: k,
+      name: m.minus === m.plus ? `${k} ± ${m.plus}` : `${k} −${m.minus} +${m.plus}`,
+      value: m.value,
+      unit: '',
+      source: m.source,
+    })),
+    constants: [],
+    result: { symbol: 'Δ', name: `width of the 68 % interval of ${quantity}`, value: high - low, unit },
+    note: `${SAMPLES} draws from a seeded generator (mulberry32, seed ${SEED}), so the interval is reproducible. Each input is drawn from a two-piece normal whose 16th and 84th percentiles are value − minus and value + plus. H0 draws hold the density parameters fixed, so distances and times scale as 1/H0. Interval: ${low} to ${high}.`,
+  };
+}
+
+function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess {
+  const quantity: CalcQuantity = req.quantity;
+  const spec = QUANTITY_SPECS[quantity];
+  const rawInputs = req.inputs ?? {};
+  const present = new Set(Object.keys(rawInputs).filter((k) => rawInputs[k as keyof typeof rawInputs] !== undefined));
+  checkInputs(quantity, present);
+  const measured: Record<string, Measurement> = {};
+  for (const [k, v] of Object.entries(rawInputs)) {
+    if (k !== 'band' && v !== undefined) measured[k] = toMeasurement(v as MeasuredInput);
+  }
+  const usesModel = spec.usesModel(present);
+  const resolved = usesModel ? resolveModel(req.model) : null;
+  if (resolved && spec.flrwOnly && resolved.view.kind === 'hubble_law') {
+    throw new CalcError('not_in_hubble_law', `${quantity} needs a cosmology model; the simple Hubble law has no ${quantity.replaceAll('_', ' ')}`);
+  }
+  const view = resolved?.view ?? { kind: 'flrw' as const, cosmo: null, H0: 1, sources: {} };
+  const h0 = usesModel ? h0Measurement(req, view.H0) : undefined;
+  const band = rawInputs.band;
+  const steps: Step[] = [];
+  const warnings = new Set<string>();
+  const ctx: Ctx = { model: view, h0Scale: 1, inputs: measured, band, steps, warnings };
+  const nominal: Values = Object.fromEntries(Object.entries(measured).map(([k, m]) => [k, m.value]));
+  const value = spec.compute(ctx, nominal);
+
+  const all = h0 ? { ...measured, [H0_KEY]: h0 } : measured;
+  let interval: CalcSuccess['interval'];
+  if (Object.values(all).some((m) => m.minus > 0 || m.plus > 0)) {
+    const sampleCtx: Ctx = { ...ctx, steps: null, warnings: null };
+    const outcome = monteCarlo(
+      all,
+      (v) => {
+        const scale = h0 ? v[H0_KEY] / view.H0 : 1;
+        if (!(scale > 0)) return NaN;
+        return spec.compute({ ...sampleCtx, h0Scale: scale }, v);
+      },
+      (v) => Object.keys(all).find((k) => DOMAIN[k] && !DOMAIN[k](v[k])) ?? Object.keys(all).find((k) => all[k].plus > 0 || all[k].minus > 0) ?? 'z',
+    );
+    if (outcome.failed > MAX_FAILED_FRACTION * SAMPLES || !(outcome.samples > 0)) {
+      const [who] = [...outcome.failures.entries()].sort((a, b) => b[1] - a[1])[0];
+      const pct = ((100 * outcome.failed) / SAMPLES).toFixed(1);
+      throw new CalcError('interval_outside_domain', `the uncertainty on ${who} reaches values where ${quantity} is not defined (${pct} % of draws); give a smaller uncertainty`);
+    }
+    interval = { low: outcome.low, high: outcome.high, level: 0.68 };
+    steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit));
+  }
+  const description = resolved ? structuredClone(resolved.description) : null;
+  if (description && h0) description.H0_range = { low: h0.value - h0.minus, high: h0.value + h0.plus };
+  return {
+    ...(id !== undefined ? { id } : {}),
+    quantity,
+    value,
+    unit: spec.unit,
+    ...(interval ? { interval } : {}),
+    conversions: conversionsFor(value, spec.unit),
+    warnings: [...warnings],
+    working: steps,
+    model: description,
+  };
+}
+
+/** True when every number anywhere in x is finite. */
+function allFinite(x: unknown): boolean {
+  if (typeof x === 'number') return Number.isFinite(x);
+  if (Array.isArray(x)) return x.every(allFinite);
+  if (typeof x === 'object' && x !== null) return Object.values(x).every(allFinite);
+  return true;
+}
+
+/**
+ * Computes one quantity.
+ * @param request an untrusted request (as parsed from JSON)
+ * @returns the result with working, or `{ error: { code, message } }`; never throws
+ */
+export function calculate(request: unknown): CalcResult {
+  let id: string | number | undefined;
+  try {
+    id = requestId(request);
+    const result = compute(parseRequest(request), id);
+    if (!allFinite(result)) {
+      throw new CalcError('non_finite_result', `${result.quantity} is not a finite number for these inputs (it overflows or underflows double precision)`);
+    }
+    return result;
+  } catch (e) {
+    const base = id !== undefined ? { id } : {};
+    if (e instanceof CalcError) return { ...base, error: { code: e.code, message: e.message } };
+    return { ...base, error: { code: 'internal_error', message: 'the calculation failed unexpectedly for these inputs' } };
+  }
+}
+
+/**
+ * Parses one line of JSON and computes it, for the command-line tool.
+ * @param line one JSON request
+ * @returns the result; malformed JSON gives an `invalid_json` error result
+ */
+export function calculateLine(line: string): CalcResult {
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(line);
+  } catch (e) {
+    return { error: { code: 'invalid_json', message: `the line is not valid JSON: ${e instanceof Error ? e.message : String(e)}` } };
+  }
+  return calculate(parsed);
+}

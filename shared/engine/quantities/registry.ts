@@ -1,0 +1,151 @@
+/**
+ * What each quantity needs and how it is computed: its unit, its inputs
+ * (required, one group of alternatives, optional) and its calculation.
+ */
+import type { CalcQuantity } from '../../schemas/calc.ts';
+import { CalcError } from '../errors.ts';
+import { record } from '../working.ts';
+import type { Ctx } from './context.ts';
+import {
+  ageSteps,
+  angularDiameterSteps,
+  comovingDistanceSteps,
+  hubbleParameterSteps,
+  lightTravelSteps,
+  lookbackSteps,
+  luminositySteps,
+  transverseSteps,
+} from './cosmic.ts';
+import { hubbleLawDistanceSteps, hubbleLawRedshiftSteps, hubbleLawTimeSteps } from './hubble.ts';
+import { zFromLookbackSteps, zFromLuminosityDistanceSteps } from './inverse.ts';
+import {
+  absoluteMagnitudeSteps,
+  distanceModulusSteps,
+  fluxRatioSteps,
+  luminosityRatioSteps,
+  parallaxSteps,
+  type Values,
+} from './photometry.ts';
+
+/** Units of results. */
+export type ResultUnit = 'Mpc' | 'Gyr' | 'mag' | 'km/s/Mpc' | 'pc' | '';
+
+/** A quantity's definition. */
+export interface QuantitySpec {
+  unit: ResultUnit;
+  required: string[];
+  /** Exactly one of these groups of inputs must be given. */
+  oneOf?: string[][];
+  optional?: string[];
+  band?: boolean;
+  /** Not defined under the simple Hubble law. */
+  flrwOnly?: boolean;
+  /** Whether a cosmology model enters, given the inputs present. */
+  usesModel: (present: Set<string>) => boolean;
+  compute: (ctx: Ctx, v: Values) => number;
+}
+
+const always = (): boolean => true;
+const never = (): boolean => false;
+const DISTANCE_SOURCES = [['z'], ['distance_mpc'], ['parallax_mas']];
+const z = (v: Values): number => v.z as number;
+const isLaw = (ctx: Ctx): boolean => ctx.model.kind === 'hubble_law';
+
+function distance(measure: string, flrw: (ctx: Ctx, z: number) => number): QuantitySpec {
+  return {
+    unit: 'Mpc',
+    required: ['z'],
+    usesModel: always,
+    compute: (ctx, v) => (isLaw(ctx) ? hubbleLawDistanceSteps(ctx, z(v), measure) : flrw(ctx, z(v))),
+  };
+}
+
+function properDistanceSteps(ctx: Ctx, zz: number): number {
+  const dC = comovingDistanceSteps(ctx, zz);
+  return record(ctx.steps, dC, () => ({
+    title: 'Proper distance today',
+    formula: 'd_p(t₀) = D_C',
+    inputs: [{ symbol: 'D_C', name: 'line-of-sight comoving distance', value: dC, unit: 'Mpc', source: 'previous step' }],
+    constants: [],
+    result: { symbol: 'd_p', name: 'proper distance today', unit: 'Mpc' },
+    note: 'Comoving coordinates are scaled to match proper distances at the present epoch, so the proper distance today equals the line-of-sight comoving distance.',
+  }));
+}
+
+const magnitudeInputs = { required: ['m'], oneOf: DISTANCE_SOURCES, optional: ['extinction', 'alpha'] };
+
+/** Every quantity's definition. */
+export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
+  comoving_distance: distance('comoving distance', comovingDistanceSteps),
+  transverse_comoving_distance: distance('transverse comoving distance', transverseSteps),
+  angular_diameter_distance: distance('angular-diameter distance', angularDiameterSteps),
+  luminosity_distance: distance('luminosity distance', luminositySteps),
+  light_travel_distance: distance('light-travel distance', lightTravelSteps),
+  proper_distance: distance('proper distance', properDistanceSteps),
+  lookback_time: {
+    unit: 'Gyr',
+    required: ['z'],
+    usesModel: always,
+    compute: (ctx, v) => (isLaw(ctx) ? hubbleLawTimeSteps(ctx, z(v)) : lookbackSteps(ctx, z(v))),
+  },
+  age_at_z: { unit: 'Gyr', required: ['z'], flrwOnly: true, usesModel: always, compute: (ctx, v) => ageSteps(ctx, z(v), false) },
+  age_now: { unit: 'Gyr', required: [], flrwOnly: true, usesModel: always, compute: (ctx) => ageSteps(ctx, 0, true) },
+  hubble_parameter: { unit: 'km/s/Mpc', required: ['z'], flrwOnly: true, usesModel: always, compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)) },
+  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps },
+  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps },
+  luminosity_ratio_sun: { unit: '', ...magnitudeInputs, band: true, usesModel: (p) => p.has('z'), compute: luminosityRatioSteps },
+  z_from_lookback_time: {
+    unit: '',
+    required: ['lookback_gyr'],
+    usesModel: always,
+    compute: (ctx, v) =>
+      isLaw(ctx) ? hubbleLawRedshiftSteps(ctx, 'lookback_gyr', v.lookback_gyr as number) : zFromLookbackSteps(ctx, v.lookback_gyr as number),
+  },
+  z_from_luminosity_distance: {
+    unit: '',
+    required: ['distance_mpc'],
+    usesModel: always,
+    compute: (ctx, v) =>
+      isLaw(ctx)
+        ? hubbleLawRedshiftSteps(ctx, 'distance_mpc', v.distance_mpc as number)
+        : zFromLuminosityDistanceSteps(ctx, v.distance_mpc as number),
+  },
+  parallax_distance: { unit: 'pc', required: ['parallax_mas'], usesModel: never, compute: (ctx, v) => parallaxSteps(ctx, v.parallax_mas as number) },
+  flux_ratio: {
+    unit: '',
+    required: [],
+    oneOf: [['delta_mag'], ['m1', 'm2'], ['distance_1', 'distance_2']],
+    usesModel: never,
+    compute: fluxRatioSteps,
+  },
+};
+
+/**
+ * Checks that the inputs present fit the quantity: required ones given, exactly
+ * one alternative group, nothing the quantity would ignore.
+ * @param quantity the quantity
+ * @param present names of the inputs given (band included)
+ * @throws CalcError naming the missing, conflicting or unused input
+ */
+export function checkInputs(quantity: CalcQuantity, present: Set<string>): void {
+  const spec = QUANTITY_SPECS[quantity];
+  for (const k of spec.required) {
+    if (!present.has(k)) throw new CalcError('missing_input', `${k} is required for ${quantity}`);
+  }
+  const allowed = new Set([...spec.required, ...(spec.optional ?? []), ...(spec.band ? ['band'] : [])]);
+  if (spec.oneOf) {
+    const touched = spec.oneOf.filter((g) => g.some((k) => present.has(k)));
+    const names = spec.oneOf.map((g) => g.join(' and ')).join(', or ');
+    if (touched.length === 0) throw new CalcError('missing_input', `${quantity} needs ${names}`);
+    if (touched.length > 1) {
+      throw new CalcError('conflicting_inputs', `${quantity} takes only one of ${names} (got ${touched.map((g) => g.filter((k) => present.has(k)).join(' and ')).join(' and ')})`);
+    }
+    const missing = touched[0].find((k) => !present.has(k));
+    if (missing) throw new CalcError('missing_input', `${missing} is required with ${touched[0].filter((k) => present.has(k)).join(', ')} for ${quantity}`);
+    touched[0].forEach((k) => allowed.add(k));
+  }
+  if (spec.band && !present.has('band')) throw new CalcError('missing_input', `band is required for ${quantity}`);
+  for (const k of present) {
+    if (!allowed.has(k)) throw new CalcError('unused_input', `${k} is not used by ${quantity}; remove it`);
+  }
+}
