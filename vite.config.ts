@@ -13,7 +13,7 @@ const alias = {
 export default defineConfig({
   plugins: [react(), tailwindcss()],
   resolve: { alias },
-  build: { outDir: 'dist', sourcemap: false },
+  build: { outDir: process.env.STARPROOF_DIST_DIR ?? 'dist', emptyOutDir: true, sourcemap: false },
   server: { port: 5173, proxy: { '/api': 'http://127.0.0.1:4780' } },
   test: {
     projects: [

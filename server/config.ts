@@ -23,7 +23,7 @@ export const config = {
   /** Base URL used in e-mailed links. */
   publicUrl: process.env.PUBLIC_URL,
   uploadsDir: path.resolve(process.env.UPLOADS_DIR ?? 'uploads'),
-  distDir: path.resolve('dist'),
+  distDir: path.resolve(process.env.STARPROOF_DIST_DIR ?? 'dist'),
   logLevel: process.env.LOG_LEVEL ?? (process.env.NODE_ENV === 'test' ? 'silent' : 'info'),
 };
 

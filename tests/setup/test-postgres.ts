@@ -3,7 +3,7 @@ import { ensureDatabase, isRunning, localDatabaseUrl, startLocalPostgres, stopLo
 
 /** The test cluster: its own folder and port, never the development data. */
 export const TEST_CLUSTER = {
-  dataDir: path.resolve('.data/test-postgres'),
+  dataDir: path.resolve(process.env.STARPROOF_TEST_PGDATA ?? '.data/test-postgres'),
   port: Number(process.env.STARPROOF_TEST_PGPORT ?? 54391),
 };
 
