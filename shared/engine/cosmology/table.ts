@@ -1,8 +1,9 @@
 /**
  * Precomputed tables of the comoving-distance and lookback-time integrals in the
  * smooth variable u = ln(1+z). Each node holds the integral and its exact
- * derivative, so cubic Hermite interpolation is accurate to ~1e-12 relative with
- * a step of 0.01: this is what makes a million distances take milliseconds.
+ * derivative, so cubic Hermite interpolation errs by about h⁴/384 × (third
+ * derivative of the integrand): with h = 0.005 that is below 3e-10 relative
+ * (measured by the benchmark). This is what makes a million distances take milliseconds.
  */
 import { gaussLegendre } from './quadrature.ts';
 
@@ -30,7 +31,7 @@ const RULE = gaussLegendre(8);
  * @param h step in u
  * @returns the table
  */
-export function buildTable(e2: (z: number) => number, zMax = 1e4, h = 0.01): IntegralTable {
+export function buildTable(e2: (z: number) => number, zMax = 1e4, h = 0.005): IntegralTable {
   const n = Math.ceil(Math.log1p(zMax) / h) + 1;
   const comoving = new Float64Array(n);
   const comovingSlope = new Float64Array(n);

@@ -15,7 +15,7 @@ import { fromConstant, fromStep, record } from '../working.ts';
 import { type Ctx, currentH0, densityValue, h0Value, inputValue, requireCosmology } from './context.ts';
 
 const METHOD =
-  'Integral evaluated numerically: 8-point Gauss–Legendre quadrature on panels of 0.01 in ln(1+z), cubic Hermite interpolation between panels (exact derivatives), direct adaptive quadrature beyond z = 10⁴; relative accuracy better than 1e-9.';
+  'Integral evaluated numerically: 8-point Gauss–Legendre quadrature on panels of 0.005 in ln(1+z), cubic Hermite interpolation between panels (exact derivatives), direct adaptive quadrature beyond z = 10⁴; relative accuracy better than 1e-9.';
 
 /** E(z) recorded as a check point a reviewer can evaluate by hand. */
 export function expansionRateStep(ctx: Ctx, z: number): number {
@@ -87,7 +87,7 @@ export function transverseSteps(ctx: Ctx, z: number): number {
   const dH = SPEED_OF_LIGHT.value / currentH0(ctx);
   const Ok = c.model.Ok0;
   const value = dH * transverseFromLineOfSight(Ok, dC / dH);
-  if (z > 0 && !(value > 0)) {
+  if (Ok < 0 && z > 0 && !(value > 0)) {
     throw new CalcError('out_of_range', `z = ${z} lies beyond the antipode of this closed model, where the transverse comoving distance is not positive`);
   }
   const formula =

@@ -1,7 +1,8 @@
 #!/usr/bin/env python3
 """Writes the astropy reference fixture for the engine's cosmology tests.
 
-Run by hand (not in CI), with Debian's python3-astropy and python3-scipy:
+Run by hand (not in CI), with Debian's python3-astropy and python3-scipy (astropy
+needs scipy for its integrals; use /usr/bin/python3 if another python3 comes first on PATH):
     python3 tests/reference/engine/generate-astropy-fixture.py > tests/reference/engine/astropy-fixture.json
 
 Each model is given in the engine's request format, so the test can send it unchanged.

@@ -1,0 +1,22 @@
+/** `npm run calc`: one JSON result per input line, in order; bad lines give error results. */
+import { execFileSync } from 'node:child_process';
+import { describe, expect, it } from 'vitest';
+
+describe('calc command line', () => {
+  it('answers each line in order, including malformed ones', { timeout: 60_000 }, () => {
+    const input = [
+      '{"id":1,"quantity":"age_now"}',
+      'this is not json',
+      '',
+      '{"id":3,"quantity":"parallax_distance","inputs":{"parallax_mas":0}}',
+      '{"id":4,"quantity":"luminosity_distance","inputs":{"z":0.05},"model":{"law":"hubble","H0":70}}',
+    ].join('\n');
+    const out = execFileSync('npx', ['tsx', 'server/cli/calc.ts'], { input, encoding: 'utf8' });
+    const lines = out.trim().split('\n').map((l) => JSON.parse(l));
+    expect(lines).toHaveLength(4);
+    expect(lines[0]).toMatchObject({ id: 1, unit: 'Gyr' });
+    expect(lines[1].error.code).toBe('invalid_json');
+    expect(lines[2]).toMatchObject({ id: 3, error: { code: 'out_of_range' } });
+    expect(lines[3].value).toBeCloseTo((299792.458 * 0.05) / 70, 9);
+  });
+});

@@ -1,0 +1,115 @@
+/** Bad input: each case returns a clear error that names the input, never a throw. */
+import { describe, expect, it } from 'vitest';
+import { calculate, calculateLine } from '../../../shared/engine/calculate.ts';
+
+function errorOf(request: unknown): { code: string; message: string } {
+  const r = calculate(request);
+  if (!('error' in r)) throw new Error(`expected an error, got ${JSON.stringify(r).slice(0, 200)}`);
+  return r.error;
+}
+
+describe('hostile requests', () => {
+  it('z ≤ −1', () => {
+    const e = errorOf({ quantity: 'luminosity_distance', inputs: { z: -1.5 } });
+    expect(e.code).toBe('out_of_range');
+    expect(e.message).toBe('z must be greater than −1 (got -1.5)');
+    expect(errorOf({ quantity: 'comoving_distance', inputs: { z: -1 } }).message).toContain('z must be greater than −1');
+    expect(errorOf({ quantity: 'lookback_time', inputs: { z: -3 }, model: { law: 'hubble', H0: 70 } }).message).toContain('z must be');
+  });
+
+  it('NaN and Infinity, as numbers or as strings from JSON', () => {
+    for (const bad of [NaN, Infinity, -Infinity, 'NaN', 'Infinity', '1e999', null, '0.5']) {
+      const e = errorOf({ quantity: 'luminosity_distance', inputs: { z: bad } });
+      expect(e.code).toBe('invalid_input');
+      expect(e.message).toMatch(/^z must be a finite number/);
+    }
+    const line = calculateLine('{"quantity":"luminosity_distance","inputs":{"z":1e999}}');
+    expect('error' in line && line.error.message).toMatch(/^z must be a finite number/);
+    expect(errorOf({ quantity: 'age_now', model: { H0: 'NaN', Om0: 0.3 } }).message).toMatch(/^model\.H0 must be a finite number/);
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: { value: 1, sigma: NaN } } }).message).toMatch(/^z must be/);
+  });
+
+  it('negative densities and masses', () => {
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: -0.3 } })).toEqual({
+      code: 'negative_density',
+      message: 'model.Om0 must not be negative (got -0.3)',
+    });
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Ode0: -0.7 } }).message).toContain('model.Ode0');
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 1.5 } }).message).toContain('model.Om0 is too large for a flat model');
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0, 0, -1] } }).message).toContain('model.m_nu[2]');
+    expect(errorOf({ quantity: 'age_now', model: { H0: -70, Om0: 0.3 } }).message).toContain('model.H0 must be greater than 0');
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0.1] } }).message).toContain('floor(Neff) = 3');
+  });
+
+  it('a model with no big bang (it bounces: Ωm = 0.3, ΩΛ = 3)', () => {
+    const model = { H0: 70, Om0: 0.3, Ode0: 3 };
+    const age = errorOf({ quantity: 'age_now', model });
+    expect(age.code).toBe('no_big_bang');
+    expect(age.message).toContain('no big bang');
+    const far = errorOf({ quantity: 'luminosity_distance', inputs: { z: 2 }, model });
+    expect(far.code).toBe('no_big_bang');
+    expect(far.message).toMatch(/^z must be below/);
+    // Below the bounce, distances are still defined.
+    expect('value' in calculate({ quantity: 'comoving_distance', inputs: { z: 0.1 }, model })).toBe(true);
+    expect(errorOf({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 50 }, model }).code).toBe('no_solution');
+  });
+
+  it('parallax ≤ 0', () => {
+    expect(errorOf({ quantity: 'parallax_distance', inputs: { parallax_mas: 0 } })).toEqual({
+      code: 'out_of_range',
+      message: 'parallax_mas must be greater than 0 (got 0)',
+    });
+    expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 5, parallax_mas: -2 } }).message).toContain('parallax_mas');
+  });
+
+  it('a band with no solar magnitude', () => {
+    const e = errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10, band: 'Gaia_G' } });
+    expect(e.code).toBe('unknown_band');
+    expect(e.message).toContain('band "Gaia_G"');
+    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10, band: '__proto__' } }).code).toBe('unknown_band');
+    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10 } }).message).toContain('band is required');
+  });
+
+  it('unknown quantity, unknown fields, missing and conflicting inputs', () => {
+    expect(errorOf({ quantity: 'brightness' })).toMatchObject({ code: 'unknown_quantity' });
+    expect(errorOf({ quantity: 'brightness' }).message).toContain('"brightness"');
+    expect(errorOf({}).code).toBe('missing_input');
+    expect(errorOf([1, 2]).code).toBe('invalid_request');
+    expect(errorOf(null).code).toBe('invalid_request');
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: { zz: 1 } }).message).toContain('"zz"');
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: {} }).message).toBe('z is required for luminosity_distance');
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1, m: 3 } }).code).toBe('unused_input');
+    expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 3, z: 0.1, parallax_mas: 3 } }).code).toBe('conflicting_inputs');
+    expect(errorOf({ quantity: 'flux_ratio', inputs: { m1: 3 } }).message).toContain('m2 is required');
+    expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 3, parallax_mas: 3, alpha: 0.5 } }).message).toContain('alpha');
+    expect(errorOf({ quantity: 'age_now', model: { preset: 'planck13' } }).message).toContain('model.preset');
+    expect(errorOf({ quantity: 'age_now', model: { law: 'hubble', H0: 70 } }).code).toBe('not_in_hubble_law');
+  });
+
+  it('impossible inverses', () => {
+    const e = errorOf({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 14 } });
+    expect(e.code).toBe('no_solution');
+    expect(e.message).toContain('lookback_gyr must be less than the age of the universe');
+    expect(errorOf({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: -5 } }).message).toContain('distance_mpc');
+  });
+
+  it('overflowing results become errors, not Infinity', () => {
+    expect(errorOf({ quantity: 'flux_ratio', inputs: { delta_mag: -1e6 } }).code).toBe('non_finite_result');
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1 }, model: { H0: 1e-320, Om0: 0.3 } }).code).toBe('non_finite_result');
+  });
+
+  it('an uncertainty reaching outside the domain names the input', () => {
+    const e = errorOf({ quantity: 'parallax_distance', inputs: { parallax_mas: { value: 1, sigma: 2 } } });
+    expect(e.code).toBe('interval_outside_domain');
+    expect(e.message).toContain('parallax_mas');
+  });
+
+  it('malformed JSON lines give an error result', () => {
+    expect(calculateLine('{"quantity":')).toMatchObject({ error: { code: 'invalid_json' } });
+  });
+
+  it('echoes the id, even on errors', () => {
+    expect(calculate({ id: 'x1', quantity: 'nope' })).toMatchObject({ id: 'x1', error: { code: 'unknown_quantity' } });
+    expect(calculate({ id: 7, quantity: 'age_now' })).toMatchObject({ id: 7, unit: 'Gyr' });
+  });
+});
