@@ -1,0 +1,29 @@
+import { findTemplate } from '@shared/statements/index.ts';
+import type { StatementDto } from '@shared/schemas/statement.ts';
+import type { SkyObject, Statement, User } from '../models/index.ts';
+import { can } from '../policies/index.ts';
+
+/** The API contract for a statement; the working is included only where asked (it is large). */
+export function presentStatement(statement: Statement, object: Pick<SkyObject, 'id' | 'name' | 'kind'>, viewer: User, { withWorking = false } = {}): StatementDto {
+  return {
+    id: statement.id,
+    object: { id: object.id, name: object.name, kind: object.kind },
+    template: { id: statement.templateId, title: findTemplate(statement.templateId)?.title ?? statement.templateId },
+    status: statement.status,
+    statusReason: statement.statusReason ?? null,
+    value: statement.value ?? null,
+    unit: statement.unit ?? null,
+    interval: statement.intervalLow != null && statement.intervalHigh != null ? { low: statement.intervalLow, high: statement.intervalHigh } : null,
+    significantFigures: statement.significantFigures ?? null,
+    texts: statement.texts ?? null,
+    footnotes: statement.footnotes ?? null,
+    acknowledgedTexts: statement.acknowledgedTexts ?? null,
+    acknowledgedAt: statement.acknowledgedAt?.toISOString() ?? null,
+    inputs: statement.inputs ?? [],
+    ...(withWorking ? { working: statement.working ?? [] } : {}),
+    warnings: statement.warnings ?? [],
+    model: statement.model ?? null,
+    computedAt: statement.computedAt.toISOString(),
+    can: { recompute: can(viewer, 'statement', 'recompute'), acknowledge: can(viewer, 'statement', 'accept', statement) },
+  };
+}

@@ -1,0 +1,85 @@
+import { Router } from 'express';
+import { Op, type WhereOptions } from 'sequelize';
+import { IdSchema } from '@shared/schemas/common.ts';
+import { StatementCreateSchema, StatementListQuerySchema, type StatementCreateInput, type StatementListQuery } from '@shared/schemas/statement.ts';
+import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
+import { NotFoundError } from '../errors.ts';
+import { currentUser, requireUser } from '../middlewares/authenticate.ts';
+import { validate } from '../middlewares/validate.ts';
+import { SkyObject, Statement } from '../models/index.ts';
+import { authorize } from '../policies/index.ts';
+import { presentStatement } from '../presenters/statement.ts';
+import { acceptStatementWording } from '../services/statements/accept.ts';
+import { findOrCreateStatement } from '../services/statements/create.ts';
+import { recomputeStatements } from '../services/statements/recompute.ts';
+
+async function loadStatement(id: string) {
+  if (!IdSchema.safeParse(id).success) throw NotFoundError('There is no such statement.');
+  const statement = await Statement.findByPk(id);
+  if (!statement) throw NotFoundError('There is no such statement.');
+  const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
+  return { statement, object: object! };
+}
+
+export const statementTemplatesRouter = Router();
+statementTemplatesRouter.use(requireUser);
+statementTemplatesRouter.get('/', (req, res) => {
+  authorize(currentUser(req), 'statement', 'read');
+  res.json({ data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology }) => ({ id, title, needs, usesCosmology })) });
+});
+
+export const statementsRouter = Router();
+statementsRouter.use(requireUser);
+
+statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'statement', 'read');
+  const q = req.query as unknown as StatementListQuery;
+  const where: WhereOptions<Statement> = {
+    ...(q.status ? { status: q.status } : {}),
+    ...(q.objectId ? { skyObjectId: q.objectId } : {}),
+    ...(q.templateId ? { templateId: q.templateId } : {}),
+  };
+  const { rows, count } = await Statement.findAndCountAll({
+    where,
+    // Statements that need attention first, then the newest computations.
+    order: [[Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'], ['computedAt', 'DESC']],
+    limit: q.pageSize,
+    offset: (q.page - 1) * q.pageSize,
+  });
+  const objects = new Map((await SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((s) => s.skyObjectId))] } }, attributes: ['id', 'name', 'kind'] })).map((o) => [o.id, o]));
+  res.json({ data: rows.map((s) => presentStatement(s, objects.get(s.skyObjectId)!, viewer)), meta: { total: count, page: q.page, pageSize: q.pageSize } });
+});
+
+statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'statement', 'create');
+  const { objectId, templateId } = req.body as StatementCreateInput;
+  const { statement, created } = await findOrCreateStatement(objectId, templateId, viewer);
+  const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
+  res.status(created ? 201 : 200).json({ data: presentStatement(statement, object!, viewer, { withWorking: true }) });
+});
+
+statementsRouter.get('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'statement', 'read');
+  const { statement, object } = await loadStatement(req.params.id as string);
+  res.json({ data: presentStatement(statement, object, viewer, { withWorking: true }) });
+});
+
+statementsRouter.post('/:id/recompute', async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'statement', 'recompute');
+  const { statement } = await loadStatement(req.params.id as string);
+  await recomputeStatements({ statementIds: [statement.id] });
+  const reloaded = await loadStatement(statement.id);
+  res.json({ data: presentStatement(reloaded.statement, reloaded.object, viewer, { withWorking: true }) });
+});
+
+statementsRouter.post('/:id/accept', async (req, res) => {
+  const viewer = currentUser(req);
+  const { statement, object } = await loadStatement(req.params.id as string);
+  authorize(viewer, 'statement', 'accept', statement);
+  await acceptStatementWording(statement, viewer);
+  res.json({ data: presentStatement(statement, object, viewer, { withWorking: true }) });
+});

@@ -1,0 +1,45 @@
+import { z } from 'zod';
+import { CalcModelSchema } from './calc.ts';
+import { STATEMENT_LOCALES } from '../statements/locales.ts';
+
+export const SettingsDtoSchema = z.object({
+  cosmologyModel: CalcModelSchema,
+  cosmologyLabel: z.string(),
+  defaultBand: z.string(),
+  defaultLocale: z.enum(STATEMENT_LOCALES),
+  eyeSafetyNotice: z.string(),
+  version: z.number(),
+  updatedAt: z.string(),
+});
+export type SettingsDto = z.infer<typeof SettingsDtoSchema>;
+
+export const SettingsUpdateSchema = z
+  .object({
+    defaultBand: z.string().min(1).max(20).optional(),
+    defaultLocale: z.enum(STATEMENT_LOCALES, { message: `Locale must be one of ${STATEMENT_LOCALES.join(', ')}` }).optional(),
+    eyeSafetyNotice: z.string().trim().min(40, 'The eye-safety notice must say enough to be useful (40 characters or more)').max(2000).optional(),
+  })
+  .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
+export type SettingsUpdateInput = z.infer<typeof SettingsUpdateSchema>;
+
+export const CosmologyChangeSchema = z.object({
+  model: CalcModelSchema,
+  /** The settings version the admin previewed against; a newer one means someone else changed it. */
+  expectedVersion: z.number().int().positive(),
+});
+export type CosmologyChangeInput = z.infer<typeof CosmologyChangeSchema>;
+
+export const CosmologyPreviewSchema = z.object({ model: CalcModelSchema });
+export type CosmologyPreviewInput = z.infer<typeof CosmologyPreviewSchema>;
+
+/** One statement whose public text a model change would move. */
+export const PreviewRowSchema = z.object({
+  statementId: z.string(),
+  objectName: z.string(),
+  templateTitle: z.string(),
+  oldText: z.string().nullable(),
+  newText: z.string().nullable(),
+  newStatus: z.enum(['current', 'changed', 'broken']),
+  reason: z.string().nullable(),
+});
+export type PreviewRow = z.infer<typeof PreviewRowSchema>;

@@ -1,0 +1,184 @@
+import supertest from 'supertest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { calculate } from '../../shared/engine/calculate.ts';
+import { Measurement, Statement } from '../../server/models/index.ts';
+import { setPreferred } from '../../server/services/measurement-preferred.ts';
+import { retireMeasurement } from '../../server/services/measurement-write.ts';
+import { currentSettingsSnapshot, recomputeStatements, SettingsMovedError } from '../../server/services/statements/recompute.ts';
+import { buildUser, getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
+import { buildObjectWithMeasurements } from '../support/sky-fixtures.ts';
+
+beforeAll(async () => {
+  await getTestApp();
+  await resetDatabase();
+});
+
+const quasar = (creator: Awaited<ReturnType<typeof buildUser>>) =>
+  buildObjectWithMeasurements(
+    'Test quasar',
+    'quasar',
+    [
+      { quantity: 'redshift', value: 0.158, sigma: 0.0003, unit: '' },
+      { quantity: 'apparent_magnitude', value: 12.9, sigma: 0.1, band: 'V', unit: 'mag' },
+    ],
+    creator,
+  );
+
+/** Waits for a background recompute (queued by a catalogue event) to land. */
+async function waitForStatus(id: string, status: string) {
+  await expect.poll(async () => (await Statement.findByPk(id))?.status, { timeout: 10_000 }).toBe(status);
+}
+
+describe('creating statements', () => {
+  it('computes a statement whose number matches the reference-tested engine', async () => {
+    const { agent, user } = await signedInAgent('writer');
+    const { object } = await quasar(user);
+    const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'luminosity-sun' });
+    expect(res.status).toBe(201);
+    const engine = calculate({ quantity: 'luminosity_ratio_sun', inputs: { m: { value: 12.9, sigma: 0.1 }, z: { value: 0.158, sigma: 0.0003 }, band: 'V' }, model: { preset: 'planck18' } });
+    if ('error' in engine) throw new Error(engine.error.message);
+    expect(res.body.data.value).toBeCloseTo(engine.value, 6);
+    // ±0.1 mag is about ±10 %: two significant figures (our precision rule).
+    const shown = Number(engine.value.toPrecision(2)) / 1e12;
+    expect(res.body.data.texts['en-GB']).toBe(`${object.name} gives out about ${shown} trillion times as much light as the Sun.`);
+    expect(res.body.data.texts['fr-FR']).toContain('billions de fois plus de lumière');
+    expect(res.body.data.status).toBe('current');
+    expect(res.body.data.working.at(-1).title).toMatch(/Public wording/);
+    expect(res.body.data.footnotes['en-GB']).toMatch(/Planck 2018/);
+    const again = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'luminosity-sun' });
+    expect(again.status).toBe(200);
+    expect(again.body.data.id).toBe(res.body.data.id);
+  });
+
+  it('refuses a template whose inputs are missing, says which, and stores nothing', async () => {
+    const { agent, user } = await signedInAgent('writer');
+    const { object } = await buildObjectWithMeasurements('Bare galaxy', 'galaxy', [{ quantity: 'redshift', value: 0.05, unit: '' }], user);
+    const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' });
+    expect(res.status).toBe(422);
+    expect(res.body.error.code).toBe('statement_not_computable');
+    expect(res.body.error.message).toMatch(/apparent magnitude in the V band/);
+    expect(await Statement.count({ where: { skyObjectId: object.id } })).toBe(0);
+  });
+
+  it('says in the working when an input has no uncertainty', async () => {
+    const { agent, user } = await signedInAgent('writer');
+    const { object } = await buildObjectWithMeasurements('Plain star', 'star', [{ quantity: 'parallax', value: 130.23, unit: 'mas' }], user);
+    const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' });
+    expect(res.status).toBe(201);
+    const wording = res.body.data.working.at(-1);
+    expect(wording.note).toMatch(/no stated uncertainty, so the precision is unknown/);
+    // 1000 / 130.23 mas = 7.679 pc = 25.04 ly; two significant figures for unknown precision.
+    expect(res.body.data.texts['en-GB']).toBe(`${object.name} is about 25 light-years away.`);
+  });
+
+  it('refuses unknown templates and objects, and anonymous visitors', async () => {
+    const { agent, user } = await signedInAgent('writer');
+    const { object } = await quasar(user);
+    expect((await agent.post('/api/statements').send({ objectId: object.id, templateId: 'horoscope' })).status).toBe(404);
+    expect((await agent.post('/api/statements').send({ objectId: '00000000-0000-4000-8000-000000000000', templateId: 'naked-eye' })).status).toBe(404);
+    const bad = await agent.post('/api/statements').send({ objectId: 'nope', templateId: 'naked-eye' });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields.objectId).toBe('Choose an object');
+    expect((await supertest(await getTestApp()).get('/api/statements')).status).toBe(401);
+  });
+});
+
+describe('staying correct when data changes', () => {
+  it('a new preferred measurement marks the statement changed, and a reviewer accepts the new wording', async () => {
+    const { agent: reviewer, user: reviewerUser } = await signedInAgent('reviewer');
+    const { agent: writer } = await signedInAgent('writer');
+    const { object, source, measurements } = await quasar(reviewerUser);
+    const created = await writer.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' });
+    const id = created.body.data.id as string;
+    const untouched = (await writer.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' })).body.data.id as string;
+    const oldText = created.body.data.texts['en-GB'];
+
+    const better = await Measurement.create({
+      objectId: object.id, quantity: 'redshift', band: null, value: 0.3, uncertainty: 0.001, uncertaintyMinus: null, uncertaintyPlus: null,
+      enteredValue: 0.3, enteredUnit: '', sourceId: source.id, status: 'accepted', createdById: reviewerUser.id,
+    });
+    await setPreferred(better.id, { preferred: true, replaces: measurements[0].id }, reviewerUser);
+    await waitForStatus(id, 'changed');
+
+    const changed = (await reviewer.get(`/api/statements/${id}`)).body.data;
+    expect(changed.acknowledgedTexts['en-GB']).toBe(oldText);
+    expect(changed.texts['en-GB']).not.toBe(oldText);
+    expect(changed.statusReason).toMatch(/different redshift measurement is preferred: 0.158 → 0.3/);
+    // The naked-eye statement does not use the redshift: its wording did not move.
+    expect((await Statement.findByPk(untouched))!.status).toBe('current');
+
+    expect((await writer.post(`/api/statements/${id}/accept`)).status).toBe(403);
+    const accepted = await reviewer.post(`/api/statements/${id}/accept`);
+    expect(accepted.status).toBe(200);
+    expect(accepted.body.data.status).toBe('current');
+    expect(accepted.body.data.acknowledgedTexts['en-GB']).toBe(changed.texts['en-GB']);
+  });
+
+  it('a measurement retired while in use breaks the statement and says why', async () => {
+    const { agent, user } = await signedInAgent('reviewer');
+    const { object, measurements } = await quasar(user);
+    const created = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' });
+    await retireMeasurement(measurements[1].id, 'Superseded by a better photometric study', user);
+    await waitForStatus(created.body.data.id, 'broken');
+    const broken = (await agent.get(`/api/statements/${created.body.data.id}`)).body.data;
+    expect(broken.statusReason).toMatch(/apparent magnitude in the V band/);
+    expect((await agent.post(`/api/statements/${created.body.data.id}/accept`)).status).toBe(409);
+  });
+});
+
+describe('changing the adopted cosmology', () => {
+  it('previews old and new text without changing anything, then switches on confirmation', async () => {
+    const { agent: admin, user } = await signedInAgent('admin');
+    const { object } = await quasar(user);
+    const created = await admin.post('/api/statements').send({ objectId: object.id, templateId: 'light-travel' });
+    const before = created.body.data.texts['en-GB'];
+    const settings = (await admin.get('/api/settings')).body.data;
+    expect(settings.cosmologyLabel).toMatch(/Planck 2018/);
+
+    const hubble = { law: 'hubble', H0: 70 };
+    const preview = await admin.post('/api/settings/cosmology/preview').send({ model: hubble });
+    expect(preview.status).toBe(200);
+    const row = preview.body.data.rows.find((r: { statementId: string }) => r.statementId === created.body.data.id);
+    expect(row.oldText).toBe(before);
+    expect(row.newText).not.toBe(before);
+    expect((await Statement.findByPk(created.body.data.id))!.texts!['en-GB']).toBe(before);
+
+    const stale = await admin.put('/api/settings/cosmology').send({ model: hubble, expectedVersion: settings.version - 1 || 999 });
+    expect(stale.status).toBe(409);
+    expect(stale.body.error.code).toBe('settings_moved');
+
+    const switched = await admin.put('/api/settings/cosmology').send({ model: hubble, expectedVersion: settings.version });
+    expect(switched.status).toBe(200);
+    expect(switched.body.data.cosmologyLabel).toMatch(/Hubble law/);
+    const after = await Statement.findByPk(created.body.data.id);
+    expect(after!.status).toBe('changed');
+    expect(after!.texts!['en-GB']).toBe(row.newText);
+    expect(after!.footnotes!['en-GB']).toMatch(/simple Hubble law/);
+    // Back to Planck 2018 for the other tests.
+    await admin.put('/api/settings/cosmology').send({ model: { preset: 'planck18' }, expectedVersion: switched.body.data.version });
+  });
+
+  it('a recompute that started before a model change writes nothing', async () => {
+    const { agent: admin, user } = await signedInAgent('admin');
+    const { object } = await quasar(user);
+    const created = await admin.post('/api/statements').send({ objectId: object.id, templateId: 'scale-model' });
+    const stale = await currentSettingsSnapshot();
+    const settings = (await admin.get('/api/settings')).body.data;
+    await admin.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: settings.version });
+    const computedAt = (await Statement.findByPk(created.body.data.id))!.computedAt;
+    await expect(recomputeStatements({ statementIds: [created.body.data.id] }, { settings: { ...stale, model: { preset: 'planck18' } } })).rejects.toBeInstanceOf(SettingsMovedError);
+    expect((await Statement.findByPk(created.body.data.id))!.computedAt).toEqual(computedAt);
+    const now = (await admin.get('/api/settings')).body.data;
+    await admin.put('/api/settings/cosmology').send({ model: { preset: 'planck18' }, expectedVersion: now.version });
+  });
+
+  it('refuses a model with no big bang, and non-admins', async () => {
+    const { agent: admin } = await signedInAgent('admin');
+    const res = await admin.post('/api/settings/cosmology/preview').send({ model: { H0: 70, Om0: 0.3, Ode0: 3 } });
+    expect(res.status).toBe(400);
+    expect(res.body.error.code).toBe('invalid_model');
+    const { agent: editor } = await signedInAgent('editor');
+    expect((await editor.post('/api/settings/cosmology/preview').send({ model: { preset: 'wmap9' } })).status).toBe(403);
+    expect((await editor.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: 1 })).status).toBe(403);
+  });
+});

@@ -1,0 +1,88 @@
+import { describe, expect, it } from 'vitest';
+import { calculate } from '../../../shared/engine/calculate.ts';
+import { LY_PER_PC } from '../../../shared/engine/units.ts';
+import { evaluateStatement, STATEMENT_TEMPLATES, type StatementMeasurement, type TemplateContext } from '../../../shared/statements/index.ts';
+
+const src = { id: 'src-1', citation: 'Values for automated checks' };
+const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({ id, quantity, value, unit: '', band: null, source: src, ...extra });
+const ctx = (name: string, measurements: StatementMeasurement[], model: TemplateContext['model'] = { preset: 'planck18' }): TemplateContext => ({
+  object: { id: 'o', name, kind: 'quasar' },
+  measurements,
+  model,
+  band: 'V',
+});
+
+const quasar = ctx('Q1', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), m('v', 'apparent_magnitude', 12.9, { sigma: 0.1, band: 'V', unit: 'mag' })]);
+
+function ok(templateId: string, c: TemplateContext) {
+  const r = evaluateStatement(templateId, c);
+  if (!r.ok) throw new Error(r.reason);
+  return r;
+}
+
+describe('statement templates', () => {
+  it('every template renders every locale and ends its working with the wording step', () => {
+    for (const t of STATEMENT_TEMPLATES) {
+      const r = ok(t.id, quasar);
+      expect(Object.keys(r.texts).sort()).toEqual(['en-GB', 'en-US', 'fr-FR']);
+      for (const text of Object.values(r.texts)) {
+        expect(text).toMatch(/Q1/);
+        expect(text).not.toMatch(/e\+|NaN|Infinity|undefined/);
+      }
+      expect(r.working.at(-1)!.title).toMatch(/Public wording/);
+    }
+  });
+
+  it('light-travel uses the engine’s lookback time and age (reference-tested) with the cosmology named', () => {
+    const r = ok('light-travel', quasar);
+    const lookback = calculate({ quantity: 'lookback_time', inputs: { z: { value: 0.158, sigma: 0.0003 } }, model: { preset: 'planck18' } });
+    if ('error' in lookback) throw new Error();
+    expect(r.value).toBeCloseTo(lookback.value * 1e9, 0);
+    expect(r.texts['en-GB']).toMatch(/^The light we see from Q1 set out about 2\.04 billion years ago, when the universe was about 11\.7 billion years old\.$/);
+    expect(r.footnotes?.['en-GB']).toMatch(/Planck 2018/);
+  });
+
+  it('spells units the reader’s way', () => {
+    const r = ok('scale-model', quasar);
+    expect(r.texts['en-GB']).toMatch(/centimetre across.*kilometres away/);
+    expect(r.texts['en-US']).toMatch(/centimeter across.*kilometers away/);
+    expect(r.texts['fr-FR']).toMatch(/milliards de kilomètres/);
+  });
+
+  it('a nearby star uses its parallax, not a cosmology', () => {
+    // Hand-worked: 1000 / 130.23 mas = 7.6787 pc × 3.2616 ly/pc = 25.045 ly (common practice).
+    const star = ctx('S1', [m('p', 'parallax', 130.23, { sigma: 0.36, unit: 'mas' })]);
+    const r = ok('distance-today', star);
+    expect(r.value).toBeCloseTo((1000 / 130.23) * LY_PER_PC, 6);
+    expect(r.model).toBeNull();
+    expect(r.footnotes).toBeNull();
+  });
+
+  it('refuses to render without its inputs and says which', () => {
+    const r = evaluateStatement('luminosity-sun', ctx('Q2', [m('z', 'redshift', 0.5)]));
+    expect(r.ok).toBe(false);
+    if (!r.ok) expect(r.reason).toMatch(/apparent magnitude/);
+    const d = evaluateStatement('distance-today', ctx('Q3', []));
+    expect(d.ok).toBe(false);
+    if (!d.ok) expect(d.missing).toEqual(['redshift', 'distance', 'parallax']);
+  });
+
+  it('ignores a blueshift or tiny redshift as a distance (peculiar motion dominates below z 0.01)', () => {
+    const r = evaluateStatement('distance-today', ctx('Near galaxy', [m('z', 'redshift', -0.001)]));
+    expect(r.ok).toBe(false);
+  });
+
+  it('under the simple Hubble law the footnote and warnings say so', () => {
+    const far = ctx('Q4', [m('z', 'redshift', 2.0, { sigma: 0.01 })], { law: 'hubble', H0: 70 });
+    const r = ok('distance-today', far);
+    expect(r.footnotes?.['en-GB']).toMatch(/simple Hubble law/);
+    expect(r.warnings.join(' ')).toMatch(/only holds for small redshifts/);
+  });
+
+  it('a fainter-than-the-eye object is worded as too faint', () => {
+    // 10^(0.4 × (12.9 − 6)) = 575 (hand-worked, common practice magnitude limit 6).
+    const r = ok('naked-eye', quasar);
+    expect(r.value).toBeCloseTo(10 ** (0.4 * 6.9), 6);
+    expect(r.texts['en-GB']).toBe('Q1 is about 580 times too faint to see with the unaided eye, even on a dark night.');
+  });
+});
