@@ -12,7 +12,7 @@ const ctx = (name: string, measurements: StatementMeasurement[], model: Template
   band: 'V',
 });
 
-const quasar = ctx('Q1', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), m('v', 'apparent_magnitude', 12.9, { sigma: 0.1, band: 'V', unit: 'mag' })]);
+const quasar = ctx('Q1', [m('z', 'redshift', 0.241, { sigma: 0.0005 }), m('v', 'apparent_magnitude', 14.6, { sigma: 0.1, band: 'V', unit: 'mag' })]);
 
 function ok(templateId: string, c: TemplateContext) {
   const r = evaluateStatement(templateId, c);
@@ -35,10 +35,10 @@ describe('statement templates', () => {
 
   it('light-travel uses the engine’s lookback time and age (reference-tested) with the cosmology named', () => {
     const r = ok('light-travel', quasar);
-    const lookback = calculate({ quantity: 'lookback_time', inputs: { z: { value: 0.158, sigma: 0.0003 } }, model: { preset: 'planck18' } });
+    const lookback = calculate({ quantity: 'lookback_time', inputs: { z: { value: 0.241, sigma: 0.0005 } }, model: { preset: 'planck18' } });
     if ('error' in lookback) throw new Error();
     expect(r.value).toBeCloseTo(lookback.value * 1e9, 0);
-    expect(r.texts['en-GB']).toMatch(/^The light we see from Q1 set out about 2\.04 billion years ago, when the universe was about 11\.7 billion years old\.$/);
+    expect(r.texts['en-GB']).toMatch(/^The light we see from Q1 set out about 2\.95 billion years ago, when the universe was about 10\.8 billion years old\.$/);
     expect(r.footnotes?.['en-GB']).toMatch(/Planck 2018/);
   });
 
@@ -80,9 +80,9 @@ describe('statement templates', () => {
   });
 
   it('a fainter-than-the-eye object is worded as too faint', () => {
-    // 10^(0.4 × (12.9 − 6)) = 575 (hand-worked, common practice magnitude limit 6).
+    // 10^(0.4 × (14.6 − 6)) = 2754 (hand-worked, common practice magnitude limit 6).
     const r = ok('naked-eye', quasar);
-    expect(r.value).toBeCloseTo(10 ** (0.4 * 6.9), 6);
-    expect(r.texts['en-GB']).toBe('Q1 is about 580 times too faint to see with the unaided eye, even on a dark night.');
+    expect(r.value).toBeCloseTo(10 ** (0.4 * 8.6), 6);
+    expect(r.texts['en-GB']).toBe('Q1 is about 2,800 times too faint to see with the unaided eye, even on a dark night.');
   });
 });
