@@ -11,6 +11,8 @@ import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
+import { mediaFilesRouter } from './routes/media-files.ts';
+import { registerStatementTriggers } from './services/statements/triggers.ts';
 import { sessionMiddleware } from './session.ts';
 
 /** Options for building the app; tests pass their own database URL. */
@@ -27,6 +29,7 @@ export function createApp(options: AppOptions = {}) {
   const databaseUrl = options.databaseUrl ?? process.env.DATABASE_URL ?? config.databaseUrl;
   if (!databaseUrl) throw new Error('createApp needs a database URL');
   initModels(getSequelize());
+  registerStatementTriggers();
   const https = options.https ?? (config.publicUrl?.startsWith('https:') ?? false);
 
   const app = express();
@@ -47,6 +50,7 @@ export function createApp(options: AppOptions = {}) {
   api.use(apiRouter());
   app.use('/api', api);
 
+  app.use('/media', mediaFilesRouter);
   if (options.serveClient) serveClient(app);
   app.use(errorHandler);
   return app;
@@ -61,6 +65,7 @@ function serveClient(app: express.Express) {
   app.use(express.static(dist, { index: false, maxAge: '1h' }));
   app.get('/{*splat}', (_req, res) => {
     res.set('Cache-Control', 'no-cache');
-    res.sendFile(indexHtml);
+    // `dotfiles: 'allow'`: the build folder may itself sit under a dot folder (e.g. .data/dist-…).
+    res.sendFile(indexHtml, { dotfiles: 'allow' });
   });
 }

@@ -9,8 +9,11 @@ import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
+import { scheduleSkySnapshots } from '../jobs/sky-snapshots.ts';
+import { schedulePageJobs } from '../services/pages/page-digest.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
+import { sweepOrphanMedia } from '../services/media-sweep.ts';
 
 const started = Date.now();
 const ownsPostgres = !config.databaseUrl;
@@ -22,6 +25,7 @@ if (ownsPostgres) {
 const sequelize = initModels(getSequelize());
 const applied = await migrate(sequelize);
 if (applied.length) console.log(`Applied ${applied.length} migration(s).`);
+await sweepOrphanMedia();
 
 let catcher: Awaited<ReturnType<typeof startMailCatcher>> | undefined;
 if (!config.smtpUrl) {
@@ -42,6 +46,9 @@ if (config.isProduction) {
 
 const app = createApp({ serveClient: true });
 await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
+// startJobQueue hands back the queue already running.
+await scheduleSkySnapshots(await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!));
+await schedulePageJobs(await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!));
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);

@@ -1,6 +1,10 @@
 import { User, Venue } from '../models/index.ts';
 import { hashPassword, verifyPassword } from '../services/passwords.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
+import { seedCatalogueDemo } from './catalogue.ts';
+import { seedDemoKioskScreens } from './kiosk-screens.ts';
+import { seedDemoPages } from './pages.ts';
+import { seedDemoStatements } from './statements.ts';
 
 /**
  * Creates the demo venue and one account per role, unless they already exist. Idempotent: run at
@@ -13,6 +17,10 @@ export async function seedDemo(): Promise<void> {
     if (existing) continue;
     await User.create({ email: account.email, name: account.name, role: account.role, passwordHash: await hashPassword(account.password) });
   }
+  await seedCatalogueDemo();
+  await seedDemoStatements();
+  await seedDemoKioskScreens();
+  await seedDemoPages();
 }
 
 /**

@@ -2,12 +2,28 @@ import type { Sequelize } from 'sequelize';
 import { getSequelize } from '../db.ts';
 import { AuditEvent } from './audit-event.ts';
 import { AuthToken } from './auth-token.ts';
+import { initCatalogueModels } from './catalogue.ts';
+import { Media } from './media.ts';
+import { MediaRendition } from './media-rendition.ts';
+import { OrganisationSettings } from './organisation-settings.ts';
 import { OutboxMessage } from './outbox-message.ts';
+import { Statement } from './statement.ts';
 import { User } from './user.ts';
 import { Venue } from './venue.ts';
+import { KioskScreen } from './kiosk-screen.ts';
+import { SkySnapshot } from './sky-snapshot.ts';
+import { initPageModels } from './pages.ts';
+import { initChannelModels } from './channels.ts';
 
 export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
 export type { TokenPurpose } from './auth-token.ts';
+export { CatalogueImport, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue.ts';
+export { Media, MediaRendition };
+export { OrganisationSettings, Statement };
+export type { StatementStatus } from './statement.ts';
+export { KioskScreen, SkySnapshot };
+export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff } from './pages.ts';
+export { Channel, ChannelScreen, ChannelSlide } from './channels.ts';
 
 let initialised: Sequelize | undefined;
 
@@ -16,9 +32,28 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   if (initialised === sequelize) return sequelize;
   for (const model of [User, AuthToken, AuditEvent, OutboxMessage, Venue]) model.initModel(sequelize);
 
+  Media.initModel(sequelize);
+  MediaRendition.initModel(sequelize);
+
+  initCatalogueModels(sequelize);
+
+  OrganisationSettings.initModel(sequelize);
+  Statement.initModel(sequelize);
+
+  KioskScreen.initModel(sequelize);
+  SkySnapshot.initModel(sequelize);
+
+  initPageModels(sequelize);
+  initChannelModels(sequelize);
+
   // associations
   AuthToken.belongsTo(User, { foreignKey: 'userId' });
   AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
+  Media.hasMany(MediaRendition, { foreignKey: 'mediaId', as: 'renditions' });
+  Media.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+
+  KioskScreen.belongsTo(Venue, { foreignKey: 'venueId', as: 'venue' });
+  Venue.hasMany(KioskScreen, { foreignKey: 'venueId', as: 'screens' });
 
   initialised = sequelize;
   return sequelize;

@@ -1,13 +1,27 @@
 import { AuthorizationError } from '../errors.ts';
 import type { User } from '../models/index.ts';
+import { cataloguePolicy } from './catalogue.ts';
+import { channelPolicy } from './channel.ts';
+import { mediaPolicy } from './media.ts';
 import { outboxPolicy } from './outbox.ts';
+import { pagePolicy } from './page.ts';
+import { settingsPolicy } from './settings.ts';
+import { statementPolicy } from './statement.ts';
 import { userPolicy } from './user.ts';
+import { venuePolicy } from './venue.ts';
 import type { Rule } from './utils.ts';
 
 /** Every resource's rules, in one place; routes and presenters both read them. */
 export const policies = {
   user: userPolicy,
   outbox: outboxPolicy,
+  media: mediaPolicy,
+  catalogue: cataloguePolicy,
+  statement: statementPolicy,
+  settings: settingsPolicy,
+  venue: venuePolicy,
+  page: pagePolicy,
+  channel: channelPolicy,
 } satisfies Record<string, Record<string, Rule<never>>>;
 
 type Policies = typeof policies;

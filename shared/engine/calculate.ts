@@ -11,13 +11,13 @@ import type { Ctx } from './quantities/context.ts';
 import type { Values } from './quantities/photometry.ts';
 import { QUANTITY_SPECS, checkInputs } from './quantities/registry.ts';
 import { parseRequest, requestId } from './request.ts';
-import { SAMPLES, SEED, monteCarlo, type Measurement } from './uncertainty.ts';
+import { H0_KEY, quantityInterval } from './interval.ts';
+import { SAMPLES, SEED, type Measurement } from './uncertainty.ts';
 import { conversionsFor } from './units.ts';
 import type { Step } from './working.ts';
 
 // More failed draws than this and an interval would misrepresent the uncertainty.
 const MAX_FAILED_FRACTION = 0.01;
-const H0_KEY = 'H0';
 
 function toMeasurement(x: MeasuredInput): Measurement {
   if (typeof x === 'number') return { value: x, minus: 0, plus: 0, source: 'request' };
@@ -25,18 +25,6 @@ function toMeasurement(x: MeasuredInput): Measurement {
   if ('minus' in x) return { value: x.value, minus: x.minus, plus: x.plus, source };
   return { value: x.value, minus: x.sigma ?? 0, plus: x.sigma ?? 0, source };
 }
-
-/** Where each input is defined, to say which input pushed a Monte Carlo draw out of range. */
-const DOMAIN: Record<string, (x: number) => boolean> = {
-  z: (x) => x > -1,
-  parallax_mas: (x) => x > 0,
-  lookback_gyr: (x) => x > 0,
-  distance_mpc: (x) => x > 0,
-  distance_1: (x) => x > 0,
-  distance_2: (x) => x > 0,
-  extinction: (x) => x >= 0,
-  [H0_KEY]: (x) => x > 0,
-};
 
 function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
   const r = req.H0_range;
@@ -92,16 +80,7 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
   const all = h0 ? { ...measured, [H0_KEY]: h0 } : measured;
   let interval: CalcSuccess['interval'];
   if (Object.values(all).some((m) => m.minus > 0 || m.plus > 0)) {
-    const sampleCtx: Ctx = { ...ctx, steps: null, warnings: null };
-    const outcome = monteCarlo(
-      all,
-      (v) => {
-        const scale = h0 ? v[H0_KEY] / view.H0 : 1;
-        if (!(scale > 0)) return NaN;
-        return spec.compute({ ...sampleCtx, h0Scale: scale }, v);
-      },
-      (v) => Object.keys(all).find((k) => DOMAIN[k] && !DOMAIN[k](v[k])) ?? Object.keys(all).find((k) => all[k].plus > 0 || all[k].minus > 0) ?? 'z',
-    );
+    const outcome = quantityInterval(spec, all, view, band, present);
     if (outcome.failed > MAX_FAILED_FRACTION * SAMPLES || !(outcome.samples > 0)) {
       const [who] = [...outcome.failures.entries()].sort((a, b) => b[1] - a[1])[0];
       const pct = ((100 * outcome.failed) / SAMPLES).toFixed(1);
@@ -128,8 +107,9 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
 /** True when every number anywhere in x is finite. */
 function allFinite(x: unknown): boolean {
   if (typeof x === 'number') return Number.isFinite(x);
-  if (Array.isArray(x)) return x.every(allFinite);
-  if (typeof x === 'object' && x !== null) return Object.values(x).every(allFinite);
+  if (typeof x !== 'object' || x === null) return true;
+  // A for…in walk: the result is checked on every call, and Object.values would copy each level.
+  for (const k in x) if (!allFinite((x as Record<string, unknown>)[k])) return false;
   return true;
 }
 

@@ -3,7 +3,14 @@
  * request always gives the same interval. Inputs with asymmetric errors are drawn
  * from a two-piece (split) normal whose 16th and 84th percentiles are exactly
  * value − minus and value + plus; results report the 16th–84th percentile range.
+ *
+ * The standard-normal deviates are drawn once from the seeded stream and kept: every run reads
+ * the same sequence in the same order (draw i, varied input j takes deviate i × inputs + j), so a
+ * request's interval is the one it always had, without paying for logarithms and cosines again.
  */
+import { quantilePair, type MonotoneMap } from './order-statistics.ts';
+
+export type { MonotoneMap } from './order-statistics.ts';
 
 /** An input value with its 68 % uncertainty (minus = plus = 0 when exact) and its source. */
 export interface Measurement {
@@ -69,6 +76,27 @@ export function quantile(sorted: Float64Array, p: number): number {
   return i + 1 < sorted.length ? sorted[i] * (1 - f) + sorted[i + 1] * f : sorted[i];
 }
 
+/**
+ * The first `count` deviates of the seeded stream `normal(mulberry32(SEED))`, computed once and
+ * kept (the stream is regenerated from its start when a longer prefix is needed).
+ */
+let deviates = new Float64Array(0);
+
+/**
+ * The seeded standard-normal deviates, at least `count` of them.
+ * @param count how many are needed
+ * @returns the shared array (do not write to it)
+ */
+export function seededDeviates(count: number): Float64Array {
+  if (deviates.length < count) {
+    const gauss = normal(mulberry32(SEED));
+    const next = new Float64Array(Math.max(count, 5 * SAMPLES));
+    for (let i = 0; i < next.length; i++) next[i] = gauss();
+    deviates = next;
+  }
+  return deviates;
+}
+
 /** The outcome of a Monte Carlo run. */
 export interface MonteCarloOutcome {
   low: number;
@@ -79,10 +107,129 @@ export interface MonteCarloOutcome {
   failed: number;
 }
 
+// The draws' buffer is reused from run to run: a fresh 32 kB typed array per run lives outside the
+// JavaScript heap and costs more in garbage collection than the draws themselves. A run that starts
+// while another holds it (a calculation nested in a draw) gets its own.
+let scratch: Float64Array | null = null;
+const takeScratch = (): Float64Array => {
+  const s = scratch ?? new Float64Array(SAMPLES);
+  scratch = null;
+  return s;
+};
+const releaseScratch = (s: Float64Array): void => {
+  scratch = s;
+};
+
+/** A Monte Carlo problem on numbered slots: the calculation reads its inputs from x by slot. */
+export interface SlotProblem {
+  /** Every slot's nominal value; the varied slots are overwritten for each draw. */
+  x: Float64Array;
+  /** The inputs with a non-zero uncertainty, in the order they take deviates, with their slots. */
+  varied: Array<{ slot: number; m: Measurement }>;
+  /** The calculation: NaN (or a throw) for a draw where the quantity is undefined. */
+  f: (x: Float64Array) => number;
+  /** Names the input responsible for a failed draw. */
+  blame: (x: Float64Array) => string;
+  /**
+   * A monotonic last step of the calculation, left out of f: only the draws at the percentiles
+   * go through it (the interval is the same as running it on every draw, for less work).
+   */
+  last?: MonotoneMap;
+}
+
+/** Where a run stands, shared with the draw loop so that a throwing draw can be skipped and the loop resumed. */
+interface Run {
+  draw: number;
+  kept: number;
+}
+
 /**
- * Propagates uncertainties through f by Monte Carlo.
+ * Draws from `run.draw` to the end, keeping results in `out`. Free of try/catch and allocation:
+ * a draw that throws leaves `run.draw` pointing at itself for the caller to count and skip.
+ */
+function drawAll(run: Run, p: SlotProblem, slots: Int32Array, centre: Float64Array, minus: Float64Array, plus: Float64Array, out: Float64Array, failed: () => void): void {
+  const { x, f } = p;
+  const n = slots.length;
+  const dev = seededDeviates(SAMPLES * n);
+  // With a monotonic last step still to come, ±Infinity may map to a finite result: keep all but NaN.
+  const keepInfinite = p.last !== undefined;
+  for (; run.draw < SAMPLES; run.draw++) {
+    const base = run.draw * n;
+    for (let j = 0; j < n; j++) {
+      const d = dev[base + j];
+      x[slots[j]] = centre[j] + d * (d < 0 ? minus[j] : plus[j]);
+    }
+    const r = f(x);
+    // r − r is 0 only for finite r; r === r excludes only NaN.
+    if (keepInfinite ? r === r : r - r === 0) out[run.kept++] = r;
+    else failed();
+  }
+}
+
+/** True when a monotonic map is finite (and does not throw) at the smallest and largest draw, hence at all. */
+function finiteBetween(a: Float64Array, last: MonotoneMap): boolean {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] < lo) lo = a[i];
+    if (a[i] > hi) hi = a[i];
+  }
+  try {
+    return Number.isFinite(last.map(lo)) && Number.isFinite(last.map(hi));
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Propagates uncertainties by Monte Carlo over slot-numbered inputs.
+ * @param p the problem
+ * @returns 68 % interval and failure counts
+ */
+export function propagate(p: SlotProblem): MonteCarloOutcome {
+  const slots = Int32Array.from(p.varied, (v) => v.slot);
+  const centre = Float64Array.from(p.varied, (v) => v.m.value);
+  const minus = Float64Array.from(p.varied, (v) => v.m.minus);
+  const plus = Float64Array.from(p.varied, (v) => v.m.plus);
+  const out = takeScratch();
+  const failures = new Map<string, number>();
+  const failed = (): void => {
+    const who = p.blame(p.x);
+    failures.set(who, (failures.get(who) ?? 0) + 1);
+  };
+  const run: Run = { draw: 0, kept: 0 };
+  while (run.draw < SAMPLES) {
+    try {
+      drawAll(run, p, slots, centre, minus, plus, out, failed);
+    } catch {
+      // The draw at run.draw threw: it counts as outside the domain, and sampling resumes after it.
+      failed();
+      run.draw++;
+    }
+  }
+  const kept = out.subarray(0, run.kept);
+  const last = p.last;
+  if (last && run.kept > 0 && !finiteBetween(kept, last)) {
+    // Some draws leave the range where the last step is finite: run it on every draw instead.
+    releaseScratch(out);
+    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined });
+  }
+  const interval = run.kept > 0 ? quantilePair(kept, 0.16, 0.84, last) : { low: NaN, high: NaN };
+  const outcome = {
+    low: interval.low,
+    high: interval.high,
+    samples: run.kept,
+    failures,
+    failed: SAMPLES - run.kept,
+  };
+  releaseScratch(out);
+  return outcome;
+}
+
+/**
+ * Propagates uncertainties through f by Monte Carlo, with inputs by name.
  * @param inputs measurements by name (only those with a non-zero uncertainty are varied)
- * @param f the calculation; throws for draws where the quantity is undefined
+ * @param f the calculation; returns NaN (or throws) for draws where the quantity is undefined
  * @param blame names the input responsible for a failed draw
  * @returns 68 % interval and failure counts
  */
@@ -91,33 +238,16 @@ export function monteCarlo(
   f: (values: Record<string, number>) => number,
   blame: (values: Record<string, number>) => string,
 ): MonteCarloOutcome {
-  const gauss = normal(mulberry32(SEED));
-  const names = Object.keys(inputs).filter((k) => inputs[k].minus > 0 || inputs[k].plus > 0);
-  const out = new Float64Array(SAMPLES);
-  const failures = new Map<string, number>();
-  let kept = 0;
+  const names = Object.keys(inputs);
   const values: Record<string, number> = {};
-  for (const k of Object.keys(inputs)) values[k] = inputs[k].value;
-  for (let i = 0; i < SAMPLES; i++) {
-    for (const k of names) values[k] = drawSplitNormal(inputs[k], gauss());
-    let r: number;
-    try {
-      r = f(values);
-    } catch {
-      r = NaN;
-    }
-    if (Number.isFinite(r)) out[kept++] = r;
-    else {
-      const who = blame(values);
-      failures.set(who, (failures.get(who) ?? 0) + 1);
-    }
-  }
-  const used = out.subarray(0, kept).sort();
-  return {
-    low: kept > 0 ? quantile(used, 0.16) : NaN,
-    high: kept > 0 ? quantile(used, 0.84) : NaN,
-    samples: kept,
-    failures,
-    failed: SAMPLES - kept,
+  const byName = (x: Float64Array): Record<string, number> => {
+    names.forEach((k, i) => (values[k] = x[i]));
+    return values;
   };
+  return propagate({
+    x: Float64Array.from(names, (k) => inputs[k].value),
+    varied: names.flatMap((k, slot) => (inputs[k].minus > 0 || inputs[k].plus > 0 ? [{ slot, m: inputs[k] }] : [])),
+    f: (x) => f(byName(x)),
+    blame: (x) => blame(byName(x)),
+  });
 }

@@ -61,8 +61,10 @@ export function fromStep(r: StepResult): WorkingValue {
  */
 export function record(sink: StepSink, value: number, step: () => Omit<Step, 'result'> & { result: Omit<StepResult, 'value'> }): number {
   if (sink !== null) {
-    const s = step();
-    sink.push({ ...s, result: { ...s.result, value } });
+    // The step is built fresh by the closure, so its result can take the value in place.
+    const s = step() as Step;
+    s.result.value = value;
+    sink.push(s);
   }
   return value;
 }

@@ -20,6 +20,19 @@ const BIG_WORDS: Record<'en' | 'fr', Array<[number, string, string]>> = {
   ],
 };
 
+// Building an Intl.NumberFormat costs far more than formatting with one, and statements are
+// recomputed by the hundred thousand: keep one per locale and options (the output is the same).
+const formatters = new Map<string, Intl.NumberFormat>();
+function formatter(locale: StatementLocale, significantFigures: number, compact: boolean): Intl.NumberFormat {
+  const key = `${locale}|${significantFigures}|${compact}`;
+  let f = formatters.get(key);
+  if (!f) {
+    f = new Intl.NumberFormat(locale, compact ? { notation: 'compact', compactDisplay: 'long', maximumSignificantDigits: significantFigures } : { maximumSignificantDigits: significantFigures });
+    formatters.set(key, f);
+  }
+  return f;
+}
+
 /**
  * A rounded number for the public: digits with the locale's grouping below a million, scale words
  * above ("about 3.4 trillion", "3,4 billions"). Never more digits than `significantFigures`.
@@ -32,11 +45,11 @@ export function formatApproximate(value: number, significantFigures: number, loc
   const shown = roundToSignificant(value, significantFigures);
   const abs = Math.abs(shown);
   if (abs < 1e6) {
-    const text = new Intl.NumberFormat(locale, { maximumSignificantDigits: significantFigures }).format(shown);
+    const text = formatter(locale, significantFigures, false).format(shown);
     return { text, shown };
   }
   if (abs < 1e15) {
-    const text = new Intl.NumberFormat(locale, { notation: 'compact', compactDisplay: 'long', maximumSignificantDigits: significantFigures }).format(shown);
+    const text = formatter(locale, significantFigures, true).format(shown);
     return { text, shown };
   }
   const words = BIG_WORDS[language(locale)];
@@ -46,10 +59,10 @@ export function formatApproximate(value: number, significantFigures: number, loc
   if (Math.abs(mantissa) >= 1000) {
     // Beyond every name we keep: a power of ten reads better than a string of zeros.
     const exponent = Math.floor(Math.log10(abs));
-    const lead = new Intl.NumberFormat(locale, { maximumSignificantDigits: significantFigures }).format(shown / 10 ** exponent);
+    const lead = formatter(locale, significantFigures, false).format(shown / 10 ** exponent);
     return { text: `${lead} × 10^${exponent}`, shown };
   }
-  const digits = new Intl.NumberFormat(locale, { maximumSignificantDigits: significantFigures }).format(mantissa);
+  const digits = formatter(locale, significantFigures, false).format(mantissa);
   return { text: `${digits} ${Math.abs(mantissa) >= 2 ? plural : singular}`, shown };
 }
 

@@ -12,12 +12,19 @@ export interface NavItem {
 
 /** The main areas, top of the rail. */
 export const MAIN_NAV: NavItem[] = [
+  { label: 'Pages', to: paths.pages.href(), icon: 'page' },
   { label: 'Overview', to: paths.home.href(), icon: 'home' },
+  { label: 'Statements', to: paths.statements.href(), icon: 'quote' },
+  { label: 'Catalogue', to: paths.catalogue.href(), icon: 'catalogue' },
+  { label: 'Sources', to: paths.sources.href(), icon: 'source' },
   { label: 'Calculator', to: paths.calculator.href(), icon: 'calc' },
+  { label: 'Media', to: paths.media.href(), icon: 'image' },
+  { label: 'Venues', to: paths.venues.href(), icon: 'venue', roles: ['admin', 'editor'] },
 ];
 
 /** Administration, at the foot of the rail. */
 export const ADMIN_NAV: NavItem[] = [
+  { label: 'Organisation', to: paths.adminOrganisation.href(), icon: 'globe', roles: ['admin'] },
   { label: 'Users', to: paths.adminUsers.href(), icon: 'users', roles: ['admin'] },
   { label: 'Outbox', to: paths.adminOutbox.href(), icon: 'mail', roles: ['admin'] },
 ];

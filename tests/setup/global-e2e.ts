@@ -1,5 +1,8 @@
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
 import net from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
 import type { TestProject } from 'vitest/node';
 import { freshTestDatabase, stopTestCluster } from './test-postgres.ts';
 
@@ -26,8 +29,10 @@ export default async function setup(project: TestProject) {
   if (build.status !== 0) throw new Error('vite build failed');
   const { url, startedCluster } = await freshTestDatabase('starproof_e2e_test');
   const port = await freePort();
+  // Its own uploads folder: the browser tests never touch the development images.
+  const uploadsDir = process.env.UPLOADS_DIR ?? fs.mkdtempSync(path.join(os.tmpdir(), 'starproof-e2e-uploads-'));
   const server: ChildProcess = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {
-    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: url, PORT: String(port), HOST: '127.0.0.1', STARPROOF_SMTP_PORT: '0', LOG_LEVEL: 'warn' },
+    env: { ...process.env, NODE_ENV: 'test', DATABASE_URL: url, PORT: String(port), HOST: '127.0.0.1', STARPROOF_SMTP_PORT: '0', LOG_LEVEL: 'warn', UPLOADS_DIR: uploadsDir },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

@@ -1,6 +1,9 @@
+import { QueryTypes } from 'sequelize';
 import type { StatementMeasurement, TemplateContext } from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
-import { getPreferredMeasurements } from '../preferred-measurements.ts';
+import { findQuantity } from '@shared/catalogue/quantities.ts';
+import { getSequelize } from '../../db.ts';
+import { getPreferredMeasurements, type PreferredMeasurement } from '../preferred-measurements.ts';
 
 /** The organisation's choices a statement depends on. */
 export interface SettingsSnapshot {
@@ -9,13 +12,10 @@ export interface SettingsSnapshot {
   version: number;
 }
 
-/**
- * Builds what a template reads: the object's preferred measurements (values in canonical units,
- * each with its source) and the organisation's model and band.
- */
-export async function buildTemplateContext(object: { id: string; name: string; kind: string }, settings: SettingsSnapshot): Promise<TemplateContext> {
-  const preferred = await getPreferredMeasurements(object.id);
-  const measurements: StatementMeasurement[] = preferred.map((m) => ({
+type ObjectRef = { id: string; name: string; kind: string };
+
+function asStatementMeasurement(m: Pick<PreferredMeasurement, 'measurementId' | 'quantity' | 'value' | 'unit' | 'band' | 'uncertainty' | 'source'>): StatementMeasurement {
+  return {
     id: m.measurementId,
     quantity: m.quantity,
     value: m.value,
@@ -25,6 +25,72 @@ export async function buildTemplateContext(object: { id: string; name: string; k
     minus: m.uncertainty?.kind === 'asymmetric' ? m.uncertainty.minus : null,
     plus: m.uncertainty?.kind === 'asymmetric' ? m.uncertainty.plus : null,
     source: { id: m.source.id, citation: m.source.citation },
-  }));
+  };
+}
+
+function contextFor(object: ObjectRef, measurements: StatementMeasurement[], settings: SettingsSnapshot): TemplateContext {
   return { object: { id: object.id, name: object.name, kind: object.kind }, measurements, model: settings.model, band: settings.band };
+}
+
+/**
+ * Builds what a template reads: the object's preferred measurements (values in canonical units,
+ * each with its source) and the organisation's model and band.
+ */
+export async function buildTemplateContext(object: ObjectRef, settings: SettingsSnapshot): Promise<TemplateContext> {
+  const preferred = await getPreferredMeasurements(object.id);
+  return contextFor(object, preferred.map(asStatementMeasurement), settings);
+}
+
+interface PreferredRow {
+  id: string;
+  object_id: string;
+  quantity: string;
+  band: string | null;
+  value: number;
+  uncertainty: number | null;
+  uncertainty_minus: number | null;
+  uncertainty_plus: number | null;
+  source_id: string;
+  citation: string;
+}
+
+/**
+ * The same contexts as buildTemplateContext for many objects, with one query for all their
+ * preferred measurements (a recompute of the whole catalogue would otherwise make one per object).
+ * Measurements come in the same order (quantity, then band), so templates pick the same ones.
+ * @param objects the sky objects
+ * @param settings the adopted settings
+ * @returns each object's context by object id
+ */
+export async function buildTemplateContexts(objects: ObjectRef[], settings: SettingsSnapshot): Promise<Map<string, TemplateContext>> {
+  const byObject = new Map<string, StatementMeasurement[]>(objects.map((o) => [o.id, []]));
+  if (objects.length > 0) {
+    const rows = await getSequelize().query<PreferredRow>(
+      `SELECT m.id, m.object_id, m.quantity, m.band, m.value, m.uncertainty, m.uncertainty_minus, m.uncertainty_plus, s.id AS source_id, s.citation
+         FROM measurements m JOIN sources s ON s.id = m.source_id
+        WHERE m.preferred AND m.object_id IN (:ids)
+        ORDER BY m.object_id, m.quantity ASC, m.band ASC`,
+      { replacements: { ids: objects.map((o) => o.id) }, type: QueryTypes.SELECT },
+    );
+    for (const r of rows) {
+      const uncertainty: PreferredMeasurement['uncertainty'] =
+        r.uncertainty !== null
+          ? { kind: 'symmetric', sigma: r.uncertainty }
+          : r.uncertainty_minus !== null && r.uncertainty_plus !== null
+            ? { kind: 'asymmetric', minus: r.uncertainty_minus, plus: r.uncertainty_plus }
+            : null;
+      byObject.get(r.object_id)?.push(
+        asStatementMeasurement({
+          measurementId: r.id,
+          quantity: r.quantity,
+          value: r.value,
+          unit: findQuantity(r.quantity)?.canonicalUnit ?? '',
+          band: r.band,
+          uncertainty,
+          source: { id: r.source_id, citation: r.citation, bibcode: null, doi: null, url: null },
+        }),
+      );
+    }
+  }
+  return new Map(objects.map((o) => [o.id, contextFor(o, byObject.get(o.id) ?? [], settings)]));
 }

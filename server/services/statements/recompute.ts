@@ -1,12 +1,12 @@
 import { Op, QueryTypes, type WhereOptions } from 'sequelize';
-import { evaluateStatement } from '@shared/statements/index.ts';
+import { evaluateStatement, type TemplateContext } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import { defineJob } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { SkyObject, Statement } from '../../models/index.ts';
 import { getSettings } from '../organisation-settings.ts';
 import { applyOutcome, type ComputedFields } from './apply-outcome.ts';
-import { buildTemplateContext, type SettingsSnapshot } from './context.ts';
+import { buildTemplateContexts, type SettingsSnapshot } from './context.ts';
 import { statementEvents } from './events.ts';
 
 /** Which statements to recompute. */
@@ -17,11 +17,7 @@ export type RecomputeScope =
   | { measurementId: string }
   | { sourceId: string };
 
-const BATCH = 500;
-const COMPUTED_COLUMNS: Array<keyof ComputedFields> = [
-  'status', 'statusReason', 'value', 'unit', 'intervalLow', 'intervalHigh', 'significantFigures', 'texts', 'footnotes',
-  'acknowledgedTexts', 'inputs', 'working', 'warnings', 'model', 'settingsVersion', 'computedAt',
-];
+const BATCH = 1000;
 
 /** Raised when the adopted cosmology changed under a running recompute; its results are dropped. */
 export class SettingsMovedError extends Error {}
@@ -54,11 +50,60 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
   return [...new Set(ids)];
 }
 
+type Row = ComputedFields & { id: string };
+
+/** The statements of one batch with the contexts their templates read (one query for all the objects' measurements). */
+async function loadBatch(ids: string[], settings: SettingsSnapshot): Promise<{ statements: Statement[]; contexts: Map<string, TemplateContext> }> {
+  // Plain rows: applyOutcome only reads the previous values, and model instances of 1,000 large rows cost more than the maths.
+  const statements = (await Statement.findAll({ where: { id: { [Op.in]: ids } } as WhereOptions<Statement>, raw: true })) as Statement[];
+  const objectIds = [...new Set(statements.map((s) => s.skyObjectId))];
+  const objects = await SkyObject.findAll({ attributes: ['id', 'name', 'kind'], where: { id: { [Op.in]: objectIds } }, raw: true });
+  return { statements, contexts: await buildTemplateContexts(objects, settings) };
+}
+
+// One UPDATE per batch: the rows travel as a single JSON parameter that PostgreSQL splits into
+// records, so nothing is escaped into SQL text and rows deleted meanwhile stay deleted.
+const UPDATE_BATCH = `
+UPDATE statements AS s SET
+  status = r.status, status_reason = r.status_reason, value = r.value, unit = r.unit,
+  interval_low = r.interval_low, interval_high = r.interval_high, significant_figures = r.significant_figures,
+  texts = r.texts, footnotes = r.footnotes, acknowledged_texts = r.acknowledged_texts, inputs = r.inputs,
+  working = r.working, warnings = r.warnings, model = r.model, settings_version = r.settings_version,
+  computed_at = r.computed_at, updated_at = now()
+FROM jsonb_to_recordset($1::jsonb) AS r(
+  id uuid, status text, status_reason text, value float8, unit text, interval_low float8, interval_high float8,
+  significant_figures smallint, texts jsonb, footnotes jsonb, acknowledged_texts jsonb, inputs jsonb, working jsonb,
+  warnings jsonb, model jsonb, settings_version integer, computed_at timestamptz)
+WHERE s.id = r.id`;
+
+const COLUMN_OF: Record<keyof ComputedFields, string> = {
+  status: 'status', statusReason: 'status_reason', value: 'value', unit: 'unit', intervalLow: 'interval_low',
+  intervalHigh: 'interval_high', significantFigures: 'significant_figures', texts: 'texts', footnotes: 'footnotes',
+  acknowledgedTexts: 'acknowledged_texts', inputs: 'inputs', working: 'working', warnings: 'warnings', model: 'model',
+  settingsVersion: 'settings_version', computedAt: 'computed_at',
+};
+
+function asRecord(row: Row): Record<string, unknown> {
+  const record: Record<string, unknown> = { id: row.id };
+  for (const [key, column] of Object.entries(COLUMN_OF)) record[column] = row[key as keyof ComputedFields];
+  return record;
+}
+
+/** Writes one batch, inside a transaction that first checks the settings have not moved. */
+async function writeBatch(rows: Row[], settings: SettingsSnapshot): Promise<void> {
+  await getSequelize().transaction(async (transaction) => {
+    const current = await getSettings(transaction, 'share');
+    if (current.version !== settings.version) throw new SettingsMovedError('The organisation settings changed during the recompute.');
+    await getSequelize().query(UPDATE_BATCH, { bind: [JSON.stringify(rows.map(asRecord))], transaction });
+  });
+}
+
 /**
  * Recomputes statements with the organisation's current settings and writes them back in batches.
  * Every batch checks, inside its transaction, that the adopted settings have not moved since the
  * computation started; if they have, the batch is dropped (the change queued its own recompute),
  * so no statement is ever marked current against a model that is no longer adopted.
+ * While PostgreSQL writes one batch, the next is loaded and computed.
  * @param options.settings compute against this snapshot instead of reading it (a long job's start)
  * @returns how many statements were written, and which changed or broke
  */
@@ -68,32 +113,25 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
   const changed: string[] = [];
   const broken: string[] = [];
   let written = 0;
+  let writing: Promise<void> | null = null;
   for (let i = 0; i < ids.length; i += BATCH) {
-    const statements = await Statement.findAll({ where: { id: { [Op.in]: ids.slice(i, i + BATCH) } } as WhereOptions<Statement> });
-    const objects = new Map((await SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(statements.map((s) => s.skyObjectId))] } } })).map((o) => [o.id, o]));
-    const contexts = new Map<string, Awaited<ReturnType<typeof buildTemplateContext>>>();
-    const rows: Array<ComputedFields & { id: string; skyObjectId: string; templateId: string; createdAt: Date }> = [];
+    const { statements, contexts } = await loadBatch(ids.slice(i, i + BATCH), settings);
+    const rows: Row[] = [];
     for (const statement of statements) {
-      const object = objects.get(statement.skyObjectId);
-      if (!object) continue;
-      let ctx = contexts.get(object.id);
-      if (!ctx) {
-        ctx = await buildTemplateContext(object, settings);
-        contexts.set(object.id, ctx);
-      }
+      const ctx = contexts.get(statement.skyObjectId);
+      if (!ctx) continue;
       const fields = applyOutcome(statement, evaluateStatement(statement.templateId, ctx), settings.version);
       if (fields.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
       if (fields.status === 'broken' && statement.status !== 'broken') broken.push(statement.id);
-      rows.push({ ...fields, id: statement.id, skyObjectId: statement.skyObjectId, templateId: statement.templateId, createdAt: statement.createdAt });
+      rows.push({ ...fields, id: statement.id });
     }
-    await getSequelize().transaction(async (transaction) => {
-      const current = await getSettings(transaction, 'share');
-      if (current.version !== settings.version) throw new SettingsMovedError('The organisation settings changed during the recompute.');
-      // One INSERT … ON CONFLICT DO UPDATE per batch instead of a round trip per statement.
-      await Statement.bulkCreate(rows as never[], { updateOnDuplicate: [...COMPUTED_COLUMNS, 'updatedAt'], transaction });
-    });
+    if (writing) await writing;
+    writing = writeBatch(rows, settings);
+    // Awaited at the next batch or after the loop; until then a failure must not count as unhandled.
+    writing.catch(() => undefined);
     written += rows.length;
   }
+  if (writing) await writing;
   if (changed.length) statementEvents.emit('textChanged', { statementIds: changed });
   if (broken.length) statementEvents.emit('broken', { statementIds: broken });
   return { written, changed, broken };

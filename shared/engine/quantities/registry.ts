@@ -26,6 +26,29 @@ import {
   parallaxSteps,
   type Values,
 } from './photometry.ts';
+import {
+  sampleAge,
+  sampleAngularDiameter,
+  sampleComoving,
+  sampleHubbleParameter,
+  sampleLawDistance,
+  sampleLawRedshift,
+  sampleLawTime,
+  sampleLightTravel,
+  sampleLookback,
+  sampleLuminosity,
+  sampleTransverse,
+} from './sample-cosmic.ts';
+import { DISTANCE, LOOKBACK, PARALLAX, Z, viaCompute, type SampleEnv, type Sampler } from './sample-env.ts';
+import {
+  sampleAbsoluteMagnitude,
+  sampleDistanceModulus,
+  sampleFluxRatio,
+  sampleLuminosityRatio,
+  sampleMagnitudeDifference,
+  sampleParallax,
+} from './sample-photometry.ts';
+import { fluxRatioFromMagnitudes, luminosityRatioSun } from '../magnitudes.ts';
 
 /** Units of results. */
 export type ResultUnit = 'Mpc' | 'Gyr' | 'mag' | 'km/s/Mpc' | 'pc' | '';
@@ -43,6 +66,26 @@ export interface QuantitySpec {
   /** Whether a cosmology model enters, given the inputs present. */
   usesModel: (present: Set<string>) => boolean;
   compute: (ctx: Ctx, v: Values) => number;
+  /** The same calculation for one Monte Carlo draw: no working, NaN outside the domain. */
+  sample: Sampler;
+  /**
+   * For quantities that end in a monotonic step (a power of ten of a magnitude): the draw up to
+   * that step, and the step itself, so that only the percentile draws pay for it.
+   */
+  split?: SplitSample;
+  /**
+   * Set when the quantity is monotonic in z in every model it accepts (an integral of a positive
+   * integrand, or cz/H0): when z is the only input varied, only the percentile draws are computed.
+   */
+  monotoneInZ?: 'increasing' | 'decreasing';
+}
+
+/** A draw split before a monotonic last step; `applies` says for which inputs it holds. */
+export interface SplitSample {
+  applies: (present: Set<string>) => boolean;
+  before: Sampler;
+  last: (env: SampleEnv, x: number) => number;
+  decreasing: boolean;
 }
 
 const always = (): boolean => true;
@@ -50,13 +93,21 @@ const never = (): boolean => false;
 const DISTANCE_SOURCES = [['z'], ['distance_mpc'], ['parallax_mas']];
 const z = (v: Values): number => v.z as number;
 const isLaw = (ctx: Ctx): boolean => ctx.model.kind === 'hubble_law';
+const drawIsLaw = (env: SampleEnv): boolean => env.model.kind === 'hubble_law';
 
-function distance(measure: string, flrw: (ctx: Ctx, z: number) => number): QuantitySpec {
+function distance(
+  measure: string,
+  flrw: (ctx: Ctx, z: number) => number,
+  sample: (env: SampleEnv, z: number) => number,
+  monotoneInZ?: 'increasing',
+): QuantitySpec {
   return {
+    monotoneInZ,
     unit: 'Mpc',
     required: ['z'],
     usesModel: always,
     compute: (ctx, v) => (isLaw(ctx) ? hubbleLawDistanceSteps(ctx, z(v), measure) : flrw(ctx, z(v))),
+    sample: (env, x) => (drawIsLaw(env) ? sampleLawDistance(env, x[Z]) : sample(env, x[Z])),
   };
 }
 
@@ -72,34 +123,51 @@ function properDistanceSteps(ctx: Ctx, zz: number): number {
   }));
 }
 
+// Root finding dominates these draws, so they reuse the working path with no sink.
+const lookbackInverse = viaCompute((ctx, v) => zFromLookbackSteps(ctx, v.lookback_gyr as number));
+const luminosityDistanceInverse = viaCompute((ctx, v) => zFromLuminosityDistanceSteps(ctx, v.distance_mpc as number));
+
 const magnitudeInputs = { required: ['m'], oneOf: DISTANCE_SOURCES, optional: ['extinction', 'alpha'] };
 
 /** Every quantity's definition. */
 export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
-  comoving_distance: distance('comoving distance', comovingDistanceSteps),
-  transverse_comoving_distance: distance('transverse comoving distance', transverseSteps),
-  angular_diameter_distance: distance('angular-diameter distance', angularDiameterSteps),
-  luminosity_distance: distance('luminosity distance', luminositySteps),
-  light_travel_distance: distance('light-travel distance', lightTravelSteps),
-  proper_distance: distance('proper distance', properDistanceSteps),
+  comoving_distance: distance('comoving distance', comovingDistanceSteps, sampleComoving, 'increasing'),
+  transverse_comoving_distance: distance('transverse comoving distance', transverseSteps, sampleTransverse),
+  angular_diameter_distance: distance('angular-diameter distance', angularDiameterSteps, sampleAngularDiameter),
+  luminosity_distance: distance('luminosity distance', luminositySteps, sampleLuminosity),
+  light_travel_distance: distance('light-travel distance', lightTravelSteps, sampleLightTravel, 'increasing'),
+  proper_distance: distance('proper distance', properDistanceSteps, sampleComoving, 'increasing'),
   lookback_time: {
     unit: 'Gyr',
     required: ['z'],
     usesModel: always,
     compute: (ctx, v) => (isLaw(ctx) ? hubbleLawTimeSteps(ctx, z(v)) : lookbackSteps(ctx, z(v))),
+    sample: (env, x) => (drawIsLaw(env) ? sampleLawTime(env, x[Z]) : sampleLookback(env, x[Z])),
+    monotoneInZ: 'increasing',
   },
-  age_at_z: { unit: 'Gyr', required: ['z'], flrwOnly: true, usesModel: always, compute: (ctx, v) => ageSteps(ctx, z(v), false) },
-  age_now: { unit: 'Gyr', required: [], flrwOnly: true, usesModel: always, compute: (ctx) => ageSteps(ctx, 0, true) },
-  hubble_parameter: { unit: 'km/s/Mpc', required: ['z'], flrwOnly: true, usesModel: always, compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)) },
-  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps },
-  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps },
-  luminosity_ratio_sun: { unit: '', ...magnitudeInputs, band: true, usesModel: (p) => p.has('z'), compute: luminosityRatioSteps },
+  age_at_z: {
+    unit: 'Gyr', required: ['z'], flrwOnly: true, usesModel: always,
+    compute: (ctx, v) => ageSteps(ctx, z(v), false), sample: (env, x) => sampleAge(env, x[Z], false),
+    monotoneInZ: 'decreasing',
+  },
+  age_now: { unit: 'Gyr', required: [], flrwOnly: true, usesModel: always, compute: (ctx) => ageSteps(ctx, 0, true), sample: (env) => sampleAge(env, 0, true) },
+  hubble_parameter: {
+    unit: 'km/s/Mpc', required: ['z'], flrwOnly: true, usesModel: always,
+    compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)), sample: (env, x) => sampleHubbleParameter(env, x[Z]),
+  },
+  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps, sample: sampleDistanceModulus },
+  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps, sample: sampleAbsoluteMagnitude },
+  luminosity_ratio_sun: {
+    unit: '', ...magnitudeInputs, band: true, usesModel: (p) => p.has('z'), compute: luminosityRatioSteps, sample: sampleLuminosityRatio,
+    split: { applies: always, before: sampleAbsoluteMagnitude, last: (env, M) => luminosityRatioSun(M, env.Msun), decreasing: true },
+  },
   z_from_lookback_time: {
     unit: '',
     required: ['lookback_gyr'],
     usesModel: always,
     compute: (ctx, v) =>
       isLaw(ctx) ? hubbleLawRedshiftSteps(ctx, 'lookback_gyr', v.lookback_gyr as number) : zFromLookbackSteps(ctx, v.lookback_gyr as number),
+    sample: (env, x) => (drawIsLaw(env) ? sampleLawRedshift(env, 'lookback_gyr', x[LOOKBACK]) : lookbackInverse(env, x)),
   },
   z_from_luminosity_distance: {
     unit: '',
@@ -109,14 +177,20 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
       isLaw(ctx)
         ? hubbleLawRedshiftSteps(ctx, 'distance_mpc', v.distance_mpc as number)
         : zFromLuminosityDistanceSteps(ctx, v.distance_mpc as number),
+    sample: (env, x) => (drawIsLaw(env) ? sampleLawRedshift(env, 'distance_mpc', x[DISTANCE]) : luminosityDistanceInverse(env, x)),
   },
-  parallax_distance: { unit: 'pc', required: ['parallax_mas'], usesModel: never, compute: (ctx, v) => parallaxSteps(ctx, v.parallax_mas as number) },
+  parallax_distance: {
+    unit: 'pc', required: ['parallax_mas'], usesModel: never,
+    compute: (ctx, v) => parallaxSteps(ctx, v.parallax_mas as number), sample: (_env, x) => sampleParallax(x[PARALLAX]),
+  },
   flux_ratio: {
     unit: '',
     required: [],
     oneOf: [['delta_mag'], ['m1', 'm2'], ['distance_1', 'distance_2']],
     usesModel: never,
     compute: fluxRatioSteps,
+    sample: sampleFluxRatio,
+    split: { applies: (p) => !p.has('distance_1'), before: sampleMagnitudeDifference, last: (_env, dm) => fluxRatioFromMagnitudes(dm), decreasing: true },
   },
 };
 

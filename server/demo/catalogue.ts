@@ -1,0 +1,56 @@
+import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
+import { SkyObjectInputSchema } from '@shared/schemas/sky-object.ts';
+import { Measurement, SkyObject, Source, User } from '../models/index.ts';
+import { createMeasurement } from '../services/measurement-write.ts';
+import { setPreferred } from '../services/measurement-preferred.ts';
+import { createSkyObject } from '../services/sky-object-write.ts';
+import { DEMO_ACCOUNTS } from './accounts.ts';
+import { DEMO_OBJECTS } from './catalogue-objects.ts';
+
+/** The one source every demo value hangs from, so nothing demo passes for checked data. */
+export const DEMO_SOURCE_CITATION = 'Demo values — not for publication';
+
+/**
+ * A couple of dozen well-known objects with approximate values, entered by the demo reviewer and
+ * attached to the demo source. The first value of each quantity and band is marked preferred.
+ * Idempotent: does nothing once the demo source exists.
+ */
+export async function seedCatalogueDemo(): Promise<void> {
+  if (await Source.findOne({ where: { citation: DEMO_SOURCE_CITATION } })) return;
+  const reviewer = await User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === 'reviewer')!.email } });
+  const writer = await User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === 'writer')!.email } });
+  if (!reviewer || !writer) return;
+  const source = await Source.create({
+    citation: DEMO_SOURCE_CITATION,
+    bibcode: null,
+    doi: null,
+    url: null,
+    catalogueName: 'Corrie Vale Planetarium (demo)',
+    retrievedOn: null,
+    notes: 'Rounded values typed in for the demonstration. Replace them with measurements from published sources before anything is published.',
+    createdById: reviewer.id,
+  });
+
+  for (const demo of DEMO_OBJECTS) {
+    const existing = await SkyObject.findOne({ where: { name: demo.name } });
+    if (existing) continue;
+    const object = await createSkyObject(SkyObjectInputSchema.parse({ ...demo, notes: `${demo.notes ?? ''} Demo object.`.trim() }), reviewer);
+    const preferredKeys = new Set<string>();
+    for (const entry of demo.measurements) {
+      const values = MeasurementInputSchema.parse({ ...entry, sourceId: source.id });
+      const proposal = entry.proposed === true;
+      const m = await createMeasurement(object, values, proposal ? writer : reviewer, proposal);
+      const key = `${values.quantity}|${values.band ?? ''}`;
+      if (!proposal && !preferredKeys.has(key)) {
+        preferredKeys.add(key);
+        await setPreferred(m.id, { preferred: true }, reviewer);
+      }
+    }
+  }
+}
+
+/** @returns true when the catalogue holds the demo data (used by start-up messages and tests) */
+export async function hasCatalogueDemo(): Promise<boolean> {
+  const source = await Source.findOne({ where: { citation: DEMO_SOURCE_CITATION } });
+  return !!source && (await Measurement.count({ where: { sourceId: source.id } })) > 0;
+}

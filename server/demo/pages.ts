@@ -1,0 +1,77 @@
+import type { JSONContent } from '@tiptap/core';
+import { Page, SkyObject, User } from '../models/index.ts';
+import { savePage, createPage } from '../services/pages/page-save.ts';
+import { publishPage } from '../services/pages/page-publish.ts';
+import { signOffPage, signOffStatement } from '../services/pages/page-signoff.ts';
+import { submitPage } from '../services/pages/page-workflow.ts';
+import { findOrCreateStatement } from '../services/statements/create.ts';
+import { logger } from '../logger.ts';
+import { DEMO_ACCOUNTS } from './accounts.ts';
+
+const t = (text: string): JSONContent => ({ type: 'text', text });
+const s = (statementId: string): JSONContent => ({ type: 'statementRef', attrs: { statementId } });
+const p = (...content: JSONContent[]): JSONContent => ({ type: 'paragraph', content });
+const h = (text: string): JSONContent => ({ type: 'heading', attrs: { level: 2 }, content: [t(text)] });
+
+const account = (role: string) => User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === role)!.email } });
+
+async function statementFor(objectName: string, templateId: string, writer: User): Promise<string> {
+  const object = await SkyObject.findOne({ where: { name: objectName } });
+  if (!object) throw new Error(`demo object ${objectName} missing`);
+  return (await findOrCreateStatement(object.id, templateId, writer)).statement.id;
+}
+
+async function draft(title: string, objectName: string, writer: User, doc: JSONContent) {
+  const object = await SkyObject.findOne({ where: { name: objectName } });
+  const page = await createPage({ title, objectId: object!.id, locale: 'en-GB' }, writer);
+  return (await savePage(page.id, { version: page.version, title, doc }, writer)).page;
+}
+
+/**
+ * Three demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: one
+ * published, one waiting for review (with a hand-typed number for the reviewer), one draft about
+ * the Sun with its eye-safety notice. Idempotent: does nothing once a demo page exists.
+ */
+export async function seedDemoPages(): Promise<void> {
+  if (await Page.findOne({ where: { title: 'How far away is the Andromeda Galaxy? (demo)' } })) return;
+  const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
+  if (!writer || !reviewer || !editor) return;
+  try {
+    const distance = await statementFor('Andromeda Galaxy', 'distance-today', writer);
+    const nakedEye = await statementFor('Andromeda Galaxy', 'naked-eye', writer);
+    const andromeda = await draft('How far away is the Andromeda Galaxy? (demo)', 'Andromeda Galaxy', writer, {
+      type: 'doc',
+      content: [
+        p(t('On a clear autumn night at Corrie Vale, look high in the east for a faint smudge of light: the Andromeda Galaxy, our nearest large neighbour.')),
+        h('A long way off'),
+        p(s(distance), t(' The light reaching your eye tonight set out long before there were people to see it.')),
+        h('Can I see it?'),
+        p(s(nakedEye), t(' Let your eyes adjust to the dark for twenty minutes first, away from the car park lights.')),
+      ],
+    });
+    await submitPage(andromeda.id, undefined, writer);
+    for (const id of [distance, nakedEye]) await signOffStatement(andromeda.id, id, reviewer);
+    await signOffPage(andromeda.id, reviewer);
+    await publishPage(andromeda.id, editor);
+
+    const luminosity = await statementFor('3C 273', 'luminosity-sun', writer);
+    const travel = await statementFor('3C 273', 'light-travel', writer);
+    const quasar = await draft('3C 273, the quasar in Virgo (demo)', '3C 273', writer, {
+      type: 'doc',
+      content: [
+        p(t('3C 273 looks like an ordinary faint star in a small telescope, but it is the blazing centre of a distant galaxy.')),
+        p(s(luminosity), t(' '), s(travel)),
+        p(t('Some books say it is about 2.4 billion light-years away; our reviewers check which distance measure that means.')),
+      ],
+    });
+    await submitPage(quasar.id, undefined, writer);
+
+    await draft('Watching the Sun safely (demo)', 'Sun', writer, {
+      type: 'doc',
+      content: [p(t('Our solar telescope on the terrace shows sunspots on clear days, with a certified filter fitted by our staff.')), { type: 'eyeSafetyNotice' }],
+    });
+  } catch (err) {
+    // Demo pages are a convenience: a catalogue without the demo objects must not stop the app.
+    logger.warn({ err }, 'demo pages not created');
+  }
+}

@@ -1,0 +1,23 @@
+import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
+import { SkyObject, Statement, User } from '../models/index.ts';
+import { findOrCreateStatement } from '../services/statements/create.ts';
+import { DEMO_ACCOUNTS } from './accounts.ts';
+
+/** Demo objects that get checked statements, so the Statements screen has something to show. */
+const DEMO_STATEMENT_OBJECTS = ['3C 279', 'TON 618', 'Andromeda Galaxy', 'Vega', 'Sirius', 'Orion Nebula', 'Pleiades', 'Messier 87'];
+
+/**
+ * Works out every template that applies to a handful of demo objects. Idempotent: statements that
+ * exist are left alone; templates an object lacks the data for are skipped.
+ */
+export async function seedDemoStatements(): Promise<void> {
+  const writer = await User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === 'writer')!.email } });
+  if (!writer) return;
+  for (const name of DEMO_STATEMENT_OBJECTS) {
+    const object = await SkyObject.findOne({ where: { name } });
+    if (!object || (await Statement.count({ where: { skyObjectId: object.id } })) > 0) continue;
+    for (const template of STATEMENT_TEMPLATES) {
+      await findOrCreateStatement(object.id, template.id, writer).catch(() => undefined);
+    }
+  }
+}

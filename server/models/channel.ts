@@ -1,0 +1,32 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import type { ChannelSlide } from './channel-slide.ts';
+
+/** A kiosk channel: an ordered list of slides at one venue, shown by the screens assigned to it. */
+export class Channel extends Model<InferAttributes<Channel>, InferCreationAttributes<Channel>> {
+  declare id: CreationOptional<string>;
+  declare venueId: string;
+  declare name: string;
+  /** Bumped by every edit; feed caches on other server instances compare it. */
+  declare version: CreationOptional<number>;
+  declare createdById: CreationOptional<string | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  // associations
+  declare slides?: NonAttribute<ChannelSlide[]>;
+
+  static initModel(sequelize: Sequelize): void {
+    Channel.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        venueId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(80), allowNull: false },
+        version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        createdById: { type: DataTypes.UUID },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'channels', modelName: 'channel', underscored: true },
+    );
+  }
+}

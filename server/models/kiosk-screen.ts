@@ -1,0 +1,40 @@
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+
+/** A kiosk display in a venue. Pairs once with a short code; then acts with a long token stored as a SHA-256 hash. */
+export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreationAttributes<KioskScreen>> {
+  declare id: CreationOptional<string>;
+  declare venueId: string;
+  declare name: string;
+  declare pairingCodeHash: CreationOptional<string | null>;
+  /** Set while a pairing code is waiting; cleared when the code is used. */
+  declare pairingExpiresAt: CreationOptional<Date | null>;
+  declare tokenHash: CreationOptional<string | null>;
+  declare tokenIssuedAt: CreationOptional<Date | null>;
+  declare revokedAt: CreationOptional<Date | null>;
+  declare lastSeenAt: CreationOptional<Date | null>;
+  declare playerVersion: CreationOptional<string | null>;
+  declare showing: CreationOptional<Record<string, unknown> | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+
+  static initModel(sequelize: Sequelize): void {
+    KioskScreen.init(
+      {
+        id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+        venueId: { type: DataTypes.UUID, allowNull: false },
+        name: { type: DataTypes.STRING(80), allowNull: false },
+        pairingCodeHash: { type: DataTypes.STRING(64) },
+        pairingExpiresAt: { type: DataTypes.DATE },
+        tokenHash: { type: DataTypes.STRING(64) },
+        tokenIssuedAt: { type: DataTypes.DATE },
+        revokedAt: { type: DataTypes.DATE },
+        lastSeenAt: { type: DataTypes.DATE },
+        playerVersion: { type: DataTypes.STRING(40) },
+        showing: { type: DataTypes.JSONB },
+        createdAt: DataTypes.DATE,
+        updatedAt: DataTypes.DATE,
+      },
+      { sequelize, tableName: 'kiosk_screens', modelName: 'kioskScreen', underscored: true },
+    );
+  }
+}

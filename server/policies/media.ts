@@ -1,0 +1,17 @@
+import type { Media } from '../models/index.ts';
+import { anyStaff, hasRole, type Rule } from './utils.ts';
+
+const isEditorOrAdmin = hasRole('editor', 'admin');
+
+/**
+ * Every signed-in role may browse, upload and describe images (credits and alt text are everyone's
+ * job). Deleting an unused image is for whoever uploaded it, and for editors and admins, who look
+ * after the whole library. Whether it is unused is checked by the delete itself (409).
+ */
+export const mediaPolicy = {
+  list: anyStaff,
+  upload: anyStaff,
+  read: ((user, media) => anyStaff(user) && !!media) as Rule<Media>,
+  update: ((user, media) => anyStaff(user) && !!media) as Rule<Media>,
+  delete: ((user, media) => !!media && (isEditorOrAdmin(user) || media.uploadedById === user.id)) as Rule<Media>,
+};

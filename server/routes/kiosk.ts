@@ -1,0 +1,57 @@
+import { Router } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { KioskHeartbeatSchema, KioskPairSchema, type KioskHeartbeatInput, type KioskPairedDto, type KioskPairInput } from '@shared/schemas/kiosk.ts';
+import { nightDateAt } from '@shared/sky/time-zone.ts';
+import { HttpError, NotFoundError } from '../errors.ts';
+import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kiosk-auth.ts';
+import { validate } from '../middlewares/validate.ts';
+import { Venue } from '../models/index.ts';
+import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
+import { pairScreen } from '../services/kiosk-pairing.ts';
+import { getSkySnapshot } from '../services/sky-snapshots.ts';
+
+/** Guessing codes is slow: a few tries per address per quarter hour. */
+const pairingLimiter = rateLimit({
+  windowMs: 15 * 60_000,
+  limit: Number(process.env.STARPROOF_PAIRING_LIMIT ?? 30),
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many pairing attempts from this address. Wait a few minutes and try again.')),
+});
+
+/** Routes the kiosk player calls: pairing (no token yet), then everything with its Bearer token. */
+export const kioskRouter = Router();
+
+kioskRouter.post('/pair', pairingLimiter, validate(KioskPairSchema), async (req, res) => {
+  const { token, screen, venue } = await pairScreen((req.body as KioskPairInput).code, req.ip);
+  const body: KioskPairedDto = { token, screen: { id: screen.id, name: screen.name, venueId: venue.id, venueName: venue.name } };
+  res.status(201).json({ data: body });
+});
+
+kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), async (req, res) => {
+  const screen = currentKiosk(req);
+  const input = req.body as KioskHeartbeatInput;
+  assertOwnScreen(screen, { screenId: input.screenId });
+  screen.set({ lastSeenAt: new Date() });
+  if (input.playerVersion !== undefined) screen.set({ playerVersion: input.playerVersion });
+  if (input.showing !== undefined) screen.set({ showing: input.showing });
+  await screen.save();
+  // The player trusts the server's clock over its own.
+  res.json({ data: { screenId: screen.id, venueId: screen.venueId, serverTime: new Date().toISOString() } });
+});
+
+kioskRouter.get('/screen', requireKiosk, async (req, res) => {
+  const screen = currentKiosk(req);
+  const venue = await Venue.findByPk(screen.venueId);
+  res.json({ data: { id: screen.id, name: screen.name, venueId: screen.venueId, venueName: venue?.name ?? '', serverTime: new Date().toISOString() } });
+});
+
+/** The sky for the screen's own venue (a sky-tonight slide); another venue's is refused. */
+kioskRouter.get('/venues/:venueId/sky', requireKiosk, async (req, res) => {
+  const screen = currentKiosk(req);
+  assertOwnScreen(screen, { venueId: String(req.params.venueId) });
+  const venue = await Venue.findByPk(screen.venueId);
+  if (!venue) throw NotFoundError('This screen’s venue no longer exists.');
+  const snapshot = await getSkySnapshot(venue.id, nightDateAt(Date.now(), venue.timeZone));
+  res.json({ data: presentSkySnapshot(snapshot!) });
+});

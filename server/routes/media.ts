@@ -1,0 +1,116 @@
+import fsp from 'node:fs/promises';
+import { Router, type RequestHandler } from 'express';
+import { z } from 'zod';
+import { MediaLimits } from '@shared/media/limits.ts';
+import { MediaListQuerySchema, MediaUpdateSchema, type MediaListQuery, type MediaUpdateInput } from '@shared/media/schemas.ts';
+import { IdSchema } from '@shared/schemas/common.ts';
+import { ConflictError, HttpError } from '../errors.ts';
+import { requestRenditions } from '../jobs/media-renditions.ts';
+import { mediaSettings } from '../media/settings.ts';
+import { currentUser, requireUser } from '../middlewares/authenticate.ts';
+import { singleImageUpload } from '../middlewares/media-upload.ts';
+import { validate } from '../middlewares/validate.ts';
+import { Media, MediaRendition, User } from '../models/index.ts';
+import { authorize } from '../policies/index.ts';
+import { presentMedia, presentRendition } from '../presenters/media.ts';
+import { deleteMedia } from '../services/media-delete.ts';
+import { objectsForMedia, suggestObjects } from '../services/media-objects.ts';
+import { searchMedia } from '../services/media-search.ts';
+import { uploadMedia } from '../services/media-upload.ts';
+import { updateMedia } from '../services/media-update.ts';
+import { findMediaUsage } from '../services/media-usage.ts';
+
+/** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
+async function findMedia(id: string): Promise<Media | null> {
+  if (!IdSchema.safeParse(id).success) return null;
+  return Media.findByPk(id, { include: [{ model: MediaRendition, as: 'renditions' }, { model: User, as: 'uploadedBy', attributes: ['id', 'name'] }] });
+}
+
+async function present(media: Media, viewer: User) {
+  const objects = await objectsForMedia([media.id]);
+  return presentMedia(media, viewer, objects.get(media.id) ?? []);
+}
+
+const SuggestQuerySchema = z.object({ q: z.string({ message: 'Type part of a name' }).trim().min(1, 'Type part of a name').max(MediaLimits.searchMax) });
+
+// Checked before the body is read, so a refused request uploads nothing.
+const mayUpload: RequestHandler = (req, _res, next) => {
+  authorize(currentUser(req), 'media', 'upload');
+  next();
+};
+
+export const mediaRouter = Router();
+mediaRouter.use(requireUser);
+
+mediaRouter.get('/', validate(MediaListQuerySchema, 'query'), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'media', 'list');
+  const { rows, total, page } = await searchMedia(req.query as MediaListQuery);
+  const objects = await objectsForMedia(rows.map((m) => m.id));
+  const { uploadMaxBytes, maxPixels } = mediaSettings();
+  res.json({
+    data: rows.map((m) => presentMedia(m, viewer, objects.get(m.id) ?? [])),
+    meta: { total, page, pageSize: MediaLimits.pageSize, uploadMaxBytes, maxMegapixels: maxPixels / 1e6 },
+  });
+});
+
+mediaRouter.get('/object-suggestions', validate(SuggestQuerySchema, 'query'), async (req, res) => {
+  authorize(currentUser(req), 'media', 'list');
+  res.json({ data: await suggestObjects((req.query as { q: string }).q) });
+});
+
+mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
+  const viewer = currentUser(req);
+  if (!req.file) {
+    throw new HttpError(400, 'no_file', 'Choose an image file to upload.', { file: 'Choose an image file to upload.' });
+  }
+  try {
+    const media = await uploadMedia({ file: req.file, fields: req.body, uploader: viewer, ip: req.ip });
+    const loaded = (await findMedia(media.id))!;
+    res.status(201).json({ data: await present(loaded, viewer) });
+  } finally {
+    await fsp.rm(req.file.path, { force: true });
+  }
+});
+
+mediaRouter.get('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  const media = await findMedia(req.params.id as string);
+  authorize(viewer, 'media', 'read', media);
+  res.json({ data: { ...(await present(media, viewer)), usage: await findMediaUsage(media.id) } });
+});
+
+mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const media = await findMedia(req.params.id as string);
+  authorize(viewer, 'media', 'update', media);
+  await updateMedia(media, req.body as MediaUpdateInput, viewer, req.ip);
+  res.json({ data: await present((await findMedia(media.id))!, viewer) });
+});
+
+mediaRouter.delete('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  const media = await findMedia(req.params.id as string);
+  authorize(viewer, 'media', 'delete', media);
+  await deleteMedia(media, viewer, req.ip);
+  res.status(204).end();
+});
+
+mediaRouter.get('/:id/renditions', async (req, res) => {
+  const viewer = currentUser(req);
+  const media = await findMedia(req.params.id as string);
+  authorize(viewer, 'media', 'read', media);
+  res.json({ data: { status: media.renditionsStatus, error: media.renditionsError, renditions: (media.renditions ?? []).map(presentRendition) } });
+});
+
+/** Makes the renditions again, e.g. after a failure. */
+mediaRouter.post('/:id/renditions', async (req, res) => {
+  const viewer = currentUser(req);
+  const media = await findMedia(req.params.id as string);
+  authorize(viewer, 'media', 'update', media);
+  if (media.renditionsStatus === 'processing') throw ConflictError('The renditions are being made right now.', 'already_processing');
+  await media.update({ renditionsStatus: 'pending', renditionsError: null });
+  await requestRenditions(media.id);
+  await media.reload();
+  res.status(202).json({ data: { status: media.renditionsStatus, error: media.renditionsError } });
+});

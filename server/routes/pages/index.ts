@@ -1,0 +1,117 @@
+import { Router } from 'express';
+import type { JSONContent } from '@tiptap/core';
+import { validateDoc } from '@shared/editor/schema.ts';
+import { DigestSchema, docBytes, PageCreateSchema, PageListQuerySchema, PageSaveSchema, type PageCreateInput, type PageListQuery, type PageSaveInput } from '@shared/schemas/page.ts';
+import { PageLimits } from '@shared/validations.ts';
+import { HttpError, ValidationError } from '../../errors.ts';
+import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
+import { validate } from '../../middlewares/validate.ts';
+import { PageRevision } from '../../models/index.ts';
+import { authorize } from '../../policies/index.ts';
+import { renderPublishedPage, renderWithLookups } from '../../services/page-render.ts';
+import { dashboardFor, setDigest } from '../../services/pages/page-dashboard.ts';
+import { loadPageDetail } from '../../services/pages/page-detail.ts';
+import { PageConflictError } from '../../services/pages/page-errors.ts';
+import { listPages } from '../../services/pages/page-list.ts';
+import { registerPageReactions } from '../../services/pages/page-reactions.ts';
+import { createPage, savePage } from '../../services/pages/page-save.ts';
+import { currentText, loadStatements } from '../../services/pages/page-statements.ts';
+import { findPage } from './load.ts';
+import { revisionsRouter } from './revisions.ts';
+import { workflowRouter } from './workflow.ts';
+import '../../services/pages/page-digest.ts';
+
+registerPageReactions();
+
+const tooLarge = () =>
+  new HttpError(413, 'page_too_large', `This page is larger than ${PageLimits.docMaxBytes / 1024 / 1024} MB and cannot be saved. Split it into shorter pages, or remove pasted material you do not need.`);
+
+/**
+ * Checks a document sent by a client: size first (before walking it), then the editor schema.
+ * @throws HttpError 413 too large, 400 not a valid page document
+ */
+export function checkedDoc(doc: unknown): JSONContent {
+  if (docBytes(doc) > PageLimits.docMaxBytes) throw tooLarge();
+  const result = validateDoc(doc);
+  if (!result.ok) throw ValidationError(result.message, { doc: result.message });
+  return doc as JSONContent;
+}
+
+export const pagesRouter = Router();
+pagesRouter.use(requireUser);
+
+pagesRouter.get('/', validate(PageListQuerySchema, 'query'), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'page', 'list');
+  const q = req.query as unknown as PageListQuery;
+  const { rows, total } = await listPages(q, viewer);
+  res.json({ data: rows, meta: { total, page: q.page, pageSize: q.pageSize } });
+});
+
+pagesRouter.post('/', validate(PageCreateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'page', 'create');
+  const page = await createPage(req.body as PageCreateInput, viewer);
+  res.status(201).json({ data: await loadPageDetail(page, viewer) });
+});
+
+pagesRouter.get('/dashboard', async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'page', 'list');
+  res.json({ data: await dashboardFor(viewer) });
+});
+
+pagesRouter.put('/digest', validate(DigestSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  await setDigest(viewer.id, (req.body as { enabled: boolean }).enabled);
+  res.json({ data: { digest: (req.body as { enabled: boolean }).enabled } });
+});
+
+pagesRouter.get('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(req.params.id);
+  authorize(viewer, 'page', 'read', page);
+  res.json({ data: await loadPageDetail(page, viewer) });
+});
+
+/** Autosave: the version the writer started from must still be the server's, else 409 with the server's version. */
+pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(req.params.id);
+  authorize(viewer, 'page', 'edit', page);
+  const input = req.body as PageSaveInput;
+  const doc = checkedDoc(input.doc);
+  try {
+    const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);
+    res.json({ data: await loadPageDetail(saved, viewer), meta: { saved: changed } });
+  } catch (error) {
+    if (!(error instanceof PageConflictError)) throw error;
+    // The error shape, plus the server's version so the client can show both side by side.
+    res.status(409).json({ error: { code: error.code, message: error.message }, current: error.current });
+  }
+});
+
+/** The working copy rendered as the public would see it, with each statement's current wording. */
+pagesRouter.get('/:id/preview', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(req.params.id);
+  authorize(viewer, 'page', 'read', page);
+  const revision = (await PageRevision.findByPk(page.currentRevisionId!))!;
+  const statements = await loadStatements(revision.statementIds);
+  const html = await renderWithLookups(revision.doc, revision.mediaIds, (id) => {
+    const s = statements.get(id)?.statement;
+    return s ? currentText(s, page.locale) : null;
+  });
+  res.json({ data: { title: revision.title, html, revisionNumber: revision.number } });
+});
+
+/** What the public sees now: the published version, unchanged by later edits or recomputes. */
+pagesRouter.get('/:id/published', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(req.params.id);
+  authorize(viewer, 'page', 'read', page);
+  res.json({ data: await renderPublishedPage(page.id) });
+});
+
+pagesRouter.use('/:id', workflowRouter);
+pagesRouter.use('/:id/revisions', revisionsRouter);

@@ -1,0 +1,80 @@
+import { Router } from 'express';
+import { DiffQuerySchema, RestoreSchema, type PageRevisionDto } from '@shared/schemas/page.ts';
+import { NotFoundError } from '../../errors.ts';
+import { currentUser } from '../../middlewares/authenticate.ts';
+import { validate } from '../../middlewares/validate.ts';
+import { PageRevision, User, type Page } from '../../models/index.ts';
+import { authorize } from '../../policies/index.ts';
+import { loadPageDetail } from '../../services/pages/page-detail.ts';
+import { diffRevisions } from '../../services/pages/page-diff.ts';
+import { PageConflictError } from '../../services/pages/page-errors.ts';
+import { savePage } from '../../services/pages/page-save.ts';
+import { loadStatements } from '../../services/pages/page-statements.ts';
+import { findPage } from './load.ts';
+
+/** A page's saved versions (mounted under /api/pages/:id/revisions). */
+export const revisionsRouter = Router({ mergeParams: true });
+
+const pageParam = (req: { params: object }) => (req.params as Record<string, string>).id;
+
+async function revisionOf(page: Page, number: unknown): Promise<PageRevision> {
+  const n = Number(number);
+  const revision = Number.isInteger(n) && n > 0 ? await PageRevision.findOne({ where: { pageId: page.id, number: n } }) : null;
+  if (!revision) throw NotFoundError(`This page has no revision ${String(number)}.`);
+  return revision;
+}
+
+revisionsRouter.get('/', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(pageParam(req));
+  authorize(viewer, 'page', 'read', page);
+  const revisions = await PageRevision.findAll({ where: { pageId: page.id }, attributes: ['id', 'number', 'title', 'authorId', 'createdAt', 'restoredFrom'], order: [['number', 'DESC']] });
+  const authors = new Map((await User.findAll({ attributes: ['id', 'name'], where: { id: [...new Set(revisions.map((r) => r.authorId).filter((x): x is string => !!x))] } })).map((u) => [u.id, u.name]));
+  const data: PageRevisionDto[] = revisions.map((r) => ({
+    id: r.id,
+    number: r.number,
+    title: r.title,
+    author: r.authorId ? (authors.get(r.authorId) ?? null) : null,
+    createdAt: r.createdAt.toISOString(),
+    restoredFrom: r.restoredFrom ?? null,
+    marks: [
+      ...(r.id === page.currentRevisionId ? (['current'] as const) : []),
+      ...(r.id === page.approvedRevisionId ? (['approved'] as const) : []),
+      ...(r.id === page.publishedRevisionId ? (['published'] as const) : []),
+    ],
+  }));
+  res.json({ data });
+});
+
+revisionsRouter.get('/diff', validate(DiffQuerySchema, 'query'), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(pageParam(req));
+  authorize(viewer, 'page', 'read', page);
+  const { from, to } = req.query as unknown as { from: number; to: number };
+  const [a, b] = await Promise.all([revisionOf(page, from), revisionOf(page, to)]);
+  const statements = await loadStatements([...new Set([...a.statementIds, ...b.statementIds])]);
+  res.json({ data: diffRevisions(a, b, (id) => statements.get(id)?.templateTitle ?? 'statement') });
+});
+
+revisionsRouter.get('/:number', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(pageParam(req));
+  authorize(viewer, 'page', 'read', page);
+  const r = await revisionOf(page, req.params.number);
+  res.json({ data: { id: r.id, number: r.number, title: r.title, doc: r.doc, createdAt: r.createdAt.toISOString() } });
+});
+
+/** Restores an old revision as a new one; history is never rewritten. */
+revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(pageParam(req));
+  authorize(viewer, 'page', 'edit', page);
+  const r = await revisionOf(page, req.params.number);
+  try {
+    const { page: saved } = await savePage(page.id, { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number }, viewer);
+    res.json({ data: await loadPageDetail(saved, viewer) });
+  } catch (error) {
+    if (!(error instanceof PageConflictError)) throw error;
+    res.status(409).json({ error: { code: error.code, message: error.message }, current: error.current });
+  }
+});

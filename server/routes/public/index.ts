@@ -1,0 +1,77 @@
+import { Router, type RequestHandler } from 'express';
+import { rateLimit } from 'express-rate-limit';
+import { config } from '../../config.ts';
+import { HttpError, NotFoundError } from '../../errors.ts';
+import { sendCached } from '../../middlewares/http-cache.ts';
+import { atomDocument } from '../../services/public-atom.ts';
+import { getPublicPages, prepare } from '../../services/public-pages.ts';
+
+/**
+ * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
+ * taken down leaves the venue's website within that minute; kiosks revalidate every time.
+ */
+export const PUBLIC_CACHE_CONTROL = 'public, max-age=60, must-revalidate';
+const PUBLISHER = process.env.STARPROOF_PUBLISHER_NAME ?? 'Starproof';
+
+const limiter = rateLimit({
+  windowMs: 60_000,
+  limit: Number(process.env.STARPROOF_PUBLIC_LIMIT ?? 300),
+  standardHeaders: 'draft-8',
+  legacyHeaders: false,
+  handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many requests to the public API from this address. Wait a minute and try again.')),
+});
+
+/** Open CORS for reading only: any website may GET; no cookies are honoured across sites. */
+const cors: RequestHandler = (req, res, next) => {
+  res.set({
+    'Access-Control-Allow-Origin': '*',
+    'Access-Control-Allow-Methods': 'GET, HEAD, OPTIONS',
+    'Access-Control-Allow-Headers': 'If-None-Match, Accept',
+    'Access-Control-Expose-Headers': 'ETag, RateLimit, RateLimit-Policy, Retry-After',
+    'Access-Control-Max-Age': '86400',
+    'Cross-Origin-Resource-Policy': 'cross-origin',
+  });
+  if (req.method === 'OPTIONS') {
+    res.status(204).end();
+    return;
+  }
+  if (req.method !== 'GET' && req.method !== 'HEAD') {
+    res.set('Allow', 'GET, HEAD, OPTIONS');
+    next(new HttpError(405, 'method_not_allowed', 'The public API is read-only.'));
+    return;
+  }
+  next();
+};
+
+/** Links in Atom must be absolute: PUBLIC_URL when set, else the address the request came to. */
+const baseUrlOf = (req: Parameters<RequestHandler>[0]) => (config.publicUrl ?? `${req.protocol}://${req.get('host') ?? `${config.host}:${config.port}`}`).replace(/\/+$/, '');
+
+/** GET /api/public/…: published pages for the venue's website, read-only and without sign-in. */
+export const publicRouter = Router();
+publicRouter.use(cors, limiter);
+
+publicRouter.get('/pages', async (req, res) => {
+  const { list } = await getPublicPages();
+  sendCached(req, res, list.body, list.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
+});
+
+publicRouter.get('/pages.atom', async (req, res) => {
+  const published = await getPublicPages();
+  const base = baseUrlOf(req);
+  let doc = published.atom.get(base);
+  if (!doc) {
+    // A few hosts at most (the site's names); a flood of made-up Host headers cannot grow this without bound.
+    if (published.atom.size >= 8) published.atom.clear();
+    doc = prepare(atomDocument(published.pages, base, PUBLISHER));
+    published.atom.set(base, doc);
+  }
+  sendCached(req, res, doc.body, doc.etag, 'application/atom+xml; charset=utf-8', PUBLIC_CACHE_CONTROL);
+});
+
+publicRouter.get('/pages/:slugOrId', async (req, res) => {
+  const found = (await getPublicPages()).bySlugOrId.get(String(req.params.slugOrId).toLowerCase());
+  if (!found) throw NotFoundError('There is no published page with this name or id.');
+  sendCached(req, res, found.body, found.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
+});
+
+publicRouter.use((req, _res, next) => next(NotFoundError(`There is no public API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`)));

@@ -1,0 +1,99 @@
+import { Router } from 'express';
+import { IdSchema } from '@shared/schemas/common.ts';
+import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema, type SkyQuery, type VenueCreateValues, type VenueUpdateValues } from '@shared/schemas/venue.ts';
+import { SkyInputError } from '@shared/sky/errors.ts';
+import { nightDateAt } from '@shared/sky/time-zone.ts';
+import { computeSkyTonight } from '@shared/sky/tonight.ts';
+import { getSequelize } from '../db.ts';
+import { ValidationError } from '../errors.ts';
+import { currentUser, requireUser } from '../middlewares/authenticate.ts';
+import { validate } from '../middlewares/validate.ts';
+import { KioskScreen, Venue } from '../models/index.ts';
+import { authorize } from '../policies/index.ts';
+import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
+import { presentVenue } from '../presenters/venue.ts';
+import { getSkySnapshot } from '../services/sky-snapshots.ts';
+import { createVenue, deleteVenue, updateVenue } from '../services/venue-save.ts';
+import { venueScreensRouter } from './venue-screens.ts';
+
+/** Loads a venue by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
+export async function findVenue(id: string): Promise<Venue | null> {
+  return IdSchema.safeParse(id).success ? Venue.findByPk(id) : null;
+}
+
+async function screenCounts(): Promise<Map<string, number>> {
+  const rows = (await KioskScreen.findAll({
+    attributes: ['venueId', [getSequelize().fn('count', getSequelize().col('id')), 'count']],
+    group: ['venueId'],
+    raw: true,
+  })) as unknown as Array<{ venueId: string; count: string }>;
+  return new Map(rows.map((r) => [r.venueId, Number(r.count)]));
+}
+
+export const venuesRouter = Router();
+venuesRouter.use(requireUser);
+
+venuesRouter.get('/', async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'venue', 'list');
+  const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), screenCounts()]);
+  res.json({ data: venues.map((v) => presentVenue(v, viewer, counts.get(v.id) ?? 0)) });
+});
+
+venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  authorize(viewer, 'venue', 'create');
+  const venue = await createVenue(req.body as VenueCreateValues, viewer, req.ip);
+  res.status(201).json({ data: presentVenue(venue, viewer, 0) });
+});
+
+venuesRouter.get('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await findVenue(String(req.params.id));
+  authorize(viewer, 'venue', 'read', venue);
+  res.json({ data: presentVenue(venue, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+});
+
+venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await findVenue(String(req.params.id));
+  authorize(viewer, 'venue', 'update', venue);
+  const updated = await updateVenue(venue, req.body as VenueUpdateValues, viewer, req.ip);
+  res.json({ data: presentVenue(updated, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+});
+
+venuesRouter.delete('/:id', async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await findVenue(String(req.params.id));
+  authorize(viewer, 'venue', 'delete', venue);
+  await deleteVenue(venue, viewer, req.ip);
+  res.status(204).end();
+});
+
+/** The sky for a night: the stored snapshot, or for a chosen clock time a fresh one that is not kept. */
+venuesRouter.get('/:id/sky', validate(SkyQuerySchema, 'query'), async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await findVenue(String(req.params.id));
+  authorize(viewer, 'venue', 'readSky', venue);
+  const query = req.query as SkyQuery;
+  const localDate = query.date ?? nightDateAt(Date.now(), venue.timeZone);
+  if (query.at) {
+    try {
+      const now = new Date();
+      const sky = computeSkyTonight({ latitude: venue.latitude, longitude: venue.longitude, elevationM: venue.elevationM, timeZone: venue.timeZone, localDate, observeAt: query.at, now });
+      return res.json({ data: presentSkySnapshot({ venueId: venue.id, localDate, computedAt: now, data: sky }, false) });
+    } catch (err) {
+      if (err instanceof SkyInputError) throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
+      throw err;
+    }
+  }
+  try {
+    const snapshot = await getSkySnapshot(venue.id, localDate);
+    res.json({ data: presentSkySnapshot(snapshot!) });
+  } catch (err) {
+    if (err instanceof SkyInputError) throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
+    throw err;
+  }
+});
+
+venuesRouter.use('/:venueId/screens', venueScreensRouter);

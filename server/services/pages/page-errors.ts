@@ -1,0 +1,31 @@
+import type { JSONContent } from '@tiptap/core';
+import { HttpError } from '../../errors.ts';
+
+/** What the server holds now, sent with a 409 so the writer can compare it with their own. */
+export interface ServerVersion {
+  version: number;
+  title: string;
+  doc: JSONContent;
+  revisionNumber: number;
+  savedBy: string | null;
+  savedAt: string;
+}
+
+/** A save against a stale version: someone else saved first. Nothing is overwritten. */
+export class PageConflictError extends HttpError {
+  constructor(readonly current: ServerVersion) {
+    super(
+      409,
+      'page_changed',
+      `${current.savedBy ?? 'Someone'} saved this page while you were editing (now revision ${current.revisionNumber}). Your text is kept: compare both versions and choose what to keep.`,
+    );
+  }
+}
+
+/** The page's state does not allow the step; the message says why and what to do. */
+export const WorkflowError = (message: string, code = 'page_state') => new HttpError(409, code, message);
+
+/** Refused at submission or approval, with every problem listed. */
+export function ChecksFailedError(what: string, problems: string[]): HttpError {
+  return new HttpError(422, 'page_checks_failed', `${what}: ${problems.join(' ')}`);
+}

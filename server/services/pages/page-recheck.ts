@@ -1,0 +1,58 @@
+import { Op, QueryTypes } from 'sequelize';
+import { getSequelize } from '../../db.ts';
+import { defineJob } from '../../jobs/queue.ts';
+import { logger } from '../../logger.ts';
+import { pageRecheckMail } from '../../mail/page-templates.ts';
+import { Page, Statement } from '../../models/index.ts';
+import { recordAudit } from '../audit.ts';
+import { currentText } from './page-statements.ts';
+import { activeUsers, deliver } from './page-mail.ts';
+
+/**
+ * Sends approved and published pages that use any of these statements to "needs re-check" when
+ * the wording in the page's language moved away from the wording signed off (or the statement can
+ * no longer be worked out). The published version stays live and unchanged. Mails the writer and
+ * the reviewer who last signed the page off.
+ * @param statementIds statements whose public text changed or broke
+ * @returns the ids of the pages sent to re-check
+ */
+export async function markPagesForRecheck(statementIds: string[]): Promise<string[]> {
+  if (!statementIds.length) return [];
+  const rows = await getSequelize().query<{ id: string }>(
+    `SELECT p.id FROM pages p JOIN page_revisions r ON r.id = p.approved_revision_id
+      WHERE p.status IN ('approved', 'published') AND r.statement_ids && ARRAY[:ids]::uuid[]`,
+    { replacements: { ids: statementIds }, type: QueryTypes.SELECT },
+  );
+  const statements = new Map((await Statement.findAll({ where: { id: { [Op.in]: statementIds } } })).map((s) => [s.id, s]));
+  const marked: string[] = [];
+  for (const { id } of rows) {
+    const result = await getSequelize().transaction(async (transaction) => {
+      const page = await Page.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!page || (page.status !== 'approved' && page.status !== 'published') || !page.approvedSnapshot) return null;
+      const signed = page.approvedSnapshot.statementTexts;
+      const moved = statementIds.filter((sid) => {
+        const s = statements.get(sid);
+        if (!(sid in signed) || !s) return false;
+        return s.status === 'broken' || currentText(s, page.locale) !== signed[sid];
+      });
+      if (!moved.length) return null;
+      const from = page.status;
+      page.set({ status: 'needs_recheck', recheckStatementIds: [...new Set([...page.recheckStatementIds, ...moved])] });
+      await page.save({ transaction });
+      const changes = moved.map((sid) => ({ statementId: sid, oldText: signed[sid] ?? null, newText: statements.get(sid)!.status === 'broken' ? null : currentText(statements.get(sid)!, page.locale) }));
+      await recordAudit({ actorId: null, action: 'page.needs_recheck', subjectType: 'page', subjectId: page.id, data: { from, changes } }, transaction);
+      return { page, changes, live: !!page.publishedSnapshot };
+    });
+    if (!result) continue;
+    marked.push(id);
+    const people = await activeUsers([result.page.writerId, result.page.lastReviewerId]);
+    await deliver(people.map((u) => pageRecheckMail(u.email, u.name, result.page, result.changes, result.live)));
+  }
+  return marked;
+}
+
+/** The background job behind statement events: look for pages that need a re-check. */
+export const enqueuePageRecheck = defineJob<{ statementIds: string[] }>('pages.recheck', async ({ statementIds }) => {
+  const marked = await markPagesForRecheck(statementIds);
+  if (marked.length) logger.info({ pages: marked.length }, 'pages sent to re-check');
+});

@@ -1,0 +1,70 @@
+/**
+ * A quantity's 68 % interval: Monte Carlo over its inputs (and H0, when a range is given),
+ * each draw running the quantity's lean numeric path on slot-numbered inputs. The working is
+ * built once, elsewhere, from the nominal values; draws keep none.
+ */
+import type { ModelView } from './quantities/context.ts';
+import type { QuantitySpec } from './quantities/registry.ts';
+import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
+import { propagate, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+
+/** The name under which an H0 range is varied. */
+export const H0_KEY = 'H0';
+
+/** Where each input is defined, to say which input pushed a Monte Carlo draw out of range. */
+const DOMAIN: Record<string, (x: number) => boolean> = {
+  z: (x) => x > -1,
+  parallax_mas: (x) => x > 0,
+  lookback_gyr: (x) => x > 0,
+  distance_mpc: (x) => x > 0,
+  distance_1: (x) => x > 0,
+  distance_2: (x) => x > 0,
+  extinction: (x) => x >= 0,
+  [H0_KEY]: (x) => x > 0,
+};
+
+// One slot buffer for every run (a fresh 104-byte typed array would live outside the JavaScript
+// heap and cost a garbage-collection finaliser per request). Runs never nest: draws do not calculate.
+const DRAW = new Float64Array(SLOT_NAMES.length);
+
+const isVaried = (m: Measurement): boolean => m.minus > 0 || m.plus > 0;
+
+/**
+ * Runs the Monte Carlo for one request.
+ * @param spec the quantity
+ * @param all the request's measured inputs, plus H0 when an H0 range is given (in request order)
+ * @param view the resolved model
+ * @param band the request's band, if any
+ * @param present names of the inputs given
+ * @returns the outcome: interval, draws kept, failures by input
+ */
+export function quantityInterval(spec: QuantitySpec, all: Record<string, Measurement>, view: ModelView, band: string | undefined, present: Set<string>): MonteCarloOutcome {
+  const names = Object.keys(all);
+  const env = sampleEnv(view, band, names);
+  const x = DRAW.fill(NaN);
+  for (const k of names) x[slotOf(k)] = all[k].value;
+  const varied = names.filter((k) => isVaried(all[k]));
+  const blame = (x: Float64Array): string => names.find((k) => DOMAIN[k] && !DOMAIN[k](x[slotOf(k)])) ?? varied[0] ?? 'z';
+  const problem = { x, varied: varied.map((k) => ({ slot: slotOf(k), m: all[k] })), blame };
+  if (spec.monotoneInZ && varied.length === 1 && varied[0] === 'z') {
+    // The percentiles of a monotonic function of z are the function at z's percentiles: draw z alone.
+    const at = (z: number): number => {
+      x[Z] = z;
+      return spec.sample(env, x);
+    };
+    return propagate({ ...problem, f: (x) => x[Z], last: { map: at, decreasing: spec.monotoneInZ === 'decreasing' } });
+  }
+  const varyH0 = varied.includes(H0_KEY);
+  const split = spec.split?.applies(present) ? spec.split : undefined;
+  const draw = split ? split.before : spec.sample;
+  return propagate({
+    ...problem,
+    f: (x) => {
+      const scale = varyH0 ? x[H0_SLOT] / view.H0 : 1;
+      if (!(scale > 0)) return NaN;
+      env.h0Scale = scale;
+      return draw(env, x);
+    },
+    last: split ? { map: (M) => split.last(env, M), decreasing: split.decreasing } : undefined,
+  });
+}

@@ -1,0 +1,116 @@
+/**
+ * Percentiles of Monte Carlo draws without a full sort: quickselect (Hoare partition with a
+ * median-of-three pivot, after Press et al., Numerical Recipes, `select`) finds the two order
+ * statistics each percentile interpolates between in linear time. The values returned are exactly
+ * those a sort would put at the same positions, so intervals do not move.
+ */
+
+function swap(a: Float64Array, i: number, j: number): void {
+  const t = a[i];
+  a[i] = a[j];
+  a[j] = t;
+}
+
+/**
+ * Rearranges a[lo..hi] so that a[k] holds the value a sort would put there, with nothing larger
+ * before it and nothing smaller after it.
+ * @param a the data (reordered in place)
+ * @param k the position wanted, lo ≤ k ≤ hi
+ * @param lo first index of the range
+ * @param hi last index of the range
+ * @returns a[k]
+ */
+export function selectInPlace(a: Float64Array, k: number, lo: number, hi: number): number {
+  let l = lo;
+  let ir = hi;
+  for (;;) {
+    if (ir <= l + 1) {
+      if (ir === l + 1 && a[ir] < a[l]) swap(a, l, ir);
+      return a[k];
+    }
+    const mid = (l + ir) >>> 1;
+    swap(a, mid, l + 1);
+    if (a[l] > a[ir]) swap(a, l, ir);
+    if (a[l + 1] > a[ir]) swap(a, l + 1, ir);
+    if (a[l] > a[l + 1]) swap(a, l, l + 1);
+    // a[l] ≤ pivot ≤ a[ir] act as sentinels, so the scans need no bounds checks.
+    const pivot = a[l + 1];
+    let i = l + 1;
+    let j = ir;
+    for (;;) {
+      do i++;
+      while (a[i] < pivot);
+      do j--;
+      while (a[j] > pivot);
+      if (j < i) break;
+      swap(a, i, j);
+    }
+    a[l + 1] = a[j];
+    a[j] = pivot;
+    if (j >= k) ir = j - 1;
+    if (j <= k) l = i;
+  }
+}
+
+/** The smallest of a[lo..hi]. */
+function minOf(a: Float64Array, lo: number, hi: number): number {
+  let m = a[lo];
+  for (let i = lo + 1; i <= hi; i++) if (a[i] < m) m = a[i];
+  return m;
+}
+
+/** The largest of a[lo..hi]. */
+function maxOf(a: Float64Array, lo: number, hi: number): number {
+  let m = a[lo];
+  for (let i = lo + 1; i <= hi; i++) if (a[i] > m) m = a[i];
+  return m;
+}
+
+/** A monotonic last step applied to the draws: only the order statistics used need it. */
+export interface MonotoneMap {
+  map: (x: number) => number;
+  /** True when the map reverses order (the largest draw gives the smallest result). */
+  decreasing: boolean;
+}
+
+const IDENTITY: MonotoneMap = { map: (x) => x, decreasing: false };
+
+/**
+ * The p-quantile of map(a) by linear interpolation between order statistics, the same definition
+ * as `quantile` on the sorted mapped values. Because the map is monotonic, the k-th smallest
+ * mapped value is the map of the k-th smallest (or, decreasing, k-th largest) draw.
+ * @param a the draws (reordered in place), at least one value, no NaN
+ * @param p probability in [0, 1]
+ * @param last a monotonic map applied to the draws
+ * @param lo first index known to hold the wanted order statistic's rank (0 when nothing is known)
+ * @param hi last such index (a.length − 1 when nothing is known)
+ * @returns the quantile and the rank selected, which later selections may narrow to
+ */
+function quantileIn(a: Float64Array, p: number, last: MonotoneMap, lo: number, hi: number): { q: number; rank: number } {
+  const n = a.length;
+  const pos = p * (n - 1);
+  const i = Math.floor(pos);
+  const f = pos - i;
+  const rank = last.decreasing ? n - 1 - i : i;
+  const x = last.map(selectInPlace(a, rank, lo, hi));
+  if (i + 1 >= n) return { q: x, rank };
+  // After selection the draws on either side of `rank` are on the correct side of it, so the next
+  // order statistic is the nearest of them.
+  const y = last.map(last.decreasing ? maxOf(a, 0, rank - 1) : minOf(a, rank + 1, n - 1));
+  return { q: x * (1 - f) + y * f, rank };
+}
+
+/**
+ * The pLow and pHigh quantiles of map(a) (pLow ≤ pHigh), as `quantile` gives them on the sorted
+ * mapped values. The second selection searches only the part the first left on its side.
+ * @param a the draws (reordered in place), at least one value, no NaN
+ * @param pLow lower probability
+ * @param pHigh upper probability
+ * @param last a monotonic map applied to the draws (identity when omitted)
+ * @returns the two quantiles
+ */
+export function quantilePair(a: Float64Array, pLow: number, pHigh: number, last: MonotoneMap = IDENTITY): { low: number; high: number } {
+  const first = quantileIn(a, pLow, last, 0, a.length - 1);
+  const second = last.decreasing ? quantileIn(a, pHigh, last, 0, first.rank) : quantileIn(a, pHigh, last, first.rank, a.length - 1);
+  return { low: first.q, high: second.q };
+}

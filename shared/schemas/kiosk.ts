@@ -1,0 +1,76 @@
+import { z } from 'zod';
+import type { SkyTonight } from '../sky/types.ts';
+import { KioskLimits } from '../validations.ts';
+
+const screenName = z
+  .string({ message: 'Enter a name for the screen' })
+  .trim()
+  .min(1, 'Enter a name for the screen')
+  .max(KioskLimits.screenNameMax, `Screen names are at most ${KioskLimits.screenNameMax} characters`);
+
+export const ScreenCreateSchema = z.object({ name: screenName });
+export type ScreenCreateInput = z.infer<typeof ScreenCreateSchema>;
+
+/** The pairing code as typed on the player: letters and digits, dash and spaces optional. */
+export const KioskPairSchema = z.object({
+  code: z
+    .string({ message: 'Enter the pairing code shown to the admin' })
+    .transform((v) => v.toUpperCase().replace(/[\s-]/g, ''))
+    .pipe(z.string().regex(/^[A-Z0-9]{6}$/, 'A pairing code is six letters and digits, like K7Q-4M2')),
+});
+export type KioskPairInput = z.infer<typeof KioskPairSchema>;
+
+export const KioskHeartbeatSchema = z.object({
+  playerVersion: z.string().trim().max(KioskLimits.playerVersionMax, `The player version is at most ${KioskLimits.playerVersionMax} characters`).optional(),
+  showing: z
+    .record(z.string(), z.unknown())
+    .refine((v) => JSON.stringify(v).length <= KioskLimits.showingMaxBytes, `What is showing is at most ${KioskLimits.showingMaxBytes} characters of JSON`)
+    .optional(),
+  /** When given, must be this token's own screen. */
+  screenId: z.string().optional(),
+});
+export type KioskHeartbeatInput = z.infer<typeof KioskHeartbeatSchema>;
+
+/** How a screen is doing, as the admin list shows it. */
+export const SCREEN_HEALTH = ['online', 'offline', 'awaiting-pairing', 'never-seen', 'revoked'] as const;
+export type ScreenHealth = (typeof SCREEN_HEALTH)[number];
+
+/** A kiosk screen as the admin screens show it (never its token or code). */
+export interface KioskScreenDto {
+  id: string;
+  venueId: string;
+  name: string;
+  health: ScreenHealth;
+  paired: boolean;
+  pairingExpiresAt: string | null;
+  tokenIssuedAt: string | null;
+  revokedAt: string | null;
+  lastSeenAt: string | null;
+  playerVersion: string | null;
+  showing: Record<string, unknown> | null;
+  createdAt: string;
+}
+
+/** Returned once, when a pairing code is made. */
+export interface PairingCodeDto {
+  screen: KioskScreenDto;
+  /** Written like K7Q-4M2. Shown once; only its hash is stored. */
+  pairingCode: string;
+  expiresAt: string;
+}
+
+/** What the player receives when it pairs. */
+export interface KioskPairedDto {
+  token: string;
+  screen: { id: string; name: string; venueId: string; venueName: string };
+}
+
+/** A stored sky snapshot. */
+export interface SkySnapshotDto {
+  venueId: string;
+  localDate: string;
+  computedAt: string;
+  /** False when computed for a chosen time and not kept. */
+  stored: boolean;
+  sky: SkyTonight;
+}

@@ -1,0 +1,35 @@
+/** The read-only public API for a venue's website: published pages only, no sign-in. */
+
+export interface PublicStatementDto {
+  id: string;
+  /** The wording as signed off for publication. */
+  text: string;
+  /** When the figure was last accepted (or computed), ISO 8601. */
+  asOf: string;
+}
+
+export interface PublicImageDto {
+  id: string;
+  url: string | null;
+  altText: string;
+  credit: string;
+  licence: string;
+  licenceUrl: string | null;
+  sourceUrl: string;
+}
+
+export interface PublicPageDto {
+  id: string;
+  /** Stable while the title stays the same; either the slug or the id finds the page. */
+  slug: string;
+  title: string;
+  locale: string;
+  object: { id: string; name: string; kind: string };
+  /** The first paragraph as plain text. */
+  summary: string;
+  publishedAt: string | null;
+  /** Sanitized HTML of the published version, statements in their signed-off wording. */
+  html: string;
+  statements: PublicStatementDto[];
+  images: PublicImageDto[];
+}

@@ -1,0 +1,42 @@
+/** The Moon tonight: phase, illumination, place at the observation time and rise/transit/set. */
+import { parallax } from 'astronomia/moonposition';
+import { DEG } from './angles.ts';
+import { altitudeAt, eventsInWindow, type Trackable } from './body-track.ts';
+import { KM_PER_AU, type Ephemeris } from './ephemeris.ts';
+import { riseTransitSetTimes } from './events.ts';
+import type { Observer } from './horizon.ts';
+import { moonPhase } from './moon-phase.ts';
+import { moonStandardAltitude } from './rise-set.ts';
+import { placeFor, horizonState, type NightContext } from './sky-place.ts';
+import type { MoonTonight } from './types.ts';
+
+/** The Moon's equatorial horizontal parallax in degrees at a Julian Ephemeris Day. */
+const parallaxDegAt = (ephemeris: Ephemeris, jde: number) => parallax(ephemeris.moon(jde).distanceAu * KM_PER_AU) / DEG;
+
+/**
+ * The Moon's night. Rise and set use h0 = 0.7275π − 0°34′ with the day's parallax; the altitude
+ * shown is topocentric (the Moon's parallax lowers it by up to a degree).
+ */
+export function moonTonight(ephemeris: Ephemeris, observer: Observer, night: NightContext): MoonTonight {
+  const track: Trackable = {
+    placeAt: (jde) => {
+      const p = ephemeris.moon(jde);
+      return { raDeg: p.ra / DEG, decDeg: p.dec / DEG };
+    },
+    h0Deg: (jd0) => moonStandardAltitude(parallaxDegAt(ephemeris, jd0)),
+  };
+  const events = eventsInWindow(observer, night.startMs, night.endMs, track);
+  const midH0 = moonStandardAltitude(parallaxDegAt(ephemeris, night.obsJde));
+  const state = horizonState(events, altitudeAt(observer, night.midMs, track).altitudeDeg, midH0);
+  const now = ephemeris.moon(night.obsJde);
+  const parallaxDeg = parallaxDegAt(ephemeris, night.obsJde);
+  // Topocentric altitude compared with the refraction-only part of h0 (parallax is already applied).
+  const place = placeFor(now, observer, night.obs.ms, -0.5667 - 0.2725 * parallaxDeg, parallaxDeg);
+  const phase = moonPhase(now, night.sunAtObs);
+  return {
+    ...place,
+    ...phase,
+    distanceKm: now.distanceAu * KM_PER_AU,
+    times: riseTransitSetTimes(events, state, night.timeZone, night.localDate),
+  };
+}

@@ -1,0 +1,123 @@
+/**
+ * The sky tonight for one venue and date, as stored in a snapshot and sent to the staff screens:
+ * plain JSON, numbers with their units in the field names, and words for every case a time
+ * cannot describe (a body that never sets, a night that never gets dark).
+ */
+import type { CompassPoint } from './angles.ts';
+import type { PlanetId } from './bodies.ts';
+
+/** A moment in the night, or the words for why there is none. */
+export interface SkyEvent {
+  /** ISO 8601 instant in UTC, or null when it does not happen in the window. */
+  utc: string | null;
+  /** Local date "YYYY-MM-DD" at the venue, or null. */
+  localDate: string | null;
+  /** Local clock time "HH:MM" at the venue, or null. */
+  localTime: string | null;
+  /** For a person: "21:14", "04:52 tomorrow", or why there is no time. */
+  text: string;
+}
+
+/** Which side of the horizon a body keeps during the window. */
+export type HorizonState = 'rises-and-sets' | 'always-up' | 'always-down';
+
+/** Rise, transit and set between noon on the date and noon the next day. */
+export interface RiseTransitSetTimes {
+  state: HorizonState;
+  rise: SkyEvent;
+  transit: SkyEvent;
+  set: SkyEvent;
+  /** One sentence, e.g. "Rises 19:02, highest 00:41 tomorrow, sets 06:20 tomorrow". */
+  summary: string;
+}
+
+/** Where a body is at the observation time. */
+export interface SkyPlace {
+  rightAscensionDeg: number;
+  declinationDeg: number;
+  /** "21h 04m 41s" */
+  rightAscensionText: string;
+  /** "−18° 53′ 17″" */
+  declinationText: string;
+  /** Geometric altitude of the centre, degrees (no refraction; topocentric for the Moon). */
+  altitudeDeg: number;
+  /** Degrees from north through east. */
+  azimuthDeg: number;
+  direction: CompassPoint;
+  /** Above the standard altitude used for rising and setting. */
+  aboveHorizon: boolean;
+}
+
+/** One planet tonight. */
+export interface PlanetTonight extends SkyPlace {
+  id: PlanetId;
+  name: string;
+  /** Above the horizon at some time between dusk and dawn. */
+  upAfterDusk: boolean;
+  /** Plain words on whether and when to look. */
+  visibility: string;
+  /** Angle from the Sun, degrees. */
+  elongationDeg: number;
+  /** Distance from the Earth's centre along the light's path, in astronomical units. */
+  distanceAu: number;
+  /** The same distance in kilometres. */
+  distanceKm: number;
+  /** How long its light takes to reach us, in seconds. */
+  lightTimeSeconds: number;
+  times: RiseTransitSetTimes;
+}
+
+/** The Moon tonight. */
+export interface MoonTonight extends SkyPlace {
+  /** "Waxing gibbous" and so on. */
+  phaseName: string;
+  /** Illuminated fraction of the disc, 0–1 (Meeus 48.1). */
+  illuminatedFraction: number;
+  /** Phase angle Sun–Moon–Earth, degrees (Meeus 48.2/48.3). */
+  phaseAngleDeg: number;
+  /** Moon's ecliptic longitude minus the Sun's, degrees [0, 360): under 180 waxing. */
+  elongationDeg: number;
+  waxing: boolean;
+  distanceKm: number;
+  times: RiseTransitSetTimes;
+}
+
+/** How dark the night gets. */
+export type DarknessKind = 'astronomical' | 'nautical' | 'civil' | 'twilight-all-night' | 'no-night' | 'dark-all-day';
+
+/** Sunset, sunrise and the three twilights. */
+export interface SunTonight {
+  sunset: SkyEvent;
+  sunrise: SkyEvent;
+  civilDusk: SkyEvent;
+  nauticalDusk: SkyEvent;
+  astronomicalDusk: SkyEvent;
+  astronomicalDawn: SkyEvent;
+  nauticalDawn: SkyEvent;
+  civilDawn: SkyEvent;
+  darkness: { kind: DarknessKind; text: string };
+}
+
+/** The moment the positions are given for. */
+export interface Observation extends SkyEvent {
+  basis: 'chosen' | 'nautical-dusk' | 'civil-dusk' | 'sunset' | 'sun-lowest';
+  /** Whether the Sun is below −6° then (planets can be seen). */
+  skyDark: boolean;
+}
+
+/** Everything the sky-tonight panel and slide show. */
+export interface SkyTonight {
+  version: 1;
+  localDate: string;
+  timeZone: string;
+  observer: { latitude: number; longitude: number; elevationM: number };
+  /** When this was computed (the caller's clock). */
+  computedAt: string;
+  /** Noon on the date to noon the next day, local time. */
+  window: { startUtc: string; endUtc: string };
+  observation: Observation;
+  sun: SunTonight;
+  moon: MoonTonight;
+  planets: PlanetTonight[];
+  method: { ephemeris: string; algorithms: string[]; notes: string[] };
+}

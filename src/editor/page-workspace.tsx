@@ -1,0 +1,152 @@
+import type { JSONContent } from '@tiptap/core';
+import { EditorContent, useEditor, useEditorState } from '@tiptap/react';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import type { PageDto } from '@shared/schemas/page.ts';
+import { Notice } from '@/components/ui/notice.tsx';
+import { ConflictView } from '@/features/pages/components/conflict-view.tsx';
+import { MediaPicker } from '@/features/pages/components/media-picker.tsx';
+import { NumberCheckPanel, type LiveFlag } from '@/features/pages/components/number-check-panel.tsx';
+import { StatementPicker } from '@/features/pages/components/statement-picker.tsx';
+import { StatementWorking } from '@/features/pages/components/statement-working.tsx';
+import { PageEditorContext } from './editor-context.tsx';
+import { clientExtensions } from './extensions.ts';
+import { dropLocalDraft, readLocalDraft, type LocalDraft } from './local-draft.ts';
+import { flagRanges, type FlagRange } from './number-flags.ts';
+import { cleanPastedHtml } from './paste-clean.ts';
+import { Toolbar } from './toolbar.tsx';
+import { SaveStatus } from './save-status.tsx';
+import { useAutosave } from './use-autosave.ts';
+import './editor.css';
+
+const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
+
+/** Handles a page's editor screen gives back to its header: save now, and the version saved. */
+export interface WorkspaceHandle {
+  flush: () => Promise<number>;
+}
+
+/**
+ * The writing desk: title, toolbar, the page in serif with live statements and the number check,
+ * autosave with a local copy, and a side column for flags, statements and their working.
+ */
+export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { page: PageDto; eyeSafetyNotice: string; onSaved: (page: PageDto) => void; handleRef: React.MutableRefObject<WorkspaceHandle | null> }) {
+  const [title, setTitle] = useState(page.title);
+  const titleRef = useRef(page.title);
+  const [picker, setPicker] = useState<{ replace?: FlagRange } | null>(null);
+  const [mediaPicker, setMediaPicker] = useState(false);
+  const [working, setWorking] = useState<string | null>(null);
+  const [restore, setRestore] = useState<LocalDraft | null>(null);
+  const editable = page.can.edit;
+  const autosaveRef = useRef<(() => void) | null>(null);
+
+  const editor = useEditor({
+    extensions: clientExtensions,
+    content: page.doc as JSONContent,
+    editable,
+    immediatelyRender: true,
+    editorProps: { attributes: { class: 'page-prose', 'aria-label': 'Page text', role: 'textbox', 'aria-multiline': 'true' }, transformPastedHTML: cleanPastedHtml },
+    onUpdate: () => autosaveRef.current?.(),
+  });
+  const read = useCallback(() => ({ title: titleRef.current, doc: editor.getJSON() }), [editor]);
+  const autosave = useAutosave({ pageId: page.id, version: page.version, read, onSaved });
+  autosaveRef.current = editable ? autosave.changed : null;
+  handleRef.current = { flush: autosave.flush };
+
+  // No update event: becoming read-only is not an edit to save.
+  useEffect(() => editor.setEditable(editable, false), [editor, editable]);
+
+  // A copy kept in this browser that the server never confirmed: restore it or offer a choice.
+  useEffect(() => {
+    const draft = readLocalDraft(page.id);
+    if (!draft || !editable) return;
+    if (same(draft.doc, page.doc) && draft.title === page.title) return dropLocalDraft(page.id);
+    if (draft.baseVersion === page.version) {
+      editor.commands.setContent(draft.doc);
+      titleRef.current = draft.title;
+      setTitle(draft.title);
+      autosave.changed();
+    } else setRestore(draft);
+    // Only when the page is first opened.
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [page.id]);
+
+  const ranges = useEditorState({ editor, selector: ({ editor: e }) => flagRanges(e.state.doc), equalityFn: same });
+  const flags: LiveFlag[] = useMemo(() => {
+    const resolved = new Map(page.flags.map((f) => [f.normalised, f.resolution]));
+    return (ranges ?? []).map((r) => ({ ...r, resolution: resolved.get(r.normalised) ?? null }));
+  }, [ranges, page.flags]);
+
+  const apply = (t: string, doc: JSONContent) => {
+    editor.commands.setContent(doc);
+    titleRef.current = t;
+    setTitle(t);
+  };
+
+  const insertStatement = (statementId: string) => {
+    const node = { type: 'statementRef', attrs: { statementId } };
+    const chain = editor.chain().focus();
+    if (picker?.replace) chain.insertContentAt({ from: picker.replace.from, to: picker.replace.to }, node).run();
+    else chain.insertContent(node).run();
+    setPicker(null);
+  };
+
+  const context = useMemo(() => ({ locale: page.locale, eyeSafetyNotice, openStatement: setWorking }), [page.locale, eyeSafetyNotice]);
+
+  return (
+    <PageEditorContext.Provider value={context}>
+      {restore && (
+        <div className="mb-6">
+          <ConflictView
+            message="This browser kept changes that were never saved, and the page has been saved since. Compare them and choose."
+            mine={restore}
+            theirs={{ title: page.title, doc: page.doc as JSONContent, by: page.revision.author }}
+            onKeepMine={() => { apply(restore.title, restore.doc); setRestore(null); autosave.changed(); }}
+            onTakeTheirs={() => { dropLocalDraft(page.id); setRestore(null); }}
+          />
+        </div>
+      )}
+      {autosave.conflict && (
+        <div className="mb-6">
+          <ConflictView
+            message={autosave.message ?? ''}
+            mine={autosave.conflict.mine}
+            theirs={{ title: autosave.conflict.theirs.title, doc: autosave.conflict.theirs.doc as JSONContent, by: autosave.conflict.theirs.revision.author }}
+            onKeepMine={() => autosave.resolve('mine', apply)}
+            onTakeTheirs={() => autosave.resolve('theirs', apply)}
+          />
+        </div>
+      )}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_18rem]">
+        <div className="min-w-0 space-y-3">
+          <label className="block">
+            <span className="sr-only">Title</span>
+            <input
+              value={title}
+              readOnly={!editable}
+              onChange={(e) => { titleRef.current = e.target.value; setTitle(e.target.value); autosave.changed(); }}
+              className="w-full border-0 border-b border-transparent bg-transparent font-serif text-3xl font-semibold text-ink focus:border-accent focus:outline-none"
+              aria-label="Title"
+            />
+          </label>
+          {editable && <Toolbar editor={editor} onStatement={() => setPicker({})} onImage={() => setMediaPicker(true)} />}
+          {!editable && <Notice tone="info">{page.status === 'in_review' ? 'This page is with the reviewers; it cannot be changed until it is sent back.' : 'You can read this page but not change it.'}</Notice>}
+          <div className={`rounded-b-lg border border-rule bg-panel ${editable ? 'border-t-0' : 'rounded-t-lg'}`}>
+            <EditorContent editor={editor} />
+          </div>
+        </div>
+        <div className="space-y-4">
+          <SaveStatus state={autosave.state} message={autosave.message} savedAt={autosave.savedAt} editable={editable} />
+          {picker && <StatementPicker defaultObject={page.object} replacing={picker.replace?.text} onPick={insertStatement} onClose={() => setPicker(null)} />}
+          {mediaPicker && <MediaPicker onPick={(mediaId) => { editor.chain().focus().insertContent({ type: 'mediaImage', attrs: { mediaId, caption: null } }).run(); setMediaPicker(false); }} onClose={() => setMediaPicker(false)} />}
+          {working && <StatementWorking id={working} locale={page.locale} onClose={() => setWorking(null)} />}
+          <NumberCheckPanel flags={flags} onConvert={editable ? (f) => setPicker({ replace: f }) : undefined} onShow={(f) => editor.chain().focus().setTextSelection({ from: f.from, to: f.to }).scrollIntoView().run()} />
+          {page.eyeSafety.required && (
+            <Notice tone={page.eyeSafety.present ? 'success' : 'warning'} title="Eye safety">
+              {page.eyeSafety.required}. {page.eyeSafety.present ? 'The notice is on the page.' : 'Add the eye-safety notice block before submitting.'}
+            </Notice>
+          )}
+        </div>
+      </div>
+    </PageEditorContext.Provider>
+  );
+}

@@ -1,0 +1,56 @@
+import { formatDeclination, formatRightAscension } from '@shared/catalogue/coordinates.ts';
+import { CONSTELLATION_NAMES } from '@shared/catalogue/constellations.ts';
+import { findQuantity, findUnit } from '@shared/catalogue/quantities.ts';
+import type { MeasurementDto } from '@shared/schemas/measurement.ts';
+
+/** A number as people read it: up to 6 significant figures, with a typographic minus. */
+export function formatNumber(value: number): string {
+  if (value === 0) return '0';
+  const abs = Math.abs(value);
+  const text = abs >= 1e7 || abs < 1e-4 ? value.toExponential(4).replace(/\.?0+e/, 'e') : String(Number(value.toPrecision(6)));
+  return text.replace('-', '−');
+}
+
+const unitLabel = (quantity: string, unit: string) => {
+  const q = findQuantity(quantity);
+  const u = q ? findUnit(q, unit) : undefined;
+  return u && u.id !== '' ? u.label : '';
+};
+
+/**
+ * A measurement in the unit it was entered in, with its uncertainty: "2.5 +0.3 −0.1 kpc", "0.158 ± 0.002".
+ */
+export function formatMeasurement(m: Pick<MeasurementDto, 'quantity' | 'value' | 'enteredValue' | 'enteredUnit' | 'uncertainty' | 'uncertaintyMinus' | 'uncertaintyPlus'>): string {
+  const q = findQuantity(m.quantity);
+  const factor = q ? (findUnit(q, m.enteredUnit)?.toCanonical ?? 1) : 1;
+  const unit = unitLabel(m.quantity, m.enteredUnit);
+  let text = formatNumber(m.enteredValue);
+  if (m.uncertainty !== null) text += ` ± ${formatNumber(m.uncertainty / factor)}`;
+  else if (m.uncertaintyMinus !== null && m.uncertaintyPlus !== null) text += ` +${formatNumber(m.uncertaintyPlus / factor)} −${formatNumber(m.uncertaintyMinus / factor)}`;
+  return unit ? `${text} ${unit}` : text;
+}
+
+/** "Apparent magnitude (V)" or "Redshift". */
+export function quantityTitle(quantity: string, band: string | null): string {
+  const label = findQuantity(quantity)?.label ?? quantity;
+  return band ? `${label} (${band})` : label;
+}
+
+/** Right ascension and declination in sexagesimal, or a note for bodies without a fixed position. */
+export function formatPosition(raDeg: number | null, decDeg: number | null): string {
+  if (raDeg === null || decDeg === null) return 'No fixed position';
+  return `${formatRightAscension(raDeg)}  ${formatDeclination(decDeg)}`;
+}
+
+/** "Orion (Ori)". */
+export const constellationName = (abbreviation: string | null) => (abbreviation ? `${CONSTELLATION_NAMES[abbreviation] ?? abbreviation} (${abbreviation})` : '—');
+
+/** A link for a source: DOI first, then the ADS record for a bibcode, then its URL. */
+export function sourceHref(source: { doi: string | null; bibcode: string | null; url: string | null }): string | null {
+  if (source.doi) return `https://doi.org/${source.doi}`;
+  if (source.bibcode) return `https://ui.adsabs.harvard.edu/abs/${encodeURIComponent(source.bibcode)}`;
+  return source.url;
+}
+
+const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+export const formatDateTime = (iso: string) => dateTime.format(new Date(iso));

@@ -1,0 +1,49 @@
+import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { StatementCreateInput, StatementDto, StatementStatusValue, StatementTemplateDto } from '@shared/schemas/statement.ts';
+import { api, type ApiData } from '@/lib/api-client.ts';
+
+export interface StatementFilters {
+  status?: StatementStatusValue;
+  objectId?: string;
+  templateId?: string;
+  page?: number;
+}
+
+type StatementPage = { data: StatementDto[]; meta: { total: number; page: number; pageSize: number } };
+
+const toQuery = (f: StatementFilters) => {
+  const params = new URLSearchParams();
+  for (const [k, v] of Object.entries(f)) if (v !== undefined && v !== '') params.set(k, String(v));
+  const s = params.toString();
+  return s ? `?${s}` : '';
+};
+
+export const statementsQueryOptions = (filters: StatementFilters) =>
+  queryOptions({ queryKey: ['statements', 'list', filters], queryFn: () => api.get<StatementPage>(`/statements${toQuery(filters)}`), placeholderData: keepPreviousData });
+
+export const useStatements = (filters: StatementFilters) => useQuery(statementsQueryOptions(filters));
+
+export const statementQueryOptions = (id: string) =>
+  queryOptions({ queryKey: ['statements', 'one', id], queryFn: async () => (await api.get<ApiData<StatementDto>>(`/statements/${id}`)).data });
+
+export const useStatement = (id: string) => useQuery(statementQueryOptions(id));
+
+export const statementTemplatesQueryOptions = () =>
+  queryOptions({ queryKey: ['statement-templates'], queryFn: async () => (await api.get<ApiData<StatementTemplateDto[]>>('/statement-templates')).data, staleTime: Infinity });
+
+export const useStatementTemplates = () => useQuery(statementTemplatesQueryOptions());
+
+function useStatementMutation<T>(fn: (arg: T) => Promise<StatementDto>) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: (statement) => {
+      queryClient.setQueryData(statementQueryOptions(statement.id).queryKey, statement);
+      void queryClient.invalidateQueries({ queryKey: ['statements', 'list'] });
+    },
+  });
+}
+
+export const useCreateStatement = () => useStatementMutation(async (input: StatementCreateInput) => (await api.post<ApiData<StatementDto>>('/statements', input)).data);
+export const useAcceptStatement = () => useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/accept`)).data);
+export const useRecomputeStatement = () => useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/recompute`)).data);

@@ -1,0 +1,55 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { Button } from '@/components/ui/button.tsx';
+import { SelectField } from '@/components/ui/field.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { paths } from '@/config/paths.ts';
+import { useCreateStatement, useStatements, useStatementTemplates } from '../api/statements.ts';
+import { StatusBadge } from './status-badge.tsx';
+
+/** An object's checked statements, and a picker to add one from a template. */
+export function ObjectStatements({ objectId }: { objectId: string }) {
+  const statements = useStatements({ objectId });
+  const templates = useStatementTemplates();
+  const create = useCreateStatement();
+  const [templateId, setTemplateId] = useState('');
+  const existing = new Set(statements.data?.data.map((s) => s.template.id));
+  const available = templates.data?.filter((t) => !existing.has(t.id)) ?? [];
+
+  return (
+    <section aria-labelledby="object-statements-heading" className="space-y-3">
+      <h2 id="object-statements-heading" className="text-lg font-semibold tracking-tight">Checked statements</h2>
+      {statements.data && statements.data.data.length === 0 && <p className="text-sm text-muted">No statements about this object yet.</p>}
+      <ul className="space-y-2">
+        {statements.data?.data.map((s) => (
+          <li key={s.id} className="rounded-lg border border-rule bg-panel px-4 py-3">
+            <Link to={paths.statement.href(s.id)} className="font-serif text-[16px] leading-snug hover:text-accent hover:underline">{s.texts?.['en-GB'] ?? s.template.title}</Link>
+            <div className="mt-1 flex items-center gap-2 text-xs text-muted">
+              <StatusBadge status={s.status} />
+              {s.template.title}
+            </div>
+          </li>
+        ))}
+      </ul>
+      {available.length > 0 && (
+        <form
+          className="flex flex-wrap items-end gap-3"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (templateId) create.mutate({ objectId, templateId }, { onSuccess: () => setTemplateId('') });
+          }}
+        >
+          <SelectField label="Add a statement" value={templateId} onChange={(e) => { setTemplateId(e.target.value); create.reset(); }} className="min-w-80">
+            <option value="">Choose a template…</option>
+            {available.map((t) => (
+              <option key={t.id} value={t.id}>{t.title}</option>
+            ))}
+          </SelectField>
+          <Button type="submit" disabled={!templateId} busy={create.isPending}>Work it out</Button>
+        </form>
+      )}
+      {templateId && <p className="text-xs text-muted">Needs {available.find((t) => t.id === templateId)?.needs}.</p>}
+      {create.error && <Notice tone="error">{create.error.message}</Notice>}
+    </section>
+  );
+}

@@ -1,0 +1,46 @@
+import { describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNTS } from '../../server/demo/accounts.ts';
+import { openBrowser, screenshot, signInThroughForm } from '../support/browser.ts';
+
+const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
+
+describe('checked statements in the browser', () => {
+  it('a reviewer reads a statement’s wording, inputs and working', async () => {
+    const { page, errors, baseUrl } = await openBrowser();
+    await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
+    await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Statements' }).click();
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe('Statements');
+    await page.getByRole('link', { name: /TON 618 set out about/ }).first().click();
+    await expect.poll(() => page.getByRole('heading', { name: 'Public wording' }).count()).toBe(1);
+    await expect.poll(() => page.getByText('Worked out with the Planck 2018').count()).toBeGreaterThan(0);
+    await expect.poll(() => page.getByRole('heading', { name: 'Working' }).count()).toBe(1);
+    await expect.poll(() => page.getByText('Public wording: round to what the data supports').count()).toBeGreaterThan(0);
+    await screenshot(page, 'statement-detail');
+    expect(errors).toEqual([]);
+  });
+
+  it('an admin previews a cosmology change side by side, switches, and a reviewer accepts a changed statement', async () => {
+    const { page, errors, baseUrl } = await openBrowser();
+    await signInThroughForm(page, baseUrl, account('admin').email, account('admin').password);
+    await page.getByRole('link', { name: 'Organisation' }).click();
+    await page.getByLabel('Model').selectOption('wmap9');
+    await page.getByRole('button', { name: 'Preview the change' }).click();
+    await expect.poll(() => page.getByRole('columnheader', { name: 'After the change' }).count()).toBe(1);
+    await screenshot(page, 'cosmology-preview');
+    await page.getByRole('button', { name: /Switch to WMAP/ }).click();
+    await expect.poll(() => page.getByText(/Switched\. Every statement is being recomputed/).count()).toBe(1);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/sign-in/);
+
+    await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
+    await page.goto(`${baseUrl}/statements?status=changed`);
+    const first = page.getByRole('link', { name: /TON 618/ }).first();
+    await expect.poll(() => first.count(), { timeout: 30_000, interval: 1000 }).toBeGreaterThan(0);
+    await first.click();
+    await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBeGreaterThan(0);
+    await screenshot(page, 'statement-changed');
+    await page.getByRole('button', { name: 'Accept new wording' }).click();
+    await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBe(0);
+    expect(errors).toEqual([]);
+  });
+});
