@@ -3,6 +3,7 @@ import { fileURLToPath, URL } from 'node:url';
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
+import { kioskSizeReport } from './tests/bench/kiosk-size.ts';
 
 const alias = {
   '@': fileURLToPath(new URL('./src', import.meta.url)),
@@ -11,9 +12,15 @@ const alias = {
 };
 
 export default defineConfig({
-  plugins: [react(), tailwindcss()],
+  plugins: [react(), tailwindcss(), kioskSizeReport()],
   resolve: { alias },
-  build: { outDir: process.env.STARPROOF_DIST_DIR ?? 'dist', emptyOutDir: true, sourcemap: false },
+  build: {
+    outDir: process.env.STARPROOF_DIST_DIR ?? 'dist',
+    emptyOutDir: true,
+    sourcemap: false,
+    // The kiosk player is its own light entry: no router, no query library, no editor.
+    rollupOptions: { input: { main: fileURLToPath(new URL('./index.html', import.meta.url)), kiosk: fileURLToPath(new URL('./kiosk.html', import.meta.url)) } },
+  },
   server: { port: 5173, proxy: { '/api': 'http://127.0.0.1:4780' } },
   test: {
     projects: [

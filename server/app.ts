@@ -11,6 +11,7 @@ import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
+import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
 import { registerStatementTriggers } from './services/statements/triggers.ts';
 import { sessionMiddleware } from './session.ts';
@@ -63,6 +64,7 @@ function serveClient(app: express.Express) {
   if (!fs.existsSync(indexHtml)) throw new Error('The client is not built: run `npm run build` first.');
   app.use('/assets', express.static(path.join(dist, 'assets'), { immutable: true, maxAge: '365d', fallthrough: false }));
   app.use(express.static(dist, { index: false, maxAge: '1h' }));
+  app.get('/kiosk', kioskPage(dist));
   app.get('/{*splat}', (_req, res) => {
     res.set('Cache-Control', 'no-cache');
     // `dotfiles: 'allow'`: the build folder may itself sit under a dot folder (e.g. .data/dist-…).

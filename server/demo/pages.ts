@@ -27,19 +27,31 @@ async function draft(title: string, objectName: string, writer: User, doc: JSONC
   return (await savePage(page.id, { version: page.version, title, doc }, writer)).page;
 }
 
+/** Creates one demo page unless a page of that title exists; a failure is logged, never fatal. */
+async function once(title: string, make: () => Promise<void>): Promise<void> {
+  if (await Page.findOne({ where: { title } })) return;
+  try {
+    await make();
+  } catch (err) {
+    // Demo pages are a convenience: a catalogue without the demo objects must not stop the app.
+    logger.warn({ err, title }, 'demo page not created');
+  }
+}
+
 /**
  * Three demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: one
  * published, one waiting for review (with a hand-typed number for the reviewer), one draft about
- * the Sun with its eye-safety notice. Idempotent: does nothing once a demo page exists.
+ * the Sun with its eye-safety notice. Idempotent per page.
  */
 export async function seedDemoPages(): Promise<void> {
-  if (await Page.findOne({ where: { title: 'How far away is the Andromeda Galaxy? (demo)' } })) return;
   const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
   if (!writer || !reviewer || !editor) return;
-  try {
+
+  const andromedaTitle = 'How far away is the Andromeda Galaxy? (demo)';
+  await once(andromedaTitle, async () => {
     const distance = await statementFor('Andromeda Galaxy', 'distance-today', writer);
     const nakedEye = await statementFor('Andromeda Galaxy', 'naked-eye', writer);
-    const andromeda = await draft('How far away is the Andromeda Galaxy? (demo)', 'Andromeda Galaxy', writer, {
+    const andromeda = await draft(andromedaTitle, 'Andromeda Galaxy', writer, {
       type: 'doc',
       content: [
         p(t('On a clear autumn night at Corrie Vale, look high in the east for a faint smudge of light: the Andromeda Galaxy, our nearest large neighbour.')),
@@ -53,25 +65,28 @@ export async function seedDemoPages(): Promise<void> {
     for (const id of [distance, nakedEye]) await signOffStatement(andromeda.id, id, reviewer);
     await signOffPage(andromeda.id, reviewer);
     await publishPage(andromeda.id, editor);
+  });
 
-    const luminosity = await statementFor('3C 273', 'luminosity-sun', writer);
-    const travel = await statementFor('3C 273', 'light-travel', writer);
-    const quasar = await draft('3C 273, the quasar in Virgo (demo)', '3C 273', writer, {
+  const quasarTitle = '3C 279, a quasar in Virgo (demo)';
+  await once(quasarTitle, async () => {
+    const luminosity = await statementFor('3C 279', 'luminosity-sun', writer);
+    const travel = await statementFor('3C 279', 'light-travel', writer);
+    const quasar = await draft(quasarTitle, '3C 279', writer, {
       type: 'doc',
       content: [
-        p(t('3C 273 looks like an ordinary faint star in a small telescope, but it is the blazing centre of a distant galaxy.')),
+        p(t('3C 279 looks like a very faint star in a large telescope, but it is the blazing centre of a distant galaxy.')),
         p(s(luminosity), t(' '), s(travel)),
-        p(t('Some books say it is about 2.4 billion light-years away; our reviewers check which distance measure that means.')),
+        p(t('An old leaflet in our shop says it is about 5 billion light-years away; our reviewers check which distance measure that means.')),
       ],
     });
     await submitPage(quasar.id, undefined, writer);
+  });
 
-    await draft('Watching the Sun safely (demo)', 'Sun', writer, {
+  const sunTitle = 'Watching the Sun safely (demo)';
+  await once(sunTitle, async () => {
+    await draft(sunTitle, 'Sun', writer, {
       type: 'doc',
       content: [p(t('Our solar telescope on the terrace shows sunspots on clear days, with a certified filter fitted by our staff.')), { type: 'eyeSafetyNotice' }],
     });
-  } catch (err) {
-    // Demo pages are a convenience: a catalogue without the demo objects must not stop the app.
-    logger.warn({ err }, 'demo pages not created');
-  }
+  });
 }

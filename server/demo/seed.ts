@@ -2,6 +2,7 @@ import { User, Venue } from '../models/index.ts';
 import { hashPassword, verifyPassword } from '../services/passwords.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 import { seedCatalogueDemo } from './catalogue.ts';
+import { seedDemoChannels } from './channels.ts';
 import { seedDemoKioskScreens } from './kiosk-screens.ts';
 import { seedDemoPages } from './pages.ts';
 import { seedDemoStatements } from './statements.ts';
@@ -21,6 +22,7 @@ export async function seedDemo(): Promise<void> {
   await seedDemoStatements();
   await seedDemoKioskScreens();
   await seedDemoPages();
+  await seedDemoChannels();
 }
 
 /**

@@ -6,7 +6,7 @@
 import type { ModelView } from './quantities/context.ts';
 import type { QuantitySpec } from './quantities/registry.ts';
 import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
-import { propagate, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+import { propagate, propagateOne, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 
 /** The name under which an H0 range is varied. */
 export const H0_KEY = 'H0';
@@ -52,7 +52,8 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
       x[Z] = z;
       return spec.sample(env, x);
     };
-    return propagate({ ...problem, f: (x) => x[Z], last: { map: at, decreasing: spec.monotoneInZ === 'decreasing' } });
+    const last = { map: at, decreasing: spec.monotoneInZ === 'decreasing' };
+    return propagateOne(all.z, last, () => propagate({ ...problem, f: (x) => x[Z], last }));
   }
   const varyH0 = varied.includes(H0_KEY);
   const split = spec.split?.applies(present) ? spec.split : undefined;

@@ -226,6 +226,50 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   return outcome;
 }
 
+let sortedFirst: Float64Array | null = null;
+
+/** The first SAMPLES deviates in ascending order: the order of the draws when one input is varied. */
+function sortedDeviates(): Float64Array {
+  sortedFirst ??= seededDeviates(SAMPLES).slice(0, SAMPLES).sort();
+  return sortedFirst;
+}
+
+/**
+ * The Monte Carlo interval of g(X) for a single varied input X and a monotonic g, without drawing.
+ * Draw i gives X = value + d·(d < 0 ? minus : plus) for the i-th deviate d, which rises with d, so
+ * the k-th smallest draw of X comes from the k-th smallest deviate, and the k-th smallest g(X) from
+ * that or (g decreasing) the k-th largest. The result is the run `propagate` would make.
+ * @param m the one varied input
+ * @param g the calculation as a monotonic function of it
+ * @param everyDraw the full run, used when g is not finite at the extreme draws (some draws fail)
+ * @returns 68 % interval and failure counts
+ */
+export function propagateOne(m: Measurement, g: MonotoneMap, everyDraw: () => MonteCarloOutcome): MonteCarloOutcome {
+  const sorted = sortedDeviates();
+  const n = SAMPLES;
+  const drawAt = (rank: number): number => {
+    const d = sorted[rank];
+    return m.value + d * (d < 0 ? m.minus : m.plus);
+  };
+  const finiteAt = (rank: number): boolean => {
+    try {
+      return Number.isFinite(g.map(drawAt(rank)));
+    } catch {
+      return false;
+    }
+  };
+  if (!finiteAt(0) || !finiteAt(n - 1)) return everyDraw();
+  const quantileAt = (p: number): number => {
+    const pos = p * (n - 1);
+    const i = Math.floor(pos);
+    const f = pos - i;
+    const rank = g.decreasing ? n - 1 - i : i;
+    const x = g.map(drawAt(rank));
+    return i + 1 < n ? x * (1 - f) + g.map(drawAt(g.decreasing ? rank - 1 : rank + 1)) * f : x;
+  };
+  return { low: quantileAt(0.16), high: quantileAt(0.84), samples: n, failures: new Map(), failed: 0 };
+}
+
 /**
  * Propagates uncertainties through f by Monte Carlo, with inputs by name.
  * @param inputs measurements by name (only those with a non-zero uncertainty are varied)

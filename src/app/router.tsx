@@ -33,6 +33,8 @@ const router = createBrowserRouter([
         children: [
           { path: paths.venues.path, lazy: () => import('./routes/venues/venue-list.tsx') },
           { path: paths.venue.path, lazy: () => import('./routes/venues/venue-detail.tsx') },
+          { path: paths.publishing.path, lazy: () => import('./routes/publishing/channel-list.tsx') },
+          { path: paths.channel.path, lazy: () => import('./routes/publishing/channel-edit.tsx') },
         ],
       },
       {

@@ -20,6 +20,7 @@ export const MAIN_NAV: NavItem[] = [
   { label: 'Calculator', to: paths.calculator.href(), icon: 'calc' },
   { label: 'Media', to: paths.media.href(), icon: 'image' },
   { label: 'Venues', to: paths.venues.href(), icon: 'venue', roles: ['admin', 'editor'] },
+  { label: 'Publishing', to: paths.publishing.href(), icon: 'screen', roles: ['admin', 'editor'] },
 ];
 
 /** Administration, at the foot of the rail. */

@@ -20,6 +20,8 @@ export const paths = {
   media: { path: '/media', href: () => '/media' },
   venues: { path: '/venues', href: () => '/venues' },
   venue: { path: '/venues/:venueId', href: (id: string) => `/venues/${id}` },
+  publishing: { path: '/publishing', href: () => '/publishing' },
+  channel: { path: '/publishing/channels/:channelId', href: (id: string) => `/publishing/channels/${id}` },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
   adminOutbox: { path: '/admin/outbox', href: () => '/admin/outbox' },
 } as const;

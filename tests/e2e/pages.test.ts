@@ -6,14 +6,12 @@ import { openBrowser, screenshot, signInThroughForm } from '../support/browser.t
 const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 
 async function signInAs(page: BrowserPage, baseUrl: string, role: string) {
-  await page.context().clearCookies();
-  try {
-    await signInThroughForm(page, baseUrl, account(role).email, account(role).password);
-  } catch (e) {
-    await screenshot(page, 'debug-signin');
-    console.log('URL', page.url());
-    throw e;
+  const signOut = page.getByRole('button', { name: 'Sign out' });
+  if (await signOut.count()) {
+    await signOut.click();
+    await page.waitForURL(/\/sign-in/);
   }
+  await signInThroughForm(page, baseUrl, account(role).email, account(role).password);
   await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
 }
 
@@ -156,6 +154,8 @@ describe('object pages, from writing to re-check', () => {
     expect(json).not.toMatch(/Mso|style|onclick|onerror|javascript:|script|iframe|evil\.example|mso-/i);
     expect(await page.evaluate(() => (window as unknown as { hacked?: boolean }).hacked)).toBeUndefined();
     await screenshot(page, 'pages-pasted');
-    expect(errors).toEqual([]);
+    // The browser reports the pasted event handlers it refused under our Content-Security-Policy;
+    // those are the only console messages allowed here, and none of the handlers ran (checked above).
+    expect(errors.filter((e) => !/Executing inline event handler violates the following Content Security Policy.*The action has been blocked/.test(e))).toEqual([]);
   });
 });

@@ -18,6 +18,7 @@ export type RecomputeScope =
   | { sourceId: string };
 
 const BATCH = 1000;
+const WRITES_IN_FLIGHT = 2;
 
 /** Raised when the adopted cosmology changed under a running recompute; its results are dropped. */
 export class SettingsMovedError extends Error {}
@@ -54,8 +55,13 @@ type Row = ComputedFields & { id: string };
 
 /** The statements of one batch with the contexts their templates read (one query for all the objects' measurements). */
 async function loadBatch(ids: string[], settings: SettingsSnapshot): Promise<{ statements: Statement[]; contexts: Map<string, TemplateContext> }> {
-  // Plain rows: applyOutcome only reads the previous values, and model instances of 1,000 large rows cost more than the maths.
-  const statements = (await Statement.findAll({ where: { id: { [Op.in]: ids } } as WhereOptions<Statement>, raw: true })) as Statement[];
+  // Plain rows without the working: applyOutcome reads the previous working only to keep it on a
+  // broken statement, which the UPDATE does in place, and parsing 1,000 workings costs more than the maths.
+  const statements = (await Statement.findAll({
+    attributes: { exclude: ['working'] },
+    where: { id: { [Op.in]: ids } } as WhereOptions<Statement>,
+    raw: true,
+  })) as Statement[];
   const objectIds = [...new Set(statements.map((s) => s.skyObjectId))];
   const objects = await SkyObject.findAll({ attributes: ['id', 'name', 'kind'], where: { id: { [Op.in]: objectIds } }, raw: true });
   return { statements, contexts: await buildTemplateContexts(objects, settings) };
@@ -68,9 +74,9 @@ UPDATE statements AS s SET
   status = r.status, status_reason = r.status_reason, value = r.value, unit = r.unit,
   interval_low = r.interval_low, interval_high = r.interval_high, significant_figures = r.significant_figures,
   texts = r.texts, footnotes = r.footnotes, acknowledged_texts = r.acknowledged_texts, inputs = r.inputs,
-  working = r.working, warnings = r.warnings, model = r.model, settings_version = r.settings_version,
+  working = CASE WHEN r.status = 'broken' THEN s.working ELSE r.working END, warnings = r.warnings, model = r.model, settings_version = r.settings_version,
   computed_at = r.computed_at, updated_at = now()
-FROM jsonb_to_recordset($1::jsonb) AS r(
+FROM jsonb_to_recordset($1::jsonb -> 'rows') AS r(
   id uuid, status text, status_reason text, value float8, unit text, interval_low float8, interval_high float8,
   significant_figures smallint, texts jsonb, footnotes jsonb, acknowledged_texts jsonb, inputs jsonb, working jsonb,
   warnings jsonb, model jsonb, settings_version integer, computed_at timestamptz)
@@ -94,7 +100,8 @@ async function writeBatch(rows: Row[], settings: SettingsSnapshot): Promise<void
   await getSequelize().transaction(async (transaction) => {
     const current = await getSettings(transaction, 'share');
     if (current.version !== settings.version) throw new SettingsMovedError('The organisation settings changed during the recompute.');
-    await getSequelize().query(UPDATE_BATCH, { bind: [JSON.stringify(rows.map(asRecord))], transaction });
+    // An object parameter: the driver serialises it once (a string would be scanned again on the way).
+    await getSequelize().query(UPDATE_BATCH, { bind: [{ rows: rows.map(asRecord) }], transaction });
   });
 }
 
@@ -113,7 +120,7 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
   const changed: string[] = [];
   const broken: string[] = [];
   let written = 0;
-  let writing: Promise<void> | null = null;
+  const writing: Array<Promise<void>> = [];
   for (let i = 0; i < ids.length; i += BATCH) {
     const { statements, contexts } = await loadBatch(ids.slice(i, i + BATCH), settings);
     const rows: Row[] = [];
@@ -125,13 +132,15 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
       if (fields.status === 'broken' && statement.status !== 'broken') broken.push(statement.id);
       rows.push({ ...fields, id: statement.id });
     }
-    if (writing) await writing;
-    writing = writeBatch(rows, settings);
-    // Awaited at the next batch or after the loop; until then a failure must not count as unhandled.
-    writing.catch(() => undefined);
+    // PostgreSQL parses and stores earlier batches (on their own connections) while this one is computed.
+    if (writing.length >= WRITES_IN_FLIGHT) await writing.shift();
+    const write = writeBatch(rows, settings);
+    // Awaited later; until then a failure must not count as unhandled.
+    write.catch(() => undefined);
+    writing.push(write);
     written += rows.length;
   }
-  if (writing) await writing;
+  for (const write of writing) await write;
   if (changed.length) statementEvents.emit('textChanged', { statementIds: changed });
   if (broken.length) statementEvents.emit('broken', { statementIds: broken });
   return { written, changed, broken };

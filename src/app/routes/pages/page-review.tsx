@@ -58,6 +58,7 @@ export function Component() {
       {error && <div className="mb-4"><Notice tone="error">{error.message}</Notice></div>}
       <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-4">
+          {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           {p.published && (
             <div role="group" aria-label="Which version" className="inline-flex rounded-md border border-rule bg-panel p-0.5 text-sm">
               <button type="button" aria-pressed={!showLive} onClick={() => setShowLive(false)} className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}>This revision ({p.revision.number})</button>
@@ -71,7 +72,6 @@ export function Component() {
           <PageComments pageId={p.id} canComment={p.can.comment} />
         </div>
         <div className="space-y-6">
-          {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           <ReviewStatements page={p} busyId={signStatement.isPending ? (signStatement.variables ?? null) : null} onSignOff={(sid) => signStatement.mutate(sid)} onWorking={setWorking} />
           <ReviewFlags flags={p.flags} canReview={p.can.review} onResolve={(text, reason) => resolveFlag.mutate({ text, reason })} />
           {p.eyeSafety.required && <Notice tone={p.eyeSafety.present ? 'success' : 'error'} title="Eye safety">{p.eyeSafety.required}. {p.eyeSafety.present ? 'The notice is on the page.' : 'The notice is missing.'}</Notice>}

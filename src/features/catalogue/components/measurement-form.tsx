@@ -20,6 +20,8 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
   const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, watch, getValues, setValue, formState } = useForm<MeasurementFormValues, unknown, MeasurementValues>({
     resolver: zodResolver(MeasurementInputSchema) as unknown as Resolver<MeasurementFormValues, unknown, MeasurementValues>,
+    // Hidden fields (another uncertainty kind, a band the quantity has not) drop out of validation.
+    shouldUnregister: true,
     defaultValues: { quantity: 'redshift', value: '', unit: '', band: '', uncertaintyKind: 'symmetric', uncertainty: '', uncertaintyMinus: '', uncertaintyPlus: '', sourceId: '', note: '' },
   });
   const quantity = findQuantity(watch('quantity')) ?? QUANTITIES.redshift;

@@ -1,0 +1,111 @@
+import { useEffect, useState } from 'react';
+import { Link, useNavigate, useSearchParams } from 'react-router-dom';
+import { KIND_LABELS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
+import { QUANTITIES, QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
+import { MISSING_FILTERS, SKY_OBJECT_SORTS, type SkyObjectListQuery } from '@shared/schemas/sky-object.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { Icon } from '@/components/ui/icon.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { PageHeader } from '@/components/ui/page-header.tsx';
+import { paths } from '@/config/paths.ts';
+import { useSkyObjects, type CatalogueQuery } from '@/features/catalogue/api/objects.ts';
+import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
+import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
+import { useCurrentUser } from '@/lib/auth.tsx';
+
+const MISSING_LABELS: Record<(typeof MISSING_FILTERS)[number], string> = {
+  any_preferred: 'No preferred value at all',
+  position: 'No position',
+  source: 'A measurement without a source',
+  ...(Object.fromEntries(QUANTITY_IDS.map((id) => [id, `No preferred ${QUANTITIES[id].label.toLowerCase()}`])) as Record<(typeof QUANTITY_IDS)[number], string>),
+};
+
+const pick = <T extends string>(value: string | null, allowed: readonly T[]): T | undefined => (allowed as readonly string[]).includes(value ?? '') ? (value as T) : undefined;
+
+/** Reads the table's state from the URL, so a filtered view can be bookmarked and shared. */
+function useCatalogueQuery(): [CatalogueQuery, (patch: Partial<CatalogueQuery>) => void] {
+  const [params, setParams] = useSearchParams();
+  const query: CatalogueQuery = {
+    q: params.get('q') ?? undefined,
+    kind: pick(params.get('kind'), SKY_OBJECT_KINDS),
+    missing: pick(params.get('missing'), MISSING_FILTERS),
+    sort: pick(params.get('sort'), SKY_OBJECT_SORTS) ?? 'name',
+    dir: params.get('dir') === 'desc' ? 'desc' : 'asc',
+    page: Math.max(1, Number(params.get('page')) || 1),
+    pageSize: 50,
+  };
+  const update = (patch: Partial<CatalogueQuery>) => {
+    const next = { ...query, page: 1, ...patch };
+    const search = new URLSearchParams();
+    for (const [k, v] of Object.entries(next)) if (v !== undefined && v !== '' && k !== 'pageSize') search.set(k, String(v));
+    setParams(search, { replace: true });
+  };
+  return [query, update];
+}
+
+export function Component() {
+  const user = useCurrentUser();
+  const navigate = useNavigate();
+  const [query, update] = useCatalogueQuery();
+  const [search, setSearch] = useState(query.q ?? '');
+  const [adding, setAdding] = useState(false);
+  const objects = useSkyObjects(query);
+  const keeper = user.role === 'reviewer' || user.role === 'admin';
+
+  // Searching waits for a pause in typing rather than asking the server at every key.
+  useEffect(() => {
+    const timer = setTimeout(() => { if ((query.q ?? '') !== search) update({ q: search || undefined }); }, 300);
+    return () => clearTimeout(timer);
+  });
+
+  return (
+    <>
+      <PageHeader
+        title="Catalogue"
+        description="Objects and their sourced measurements. Statements use each object's preferred values."
+        actions={
+          <>
+            <a href="/api/catalogue/exports/measurements.csv" className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">Export CSV</a>
+            {keeper && <Link to={paths.catalogueImport.href()} className="inline-flex items-center gap-2 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"><Icon name="upload" className="size-4" />Import CSV</Link>}
+            {keeper && !adding && <Button onClick={() => setAdding(true)}><Icon name="plus" className="size-4" />Add object</Button>}
+          </>
+        }
+      />
+      <div className="space-y-4">
+        {adding && <ObjectForm onDone={(o) => navigate(paths.catalogueObject.href(o.id))} onCancel={() => setAdding(false)} />}
+        <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Filter the catalogue">
+          <label className="text-sm">
+            <span className="mb-1 block font-medium">Search</span>
+            <input type="search" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="Name or designation" className="w-64 rounded-md border border-rule bg-panel px-3 py-2" />
+          </label>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium">Kind</span>
+            <select value={query.kind ?? ''} onChange={(e) => update({ kind: (e.target.value || undefined) as SkyObjectListQuery['kind'] })} className="rounded-md border border-rule bg-panel px-3 py-2">
+              <option value="">All kinds</option>
+              {SKY_OBJECT_KINDS.map((k) => <option key={k} value={k}>{KIND_LABELS[k]}</option>)}
+            </select>
+          </label>
+          <label className="text-sm">
+            <span className="mb-1 block font-medium">Missing data</span>
+            <select value={query.missing ?? ''} onChange={(e) => update({ missing: (e.target.value || undefined) as SkyObjectListQuery['missing'] })} className="rounded-md border border-rule bg-panel px-3 py-2">
+              <option value="">Any</option>
+              {MISSING_FILTERS.map((m) => <option key={m} value={m}>{MISSING_LABELS[m]}</option>)}
+            </select>
+          </label>
+        </div>
+        {objects.error && <Notice tone="error">{objects.error.message}</Notice>}
+        {objects.isPending && <p className="text-sm text-muted">Loading the catalogue…</p>}
+        {objects.data && (
+          <CatalogueTable
+            {...objects.data}
+            sort={query.sort}
+            dir={query.dir}
+            loading={objects.isFetching}
+            onSort={(sort, dir) => update({ sort, dir })}
+            onPage={(page) => update({ page })}
+          />
+        )}
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,97 @@
+import { useState } from 'react';
+import { useNavigate, useParams } from 'react-router-dom';
+import { Button } from '@/components/ui/button.tsx';
+import { TextField } from '@/components/ui/field.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { PageHeader } from '@/components/ui/page-header.tsx';
+import { paths } from '@/config/paths.ts';
+import { useAddSlide, useAssignScreens, useChannel, useDeleteChannel, useRemoveSlide, useRenameChannel, useReorderSlides, useUpdateSlide } from '@/features/publishing/api/channels.ts';
+import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
+import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
+import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
+import { SlideList } from '@/features/publishing/components/slide-list.tsx';
+
+const message = (e: unknown) => (e instanceof Error ? e.message : null);
+
+export function Component() {
+  const { channelId = '' } = useParams();
+  const channel = useChannel(channelId);
+  const navigate = useNavigate();
+  const add = useAddSlide(channelId);
+  const update = useUpdateSlide(channelId);
+  const remove = useRemoveSlide(channelId);
+  const reorder = useReorderSlides(channelId);
+  const screens = useAssignScreens(channelId);
+  const rename = useRenameChannel(channelId);
+  const del = useDeleteChannel();
+  const [renaming, setRenaming] = useState<string | null>(null);
+  const [confirmDelete, setConfirmDelete] = useState(false);
+
+  if (channel.isPending) return <p className="text-sm text-muted">Loading channel…</p>;
+  if (channel.error) return <Notice tone="error">{channel.error.message}</Notice>;
+  const c = channel.data;
+  const busy = add.isPending || update.isPending || remove.isPending || reorder.isPending;
+  const listError = message(reorder.error) ?? message(remove.error);
+  const total = c.slides.filter((s) => s.state === 'showing').reduce((sum, s) => sum + s.durationS, 0);
+
+  return (
+    <>
+      <PageHeader
+        title={c.name}
+        description={`${c.venue.name} · ${c.slides.length} slide${c.slides.length === 1 ? '' : 's'} · one loop takes ${Math.floor(total / 60)} min ${total % 60} s`}
+        actions={
+          c.can.update && renaming === null ? (
+            <>
+              <Button variant="secondary" onClick={() => setRenaming(c.name)}>Rename</Button>
+              <Button variant="danger" onClick={() => setConfirmDelete(true)}>Delete channel</Button>
+            </>
+          ) : undefined
+        }
+      />
+      {renaming !== null && (
+        <form className="mb-6 flex items-end gap-2" aria-label="Rename channel" onSubmit={(e) => { e.preventDefault(); rename.mutate(renaming, { onSuccess: () => setRenaming(null) }); }}>
+          <TextField className="w-80" label="Channel name" value={renaming} onChange={(e) => setRenaming(e.target.value)} error={message(rename.error) ?? undefined} />
+          <Button type="submit" busy={rename.isPending}>Save name</Button>
+          <Button type="button" variant="secondary" onClick={() => setRenaming(null)}>Cancel</Button>
+        </form>
+      )}
+      {confirmDelete && (
+        <div className="mb-6">
+          <Notice tone="warning" title={`Delete “${c.name}”?`}>
+            <p>Its slides go with it; its screens show the holding screen until they get another channel.</p>
+            <div className="mt-2 flex gap-2">
+              <Button variant="danger" busy={del.isPending} onClick={() => del.mutate(c.id, { onSuccess: () => navigate(paths.publishing.href()) })}>Delete channel</Button>
+              <Button variant="secondary" onClick={() => setConfirmDelete(false)}>Keep it</Button>
+            </div>
+          </Notice>
+        </div>
+      )}
+      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,36rem)]">
+        <section aria-labelledby="slides-heading" className="space-y-4">
+          <h2 id="slides-heading" className="text-lg font-semibold text-ink">Slides</h2>
+          {listError && <Notice tone="error">{listError}</Notice>}
+          <SlideList
+            channel={c}
+            busy={busy}
+            onReorder={(ids) => reorder.mutate(ids)}
+            onRemove={(id) => remove.mutate(id)}
+            onUpdate={(slideId, input) => update.mutate({ slideId, ...input })}
+            updateError={update.error && update.variables ? { slideId: update.variables.slideId, message: update.error.message } : null}
+          />
+          {c.can.update && <AddSlideForm busy={add.isPending} error={message(add.error)} onAdd={(input) => add.mutate(input)} />}
+        </section>
+        <aside className="space-y-6">
+          <section aria-labelledby="preview-heading" className="space-y-2">
+            <h2 id="preview-heading" className="text-lg font-semibold text-ink">Preview</h2>
+            <PlayerPreview channelId={c.id} version={c.version} />
+          </section>
+          <section aria-labelledby="screens-heading" className="space-y-2 rounded-lg border border-rule bg-panel p-4">
+            <h2 id="screens-heading" className="text-lg font-semibold text-ink">Screens</h2>
+            {screens.error && <Notice tone="error">{screens.error.message}</Notice>}
+            <ScreensPicker channel={c} busy={screens.isPending} onSave={(ids) => screens.mutate(ids)} />
+          </section>
+        </aside>
+      </div>
+    </>
+  );
+}

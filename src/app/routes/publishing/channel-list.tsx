@@ -1,0 +1,39 @@
+import { useState } from 'react';
+import { useNavigate } from 'react-router-dom';
+import { Button } from '@/components/ui/button.tsx';
+import { Icon } from '@/components/ui/icon.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { PageHeader } from '@/components/ui/page-header.tsx';
+import { paths } from '@/config/paths.ts';
+import { useChannels } from '@/features/publishing/api/channels.ts';
+import { ChannelCreateForm } from '@/features/publishing/components/channel-create-form.tsx';
+import { ChannelsTable } from '@/features/publishing/components/channels-table.tsx';
+
+export function Component() {
+  const channels = useChannels();
+  const navigate = useNavigate();
+  const [adding, setAdding] = useState(false);
+  return (
+    <>
+      <PageHeader
+        title="Publishing"
+        description="Kiosk channels: the slides each venue’s screens play, in order. Only published pages and fully credited images can go on a screen."
+        actions={
+          !adding ? (
+            <Button onClick={() => setAdding(true)}>
+              <Icon name="plus" className="size-4" />
+              New channel
+            </Button>
+          ) : undefined
+        }
+      />
+      <div className="space-y-4">
+        {adding && <ChannelCreateForm onDone={(c) => navigate(paths.channel.href(c.id))} onCancel={() => setAdding(false)} />}
+        {channels.isPending && <p className="text-sm text-muted">Loading channels…</p>}
+        {channels.error && <Notice tone="error">{channels.error.message}</Notice>}
+        {channels.data && channels.data.length === 0 && <Notice>No channels yet. Create one, add slides, then choose the screens that show it.</Notice>}
+        {channels.data && channels.data.length > 0 && <ChannelsTable channels={channels.data} />}
+      </div>
+    </>
+  );
+}

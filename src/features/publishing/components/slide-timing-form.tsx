@@ -1,0 +1,52 @@
+import { useState } from 'react';
+import type { SlideDto, SlideUpdateInput } from '@shared/schemas/channel.ts';
+import { ChannelLimits } from '@shared/validations.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { TextField } from '@/components/ui/field.tsx';
+
+const pad = (n: number) => String(n).padStart(2, '0');
+
+/** ISO instant → the value a datetime-local input shows (this browser's time zone). */
+export function toLocalInput(iso: string | null): string {
+  if (!iso) return '';
+  const d = new Date(iso);
+  return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}T${pad(d.getHours())}:${pad(d.getMinutes())}`;
+}
+
+const fromLocalInput = (value: string) => (value ? new Date(value).toISOString() : null);
+
+/** Duration and optional start and end of one slide; saved together. */
+export function SlideTimingForm({ slide, busy, error, onSave }: { slide: SlideDto; busy: boolean; error?: string | null; onSave: (input: SlideUpdateInput) => void }) {
+  const [duration, setDuration] = useState(String(slide.durationS));
+  const [startsAt, setStartsAt] = useState(toLocalInput(slide.startsAt));
+  const [endsAt, setEndsAt] = useState(toLocalInput(slide.endsAt));
+  const [caption, setCaption] = useState(slide.caption);
+  const clamped = Math.min(ChannelLimits.durationMax, Math.max(ChannelLimits.durationMin, Math.round(Number(duration) || ChannelLimits.durationDefault)));
+  return (
+    <form
+      aria-label={`Timing for slide ${slide.position + 1}`}
+      className="mt-3 grid gap-3 border-t border-rule pt-3 sm:grid-cols-[8rem_1fr_1fr_auto] sm:items-end"
+      onSubmit={(e) => {
+        e.preventDefault();
+        setDuration(String(clamped));
+        onSave({ durationS: clamped, startsAt: fromLocalInput(startsAt), endsAt: fromLocalInput(endsAt), ...(slide.kind === 'image' ? { caption } : {}) });
+      }}
+    >
+      <TextField
+        label="Seconds on screen"
+        type="number"
+        min={ChannelLimits.durationMin}
+        max={ChannelLimits.durationMax}
+        value={duration}
+        onChange={(e) => setDuration(e.target.value)}
+        hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
+      />
+      <TextField label="Show from (optional)" type="datetime-local" value={startsAt} onChange={(e) => setStartsAt(e.target.value)} hint="Your local time" />
+      <TextField label="Show until (optional)" type="datetime-local" value={endsAt} onChange={(e) => setEndsAt(e.target.value)} error={error ?? undefined} />
+      <Button type="submit" variant="secondary" busy={busy}>Save timing</Button>
+      {slide.kind === 'image' && (
+        <TextField className="sm:col-span-4" label="Caption" maxLength={ChannelLimits.captionMax} value={caption} onChange={(e) => setCaption(e.target.value)} />
+      )}
+    </form>
+  );
+}

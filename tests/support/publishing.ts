@@ -1,0 +1,96 @@
+import supertest from 'supertest';
+import type { Agent } from 'supertest';
+import { Media, MediaRendition, type User } from '../../server/models/index.ts';
+import { getTestApp, signedInAgent } from './app.ts';
+import { doc, pageWithBody, paragraph, quasarWithStatements, statement, text } from './pages.ts';
+
+type Signed = Awaited<ReturnType<typeof signedInAgent>>;
+
+let n = 0;
+const hex = (seed: string) => seed.repeat(64).slice(0, 64);
+
+/** A library image ready for publishing, with thumbnail, page and both kiosk renditions (rows only). */
+export async function buildKioskMedia(uploader: User, overrides: Partial<{ credit: string; licenceId: string | null; altText: string }> = {}) {
+  n += 1;
+  const id = `${Date.now().toString(16)}${n.toString(16)}`;
+  const media = await Media.create({
+    sha256: hex(id),
+    originalKey: `originals/${hex(id)}.jpg`,
+    fileName: 'kiosk-test-nebula.jpg',
+    format: 'jpeg',
+    bytes: 5000,
+    width: 4000,
+    height: 2500,
+    altText: overrides.altText ?? 'A reddish cloud of glowing gas with dark lanes of dust (test image)',
+    credit: overrides.credit ?? 'Corrie Vale Observatory (demo)',
+    licenceId: (overrides.licenceId === undefined ? 'cc-by-4.0' : overrides.licenceId) as never,
+    sourceUrl: 'https://example.org/kiosk-test-image',
+    focalX: 0.4,
+    focalY: 0.6,
+    renditionsStatus: 'ready',
+    uploadedById: uploader.id,
+  });
+  const sizes = [
+    ['thumbnail', 400, 250],
+    ['page', 1600, 1000],
+    ['kiosk-hd', 1920, 1080],
+    ['kiosk-4k', 3840, 2160],
+  ] as const;
+  for (const [i, [name, width, height]] of sizes.entries()) {
+    await MediaRendition.create({ mediaId: media.id, name, format: 'jpeg', width, height, bytes: 1000, storageKey: `renditions/${hex(`${id}${i}`)}.jpg` });
+  }
+  return media;
+}
+
+/** Desk staff for publishing tests: an editor and an admin (plus the writer and reviewer a page needs). */
+export async function publishingCrew() {
+  const [writer, reviewer, editor, admin] = await Promise.all([signedInAgent('writer'), signedInAgent('reviewer'), signedInAgent('editor'), signedInAgent('admin')]);
+  return { writer, reviewer, editor, admin };
+}
+
+/**
+ * A page written, signed off and published through the API, with two statements (and an image
+ * when given).
+ */
+export async function publishedPage(crew: { writer: Signed; reviewer: Signed; editor: Signed }, title: string, mediaId?: string, opening = 'A bright quasar you can find with a small telescope.') {
+  const q = await quasarWithStatements(crew.writer.agent, crew.writer.user);
+  const blocks = [
+    ...(mediaId ? [{ type: 'mediaImage', attrs: { mediaId, caption: null } }] : []),
+    paragraph(text(opening)),
+    paragraph(statement(q.distanceId)),
+    paragraph(statement(q.nakedEyeId)),
+  ];
+  const page = await pageWithBody(crew.writer.agent, q.object.id, doc(...blocks), title);
+  const ok = (res: supertest.Response, what: string) => {
+    if (res.status >= 300) throw new Error(`${what}: ${res.status} ${JSON.stringify(res.body)}`);
+    return res;
+  };
+  ok(await crew.writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: page.version }), 'submit');
+  for (const id of [q.distanceId, q.nakedEyeId]) ok(await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: id }), 'sign off statement');
+  ok(await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`), 'sign off page');
+  ok(await crew.editor.agent.post(`/api/pages/${page.id}/publish`), 'publish');
+  return { pageId: page.id, statementIds: [q.distanceId, q.nakedEyeId], distanceText: q.distanceText, objectName: q.object.name };
+}
+
+/** A venue made by an admin through the API. */
+export async function makeVenue(admin: Agent, name: string) {
+  const res = await admin.post('/api/venues').send({ name, latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London' });
+  if (res.status !== 201) throw new Error(`venue: ${JSON.stringify(res.body)}`);
+  return res.body.data as { id: string; name: string };
+}
+
+/** A screen added by an admin and paired with its code: returns its id and Bearer token. */
+export async function pairedScreen(admin: Agent, venueId: string, name: string) {
+  const added = await admin.post(`/api/venues/${venueId}/screens`).send({ name });
+  if (added.status !== 201) throw new Error(`screen: ${JSON.stringify(added.body)}`);
+  const paired = await supertest(await getTestApp()).post('/api/kiosk/pair').send({ code: added.body.data.pairingCode });
+  if (paired.status !== 201) throw new Error(`pair: ${JSON.stringify(paired.body)}`);
+  return { screenId: added.body.data.screen.id as string, token: paired.body.data.token as string };
+}
+
+/** GET /api/kiosk/feed with a screen's token (and an If-None-Match when given). */
+export async function getFeed(token: string, etag?: string) {
+  let req = supertest(await getTestApp()).get('/api/kiosk/feed').set('Authorization', `Bearer ${token}`);
+  if (etag) req = req.set('If-None-Match', etag);
+  return req;
+}
