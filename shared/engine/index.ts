@@ -21,7 +21,8 @@ export { PRESETS, PLANCK18, WMAP9, type Preset, type PresetName } from './cosmol
 export * from './hubble-law.ts';
 export * from './magnitudes.ts';
 export { SOLAR_MAGNITUDES, SOLAR_BANDS, type SolarBand } from './solar-magnitudes.ts';
-export { monteCarlo, mulberry32, type Measurement } from './uncertainty.ts';
+export { monteCarlo } from './monte-carlo.ts';
+export { mulberry32, type Measurement } from './uncertainty.ts';
 export type { Step, WorkingValue, StepResult } from './working.ts';
 export { QUANTITY_SPECS } from './quantities/registry.ts';
 export { CALC_QUANTITIES, CalcRequestSchema, CalcResultSchema, type CalcRequest, type CalcResult } from '../schemas/calc.ts';

@@ -6,7 +6,8 @@
 import type { ModelView } from './quantities/context.ts';
 import type { QuantitySpec } from './quantities/registry.ts';
 import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
-import { propagate, propagateOne, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+import { propagate, propagateOne } from './monte-carlo.ts';
+import type { Measurement, MonteCarloOutcome } from './uncertainty.ts';
 
 /** The name under which an H0 range is varied. */
 export const H0_KEY = 'H0';

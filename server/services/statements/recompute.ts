@@ -110,7 +110,7 @@ async function writeBatch(rows: Row[], settings: SettingsSnapshot): Promise<void
  * Every batch checks, inside its transaction, that the adopted settings have not moved since the
  * computation started; if they have, the batch is dropped (the change queued its own recompute),
  * so no statement is ever marked current against a model that is no longer adopted.
- * While PostgreSQL writes one batch, the next is loaded and computed.
+ * While PostgreSQL writes earlier batches, the next is loaded and computed.
  * @param options.settings compute against this snapshot instead of reading it (a long job's start)
  * @returns how many statements were written, and which changed or broke
  */

@@ -1,0 +1,199 @@
+/**
+ * Monte Carlo runs over the seeded deviates of uncertainty.ts: a draw loop free of allocation and
+ * try/catch over slot-numbered inputs, percentiles by selection rather than sorting, an optional
+ * monotonic last step computed only at the percentiles, and, for one varied input and a monotonic
+ * calculation, no drawing at all. Every shortcut gives the interval the plain loop would.
+ */
+import { quantilePair, type MonotoneMap } from './order-statistics.ts';
+import { SAMPLES, seededDeviates, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+
+export type { MonotoneMap } from './order-statistics.ts';
+
+// The draws' buffer is reused from run to run: a fresh 32 kB typed array per run lives outside the
+// JavaScript heap and costs more in garbage collection than the draws themselves. A run that starts
+// while another holds it (a calculation nested in a draw) gets its own.
+let scratch: Float64Array | null = null;
+const takeScratch = (): Float64Array => {
+  const s = scratch ?? new Float64Array(SAMPLES);
+  scratch = null;
+  return s;
+};
+const releaseScratch = (s: Float64Array): void => {
+  scratch = s;
+};
+
+/** A Monte Carlo problem on numbered slots: the calculation reads its inputs from x by slot. */
+export interface SlotProblem {
+  /** Every slot's nominal value; the varied slots are overwritten for each draw. */
+  x: Float64Array;
+  /** The inputs with a non-zero uncertainty, in the order they take deviates, with their slots. */
+  varied: Array<{ slot: number; m: Measurement }>;
+  /** The calculation: NaN (or a throw) for a draw where the quantity is undefined. */
+  f: (x: Float64Array) => number;
+  /** Names the input responsible for a failed draw. */
+  blame: (x: Float64Array) => string;
+  /**
+   * A monotonic last step of the calculation, left out of f: only the draws at the percentiles
+   * go through it (the interval is the same as running it on every draw, for less work).
+   */
+  last?: MonotoneMap;
+}
+
+/** Where a run stands, shared with the draw loop so that a throwing draw can be skipped and the loop resumed. */
+interface Run {
+  draw: number;
+  kept: number;
+}
+
+/**
+ * Draws from `run.draw` to the end, keeping results in `out`. Free of try/catch and allocation:
+ * a draw that throws leaves `run.draw` pointing at itself for the caller to count and skip.
+ */
+function drawAll(run: Run, p: SlotProblem, slots: Int32Array, centre: Float64Array, minus: Float64Array, plus: Float64Array, out: Float64Array, failed: () => void): void {
+  const { x, f } = p;
+  const n = slots.length;
+  const dev = seededDeviates(SAMPLES * n);
+  // With a monotonic last step still to come, ±Infinity may map to a finite result: keep all but NaN.
+  const keepInfinite = p.last !== undefined;
+  for (; run.draw < SAMPLES; run.draw++) {
+    const base = run.draw * n;
+    for (let j = 0; j < n; j++) {
+      const d = dev[base + j];
+      x[slots[j]] = centre[j] + d * (d < 0 ? minus[j] : plus[j]);
+    }
+    const r = f(x);
+    // r − r is 0 only for finite r; r === r excludes only NaN.
+    if (keepInfinite ? r === r : r - r === 0) out[run.kept++] = r;
+    else failed();
+  }
+}
+
+/** True when a monotonic map is finite (and does not throw) at the smallest and largest draw, hence at all. */
+function finiteBetween(a: Float64Array, last: MonotoneMap): boolean {
+  let lo = Infinity;
+  let hi = -Infinity;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] < lo) lo = a[i];
+    if (a[i] > hi) hi = a[i];
+  }
+  try {
+    return Number.isFinite(last.map(lo)) && Number.isFinite(last.map(hi));
+  } catch {
+    return false;
+  }
+}
+
+/**
+ * Propagates uncertainties by Monte Carlo over slot-numbered inputs.
+ * @param p the problem
+ * @returns 68 % interval and failure counts
+ */
+export function propagate(p: SlotProblem): MonteCarloOutcome {
+  const slots = Int32Array.from(p.varied, (v) => v.slot);
+  const centre = Float64Array.from(p.varied, (v) => v.m.value);
+  const minus = Float64Array.from(p.varied, (v) => v.m.minus);
+  const plus = Float64Array.from(p.varied, (v) => v.m.plus);
+  const out = takeScratch();
+  const failures = new Map<string, number>();
+  const failed = (): void => {
+    const who = p.blame(p.x);
+    failures.set(who, (failures.get(who) ?? 0) + 1);
+  };
+  const run: Run = { draw: 0, kept: 0 };
+  while (run.draw < SAMPLES) {
+    try {
+      drawAll(run, p, slots, centre, minus, plus, out, failed);
+    } catch {
+      // The draw at run.draw threw: it counts as outside the domain, and sampling resumes after it.
+      failed();
+      run.draw++;
+    }
+  }
+  const kept = out.subarray(0, run.kept);
+  const last = p.last;
+  if (last && run.kept > 0 && !finiteBetween(kept, last)) {
+    // Some draws leave the range where the last step is finite: run it on every draw instead.
+    releaseScratch(out);
+    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined });
+  }
+  const interval = run.kept > 0 ? quantilePair(kept, 0.16, 0.84, last) : { low: NaN, high: NaN };
+  const outcome = {
+    low: interval.low,
+    high: interval.high,
+    samples: run.kept,
+    failures,
+    failed: SAMPLES - run.kept,
+  };
+  releaseScratch(out);
+  return outcome;
+}
+
+let sortedFirst: Float64Array | null = null;
+
+/** The first SAMPLES deviates in ascending order: the order of the draws when one input is varied. */
+function sortedDeviates(): Float64Array {
+  sortedFirst ??= seededDeviates(SAMPLES).slice(0, SAMPLES).sort();
+  return sortedFirst;
+}
+
+/**
+ * The Monte Carlo interval of g(X) for a single varied input X and a monotonic g, without drawing.
+ * Draw i gives X = value + d·(d < 0 ? minus : plus) for the i-th deviate d, which rises with d, so
+ * the k-th smallest draw of X comes from the k-th smallest deviate, and the k-th smallest g(X) from
+ * that or (g decreasing) the k-th largest. The result is the run `propagate` would make.
+ * @param m the one varied input
+ * @param g the calculation as a monotonic function of it
+ * @param everyDraw the full run, used when g is not finite at the extreme draws (some draws fail)
+ * @returns 68 % interval and failure counts
+ */
+export function propagateOne(m: Measurement, g: MonotoneMap, everyDraw: () => MonteCarloOutcome): MonteCarloOutcome {
+  const sorted = sortedDeviates();
+  const n = SAMPLES;
+  const drawAt = (rank: number): number => {
+    const d = sorted[rank];
+    return m.value + d * (d < 0 ? m.minus : m.plus);
+  };
+  const finiteAt = (rank: number): boolean => {
+    try {
+      return Number.isFinite(g.map(drawAt(rank)));
+    } catch {
+      return false;
+    }
+  };
+  if (!finiteAt(0) || !finiteAt(n - 1)) return everyDraw();
+  const quantileAt = (p: number): number => {
+    const pos = p * (n - 1);
+    const i = Math.floor(pos);
+    const f = pos - i;
+    const rank = g.decreasing ? n - 1 - i : i;
+    const x = g.map(drawAt(rank));
+    return i + 1 < n ? x * (1 - f) + g.map(drawAt(g.decreasing ? rank - 1 : rank + 1)) * f : x;
+  };
+  return { low: quantileAt(0.16), high: quantileAt(0.84), samples: n, failures: new Map(), failed: 0 };
+}
+
+/**
+ * Propagates uncertainties through f by Monte Carlo, with inputs by name.
+ * @param inputs measurements by name (only those with a non-zero uncertainty are varied)
+ * @param f the calculation; returns NaN (or throws) for draws where the quantity is undefined
+ * @param blame names the input responsible for a failed draw
+ * @returns 68 % interval and failure counts
+ */
+export function monteCarlo(
+  inputs: Record<string, Measurement>,
+  f: (values: Record<string, number>) => number,
+  blame: (values: Record<string, number>) => string,
+): MonteCarloOutcome {
+  const names = Object.keys(inputs);
+  const values: Record<string, number> = {};
+  const byName = (x: Float64Array): Record<string, number> => {
+    names.forEach((k, i) => (values[k] = x[i]));
+    return values;
+  };
+  return propagate({
+    x: Float64Array.from(names, (k) => inputs[k].value),
+    varied: names.flatMap((k, slot) => (inputs[k].minus > 0 || inputs[k].plus > 0 ? [{ slot, m: inputs[k] }] : [])),
+    f: (x) => f(byName(x)),
+    blame: (x) => blame(byName(x)),
+  });
+}
