@@ -11,6 +11,7 @@ import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
+import { kioskFeedRouter } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
 import { registerStatementTriggers } from './services/statements/triggers.ts';
@@ -49,6 +50,8 @@ export function createApp(options: AppOptions = {}) {
   api.use(sessions.middleware);
   api.use(loadUser);
   api.use(apiRouter());
+  // Polled by every screen: mounted ahead of the body parser, sessions and user loading, which it never needs.
+  app.use('/api/kiosk/feed', kioskFeedRouter);
   app.use('/api', api);
 
   app.use('/media', mediaFilesRouter);

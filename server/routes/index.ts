@@ -13,7 +13,6 @@ import { usersRouter } from './users.ts';
 import { kioskRouter } from './kiosk.ts';
 import { venuesRouter } from './venues.ts';
 import { channelsRouter } from './channels.ts';
-import { kioskFeedRouter } from './kiosk-feed.ts';
 import { publicRouter } from './public/index.ts';
 
 /** Every API router, mounted under /api. */
@@ -31,7 +30,6 @@ export function apiRouter(): Router {
   router.use('/media', mediaRouter);
   router.use('/catalogue', catalogueRouter);
   router.use('/venues', venuesRouter);
-  router.use('/kiosk/feed', kioskFeedRouter);
   router.use('/kiosk', kioskRouter);
   router.use('/channels', channelsRouter);
   router.use('/public', publicRouter);

@@ -3,7 +3,6 @@ import { getSequelize } from '../db.ts';
 import { ConflictError } from '../errors.ts';
 import { CatalogueImport, type User } from '../models/index.ts';
 import { recordAudit } from './audit.ts';
-import { catalogueEvents } from './catalogue-events.ts';
 
 const RECORDSET = `jsonb_to_recordset(ci.accepted_rows) AS r(
   "objectId" uuid, quantity text, band text, value float8, uncertainty float8, "uncertaintyMinus" float8,
@@ -18,7 +17,7 @@ const RECORDSET = `jsonb_to_recordset(ci.accepted_rows) AS r(
  */
 export async function commitCatalogueImport(importId: string, actor: User, ip?: string): Promise<{ record: CatalogueImport; inserted: number }> {
   const sequelize = getSequelize();
-  const inserted: Array<{ id: string; object_id: string }> = [];
+  let inserted = 0;
   try {
     const record = await sequelize.transaction(async (transaction) => {
       // A bulk commit of up to 100,000 rows may outlast the 15 s limit meant for ordinary requests.
@@ -39,16 +38,15 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
         throw ConflictError(`Since the dry run, ${duplicates} of these rows have been added by someone else. Check the file again before importing.`, 'catalogue_changed');
       }
 
-      const rows = await sequelize.query<{ id: string; object_id: string }>(
+      const [, insertedCount] = (await sequelize.query(
         `INSERT INTO measurements (id, object_id, quantity, band, value, uncertainty, uncertainty_minus, uncertainty_plus,
            entered_value, entered_unit, source_id, note, status, preferred, created_by_id, import_id, created_at, updated_at)
          SELECT gen_random_uuid(), r."objectId", r.quantity, r.band, r.value, r.uncertainty, r."uncertaintyMinus", r."uncertaintyPlus",
            r."enteredValue", coalesce(r."enteredUnit", ''), r."sourceId", coalesce(r.note, ''), 'accepted', false, $2, ci.id, now(), now()
-         FROM catalogue_imports ci, ${RECORDSET} WHERE ci.id = $1
-         RETURNING id, object_id`,
-        { type: QueryTypes.SELECT, bind: [importId, actor.id], transaction },
-      );
-      inserted.push(...rows);
+         FROM catalogue_imports ci, ${RECORDSET} WHERE ci.id = $1`,
+        { type: QueryTypes.INSERT, bind: [importId, actor.id], transaction },
+      )) as [unknown, number];
+      inserted = insertedCount;
       await sequelize.query(
         `INSERT INTO measurement_history (measurement_id, object_id, action, changed_by_id, reason, old_values, new_values, created_at)
          SELECT m.id, m.object_id, 'imported', $2, $3, NULL,
@@ -61,12 +59,13 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
       );
       record.set({ status: 'committed', committedAt: new Date(), acceptedRows: null });
       await record.save({ transaction });
-      await recordAudit({ actorId: actor.id, action: 'catalogue.import_committed', subjectType: 'catalogue_import', subjectId: record.id, data: { fileName: record.fileName, inserted: rows.length }, ip }, transaction);
+      await recordAudit({ actorId: actor.id, action: 'catalogue.import_committed', subjectType: 'catalogue_import', subjectId: record.id, data: { fileName: record.fileName, inserted }, ip }, transaction);
       return record;
     });
-    // Imported measurements are never preferred, so no statement's inputs change; listeners still hear of each.
-    for (const row of inserted) catalogueEvents.emit('measurementChanged', { measurementId: row.id, objectId: row.object_id });
-    return { record, inserted: inserted.length };
+    // No events: imported measurements are new and never preferred, so nothing that listens
+    // (statements use preferred values only) can depend on them yet, and 50,000 events would
+    // flood the listeners' job queue. Choosing one as preferred later emits preferredChanged.
+    return { record, inserted };
   } catch (error) {
     if (error instanceof ForeignKeyConstraintError) {
       throw ConflictError('An object or source named in this file was deleted after the dry run. Check the file again; nothing was imported.', 'catalogue_changed');

@@ -18,7 +18,7 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
 };
 
 /** Field → column header; sent as a JSON text field beside the file. Unmapped fields are left out. */
-export const ImportMappingSchema = z.record(z.enum(IMPORT_FIELDS, { message: `Fields are ${IMPORT_FIELDS.join(', ')}` }), z.string().max(200)).optional();
+export const ImportMappingSchema = z.partialRecord(z.enum(IMPORT_FIELDS, { message: `Fields are ${IMPORT_FIELDS.join(', ')}` }), z.string().max(200)).optional();
 export type ImportMapping = Partial<Record<ImportField, string>>;
 
 /** Why a row was rejected. */

@@ -61,7 +61,7 @@ export function Component() {
 
       <section aria-labelledby="history-heading" className="space-y-3">
         <h2 id="history-heading" className="flex items-center gap-2 text-lg font-semibold"><Icon name="history" className="size-5" />History</h2>
-        {history.data && <HistoryList entries={history.data} />}
+        {history.data && <HistoryList entries={history.data} measurements={measurements.data ?? []} />}
       </section>
     </>
   );

@@ -66,7 +66,7 @@ export function Component() {
           </Notice>
         </div>
       )}
-      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_minmax(0,36rem)]">
+      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_28rem]">
         <section aria-labelledby="slides-heading" className="space-y-4">
           <h2 id="slides-heading" className="text-lg font-semibold text-ink">Slides</h2>
           {listError && <Notice tone="error">{listError}</Notice>}

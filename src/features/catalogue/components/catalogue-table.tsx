@@ -13,6 +13,8 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
   {
     id: 'name',
     header: 'Name',
+    // Accessors make the columns sortable for the table; the server does the sorting.
+    accessorFn: (r) => r.name,
     cell: ({ row }) => (
       <div>
         <Link to={paths.catalogueObject.href(row.original.id)} className="font-medium text-accent hover:underline">{row.original.name}</Link>
@@ -20,9 +22,9 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
       </div>
     ),
   },
-  { id: 'kind', header: 'Kind', cell: ({ row }) => KIND_LABELS[row.original.kind] },
-  { id: 'ra', header: 'Position (J2000)', cell: ({ row }) => <span className="whitespace-pre font-mono text-xs tabular-nums">{formatPosition(row.original.raDeg, row.original.decDeg)}</span> },
-  { id: 'constellation', header: 'Constellation', cell: ({ row }) => constellationName(row.original.constellation) },
+  { id: 'kind', header: 'Kind', accessorFn: (r) => r.kind, cell: ({ row }) => KIND_LABELS[row.original.kind] },
+  { id: 'ra', header: 'Position (J2000)', accessorFn: (r) => r.raDeg, cell: ({ row }) => <span className="whitespace-pre font-mono text-xs tabular-nums">{formatPosition(row.original.raDeg, row.original.decDeg)}</span> },
+  { id: 'constellation', header: 'Constellation', accessorFn: (r) => r.constellation, cell: ({ row }) => constellationName(row.original.constellation) },
   {
     id: 'measurements',
     header: 'Measurements',

@@ -79,7 +79,7 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
             <span className="cursor-grab select-none text-muted" aria-hidden="true" title="Drag to move">⠿</span>
             <span className="w-6 text-right text-sm tabular-nums text-muted">{i + 1}</span>
             {s.media?.thumbnailUrl ? <img src={s.media.thumbnailUrl} alt="" className="h-10 w-16 rounded object-cover" /> : <span className="flex h-10 w-16 items-center justify-center rounded bg-wash text-muted"><Icon name={s.kind === 'sky_tonight' ? 'moon' : 'page'} className="size-4" /></span>}
-            <div className="min-w-0 flex-1">
+            <div className="min-w-[14rem] flex-1">
               <p className="truncate font-medium text-ink">{slideTitle(s)}</p>
               <p className="text-xs text-muted">
                 {SLIDE_KIND_LABELS[s.kind]} · {s.durationS} s{s.kind === 'page' ? ` · ${s.statementIds.length} statement${s.statementIds.length === 1 ? '' : 's'}` : ''}
@@ -87,7 +87,7 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
               </p>
             </div>
             <SlideStateBadge slide={s} />
-            <div className="flex gap-1">
+            <div className="ml-auto flex gap-1">
               <Button variant="secondary" className="px-2" data-move="up" aria-label={`Move “${slideTitle(s)}” up`} disabled={busy || i === 0} onClick={() => { setFocusAfterMove({ id: s.id, dir: 'up' }); onReorder(moved(ids, i, i - 1)); }}>↑</Button>
               <Button variant="secondary" className="px-2" data-move="down" aria-label={`Move “${slideTitle(s)}” down`} disabled={busy || i === ids.length - 1} onClick={() => { setFocusAfterMove({ id: s.id, dir: 'down' }); onReorder(moved(ids, i, i + 1)); }}>↓</Button>
               <Button variant="quiet" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>Timing</Button>
