@@ -12,8 +12,8 @@ export interface NavItem {
 
 /** The main areas, top of the rail. */
 export const MAIN_NAV: NavItem[] = [
-  { label: 'Pages', to: paths.pages.href(), icon: 'page' },
   { label: 'Overview', to: paths.home.href(), icon: 'home' },
+  { label: 'Pages', to: paths.pages.href(), icon: 'page' },
   { label: 'Statements', to: paths.statements.href(), icon: 'quote' },
   { label: 'Catalogue', to: paths.catalogue.href(), icon: 'catalogue' },
   { label: 'Sources', to: paths.sources.href(), icon: 'source' },

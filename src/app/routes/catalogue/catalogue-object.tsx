@@ -10,6 +10,7 @@ import { useMeasurementHistory, useMeasurements } from '@/features/catalogue/api
 import { useSkyObject } from '@/features/catalogue/api/objects.ts';
 import { constellationName, formatPosition } from '@/features/catalogue/components/format.ts';
 import { HistoryList } from '@/features/catalogue/components/history-list.tsx';
+import { ObjectStatements } from '@/features/statements/components/object-statements.tsx';
 import { MeasurementForm } from '@/features/catalogue/components/measurement-form.tsx';
 import { MeasurementGroups } from '@/features/catalogue/components/measurement-groups.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
@@ -59,6 +60,9 @@ export function Component() {
         {measurements.data && <MeasurementGroups objectId={o.id} measurements={measurements.data} />}
       </section>
 
+      <div className="mb-8">
+        <ObjectStatements objectId={id} />
+      </div>
       <section aria-labelledby="history-heading" className="space-y-3">
         <h2 id="history-heading" className="flex items-center gap-2 text-lg font-semibold"><Icon name="history" className="size-5" />History</h2>
         {history.data && <HistoryList entries={history.data} measurements={measurements.data ?? []} />}
