@@ -11,9 +11,9 @@ describe('checked statements in the browser', () => {
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Statements' }).click();
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe('Statements');
     await page.getByRole('link', { name: /TON 618 set out about/ }).first().click();
-    await expect.poll(() => page.getByRole('heading', { name: 'Public wording' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Public wording', exact: true }).count()).toBe(1);
     await expect.poll(() => page.getByText('Worked out with the Planck 2018').count()).toBeGreaterThan(0);
-    await expect.poll(() => page.getByRole('heading', { name: 'Working' }).count()).toBe(1);
+    await expect.poll(() => page.getByRole('heading', { name: 'Working', exact: true }).count()).toBe(1);
     await expect.poll(() => page.getByText('Public wording: round to what the data supports').count()).toBeGreaterThan(0);
     await screenshot(page, 'statement-detail');
     expect(errors).toEqual([]);
@@ -34,13 +34,23 @@ describe('checked statements in the browser', () => {
 
     await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
     await page.goto(`${baseUrl}/statements?status=changed`);
-    const first = page.getByRole('link', { name: /TON 618/ }).first();
+    const first = page.getByRole('link', { name: /3C 279/ }).first();
     await expect.poll(() => first.count(), { timeout: 30_000, interval: 1000 }).toBeGreaterThan(0);
     await first.click();
     await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBeGreaterThan(0);
     await screenshot(page, 'statement-changed');
     await page.getByRole('button', { name: 'Accept new wording' }).click();
     await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBe(0);
+    await page.getByRole('button', { name: 'Sign out' }).click();
+    await page.waitForURL(/sign-in/);
+
+    // Back to Planck 2018, so later tests see the demo as shipped.
+    await signInThroughForm(page, baseUrl, account('admin').email, account('admin').password);
+    await page.getByRole('link', { name: 'Organisation' }).click();
+    await page.getByLabel('Model').selectOption('planck18');
+    await page.getByRole('button', { name: 'Preview the change' }).click();
+    await page.getByRole('button', { name: /Switch to Planck 2018/ }).click();
+    await expect.poll(() => page.getByText(/Switched\. Every statement is being recomputed/).count()).toBe(1);
     expect(errors).toEqual([]);
   });
 });

@@ -1,44 +1,24 @@
 import type { Express } from 'express';
 
-/** One API route as Express will match it: upper-case method and a path template such as `/api/pages/:id`. */
+/** One API route as Express matches it: upper-case method and a path template such as `/api/pages/:id`. */
 export interface RouteEntry {
   method: string;
   path: string;
 }
 
+/** The parts of an Express 5 (router 2) layer the walk reads. */
 interface Layer {
   route?: { path: string | string[]; methods: Record<string, boolean> };
-  handle: { stack?: Layer[] } & object;
-  matchers?: Array<(path: string) => unknown>;
-  regexp?: RegExp;
+  handle: { stack?: Layer[] };
+  /** The path given to `router.use(path, …)`; undefined for a bare `use(fn)`. */
+  rawPath?: string | RegExp | Array<string | RegExp>;
   slash?: boolean;
-  name?: string;
-  keys?: Array<{ name: string }>;
-  // router 2 (Express 5) keeps the mount path string on the layer in `path` only after a match;
-  // the original pattern is recovered from the matcher instead (see mountPath).
 }
 
 /**
- * The mount path of a `router.use(path, …)` layer. Express 5's router compiles the path with
- * path-to-regexp 8 and keeps only a matcher function; we recover the template by asking the
- * matcher to match a probe and reading back the parameters, falling back to the regexp source.
- */
-function mountPath(layer: Layer & Record<string, unknown>): string {
-  if (layer.slash) return '';
-  const matcher = layer.matchers?.[0];
-  const probe = (layer as { __mountPath?: string }).__mountPath;
-  if (probe !== undefined) return probe;
-  if (layer.regexp) return regexpToPath(layer.regexp);
-  throw new Error(`cannot read the mount path of layer ${layer.name ?? '?'} (${String(matcher)})`);
-}
-
-function regexpToPath(re: RegExp): string {
-  return re.source.replace(/^\^/, '').replace(/\\\/\?\(\?=\\\/\|\$\)$/i, '').replace(/\\\//g, '/');
-}
-
-/**
- * Walks the app's router stack, nested routers included, and returns every (method, path).
- * Mount paths are recorded by `recordMountPaths` before the app is built (see below).
+ * Walks the app's router stack, nested routers included (wherever they are mounted), and returns
+ * every (method, path) once. Route layers are read from the router itself, so a new route shows up
+ * here without anyone listing it.
  */
 export function listRoutes(app: Express): RouteEntry[] {
   const found: RouteEntry[] = [];
@@ -63,9 +43,16 @@ function walk(stack: Layer[], prefix: string, out: RouteEntry[]) {
         }
       }
     } else if (layer.handle.stack) {
-      walk(layer.handle.stack, join(prefix, mountPath(layer as Layer & Record<string, unknown>)), out);
+      walk(layer.handle.stack, join(prefix, mountPath(layer)), out);
     }
   }
+}
+
+/** A mount path back as a template; regular-expression mounts are not used in this app and fail loudly. */
+function mountPath(layer: Layer): string {
+  if (layer.slash || layer.rawPath === undefined) return '';
+  if (typeof layer.rawPath === 'string') return layer.rawPath;
+  throw new Error(`a router is mounted on a pattern the route walk cannot read: ${String(layer.rawPath)}`);
 }
 
 function join(a: string, b: string): string {
