@@ -45,10 +45,9 @@ if (config.isProduction) {
 }
 
 const app = createApp({ serveClient: true });
-await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
-// startJobQueue hands back the queue already running.
-await scheduleSkySnapshots(await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!));
-await schedulePageJobs(await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!));
+const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
+await scheduleSkySnapshots(queue);
+await schedulePageJobs(queue);
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
