@@ -27,7 +27,7 @@ export async function demoSession(baseUrl: string, role: 'admin' | 'editor' | 'r
   if (res.status !== 200) throw new Error(`sign-in as ${role}: ${res.status} ${await res.text()}`);
   const cookie = /starproof\.sid=[^;]+/.exec(res.headers.get('set-cookie') ?? '')![0];
   const call: E2eSession['call'] = async (method, path, body) => {
-    const r = await fetch(`${baseUrl}/api${path}`, { method, headers: { Cookie: cookie, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) }, body: body === undefined ? undefined : JSON.stringify(body) });
+    const r = await fetch(`${baseUrl}${path}`, { method, headers: { Cookie: cookie, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) }, body: body === undefined ? undefined : JSON.stringify(body) });
     const text = await r.text();
     return { status: r.status, body: text ? JSON.parse(text) : undefined } as never;
   };
