@@ -3,7 +3,7 @@ import { fileURLToPath, URL } from 'node:url';
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
-import { kioskSizeReport } from './tests/bench/kiosk-size.ts';
+import { bundleBudget } from './tests/bench/bundle-budget.ts';
 
 const alias = {
   '@': fileURLToPath(new URL('./src', import.meta.url)),
@@ -12,7 +12,7 @@ const alias = {
 };
 
 export default defineConfig({
-  plugins: [react(), tailwindcss(), kioskSizeReport()],
+  plugins: [react(), tailwindcss(), bundleBudget()],
   resolve: { alias },
   build: {
     outDir: process.env.STARPROOF_DIST_DIR ?? 'dist',

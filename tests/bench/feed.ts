@@ -16,7 +16,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import autocannon from 'autocannon';
 import { ensureDatabase, localDatabaseUrl, startLocalPostgres } from '../../server/db/local-postgres.ts';
-import { kioskEntrySize } from './kiosk-size.ts';
+import { entrySize } from './bundle-budget.ts';
 
 const dataDir = path.resolve(process.env.BENCH_FEED_PGDATA ?? '.data/bench-feed-pg');
 const port = Number(process.env.BENCH_FEED_PGPORT ?? 54598);
@@ -106,7 +106,7 @@ peer.child.kill('SIGTERM');
 // ---- the kiosk entry's JavaScript
 const dist = path.resolve('.data/bench-feed-dist');
 spawnSync('npx', ['vite', 'build', '--logLevel', 'error'], { env: { ...process.env, STARPROOF_DIST_DIR: dist }, stdio: 'ignore' });
-const size = kioskEntrySize(dist);
+const size = entrySize(dist, 'kiosk.html');
 
 const n = (x: number) => Math.round(x).toLocaleString('en-GB');
 const line = (label: string, r: { requests: { average: number }; latency: { p99: number }; non2xx: number; errors: number }, note = '') =>

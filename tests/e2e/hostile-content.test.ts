@@ -113,7 +113,9 @@ describe('hostile content', () => {
     // The image panel shows the credit and alt text.
     await page.goto(`${baseUrl}/media`);
     await page.getByRole('list', { name: 'Images' }).getByRole('button').first().click();
-    await expect.poll(() => page.getByRole('dialog').innerHTML(), WAIT).toContain('&lt;math&gt;');
+    const details = page.getByRole('form', { name: 'Image details' });
+    await expect.poll(() => details.getByLabel('Credit line').inputValue(), WAIT).toBe(XSS_PAYLOADS[23]);
+    expect(await details.getByLabel('Alt text').inputValue()).toBe(XSS_PAYLOADS[0]);
     await assertInert(page, dialogs, 'image details');
 
     // The public API's HTML, rendered as a site embedding it would, on a page with no CSP at all.
