@@ -9,6 +9,15 @@ export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(NotFoundError(`There is no API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`));
 };
 
+/** Socket errors and PostgreSQL's "shutting down / cannot connect" codes, from pg directly (the session store) or wrapped. */
+const DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
+function isDatabaseDown(err: unknown): boolean {
+  const e = err as { code?: string; parent?: { code?: string }; message?: string } | undefined;
+  if (!e) return false;
+  if (DOWN_CODES.has(e.code ?? '') || DOWN_CODES.has(e.parent?.code ?? '')) return true;
+  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(e.message ?? '');
+}
+
 function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   if (err instanceof ZodError) return zodToValidationError(err);
@@ -22,8 +31,8 @@ function toHttpError(err: unknown): HttpError {
   if (err instanceof ConnectionError || err instanceof TimeoutError) {
     return new HttpError(503, 'database_unavailable', 'The database is not answering. Your work has not been saved; try again in a moment.');
   }
-  if (err instanceof BaseError && /timeout|terminat|ECONNREFUSED/i.test(err.message)) {
-    return new HttpError(503, 'database_unavailable', 'The database is not answering. Try again in a moment.');
+  if ((err instanceof BaseError && /timeout|terminat|ECONNREFUSED/i.test(err.message)) || isDatabaseDown(err)) {
+    return new HttpError(503, 'database_unavailable', 'The database is not answering. Nothing was saved; try again in a moment.');
   }
   if (e?.status && e.status >= 400 && e.status < 500 && e.expose) return new HttpError(e.status, 'bad_request', e.message ?? 'Bad request.');
   return new HttpError(500, 'internal_error', 'Something went wrong on our side. It has been logged.');
