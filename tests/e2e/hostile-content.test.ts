@@ -102,7 +102,7 @@ describe('hostile content', () => {
       ['page editor', `/pages/${planted.pageId}`, 'onerror="window.__pwned=1"'],
       ['page review', `/pages/${planted.pageId}/review`, 'onerror="window.__pwned=1"'],
       ['channel', `/publishing/channels/${planted.channelId}`, 'window.__pwned=1'],
-      ['kiosk preview', `/kiosk?preview=${planted.channelId}`, ''],
+      ['kiosk preview', `/kiosk?preview=${planted.channelId}`, XSS_PAYLOADS[13]],
     ];
     for (const [name, url, visible] of screens) {
       await page.goto(`${baseUrl}${url}`);
@@ -142,6 +142,25 @@ describe('hostile content', () => {
       expect(dangerous, `${file}: cells a spreadsheet would run`).toEqual([]);
       const escaped = rows.flat().filter((c) => /^'[=+\-@\u2212]/.test(c));
       expect(escaped.length, `${file}: the planted formulas are there, escaped`).toBeGreaterThanOrEqual(4);
+    }
+  });
+
+  it('HTML pages (the staff app and the kiosk player) carry the Content-Security-Policy and security headers', async () => {
+    const baseUrl = inject('baseUrl');
+    for (const url of ['/', '/sign-in', '/kiosk']) {
+      const res = await fetch(`${baseUrl}${url}`);
+      expect(res.status, url).toBe(200);
+      expect(res.headers.get('content-type'), url).toMatch(/text\/html/);
+      const csp = res.headers.get('content-security-policy') ?? '';
+      // The kiosk player may be framed by the staff app's own channel preview, and by nothing else.
+      const frames = url === '/kiosk' ? "frame-ancestors 'self'" : "frame-ancestors 'none'";
+      for (const part of ["default-src 'self'", "script-src 'self'", "object-src 'none'", "base-uri 'self'", frames]) expect(csp, url).toContain(part);
+      expect(csp, url).not.toMatch(/script-src[^;]*'unsafe-(inline|eval)'/);
+      expect(res.headers.get('x-content-type-options'), url).toBe('nosniff');
+      expect(res.headers.get('referrer-policy'), url).toBe('no-referrer');
+      expect(res.headers.get('x-powered-by'), url).toBeNull();
+      // No inline script in the HTML itself, or the policy above could not hold.
+      expect(await res.text(), url).not.toMatch(/<script(?![^>]*\bsrc=)[^>]*>/i);
     }
   });
 });

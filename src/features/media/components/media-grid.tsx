@@ -12,8 +12,8 @@ export function MediaGrid({ items, onOpen }: { items: MediaDto[]; onOpen: (id: s
             type="button"
             onClick={() => onOpen(media.id)}
             className="group block w-full overflow-hidden rounded-lg border border-rule bg-panel text-left hover:border-accent"
-            aria-label={`${media.fileName}: details`}
           >
+            {/* No aria-label: the card's own text (name, credit, licence, state) is its accessible name, so speech input users can say what they see. */}
             <div className="flex aspect-[4/3] items-center justify-center bg-wash">
               {media.thumbnailUrl ? (
                 <img src={media.thumbnailUrl} alt={media.altText} className="h-full w-full object-cover" loading="lazy" />
