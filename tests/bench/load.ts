@@ -81,8 +81,8 @@ const requests = [
 
 async function phase(name: string, connections: number, duration: number) {
   const startRss = rssMb();
-  const result = await autocannon({ url: base, connections, duration, requests: requests as never, excludeErrorStats: false });
-  const bad = result.non2xx - (result.statusCodeStats['304']?.count ?? 0);
+  const result = await autocannon({ url: base, connections, duration, requests, excludeErrorStats: false } as never);
+  const bad = result.non2xx - (result.statusCodeStats?.['304']?.count ?? 0);
   console.log(
     `${name}: ${connections} connections, ${duration} s — ${Math.round(result.requests.average)} req/s, ` +
       `p50 ${result.latency.p50} ms, p99 ${result.latency.p99} ms, errors ${bad + result.errors + result.timeouts} ` +

@@ -3,6 +3,7 @@ import { inject } from 'vitest';
 import { startLocalPostgres, stopLocalPostgres } from '../../server/db/local-postgres.ts';
 import { DEMO_ACCOUNTS } from '../../server/demo/accounts.ts';
 import { TEST_CLUSTER } from '../setup/test-postgres.ts';
+import { solidImage } from '../support/media.ts';
 
 const admin = DEMO_ACCOUNTS.find((a) => a.role === 'admin')!;
 
@@ -55,5 +56,15 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage wh
       body: JSON.stringify({ email: 'after.outage@example.test', name: 'After Outage', role: 'writer' }),
     });
     expect(invite.status).toBe(201);
+
+    // Background jobs run again: a new image gets its renditions.
+    const form = new FormData();
+    form.append('file', new Blob([new Uint8Array(await solidImage(800, 600, '#203040'))], { type: 'image/jpeg' }), 'after-outage.jpg');
+    const uploaded = await fetch(`${base}/api/media`, { method: 'POST', headers: { cookie, Origin: base }, body: form });
+    expect(uploaded.status).toBe(201);
+    const mediaId = ((await uploaded.json()) as { data: { id: string } }).data.id;
+    await expect
+      .poll(async () => ((await (await fetch(`${base}/api/media/${mediaId}`, { headers: { cookie } })).json()) as { data: { renditionsStatus: string } }).data.renditionsStatus, { timeout: 60_000, interval: 1000 })
+      .toBe('ready');
   });
 });

@@ -54,7 +54,7 @@ describe('the media library, as a writer uses it', () => {
     await expect.poll(() => form.getByText('Enter a full web address starting with https:// or http://').count(), WAIT).toBe(1);
 
     await form.getByLabel('Alt text').fill('A pink glow of gas among scattered stars');
-    await form.getByLabel('Credit line').fill('Corrie Vale Planetarium (demo)');
+    await form.getByLabel('Credit line').fill('Corrie Vale imaging team (demo)');
     await form.getByLabel('Licence').selectOption('cc-by-4.0');
     await form.getByLabel('Source web address').fill('https://example.org/corrie-vale/orion');
     await panel.getByRole('slider', { name: 'Focal point' }).click({ position: { x: 300, y: 100 } });
@@ -67,7 +67,7 @@ describe('the media library, as a writer uses it', () => {
     // Search by credit finds it; a licence it does not have hides it.
     await panel.getByRole('button', { name: 'Close details' }).click();
     await page.getByLabel('Search in').selectOption('credit');
-    await page.getByLabel('Search', { exact: true }).fill('corrie vale');
+    await page.getByLabel('Search', { exact: true }).fill('imaging team');
     await expect.poll(() => page.getByText('1 image').count(), WAIT).toBe(1);
     await page.getByLabel('Licence').selectOption('cc0-1.0');
     await expect.poll(() => page.getByText('No image matches this search.').count(), WAIT).toBe(1);
