@@ -38,8 +38,11 @@ export function createApp(options: AppOptions = {}) {
   app.disable('x-powered-by');
   // One proxy hop (a load balancer) is trusted for the client address and protocol.
   app.set('trust proxy', 'loopback, uniquelocal');
-  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
   app.use(securityHeaders(https));
+  // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
+  // user loading, none of which it needs (its own errors still reach the error handler and the log).
+  app.use('/api/kiosk/feed', kioskFeedRouter);
+  app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const sessions = sessionMiddleware(databaseUrl, https);
   app.locals.sessionPool = sessions.pool;
@@ -50,8 +53,6 @@ export function createApp(options: AppOptions = {}) {
   api.use(sessions.middleware);
   api.use(loadUser);
   api.use(apiRouter());
-  // Polled by every screen: mounted ahead of the body parser, sessions and user loading, which it never needs.
-  app.use('/api/kiosk/feed', kioskFeedRouter);
   app.use('/api', api);
 
   app.use('/media', mediaFilesRouter);

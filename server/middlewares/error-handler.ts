@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { BaseError, ConnectionError, ForeignKeyConstraintError, UniqueConstraintError, ValidationError as SequelizeValidationError, TimeoutError } from 'sequelize';
 import { ZodError } from 'zod';
 import { HttpError, NotFoundError } from '../errors.ts';
+import { logger } from '../logger.ts';
 import { zodToValidationError } from './validate.ts';
 
 /** Unknown paths under /api answer in JSON, never with the client's HTML. */
@@ -41,7 +42,7 @@ function toHttpError(err: unknown): HttpError {
 /** The one place errors become responses: the error shape, never a stack trace. */
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const httpError = toHttpError(err);
-  if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
+  if (httpError.status >= 500) (req.log ?? logger).error({ err, url: req.originalUrl }, 'request failed');
   if (res.headersSent) return;
   const body: { error: { code: string; message: string; fields?: Record<string, string> } } = {
     error: { code: httpError.code, message: httpError.message },
