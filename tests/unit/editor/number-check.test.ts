@@ -23,7 +23,7 @@ describe('the hand-typed number check', () => {
   });
 
   it.each([
-    ['Messier 87 and 3C 273 are catalogue names.'],
+    ['Messier 87 and 3C 279 are catalogue names.'],
     ['The supernova was seen in 1054.'],
     ['Our volunteer was 40 years old.'],
     ['Two years ago we opened the dome.'],
