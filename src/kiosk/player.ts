@@ -156,12 +156,17 @@ export class Player {
   private swap(id: string, layer: HTMLElement): void {
     const old = this.current?.layer;
     this.root.insertBefore(layer, this.status);
-    // Next frame: the new layer starts transparent, so the opacity transition runs.
-    requestAnimationFrame(() => requestAnimationFrame(() => layer.classList.add('shown')));
-    if (old) {
-      old.classList.remove('shown');
-      window.setTimeout(() => old.remove(), FADE_MS + 100);
-    }
+    // Next frame: the new layer starts transparent, so the opacity transition runs. The old layer
+    // fades out in the same frame, so there is never a moment with no slide on screen.
+    requestAnimationFrame(() =>
+      requestAnimationFrame(() => {
+        layer.classList.add('shown');
+        if (old) {
+          old.classList.remove('shown');
+          window.setTimeout(() => old.remove(), FADE_MS + 100);
+        }
+      }),
+    );
     this.current = { id, layer };
   }
 }
