@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { PageRow } from '@shared/schemas/page.ts';
 import { paths } from '@/config/paths.ts';
 import { PageStatusBadge } from './page-status-badge.tsx';
+import { DataTable } from '@/components/ui/data-table.tsx';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -11,32 +12,19 @@ export const pageHref = (row: PageRow) => (row.status === 'in_review' || row.sta
 /** The pages table: title, object, status, writer, last change. */
 export function PagesTable({ rows }: { rows: PageRow[] }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-      <table className="w-full text-sm">
-        <thead className="sticky top-0 bg-wash text-left text-xs uppercase tracking-wide text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Title</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Object</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Status</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Writer</th>
-            <th scope="col" className="px-4 py-2.5 text-right font-semibold">Last change</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((row) => (
-            <tr key={row.id} className="h-10 border-t border-rule">
-              <td className="px-4 py-2">
-                <Link to={pageHref(row)} className="font-medium text-accent hover:underline">{row.title}</Link>
-                {row.live && row.status !== 'published' && <span className="ml-2 text-xs text-muted">(a published version is live)</span>}
-              </td>
-              <td className="px-4 py-2">{row.object.name}</td>
-              <td className="px-4 py-2"><PageStatusBadge status={row.status} /></td>
-              <td className="px-4 py-2 text-muted">{row.writer.name}</td>
-              <td className="px-4 py-2 text-right tabular-nums text-muted">{when.format(new Date(row.updatedAt))}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable columns={[{ label: 'Title' }, { label: 'Object' }, { label: 'Status' }, { label: 'Writer' }, { label: 'Last change', align: 'right' }]}>
+      {rows.map((row) => (
+        <tr key={row.id} className="h-10 border-t border-rule">
+          <td className="px-4 py-2">
+            <Link to={pageHref(row)} className="font-medium text-accent hover:underline">{row.title}</Link>
+            {row.live && row.status !== 'published' && <span className="ml-2 text-xs text-muted">(a published version is live)</span>}
+          </td>
+          <td className="px-4 py-2">{row.object.name}</td>
+          <td className="px-4 py-2"><PageStatusBadge status={row.status} /></td>
+          <td className="px-4 py-2 text-muted">{row.writer.name}</td>
+          <td className="px-4 py-2 text-right tabular-nums text-muted">{when.format(new Date(row.updatedAt))}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }

@@ -3,38 +3,27 @@ import type { StatementDto } from '@shared/schemas/statement.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
 import { paths } from '@/config/paths.ts';
 import { StatusBadge } from './status-badge.tsx';
+import { DataTable } from '@/components/ui/data-table.tsx';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** Statements with their public text, dense but calm; each row opens the statement. */
 export function StatementsTable({ statements, locale }: { statements: StatementDto[]; locale: StatementLocale }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-      <table className="w-full text-left text-sm">
-        <thead className="sticky top-0 border-b border-rule bg-wash text-xs uppercase tracking-wide text-muted">
-          <tr>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Statement</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Object</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Status</th>
-            <th scope="col" className="px-4 py-2.5 font-semibold">Computed</th>
-          </tr>
-        </thead>
-        <tbody>
-          {statements.map((s) => (
-            <tr key={s.id} className="border-b border-rule align-top last:border-0 hover:bg-wash/60">
-              <td className="max-w-xl px-4 py-2.5">
-                <Link to={paths.statement.href(s.id)} className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline">
-                  {s.texts?.[locale] ?? '—'}
-                </Link>
-                <span className="mt-0.5 block text-xs text-muted">{s.template.title}</span>
-              </td>
-              <td className="px-4 py-2.5">{s.object.name}</td>
-              <td className="px-4 py-2.5"><StatusBadge status={s.status} /></td>
-              <td className="whitespace-nowrap px-4 py-2.5 text-muted">{when.format(new Date(s.computedAt))}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable columns={[{ label: 'Statement' }, { label: 'Object' }, { label: 'Status' }, { label: 'Computed' }]}>
+      {statements.map((s) => (
+        <tr key={s.id} className="border-b border-rule align-top last:border-0 hover:bg-wash/60">
+          <td className="max-w-xl px-4 py-2.5">
+            <Link to={paths.statement.href(s.id)} className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline">
+              {s.texts?.[locale] ?? '—'}
+            </Link>
+            <span className="mt-0.5 block text-xs text-muted">{s.template.title}</span>
+          </td>
+          <td className="px-4 py-2.5">{s.object.name}</td>
+          <td className="px-4 py-2.5"><StatusBadge status={s.status} /></td>
+          <td className="whitespace-nowrap px-4 py-2.5 text-muted">{when.format(new Date(s.computedAt))}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }
