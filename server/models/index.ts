@@ -8,6 +8,7 @@ import { MediaRendition } from './media-rendition.ts';
 import { OrganisationSettings } from './organisation-settings.ts';
 import { OutboxMessage } from './outbox-message.ts';
 import { Statement } from './statement.ts';
+import { CosmologyDescription } from './cosmology-description.ts';
 import { User } from './user.ts';
 import { Venue } from './venue.ts';
 import { KioskScreen } from './kiosk-screen.ts';
@@ -19,7 +20,7 @@ export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
 export type { TokenPurpose } from './auth-token.ts';
 export { CatalogueImport, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue.ts';
 export { Media, MediaRendition };
-export { OrganisationSettings, Statement };
+export { CosmologyDescription, OrganisationSettings, Statement };
 export type { StatementStatus } from './statement.ts';
 export { KioskScreen, SkySnapshot };
 export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff } from './pages.ts';
@@ -38,6 +39,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   initCatalogueModels(sequelize);
 
   OrganisationSettings.initModel(sequelize);
+  CosmologyDescription.initModel(sequelize);
   Statement.initModel(sequelize);
 
   KioskScreen.initModel(sequelize);
@@ -51,6 +53,8 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   AuditEvent.belongsTo(User, { foreignKey: 'actorId', as: 'actor' });
   Media.hasMany(MediaRendition, { foreignKey: 'mediaId', as: 'renditions' });
   Media.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
+
+  Statement.belongsTo(CosmologyDescription, { foreignKey: 'modelId', as: 'modelDescription' });
 
   KioskScreen.belongsTo(Venue, { foreignKey: 'venueId', as: 'venue' });
   Venue.hasMany(KioskScreen, { foreignKey: 'venueId', as: 'screens' });

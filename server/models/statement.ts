@@ -1,5 +1,7 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
 import type { ResolvedModel } from '@shared/schemas/calc.ts';
+import type { StoredWorking } from '@shared/statements/working-codec.ts';
+import type { CosmologyDescription } from './cosmology-description.ts';
 import type { Step } from '@shared/engine/working.ts';
 import type { LocalisedText, UsedInput } from '@shared/statements/index.ts';
 
@@ -9,6 +11,8 @@ export type StatementStatus = 'current' | 'changed' | 'broken';
  * A checked statement: one template applied to one object, with the inputs it used, its result,
  * its public text per locale and its working. `acknowledgedTexts` is the wording last accepted
  * by a reviewer; when a recompute moves the wording away from it the statement is "changed".
+ * The cosmology it assumed is a shared CosmologyDescription row (`modelId`); the working is
+ * stored packed, its step skeletons shared (services/statements/working-store.ts).
  */
 export class Statement extends Model<InferAttributes<Statement>, InferCreationAttributes<Statement>> {
   declare id: CreationOptional<string>;
@@ -27,9 +31,12 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
   declare acknowledgedById: CreationOptional<string | null>;
   declare acknowledgedAt: CreationOptional<Date | null>;
   declare inputs: CreationOptional<UsedInput[]>;
-  declare working: CreationOptional<Step[]>;
+  /** Packed (read it with readWorking); statements computed before packing hold plain steps. */
+  declare working: CreationOptional<StoredWorking | Step[]>;
   declare warnings: CreationOptional<string[]>;
-  declare model: CreationOptional<ResolvedModel | null>;
+  declare modelId: CreationOptional<string | null>;
+  /** Loaded with `include: 'modelDescription'`. */
+  declare modelDescription?: NonAttribute<CosmologyDescription | null>;
   declare settingsVersion: number;
   declare computedAt: Date;
   declare createdById: CreationOptional<string | null>;
@@ -55,9 +62,9 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
         acknowledgedById: { type: DataTypes.UUID },
         acknowledgedAt: { type: DataTypes.DATE },
         inputs: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
-        working: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+        working: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         warnings: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
-        model: { type: DataTypes.JSONB },
+        modelId: { type: DataTypes.CHAR(64) },
         settingsVersion: { type: DataTypes.INTEGER, allowNull: false },
         computedAt: { type: DataTypes.DATE, allowNull: false },
         createdById: { type: DataTypes.UUID },
@@ -66,5 +73,12 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
       },
       { sequelize, tableName: 'statements', modelName: 'statement', underscored: true },
     );
+  }
+
+  // methods
+
+  /** The cosmology this statement assumed (needs `modelDescription` loaded), or null. */
+  get model(): NonAttribute<ResolvedModel | null> {
+    return this.modelDescription?.description ?? null;
   }
 }

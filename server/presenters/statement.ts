@@ -1,10 +1,14 @@
 import { findTemplate } from '@shared/statements/index.ts';
 import type { StatementDto } from '@shared/schemas/statement.ts';
+import type { Step } from '@shared/engine/working.ts';
 import type { SkyObject, Statement, User } from '../models/index.ts';
 import { can } from '../policies/index.ts';
 
-/** The API contract for a statement; the working is included only where asked (it is large). */
-export function presentStatement(statement: Statement, object: Pick<SkyObject, 'id' | 'name' | 'kind'>, viewer: User, { withWorking = false } = {}): StatementDto {
+/**
+ * The API contract for a statement. The working is included only when given (it is large, and
+ * reading it means fetching its skeletons: see readWorking). The cosmology needs `modelDescription` loaded.
+ */
+export function presentStatement(statement: Statement, object: Pick<SkyObject, 'id' | 'name' | 'kind'>, viewer: User, { working }: { working?: Step[] } = {}): StatementDto {
   return {
     id: statement.id,
     object: { id: object.id, name: object.name, kind: object.kind },
@@ -20,7 +24,7 @@ export function presentStatement(statement: Statement, object: Pick<SkyObject, '
     acknowledgedTexts: statement.acknowledgedTexts ?? null,
     acknowledgedAt: statement.acknowledgedAt?.toISOString() ?? null,
     inputs: statement.inputs ?? [],
-    ...(withWorking ? { working: statement.working ?? [] } : {}),
+    ...(working ? { working } : {}),
     warnings: statement.warnings ?? [],
     model: statement.model ?? null,
     computedAt: statement.computedAt.toISOString(),

@@ -6,19 +6,20 @@ import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
 import { NotFoundError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
-import { SkyObject, Statement } from '../models/index.ts';
+import { CosmologyDescription, SkyObject, Statement } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentStatement } from '../presenters/statement.ts';
 import { acceptStatementWording } from '../services/statements/accept.ts';
 import { findOrCreateStatement } from '../services/statements/create.ts';
 import { recomputeStatements } from '../services/statements/recompute.ts';
+import { readWorking } from '../services/statements/working-store.ts';
 
 async function loadStatement(id: string) {
   if (!IdSchema.safeParse(id).success) throw NotFoundError('There is no such statement.');
-  const statement = await Statement.findByPk(id);
+  const statement = await Statement.findByPk(id, { include: [{ model: CosmologyDescription, as: 'modelDescription' }] });
   if (!statement) throw NotFoundError('There is no such statement.');
   const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
-  return { statement, object: object! };
+  return { statement, object: object!, working: await readWorking(statement.working) };
 }
 
 export const statementTemplatesRouter = Router();
@@ -42,6 +43,9 @@ statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (re
   };
   const { rows, count } = await Statement.findAndCountAll({
     where,
+    // The list shows no working: leave it in the database.
+    attributes: { exclude: ['working'] },
+    include: [{ model: CosmologyDescription, as: 'modelDescription' }],
     // Statements that need attention first, then the newest computations.
     order: [[Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'], ['computedAt', 'DESC']],
     limit: q.pageSize,
@@ -55,16 +59,16 @@ statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => 
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'create');
   const { objectId, templateId } = req.body as StatementCreateInput;
-  const { statement, created } = await findOrCreateStatement(objectId, templateId, viewer);
-  const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
-  res.status(created ? 201 : 200).json({ data: presentStatement(statement, object!, viewer, { withWorking: true }) });
+  const { statement: made, created } = await findOrCreateStatement(objectId, templateId, viewer);
+  const { statement, object, working } = await loadStatement(made.id);
+  res.status(created ? 201 : 200).json({ data: presentStatement(statement, object, viewer, { working }) });
 });
 
 statementsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'read');
-  const { statement, object } = await loadStatement(req.params.id as string);
-  res.json({ data: presentStatement(statement, object, viewer, { withWorking: true }) });
+  const { statement, object, working } = await loadStatement(req.params.id as string);
+  res.json({ data: presentStatement(statement, object, viewer, { working }) });
 });
 
 statementsRouter.post('/:id/recompute', async (req, res) => {
@@ -73,13 +77,13 @@ statementsRouter.post('/:id/recompute', async (req, res) => {
   const { statement } = await loadStatement(req.params.id as string);
   await recomputeStatements({ statementIds: [statement.id] });
   const reloaded = await loadStatement(statement.id);
-  res.json({ data: presentStatement(reloaded.statement, reloaded.object, viewer, { withWorking: true }) });
+  res.json({ data: presentStatement(reloaded.statement, reloaded.object, viewer, { working: reloaded.working }) });
 });
 
 statementsRouter.post('/:id/accept', async (req, res) => {
   const viewer = currentUser(req);
-  const { statement, object } = await loadStatement(req.params.id as string);
+  const { statement, object, working } = await loadStatement(req.params.id as string);
   authorize(viewer, 'statement', 'accept', statement);
   await acceptStatementWording(statement, viewer);
-  res.json({ data: presentStatement(statement, object, viewer, { withWorking: true }) });
+  res.json({ data: presentStatement(statement, object, viewer, { working }) });
 });

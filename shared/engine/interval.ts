@@ -7,7 +7,9 @@ import type { ModelView } from './quantities/context.ts';
 import type { QuantitySpec } from './quantities/registry.ts';
 import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
 import { propagate, propagateOne } from './monte-carlo.ts';
-import type { Measurement, MonteCarloOutcome } from './uncertainty.ts';
+import { deviateRange, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+import { localModulus } from './quantities/local-modulus.ts';
+import { exactModulusAt } from './quantities/sample-photometry.ts';
 
 /** The name under which an H0 range is varied. */
 export const H0_KEY = 'H0';
@@ -29,6 +31,22 @@ const DOMAIN: Record<string, (x: number) => boolean> = {
 const DRAW = new Float64Array(SLOT_NAMES.length);
 
 const isVaried = (m: Measurement): boolean => m.minus > 0 || m.plus > 0;
+
+// Small numbers standing for a sampler and a model in a draws key (objects cannot go in a string).
+const identities = new WeakMap<object, number>();
+let nextIdentity = 1;
+function identity(o: object): number {
+  let id = identities.get(o);
+  if (id === undefined) identities.set(o, (id = nextIdentity++));
+  return id;
+}
+
+/** Everything a run's draws depend on besides the fixed deviates: sampler, model, band and every input. */
+function drawsKey(draw: object, view: ModelView, Msun: number, names: string[], all: Record<string, Measurement>): string {
+  let key = `${identity(draw)}|${identity(view)}|${Msun}`;
+  for (const k of names) key += `|${k}=${all[k].value}-${all[k].minus}+${all[k].plus}`;
+  return key;
+}
 
 /**
  * Runs the Monte Carlo for one request.
@@ -57,10 +75,17 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
     return propagateOne(all.z, last, () => propagate({ ...problem, f: (x) => x[Z], last }));
   }
   const varyH0 = varied.includes(H0_KEY);
+  if (spec.modulusInZ && !varyH0 && varied.includes('z')) {
+    const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
+    const z = all.z;
+    env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
+  }
   const split = spec.split?.applies(present) ? spec.split : undefined;
   const draw = split ? split.before : spec.sample;
   return propagate({
     ...problem,
+    // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
+    drawsKey: varied.length > 1 ? drawsKey(draw, view, env.Msun, names, all) : undefined,
     f: (x) => {
       const scale = varyH0 ? x[H0_SLOT] / view.H0 : 1;
       if (!(scale > 0)) return NaN;

@@ -37,6 +37,21 @@ export interface SlotProblem {
    * go through it (the interval is the same as running it on every draw, for less work).
    */
   last?: MonotoneMap;
+  /**
+   * Names everything f's draws depend on (the calculation, the model, every slot's value and
+   * uncertainty). Two runs with the same key draw the same values, so the second reuses the
+   * first's draws: how two statements about one object share one Monte Carlo.
+   */
+  drawsKey?: string;
+}
+
+/** The draws of the last few runs that had no failures, by drawsKey (oldest first). */
+const recentDraws = new Map<string, Float64Array>();
+const RECENT_DRAWS = 4;
+
+function rememberDraws(key: string, draws: Float64Array): void {
+  if (recentDraws.size >= RECENT_DRAWS) recentDraws.delete(recentDraws.keys().next().value as string);
+  recentDraws.set(key, draws.slice());
 }
 
 /** Where a run stands, shared with the draw loop so that a throwing draw can be skipped and the loop resumed. */
@@ -66,6 +81,11 @@ function drawAll(run: Run, p: SlotProblem, slots: Int32Array, centre: Float64Arr
     if (keepInfinite ? r === r : r - r === 0) out[run.kept++] = r;
     else failed();
   }
+}
+
+function finiteAll(a: Float64Array): boolean {
+  for (let i = 0; i < a.length; i++) if (a[i] - a[i] !== 0) return false;
+  return true;
 }
 
 /** True when a monotonic map is finite (and does not throw) at the smallest and largest draw, hence at all. */
@@ -100,6 +120,11 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
     failures.set(who, (failures.get(who) ?? 0) + 1);
   };
   const run: Run = { draw: 0, kept: 0 };
+  const reused = p.drawsKey === undefined ? undefined : recentDraws.get(p.drawsKey);
+  if (reused) {
+    out.set(reused);
+    run.draw = run.kept = SAMPLES;
+  }
   while (run.draw < SAMPLES) {
     try {
       drawAll(run, p, slots, centre, minus, plus, out, failed);
@@ -110,11 +135,13 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
     }
   }
   const kept = out.subarray(0, run.kept);
+  // Only a run where every draw was kept is worth sharing (and then keepInfinite cannot matter).
+  if (!reused && p.drawsKey !== undefined && run.kept === SAMPLES && finiteAll(kept)) rememberDraws(p.drawsKey, kept);
   const last = p.last;
   if (last && run.kept > 0 && !finiteBetween(kept, last)) {
     // Some draws leave the range where the last step is finite: run it on every draw instead.
     releaseScratch(out);
-    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined });
+    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined, drawsKey: undefined });
   }
   const interval = run.kept > 0 ? quantilePair(kept, 0.16, 0.84, last) : { low: NaN, high: NaN };
   const outcome = {

@@ -95,6 +95,30 @@ export function seededDeviates(count: number): Float64Array {
   return deviates;
 }
 
+const ranges = new Map<string, { min: number; max: number }>();
+
+/**
+ * The smallest and largest deviate an input takes over a run: the deviates of position j when n
+ * inputs are varied (draw i reads deviate i × n + j).
+ * @param n how many inputs are varied
+ * @param j the input's position among them
+ */
+export function deviateRange(n: number, j: number): { min: number; max: number } {
+  const key = `${n}:${j}`;
+  let range = ranges.get(key);
+  if (!range) {
+    const d = seededDeviates(SAMPLES * n);
+    range = { min: Infinity, max: -Infinity };
+    for (let i = 0; i < SAMPLES; i++) {
+      const v = d[i * n + j];
+      if (v < range.min) range.min = v;
+      if (v > range.max) range.max = v;
+    }
+    ranges.set(key, range);
+  }
+  return range;
+}
+
 /** The outcome of a Monte Carlo run. */
 export interface MonteCarloOutcome {
   low: number;

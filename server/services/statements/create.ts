@@ -5,6 +5,9 @@ import { SkyObject, Statement, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from '../organisation-settings.ts';
 import { applyOutcome } from './apply-outcome.ts';
+import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
+import { packForStorage } from './working-pack.ts';
+import { saveSkeletons } from './working-store.ts';
 import { buildTemplateContext } from './context.ts';
 
 /**
@@ -26,11 +29,16 @@ export async function findOrCreateStatement(objectId: string, templateId: string
   if (!outcome.ok) {
     throw new HttpError(422, 'statement_not_computable', `“${template.title}” cannot be worked out for ${object.name}: ${outcome.reason}`);
   }
+  const computed = applyOutcome(null, outcome);
+  if (computed.status === 'broken') throw new HttpError(422, 'statement_not_computable', `“${template.title}” cannot be worked out for ${object.name}: ${computed.statusReason}`);
+  const { model, working, ...fields } = computed;
+  const packed = packForStorage(working);
   return getSequelize().transaction(async (transaction) => {
-    const fields = applyOutcome(null, outcome, settings.version);
+    const modelId = model ? await cosmologyDescriptionId(model, transaction) : null;
+    await saveSkeletons(packed.skeletons, transaction);
     const [statement, created] = await Statement.findOrCreate({
       where: { skyObjectId: objectId, templateId },
-      defaults: { ...fields, skyObjectId: objectId, templateId, createdById: actor.id },
+      defaults: { ...fields, working: packed.stored, modelId, settingsVersion: settings.version, computedAt: new Date(), skyObjectId: objectId, templateId, createdById: actor.id },
       transaction,
     });
     if (created) {

@@ -1,13 +1,15 @@
-import { Op, QueryTypes, type WhereOptions } from 'sequelize';
-import { evaluateStatement, type TemplateContext } from '@shared/statements/index.ts';
+import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { defineJob } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
-import { SkyObject, Statement } from '../../models/index.ts';
+import { Statement } from '../../models/index.ts';
 import { getSettings } from '../organisation-settings.ts';
-import { applyOutcome, type ComputedFields } from './apply-outcome.ts';
-import { buildTemplateContexts, type SettingsSnapshot } from './context.ts';
+import { batchModelFor, loadBatchJob } from './batch-load.ts';
+import type { SettingsSnapshot } from './context.ts';
+import type { WriteBatchResult } from './evaluate-batch.ts';
+import { poolSize, runBatch } from './evaluation-pool.ts';
 import { statementEvents } from './events.ts';
+import { saveSkeletons } from './working-store.ts';
 
 /** Which statements to recompute. */
 export type RecomputeScope =
@@ -18,6 +20,7 @@ export type RecomputeScope =
   | { sourceId: string };
 
 const BATCH = 1000;
+/** Batches being written at once, each on its own connection, while later ones are computed. */
 const WRITES_IN_FLIGHT = 2;
 
 /** Raised when the adopted cosmology changed under a running recompute; its results are dropped. */
@@ -32,6 +35,7 @@ export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
 async function idsFor(scope: RecomputeScope): Promise<string[]> {
   if ('statementIds' in scope) return scope.statementIds;
   if ('objectId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
+  // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
   if ('all' in scope) return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
   // Statements whose stored inputs used this measurement or source (GIN index on inputs).
   const probe = 'measurementId' in scope ? { measurementId: scope.measurementId } : { sourceId: scope.sourceId };
@@ -51,57 +55,38 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
   return [...new Set(ids)];
 }
 
-type Row = ComputedFields & { id: string };
-
-/** The statements of one batch with the contexts their templates read (one query for all the objects' measurements). */
-async function loadBatch(ids: string[], settings: SettingsSnapshot): Promise<{ statements: Statement[]; contexts: Map<string, TemplateContext> }> {
-  // Plain rows without the working: applyOutcome reads the previous working only to keep it on a
-  // broken statement, which the UPDATE does in place, and parsing 1,000 workings costs more than the maths.
-  const statements = (await Statement.findAll({
-    attributes: { exclude: ['working'] },
-    where: { id: { [Op.in]: ids } } as WhereOptions<Statement>,
-    raw: true,
-  })) as Statement[];
-  const objectIds = [...new Set(statements.map((s) => s.skyObjectId))];
-  const objects = await SkyObject.findAll({ attributes: ['id', 'name', 'kind'], where: { id: { [Op.in]: objectIds } }, raw: true });
-  return { statements, contexts: await buildTemplateContexts(objects, settings) };
-}
-
-// One UPDATE per batch: the rows travel as a single JSON parameter that PostgreSQL splits into
-// records, so nothing is escaped into SQL text and rows deleted meanwhile stay deleted.
-const UPDATE_BATCH = `
+// The rows of a batch travel as one json parameter that PostgreSQL splits into records, so
+// nothing is escaped into SQL text, and rows deleted meanwhile stay deleted. The accepted wording
+// is set only by a first computation; after that only a reviewer changes it.
+const UPDATE_COMPUTED = `
 UPDATE statements AS s SET
   status = r.status, status_reason = r.status_reason, value = r.value, unit = r.unit,
   interval_low = r.interval_low, interval_high = r.interval_high, significant_figures = r.significant_figures,
-  texts = r.texts, footnotes = r.footnotes, acknowledged_texts = r.acknowledged_texts, inputs = r.inputs,
-  working = CASE WHEN r.status = 'broken' THEN s.working ELSE r.working END, warnings = r.warnings, model = r.model, settings_version = r.settings_version,
-  computed_at = r.computed_at, updated_at = now()
-FROM jsonb_to_recordset($1::jsonb -> 'rows') AS r(
+  texts = r.texts, footnotes = r.footnotes, acknowledged_texts = COALESCE(s.acknowledged_texts, r.acknowledged_texts),
+  inputs = r.inputs, working = r.working, warnings = r.warnings, model_id = r.model_id,
+  settings_version = r.settings_version, computed_at = r.computed_at, updated_at = now()
+FROM json_to_recordset($1::json) AS r(
   id uuid, status text, status_reason text, value float8, unit text, interval_low float8, interval_high float8,
-  significant_figures smallint, texts jsonb, footnotes jsonb, acknowledged_texts jsonb, inputs jsonb, working jsonb,
-  warnings jsonb, model jsonb, settings_version integer, computed_at timestamptz)
+  significant_figures smallint, texts jsonb, footnotes jsonb, acknowledged_texts jsonb, inputs jsonb, working json,
+  warnings jsonb, model_id char(64), settings_version integer, computed_at timestamptz)
 WHERE s.id = r.id`;
 
-const COLUMN_OF: Record<keyof ComputedFields, string> = {
-  status: 'status', statusReason: 'status_reason', value: 'value', unit: 'unit', intervalLow: 'interval_low',
-  intervalHigh: 'interval_high', significantFigures: 'significant_figures', texts: 'texts', footnotes: 'footnotes',
-  acknowledgedTexts: 'acknowledged_texts', inputs: 'inputs', working: 'working', warnings: 'warnings', model: 'model',
-  settingsVersion: 'settings_version', computedAt: 'computed_at',
-};
-
-function asRecord(row: Row): Record<string, unknown> {
-  const record: Record<string, unknown> = { id: row.id };
-  for (const [key, column] of Object.entries(COLUMN_OF)) record[column] = row[key as keyof ComputedFields];
-  return record;
-}
+// A broken statement keeps its last numbers, text and working for review; only its status moves.
+const UPDATE_BROKEN = `
+UPDATE statements AS s SET status = 'broken', status_reason = r.status_reason, settings_version = r.settings_version,
+  computed_at = r.computed_at, updated_at = now()
+FROM json_to_recordset($1::json) AS r(id uuid, status_reason text, settings_version integer, computed_at timestamptz)
+WHERE s.id = r.id`;
 
 /** Writes one batch, inside a transaction that first checks the settings have not moved. */
-async function writeBatch(rows: Row[], settings: SettingsSnapshot): Promise<void> {
-  await getSequelize().transaction(async (transaction) => {
+async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot): Promise<void> {
+  const sequelize = getSequelize();
+  await sequelize.transaction(async (transaction) => {
     const current = await getSettings(transaction, 'share');
     if (current.version !== settings.version) throw new SettingsMovedError('The organisation settings changed during the recompute.');
-    // An object parameter: the driver serialises it once (a string would be scanned again on the way).
-    await getSequelize().query(UPDATE_BATCH, { bind: [{ rows: rows.map(asRecord) }], transaction });
+    await saveSkeletons(result.skeletons, transaction);
+    if (result.computedRows !== '[]') await sequelize.query(UPDATE_COMPUTED, { bind: [result.computedRows], transaction });
+    if (result.brokenRows !== '[]') await sequelize.query(UPDATE_BROKEN, { bind: [result.brokenRows], transaction });
   });
 }
 
@@ -110,40 +95,44 @@ async function writeBatch(rows: Row[], settings: SettingsSnapshot): Promise<void
  * Every batch checks, inside its transaction, that the adopted settings have not moved since the
  * computation started; if they have, the batch is dropped (the change queued its own recompute),
  * so no statement is ever marked current against a model that is no longer adopted.
- * While PostgreSQL writes earlier batches, the next is loaded and computed.
+ * Batches are computed on the worker pool while earlier ones are written; a scope of one batch
+ * is computed inline.
  * @param options.settings compute against this snapshot instead of reading it (a long job's start)
  * @returns how many statements were written, and which changed or broke
+ * @throws SettingsMovedError when the settings changed during the recompute
  */
 export async function recomputeStatements(scope: RecomputeScope, options: { settings?: SettingsSnapshot } = {}): Promise<{ written: number; changed: string[]; broken: string[] }> {
   const settings = options.settings ?? (await currentSettingsSnapshot());
   const ids = await idsFor(scope);
-  const changed: string[] = [];
-  const broken: string[] = [];
-  let written = 0;
-  const writing: Array<Promise<void>> = [];
-  for (let i = 0; i < ids.length; i += BATCH) {
-    const { statements, contexts } = await loadBatch(ids.slice(i, i + BATCH), settings);
-    const rows: Row[] = [];
-    for (const statement of statements) {
-      const ctx = contexts.get(statement.skyObjectId);
-      if (!ctx) continue;
-      const fields = applyOutcome(statement, evaluateStatement(statement.templateId, ctx), settings.version);
-      if (fields.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
-      if (fields.status === 'broken' && statement.status !== 'broken') broken.push(statement.id);
-      rows.push({ ...fields, id: statement.id });
-    }
-    // PostgreSQL parses and stores earlier batches (on their own connections) while this one is computed.
-    if (writing.length >= WRITES_IN_FLIGHT) await writing.shift();
-    const write = writeBatch(rows, settings);
-    // Awaited later; until then a failure must not count as unhandled.
-    write.catch(() => undefined);
-    writing.push(write);
-    written += rows.length;
+  const model = await batchModelFor(settings);
+  const computedAt = new Date();
+  const inline = ids.length <= BATCH;
+  const inFlight = Math.max(1, poolSize()) + WRITES_IN_FLIGHT;
+  const totals = { written: 0, changed: [] as string[], broken: [] as string[] };
+  const running = new Set<Promise<void>>();
+  let failure: unknown;
+  for (let i = 0; i < ids.length && failure === undefined; i += BATCH) {
+    if (running.size >= inFlight) await Promise.race(running);
+    if (failure !== undefined) break;
+    const job = await loadBatchJob(ids.slice(i, i + BATCH), settings, model, { computedAt });
+    const task = runBatch(job, { inline })
+      .then(async (result) => {
+        await writeBatch(result, settings);
+        totals.written += result.written;
+        totals.changed.push(...result.changed);
+        totals.broken.push(...result.broken);
+      })
+      .catch((error: unknown) => {
+        failure ??= error;
+      })
+      .finally(() => running.delete(task));
+    running.add(task);
   }
-  for (const write of writing) await write;
-  if (changed.length) statementEvents.emit('textChanged', { statementIds: changed });
-  if (broken.length) statementEvents.emit('broken', { statementIds: broken });
-  return { written, changed, broken };
+  await Promise.all(running);
+  if (failure !== undefined) throw failure;
+  if (totals.changed.length) statementEvents.emit('textChanged', { statementIds: totals.changed });
+  if (totals.broken.length) statementEvents.emit('broken', { statementIds: totals.broken });
+  return totals;
 }
 
 /** The background job: recompute a scope; a settings change mid-way ends quietly (its own job follows). */

@@ -78,6 +78,8 @@ export interface QuantitySpec {
    * integrand, or cz/H0): when z is the only input varied, only the percentile draws are computed.
    */
   monotoneInZ?: 'increasing' | 'decreasing';
+  /** Set when a draw computes the distance modulus μ(z): a run that varies z may interpolate it. */
+  modulusInZ?: true;
 }
 
 /** A draw split before a monotonic last step; `applies` says for which inputs it holds. */
@@ -155,11 +157,12 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     unit: 'km/s/Mpc', required: ['z'], flrwOnly: true, usesModel: always,
     compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)), sample: (env, x) => sampleHubbleParameter(env, x[Z]),
   },
-  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps, sample: sampleDistanceModulus },
-  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps, sample: sampleAbsoluteMagnitude },
+  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps, sample: sampleDistanceModulus, modulusInZ: true },
+  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps, sample: sampleAbsoluteMagnitude, modulusInZ: true },
   luminosity_ratio_sun: {
     unit: '', ...magnitudeInputs, band: true, usesModel: (p) => p.has('z'), compute: luminosityRatioSteps, sample: sampleLuminosityRatio,
     split: { applies: always, before: sampleAbsoluteMagnitude, last: (env, M) => luminosityRatioSun(M, env.Msun), decreasing: true },
+    modulusInZ: true,
   },
   z_from_lookback_time: {
     unit: '',

@@ -48,6 +48,8 @@ export interface SampleEnv {
   Msun: number;
   /** Bit i set when the input in slot i was given. */
   given: number;
+  /** μ(z) over this run's redshift draws (see local-modulus.ts), or null to compute it exactly. */
+  modulusAt: ((z: number) => number) | null;
 }
 
 /** One draw of a quantity from the inputs in x: NaN where the quantity is not defined. */
@@ -64,7 +66,7 @@ export function sampleEnv(model: ModelView, band: string | undefined, names: Ite
   const sun = band !== undefined && Object.hasOwn(SOLAR_MAGNITUDES, band) ? SOLAR_MAGNITUDES[band] : undefined;
   let given = 0;
   for (const name of names) if (slotOf(name) >= 0) given |= 1 << slotOf(name);
-  return { model, h0Scale: 1, Msun: sun ? sun.absolute : NaN, given };
+  return { model, h0Scale: 1, Msun: sun ? sun.absolute : NaN, given, modulusAt: null };
 }
 
 /**

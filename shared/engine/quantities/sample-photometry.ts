@@ -17,8 +17,15 @@ function sampleLuminosityDistance(env: SampleEnv, x: Float64Array): number {
   return sampleParallax(x[PARALLAX]) / 1e6;
 }
 
+/** μ(z) = 5 log10(d_L(z) / 10 pc) in the draw's model, computed in full. */
+export function exactModulusAt(env: SampleEnv, z: number): number {
+  const dL = env.model.cosmo === null ? sampleLawDistance(env, z) : sampleLuminosity(env, z);
+  return dL > 0 ? distanceModulus(dL) : NaN;
+}
+
 /** μ = 5 log10(d_L / 10 pc). */
 export function sampleDistanceModulus(env: SampleEnv, x: Float64Array): number {
+  if (has(env, Z)) return env.modulusAt !== null ? env.modulusAt(x[Z]) : exactModulusAt(env, x[Z]);
   const dL = sampleLuminosityDistance(env, x);
   return dL > 0 ? distanceModulus(dL) : NaN;
 }

@@ -1,0 +1,80 @@
+import { QueryTypes } from 'sequelize';
+import { resolveModel } from '@shared/engine/model-resolve.ts';
+import type { LocalisedText, StatementLocale, UsedInput } from '@shared/statements/index.ts';
+import { getSequelize } from '../../db.ts';
+import type { StatementStatus } from '../../models/index.ts';
+import type { BatchJob, BatchModel, BatchStatement } from './evaluate-batch.ts';
+import { buildTemplateContexts, type SettingsSnapshot } from './context.ts';
+import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
+
+interface StatementRow {
+  id: string;
+  sky_object_id: string;
+  template_id: string;
+  status: StatementStatus;
+  acknowledged_texts: LocalisedText | null;
+  inputs: UsedInput[];
+  model_label: string | null;
+  model_h0: number | null;
+  preview_text: string | null;
+}
+
+/**
+ * The cosmology a batch computed under these settings names, stored (once) so statements can
+ * reference it. Null when the model cannot be resolved: then every statement that needs it breaks
+ * with the engine's reason, and none names a model.
+ * @param settings the adopted settings
+ */
+export async function batchModelFor(settings: SettingsSnapshot): Promise<BatchModel | null> {
+  let description;
+  try {
+    description = resolveModel(settings.model).description;
+  } catch {
+    return null;
+  }
+  return { id: await cosmologyDescriptionId(description), json: JSON.stringify(description) };
+}
+
+/**
+ * Loads a batch for evaluateBatch: only what deciding the new status needs (not the old working or
+ * texts, which a recompute replaces), the objects, and their preferred measurements, in three queries.
+ * @param ids the statements (those deleted meanwhile are left out)
+ * @param settings the adopted settings
+ * @param model the batch's cosmology (batchModelFor)
+ * @param options.computedAt when the computation counts as made
+ * @param options.previewLocale load each statement's current text in this locale, for a preview
+ */
+export async function loadBatchJob(ids: string[], settings: SettingsSnapshot, model: BatchModel | null, options: { computedAt: Date; previewLocale?: StatementLocale }): Promise<BatchJob> {
+  const sequelize = getSequelize();
+  const rows = await sequelize.query<StatementRow>(
+    `SELECT s.id, s.sky_object_id, s.template_id, s.status, s.acknowledged_texts, s.inputs,
+            d.label AS model_label, (d.description->>'H0')::float8 AS model_h0,
+            CASE WHEN $2::text IS NULL THEN NULL ELSE s.texts->>$2::text END AS preview_text
+       FROM statements s LEFT JOIN cosmology_descriptions d ON d.id = s.model_id
+      WHERE s.id = ANY($1::uuid[])`,
+    { bind: [ids, options.previewLocale ?? null], type: QueryTypes.SELECT },
+  );
+  const objectIds = [...new Set(rows.map((r) => r.sky_object_id))];
+  const objects = objectIds.length
+    ? await sequelize.query<{ id: string; name: string; kind: string }>('SELECT id, name, kind FROM sky_objects WHERE id = ANY($1::uuid[])', { bind: [objectIds], type: QueryTypes.SELECT })
+    : [];
+  const contexts = await buildTemplateContexts(objects, settings);
+  const statements: BatchStatement[] = rows.map((r) => ({
+    id: r.id,
+    skyObjectId: r.sky_object_id,
+    templateId: r.template_id,
+    status: r.status,
+    acknowledgedTexts: r.acknowledged_texts,
+    inputs: r.inputs ?? [],
+    model: r.model_label !== null && r.model_h0 !== null ? { label: r.model_label, H0: r.model_h0 } : null,
+    ...(options.previewLocale ? { previewText: r.preview_text } : {}),
+  }));
+  return {
+    statements,
+    contexts: Object.fromEntries(contexts),
+    model,
+    settingsVersion: settings.version,
+    computedAt: options.computedAt.toISOString(),
+    ...(options.previewLocale ? { previewLocale: options.previewLocale } : {}),
+  };
+}

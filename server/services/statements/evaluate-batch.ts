@@ -1,0 +1,125 @@
+import { evaluateStatement, type StatementLocale, type TemplateContext } from '@shared/statements/index.ts';
+import type { SkeletonJson } from '@shared/statements/working-codec.ts';
+import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
+import { packForStorage } from './working-pack.ts';
+
+/** One statement of a batch, as loaded: what it is and what its last computation was. */
+export interface BatchStatement extends PreviousComputation {
+  id: string;
+  skyObjectId: string;
+  templateId: string;
+  /** Its current public text in the preview's locale (previews only). */
+  previewText?: string | null;
+}
+
+/** The cosmology every statement of the batch is computed under, as stored. */
+export interface BatchModel {
+  /** Its cosmology_descriptions id. */
+  id: string;
+  /** Its description as JSON text: an outcome's model must be exactly this one. */
+  json: string;
+}
+
+/** A batch of statements to compute: plain data, so it can cross to a worker thread. */
+export interface BatchJob {
+  statements: BatchStatement[];
+  /** Each object's template context, by object id. */
+  contexts: Record<string, TemplateContext>;
+  /** Null when the adopted settings use no cosmology a statement could name. */
+  model: BatchModel | null;
+  settingsVersion: number;
+  /** ISO time the computation counts as made. */
+  computedAt: string;
+  /** Set for a preview: report wording changes in this locale, write nothing. */
+  previewLocale?: StatementLocale;
+}
+
+/** A batch computed for writing: the rows as JSON text, ready to be a single query parameter. */
+export interface WriteBatchResult {
+  /** JSON array of computed rows (columns named as in the table). */
+  computedRows: string;
+  /** JSON array of broken rows: id, status_reason, settings_version, computed_at. */
+  brokenRows: string;
+  /** The working skeletons the computed rows refer to, to be saved with them. */
+  skeletons: Array<[string, SkeletonJson]>;
+  written: number;
+  /** Statements that became changed or broken in this batch. */
+  changed: string[];
+  broken: string[];
+}
+
+/** A statement whose public wording (in the preview's locale) or status would move. */
+export interface PreviewChange {
+  statementId: string;
+  newText: string | null;
+  newStatus: 'current' | 'changed' | 'broken';
+  reason: string | null;
+}
+
+/**
+ * Computes a batch: every statement's template against its object's context, with the status
+ * rules of applyOutcome. Statements of one object are computed one after another, so templates
+ * that need the same Monte Carlo share it (the engine keeps the last few runs' draws).
+ * Pure (no database); runs in a worker thread or inline.
+ * @param job the batch
+ * @returns the rows to write, or with `previewLocale` the wording that would move
+ * @throws Error when an outcome names a cosmology other than the batch's (a settings mix-up)
+ */
+export function evaluateBatch(job: BatchJob & { previewLocale: StatementLocale }): PreviewChange[];
+export function evaluateBatch(job: BatchJob): WriteBatchResult;
+export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[] {
+  const ordered = [...job.statements].sort((a, b) => (a.skyObjectId < b.skyObjectId ? -1 : a.skyObjectId > b.skyObjectId ? 1 : 0));
+  const computed: Record<string, unknown>[] = [];
+  const brokenRows: Record<string, unknown>[] = [];
+  const changed: string[] = [];
+  const broken: string[] = [];
+  const preview: PreviewChange[] = [];
+  const skeletons = new Map<string, SkeletonJson>();
+  for (const statement of ordered) {
+    const ctx = job.contexts[statement.skyObjectId];
+    if (!ctx) continue;
+    const result = applyOutcome(statement, evaluateStatement(statement.templateId, ctx));
+    if (job.previewLocale) {
+      const newText = result.status === 'broken' ? null : (result.texts[job.previewLocale] ?? null);
+      if (newText !== (statement.previewText ?? null) || result.status !== statement.status) {
+        preview.push({ statementId: statement.id, newText, newStatus: result.status, reason: result.status === 'broken' ? result.statusReason : null });
+      }
+      continue;
+    }
+    if (result.status === 'broken') {
+      if (statement.status !== 'broken') broken.push(statement.id);
+      brokenRows.push({ id: statement.id, status_reason: result.statusReason, settings_version: job.settingsVersion, computed_at: job.computedAt });
+      continue;
+    }
+    if (result.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
+    let modelId: string | null = null;
+    if (result.model) {
+      if (!job.model || JSON.stringify(result.model) !== job.model.json) throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
+      modelId = job.model.id;
+    }
+    const packed = packForStorage(result.working);
+    for (const entry of packed.skeletons) skeletons.set(...entry);
+    computed.push({
+      id: statement.id,
+      status: result.status,
+      status_reason: result.statusReason,
+      value: result.value,
+      unit: result.unit,
+      interval_low: result.intervalLow,
+      interval_high: result.intervalHigh,
+      significant_figures: result.significantFigures,
+      texts: result.texts,
+      footnotes: result.footnotes,
+      // Only a first computation sets the accepted wording; afterwards only a reviewer does.
+      acknowledged_texts: statement.acknowledgedTexts ? null : result.acknowledgedTexts,
+      inputs: result.inputs,
+      working: packed.stored,
+      warnings: result.warnings,
+      model_id: modelId,
+      settings_version: job.settingsVersion,
+      computed_at: job.computedAt,
+    });
+  }
+  if (job.previewLocale) return preview;
+  return { computedRows: JSON.stringify(computed), brokenRows: JSON.stringify(brokenRows), skeletons: [...skeletons], written: computed.length + brokenRows.length, changed, broken };
+}

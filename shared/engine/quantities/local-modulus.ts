@@ -1,0 +1,71 @@
+/**
+ * The distance modulus over the narrow range of redshifts one Monte Carlo run draws, as a
+ * Chebyshev interpolant: a magnitude's draws then cost a short polynomial each instead of a
+ * logarithm, a table lookup and another logarithm. μ(z) is analytic on any range of positive z,
+ * so the series converges geometrically; the interpolant is checked against the exact modulus at
+ * the ends and between the nodes, and is used only if it agrees everywhere to 1e-11 mag (a
+ * hundredth of what the results are compared to). Otherwise, for instance when the draws reach
+ * z ≤ 0, the run draws exactly as before.
+ */
+
+/** Node counts tried in turn: a narrow range needs few, a wide one (large σ_z) more. */
+const NODE_COUNTS = [12, 24];
+/** Largest difference from the exact modulus allowed anywhere on the range, in magnitudes. */
+export const LOCAL_MODULUS_TOLERANCE = 1e-11;
+
+/**
+ * Builds μ(z) on [lo, hi] from the exact modulus, or null when it cannot be trusted there.
+ * @param exact the exact modulus (NaN where undefined)
+ * @param lo smallest redshift drawn
+ * @param hi largest redshift drawn
+ * @returns the interpolant, or null
+ */
+export function localModulus(exact: (z: number) => number, lo: number, hi: number): ((z: number) => number) | null {
+  if (!(hi > lo) || !(lo > 0)) return null;
+  for (const nodes of NODE_COUNTS) {
+    const at = chebyshev(exact, lo, hi, nodes);
+    if (at) return at;
+  }
+  return null;
+}
+
+/** The interpolant on `nodes` Chebyshev points, or null unless its series has converged and it matches μ between the nodes. */
+function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: number): ((z: number) => number) | null {
+  const mid = 0.5 * (hi + lo);
+  const half = 0.5 * (hi - lo);
+  const f = new Float64Array(nodes);
+  for (let k = 0; k < nodes; k++) {
+    f[k] = exact(mid + half * Math.cos((Math.PI * (k + 0.5)) / nodes));
+    if (!Number.isFinite(f[k])) return null;
+  }
+  const c = new Float64Array(nodes);
+  for (let j = 0; j < nodes; j++) {
+    let s = 0;
+    for (let k = 0; k < nodes; k++) s += f[k] * Math.cos((Math.PI * j * (k + 0.5)) / nodes);
+    c[j] = (2 / nodes) * s;
+  }
+  c[0] *= 0.5;
+  // Converged: the last coefficients, which bound what the series leaves out, are negligible.
+  if (!(Math.abs(c[nodes - 1]) + Math.abs(c[nodes - 2]) <= LOCAL_MODULUS_TOLERANCE / 10)) return null;
+  const scale = 1 / half;
+  // Clenshaw's recurrence for Σ c_j T_j(t), t = (z − mid)/half.
+  const at = (z: number): number => {
+    const t = (z - mid) * scale;
+    const t2 = 2 * t;
+    let b1 = 0;
+    let b2 = 0;
+    for (let j = nodes - 1; j >= 1; j--) {
+      const b = t2 * b1 - b2 + c[j];
+      b2 = b1;
+      b1 = b;
+    }
+    return t * b1 - b2 + c[0];
+  };
+  // The extrema of T_nodes (ends included) lie between the nodes, where the error is largest.
+  for (let k = 0; k <= nodes; k++) {
+    const z = mid + half * Math.cos((Math.PI * k) / nodes);
+    const e = exact(z);
+    if (!(Math.abs(at(z) - e) <= LOCAL_MODULUS_TOLERANCE)) return null;
+  }
+  return at;
+}
