@@ -41,6 +41,8 @@ export function horizonState(events: WindowEvents, altitudeMidDeg: number, h0Deg
 export interface NightContext {
   startMs: number;
   endMs: number;
+  /** Local noon the day after the window ends: how far a stay that begins in the window is followed. */
+  followingEndMs: number;
   midMs: number;
   obs: { ms: number; dark: { from: number; to: number } | null };
   /** "HH:MM" of the observation, for words. */
