@@ -2,9 +2,14 @@ import type { PlanetTonight, SkyEvent } from '@shared/sky/types.ts';
 import { Icon } from '@/components/ui/icon.tsx';
 import { formatAltitude, formatAu, formatKm, formatLightTime } from './sky-format.ts';
 
-function EventCell({ event }: { event: SkyEvent }) {
-  if (event.utc) return <td className="px-3 py-2 tabular-nums">{event.text}</td>;
-  return <td className="px-3 py-2 text-xs text-muted">{event.text}</td>;
+/** A time, or the words for why there is none; `note` adds a line of context beneath. */
+function EventCell({ event, note }: { event: SkyEvent; note?: string }) {
+  return (
+    <td className={`px-3 py-2 ${event.utc ? 'tabular-nums' : 'text-xs text-muted'}`}>
+      {event.text}
+      {note && <span className="block text-xs text-muted">{note}</span>}
+    </td>
+  );
 }
 
 function Visible({ planet }: { planet: PlanetTonight }) {
@@ -45,7 +50,7 @@ export function SkyPlanetsTable({ planets, atTime }: { planets: PlanetTonight[];
               <td className="min-w-44 px-3 py-2"><Visible planet={p} /></td>
               {p.times.state === 'rises-and-sets' ? (
                 <>
-                  <EventCell event={p.times.rise} />
+                  <EventCell event={p.times.rise} note={p.times.earlierSet ? `Up at noon until ${p.times.earlierSet.text}` : undefined} />
                   <EventCell event={p.times.transit} />
                   <EventCell event={p.times.set} />
                 </>
