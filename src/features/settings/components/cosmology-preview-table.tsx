@@ -1,7 +1,7 @@
 import { Link } from 'react-router-dom';
 import type { PreviewRow } from '@shared/schemas/settings.ts';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { paths } from '@/config/paths.ts';
-import { StatusBadge } from '@/features/statements/components/status-badge.tsx';
 
 /** Old and new public text side by side for every statement a model change would move. */
 export function CosmologyPreviewTable({ rows }: { rows: PreviewRow[] }) {
@@ -25,7 +25,7 @@ export function CosmologyPreviewTable({ rows }: { rows: PreviewRow[] }) {
               <td className="px-4 py-3 font-serif text-[15px] text-ink/80">{r.oldText ?? '—'}</td>
               <td className="px-4 py-3">
                 {r.newText ? <p className="font-serif text-[15px]">{r.newText}</p> : <p className="text-broken">{r.reason}</p>}
-                <span className="mt-1 inline-block"><StatusBadge status={r.newStatus} /></span>
+                <span className="mt-1 inline-block"><StatementStatusBadge status={r.newStatus} /></span>
               </td>
             </tr>
           ))}
