@@ -110,7 +110,7 @@ export interface Observation extends SkyEvent {
   skyDark: boolean;
 }
 
-/** Version 2: rise, transit and set come from one stay above the horizon (earlierSet added). */
+/** Version 2: rise, transit and set come from one stay above the horizon (earlierSet added); visibility names a set before dawn. */
 export const SKY_VERSION = 2;
 
 /** Everything the sky-tonight panel and slide show. */

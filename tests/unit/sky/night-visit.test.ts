@@ -101,6 +101,17 @@ describe('other nights at the demo venue', () => {
     expectOneStay(saturn.times);
     expect(saturn.times.summary).toMatch(new RegExp(`^Above the horizon at noon and sets ${saturn.times.earlierSet!.text}; rises again ${saturn.times.rise.text},`));
     expect(saturn.upAfterDusk).toBe(true);
+    expect(saturn.visibility).toMatch(new RegExp(`^\\d+° up in the [a-z-]+ at ${sky.observation.localTime}; sets ${saturn.times.earlierSet!.text}\\.$`));
+  });
+
+  it('the visibility words name a set only when it comes before dawn (2026-11-20: Saturn yes, Uranus no)', () => {
+    const sky = computeSkyTonight({ ...venue, localDate: '2026-11-20' });
+    const [saturn, uranus] = ['saturn', 'uranus'].map((id) => sky.planets.find((p) => p.id === id)!);
+    expect(ms(saturn.times.set.utc)).toBeLessThan(ms(sky.sun.nauticalDawn.utc));
+    expect(saturn.visibility).toMatch(new RegExp(`; sets ${saturn.times.set.text}\\.$`));
+    expect(ms(uranus.times.set.utc)).toBeGreaterThan(ms(sky.sun.nauticalDawn.utc));
+    expect(uranus.aboveHorizon).toBe(true);
+    expect(uranus.visibility).not.toMatch(/sets/);
   });
 
   it('a Moon that does not rise in the window keeps the stay it is in at noon (2026-11-12)', () => {
