@@ -6,6 +6,7 @@ import { StatementStatusBadge } from '@/components/statements/statement-status-b
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
+import { formatSig } from '@/components/working/format-number.ts';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSettings } from '@/features/settings/api/settings.ts';
@@ -59,7 +60,7 @@ export function Component() {
           <StatementStatusBadge status={s.status} />
           {s.interval && s.value != null && (
             <span className="text-sm text-muted tabular-nums">
-              Value {s.value.toPrecision(6)} {s.unit} · 68 % interval {s.interval.low.toPrecision(4)} to {s.interval.high.toPrecision(4)} · worded to {s.significantFigures} significant figure{s.significantFigures === 1 ? '' : 's'}
+              Value {formatSig(s.value)} {s.unit} · 68 % interval {formatSig(s.interval.low, 4)} to {formatSig(s.interval.high, 4)} · worded to {s.significantFigures} significant figure{s.significantFigures === 1 ? '' : 's'}
             </span>
           )}
         </div>
