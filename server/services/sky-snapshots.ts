@@ -2,14 +2,14 @@ import { QueryTypes } from 'sequelize';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { computeSkyTonight } from '@shared/sky/tonight.ts';
 import { isLocalDate, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
-import type { SkyTonight } from '@shared/sky/types.ts';
+import { SKY_VERSION, type SkyTonight } from '@shared/sky/types.ts';
 import { getSequelize } from '../db.ts';
 import { SkySnapshot, Venue } from '../models/index.ts';
 
-/** The venue fields the sky depends on; a snapshot made for other values is stale. */
+/** The venue fields the sky depends on; a snapshot made for other values, or by older rules, is stale. */
 function matchesVenue(sky: SkyTonight, venue: Venue): boolean {
   const o = sky.observer;
-  return o.latitude === venue.latitude && o.longitude === venue.longitude && o.elevationM === venue.elevationM && sky.timeZone === venue.timeZone;
+  return sky.version === SKY_VERSION && o.latitude === venue.latitude && o.longitude === venue.longitude && o.elevationM === venue.elevationM && sky.timeZone === venue.timeZone;
 }
 
 /**

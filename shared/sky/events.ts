@@ -1,5 +1,5 @@
-/** Turning instants into local times and words, and a body's window events into rise/transit/set. */
-import type { WindowEvents } from './body-track.ts';
+/** Turning instants into local times and words, and a body's stay above the horizon into rise/transit/set. */
+import type { NightVisit } from './night-visit.ts';
 import { localDateOf, localTimeOf, nextDate } from './time.ts';
 import type { HorizonState, RiseTransitSetTimes, SkyEvent } from './types.ts';
 
@@ -20,23 +20,27 @@ export function skyEvent(ms: number | null, timeZone: string, localDate: string,
 
 const WINDOW_WORDS = 'between noon today and noon tomorrow';
 
+const lowerFirst = (s: string) => `${s.charAt(0).toLowerCase()}${s.slice(1)}`;
+const sentence = (s: string) => `${s.charAt(0).toUpperCase()}${s.slice(1)}.`;
+
 /**
- * Rise, transit and set in words and local times.
- * @param events what the window search found
+ * Rise, transit and set in words and local times, all three from the same stay above the horizon.
+ * @param visit the stay that matters for the night (nightVisit)
  * @param state which side of the horizon the body keeps (decided by the caller from its altitude)
  * @param timeZone venue time zone
  * @param localDate the night's date
  */
-export function riseTransitSetTimes(events: WindowEvents, state: HorizonState, timeZone: string, localDate: string): RiseTransitSetTimes {
-  const transitMs = events.transits[0] ?? null;
+export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, timeZone: string, localDate: string): RiseTransitSetTimes {
+  const when = (ms: number | null, missing: string) => skyEvent(ms, timeZone, localDate, missing);
   if (state === 'always-up') {
     const words = 'Does not set: above the horizon all day and night (circumpolar)';
-    const transit = skyEvent(transitMs, timeZone, localDate, `No transit ${WINDOW_WORDS}`);
+    const transit = when(visit.transit, `No transit ${WINDOW_WORDS}`);
     return {
       state,
-      rise: skyEvent(null, timeZone, localDate, words),
+      rise: when(null, words),
       transit,
-      set: skyEvent(null, timeZone, localDate, words),
+      set: when(null, words),
+      earlierSet: null,
       summary: `Above the horizon all day and night${transit.utc ? `; highest at ${transit.text}` : ''}.`,
     };
   }
@@ -44,26 +48,23 @@ export function riseTransitSetTimes(events: WindowEvents, state: HorizonState, t
     const words = 'Does not rise: below the horizon all day and night';
     return {
       state,
-      rise: skyEvent(null, timeZone, localDate, words),
-      transit: skyEvent(null, timeZone, localDate, 'Stays below the horizon'),
-      set: skyEvent(null, timeZone, localDate, words),
+      rise: when(null, words),
+      transit: when(null, 'Stays below the horizon'),
+      set: when(null, words),
+      earlierSet: null,
       summary: 'Below the horizon all day and night: it does not rise.',
     };
   }
-  const rise = skyEvent(events.rises[0] ?? null, timeZone, localDate, `Does not rise ${WINDOW_WORDS}`);
-  const transit = skyEvent(transitMs, timeZone, localDate, `No transit ${WINDOW_WORDS}`);
-  const set = skyEvent(events.sets[0] ?? null, timeZone, localDate, `Does not set ${WINDOW_WORDS}`);
-  // In the order they happen: a body already up at noon sets before it rises again.
-  const happened = [
-    { ms: events.rises[0], words: `rises ${rise.text}` },
-    { ms: transitMs ?? undefined, words: `highest ${transit.text}` },
-    { ms: events.sets[0], words: `sets ${set.text}` },
-  ]
-    .filter((e): e is { ms: number; words: string } => e.ms !== undefined)
-    .sort((a, b) => a.ms - b.ms)
-    .map((e) => e.words);
-  if (!rise.utc) happened.push('does not rise again before noon tomorrow');
-  if (!set.utc) happened.push('does not set before noon tomorrow');
-  const sentence = happened.join(', ');
-  return { state, rise, transit, set, summary: `${sentence.charAt(0).toUpperCase()}${sentence.slice(1)}.` };
+  const rise = when(visit.rise, `Does not rise ${WINDOW_WORDS}`);
+  const noTransit = !visit.transitsKnown ? `No transit ${WINDOW_WORDS}` : visit.rise === null ? 'Highest before noon' : 'No transit before it sets';
+  const transit = when(visit.transit, noTransit);
+  const followed = visit.rise === null ? WINDOW_WORDS : `before noon on ${localDateOf(visit.searchedToMs, timeZone)}`;
+  const set = when(visit.set, `Does not set ${followed}`);
+  const earlierSet = visit.earlierSet === null ? null : when(visit.earlierSet, '');
+  const highest = transit.utc ? `, highest ${transit.text}` : '';
+  const setting = set.utc ? `, sets ${set.text}` : `; ${lowerFirst(set.text)}`;
+  if (!rise.utc) return { state, rise, transit, set, earlierSet, summary: sentence(`above the horizon at noon${highest}${setting}; does not rise again before noon tomorrow`) };
+  // A stay under way at noon that ends before the rise is told apart, never paired with it.
+  const start = earlierSet ? `above the horizon at noon and sets ${earlierSet.text}; rises again ${rise.text}` : `rises ${rise.text}`;
+  return { state, rise, transit, set, earlierSet, summary: sentence(`${start}${highest}${setting}`) };
 }

@@ -6,6 +6,7 @@ import { KM_PER_AU, type Ephemeris } from './ephemeris.ts';
 import { riseTransitSetTimes } from './events.ts';
 import type { Observer } from './horizon.ts';
 import { moonPhase } from './moon-phase.ts';
+import { nightVisit } from './night-visit.ts';
 import { moonStandardAltitude } from './rise-set.ts';
 import { placeFor, horizonState, type NightContext } from './sky-place.ts';
 import type { MoonTonight } from './types.ts';
@@ -37,6 +38,6 @@ export function moonTonight(ephemeris: Ephemeris, observer: Observer, night: Nig
     ...place,
     ...phase,
     distanceKm: now.distanceAu * KM_PER_AU,
-    times: riseTransitSetTimes(events, state, night.timeZone, night.localDate),
+    times: riseTransitSetTimes(nightVisit(observer, night, track, events), state, night.timeZone, night.localDate),
   };
 }

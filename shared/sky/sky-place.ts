@@ -41,6 +41,8 @@ export function horizonState(events: WindowEvents, altitudeMidDeg: number, h0Deg
 export interface NightContext {
   startMs: number;
   endMs: number;
+  /** Local noon the day after the window ends: how far a stay that begins in the window is followed. */
+  followingEndMs: number;
   midMs: number;
   obs: { ms: number; dark: { from: number; to: number } | null };
   /** "HH:MM" of the observation, for words. */
@@ -91,7 +93,10 @@ export function describeVisibility(v: VisibilityInput): { upAfterDusk: boolean; 
     return { upAfterDusk, visibility: `Too close to the Sun to see: ${Math.round(v.elongationDeg)}° from it.` };
   }
   if (v.place.aboveHorizon) {
-    return { upAfterDusk, visibility: `${Math.max(0, Math.round(v.place.altitudeDeg))}° up in the ${v.place.direction} at ${v.night.obsLocalTime}.` };
+    // Setting before dawn is what tells an evening planet from one that stays up all night.
+    const setsInDark = v.events.sets.find((t) => t > v.night.obs.ms && t < dark.to);
+    const setting = setsInDark === undefined ? '' : `; sets ${when(setsInDark)}`;
+    return { upAfterDusk, visibility: `${Math.max(0, Math.round(v.place.altitudeDeg))}° up in the ${v.place.direction} at ${v.night.obsLocalTime}${setting}.` };
   }
   if (!upAfterDusk) return { upAfterDusk, visibility: 'Not above the horizon between dusk and dawn.' };
   const laterRise = v.events.rises.find((t) => t > v.night.obs.ms && t < dark.to);

@@ -9,11 +9,12 @@ import { Ephemeris, KM_PER_AU, LIGHT_DAYS_PER_AU } from './ephemeris.ts';
 import { riseTransitSetTimes, skyEvent } from './events.ts';
 import { toHorizontal, type Observer } from './horizon.ts';
 import { moonTonight } from './moon-tonight.ts';
+import { nightVisit } from './night-visit.ts';
 import { STANDARD_ALTITUDE } from './rise-set.ts';
 import { sunNight, type SunNight } from './sun-tonight.ts';
 import { jdeFromJd, jdFromMs, localToMs, nextDate } from './time.ts';
 import { angularSeparationDeg, describeVisibility, horizonState, placeFor, type NightContext } from './sky-place.ts';
-import type { Observation, PlanetTonight, SkyTonight } from './types.ts';
+import { SKY_VERSION, type Observation, type PlanetTonight, type SkyTonight } from './types.ts';
 import { checkSkyRequest, type SkyRequest } from './validate-input.ts';
 
 export type { SkyRequest } from './validate-input.ts';
@@ -78,6 +79,7 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   const ephemeris = options.ephemeris ?? new Ephemeris();
   const startMs = localToMs(localDate, NOON, timeZone);
   const endMs = localToMs(nextDate(localDate), NOON, timeZone);
+  const followingEndMs = localToMs(nextDate(nextDate(localDate)), NOON, timeZone);
   const midMs = (startMs + endMs) / 2;
 
   const sun = sunNight(observer, startMs, endMs, ephemeris, timeZone, localDate);
@@ -92,12 +94,12 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   };
   observation.text = `${observation.text}, ${BASIS_WORDS[obs.basis]}`;
 
-  const night: NightContext = { startMs, endMs, midMs, obs, obsLocalTime: observation.localTime ?? '', obsJde, sunAtObs, timeZone, localDate };
+  const night: NightContext = { startMs, endMs, followingEndMs, midMs, obs, obsLocalTime: observation.localTime ?? '', obsJde, sunAtObs, timeZone, localDate };
   const planets = PLANET_IDS.map((id) => planetTonight(id, ephemeris, observer, night));
   const moon = moonTonight(ephemeris, observer, night);
 
   return {
-    version: 1,
+    version: SKY_VERSION,
     localDate,
     timeZone,
     observer,
@@ -149,6 +151,6 @@ function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, n
     distanceAu: now.distanceAu,
     distanceKm: now.distanceAu * KM_PER_AU,
     lightTimeSeconds: now.distanceAu * LIGHT_DAYS_PER_AU * 86_400,
-    times: riseTransitSetTimes(events, state, night.timeZone, night.localDate),
+    times: riseTransitSetTimes(nightVisit(observer, night, track, events), state, night.timeZone, night.localDate),
   };
 }

@@ -21,12 +21,17 @@ export interface SkyEvent {
 /** Which side of the horizon a body keeps during the window. */
 export type HorizonState = 'rises-and-sets' | 'always-up' | 'always-down';
 
-/** Rise, transit and set between noon on the date and noon the next day. */
+/**
+ * The first rise between noon on the date and noon the next day, and the transit and set of that
+ * same stay above the horizon (the set may fall after noon tomorrow).
+ */
 export interface RiseTransitSetTimes {
   state: HorizonState;
   rise: SkyEvent;
   transit: SkyEvent;
   set: SkyEvent;
+  /** When the body is already up at noon and sets before the rise shown: that set; otherwise null. */
+  earlierSet: SkyEvent | null;
   /** One sentence, e.g. "Rises 19:02, highest 00:41 tomorrow, sets 06:20 tomorrow". */
   summary: string;
 }
@@ -105,9 +110,13 @@ export interface Observation extends SkyEvent {
   skyDark: boolean;
 }
 
+/** Version 2: rise, transit and set come from one stay above the horizon (earlierSet added); visibility names a set before dawn. */
+export const SKY_VERSION = 2;
+
 /** Everything the sky-tonight panel and slide show. */
 export interface SkyTonight {
-  version: 1;
+  /** The shape and rules the snapshot was made with; a stored snapshot of another version is recomputed. */
+  version: typeof SKY_VERSION;
   localDate: string;
   timeZone: string;
   observer: { latitude: number; longitude: number; elevationM: number };

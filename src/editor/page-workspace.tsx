@@ -120,11 +120,14 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
         <div className="min-w-0 space-y-3">
           <label className="block">
             <span className="sr-only">Title</span>
-            <input
+            {/* A textarea that grows, so a long title wraps instead of being cut off beside the side panel; it stays one line of text. */}
+            <textarea
+              rows={1}
               value={title}
               readOnly={!editable}
-              onChange={(e) => { titleRef.current = e.target.value; setTitle(e.target.value); autosave.changed(); }}
-              className="w-full border-0 border-b border-transparent bg-transparent font-serif text-3xl font-semibold text-ink focus:border-accent focus:outline-none"
+              onKeyDown={(e) => { if (e.key === 'Enter') e.preventDefault(); }}
+              onChange={(e) => { const t = e.target.value.replace(/\s*\n\s*/g, ' '); titleRef.current = t; setTitle(t); autosave.changed(); }}
+              className="field-sizing-content w-full resize-none border-0 border-b border-transparent bg-transparent font-serif text-3xl font-semibold text-ink focus:border-accent focus:outline-none"
               aria-label="Title"
             />
           </label>

@@ -1,5 +1,6 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { nightDateAt } from '../../shared/sky/time-zone.ts';
+import { SKY_VERSION } from '../../shared/sky/types.ts';
 import { SkySnapshot, Venue } from '../../server/models/index.ts';
 import { getSkySnapshot, refreshAllVenueSkies } from '../../server/services/sky-snapshots.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
@@ -60,6 +61,17 @@ describe('sky snapshots', () => {
     expect(after!.data.timeZone).toBe('Africa/Johannesburg');
     const res = await agent.get(`/api/venues/${created.id}/sky?date=${tonightThere}`);
     expect(res.body.data.sky.observer.latitude).toBe(-33.9);
+  });
+
+  it('a snapshot stored by older rules is recomputed before it is served', async () => {
+    const venue = await makeVenue('Old Rules Dome', 54.62, -2.95, 'Europe/London');
+    const first = await getSkySnapshot(venue.id, '2026-11-20');
+    expect(first!.data.version).toBe(SKY_VERSION);
+    await SkySnapshot.sequelize!.query(`UPDATE sky_snapshots SET data = jsonb_set(data, '{version}', '1') WHERE id = :id`, { replacements: { id: first!.id } });
+    const again = await getSkySnapshot(venue.id, '2026-11-20');
+    expect(again!.data.version).toBe(SKY_VERSION);
+    expect(again!.data.planets.every((p) => p.times.earlierSet !== undefined)).toBe(true);
+    expect(await SkySnapshot.count({ where: { venueId: venue.id } })).toBe(1);
   });
 
   it('a venue at the north pole says in words that planets do not rise or set', async () => {

@@ -31,7 +31,8 @@ export function formatSig(value: number, digits = 6): string {
   if (!Number.isFinite(value)) return '—';
   if (value === 0) return '0';
   const abs = Math.abs(value);
-  if (abs >= PLAIN_MIN && abs < PLAIN_MAX) return withMinus(trimZeros(value.toPrecision(digits)));
+  // toPrecision itself writes "2.49510e+6" once the integer part has more digits than asked for.
+  if (abs >= PLAIN_MIN && abs < PLAIN_MAX) return withMinus(String(Number(value.toPrecision(digits))));
   const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
   const power = String(Number(exponent)).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
   return `${withMinus(trimZeros(mantissa))} × 10${power}`;

@@ -35,12 +35,16 @@ function ValueRows({ steps, index, values }: { steps: Step[]; index: number; val
       <th scope="row" className="py-1.5 pr-3 text-left font-mono text-[13px] font-normal whitespace-nowrap">
         <SymbolText text={v.symbol} />
       </th>
-      <td className="py-1.5 pr-3">{v.name}</td>
-      <td className="py-1.5 pr-3 text-right whitespace-nowrap tabular-nums">
-        <ValueCell value={v.value} exact={/\bexact\b/.test(v.source)} />
+      <td className="py-1.5 pr-3">
+        {v.name}
+        <span className="block text-xs leading-5 text-muted wrap-anywhere @lg:hidden">{sourceText(steps, index, v)}</span>
       </td>
-      <td className="py-1.5 pr-3 whitespace-nowrap text-muted">{v.unit}</td>
-      <td className="py-1.5 text-xs leading-5 text-muted">{sourceText(steps, index, v)}</td>
+      <td className="py-1.5 pr-3 text-right tabular-nums">
+        <span className="whitespace-nowrap"><ValueCell value={v.value} exact={/\bexact\b/.test(v.source)} /></span>
+        {v.unit && <span className="block text-muted @lg:hidden">{v.unit}</span>}
+      </td>
+      <td className="hidden py-1.5 pr-3 whitespace-nowrap text-muted @lg:table-cell">{v.unit}</td>
+      <td className="hidden py-1.5 text-xs leading-5 text-muted @lg:table-cell">{sourceText(steps, index, v)}</td>
     </tr>
   ));
 }
@@ -60,7 +64,7 @@ function StepItem({ steps, index }: { steps: Step[]; index: number }) {
   const hasValues = step.inputs.length > 0 || step.constants.length > 0;
   const unit = step.result.unit ? ` ${step.result.unit}` : '';
   return (
-    <li className="rounded-lg border border-rule bg-panel">
+    <li className="@container rounded-lg border border-rule bg-panel">
       <div className="flex items-start gap-3 px-4 pt-3.5">
         <span aria-hidden="true" className="mt-px flex size-6 shrink-0 items-center justify-center rounded-full bg-wash text-xs font-semibold text-ink tabular-nums">
           {index + 1}
@@ -70,22 +74,23 @@ function StepItem({ steps, index }: { steps: Step[]; index: number }) {
           {step.title}
         </h3>
       </div>
-      <div className="space-y-3 px-4 pt-2.5 pb-4 sm:pl-13">
+      <div className="space-y-3 px-4 pt-2.5 pb-4 @md:pl-13">
         <p className="overflow-x-auto rounded-md bg-wash px-3 py-2 font-mono text-[14px] leading-6 whitespace-pre-wrap text-ink">
           <span className="sr-only">Formula: </span>
           <SymbolText text={step.formula} />
         </p>
         {hasValues && (
-          <div className="overflow-x-auto">
+          // In a narrow side panel the unit joins the value and the source goes under the quantity.
+          <div className="@container overflow-x-auto">
             <table className="w-full text-sm">
               <caption className="sr-only">Inputs and constants of step {index + 1}</caption>
               <thead className="text-xs text-muted">
                 <tr>
-                  <th scope="col" className="w-20 pb-1 pr-3 text-left font-medium">Symbol</th>
+                  <th scope="col" className="pb-1 pr-3 text-left font-medium @lg:w-20">Symbol</th>
                   <th scope="col" className="pb-1 pr-3 text-left font-medium">Quantity</th>
                   <th scope="col" className="pb-1 pr-3 text-right font-medium">Value</th>
-                  <th scope="col" className="w-20 pb-1 pr-3 text-left font-medium">Unit</th>
-                  <th scope="col" className="w-[38%] pb-1 text-left font-medium">Source</th>
+                  <th scope="col" className="hidden w-20 pb-1 pr-3 text-left font-medium @lg:table-cell">Unit</th>
+                  <th scope="col" className="hidden w-[38%] pb-1 text-left font-medium @lg:table-cell">Source</th>
                 </tr>
               </thead>
               <tbody className="align-baseline">

@@ -1,6 +1,6 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
+import { useStatement } from '@/api/statements.ts';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useStatement } from '@/features/statements/api/statements.ts';
 import { usePageEditorContext } from '../editor-context.tsx';
 
 /**

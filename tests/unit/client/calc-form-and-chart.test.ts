@@ -78,4 +78,10 @@ describe('numbers in the working', () => {
     expect(formatSig(30856775814913670, 16)).toBe('3.085677581491367 × 10¹⁶');
     expect(formatSig(0)).toBe('0');
   });
+
+  it('writes a seven-digit value in plain figures, rounded, never as "e+6"', () => {
+    expect(formatSig(2_495_104.7)).toBe('2495100');
+    expect(formatSig(-1_234_567.89)).toBe('−1234570');
+    expect(formatSig(299_792.458, 16)).toBe('299792.458');
+  });
 });

@@ -8,10 +8,17 @@ import { paths } from '@/config/paths.ts';
 import { useChannels } from '@/features/publishing/api/channels.ts';
 import { ChannelCreateForm } from '@/features/publishing/components/channel-create-form.tsx';
 import { ChannelsTable } from '@/features/publishing/components/channels-table.tsx';
+import { useVenues } from '@/features/venues/api/venues.ts';
+
+/** The new-channel form with the venues to choose from; mounted only while adding, so they load then. */
+function NewChannel({ onCancel }: { onCancel: () => void }) {
+  const venues = useVenues();
+  const navigate = useNavigate();
+  return <ChannelCreateForm venues={venues.data} onDone={(c) => navigate(paths.channel.href(c.id))} onCancel={onCancel} />;
+}
 
 export function Component() {
   const channels = useChannels();
-  const navigate = useNavigate();
   const [adding, setAdding] = useState(false);
   return (
     <>
@@ -28,7 +35,7 @@ export function Component() {
         }
       />
       <div className="space-y-4">
-        {adding && <ChannelCreateForm onDone={(c) => navigate(paths.channel.href(c.id))} onCancel={() => setAdding(false)} />}
+        {adding && <NewChannel onCancel={() => setAdding(false)} />}
         {channels.isPending && <p className="text-sm text-muted">Loading channels…</p>}
         {channels.error && <Notice tone="error">{channels.error.message}</Notice>}
         {channels.data && channels.data.length === 0 && <Notice>No channels yet. Create one, add slides, then choose the screens that show it.</Notice>}

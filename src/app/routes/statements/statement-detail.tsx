@@ -1,16 +1,17 @@
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import { useAcceptStatement, useRecomputeStatement, useStatement } from '@/api/statements.ts';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
+import { formatSig } from '@/components/working/format-number.ts';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
 import { useSettings } from '@/features/settings/api/settings.ts';
-import { useAcceptStatement, useRecomputeStatement, useStatement } from '@/features/statements/api/statements.ts';
 import { StatementInputs } from '@/features/statements/components/statement-inputs.tsx';
 import { StatementTexts } from '@/features/statements/components/statement-texts.tsx';
-import { StatusBadge } from '@/features/statements/components/status-badge.tsx';
 
 const DistanceRedshiftChart = lazy(() => import('@/features/charts/distance-redshift-chart.tsx').then((m) => ({ default: m.DistanceRedshiftChart })));
 
@@ -56,10 +57,10 @@ export function Component() {
       />
       <div className="space-y-8">
         <div className="flex flex-wrap items-center gap-3">
-          <StatusBadge status={s.status} />
+          <StatementStatusBadge status={s.status} />
           {s.interval && s.value != null && (
             <span className="text-sm text-muted tabular-nums">
-              Value {s.value.toPrecision(6)} {s.unit} · 68 % interval {s.interval.low.toPrecision(4)} to {s.interval.high.toPrecision(4)} · worded to {s.significantFigures} significant figure{s.significantFigures === 1 ? '' : 's'}
+              Value {formatSig(s.value)} {s.unit} · 68 % interval {formatSig(s.interval.low, 4)} to {formatSig(s.interval.high, 4)} · worded to {s.significantFigures} significant figure{s.significantFigures === 1 ? '' : 's'}
             </span>
           )}
         </div>

@@ -1,4 +1,5 @@
 import type { ImportReport as Report, ImportRejectionReason } from '@shared/schemas/catalogue-import.ts';
+import { DataTable } from '@/components/ui/data-table.tsx';
 
 const REASONS: Record<ImportRejectionReason, string> = {
   unknown_object: 'Unknown object',
@@ -37,26 +38,15 @@ export function ImportReport({ report }: { report: Report }) {
       </p>
       {report.warnings.map((w) => <p key={w} className="text-sm text-changed">{w}</p>)}
       {report.rejectedCount > 0 && (
-        <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-          <table className="w-full text-left text-sm" aria-label="Rejected rows">
-            <thead className="border-b border-rule bg-wash text-xs uppercase tracking-wide text-muted">
-              <tr>
-                <th scope="col" className="px-4 py-2 font-semibold">Row</th>
-                <th scope="col" className="px-4 py-2 font-semibold">Reason</th>
-                <th scope="col" className="px-4 py-2 font-semibold">What to fix</th>
-              </tr>
-            </thead>
-            <tbody>
-              {report.rejections.map((r) => (
-                <tr key={`${r.row}-${r.reason}`} className="border-b border-rule last:border-0">
-                  <td className="px-4 py-1.5 tabular-nums">{r.row}</td>
-                  <td className="px-4 py-1.5 whitespace-nowrap text-broken">{REASONS[r.reason] ?? r.reason}</td>
-                  <td className="px-4 py-1.5">{r.message}</td>
-                </tr>
-              ))}
-            </tbody>
-          </table>
-        </div>
+        <DataTable caption="Rejected rows" columns={[{ label: 'Row' }, { label: 'Reason' }, { label: 'What to fix' }]}>
+          {report.rejections.map((r) => (
+            <tr key={`${r.row}-${r.reason}`} className="border-b border-rule last:border-0">
+              <td className="px-4 py-1.5 tabular-nums">{r.row}</td>
+              <td className="px-4 py-1.5 whitespace-nowrap text-broken">{REASONS[r.reason] ?? r.reason}</td>
+              <td className="px-4 py-1.5">{r.message}</td>
+            </tr>
+          ))}
+        </DataTable>
       )}
     </div>
   );

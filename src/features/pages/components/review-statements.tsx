@@ -1,7 +1,7 @@
 import type { PageDto, PageStatementDto } from '@shared/schemas/page.ts';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
-import { StatusBadge } from '@/features/statements/components/status-badge.tsx';
 
 function Row({ s, canReview, busy, onSignOff, onWorking }: { s: PageStatementDto; canReview: boolean; busy: boolean; onSignOff: () => void; onWorking: () => void }) {
   const moved = s.signedText !== null && s.text !== s.signedText;
@@ -9,7 +9,7 @@ function Row({ s, canReview, busy, onSignOff, onWorking }: { s: PageStatementDto
     <li className="space-y-2 rounded-md border border-rule p-3">
       <div className="flex flex-wrap items-center justify-between gap-2">
         <span className="text-sm font-medium">{s.templateTitle}<span className="font-normal text-muted"> · {s.objectName}</span></span>
-        <StatusBadge status={s.status} />
+        <StatementStatusBadge status={s.status} />
       </div>
       {moved ? (
         <div className="grid gap-3 sm:grid-cols-2">

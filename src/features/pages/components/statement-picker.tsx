@@ -1,7 +1,7 @@
 import { useState } from 'react';
+import { useCreateStatement, useStatementTemplates } from '@/api/statements.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useCreateStatement, useStatementTemplates } from '@/features/statements/api/statements.ts';
 import { ObjectPicker } from './object-picker.tsx';
 
 /**

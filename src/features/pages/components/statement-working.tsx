@@ -1,11 +1,11 @@
 import { Link } from 'react-router-dom';
+import type { StatementLocale } from '@shared/statements/locales.ts';
+import { useStatement } from '@/api/statements.ts';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
-import { useStatement } from '@/features/statements/api/statements.ts';
-import { StatusBadge } from '@/features/statements/components/status-badge.tsx';
-import type { StatementLocale } from '@shared/statements/locales.ts';
 
 /** A statement's wording and every step of its working, in a panel beside the page. */
 export function StatementWorking({ id, locale, onClose, actions }: { id: string; locale: StatementLocale; onClose: () => void; actions?: React.ReactNode }) {
@@ -23,7 +23,7 @@ export function StatementWorking({ id, locale, onClose, actions }: { id: string;
       {statement.error && <Notice tone="error">{statement.error.message}</Notice>}
       {s && (
         <>
-          <div className="flex items-center gap-2"><StatusBadge status={s.status} /><Link to={paths.statement.href(s.id)} className="text-xs text-accent hover:underline">Open the statement page</Link></div>
+          <div className="flex items-center gap-2"><StatementStatusBadge status={s.status} /><Link to={paths.statement.href(s.id)} className="text-xs text-accent hover:underline">Open the statement page</Link></div>
           <p className="font-serif text-[17px] leading-relaxed">{s.texts?.[locale] ?? 'This statement cannot be worked out.'}</p>
           {s.statusReason && <Notice tone={s.status === 'broken' ? 'error' : 'warning'}>{s.statusReason}</Notice>}
           {actions}

@@ -1,16 +1,18 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { ChannelCreateSchema, type ChannelCreateInput, type ChannelDetailDto } from '@shared/schemas/channel.ts';
+import type { VenueDto } from '@shared/schemas/venue.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useVenues } from '@/features/venues/api/venues.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 import { useCreateChannel } from '../api/channels.ts';
 
-/** A new, empty channel at one of the venues. */
-export function ChannelCreateForm({ onDone, onCancel }: { onDone: (channel: ChannelDetailDto) => void; onCancel: () => void }) {
-  const venues = useVenues();
+/**
+ * A new, empty channel at one of the venues.
+ * @param venues the venues to choose from (undefined while they load)
+ */
+export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueDto[] | undefined; onDone: (channel: ChannelDetailDto) => void; onCancel: () => void }) {
   const create = useCreateChannel();
   const form = useForm<ChannelCreateInput>({ resolver: zodResolver(ChannelCreateSchema), defaultValues: { name: '', venueId: '' } });
   const submit = form.handleSubmit(async (values) => {
@@ -26,7 +28,7 @@ export function ChannelCreateForm({ onDone, onCancel }: { onDone: (channel: Chan
       <TextField label="Channel name" {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
       <SelectField label="Venue" {...form.register('venueId')} error={form.formState.errors.venueId?.message}>
         <option value="">Choose a venue…</option>
-        {venues.data?.map((v) => (
+        {venues?.map((v) => (
           <option key={v.id} value={v.id}>
             {v.name}
           </option>

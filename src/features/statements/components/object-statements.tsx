@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
+import { useCreateStatement, useStatements, useStatementTemplates } from '@/api/statements.ts';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useCreateStatement, useStatements, useStatementTemplates } from '../api/statements.ts';
-import { StatusBadge } from './status-badge.tsx';
 
 /** An object's checked statements, and a picker to add one from a template. */
 export function ObjectStatements({ objectId }: { objectId: string }) {
@@ -25,7 +25,7 @@ export function ObjectStatements({ objectId }: { objectId: string }) {
           <li key={s.id} className="rounded-lg border border-rule bg-panel px-4 py-3">
             <Link to={paths.statement.href(s.id)} className="font-serif text-[16px] leading-snug hover:text-accent hover:underline">{s.texts?.['en-GB'] ?? s.template.title}</Link>
             <div className="mt-1 flex items-center gap-2 text-xs text-muted">
-              <StatusBadge status={s.status} />
+              <StatementStatusBadge status={s.status} />
               {s.template.title}
             </div>
           </li>

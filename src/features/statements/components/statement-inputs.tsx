@@ -1,35 +1,26 @@
 import type { StatementDto } from '@shared/schemas/statement.ts';
+import { DataTable } from '@/components/ui/data-table.tsx';
+import { formatSig } from '@/components/working/format-number.ts';
 
+// Stored values come back from unit conversion with float noise (16399999.999999998); the working shows six figures too.
 const uncertainty = (i: StatementDto['inputs'][number]) =>
-  i.sigma != null ? `± ${i.sigma}` : i.minus != null && i.plus != null ? `−${i.minus} / +${i.plus}` : 'not stated';
+  i.sigma != null ? `± ${formatSig(i.sigma)}` : i.minus != null && i.plus != null ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}` : 'not stated';
 
 /** The preferred measurements the statement used, each with its source. */
 export function StatementInputs({ statement }: { statement: StatementDto }) {
   return (
     <section aria-labelledby="inputs-heading" className="space-y-3">
       <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">Measurements used</h2>
-      <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-        <table className="w-full text-left text-sm">
-          <thead className="border-b border-rule bg-wash text-xs uppercase tracking-wide text-muted">
-            <tr>
-              <th scope="col" className="px-4 py-2 font-semibold">Quantity</th>
-              <th scope="col" className="px-4 py-2 font-semibold">Value</th>
-              <th scope="col" className="px-4 py-2 font-semibold">Uncertainty (68 %)</th>
-              <th scope="col" className="px-4 py-2 font-semibold">Source</th>
-            </tr>
-          </thead>
-          <tbody>
-            {statement.inputs.map((i) => (
-              <tr key={i.measurementId} className="h-10 border-b border-rule last:border-0">
-                <td className="px-4 py-2">{i.quantity.replaceAll('_', ' ')}{i.band ? ` (${i.band})` : ''}</td>
-                <td className="px-4 py-2">{i.value} {i.unit}</td>
-                <td className={`px-4 py-2 ${i.sigma == null && i.minus == null ? 'text-changed' : ''}`}>{uncertainty(i)}</td>
-                <td className="px-4 py-2 text-muted">{i.citation}</td>
-              </tr>
-            ))}
-          </tbody>
-        </table>
-      </div>
+      <DataTable columns={[{ label: 'Quantity' }, { label: 'Value' }, { label: 'Uncertainty (68 %)' }, { label: 'Source' }]}>
+        {statement.inputs.map((i) => (
+          <tr key={i.measurementId} className="h-10 border-b border-rule last:border-0">
+            <td className="px-4 py-2">{i.quantity.replaceAll('_', ' ')}{i.band ? ` (${i.band})` : ''}</td>
+            <td className="px-4 py-2 tabular-nums">{formatSig(i.value)} {i.unit}</td>
+            <td className={`px-4 py-2 tabular-nums ${i.sigma == null && i.minus == null ? 'text-changed' : ''}`}>{uncertainty(i)}</td>
+            <td className="px-4 py-2 text-muted">{i.citation}</td>
+          </tr>
+        ))}
+      </DataTable>
     </section>
   );
 }

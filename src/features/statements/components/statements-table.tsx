@@ -1,9 +1,9 @@
 import { Link } from 'react-router-dom';
 import type { StatementDto } from '@shared/schemas/statement.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
-import { paths } from '@/config/paths.ts';
-import { StatusBadge } from './status-badge.tsx';
+import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { DataTable } from '@/components/ui/data-table.tsx';
+import { paths } from '@/config/paths.ts';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -20,7 +20,7 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
             <span className="mt-0.5 block text-xs text-muted">{s.template.title}</span>
           </td>
           <td className="px-4 py-2.5">{s.object.name}</td>
-          <td className="px-4 py-2.5"><StatusBadge status={s.status} /></td>
+          <td className="px-4 py-2.5"><StatementStatusBadge status={s.status} /></td>
           <td className="whitespace-nowrap px-4 py-2.5 text-muted">{when.format(new Date(s.computedAt))}</td>
         </tr>
       ))}

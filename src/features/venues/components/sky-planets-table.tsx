@@ -1,10 +1,16 @@
 import type { PlanetTonight, SkyEvent } from '@shared/sky/types.ts';
+import { DataTable, type DataColumn } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { formatAltitude, formatAu, formatKm, formatLightTime } from './sky-format.ts';
 
-function EventCell({ event }: { event: SkyEvent }) {
-  if (event.utc) return <td className="px-3 py-2 tabular-nums">{event.text}</td>;
-  return <td className="px-3 py-2 text-xs text-muted">{event.text}</td>;
+/** A time, or the words for why there is none; `note` adds a line of context beneath. */
+function EventCell({ event, note }: { event: SkyEvent; note?: string }) {
+  return (
+    <td className={`px-3 py-2 ${event.utc ? 'tabular-nums' : 'text-xs text-muted'}`}>
+      {event.text}
+      {note && <span className="block text-xs text-muted">{note}</span>}
+    </td>
+  );
 }
 
 function Visible({ planet }: { planet: PlanetTonight }) {
@@ -20,56 +26,50 @@ function Visible({ planet }: { planet: PlanetTonight }) {
   );
 }
 
+const columns = (atTime: string): DataColumn[] => [
+  { label: 'Planet' },
+  { label: 'Up after dusk?' },
+  { label: 'Rises' },
+  { label: 'Highest' },
+  { label: 'Sets' },
+  { label: `At ${atTime}` },
+  { label: 'Distance', align: 'right' },
+  { label: 'Light takes', align: 'right' },
+];
+
 /** The planets tonight: one row each, figures in tabular numerals, words where a time cannot be given. */
 export function SkyPlanetsTable({ planets, atTime }: { planets: PlanetTonight[]; atTime: string }) {
   return (
-    <div className="overflow-x-auto rounded-lg border border-rule bg-panel">
-      <table className="w-full text-left text-[13px] leading-snug">
-        <caption className="sr-only">Planets tonight</caption>
-        <thead className="border-b border-rule bg-wash text-xs uppercase tracking-wide text-muted">
-          <tr>
-            <th scope="col" className="px-3 py-2.5 font-semibold">Planet</th>
-            <th scope="col" className="px-3 py-2.5 font-semibold">Up after dusk?</th>
-            <th scope="col" className="px-3 py-2.5 font-semibold">Rises</th>
-            <th scope="col" className="px-3 py-2.5 font-semibold">Highest</th>
-            <th scope="col" className="px-3 py-2.5 font-semibold">Sets</th>
-            <th scope="col" className="px-3 py-2.5 font-semibold">At {atTime}</th>
-            <th scope="col" className="px-3 py-2.5 text-right font-semibold">Distance</th>
-            <th scope="col" className="px-3 py-2.5 text-right font-semibold">Light takes</th>
-          </tr>
-        </thead>
-        <tbody>
-          {planets.map((p) => (
-            <tr key={p.id} className="border-b border-rule align-top last:border-0">
-              <th scope="row" className="px-3 py-2 font-medium whitespace-nowrap">{p.name}</th>
-              <td className="min-w-44 px-3 py-2"><Visible planet={p} /></td>
-              {p.times.state === 'rises-and-sets' ? (
-                <>
-                  <EventCell event={p.times.rise} />
-                  <EventCell event={p.times.transit} />
-                  <EventCell event={p.times.set} />
-                </>
-              ) : (
-                <td colSpan={3} className="px-3 py-2 text-sm">
-                  <span className="inline-flex items-center gap-1.5">
-                    <Icon name="info" className="size-4 text-muted" />
-                    {p.times.summary}
-                  </span>
-                </td>
-              )}
-              <td className="px-3 py-2 tabular-nums">
-                {formatAltitude(p.altitudeDeg)} {p.direction}
-                {!p.aboveHorizon && <span className="block text-xs text-muted">below the horizon</span>}
-              </td>
-              <td className="px-3 py-2 text-right tabular-nums whitespace-nowrap">
-                {formatAu(p.distanceAu)}
-                <span className="block text-xs text-muted">{formatKm(p.distanceKm)}</span>
-              </td>
-              <td className="px-3 py-2 text-right tabular-nums whitespace-nowrap">{formatLightTime(p.lightTimeSeconds)}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </div>
+    <DataTable compact caption="Planets tonight" columns={columns(atTime)}>
+      {planets.map((p) => (
+        <tr key={p.id} className="border-b border-rule align-top last:border-0">
+          <th scope="row" className="px-3 py-2 font-medium whitespace-nowrap">{p.name}</th>
+          <td className="min-w-44 px-3 py-2"><Visible planet={p} /></td>
+          {p.times.state === 'rises-and-sets' ? (
+            <>
+              <EventCell event={p.times.rise} note={p.times.earlierSet ? `Up at noon until ${p.times.earlierSet.text}` : undefined} />
+              <EventCell event={p.times.transit} />
+              <EventCell event={p.times.set} />
+            </>
+          ) : (
+            <td colSpan={3} className="px-3 py-2 text-sm">
+              <span className="inline-flex items-center gap-1.5">
+                <Icon name="info" className="size-4 text-muted" />
+                {p.times.summary}
+              </span>
+            </td>
+          )}
+          <td className="px-3 py-2 tabular-nums">
+            {formatAltitude(p.altitudeDeg)} {p.direction}
+            {!p.aboveHorizon && <span className="block text-xs text-muted">below the horizon</span>}
+          </td>
+          <td className="px-3 py-2 text-right tabular-nums whitespace-nowrap">
+            {formatAu(p.distanceAu)}
+            <span className="block text-xs text-muted">{formatKm(p.distanceKm)}</span>
+          </td>
+          <td className="px-3 py-2 text-right tabular-nums whitespace-nowrap">{formatLightTime(p.lightTimeSeconds)}</td>
+        </tr>
+      ))}
+    </DataTable>
   );
 }

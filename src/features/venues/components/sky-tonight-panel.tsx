@@ -44,7 +44,8 @@ function MoonCard({ sky }: { sky: SkyTonight }) {
       <dl className="mt-2 divide-y divide-rule text-sm">
         <Row label="Illuminated" value={percent.format(m.illuminatedFraction)} />
         <Row label="Phase angle" value={`${m.phaseAngleDeg.toFixed(1)}°`} />
-        <Row label="Rises" value={m.times.rise.text} />
+        {m.times.earlierSet && <Row label="Up at noon, sets" value={m.times.earlierSet.text} />}
+        <Row label={m.times.earlierSet ? 'Rises again' : 'Rises'} value={m.times.rise.text} />
         <Row label="Sets" value={m.times.set.text} />
         <Row label={`At ${sky.observation.localTime}`} value={`${formatAltitude(m.altitudeDeg)} ${m.direction}${m.aboveHorizon ? '' : ', below the horizon'}`} />
         <Row label="Distance" value={formatKm(m.distanceKm)} />

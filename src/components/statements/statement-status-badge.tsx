@@ -9,7 +9,7 @@ const LOOK: Record<StatementStatusValue, { icon: IconName; className: string }> 
 };
 
 /** A statement's status: a word and an icon, never colour alone. */
-export function StatusBadge({ status }: { status: StatementStatusValue }) {
+export function StatementStatusBadge({ status }: { status: StatementStatusValue }) {
   const look = LOOK[status];
   return (
     <span className={`inline-flex items-center gap-1 rounded-full border px-2 py-0.5 text-xs font-medium ${look.className}`}>
