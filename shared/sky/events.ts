@@ -41,6 +41,7 @@ export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, time
       transit,
       set: when(null, words),
       earlierSet: null,
+      laterRise: null,
       summary: `Above the horizon all day and night${transit.utc ? `; highest at ${transit.text}` : ''}.`,
     };
   }
@@ -52,10 +53,11 @@ export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, time
       transit: when(null, 'Stays below the horizon'),
       set: when(null, words),
       earlierSet: null,
+      laterRise: null,
       summary: 'Below the horizon all day and night: it does not rise.',
     };
   }
-  const rise = when(visit.rise, `Does not rise ${WINDOW_WORDS}`);
+  const rise = when(visit.rise, visit.laterRise !== null ? 'Up at noon' : `Does not rise ${WINDOW_WORDS}`);
   const noTransit = !visit.transitsKnown ? `No transit ${WINDOW_WORDS}` : visit.rise === null ? 'Highest before noon' : 'No transit before it sets';
   const transit = when(visit.transit, noTransit);
   const followed = visit.rise === null ? WINDOW_WORDS : `before noon on ${localDateOf(visit.searchedToMs, timeZone)}`;
@@ -63,8 +65,12 @@ export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, time
   const earlierSet = visit.earlierSet === null ? null : when(visit.earlierSet, '');
   const highest = transit.utc ? `, highest ${transit.text}` : '';
   const setting = set.utc ? `, sets ${set.text}` : `; ${lowerFirst(set.text)}`;
-  if (!rise.utc) return { state, rise, transit, set, earlierSet, summary: sentence(`above the horizon at noon${highest}${setting}; does not rise again before noon tomorrow`) };
+  const laterRise = visit.laterRise === null ? null : when(visit.laterRise, '');
+  if (!rise.utc) {
+    const again = laterRise ? `rises again ${laterRise.text}` : 'does not rise again before noon tomorrow';
+    return { state, rise, transit, set, earlierSet, laterRise, summary: sentence(`above the horizon at noon${highest}${setting}; ${again}`) };
+  }
   // A stay under way at noon that ends before the rise is told apart, never paired with it.
   const start = earlierSet ? `above the horizon at noon and sets ${earlierSet.text}; rises again ${rise.text}` : `rises ${rise.text}`;
-  return { state, rise, transit, set, earlierSet, summary: sentence(`${start}${highest}${setting}`) };
+  return { state, rise, transit, set, earlierSet, laterRise, summary: sentence(`${start}${highest}${setting}`) };
 }

@@ -16,6 +16,8 @@ export interface NightVisit {
   set: number | null;
   /** When the body is up at noon and sets before the rise shown: that set. */
   earlierSet: number | null;
+  /** When the stay shown is the one under way at noon: the next rise in the window, if any. */
+  laterRise: number | null;
   /** Whether transits can be placed at all (not at a geographic pole). */
   transitsKnown: boolean;
   /** How far the set was looked for (local noon the day after the window ends). */
@@ -27,12 +29,16 @@ export interface VisitSearch {
   startMs: number;
   endMs: number;
   followingEndMs: number;
+  /** Tonight's sunset, or null when the Sun does not set. */
+  sunsetMs: number | null;
 }
 
 /**
- * The stay that matters for the night: the one that begins with the first rise in the window and
- * ends at the first set after it, even when that is after noon tomorrow. A body that does not rise
- * in the window keeps the stay it is in at noon.
+ * The stay that matters for the night. A body up at noon that is still up at sunset (an evening
+ * planet) keeps that stay, whose set is tonight's. Otherwise it is the stay that begins with the
+ * first rise in the window and ends at the first set after it, even when that is after noon
+ * tomorrow; a body up at noon that sets in daylight has that set told apart (earlierSet). A body
+ * that does not rise in the window keeps the stay it is in at noon.
  * @param observer where from
  * @param search the window and how far past it to follow a stay
  * @param body the body's positions and standard altitude
@@ -42,9 +48,10 @@ export function nightVisit(observer: Observer, search: VisitSearch, body: Tracka
   const known = { transitsKnown: events.transits.length > 0, searchedToMs: search.followingEndMs };
   const rise = events.rises[0] ?? null;
   const firstSet = events.sets[0] ?? null;
-  if (rise === null) {
+  const upAtNoonTillDark = rise !== null && firstSet !== null && firstSet < rise && search.sunsetMs !== null && firstSet > search.sunsetMs;
+  if (rise === null || upAtNoonTillDark) {
     const transit = events.transits.find((t) => firstSet === null || t < firstSet) ?? null;
-    return { ...known, rise: null, transit, set: firstSet, earlierSet: null };
+    return { ...known, rise: null, transit, set: firstSet, earlierSet: null, laterRise: upAtNoonTillDark ? rise : null };
   }
   let { sets, transits } = events;
   // Only a stay that outlasts the window needs the next day's events.
@@ -55,5 +62,5 @@ export function nightVisit(observer: Observer, search: VisitSearch, body: Tracka
   }
   const set = sets.find((t) => t > rise) ?? null;
   const transit = transits.find((t) => t > rise && (set === null || t < set)) ?? null;
-  return { ...known, rise, transit, set, earlierSet: firstSet !== null && firstSet < rise ? firstSet : null };
+  return { ...known, rise, transit, set, earlierSet: firstSet !== null && firstSet < rise ? firstSet : null, laterRise: null };
 }

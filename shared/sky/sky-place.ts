@@ -43,6 +43,8 @@ export interface NightContext {
   endMs: number;
   /** Local noon the day after the window ends: how far a stay that begins in the window is followed. */
   followingEndMs: number;
+  /** Sunset at the venue tonight (null in polar day or night): a stay that lasts past it is tonight's. */
+  sunsetMs: number | null;
   midMs: number;
   obs: { ms: number; dark: { from: number; to: number } | null };
   /** "HH:MM" of the observation, for words. */

@@ -94,7 +94,7 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   };
   observation.text = `${observation.text}, ${BASIS_WORDS[obs.basis]}`;
 
-  const night: NightContext = { startMs, endMs, followingEndMs, midMs, obs, obsLocalTime: observation.localTime ?? '', obsJde, sunAtObs, timeZone, localDate };
+  const night: NightContext = { startMs, endMs, followingEndMs, sunsetMs: sun.dusk.sunset, midMs, obs, obsLocalTime: observation.localTime ?? '', obsJde, sunAtObs, timeZone, localDate };
   const planets = PLANET_IDS.map((id) => planetTonight(id, ephemeris, observer, night));
   const moon = moonTonight(ephemeris, observer, night);
 

@@ -32,6 +32,8 @@ export interface RiseTransitSetTimes {
   set: SkyEvent;
   /** When the body is already up at noon and sets before the rise shown: that set; otherwise null. */
   earlierSet: SkyEvent | null;
+  /** When the stay shown is the one under way at noon (an evening object): its next rise; otherwise null. */
+  laterRise: SkyEvent | null;
   /** One sentence, e.g. "Rises 19:02, highest 00:41 tomorrow, sets 06:20 tomorrow". */
   summary: string;
 }
@@ -110,8 +112,11 @@ export interface Observation extends SkyEvent {
   skyDark: boolean;
 }
 
-/** Version 2: rise, transit and set come from one stay above the horizon (earlierSet added); visibility names a set before dawn. */
-export const SKY_VERSION = 2;
+/**
+ * Version 2: rise, transit and set come from one stay above the horizon (earlierSet added); visibility
+ * names a set before dawn. Version 3: a body up at noon and still up at sunset keeps tonight's stay.
+ */
+export const SKY_VERSION = 3;
 
 /** Everything the sky-tonight panel and slide show. */
 export interface SkyTonight {

@@ -79,14 +79,15 @@ describe('Meeus worked examples (recalled from memory)', () => {
 
   it('Example 15.a end to end: our own Venus positions give the same times within a minute', () => {
     // Boston keeps EST (UTC−5) in March 1988: rise 12h25m UT = 07:25, transit 19h41m UT = 14:41.
-    // The set of 2h55m UT on the 20th is before our noon-to-noon window; the next one, about
-    // 24 hours later, is 22:0x on the 20th local time (2h5x UT on the 21st).
+    // Venus was an evening star: up at noon on the 19th and still up after sunset, so the night's
+    // stay is the one under way, and the book's rise (07:25 on the 20th) is the next rise after it.
     const sky = computeSkyTonight({ latitude: 42.3333, longitude: -71.0833, elevationM: 0, timeZone: 'America/New_York', localDate: '1988-03-19', now: 0 });
     const venus = sky.planets.find((p) => p.id === 'venus')!;
     const minutesOff = (utc: string | null, hh: number, mm: number, day: number) =>
       Math.abs((Date.parse(utc!) - Date.UTC(1988, 2, day, hh, mm)) / 60_000);
-    expect(minutesOff(venus.times.rise.utc, 12, 25, 20)).toBeLessThanOrEqual(1.5);
-    expect(venus.times.rise.text).toBe('07:25 tomorrow');
+    expect(minutesOff(venus.times.laterRise!.utc, 12, 25, 20)).toBeLessThanOrEqual(1.5);
+    expect(venus.times.laterRise!.text).toBe('07:25 tomorrow');
+    expect(venus.times.rise.text).toBe('Up at noon');
   });
 
   it('Example 48.a: the Moon’s illuminated fraction, 1992 April 12 0h TD', () => {

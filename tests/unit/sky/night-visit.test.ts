@@ -92,16 +92,22 @@ describe('the night of 2026-11-20 at the demo venue', () => {
 });
 
 describe('other nights at the demo venue', () => {
-  it('an evening planet (Saturn on 2027-01-10) sets after dark before its next rise, and the sentence says so', () => {
+  it('an evening planet (Saturn on 2027-01-10), up at noon and still up at sunset, shows tonight’s set, not tomorrow’s stay', () => {
     const sky = computeSkyTonight({ ...venue, localDate: '2027-01-10' });
     const saturn = sky.planets.find((p) => p.id === 'saturn')!;
-    const earlier = ms(saturn.times.earlierSet!.utc);
-    expect(earlier).toBeGreaterThan(ms(sky.sun.nauticalDusk.utc));
-    expect(ms(saturn.times.rise.utc)).toBeGreaterThan(ms(sky.sun.sunrise.utc));
-    expectOneStay(saturn.times);
-    expect(saturn.times.summary).toMatch(new RegExp(`^Above the horizon at noon and sets ${saturn.times.earlierSet!.text}; rises again ${saturn.times.rise.text},`));
+    const set = ms(saturn.times.set.utc);
+    expect(saturn.times.earlierSet).toBeNull();
+    expect(saturn.times.rise).toMatchObject({ utc: null, text: 'Up at noon' });
+    expect(set).toBeGreaterThan(ms(sky.sun.nauticalDusk.utc));
+    expect(saturn.times.set.localDate).toBe('2027-01-10');
+    expect(staysThroughout('saturn', ms(sky.window.startUtc), set, true)).toBe(true);
+    // The next rise is told apart, after the set and not paired with it.
+    const later = ms(saturn.times.laterRise!.utc);
+    expect(later).toBeGreaterThan(ms(sky.sun.sunrise.utc));
+    expect(staysThroughout('saturn', set, later, false)).toBe(true);
+    expect(saturn.times.summary).toMatch(new RegExp(`^Above the horizon at noon.*, sets ${saturn.times.set.text}; rises again ${saturn.times.laterRise!.text}\\.$`));
     expect(saturn.upAfterDusk).toBe(true);
-    expect(saturn.visibility).toMatch(new RegExp(`^\\d+° up in the [a-z-]+ at ${sky.observation.localTime}; sets ${saturn.times.earlierSet!.text}\\.$`));
+    expect(saturn.visibility).toMatch(new RegExp(`^\\d+° up in the [a-z-]+ at ${sky.observation.localTime}; sets ${saturn.times.set.text}\\.$`));
   });
 
   it('the visibility words name a set only when it comes before dawn (2026-11-20: Saturn yes, Uranus no)', () => {
@@ -127,7 +133,7 @@ describe('other nights at the demo venue', () => {
 describe('words for a stay that cannot be given in full', () => {
   const start = Date.UTC(2026, 10, 20, 12);
   const words = (visit: Parameters<typeof riseTransitSetTimes>[0]) => riseTransitSetTimes(visit, 'rises-and-sets', 'Europe/London', '2026-11-20');
-  const base = { rise: null, transit: null, set: null, earlierSet: null, transitsKnown: true, searchedToMs: start + 48 * 60 * MINUTE };
+  const base = { rise: null, transit: null, set: null, earlierSet: null, laterRise: null, transitsKnown: true, searchedToMs: start + 48 * 60 * MINUTE };
 
   it('up at noon and past its highest: "Highest before noon", not a time from another stay', () => {
     const t = words({ ...base, set: start + 3 * 60 * MINUTE });

@@ -47,7 +47,7 @@ export function SkyPlanetsTable({ planets, atTime }: { planets: PlanetTonight[];
           <td className="min-w-44 px-3 py-2"><Visible planet={p} /></td>
           {p.times.state === 'rises-and-sets' ? (
             <>
-              <EventCell event={p.times.rise} note={p.times.earlierSet ? `Up at noon until ${p.times.earlierSet.text}` : undefined} />
+              <EventCell event={p.times.rise} note={p.times.earlierSet ? `Up at noon until ${p.times.earlierSet.text}` : p.times.laterRise ? `Rises again ${p.times.laterRise.text}` : undefined} />
               <EventCell event={p.times.transit} />
               <EventCell event={p.times.set} />
             </>

@@ -47,6 +47,7 @@ function MoonCard({ sky }: { sky: SkyTonight }) {
         {m.times.earlierSet && <Row label="Up at noon, sets" value={m.times.earlierSet.text} />}
         <Row label={m.times.earlierSet ? 'Rises again' : 'Rises'} value={m.times.rise.text} />
         <Row label="Sets" value={m.times.set.text} />
+        {m.times.laterRise && <Row label="Rises again" value={m.times.laterRise.text} />}
         <Row label={`At ${sky.observation.localTime}`} value={`${formatAltitude(m.altitudeDeg)} ${m.direction}${m.aboveHorizon ? '' : ', below the horizon'}`} />
         <Row label="Distance" value={formatKm(m.distanceKm)} />
       </dl>
