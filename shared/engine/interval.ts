@@ -9,7 +9,8 @@ import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-e
 import { propagate, propagateOne } from './monte-carlo.ts';
 import { deviateRange, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 import { localModulus } from './quantities/local-modulus.ts';
-import { exactModulusAt } from './quantities/sample-photometry.ts';
+import { exactModulusAt, sampleLuminosityRatio } from './quantities/sample-photometry.ts';
+import type { Sampler } from './quantities/sample-env.ts';
 
 /** The name under which an H0 range is varied. */
 export const H0_KEY = 'H0';
@@ -41,9 +42,13 @@ function identity(o: object): number {
   return id;
 }
 
-/** Everything a run's draws depend on besides the fixed deviates: sampler, model, band and every input. */
-function drawsKey(draw: object, view: ModelView, Msun: number, names: string[], all: Record<string, Measurement>): string {
-  let key = `${identity(draw)}|${identity(view)}|${Msun}`;
+/**
+ * Everything a run's draws depend on besides the fixed deviates: sampler, model, every input, and
+ * the band for the one sampler that reads it (the luminosity ratio in full; split runs draw the
+ * absolute magnitude, which a brightness statement about the same object draws too).
+ */
+function drawsKey(draw: Sampler, view: ModelView, Msun: number, names: string[], all: Record<string, Measurement>): string {
+  let key = `${identity(draw)}|${identity(view)}|${draw === sampleLuminosityRatio ? Msun : ''}`;
   for (const k of names) key += `|${k}=${all[k].value}-${all[k].minus}+${all[k].plus}`;
   return key;
 }

@@ -42,6 +42,40 @@ const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/gi;
 /** Marks where data was taken out of a text; never part of the working's own text. */
 const HOLE = '\u0000';
 
+// Texts seen before (names and sources repeat from statement to statement) are split once.
+const HOLLOWED_LIMIT = 20_000;
+const hollowedTexts = new Map<string, Hollowed>();
+// A step's skeleton by its signature (its hollowed texts joined), per id function: building and
+// hashing the JSON happens once per distinct skeleton, not once per step.
+const SKELETON_LIMIT = 5_000;
+const skeletonsBySignature = new WeakMap<object, Map<string, { id: string; json: SkeletonJson }>>();
+
+const remember = <K, V>(map: Map<K, V>, limit: number, key: K, value: V): V => {
+  if (map.size >= limit) map.delete(map.keys().next().value as K);
+  map.set(key, value);
+  return value;
+};
+
+/** A text with its data taken out: the text with holes, and what filled them, in order. */
+interface Hollowed {
+  text: string;
+  data: string[];
+  /** False when the text holds the signature separator, so a signature could not tell it apart. */
+  plain: boolean;
+}
+
+const SEPARATOR = '\u0001';
+
+function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
+  const hit = cache ? hollowedTexts.get(text) : undefined;
+  if (hit) return hit;
+  // PostgreSQL text cannot hold NUL, so no stored citation can; the engine never writes one.
+  if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
+  const data: string[] = [];
+  const out = { text: text.replace(pattern, (found) => (data.push(found), HOLE)), data, plain: !text.includes(SEPARATOR) };
+  return cache ? remember(hollowedTexts, HOLLOWED_LIMIT, text, out) : out;
+}
+
 /**
  * Packs a working for storage.
  * @param steps the working as the engine and templates wrote it
@@ -49,42 +83,62 @@ const HOLE = '\u0000';
  * @returns what the statement stores, and every skeleton it refers to by id
  */
 export function packWorking(steps: Step[], idOf: (skeleton: SkeletonJson) => string): { stored: StoredWorking; skeletons: Map<string, SkeletonJson> } {
+  let known = skeletonsBySignature.get(idOf);
+  if (!known) skeletonsBySignature.set(idOf, (known = new Map()));
   const skeletons = new Map<string, SkeletonJson>();
   const w = steps.map((step) => {
-    const data: Array<number | string> = [];
-    const hollow = (text: string, pattern: RegExp): string => {
-      // PostgreSQL text cannot hold NUL, so no stored citation can; the engine never writes one.
-      if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
-      return text.replace(pattern, (found) => {
-        data.push(found);
-        return HOLE;
-      });
+    const row: [string, ...Array<number | string>] = [''];
+    const signature: string[] = [step.title, step.formula];
+    let plain = !step.title.includes(SEPARATOR) && !step.formula.includes(SEPARATOR);
+    const values = (list: WorkingValue[]) => {
+      signature.push(String(list.length));
+      for (const v of list) {
+        const name = hollowed(v.name, NUMBER, true);
+        const source = hollowed(v.source, UUID, true);
+        row.push(v.value, ...name.data, ...source.data);
+        signature.push(v.symbol, name.text, typeof v.value === 'string' ? 't' : 'n', v.unit, source.text);
+        plain &&= name.plain && source.plain && !v.symbol.includes(SEPARATOR) && !v.unit.includes(SEPARATOR);
+      }
     };
-    const value = (v: WorkingValue): SkeletonValue => {
-      data.push(v.value);
-      return {
-        symbol: v.symbol,
-        name: hollow(v.name, NUMBER),
-        ...(typeof v.value === 'string' ? { text: true as const } : {}),
-        unit: v.unit,
-        source: hollow(v.source, UUID),
-      };
-    };
-    const skeleton: Skeleton = {
-      title: step.title,
-      formula: step.formula,
-      inputs: step.inputs.map(value),
-      constants: step.constants.map(value),
-      result: { symbol: step.result.symbol, name: hollow(step.result.name, NUMBER), unit: step.result.unit },
-    };
-    data.push(step.result.value);
-    if (step.note !== undefined) skeleton.note = hollow(step.note, NUMBER);
-    const json = JSON.stringify(skeleton);
-    const id = idOf(json);
-    skeletons.set(id, json);
-    return [id, ...data] as [string, ...Array<number | string>];
+    values(step.inputs);
+    values(step.constants);
+    const resultName = hollowed(step.result.name, NUMBER, true);
+    row.push(...resultName.data, step.result.value);
+    signature.push(step.result.symbol, resultName.text, step.result.unit);
+    // Notes mostly carry this statement's numbers: split them without keeping them.
+    const note = step.note === undefined ? undefined : hollowed(step.note, NUMBER, false);
+    if (note) row.push(...note.data);
+    signature.push(note === undefined ? '' : `n${note.text}`);
+    plain &&= resultName.plain && (note?.plain ?? true) && !step.result.symbol.includes(SEPARATOR) && !step.result.unit.includes(SEPARATOR);
+    // A text holding the separator could make two different steps sign alike: such a step skips the memo.
+    const key = plain ? signature.join(SEPARATOR) : null;
+    const entry = key === null ? skeletonEntry(step, idOf) : (known.get(key) ?? remember(known, SKELETON_LIMIT, key, skeletonEntry(step, idOf)));
+    row[0] = entry.id;
+    skeletons.set(entry.id, entry.json);
+    return row;
   });
   return { stored: { v: 2, w }, skeletons };
+}
+
+/** The skeleton of a step (its texts hollowed as packWorking does), with its id. */
+function skeletonEntry(step: Step, idOf: (skeleton: SkeletonJson) => string): { id: string; json: SkeletonJson } {
+  const value = (v: WorkingValue): SkeletonValue => ({
+    symbol: v.symbol,
+    name: hollowed(v.name, NUMBER, true).text,
+    ...(typeof v.value === 'string' ? { text: true as const } : {}),
+    unit: v.unit,
+    source: hollowed(v.source, UUID, true).text,
+  });
+  const skeleton: Skeleton = {
+    title: step.title,
+    formula: step.formula,
+    inputs: step.inputs.map(value),
+    constants: step.constants.map(value),
+    result: { symbol: step.result.symbol, name: hollowed(step.result.name, NUMBER, true).text, unit: step.result.unit },
+  };
+  if (step.note !== undefined) skeleton.note = hollowed(step.note, NUMBER, false).text;
+  const json = JSON.stringify(skeleton);
+  return { id: idOf(json), json };
 }
 
 /** The skeleton ids a stored working refers to (none for a working stored in full). */

@@ -54,6 +54,20 @@ describe('the stored form of a working', () => {
     expect(() => unpackWorking(stored, () => undefined)).toThrow(/not stored/);
   });
 
+  it('never mixes up two steps whose texts differ only around a separator character', () => {
+    const step = (name: string, unit: string): Step => ({ title: 'Same title', formula: 'x', inputs: [{ symbol: 'a', name, value: 1, unit, source: 's' }], constants: [], result: { symbol: 'r', name: 'r', value: 2, unit: '' } });
+    const one = [step('left\u0001middle', 'right')];
+    const two = [step('left', 'middle\u0001right')];
+    const store = new Map<string, string>();
+    const packed = [one, two].map((w) => {
+      const { stored, skeletons } = packWorking(w, skeletonId);
+      skeletons.forEach((json, id) => store.set(id, json));
+      return stored;
+    });
+    expect(unpackWorking(packed[0], (id) => store.get(id))).toEqual(one);
+    expect(unpackWorking(packed[1], (id) => store.get(id))).toEqual(two);
+  });
+
   it('refuses a text holding the character it uses to mark data', () => {
     const step: Step = { title: 't', formula: 'f', inputs: [], constants: [], result: { symbol: 'x', name: 'bad\u0000name', value: 1, unit: '' } };
     expect(() => packWorking([step], skeletonId)).toThrow(/NUL/);
