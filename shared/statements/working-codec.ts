@@ -72,7 +72,14 @@ function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
   // PostgreSQL text cannot hold NUL, so no stored citation can; the engine never writes one.
   if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
   const data: string[] = [];
-  const out = { text: text.replace(pattern, (found) => (data.push(found), HOLE)), data, plain: !text.includes(SEPARATOR) };
+  let out: Hollowed;
+  if (pattern.test(text)) {
+    pattern.lastIndex = 0;
+    out = { text: text.replace(pattern, (found) => (data.push(found), HOLE)), data, plain: !text.includes(SEPARATOR) };
+  } else {
+    out = { text, data, plain: !text.includes(SEPARATOR) };
+  }
+  pattern.lastIndex = 0;
   return cache ? remember(hollowedTexts, HOLLOWED_LIMIT, text, out) : out;
 }
 
@@ -86,38 +93,50 @@ export function packWorking(steps: Step[], idOf: (skeleton: SkeletonJson) => str
   let known = skeletonsBySignature.get(idOf);
   if (!known) skeletonsBySignature.set(idOf, (known = new Map()));
   const skeletons = new Map<string, SkeletonJson>();
-  const w = steps.map((step) => {
+  const w: StoredWorking['w'] = [];
+  for (const step of steps) {
     const row: [string, ...Array<number | string>] = [''];
     const signature: string[] = [step.title, step.formula];
     let plain = !step.title.includes(SEPARATOR) && !step.formula.includes(SEPARATOR);
-    const values = (list: WorkingValue[]) => {
-      signature.push(String(list.length));
-      for (const v of list) {
-        const name = hollowed(v.name, NUMBER, true);
-        const source = hollowed(v.source, UUID, true);
-        row.push(v.value, ...name.data, ...source.data);
-        signature.push(v.symbol, name.text, typeof v.value === 'string' ? 't' : 'n', v.unit, source.text);
-        plain &&= name.plain && source.plain && !v.symbol.includes(SEPARATOR) && !v.unit.includes(SEPARATOR);
-      }
-    };
-    values(step.inputs);
-    values(step.constants);
+    plain = signValues(step.inputs, row, signature) && plain;
+    plain = signValues(step.constants, row, signature) && plain;
     const resultName = hollowed(step.result.name, NUMBER, true);
-    row.push(...resultName.data, step.result.value);
+    pushAll(row, resultName.data);
+    row.push(step.result.value);
     signature.push(step.result.symbol, resultName.text, step.result.unit);
     // Notes mostly carry this statement's numbers: split them without keeping them.
     const note = step.note === undefined ? undefined : hollowed(step.note, NUMBER, false);
-    if (note) row.push(...note.data);
+    if (note) pushAll(row, note.data);
     signature.push(note === undefined ? '' : `n${note.text}`);
-    plain &&= resultName.plain && (note?.plain ?? true) && !step.result.symbol.includes(SEPARATOR) && !step.result.unit.includes(SEPARATOR);
+    plain = plain && resultName.plain && (note?.plain ?? true) && !step.result.symbol.includes(SEPARATOR) && !step.result.unit.includes(SEPARATOR);
     // A text holding the separator could make two different steps sign alike: such a step skips the memo.
     const key = plain ? signature.join(SEPARATOR) : null;
     const entry = key === null ? skeletonEntry(step, idOf) : (known.get(key) ?? remember(known, SKELETON_LIMIT, key, skeletonEntry(step, idOf)));
     row[0] = entry.id;
     skeletons.set(entry.id, entry.json);
-    return row;
-  });
+    w.push(row);
+  }
   return { stored: { v: 2, w }, skeletons };
+}
+
+function pushAll(row: Array<number | string>, data: string[]): void {
+  for (let i = 0; i < data.length; i++) row.push(data[i]);
+}
+
+/** Adds a list of values' data to the row and their texts to the signature; false when a text holds the separator. */
+function signValues(list: WorkingValue[], row: Array<number | string>, signature: string[]): boolean {
+  let plain = true;
+  signature.push(String(list.length));
+  for (const v of list) {
+    const name = hollowed(v.name, NUMBER, true);
+    const source = hollowed(v.source, UUID, true);
+    row.push(v.value);
+    pushAll(row, name.data);
+    pushAll(row, source.data);
+    signature.push(v.symbol, name.text, typeof v.value === 'string' ? 't' : 'n', v.unit, source.text);
+    plain = plain && name.plain && source.plain && !v.symbol.includes(SEPARATOR) && !v.unit.includes(SEPARATOR);
+  }
+  return plain;
 }
 
 /** The skeleton of a step (its texts hollowed as packWorking does), with its id. */

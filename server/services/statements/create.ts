@@ -8,6 +8,7 @@ import { applyOutcome } from './apply-outcome.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 import { packForStorage } from './working-pack.ts';
 import { saveSkeletons } from './working-store.ts';
+import { linkStatementInputs } from './statement-inputs.ts';
 import { buildTemplateContext } from './context.ts';
 
 /**
@@ -42,6 +43,7 @@ export async function findOrCreateStatement(objectId: string, templateId: string
       transaction,
     });
     if (created) {
+      await linkStatementInputs(statement.id, fields.inputs, transaction);
       await recordAudit({ actorId: actor.id, action: 'statement.created', subjectType: 'statement', subjectId: statement.id, data: { objectId, templateId } }, transaction);
     }
     return { statement, created };

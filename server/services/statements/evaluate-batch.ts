@@ -1,4 +1,4 @@
-import { evaluateStatement, type StatementLocale, type TemplateContext } from '@shared/statements/index.ts';
+import { evaluateStatement, type StatementLocale, type TemplateContext, type UsedInput } from '@shared/statements/index.ts';
 import type { SkeletonJson } from '@shared/statements/working-codec.ts';
 import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
 import { packForStorage } from './working-pack.ts';
@@ -40,6 +40,9 @@ export interface WriteBatchResult {
   computedRows: string;
   /** JSON array of broken rows: id, status_reason, settings_version, computed_at. */
   brokenRows: string;
+  /** Statements whose measurements or sources changed, and the links they now have (JSON array). */
+  relinked: string[];
+  inputLinks: string;
   /** The working skeletons the computed rows refer to, to be saved with them. */
   skeletons: Array<[string, SkeletonJson]>;
   written: number;
@@ -54,6 +57,20 @@ export interface PreviewChange {
   newText: string | null;
   newStatus: 'current' | 'changed' | 'broken';
   reason: string | null;
+}
+
+const INPUT_FIELDS = ['measurementId', 'quantity', 'band', 'value', 'unit', 'sigma', 'minus', 'plus', 'sourceId', 'citation'] as const;
+
+/** Same inputs, field by field (stored inputs come back from jsonb with their keys reordered). */
+function sameInputs(a: UsedInput[], b: UsedInput[]): boolean {
+  return a.length === b.length && a.every((x, i) => INPUT_FIELDS.every((f) => (x[f] ?? null) === (b[i][f] ?? null)));
+}
+
+/** Same measurements and sources, whatever their values. */
+function sameLinks(a: UsedInput[], b: UsedInput[]): boolean {
+  const key = (i: UsedInput) => `${i.measurementId}|${i.sourceId}`;
+  const before = new Set(a.map(key));
+  return a.length === b.length && b.every((i) => before.has(key(i)));
 }
 
 /**
@@ -75,6 +92,8 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   const broken: string[] = [];
   const preview: PreviewChange[] = [];
   const skeletons = new Map<string, SkeletonJson>();
+  const relinked: string[] = [];
+  const inputLinks: Array<{ statement_id: string; measurement_id: string; source_id: string }> = [];
   for (const statement of ordered) {
     const ctx = job.contexts[statement.skyObjectId];
     if (!ctx) continue;
@@ -97,6 +116,11 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       if (!job.model || JSON.stringify(result.model) !== job.model.json) throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
       modelId = job.model.id;
     }
+    const inputsMoved = !sameInputs(statement.inputs, result.inputs);
+    if (inputsMoved && !sameLinks(statement.inputs, result.inputs)) {
+      relinked.push(statement.id);
+      for (const i of result.inputs) inputLinks.push({ statement_id: statement.id, measurement_id: i.measurementId, source_id: i.sourceId });
+    }
     const packed = packForStorage(result.working);
     for (const entry of packed.skeletons) skeletons.set(...entry);
     computed.push({
@@ -112,7 +136,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       footnotes: result.footnotes,
       // Only a first computation sets the accepted wording; afterwards only a reviewer does.
       acknowledged_texts: statement.acknowledgedTexts ? null : result.acknowledgedTexts,
-      inputs: result.inputs,
+      inputs: inputsMoved ? result.inputs : null,
       working: packed.stored,
       warnings: result.warnings,
       model_id: modelId,
@@ -121,5 +145,5 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     });
   }
   if (job.previewLocale) return preview;
-  return { computedRows: JSON.stringify(computed), brokenRows: JSON.stringify(brokenRows), skeletons: [...skeletons], written: computed.length + brokenRows.length, changed, broken };
+  return { computedRows: JSON.stringify(computed), brokenRows: JSON.stringify(brokenRows), skeletons: [...skeletons], relinked, inputLinks: JSON.stringify(inputLinks), written: computed.length + brokenRows.length, changed, broken };
 }

@@ -37,12 +37,13 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
   if ('objectId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
   if ('all' in scope) return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
-  // Statements whose stored inputs used this measurement or source (GIN index on inputs).
-  const probe = 'measurementId' in scope ? { measurementId: scope.measurementId } : { sourceId: scope.sourceId };
-  const rows = await getSequelize().query<{ id: string }>('SELECT id FROM statements WHERE inputs @> :probe::jsonb', {
-    replacements: { probe: JSON.stringify([probe]) },
-    type: QueryTypes.SELECT,
-  });
+  // Statements whose inputs used this measurement or source.
+  const rows = await getSequelize().query<{ id: string }>(
+    'measurementId' in scope
+      ? 'SELECT statement_id AS id FROM statement_inputs WHERE measurement_id = :id'
+      : 'SELECT DISTINCT statement_id AS id FROM statement_inputs WHERE source_id = :id',
+    { replacements: { id: 'measurementId' in scope ? scope.measurementId : scope.sourceId }, type: QueryTypes.SELECT },
+  );
   const ids = rows.map((r) => r.id);
   if ('measurementId' in scope) {
     // A newly preferred measurement is not in any statement's inputs yet: also take its object's statements.
@@ -57,13 +58,14 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
 
 // The rows of a batch travel as one json parameter that PostgreSQL splits into records, so
 // nothing is escaped into SQL text, and rows deleted meanwhile stay deleted. The accepted wording
-// is set only by a first computation; after that only a reviewer changes it.
+// is set only by a first computation; after that only a reviewer changes it. Inputs come only
+// when they moved (a cosmology change leaves them as they are).
 const UPDATE_COMPUTED = `
 UPDATE statements AS s SET
   status = r.status, status_reason = r.status_reason, value = r.value, unit = r.unit,
   interval_low = r.interval_low, interval_high = r.interval_high, significant_figures = r.significant_figures,
   texts = r.texts, footnotes = r.footnotes, acknowledged_texts = COALESCE(s.acknowledged_texts, r.acknowledged_texts),
-  inputs = r.inputs, working = r.working, warnings = r.warnings, model_id = r.model_id,
+  inputs = COALESCE(r.inputs, s.inputs), working = r.working, warnings = r.warnings, model_id = r.model_id,
   settings_version = r.settings_version, computed_at = r.computed_at, updated_at = now()
 FROM json_to_recordset($1::json) AS r(
   id uuid, status text, status_reason text, value float8, unit text, interval_low float8, interval_high float8,
@@ -78,6 +80,16 @@ UPDATE statements AS s SET status = 'broken', status_reason = r.status_reason, s
 FROM json_to_recordset($1::json) AS r(id uuid, status_reason text, settings_version integer, computed_at timestamptz)
 WHERE s.id = r.id`;
 
+// Which measurements and sources the batch's statements now use, for those whose choice moved
+// (statements deleted meanwhile are skipped).
+const UNLINK_INPUTS = 'DELETE FROM statement_inputs WHERE statement_id = ANY($1::uuid[])';
+const LINK_INPUTS = `
+INSERT INTO statement_inputs (statement_id, measurement_id, source_id)
+  SELECT l.statement_id, l.measurement_id, l.source_id
+    FROM json_to_recordset($1::json) AS l(statement_id uuid, measurement_id uuid, source_id uuid)
+    JOIN statements s ON s.id = l.statement_id
+ON CONFLICT (statement_id, measurement_id) DO NOTHING`;
+
 /** Writes one batch, inside a transaction that first checks the settings have not moved. */
 async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot): Promise<void> {
   const sequelize = getSequelize();
@@ -87,6 +99,10 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
     await saveSkeletons(result.skeletons, transaction);
     if (result.computedRows !== '[]') await sequelize.query(UPDATE_COMPUTED, { bind: [result.computedRows], transaction });
     if (result.brokenRows !== '[]') await sequelize.query(UPDATE_BROKEN, { bind: [result.brokenRows], transaction });
+    if (result.relinked.length > 0) {
+      await sequelize.query(UNLINK_INPUTS, { bind: [result.relinked], transaction });
+      await sequelize.query(LINK_INPUTS, { bind: [result.inputLinks], transaction });
+    }
   });
 }
 
