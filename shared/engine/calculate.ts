@@ -89,8 +89,8 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
     interval = { low: outcome.low, high: outcome.high, level: 0.68 };
     steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit));
   }
-  const description = resolved ? structuredClone(resolved.description) : null;
-  if (description && h0) description.H0_range = { low: h0.value - h0.minus, high: h0.value + h0.plus };
+  // The resolved model's description is shared and frozen; only an H0 range makes it this result's own.
+  const description = resolved && h0 ? { ...resolved.description, H0_range: { low: h0.value - h0.minus, high: h0.value + h0.plus } } : (resolved?.description ?? null);
   return {
     ...(id !== undefined ? { id } : {}),
     quantity,

@@ -80,17 +80,20 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
     return propagateOne(all.z, last, () => propagate({ ...problem, f: (x) => x[Z], last }));
   }
   const varyH0 = varied.includes(H0_KEY);
-  if (spec.modulusInZ && !varyH0 && varied.includes('z')) {
-    const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
-    const z = all.z;
-    env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
-  }
+  const prepare = spec.modulusInZ && !varyH0 && varied.includes('z')
+    ? () => {
+        const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
+        const z = all.z;
+        env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
+      }
+    : undefined;
   const split = spec.split?.applies(present) ? spec.split : undefined;
   const draw = split ? split.before : spec.sample;
   return propagate({
     ...problem,
     // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
     drawsKey: varied.length > 1 ? drawsKey(draw, view, env.Msun, names, all) : undefined,
+    prepare,
     f: (x) => {
       const scale = varyH0 ? x[H0_SLOT] / view.H0 : 1;
       if (!(scale > 0)) return NaN;

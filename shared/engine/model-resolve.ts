@@ -61,6 +61,11 @@ function resolveUncached(model: CalcModel): Resolved {
   return resolveFlrw({ ...model, name }, `custom FLRW model "${name}"`, sources);
 }
 
+function deepFreeze(o: object): void {
+  for (const v of Object.values(o)) if (typeof v === 'object' && v !== null) deepFreeze(v);
+  Object.freeze(o);
+}
+
 /**
  * Resolves (and caches) a model.
  * @param model the request's model (Planck 2018 when omitted)
@@ -73,6 +78,8 @@ export function resolveModel(model: CalcModel | undefined): Resolved {
   const hit = cache.get(key);
   if (hit) return hit;
   const resolved = resolveUncached(m);
+  // Every result under this model shares one description: frozen, so none can change it for the others.
+  deepFreeze(resolved.description);
   if (cache.size >= CACHE_LIMIT) cache.delete(cache.keys().next().value as string);
   cache.set(key, resolved);
   return resolved;

@@ -43,6 +43,8 @@ export interface SlotProblem {
    * first's draws: how two statements about one object share one Monte Carlo.
    */
   drawsKey?: string;
+  /** Called once before drawing (not when earlier draws are reused): set up what only drawing needs. */
+  prepare?: () => void;
 }
 
 /** The draws of the last few runs that had no failures, by drawsKey (oldest first). */
@@ -124,7 +126,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   if (reused) {
     out.set(reused);
     run.draw = run.kept = SAMPLES;
-  }
+  } else p.prepare?.();
   while (run.draw < SAMPLES) {
     try {
       drawAll(run, p, slots, centre, minus, plus, out, failed);
@@ -141,7 +143,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   if (last && run.kept > 0 && !finiteBetween(kept, last)) {
     // Some draws leave the range where the last step is finite: run it on every draw instead.
     releaseScratch(out);
-    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined, drawsKey: undefined });
+    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined, drawsKey: undefined, prepare: undefined });
   }
   const interval = run.kept > 0 ? quantilePair(kept, 0.16, 0.84, last) : { low: NaN, high: NaN };
   const outcome = {

@@ -91,6 +91,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   const changed: string[] = [];
   const broken: string[] = [];
   const preview: PreviewChange[] = [];
+  let checkedModel: object | null = null;
   const skeletons = new Map<string, SkeletonJson>();
   const relinked: string[] = [];
   const inputLinks: Array<{ statement_id: string; measurement_id: string; source_id: string }> = [];
@@ -113,8 +114,12 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     if (result.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
     let modelId: string | null = null;
     if (result.model) {
-      if (!job.model || JSON.stringify(result.model) !== job.model.json) throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
-      modelId = job.model.id;
+      // Outcomes share the engine's one description per model: compare each distinct one once.
+      if (result.model !== checkedModel) {
+        if (!job.model || JSON.stringify(result.model) !== job.model.json) throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
+        checkedModel = result.model;
+      }
+      modelId = job.model!.id;
     }
     const inputsMoved = !sameInputs(statement.inputs, result.inputs);
     if (inputsMoved && !sameLinks(statement.inputs, result.inputs)) {

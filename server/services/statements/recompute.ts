@@ -123,7 +123,8 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
   const model = await batchModelFor(settings);
   const computedAt = new Date();
   const inline = ids.length <= BATCH;
-  const inFlight = Math.max(1, poolSize()) + WRITES_IN_FLIGHT;
+  // Two batches queued per worker, so none waits for the next to load; plus those being written.
+  const inFlight = 2 * Math.max(1, poolSize()) + WRITES_IN_FLIGHT;
   const totals = { written: 0, changed: [] as string[], broken: [] as string[] };
   const running = new Set<Promise<void>>();
   let failure: unknown;
