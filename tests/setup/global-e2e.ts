@@ -49,9 +49,15 @@ export default async function setup(project: TestProject) {
     server.stderr!.on('data', onData);
     server.once('exit', (code) => reject(new Error(`server exited (${code}):\n${output}`)));
   });
+  // A server that dies under a test (an outage, a bug) says why, instead of tests failing with "fetch failed".
+  let stopping = false;
+  server.once('exit', (code, signal) => {
+    if (!stopping) console.error(`\nThe e2e server stopped unexpectedly (${signal ?? code}). Its last output:\n${output.slice(-20_000)}`);
+  });
   project.provide('baseUrl', `http://127.0.0.1:${port}`);
   project.provide('e2eDatabaseUrl', url);
   return async () => {
+    stopping = true;
     server.kill('SIGTERM');
     await new Promise((r) => server.once('exit', r));
     if (startedCluster) stopTestCluster();
