@@ -8,7 +8,7 @@ import { useVenues } from '@/features/venues/api/venues.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 import { useCreateChannel } from '../api/channels.ts';
 
-/** A new, empty channel at one of the venues. */
+/** A new, empty channel at one of the venues. Focus starts in its first field, since the button that opened it is gone. */
 export function ChannelCreateForm({ onDone, onCancel }: { onDone: (channel: ChannelDetailDto) => void; onCancel: () => void }) {
   const venues = useVenues();
   const create = useCreateChannel();
@@ -23,7 +23,7 @@ export function ChannelCreateForm({ onDone, onCancel }: { onDone: (channel: Chan
   });
   return (
     <form onSubmit={submit} aria-label="New channel" className="grid gap-4 rounded-lg border border-rule bg-panel p-4 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-      <TextField label="Channel name" {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
+      <TextField label="Channel name" autoFocus {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
       <SelectField label="Venue" {...form.register('venueId')} error={form.formState.errors.venueId?.message}>
         <option value="">Choose a venue…</option>
         {venues.data?.map((v) => (
