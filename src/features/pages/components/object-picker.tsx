@@ -24,6 +24,8 @@ export function ObjectPicker({ value, onChange, label = 'Object', error }: { val
         onChange={(e) => onChange(e.target.value, e.target.selectedOptions[0]?.text ?? '')}
         className={`block w-full rounded-md border bg-panel px-2 py-1 text-sm ${error ? 'border-broken' : 'border-rule'}`}
       >
+        {/* With nothing chosen, React would otherwise mark the first object selected on screen while the form holds none, and choosing it would send no change. */}
+        <option value="" disabled hidden />
         {(objects.data ?? []).map((o) => (
           <option key={o.id} value={o.id}>{o.name}{o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} · {o.kind}</option>
         ))}
