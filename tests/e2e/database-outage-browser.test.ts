@@ -15,8 +15,9 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     const { context, page: editor, errors, baseUrl } = await openBrowser();
     const [admin, writer] = await Promise.all([demoSession(baseUrl, 'admin'), demoSession(baseUrl, 'writer')]);
 
-    // A channel with a picture and tonight's sky, on a screen the kiosk pairs with below.
-    const venue = ok(await admin.call<{ data: Array<{ id: string; name: string }> }>('GET', '/api/venues'), 'venues').body.data.find((v) => v.name === DEMO_VENUE.name)!;
+    // A venue of its own (the demo venue's screens are counted elsewhere), a channel with a picture
+    // and tonight's sky, and a screen the kiosk pairs with below.
+    const venue = ok(await admin.call<{ data: { id: string } }>('POST', '/api/venues', { ...DEMO_VENUE, name: 'Outage test dome (test)' }), 'venue').body.data;
     const image = await readyImage(admin, await solidImage(1920, 1080, '#1b2a4a'), 'Corrie Vale Observatory (demo)');
     const channel = ok(await admin.call<{ data: { id: string } }>('POST', '/api/channels', { venueId: venue.id, name: 'Outage test loop' }), 'channel').body.data;
     ok(await admin.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'image', mediaId: image, caption: 'A quiet blue field (demo picture)', durationS: 5 }), 'image slide');
@@ -92,6 +93,7 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     // The kiosk is still paired and playing, and its feed answers again.
     await expect.poll(() => feedAnswers.some((a) => a.at > restarted && (a.status === 200 || a.status === 304)), { timeout: 60_000, interval: 1000 }).toBe(true);
     expect(await kiosk.locator('.slide.shown').count()).toBe(1);
+    ok(await admin.call('POST', `/api/venues/${venue.id}/screens/${added.screen.id}/revoke`), 'revoke the test screen');
     expect(errors.filter((e) => !/Failed to load resource: the server responded with a status of 503/.test(e))).toEqual([]);
   }, 240_000);
 });
