@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
 import { config } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
+import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
 import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
@@ -16,6 +17,18 @@ import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media-sweep.ts';
 
 const started = Date.now();
+
+// pg-boss 10 does not await its own complete/fail calls (timgit/pg-boss#577), so during a database
+// outage they reject with nobody listening and Node would exit. Such a job stays active, expires and
+// runs again. Any other unhandled rejection is a bug and still stops the process.
+process.on('unhandledRejection', (reason) => {
+  if (isDatabaseDown(reason)) {
+    logger.warn({ err: reason }, 'database unreachable outside a request');
+    return;
+  }
+  logger.fatal({ err: reason }, 'unhandled promise rejection');
+  process.exit(1);
+});
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {

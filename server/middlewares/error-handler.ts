@@ -2,6 +2,7 @@ import type { ErrorRequestHandler, RequestHandler } from 'express';
 import { BaseError, ConnectionError, ForeignKeyConstraintError, UniqueConstraintError, ValidationError as SequelizeValidationError, TimeoutError } from 'sequelize';
 import { ZodError } from 'zod';
 import { HttpError, NotFoundError } from '../errors.ts';
+import { isDatabaseDown } from '../db-down.ts';
 import { logger } from '../logger.ts';
 import { zodToValidationError } from './validate.ts';
 
@@ -9,15 +10,6 @@ import { zodToValidationError } from './validate.ts';
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(NotFoundError(`There is no API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`));
 };
-
-/** Socket errors and PostgreSQL's "shutting down / cannot connect" codes, from pg directly (the session store) or wrapped. */
-const DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
-function isDatabaseDown(err: unknown): boolean {
-  const e = err as { code?: string; parent?: { code?: string }; message?: string } | undefined;
-  if (!e) return false;
-  if (DOWN_CODES.has(e.code ?? '') || DOWN_CODES.has(e.parent?.code ?? '')) return true;
-  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(e.message ?? '');
-}
 
 function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;

@@ -3,6 +3,7 @@ import fs from 'node:fs';
 import type { RequestHandler } from 'express';
 import multer, { MulterError } from 'multer';
 import { HttpError } from '../errors.ts';
+import { instanceTmpDir } from '../media/instance.ts';
 import { mediaSettings } from '../media/settings.ts';
 
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
@@ -29,12 +30,13 @@ function translate(err: unknown, limit: number): HttpError {
 }
 
 /**
- * Streams one multipart file (field `file`) to a temporary file under uploads/tmp with a random
+ * Streams one multipart file (field `file`) to a temporary file under this process's folder in uploads/tmp with a random
  * name (the client's name is kept only as text, never used as a path) and stops at the size limit.
  * multer removes its partial file when it gives up; the route removes the finished one.
  */
 export const singleImageUpload: RequestHandler = (req, res, next) => {
-  const { uploadMaxBytes, tmpDir } = mediaSettings();
+  const { uploadMaxBytes } = mediaSettings();
+  const tmpDir = instanceTmpDir();
   // Refuse at once what the browser says is too large, rather than reading it first.
   const declared = Number(req.get('content-length'));
   if (Number.isFinite(declared) && declared > uploadMaxBytes + 1024 * 1024) {

@@ -1,6 +1,7 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { getSequelize } from '../db.ts';
 import { logger } from '../logger.ts';
+import { INSTANCE_TAG, instanceGone } from '../media/instance.ts';
 import { Media, MediaRendition } from '../models/index.ts';
 import { getStorage } from '../storage/storage.ts';
 
@@ -12,8 +13,8 @@ import { getStorage } from '../storage/storage.ts';
  */
 export async function noteFiles(keys: string[], transaction?: Transaction): Promise<void> {
   for (const key of new Set(keys)) {
-    await getSequelize().query('INSERT INTO media_file_intents (storage_key, created_at) VALUES (:key, now()) ON CONFLICT (storage_key) DO NOTHING', {
-      replacements: { key },
+    await getSequelize().query('INSERT INTO media_file_intents (storage_key, created_at, owner) VALUES (:key, now(), :owner) ON CONFLICT (storage_key) DO NOTHING', {
+      replacements: { key, owner: INSTANCE_TAG },
       transaction,
     });
   }
@@ -47,13 +48,14 @@ export async function settleFiles(keys: Iterable<string>): Promise<void> {
 }
 
 /**
- * Noted files older than the grace period: what a crash or an outage left unsettled.
+ * What a crash or an outage left unsettled: notes older than the grace period, and notes of a
+ * server process on this machine that is no longer running, however young.
  * @param olderThan the cut-off
  */
 export async function staleNotes(olderThan: Date): Promise<string[]> {
-  const rows = await getSequelize().query<{ storage_key: string }>('SELECT storage_key FROM media_file_intents WHERE created_at < :olderThan', {
-    replacements: { olderThan },
-    type: QueryTypes.SELECT,
-  });
-  return rows.map((r) => r.storage_key);
+  const rows = await getSequelize().query<{ storage_key: string; owner: string | null; old: boolean }>(
+    'SELECT storage_key, owner, created_at < :olderThan AS old FROM media_file_intents',
+    { replacements: { olderThan }, type: QueryTypes.SELECT },
+  );
+  return rows.filter((r) => r.old || instanceGone(r.owner)).map((r) => r.storage_key);
 }

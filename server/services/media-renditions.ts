@@ -6,6 +6,7 @@ import fs from 'node:fs';
 import { FORMAT_FILES } from '@shared/media/renditions.ts';
 import { getSequelize } from '../db.ts';
 import { logger } from '../logger.ts';
+import { instanceTmpDir } from '../media/instance.ts';
 import { IMMUTABLE_CACHE, renditionKey } from '../media/keys.ts';
 import { renderAll } from '../media/render.ts';
 import { mediaSettings } from '../media/settings.ts';
@@ -20,8 +21,8 @@ async function originalOnDisk(key: string): Promise<{ file: string; cleanup: () 
   if (storage instanceof LocalStorage) return { file: path.join(storage.root, key), cleanup: async () => undefined };
   const stored = await storage.read(key);
   if (!stored) throw new Error(`The original file ${key} is missing from storage.`);
-  await fsp.mkdir(mediaSettings().tmpDir, { recursive: true });
-  const file = path.join(mediaSettings().tmpDir, `original-${randomUUID()}`);
+  await fsp.mkdir(instanceTmpDir(), { recursive: true });
+  const file = path.join(instanceTmpDir(), `original-${randomUUID()}`);
   const cleanup = () => fsp.rm(file, { force: true });
   try {
     await pipeline(stored.stream, fs.createWriteStream(file));

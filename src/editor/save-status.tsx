@@ -7,7 +7,7 @@ const WORDS: Record<SaveState, string> = {
   saved: 'All changes saved',
   unsaved: 'Unsaved changes (kept in this browser)',
   saving: 'Saving…',
-  offline: 'Offline: kept in this browser',
+  offline: 'Not saved yet: retrying',
   conflict: 'Not saved: someone else saved first',
   refused: 'Not saved',
 };

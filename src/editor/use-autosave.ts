@@ -38,6 +38,7 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
   const inFlight = useRef(false);
   const retryDelay = useRef(2000);
   const blocked = useRef(false);
+  const retrying = useRef(false);
 
   const save = useCallback(async () => {
     if (inFlight.current || blocked.current) return;
@@ -50,6 +51,7 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
       versionRef.current = page.version;
       savedEditsRef.current = editsAtStart;
       retryDelay.current = 2000;
+      retrying.current = false;
       setSavedAt(new Date());
       setMessage(null);
       onSaved(page);
@@ -63,14 +65,17 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
       }
     } catch (error) {
       const e = error instanceof ApiRequestError ? error : new ApiRequestError(0, 'network_error', 'Starproof cannot be reached.');
+      retrying.current = false;
       if (e.status === 409 && e.code === 'page_changed') {
         blocked.current = true;
         setConflict({ mine: content, theirs: await fetchPage(pageId) });
         setState('conflict');
         setMessage(e.message);
       } else if (e.status === 0 || e.status >= 500) {
+        const why = e.status === 503 ? 'The database is not answering.' : e.code === 'timeout' ? 'Starproof did not answer in time.' : e.status === 0 ? 'Starproof cannot be reached.' : 'The server ran into a problem.';
+        retrying.current = true;
         setState('offline');
-        setMessage('Not saved: Starproof cannot be reached. Your text is kept in this browser and will be saved when the connection returns.');
+        setMessage(`${why} Your text is kept in this browser; Starproof tries again by itself in ${retryDelay.current / 1000} seconds.`);
         timer.current = setTimeout(() => void save(), retryDelay.current);
         retryDelay.current = Math.min(retryDelay.current * 2, 30_000);
       } else {
@@ -87,7 +92,8 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
     editsRef.current += 1;
     const kept = keepLocalDraft(pageId, { baseVersion: versionRef.current, ...read() });
     if (!kept) setMessage('This browser would not keep a local copy (storage is full). Saving to the server still works.');
-    if (blocked.current) return;
+    // After a failed save the planned retry carries this edit too, and the words keep saying so.
+    if (blocked.current || retrying.current) return;
     setState((s) => (s === 'saving' ? s : 'unsaved'));
     clearTimeout(timer.current);
     timer.current = setTimeout(() => void save(), PageLimits.autosaveMs);

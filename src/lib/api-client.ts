@@ -14,7 +14,12 @@ export class ApiRequestError extends Error {
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
-async function request<T>(method: Method, url: string, body?: unknown): Promise<T> {
+/** Per-call options: `timeoutMs` gives up on an answer that never comes (autosave must not wait forever). */
+interface RequestOptions {
+  timeoutMs?: number;
+}
+
+async function request<T>(method: Method, url: string, body?: unknown, { timeoutMs }: RequestOptions = {}): Promise<T> {
   let response: Response;
   try {
     response = await fetch(`/api${url}`, {
@@ -22,8 +27,12 @@ async function request<T>(method: Method, url: string, body?: unknown): Promise<
       credentials: 'same-origin',
       headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
       body: body === undefined ? undefined : JSON.stringify(body),
+      signal: timeoutMs ? AbortSignal.timeout(timeoutMs) : undefined,
     });
-  } catch {
+  } catch (error) {
+    if (error instanceof DOMException && error.name === 'TimeoutError') {
+      throw new ApiRequestError(0, 'timeout', `Starproof did not answer within ${Math.round(timeoutMs! / 1000)} seconds. Nothing was lost.`);
+    }
     throw new ApiRequestError(0, 'network_error', 'Starproof cannot be reached. Check the connection; nothing was lost.');
   }
   if (response.status === 204) return undefined as T;
@@ -39,7 +48,7 @@ async function request<T>(method: Method, url: string, body?: unknown): Promise<
 export const api = {
   get: <T>(url: string) => request<T>('GET', url),
   post: <T>(url: string, body?: unknown) => request<T>('POST', url, body ?? {}),
-  put: <T>(url: string, body: unknown) => request<T>('PUT', url, body),
+  put: <T>(url: string, body: unknown, options?: RequestOptions) => request<T>('PUT', url, body, options),
   patch: <T>(url: string, body: unknown) => request<T>('PATCH', url, body),
   delete: <T>(url: string) => request<T>('DELETE', url),
 };

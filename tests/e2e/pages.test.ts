@@ -33,7 +33,7 @@ async function newPage(page: BrowserPage, title: string, objectQuery: string) {
   await form.getByLabel('Title').fill(title);
   await form.getByRole('searchbox').fill(objectQuery);
   await expect.poll(() => form.getByRole('option').first().textContent()).toContain(objectQuery);
-  await form.getByRole('listbox').selectOption({ index: 0 });
+  await form.getByRole('listbox').selectOption((await form.getByRole('option').first().getAttribute('value'))!);
   await form.getByRole('button', { name: 'Create and start writing' }).click();
   await page.waitForURL(/\/pages\/[0-9a-f-]{36}$/);
   return page.url().split('/').pop()!;

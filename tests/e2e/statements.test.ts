@@ -33,9 +33,15 @@ describe('checked statements in the browser', () => {
     await page.waitForURL(/sign-in/);
 
     await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
-    await page.goto(`${baseUrl}/statements?status=changed`);
     const first = page.getByRole('link', { name: /3C 279/ }).first();
-    await expect.poll(() => first.count(), { timeout: 30_000, interval: 1000 }).toBeGreaterThan(0);
+    // The recompute runs in the background and the list does not refresh itself: look again until it is done.
+    await expect
+      .poll(async () => {
+        await page.goto(`${baseUrl}/statements?status=changed`);
+        await page.waitForLoadState('networkidle');
+        return first.count();
+      }, { timeout: 90_000, interval: 1000 })
+      .toBeGreaterThan(0);
     await first.click();
     await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBeGreaterThan(0);
     await screenshot(page, 'statement-changed');

@@ -51,3 +51,19 @@ export function ok<T extends { status: number; body: unknown }>(res: T, what: st
   if (res.status >= 300) throw new Error(`${what}: ${res.status} ${JSON.stringify(res.body)}`);
   return res;
 }
+
+/**
+ * Uploads a generated picture through the session, waits for its renditions and fills in what
+ * publishing needs (alt text, credit, licence, source).
+ * @returns the media id
+ */
+export async function readyImage(session: E2eSession, image: Buffer, credit: string, licenceId = 'cc-by-4.0'): Promise<string> {
+  const id = ok(await session.upload(image, 'demo-picture.jpg'), 'upload').body.data.id;
+  const deadline = Date.now() + 60_000;
+  while ((await session.call<{ data: { renditionsStatus: string } }>('GET', `/api/media/${id}`)).body.data.renditionsStatus !== 'ready') {
+    if (Date.now() > deadline) throw new Error(`renditions of ${id} not ready after 60 s`);
+    await new Promise((r) => setTimeout(r, 300));
+  }
+  ok(await session.call('PATCH', `/api/media/${id}`, { altText: 'A dark blue field with a soft glow (demo picture)', credit, licenceId, sourceUrl: 'https://example.org/demo-picture' }), 'image details');
+  return id;
+}

@@ -23,7 +23,8 @@ export function Component() {
   const onSaved = useCallback((saved: PageDto) => queryClient.setQueryData(pageQueryOptions(id).queryKey, saved), [queryClient, id]);
 
   if (page.isPending || settings.isPending) return <p className="text-sm text-muted">Loading page…</p>;
-  if (page.error) return <Notice tone="error">{page.error.message}</Notice>;
+  // A failed refresh must not unmount the editor and the text in it.
+  if (page.error && !page.data) return <Notice tone="error">{page.error.message}</Notice>;
   const p = page.data;
   const submitNow = async () => {
     const version = (await workspace.current?.flush()) ?? p.version;

@@ -13,7 +13,9 @@ import { useSources } from '../api/sources.ts';
 
 const FIELDS = ['quantity', 'value', 'unit', 'band', 'uncertainty', 'uncertaintyMinus', 'uncertaintyPlus', 'sourceId', 'note'] as const;
 
-/** Adds a measurement (reviewers, admins) or proposes one for review (writers, editors). */
+/**
+ * Adds a measurement (reviewers, admins) or proposes one for review (writers, editors). Focus starts in its first field, since the button that opened it is gone.
+ */
 export function MeasurementForm({ objectId, proposal, onDone }: { objectId: string; proposal: boolean; onDone: () => void }) {
   const add = useAddMeasurement(objectId);
   const sources = useSources();
@@ -47,7 +49,7 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
     <form onSubmit={onSubmit} noValidate aria-label={proposal ? 'Propose a measurement' : 'Add a measurement'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-3">
       {formError && <div className="sm:col-span-3"><Notice tone="error">{formError}</Notice></div>}
       {proposal && <div className="sm:col-span-3"><Notice>Your measurement is sent to a reviewer, who accepts or declines it. It is not used until accepted.</Notice></div>}
-      <SelectField label="Quantity" error={errors.quantity?.message} {...register('quantity', { onChange: (e) => setValue('unit', findQuantity(e.target.value)?.units[0].id ?? '') })}>
+      <SelectField label="Quantity" autoFocus error={errors.quantity?.message} {...register('quantity', { onChange: (e) => setValue('unit', findQuantity(e.target.value)?.units[0].id ?? '') })}>
         {QUANTITY_IDS.map((id) => <option key={id} value={id}>{QUANTITIES[id].label}</option>)}
       </SelectField>
       <TextField label="Value" inputMode="decimal" autoComplete="off" hint={quantity.hint} error={errors.value?.message} {...register('value')} />

@@ -20,7 +20,8 @@ const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
 
 /**
  * Adds an object, or edits one when `object` is given. Position in degrees or sexagesimal; the
- * constellation is computed by the server from it.
+ * constellation is computed by the server from it. Focus starts in its first field, since the
+ * button that opened it is gone.
  */
 export function ObjectForm({ object, onDone, onCancel }: { object?: SkyObjectDto; onDone: (saved: SkyObjectDto) => void; onCancel: () => void }) {
   const create = useCreateSkyObject();
@@ -45,7 +46,7 @@ export function ObjectForm({ object, onDone, onCancel }: { object?: SkyObjectDto
   return (
     <form onSubmit={onSubmit} noValidate aria-label={object ? 'Edit object' : 'Add an object'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2">
       {formError && <div className="sm:col-span-2"><Notice tone="error">{formError}</Notice></div>}
-      <TextField label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
+      <TextField label="Name" autoComplete="off" autoFocus error={errors.name?.message} {...register('name')} />
       <SelectField label="Kind" error={errors.kind?.message} {...register('kind')}>
         {SKY_OBJECT_KINDS.map((kind) => <option key={kind} value={kind}>{KIND_LABELS[kind]}</option>)}
       </SelectField>

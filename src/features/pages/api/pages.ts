@@ -64,7 +64,7 @@ export const useObjectSearch = (q: string) =>
   });
 
 /** Saves the page (autosave); the caller handles 409 itself. */
-export const savePage = async (id: string, body: { version: number; title: string; doc: unknown }) => (await api.put<ApiData<PageDto>>(`/pages/${id}`, body)).data;
+export const savePage = async (id: string, body: { version: number; title: string; doc: unknown }) => (await api.put<ApiData<PageDto>>(`/pages/${id}`, body, { timeoutMs: 30_000 })).data;
 
 export function useCreatePage() {
   const queryClient = useQueryClient();

@@ -10,7 +10,9 @@ import { paths } from '@/config/paths.ts';
 import { useCreatePage } from '../api/pages.ts';
 import { ObjectPicker } from './object-picker.tsx';
 
-/** Starts a page: a title, the object it is about and its language; then straight into the editor. */
+/**
+ * Starts a page: a title, the object it is about and its language; then straight into the editor. Focus starts in its first field, since the button that opened it is gone.
+ */
 export function NewPageForm({ defaultLocale, onCancel }: { defaultLocale: PageCreateInput['locale']; onCancel: () => void }) {
   const create = useCreatePage();
   const navigate = useNavigate();
@@ -22,7 +24,7 @@ export function NewPageForm({ defaultLocale, onCancel }: { defaultLocale: PageCr
   return (
     <form aria-label="New page" onSubmit={submit} className="space-y-4 rounded-lg border border-rule bg-panel p-5">
       <h2 className="text-lg font-semibold">New page</h2>
-      <TextField label="Title" {...form.register('title')} error={form.formState.errors.title?.message} />
+      <TextField label="Title" autoFocus {...form.register('title')} error={form.formState.errors.title?.message} />
       <Controller control={form.control} name="objectId" render={({ field, fieldState }) => <ObjectPicker label="About which object" value={field.value} onChange={(id) => field.onChange(id)} error={fieldState.error?.message} />} />
       <SelectField label="Language" {...form.register('locale')}>
         {STATEMENT_LOCALES.map((l) => <option key={l} value={l}>{LOCALE_LABELS[l]}</option>)}

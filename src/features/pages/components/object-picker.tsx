@@ -1,11 +1,19 @@
 import { useId, useState } from 'react';
 import { useObjectSearch } from '../api/pages.ts';
 
-/** Picks a catalogue object by name or designation; shows the first twenty matches. */
-export function ObjectPicker({ value, onChange, label = 'Object', error }: { value: string; onChange: (id: string, name: string) => void; label?: string; error?: string }) {
+/**
+ * Picks a catalogue object by name or designation; shows the first twenty matches.
+ * @param valueLabel how to name `value` when the current matches do not include it
+ */
+export function ObjectPicker({ value, onChange, label = 'Object', error, valueLabel }: { value: string; onChange: (id: string, name: string) => void; label?: string; error?: string; valueLabel?: string }) {
   const [q, setQ] = useState('');
+  const [picked, setPicked] = useState<{ id: string; text: string } | null>(null);
   const objects = useObjectSearch(q);
   const id = useId();
+  const rows = objects.data ?? [];
+  // A chosen object stays listed while the search moves on. Otherwise React would mark the first match
+  // selected on screen while the form still holds the earlier choice (or none).
+  const keepChosen = value !== '' && !rows.some((o) => o.id === value);
   return (
     <div className="space-y-2">
       <label htmlFor={`${id}-search`} className="block text-sm font-medium text-ink">{label}</label>
@@ -21,10 +29,16 @@ export function ObjectPicker({ value, onChange, label = 'Object', error }: { val
         aria-label={`${label} from the catalogue`}
         size={6}
         value={value}
-        onChange={(e) => onChange(e.target.value, e.target.selectedOptions[0]?.text ?? '')}
+        onChange={(e) => {
+          const text = e.target.selectedOptions[0]?.text ?? '';
+          setPicked({ id: e.target.value, text });
+          onChange(e.target.value, text);
+        }}
         className={`block w-full rounded-md border bg-panel px-2 py-1 text-sm ${error ? 'border-broken' : 'border-rule'}`}
       >
-        {(objects.data ?? []).map((o) => (
+        <option value="" disabled hidden />
+        {keepChosen && <option value={value}>{picked?.id === value ? picked.text : (valueLabel ?? 'The object chosen before')}</option>}
+        {rows.map((o) => (
           <option key={o.id} value={o.id}>{o.name}{o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} · {o.kind}</option>
         ))}
       </select>

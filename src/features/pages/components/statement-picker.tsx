@@ -27,7 +27,7 @@ export function StatementPicker({ defaultObject, replacing, onPick, onClose }: {
         About <strong>{objectName}</strong>{' '}
         <button type="button" className="text-accent hover:underline" onClick={() => setChangingObject((v) => !v)}>{changingObject ? 'keep this object' : 'choose another object'}</button>
       </div>
-      {changingObject && <ObjectPicker value={objectId} onChange={(id, name) => { setObjectId(id); setObjectName(name.split(' · ')[0]); create.reset(); }} />}
+      {changingObject && <ObjectPicker value={objectId} valueLabel={objectName} onChange={(id, name) => { setObjectId(id); setObjectName(name.split(' · ')[0]); create.reset(); }} />}
       <fieldset className="space-y-1.5">
         <legend className="mb-1 text-sm font-medium">Statement</legend>
         {(templates.data ?? []).map((t) => (

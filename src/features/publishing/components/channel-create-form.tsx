@@ -9,7 +9,8 @@ import { applyServerErrors } from '@/lib/form-errors.ts';
 import { useCreateChannel } from '../api/channels.ts';
 
 /**
- * A new, empty channel at one of the venues.
+ * A new, empty channel at one of the venues. Focus starts in its first field, since the button
+ * that opened it is gone.
  * @param venues the venues to choose from (undefined while they load)
  */
 export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueDto[] | undefined; onDone: (channel: ChannelDetailDto) => void; onCancel: () => void }) {
@@ -25,7 +26,7 @@ export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueD
   });
   return (
     <form onSubmit={submit} aria-label="New channel" className="grid gap-4 rounded-lg border border-rule bg-panel p-4 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-      <TextField label="Channel name" {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
+      <TextField label="Channel name" autoFocus {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
       <SelectField label="Venue" {...form.register('venueId')} error={form.formState.errors.venueId?.message}>
         <option value="">Choose a venue…</option>
         {venues?.map((v) => (

@@ -9,7 +9,7 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 import { useInviteUser } from '../api/users.ts';
 
-/** Invites a member of staff by e-mail with a role. */
+/** Invites a member of staff by e-mail with a role. Focus starts in its first field, since the button that opened it is gone. */
 export function InviteUserForm({ onDone }: { onDone: () => void }) {
   const invite = useInviteUser();
   const [formError, setFormError] = useState<string>();
@@ -31,7 +31,7 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
           <Notice tone="error">{formError}</Notice>
         </div>
       )}
-      <TextField label="Name" autoComplete="off" error={formState.errors.name?.message} {...register('name')} />
+      <TextField label="Name" autoComplete="off" autoFocus error={formState.errors.name?.message} {...register('name')} />
       <TextField label="E-mail address" type="email" autoComplete="off" error={formState.errors.email?.message} {...register('email')} />
       <SelectField label="Role" error={formState.errors.role?.message} {...register('role')}>
         {ROLES.map((role) => (

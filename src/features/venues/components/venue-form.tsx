@@ -15,7 +15,9 @@ function useTimeZones(): string[] {
   return useMemo(() => (typeof Intl.supportedValuesOf === 'function' ? Intl.supportedValuesOf('timeZone') : []), []);
 }
 
-/** Adds a venue, or changes one when `venue` is given. Moving a venue recomputes its sky. */
+/**
+ * Adds a venue, or changes one when `venue` is given. Moving a venue recomputes its sky. Focus starts in its first field, since the button that opened it is gone.
+ */
 export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDone: (saved: VenueDto) => void; onCancel: () => void }) {
   const create = useCreateVenue();
   const update = useUpdateVenue(venue?.id ?? '');
@@ -43,7 +45,7 @@ export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDon
           <Notice tone="error">{formError}</Notice>
         </div>
       )}
-      <TextField className="sm:col-span-3" label="Name" autoComplete="off" error={errors.name?.message} {...register('name')} />
+      <TextField className="sm:col-span-3" label="Name" autoComplete="off" autoFocus error={errors.name?.message} {...register('name')} />
       <TextField
         className="sm:col-span-3"
         label="Time zone"
