@@ -107,6 +107,15 @@ export interface TemplateSuccess {
   night?: NightBasis;
 }
 
+/**
+ * A NightBasis as a statement stores it, with the method last accepted (by a reviewer, or by the
+ * first computation): a new night follows only while its method is that one.
+ */
+export interface StoredNight extends NightBasis {
+  /** Null until a wording computed by some method has been accepted. */
+  acceptedMethod: NightBasis['method'] | null;
+}
+
 /** A statement that cannot be rendered, and why, in words. */
 export interface TemplateFailure {
   ok: false;
