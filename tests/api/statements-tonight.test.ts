@@ -172,6 +172,25 @@ describe('staying current night after night', () => {
     }
   });
 
+  it('a statement signed off on a page under review stays signed off when the night moves on', async () => {
+    const { agent: writer, user } = await signedInAgent('writer');
+    const { agent: reviewer } = await signedInAgent('reviewer');
+    const venue = await makeVenue();
+    const saturn = await makePlanet('Saturn', user);
+    const created = (await writer.post('/api/statements').send({ objectId: saturn.id, templateId: TEMPLATE, venueId: venue.id })).body.data;
+    const page = await pageWithBody(writer, saturn.id, doc(paragraph(statement(created.id))), 'Saturn tonight');
+    expect((await writer.post(`/api/pages/${page.id}/submit`).send({ version: page.version })).status).toBe(200);
+    expect((await reviewer.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: created.id })).status).toBe(200);
+    const { date, at } = middayIn(42);
+    await refreshVenueSky(venue, at);
+    const after = await waitForNight(created.id, date);
+    expect(after.texts!['en-GB']).not.toBe(created.texts['en-GB']);
+    const approved = await reviewer.post(`/api/pages/${page.id}/signoffs/page`);
+    expect(approved.status).toBe(200);
+    expect(approved.body.data.status).toBe('approved');
+    expect((await Page.findByPk(page.id))!.approvedSnapshot!.statementTexts[created.id]).toBe(after.texts!['en-GB']);
+  });
+
   it('a moved venue sends it to review when its wording moves; once accepted, later nights follow again', async () => {
     const { agent: writer, user } = await signedInAgent('writer');
     const { agent: admin } = await signedInAgent('admin');
