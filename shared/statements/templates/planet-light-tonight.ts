@@ -87,7 +87,7 @@ export const planetLightTonight: StatementTemplate = {
       title: `${PLANET_NAMES[planet]}’s distance from the Earth at the observation time`,
       formula: 'd = |r_planet(t − τ) − r_Earth(t)|, τ = d / c (light-time corrected, Meeus ch. 33)',
       inputs: [
-        { symbol: 't', name: 'observation time (UTC)', value: night.observation.utc, unit: '', source: `the sky for ${place} on the night of ${night.localDate}, at ${WHEN[night.observation.basis]?.[0] ?? night.observation.basis}${night.observation.localTime ? ` (${night.observation.localTime} local time)` : ''}` },
+        { symbol: 't', name: 'observation time (UTC)', value: night.observation.utc.replace(/\.\d+Z$/, 'Z'), unit: '', source: `the sky for ${place} on the night of ${night.localDate}, at ${WHEN[night.observation.basis]?.[0] ?? night.observation.basis}${night.observation.localTime ? ` (${night.observation.localTime} local time)` : ''}` },
       ],
       result: { symbol: 'd', name: `distance of ${PLANET_NAMES[planet]} from the Earth’s centre`, value: distanceAu, unit: 'au' },
       note: `Ephemeris: ${night.ephemeris}. The venue sets the time (its dusk); the distance is from the Earth’s centre, and the venue’s own place moves it by less than one Earth radius (about 4.3 × 10⁻⁵ au; Earth radius 6371 km recalled from memory), far below the wording’s precision.`,
@@ -105,7 +105,7 @@ export const planetLightTonight: StatementTemplate = {
     const timeStep = derivedStep({
       title: 'Light-travel time',
       formula: 't = d × au / c',
-      inputs: [{ symbol: 'd', name: 'distance', value: distanceAu, unit: 'au', source: 'first step' }],
+      inputs: [{ symbol: 'd', name: 'distance', value: distanceAu, unit: 'au', source: 'previous step' }],
       constants: [fromConstant(ASTRONOMICAL_UNIT), fromConstant(SPEED_OF_LIGHT)],
       result: { symbol: 't', name: 'light-travel time', value: seconds, unit: 's' },
       note: 'au in km is au [m] / 1000, so t [s] = d [au] × (au [m] / 1000) / c [km/s].',
