@@ -119,6 +119,25 @@ describe('creating a statement for a venue', () => {
   });
 });
 
+describe('one statement per object, template and venue', () => {
+  it('the database refuses a second one, a missing venue counting as one value', async () => {
+    const { agent, user } = await signedInAgent('writer');
+    const venue = await makeVenue();
+    const uranus = await makePlanet('Uranus', user);
+    const first = await Statement.findByPk((await agent.post('/api/statements').send({ objectId: uranus.id, templateId: TEMPLATE, venueId: venue.id })).body.data.id);
+    const copy = (venueId: string | null, templateId = TEMPLATE) => {
+      const { id: _id, createdAt: _c, updatedAt: _u, ...row } = first!.get({ plain: true });
+      return Statement.create({ ...row, templateId, venueId });
+    };
+    await expect(copy(venue.id)).rejects.toThrow(/unique|Validation error/i);
+    // Without a venue (two rows would be "different" under plain NULL semantics): the first is allowed, a second refused.
+    await copy(null, 'naked-eye');
+    await expect(copy(null, 'naked-eye')).rejects.toThrow(/unique|Validation error/i);
+    await copy((await makeVenue()).id);
+    expect(await Statement.count({ where: { skyObjectId: uranus.id } })).toBe(3);
+  });
+});
+
 describe('deleting a venue', () => {
   it('is refused in words while statements are about its sky; the database refuses too', async () => {
     const { agent: writer, user } = await signedInAgent('writer');
