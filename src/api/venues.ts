@@ -6,7 +6,7 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { VenueChoiceDto } from '@shared/schemas/venue.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 
-// Under ['venues'], so the venues feature's changes (create, rename, delete) refresh it too.
+/** The query for venue choices; under ['venues'], so the venues feature's changes (create, rename, delete) refresh it too. */
 export const venueChoicesQueryOptions = () =>
   queryOptions({ queryKey: ['venues', 'choices'], queryFn: async () => (await api.get<ApiData<VenueChoiceDto[]>>('/venues/choices')).data });
 
