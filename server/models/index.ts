@@ -55,6 +55,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   Media.belongsTo(User, { foreignKey: 'uploadedById', as: 'uploadedBy' });
 
   Statement.belongsTo(CosmologyDescription, { foreignKey: 'modelId', as: 'modelDescription' });
+  Statement.belongsTo(Venue, { foreignKey: 'venueId', as: 'venue' });
 
   KioskScreen.belongsTo(Venue, { foreignKey: 'venueId', as: 'venue' });
   Venue.hasMany(KioskScreen, { foreignKey: 'venueId', as: 'screens' });

@@ -2,13 +2,15 @@ import { DataTypes, Model, type CreationOptional, type InferAttributes, type Inf
 import type { ResolvedModel } from '@shared/schemas/calc.ts';
 import type { StoredWorking } from '@shared/statements/working-codec.ts';
 import type { CosmologyDescription } from './cosmology-description.ts';
+import type { Venue } from './venue.ts';
 import type { Step } from '@shared/engine/working.ts';
-import type { LocalisedText, UsedInput } from '@shared/statements/index.ts';
+import type { LocalisedText, StoredNight, UsedInput } from '@shared/statements/index.ts';
 
 export type StatementStatus = 'current' | 'changed' | 'broken';
 
 /**
- * A checked statement: one template applied to one object, with the inputs it used, its result,
+ * A checked statement: one template applied to one object (and, for a statement about a venue's
+ * sky, one venue), with the inputs it used, its result,
  * its public text per locale and its working. `acknowledgedTexts` is the wording last accepted
  * by a reviewer; when a recompute moves the wording away from it the statement is "changed".
  * The cosmology it assumed is a shared CosmologyDescription row (`modelId`); the working is
@@ -18,6 +20,10 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
   declare id: CreationOptional<string>;
   declare skyObjectId: string;
   declare templateId: string;
+  /** The venue whose night the statement describes; null for statements about the object alone. */
+  declare venueId: CreationOptional<string | null>;
+  /** Loaded with `include: 'venue'`. */
+  declare venue?: NonAttribute<Venue | null>;
   declare status: StatementStatus;
   declare statusReason: CreationOptional<string | null>;
   declare value: CreationOptional<number | null>;
@@ -35,6 +41,8 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
   declare working: CreationOptional<StoredWorking | Step[]>;
   declare warnings: CreationOptional<string[]>;
   declare modelId: CreationOptional<string | null>;
+  /** For a statement that follows tonight: the venue, night and method it was last computed for, and the method last accepted. */
+  declare night: CreationOptional<StoredNight | null>;
   /** Loaded with `include: 'modelDescription'`. */
   declare modelDescription?: NonAttribute<CosmologyDescription | null>;
   declare settingsVersion: number;
@@ -49,6 +57,7 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
         id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
         skyObjectId: { type: DataTypes.UUID, allowNull: false },
         templateId: { type: DataTypes.STRING(40), allowNull: false },
+        venueId: { type: DataTypes.UUID },
         status: { type: DataTypes.STRING(10), allowNull: false },
         statusReason: { type: DataTypes.TEXT },
         value: { type: DataTypes.DOUBLE },
@@ -65,6 +74,7 @@ export class Statement extends Model<InferAttributes<Statement>, InferCreationAt
         working: { type: DataTypes.JSON, allowNull: false, defaultValue: [] },
         warnings: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
         modelId: { type: DataTypes.CHAR(64) },
+        night: { type: DataTypes.JSONB },
         settingsVersion: { type: DataTypes.INTEGER, allowNull: false },
         computedAt: { type: DataTypes.DATE, allowNull: false },
         createdById: { type: DataTypes.UUID },

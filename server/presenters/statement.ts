@@ -6,13 +6,17 @@ import { can } from '../policies/index.ts';
 
 /**
  * The API contract for a statement. The working is included only when given (it is large, and
- * reading it means fetching its skeletons: see readWorking). The cosmology needs `modelDescription` loaded.
+ * reading it means fetching its skeletons: see readWorking). The cosmology needs `modelDescription`
+ * loaded, and a statement about a venue its `venue`.
  */
 export function presentStatement(statement: Statement, object: Pick<SkyObject, 'id' | 'name' | 'kind'>, viewer: User, { working }: { working?: Step[] } = {}): StatementDto {
+  const venue = statement.venue;
   return {
     id: statement.id,
     object: { id: object.id, name: object.name, kind: object.kind },
     template: { id: statement.templateId, title: findTemplate(statement.templateId)?.title ?? statement.templateId },
+    venue: venue ? { id: venue.id, name: venue.name, timeZone: venue.timeZone } : null,
+    night: statement.night ? { localDate: statement.night.localDate, observationUtc: statement.night.observationUtc } : null,
     status: statement.status,
     statusReason: statement.statusReason ?? null,
     value: statement.value ?? null,

@@ -6,7 +6,7 @@ import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
 import { NotFoundError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
-import { CosmologyDescription, SkyObject, Statement } from '../models/index.ts';
+import { CosmologyDescription, SkyObject, Statement, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentStatement } from '../presenters/statement.ts';
 import { acceptStatementWording } from '../services/statements/accept.ts';
@@ -14,9 +14,15 @@ import { findOrCreateStatement } from '../services/statements/create.ts';
 import { recomputeStatements } from '../services/statements/recompute.ts';
 import { readWorking } from '../services/statements/working-store.ts';
 
+/** What presenting a statement needs loaded with it: its cosmology and its venue. */
+const INCLUDE = [
+  { model: CosmologyDescription, as: 'modelDescription' },
+  { model: Venue, as: 'venue', attributes: ['id', 'name', 'timeZone'] },
+];
+
 async function loadStatement(id: string) {
   if (!IdSchema.safeParse(id).success) throw NotFoundError('There is no such statement.');
-  const statement = await Statement.findByPk(id, { include: [{ model: CosmologyDescription, as: 'modelDescription' }] });
+  const statement = await Statement.findByPk(id, { include: INCLUDE });
   if (!statement) throw NotFoundError('There is no such statement.');
   const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
   return { statement, object: object!, working: await readWorking(statement.working) };
@@ -26,7 +32,9 @@ export const statementTemplatesRouter = Router();
 statementTemplatesRouter.use(requireUser);
 statementTemplatesRouter.get('/', (req, res) => {
   authorize(currentUser(req), 'statement', 'read');
-  res.json({ data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology }) => ({ id, title, needs, usesCosmology })) });
+  res.json({
+    data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology, needsVenue, followsTonight }) => ({ id, title, needs, usesCosmology, needsVenue: !!needsVenue, followsTonight: !!followsTonight })),
+  });
 });
 
 export const statementsRouter = Router();
@@ -45,7 +53,7 @@ statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (re
     where,
     // The list shows no working: leave it in the database.
     attributes: { exclude: ['working'] },
-    include: [{ model: CosmologyDescription, as: 'modelDescription' }],
+    include: INCLUDE,
     // Statements that need attention first, then the newest computations.
     order: [[Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'], ['computedAt', 'DESC']],
     limit: q.pageSize,
@@ -58,8 +66,8 @@ statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (re
 statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'create');
-  const { objectId, templateId } = req.body as StatementCreateInput;
-  const { statement: made, created } = await findOrCreateStatement(objectId, templateId, viewer);
+  const { objectId, templateId, venueId } = req.body as StatementCreateInput;
+  const { statement: made, created } = await findOrCreateStatement(objectId, templateId, viewer, venueId ?? null);
   const { statement, object, working } = await loadStatement(made.id);
   res.status(created ? 201 : 200).json({ data: presentStatement(statement, object, viewer, { working }) });
 });

@@ -11,7 +11,7 @@ import { validate } from '../middlewares/validate.ts';
 import { KioskScreen, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
-import { presentVenue } from '../presenters/venue.ts';
+import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
 import { getSkySnapshot } from '../services/sky-snapshots.ts';
 import { createVenue, deleteVenue, updateVenue } from '../services/venue-save.ts';
 import { venueScreensRouter } from './venue-screens.ts';
@@ -38,6 +38,12 @@ venuesRouter.get('/', async (req, res) => {
   authorize(viewer, 'venue', 'list');
   const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), screenCounts()]);
   res.json({ data: venues.map((v) => presentVenue(v, viewer, counts.get(v.id) ?? 0)) });
+});
+
+/** The venues to choose from (e.g. the venue a statement is for): names only, for every member of staff. */
+venuesRouter.get('/choices', async (req, res) => {
+  authorize(currentUser(req), 'venue', 'choose');
+  res.json({ data: (await Venue.findAll({ attributes: ['id', 'name', 'timeZone'], order: [['name', 'ASC']] })).map(presentVenueChoice) });
 });
 
 venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {

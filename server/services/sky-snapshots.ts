@@ -5,6 +5,7 @@ import { isLocalDate, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
 import { SKY_VERSION, type SkyTonight } from '@shared/sky/types.ts';
 import { getSequelize } from '../db.ts';
 import { SkySnapshot, Venue } from '../models/index.ts';
+import { skyEvents } from './sky-events.ts';
 
 /** The venue fields the sky depends on; a snapshot made for other values, or by older rules, is stale. */
 function matchesVenue(sky: SkyTonight, venue: Venue): boolean {
@@ -47,7 +48,9 @@ export async function getSkySnapshot(venueId: string, localDate: string): Promis
 }
 
 /**
- * Makes sure a venue has snapshots for the night in progress (or coming) and the next one.
+ * Makes sure a venue has snapshots for the night in progress (or coming) and the next one. When
+ * the night in progress is computed (a new night, or the venue moved) it says so (`nightComputed`),
+ * so statements about the venue's night follow.
  * @param force recompute even when present (after the venue moved)
  */
 export async function refreshVenueSky(venue: Venue, now = new Date(), force = false): Promise<number> {
@@ -58,6 +61,7 @@ export async function refreshVenueSky(venue: Venue, now = new Date(), force = fa
     if (stored && matchesVenue(stored.data, venue)) continue;
     await computeSkySnapshot(venue, localDate, now);
     computed += 1;
+    if (localDate === tonight) skyEvents.emit('nightComputed', { venueId: venue.id, localDate });
   }
   return computed;
 }

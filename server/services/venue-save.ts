@@ -2,7 +2,7 @@ import type { VenueCreateValues, VenueUpdateValues } from '@shared/schemas/venue
 import { getSequelize } from '../db.ts';
 import { ConflictError } from '../errors.ts';
 import { enqueueVenueSky } from '../jobs/sky-snapshots.ts';
-import { SkySnapshot, Venue, type User } from '../models/index.ts';
+import { SkyObject, SkySnapshot, Statement, Venue, type User } from '../models/index.ts';
 import { recordAudit } from './audit.ts';
 
 const SKY_FIELDS = ['latitude', 'longitude', 'elevationM', 'timeZone'] as const;
@@ -46,8 +46,22 @@ export async function updateVenue(venue: Venue, values: VenueUpdateValues, actor
   return venue;
 }
 
-/** Deletes a venue with its screens (their tokens stop working) and stored skies. */
+/**
+ * Deletes a venue with its screens (their tokens stop working) and stored skies. A venue that
+ * checked statements are about is kept: pages show those statements, and each needs its venue's
+ * night (the foreign key restricts too, should a statement be made meanwhile).
+ * @throws HttpError 409 `venue_in_use`
+ */
 export async function deleteVenue(venue: Venue, actor: User, ip?: string): Promise<void> {
+  const statements = await Statement.findAll({ attributes: ['skyObjectId'], where: { venueId: venue.id }, limit: 3 });
+  if (statements.length > 0) {
+    const count = await Statement.count({ where: { venueId: venue.id } });
+    const names = (await SkyObject.findAll({ attributes: ['name'], where: { id: [...new Set(statements.map((s) => s.skyObjectId))] } })).map((o) => o.name);
+    throw ConflictError(
+      `${venue.name} cannot be deleted: ${count === 1 ? 'a checked statement is' : `${count} checked statements are`} about its sky tonight (${names.join(', ')}${count > names.length ? ', …' : ''}), and pages may show ${count === 1 ? 'it' : 'them'}. Rename the venue or change its position instead.`,
+      'venue_in_use',
+    );
+  }
   await getSequelize().transaction(async (transaction) => {
     await recordAudit({ actorId: actor.id, action: 'venue.deleted', subjectType: 'venue', subjectId: venue.id, data: { name: venue.name }, ip }, transaction);
     await venue.destroy({ transaction });

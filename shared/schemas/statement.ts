@@ -17,6 +17,8 @@ const LocalisedTextSchema = z.record(z.enum(STATEMENT_LOCALES), z.string());
 export const StatementCreateSchema = z.object({
   objectId: z.uuid({ message: 'Choose an object' }),
   templateId: z.string({ message: 'Choose a statement' }).min(1, 'Choose a statement').max(40),
+  /** For templates about a venue's night; refused by the others. */
+  venueId: z.uuid({ message: 'Choose a venue from the list' }).nullish(),
 });
 export type StatementCreateInput = z.infer<typeof StatementCreateSchema>;
 
@@ -47,6 +49,10 @@ export const StatementDtoSchema = z.object({
   id: z.string(),
   object: z.object({ id: z.string(), name: z.string(), kind: z.string() }),
   template: z.object({ id: z.string(), title: z.string() }),
+  /** The venue whose night it describes, or null. */
+  venue: z.object({ id: z.string(), name: z.string(), timeZone: z.string() }).nullable(),
+  /** For a statement that follows tonight: the night and observation instant last computed. */
+  night: z.object({ localDate: z.string(), observationUtc: z.string() }).nullable(),
   status: StatementStatusSchema,
   statusReason: z.string().nullable(),
   value: z.number().nullable(),
@@ -67,5 +73,14 @@ export const StatementDtoSchema = z.object({
 export type StatementDto = z.infer<typeof StatementDtoSchema>;
 
 /** A template as the picker lists it. */
-export const StatementTemplateDtoSchema = z.object({ id: z.string(), title: z.string(), needs: z.string(), usesCosmology: z.boolean() });
+export const StatementTemplateDtoSchema = z.object({
+  id: z.string(),
+  title: z.string(),
+  needs: z.string(),
+  usesCosmology: z.boolean(),
+  /** Creating it needs a venue. */
+  needsVenue: z.boolean(),
+  /** Its number follows the venue's night without a new sign-off. */
+  followsTonight: z.boolean(),
+});
 export type StatementTemplateDto = z.infer<typeof StatementTemplateDtoSchema>;

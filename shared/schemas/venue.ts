@@ -58,6 +58,10 @@ export const VenueDtoSchema = z.object({
 });
 export type VenueDto = z.infer<typeof VenueDtoSchema>;
 
+/** A venue as a choice in a list (e.g. the venue a statement is for): every member of staff sees these. */
+export const VenueChoiceDtoSchema = z.object({ id: z.string(), name: z.string(), timeZone: z.string() });
+export type VenueChoiceDto = z.infer<typeof VenueChoiceDtoSchema>;
+
 /** Query for the sky of a venue: an optional date and clock time. */
 export const SkyQuerySchema = z.object({
   date: z

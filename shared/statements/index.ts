@@ -8,6 +8,7 @@ import { distanceTodayTemplate } from './templates/distance-today.ts';
 import { lightTravel } from './templates/light-travel.ts';
 import { luminositySun } from './templates/luminosity-sun.ts';
 import { nakedEye } from './templates/naked-eye.ts';
+import { planetLightTonight } from './templates/planet-light-tonight.ts';
 import { scaleModel } from './templates/scale-model.ts';
 import type { StatementTemplate, TemplateContext, TemplateOutcome } from './types.ts';
 
@@ -15,9 +16,18 @@ export * from './types.ts';
 export * from './locales.ts';
 export { choosePrecision, roundToSignificant } from './precision.ts';
 export { formatApproximate } from './number-words.ts';
+export { nightFromSky, planetOf } from './tonight.ts';
 
 /** Every template, in the order the picker lists them. */
-export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [luminositySun, brightnessAt10pc, lightTravel, distanceTodayTemplate, nakedEye, scaleModel];
+export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [
+  luminositySun,
+  brightnessAt10pc,
+  lightTravel,
+  distanceTodayTemplate,
+  nakedEye,
+  scaleModel,
+  planetLightTonight,
+];
 
 export const TEMPLATE_IDS = STATEMENT_TEMPLATES.map((t) => t.id) as [string, ...string[]];
 

@@ -15,13 +15,63 @@ export interface StatementMeasurement {
   source: { id: string; citation: string };
 }
 
+/** The venue a statement is for: the place whose night it describes. */
+export interface StatementVenue {
+  id: string;
+  name: string;
+  /** Degrees, north positive. */
+  latitude: number;
+  /** Degrees, east positive. */
+  longitude: number;
+  elevationM: number;
+  /** IANA time zone. */
+  timeZone: string;
+}
+
+/** A venue's night as the sky computation gave it (the server passes the numbers in). */
+export interface StatementNight {
+  /** The evening's date "YYYY-MM-DD" at the venue. */
+  localDate: string;
+  /** The instant the distances are for, and how it was chosen (e.g. the end of nautical twilight). */
+  observation: { utc: string; localTime: string | null; basis: string };
+  /** Each planet's distance from the Earth's centre at that instant, light-time corrected. */
+  planets: Array<{ id: string; distanceAu: number }>;
+  /** The ephemeris, as the sky computation names it. */
+  ephemeris: string;
+  /** The version of the sky rules the night was computed by. */
+  skyVersion: number;
+}
+
 /** Everything a template may read. */
 export interface TemplateContext {
-  object: { id: string; name: string; kind: string };
+  object: { id: string; name: string; kind: string; designations?: string[] };
   measurements: StatementMeasurement[];
   model: CalcModel;
   /** The organisation's preferred band for magnitudes (e.g. V). */
   band: string;
+  /** For statements tied to a venue: the venue and its night (absent or null otherwise). */
+  venue?: StatementVenue | null;
+  night?: StatementNight | null;
+}
+
+/**
+ * What a statement that follows tonight was computed for. Reviewers sign off the method; a new
+ * night alone moves only `localDate`, `observationUtc` and the number.
+ */
+export interface NightBasis {
+  venueId: string;
+  localDate: string;
+  observationUtc: string;
+  /** Everything but the night: a change here goes through the normal "changed" review. */
+  method: {
+    planet: string;
+    venue: { latitude: number; longitude: number; elevationM: number; timeZone: string };
+    ephemeris: string;
+    skyVersion: number;
+    constants: { auM: number; cKmS: number };
+    /** The sentence around the number, per locale (the number replaced by "…"). */
+    wording: LocalisedText;
+  };
 }
 
 /** An input a statement used, stored so a change can be detected and shown. */
@@ -53,6 +103,17 @@ export interface TemplateSuccess {
   warnings: string[];
   inputs: UsedInput[];
   model: ResolvedModel | null;
+  /** Set by templates that follow tonight: the venue, night and method it was computed for. */
+  night?: NightBasis;
+}
+
+/**
+ * A NightBasis as a statement stores it, with the method last accepted (by a reviewer, or by the
+ * first computation): a new night follows only while its method is that one.
+ */
+export interface StoredNight extends NightBasis {
+  /** Null until a wording computed by some method has been accepted. */
+  acceptedMethod: NightBasis['method'] | null;
 }
 
 /** A statement that cannot be rendered, and why, in words. */
@@ -73,5 +134,13 @@ export interface StatementTemplate {
   needs: string;
   /** True when the template uses the organisation's cosmology (so a model change can move it). */
   usesCosmology: boolean;
+  /** True when the statement is about one venue's sky: creating it needs a venue. */
+  needsVenue?: boolean;
+  /**
+   * True when the number changes with the night: a recompute for a new night keeps the statement
+   * current and its accepted wording follows, as long as the method (venue position, constants,
+   * ephemeris, sentence) is the one last accepted.
+   */
+  followsTonight?: boolean;
   evaluate(ctx: TemplateContext): TemplateOutcome;
 }

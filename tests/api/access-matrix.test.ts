@@ -87,6 +87,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'GET /api/catalogue/exports/objects.csv': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/catalogue/exports/measurements.csv': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/venues': ['401', '401', '403', '403', 'ok', 'ok'],
+  'GET /api/venues/choices': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/venues': ['401', '401', '403', '403', '403', 'ok'],
   'GET /api/venues/:id': ['401', '401', '403', '403', 'ok', 'ok'],
   'PATCH /api/venues/:id': ['401', '401', '403', '403', '403', 'ok'],

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/demo/accounts.ts';
 import { openBrowser, screenshot, signInThroughForm } from '../support/browser.ts';
+import { demoSession, ok, useSessionInBrowser } from '../support/e2e-api.ts';
 
 const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 
@@ -16,6 +17,28 @@ describe('checked statements in the browser', () => {
     await expect.poll(() => page.getByRole('heading', { name: 'Working', exact: true }).count()).toBe(1);
     await expect.poll(() => page.getByText('Public wording: round to what the data supports').count()).toBeGreaterThan(0);
     await screenshot(page, 'statement-detail');
+    expect(errors).toEqual([]);
+  });
+
+  it('a writer works out a planet’s light time tonight for the venue, and sees the venue and night on the statement', async () => {
+    const { context, page, errors, baseUrl } = await openBrowser();
+    const writer = await demoSession(baseUrl, 'writer');
+    await useSessionInBrowser(context, baseUrl, writer);
+    const found = ok(await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Mars'), 'find Mars').body.data.rows;
+    await page.goto(`${baseUrl}/catalogue/${found.find((o) => o.name === 'Mars')!.id}`);
+    await page.getByLabel('Add a statement').selectOption({ label: 'How long a planet’s light takes to reach us tonight' });
+    const venue = page.getByLabel('Venue whose night it is');
+    // The demo has one venue: it is chosen at once.
+    await expect.poll(() => venue.locator('option:checked').textContent()).toBe('Corrie Vale Planetarium (demo) (Europe/London)');
+    await page.getByRole('button', { name: 'Work it out' }).click();
+    const made = page.getByRole('link', { name: /^Light from Mars takes about [\d.]+ minutes to reach us tonight\.$/ });
+    await expect.poll(() => made.count()).toBe(1);
+    await expect.poll(() => page.getByText(/for Corrie Vale Planetarium \(demo\), night of/).count()).toBeGreaterThan(0);
+    await made.click();
+    await expect.poll(() => page.getByText(/^The night of .+ at Corrie Vale Planetarium \(demo\)$/).count()).toBe(1);
+    await expect.poll(() => page.getByText('Mars’s distance from the Earth at the observation time').count()).toBe(1);
+    await expect.poll(() => page.getByText(/^La lumière de Mars met environ/).count()).toBe(1);
+    await screenshot(page, 'statement-tonight');
     expect(errors).toEqual([]);
   });
 

@@ -2,6 +2,7 @@ import { eyeSafetyReason } from '@shared/editor/caution.ts';
 import { blockTexts, hasEyeSafetyNotice, STATEMENT_PLACEHOLDER } from '@shared/editor/doc-text.ts';
 import { checkNumbers, type NumberFlag } from '@shared/editor/number-check.ts';
 import { REQUIREMENT_LABELS } from '@shared/media/schemas.ts';
+import { findTemplate } from '@shared/statements/index.ts';
 import { PageNumberFlag, PageSignoff, SkyObject, type Page, type PageRevision } from '../../models/index.ts';
 import { isMediaReadyForPublishing } from '../media-usage.ts';
 import { currentText, type LoadedStatement } from './page-statements.ts';
@@ -47,13 +48,26 @@ export async function submissionProblems(page: Page, revision: PageRevision, sta
   return problems;
 }
 
-/** Statement sign-offs on this revision that match the wording shown now, by statement id. */
+/**
+ * Whether a sign-off still holds for a statement that follows tonight although its number moved:
+ * it is current (only the night changed since its wording was accepted) and was signed off after
+ * a reviewer last accepted its wording, so the reviewer signed off the method that is in use.
+ */
+function followsSignedNight(statement: LoadedStatement['statement'], signedAt: Date): boolean {
+  if (!findTemplate(statement.templateId)?.followsTonight || statement.status !== 'current') return false;
+  return !statement.acknowledgedAt || signedAt >= statement.acknowledgedAt;
+}
+
+/**
+ * Statement sign-offs on this revision that match the wording shown now (or, for a statement
+ * that follows tonight, its method: a new night does not undo a sign-off), by statement id.
+ */
 export async function validStatementSignoffs(page: Page, revision: PageRevision, statements: Map<string, LoadedStatement>): Promise<Set<string>> {
   const rows = await PageSignoff.findAll({ where: { pageId: page.id, revisionId: revision.id, kind: 'statement' } });
   const valid = new Set<string>();
   for (const row of rows) {
     const loaded = row.statementId ? statements.get(row.statementId) : undefined;
-    if (loaded && currentText(loaded.statement, page.locale) === row.statementText) valid.add(row.statementId!);
+    if (loaded && (currentText(loaded.statement, page.locale) === row.statementText || followsSignedNight(loaded.statement, row.createdAt))) valid.add(row.statementId!);
   }
   return valid;
 }

@@ -6,7 +6,7 @@ import { statementEvents } from './events.ts';
 
 /**
  * A reviewer accepts a changed statement's new wording: it becomes the accepted text and the
- * statement is current again. A broken statement cannot be accepted; its inputs need fixing.
+ * statement is current again (for one that follows tonight, its method becomes the accepted one). A broken statement cannot be accepted; its inputs need fixing.
  * @throws HttpError 409 when the statement is not in the changed state
  */
 export async function acceptStatementWording(statement: Statement, reviewer: User): Promise<Statement> {
@@ -20,7 +20,9 @@ export async function acceptStatementWording(statement: Statement, reviewer: Use
   }
   await getSequelize().transaction(async (transaction) => {
     const before = statement.acknowledgedTexts;
-    statement.set({ acknowledgedTexts: statement.texts, acknowledgedById: reviewer.id, acknowledgedAt: new Date(), status: 'current', statusReason: null });
+    // For a statement that follows tonight the reviewer accepts its method too: later nights follow it.
+    const night = statement.night ? { ...statement.night, acceptedMethod: statement.night.method } : null;
+    statement.set({ acknowledgedTexts: statement.texts, acknowledgedById: reviewer.id, acknowledgedAt: new Date(), status: 'current', statusReason: null, night });
     await statement.save({ transaction });
     await recordAudit({ actorId: reviewer.id, action: 'statement.wording_accepted', subjectType: 'statement', subjectId: statement.id, data: { before, after: statement.texts } }, transaction);
   });

@@ -1,19 +1,21 @@
 import { QueryTypes } from 'sequelize';
 import { resolveModel } from '@shared/engine/model-resolve.ts';
-import type { LocalisedText, StatementLocale, UsedInput } from '@shared/statements/index.ts';
+import type { LocalisedText, StatementLocale, StoredNight, UsedInput } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import type { StatementStatus } from '../../models/index.ts';
-import type { BatchJob, BatchModel, BatchStatement } from './evaluate-batch.ts';
-import { buildTemplateContexts, type SettingsSnapshot } from './context.ts';
+import { contextKey, type BatchJob, type BatchModel, type BatchStatement } from './evaluate-batch.ts';
+import { buildTemplateContexts, buildVenueNights, withVenue, type SettingsSnapshot } from './context.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 
 interface StatementRow {
   id: string;
   sky_object_id: string;
   template_id: string;
+  venue_id: string | null;
   status: StatementStatus;
   acknowledged_texts: LocalisedText | null;
   inputs: UsedInput[];
+  night: StoredNight | null;
   model_label: string | null;
   model_h0: number | null;
   preview_text: string | null;
@@ -37,17 +39,24 @@ export async function batchModelFor(settings: SettingsSnapshot): Promise<BatchMo
 
 /**
  * Loads a batch for evaluateBatch: only what deciding the new status needs (not the old working or
- * texts, which a recompute replaces), the objects, and their preferred measurements, in three queries.
+ * texts, which a recompute replaces), the objects, and their preferred measurements, in three queries;
+ * statements about a venue also get the venue and its night (buildVenueNights).
  * @param ids the statements (those deleted meanwhile are left out)
  * @param settings the adopted settings
  * @param model the batch's cosmology (batchModelFor)
- * @param options.computedAt when the computation counts as made
+ * @param options.computedAt when the computation counts as made (and whose night venue statements read)
+ * @param options.night a night chosen for one venue's statements
  * @param options.previewLocale load each statement's current text in this locale, for a preview
  */
-export async function loadBatchJob(ids: string[], settings: SettingsSnapshot, model: BatchModel | null, options: { computedAt: Date; previewLocale?: StatementLocale }): Promise<BatchJob> {
+export async function loadBatchJob(
+  ids: string[],
+  settings: SettingsSnapshot,
+  model: BatchModel | null,
+  options: { computedAt: Date; night?: { venueId: string; localDate: string }; previewLocale?: StatementLocale },
+): Promise<BatchJob> {
   const sequelize = getSequelize();
   const rows = await sequelize.query<StatementRow>(
-    `SELECT s.id, s.sky_object_id, s.template_id, s.status, s.acknowledged_texts, s.inputs,
+    `SELECT s.id, s.sky_object_id, s.template_id, s.venue_id, s.status, s.acknowledged_texts, s.inputs, s.night,
             d.label AS model_label, (d.description->>'H0')::float8 AS model_h0,
             CASE WHEN $2::text IS NULL THEN NULL ELSE s.texts->>$2::text END AS preview_text
        FROM statements s LEFT JOIN cosmology_descriptions d ON d.id = s.model_id
@@ -56,17 +65,28 @@ export async function loadBatchJob(ids: string[], settings: SettingsSnapshot, mo
   );
   const objectIds = [...new Set(rows.map((r) => r.sky_object_id))];
   const objects = objectIds.length
-    ? await sequelize.query<{ id: string; name: string; kind: string }>('SELECT id, name, kind FROM sky_objects WHERE id = ANY($1::uuid[])', { bind: [objectIds], type: QueryTypes.SELECT })
+    ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[] }>('SELECT id, name, kind, designations FROM sky_objects WHERE id = ANY($1::uuid[])', {
+        bind: [objectIds],
+        type: QueryTypes.SELECT,
+      })
     : [];
   const contexts = await buildTemplateContexts(objects, settings);
+  const venues = await buildVenueNights([...new Set(rows.flatMap((r) => (r.venue_id ? [r.venue_id] : [])))], options.computedAt, options.night);
+  for (const r of rows) {
+    const base = contexts.get(r.sky_object_id);
+    const venue = r.venue_id ? venues.get(r.venue_id) : undefined;
+    if (base && venue) contexts.set(contextKey(r.sky_object_id, r.venue_id), withVenue(base, venue));
+  }
   const statements: BatchStatement[] = rows.map((r) => ({
     id: r.id,
     skyObjectId: r.sky_object_id,
     templateId: r.template_id,
+    venueId: r.venue_id,
     status: r.status,
     acknowledgedTexts: r.acknowledged_texts,
     inputs: r.inputs ?? [],
     model: r.model_label !== null && r.model_h0 !== null ? { label: r.model_label, H0: r.model_h0 } : null,
+    night: r.night,
     ...(options.previewLocale ? { previewText: r.preview_text } : {}),
   }));
   return {

@@ -1,9 +1,13 @@
-import { QueryTypes } from 'sequelize';
-import type { StatementMeasurement, TemplateContext } from '@shared/statements/index.ts';
+import { Op, QueryTypes } from 'sequelize';
+import { nightFromSky, type StatementMeasurement, type StatementNight, type StatementVenue, type TemplateContext } from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import { findQuantity } from '@shared/catalogue/quantities.ts';
+import { SkyInputError } from '@shared/sky/errors.ts';
+import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { getSequelize } from '../../db.ts';
+import { Venue } from '../../models/index.ts';
 import { getPreferredMeasurements, type PreferredMeasurement } from '../preferred-measurements.ts';
+import { getSkySnapshot } from '../sky-snapshots.ts';
 
 /** The organisation's choices a statement depends on. */
 export interface SettingsSnapshot {
@@ -12,7 +16,7 @@ export interface SettingsSnapshot {
   version: number;
 }
 
-type ObjectRef = { id: string; name: string; kind: string };
+type ObjectRef = { id: string; name: string; kind: string; designations?: string[] };
 
 function asStatementMeasurement(m: Pick<PreferredMeasurement, 'measurementId' | 'quantity' | 'value' | 'unit' | 'band' | 'uncertainty' | 'source'>): StatementMeasurement {
   return {
@@ -29,7 +33,45 @@ function asStatementMeasurement(m: Pick<PreferredMeasurement, 'measurementId' | 
 }
 
 function contextFor(object: ObjectRef, measurements: StatementMeasurement[], settings: SettingsSnapshot): TemplateContext {
-  return { object: { id: object.id, name: object.name, kind: object.kind }, measurements, model: settings.model, band: settings.band };
+  return { object: { id: object.id, name: object.name, kind: object.kind, designations: object.designations ?? [] }, measurements, model: settings.model, band: settings.band };
+}
+
+/** A venue and the night a statement about it reads (null when its sky could not be computed). */
+export interface VenueNight {
+  venue: StatementVenue;
+  night: StatementNight | null;
+}
+
+/**
+ * The venues statements are for, each with its night: the night in progress at the venue at `at`
+ * (or the night given for one venue, e.g. by the daily sky job), from the stored sky snapshot,
+ * which is computed and stored when missing or made for the venue's old position.
+ * @param venueIds the venues
+ * @param at the instant whose night counts
+ * @param night a night chosen for one venue
+ * @returns by venue id; venues that no longer exist are left out
+ */
+export async function buildVenueNights(venueIds: string[], at: Date, night?: { venueId: string; localDate: string }): Promise<Map<string, VenueNight>> {
+  const found = new Map<string, VenueNight>();
+  if (venueIds.length === 0) return found;
+  for (const v of await Venue.findAll({ where: { id: { [Op.in]: venueIds } } })) {
+    const localDate = night?.venueId === v.id ? night.localDate : nightDateAt(at.getTime(), v.timeZone);
+    let sky: StatementNight | null = null;
+    try {
+      const snapshot = await getSkySnapshot(v.id, localDate);
+      sky = snapshot ? nightFromSky(snapshot.data) : null;
+    } catch (error) {
+      // A venue the sky cannot be computed for: its statements break, saying so (the template's refusal).
+      if (!(error instanceof SkyInputError)) throw error;
+    }
+    found.set(v.id, { venue: { id: v.id, name: v.name, latitude: v.latitude, longitude: v.longitude, elevationM: v.elevationM, timeZone: v.timeZone }, night: sky });
+  }
+  return found;
+}
+
+/** An object's context for one venue: the same measurements and settings, with the venue and its night. */
+export function withVenue(ctx: TemplateContext, venueNight: VenueNight): TemplateContext {
+  return { ...ctx, venue: venueNight.venue, night: venueNight.night };
 }
 
 /**

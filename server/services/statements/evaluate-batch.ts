@@ -1,4 +1,4 @@
-import { evaluateStatement, type StatementLocale, type TemplateContext, type UsedInput } from '@shared/statements/index.ts';
+import { evaluateStatement, findTemplate, type StatementLocale, type TemplateContext, type UsedInput } from '@shared/statements/index.ts';
 import type { SkeletonJson } from '@shared/statements/working-codec.ts';
 import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
 import { packForStorage } from './working-pack.ts';
@@ -8,6 +8,8 @@ export interface BatchStatement extends PreviousComputation {
   id: string;
   skyObjectId: string;
   templateId: string;
+  /** The venue whose night it describes, or null. */
+  venueId: string | null;
   /** Its current public text in the preview's locale (previews only). */
   previewText?: string | null;
 }
@@ -20,10 +22,16 @@ export interface BatchModel {
   json: string;
 }
 
+/**
+ * Where a statement's context is in BatchJob.contexts: by object, or by object and venue for a
+ * statement about a venue's night (its context adds the venue and the night's sky).
+ */
+export const contextKey = (skyObjectId: string, venueId: string | null): string => (venueId ? `${skyObjectId}@${venueId}` : skyObjectId);
+
 /** A batch of statements to compute: plain data, so it can cross to a worker thread. */
 export interface BatchJob {
   statements: BatchStatement[];
-  /** Each object's template context, by object id. */
+  /** Each template context, by contextKey (object id, or object and venue). */
   contexts: Record<string, TemplateContext>;
   /** Null when the adopted settings use no cosmology a statement could name. */
   model: BatchModel | null;
@@ -96,9 +104,9 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   const relinked: string[] = [];
   const inputLinks: Array<{ statement_id: string; measurement_id: string; source_id: string }> = [];
   for (const statement of ordered) {
-    const ctx = job.contexts[statement.skyObjectId];
+    const ctx = job.contexts[contextKey(statement.skyObjectId, statement.venueId)];
     if (!ctx) continue;
-    const result = applyOutcome(statement, evaluateStatement(statement.templateId, ctx));
+    const result = applyOutcome(statement, evaluateStatement(statement.templateId, ctx), findTemplate(statement.templateId));
     if (job.previewLocale) {
       const newText = result.status === 'broken' ? null : (result.texts[job.previewLocale] ?? null);
       if (newText !== (statement.previewText ?? null) || result.status !== statement.status) {
@@ -139,12 +147,14 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       significant_figures: result.significantFigures,
       texts: result.texts,
       footnotes: result.footnotes,
-      // Only a first computation sets the accepted wording; afterwards only a reviewer does.
-      acknowledged_texts: statement.acknowledgedTexts ? null : result.acknowledgedTexts,
+      // Only a first computation sets the accepted wording; afterwards only a reviewer does, or a
+      // new night for a statement that follows tonight (applyOutcome decides).
+      acknowledged_texts: statement.acknowledgedTexts && !result.followedNight ? null : result.acknowledgedTexts,
       inputs: inputsMoved ? result.inputs : null,
       working: packed.stored,
       warnings: result.warnings,
       model_id: modelId,
+      night: result.night,
       settings_version: job.settingsVersion,
       computed_at: job.computedAt,
     });

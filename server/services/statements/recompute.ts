@@ -17,7 +17,9 @@ export type RecomputeScope =
   | { objectId: string }
   | { statementIds: string[] }
   | { measurementId: string }
-  | { sourceId: string };
+  | { sourceId: string }
+  /** The statements about a venue's night, for that night (the venue's night in progress when left out). */
+  | { venueId: string; localDate?: string };
 
 const BATCH = 1000;
 /** Batches being written at once, each on its own connection, while later ones are computed. */
@@ -34,6 +36,7 @@ export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
 
 async function idsFor(scope: RecomputeScope): Promise<string[]> {
   if ('statementIds' in scope) return scope.statementIds;
+  if ('venueId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { venueId: scope.venueId }, order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
   if ('objectId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
   if ('all' in scope) return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
@@ -58,19 +61,20 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
 
 // The rows of a batch travel as one json parameter that PostgreSQL splits into records, so
 // nothing is escaped into SQL text, and rows deleted meanwhile stay deleted. The accepted wording
-// is set only by a first computation; after that only a reviewer changes it. Inputs come only
-// when they moved (a cosmology change leaves them as they are).
+// comes in only from a first computation or a statement following tonight (null otherwise, so the
+// stored one stays); beyond that only a reviewer changes it. Inputs come only when they moved (a
+// cosmology change leaves them as they are).
 const UPDATE_COMPUTED = `
 UPDATE statements AS s SET
   status = r.status, status_reason = r.status_reason, value = r.value, unit = r.unit,
   interval_low = r.interval_low, interval_high = r.interval_high, significant_figures = r.significant_figures,
-  texts = r.texts, footnotes = r.footnotes, acknowledged_texts = COALESCE(s.acknowledged_texts, r.acknowledged_texts),
-  inputs = COALESCE(r.inputs, s.inputs), working = r.working, warnings = r.warnings, model_id = r.model_id,
+  texts = r.texts, footnotes = r.footnotes, acknowledged_texts = COALESCE(r.acknowledged_texts, s.acknowledged_texts),
+  inputs = COALESCE(r.inputs, s.inputs), working = r.working, warnings = r.warnings, model_id = r.model_id, night = r.night,
   settings_version = r.settings_version, computed_at = r.computed_at, updated_at = now()
 FROM json_to_recordset($1::json) AS r(
   id uuid, status text, status_reason text, value float8, unit text, interval_low float8, interval_high float8,
   significant_figures smallint, texts jsonb, footnotes jsonb, acknowledged_texts jsonb, inputs jsonb, working json,
-  warnings jsonb, model_id char(64), settings_version integer, computed_at timestamptz)
+  warnings jsonb, model_id char(64), night jsonb, settings_version integer, computed_at timestamptz)
 WHERE s.id = r.id`;
 
 // A broken statement keeps its last numbers, text and working for review; only its status moves.
@@ -120,6 +124,8 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
 export async function recomputeStatements(scope: RecomputeScope, options: { settings?: SettingsSnapshot } = {}): Promise<{ written: number; changed: string[]; broken: string[] }> {
   const settings = options.settings ?? (await currentSettingsSnapshot());
   const ids = await idsFor(scope);
+  // Every venue's new night asks, most with no statements: nothing to load or store then.
+  if (ids.length === 0) return { written: 0, changed: [], broken: [] };
   const model = await batchModelFor(settings);
   const computedAt = new Date();
   const inline = ids.length <= BATCH;
@@ -131,7 +137,8 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
   for (let i = 0; i < ids.length && failure === undefined; i += BATCH) {
     if (running.size >= inFlight) await Promise.race(running);
     if (failure !== undefined) break;
-    const job = await loadBatchJob(ids.slice(i, i + BATCH), settings, model, { computedAt });
+    const night = 'venueId' in scope && scope.localDate ? { venueId: scope.venueId, localDate: scope.localDate } : undefined;
+    const job = await loadBatchJob(ids.slice(i, i + BATCH), settings, model, { computedAt, night });
     const task = runBatch(job, { inline })
       .then(async (result) => {
         await writeBatch(result, settings);

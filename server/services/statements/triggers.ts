@@ -1,5 +1,6 @@
 import { logger } from '../../logger.ts';
 import { catalogueEvents } from '../catalogue-events.ts';
+import { skyEvents } from '../sky-events.ts';
 import { enqueueRecompute, type RecomputeScope } from './recompute.ts';
 
 let registered = false;
@@ -10,7 +11,8 @@ function queue(scope: RecomputeScope) {
 
 /**
  * Keeps statements current: any change to a preferred measurement, a measurement a statement used,
- * or a source queues a background recompute of the statements it can affect.
+ * or a source queues a background recompute of the statements it can affect; a venue's sky for a
+ * new night (or after the venue moved) recomputes the statements about that venue for that night.
  */
 export function registerStatementTriggers(): void {
   if (registered) return;
@@ -18,4 +20,5 @@ export function registerStatementTriggers(): void {
   catalogueEvents.on('preferredChanged', ({ objectId }) => queue({ objectId }));
   catalogueEvents.on('measurementChanged', ({ measurementId }) => queue({ measurementId }));
   catalogueEvents.on('sourceChanged', ({ sourceId }) => queue({ sourceId }));
+  skyEvents.on('nightComputed', ({ venueId, localDate }) => queue({ venueId, localDate }));
 }

@@ -119,7 +119,8 @@ export function statementCases(): Array<{ templateId: string; ctx: TemplateConte
     ctx('Nothing', []),
     ctx('Wide', [m('z', 'redshift', 0.05, { sigma: 0.5 }), vmag(13)]),
   ];
-  return contexts.flatMap((c) => STATEMENT_TEMPLATES.map((t) => ({ templateId: t.id, ctx: c })));
+  // Templates about a venue's night draw no Monte Carlo (planet-light-tonight.test.ts covers them).
+  return contexts.flatMap((c) => STATEMENT_TEMPLATES.filter((t) => !t.needsVenue).map((t) => ({ templateId: t.id, ctx: c })));
 }
 
 type Working = Array<{ title: string; result: { value: number }; inputs: Array<{ value: number | string }>; note?: string }>;

@@ -22,7 +22,8 @@ function ok(templateId: string, c: TemplateContext) {
 
 describe('statement templates', () => {
   it('every template renders every locale and ends its working with the wording step', () => {
-    for (const t of STATEMENT_TEMPLATES) {
+    // Templates about a venue's night have their own tests (planet-light-tonight.test.ts).
+    for (const t of STATEMENT_TEMPLATES.filter((x) => !x.needsVenue)) {
       const r = ok(t.id, quasar);
       expect(Object.keys(r.texts).sort()).toEqual(['en-GB', 'en-US', 'fr-FR']);
       for (const text of Object.values(r.texts)) {

@@ -3,6 +3,7 @@ import { Link, useParams } from 'react-router-dom';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import { useAcceptStatement, useRecomputeStatement, useStatement } from '@/api/statements.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
+import { nightDate, venueClock } from '@/components/statements/venue-night.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
@@ -45,7 +46,8 @@ export function Component() {
         title={s.template.title}
         description={
           <>
-            About <Link to={paths.catalogueObject.href(s.object.id)} className="text-accent hover:underline">{s.object.name}</Link> · computed {when.format(new Date(s.computedAt))}
+            About <Link to={paths.catalogueObject.href(s.object.id)} className="text-accent hover:underline">{s.object.name}</Link>
+            {s.venue && <> · for {s.venue.name}</>} · computed {when.format(new Date(s.computedAt))}
           </>
         }
         actions={
@@ -64,6 +66,12 @@ export function Component() {
             </span>
           )}
         </div>
+        {s.venue && s.night && (
+          <Notice title={`The night of ${nightDate(s.night.localDate)} at ${s.venue.name}`}>
+            Distances for {venueClock(s.night.observationUtc, s.venue.timeZone)} local time ({s.venue.timeZone}). This statement is worked out again each night from the venue’s sky: a new
+            night’s number follows without a new sign-off, while a change of method (the venue moved, other constants, another sentence) comes back here for review.
+          </Notice>
+        )}
         {s.status === 'changed' && <Notice tone="warning" title="The wording has changed">{s.statusReason}</Notice>}
         {s.status === 'broken' && <Notice tone="error" title="This statement cannot be worked out">{s.statusReason} Pages keep their last approved text until this is fixed in the catalogue.</Notice>}
         {(accept.error || recompute.error) && <Notice tone="error">{(accept.error ?? recompute.error)?.message}</Notice>}

@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { StatementLocale } from '@shared/statements/locales.ts';
 import { useStatement } from '@/api/statements.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
+import { venueNightText } from '@/components/statements/venue-night.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
@@ -16,7 +17,7 @@ export function StatementWorking({ id, locale, onClose, actions }: { id: string;
       <div className="flex items-start justify-between gap-3">
         <div>
           <h2 className="font-semibold">{s ? s.template.title : 'Statement'}</h2>
-          {s && <p className="text-xs text-muted">{s.object.name}</p>}
+          {s && <p className="text-xs text-muted">{s.object.name}{s.venue ? ` · ${venueNightText(s)}` : ''}</p>}
         </div>
         <Button variant="quiet" onClick={onClose}>Close</Button>
       </div>

@@ -2,19 +2,26 @@ import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { useCreateStatement, useStatements, useStatementTemplates } from '@/api/statements.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
+import { VenueChoiceField } from '@/components/statements/venue-choice-field.tsx';
+import { venueNightText } from '@/components/statements/venue-night.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
 
-/** An object's checked statements, and a picker to add one from a template. */
+/**
+ * An object's checked statements, and a picker to add one from a template (with the venue, for a
+ * template about tonight's sky: one statement per venue).
+ */
 export function ObjectStatements({ objectId }: { objectId: string }) {
   const statements = useStatements({ objectId });
   const templates = useStatementTemplates();
   const create = useCreateStatement();
   const [templateId, setTemplateId] = useState('');
-  const existing = new Set(statements.data?.data.map((s) => s.template.id));
-  const available = templates.data?.filter((t) => !existing.has(t.id)) ?? [];
+  const [venueId, setVenueId] = useState('');
+  const existing = new Set(statements.data?.data.filter((s) => !s.venue).map((s) => s.template.id));
+  const available = templates.data?.filter((t) => t.needsVenue || !existing.has(t.id)) ?? [];
+  const chosen = available.find((t) => t.id === templateId);
 
   return (
     <section aria-labelledby="object-statements-heading" className="space-y-3">
@@ -26,7 +33,7 @@ export function ObjectStatements({ objectId }: { objectId: string }) {
             <Link to={paths.statement.href(s.id)} className="font-serif text-[16px] leading-snug hover:text-accent hover:underline">{s.texts?.['en-GB'] ?? s.template.title}</Link>
             <div className="mt-1 flex items-center gap-2 text-xs text-muted">
               <StatementStatusBadge status={s.status} />
-              {s.template.title}
+              {s.template.title}{s.venue ? ` · ${venueNightText(s)}` : ''}
             </div>
           </li>
         ))}
@@ -36,7 +43,9 @@ export function ObjectStatements({ objectId }: { objectId: string }) {
           className="flex flex-wrap items-end gap-3"
           onSubmit={(e) => {
             e.preventDefault();
-            if (templateId) create.mutate({ objectId, templateId }, { onSuccess: () => setTemplateId('') });
+            if (templateId && (!chosen?.needsVenue || venueId)) {
+              create.mutate({ objectId, templateId, ...(chosen?.needsVenue ? { venueId } : {}) }, { onSuccess: () => setTemplateId('') });
+            }
           }}
         >
           <SelectField label="Add a statement" value={templateId} onChange={(e) => { setTemplateId(e.target.value); create.reset(); }} className="min-w-80">
@@ -45,10 +54,11 @@ export function ObjectStatements({ objectId }: { objectId: string }) {
               <option key={t.id} value={t.id}>{t.title}</option>
             ))}
           </SelectField>
-          <Button type="submit" disabled={!templateId} busy={create.isPending}>Work it out</Button>
+          {chosen?.needsVenue && <VenueChoiceField value={venueId} onChange={(id) => { setVenueId(id); create.reset(); }} className="min-w-64" />}
+          <Button type="submit" disabled={!templateId || (!!chosen?.needsVenue && !venueId)} busy={create.isPending}>Work it out</Button>
         </form>
       )}
-      {templateId && <p className="text-xs text-muted">Needs {available.find((t) => t.id === templateId)?.needs}.</p>}
+      {chosen && <p className="text-xs text-muted">Needs {chosen.needs}.{chosen.followsTonight ? ' Worked out again each night from the venue’s sky; a new night’s number needs no new sign-off.' : ''}</p>}
       {create.error && <Notice tone="error">{create.error.message}</Notice>}
     </section>
   );

@@ -6,8 +6,18 @@ import { formatSig } from '@/components/working/format-number.ts';
 const uncertainty = (i: StatementDto['inputs'][number]) =>
   i.sigma != null ? `± ${formatSig(i.sigma)}` : i.minus != null && i.plus != null ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}` : 'not stated';
 
-/** The preferred measurements the statement used, each with its source. */
+/** The preferred measurements the statement used, each with its source (or why there are none). */
 export function StatementInputs({ statement }: { statement: StatementDto }) {
+  if (statement.inputs.length === 0) {
+    return (
+      <section aria-labelledby="inputs-heading" className="space-y-2">
+        <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">Measurements used</h2>
+        <p className="text-sm text-muted">
+          None from the catalogue{statement.venue ? `: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working)` : ''}.
+        </p>
+      </section>
+    );
+  }
   return (
     <section aria-labelledby="inputs-heading" className="space-y-3">
       <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">Measurements used</h2>

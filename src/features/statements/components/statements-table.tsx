@@ -2,6 +2,7 @@ import { Link } from 'react-router-dom';
 import type { StatementDto } from '@shared/schemas/statement.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
+import { venueNightText } from '@/components/statements/venue-night.ts';
 import { DataTable } from '@/components/ui/data-table.tsx';
 import { paths } from '@/config/paths.ts';
 
@@ -17,7 +18,7 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
             <Link to={paths.statement.href(s.id)} className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline">
               {s.texts?.[locale] ?? '—'}
             </Link>
-            <span className="mt-0.5 block text-xs text-muted">{s.template.title}</span>
+            <span className="mt-0.5 block text-xs text-muted">{s.template.title}{s.venue ? ` · ${venueNightText(s)}` : ''}</span>
           </td>
           <td className="px-4 py-2.5">{s.object.name}</td>
           <td className="px-4 py-2.5"><StatementStatusBadge status={s.status} /></td>

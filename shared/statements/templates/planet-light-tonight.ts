@@ -1,0 +1,149 @@
+import { ASTRONOMICAL_UNIT, SPEED_OF_LIGHT } from '../../engine/constants.ts';
+import { fromConstant } from '../../engine/working.ts';
+import { PLANET_NAMES, type PlanetId } from '../../sky/bodies.ts';
+import { compose, derivedStep } from '../compose.ts';
+import { perLocale, type StatementLocale } from '../locales.ts';
+import { formatApproximate } from '../number-words.ts';
+import { choosePrecision, roundToSignificant } from '../precision.ts';
+import { DISTANCE_RELATIVE_UNCERTAINTY, LARGEST_MEASURED_DIFFERENCE, NIGHT_DRIFT_BOUND, requirePlanet, requireVenueNight } from '../tonight.ts';
+import type { NightBasis, StatementNight, StatementTemplate, StatementVenue } from '../types.ts';
+import { isFrench } from './words.ts';
+
+/** Planet names in French (the catalogue's names are English). */
+const FRENCH_NAMES: Record<PlanetId, string> = { mercury: 'Mercure', venus: 'Vénus', mars: 'Mars', jupiter: 'Jupiter', saturn: 'Saturne', uranus: 'Uranus', neptune: 'Neptune' };
+
+// Decided by planet, not by the night's value, so a planet's sentence keeps one shape all year:
+// Uranus (about 2 h 40 min) and Neptune (about 4 h) read better in hours and minutes than as
+// "160 minutes"; Saturn (70–90 min) stays in minutes, which compares directly with the others.
+const IN_HOURS: ReadonlySet<PlanetId> = new Set(['uranus', 'neptune']);
+
+/** Stands for the number in the sentence a reviewer signs off (NightBasis.method.wording). */
+const NUMBER_SLOT = '…';
+
+const plural = (n: number, en: string, fr: string, locale: StatementLocale) => {
+  const word = isFrench(locale) ? fr : en;
+  return (isFrench(locale) ? n >= 2 : n !== 1) ? `${word}s` : word;
+};
+
+/** "43.2 minutes", "2 hours and 40 minutes", "4 heures 6 minutes", from minutes already rounded. */
+function durationWords(locale: StatementLocale, minutes: number, significantFigures: number, inHours: boolean): string {
+  if (!inHours) return `${formatApproximate(minutes, significantFigures, locale).text} ${plural(minutes, 'minute', 'minute', locale)}`;
+  const shown = Math.round(roundToSignificant(minutes, significantFigures));
+  const h = Math.floor(shown / 60);
+  const m = shown - h * 60;
+  const hours = `${h} ${plural(h, 'hour', 'heure', locale)}`;
+  if (m === 0) return hours;
+  return `${hours}${isFrench(locale) ? ' ' : ' and '}${m} ${plural(m, 'minute', 'minute', locale)}`;
+}
+
+function sentence(locale: StatementLocale, englishName: string, planet: PlanetId, duration: string): string {
+  if (!isFrench(locale)) return `Light from ${englishName} takes about ${duration} to reach us tonight.`;
+  const name = FRENCH_NAMES[planet];
+  return `La lumière ${/^[AEIOUYÉ]/.test(name) ? 'd’' : 'de '}${name} met environ ${duration} à nous parvenir ce soir.`;
+}
+
+const dateFormats = new Map<StatementLocale, Intl.DateTimeFormat>();
+function longDate(locale: StatementLocale, localDate: string): string {
+  let f = dateFormats.get(locale);
+  if (!f) dateFormats.set(locale, (f = new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' })));
+  return f.format(new Date(`${localDate}T12:00:00Z`));
+}
+
+const WHEN: Record<string, [string, string]> = {
+  'nautical-dusk': ['the end of nautical twilight', 'la fin du crépuscule nautique'],
+  'civil-dusk': ['the end of civil twilight', 'la fin du crépuscule civil'],
+  sunset: ['sunset', 'le coucher du Soleil'],
+  'sun-lowest': ['the moment the Sun is lowest', 'le moment où le Soleil est au plus bas'],
+  chosen: ['the chosen time', 'l’heure choisie'],
+};
+
+/** Which venue and night, as small print under the sentence. */
+function nightFootnote(locale: StatementLocale, venue: StatementVenue, night: StatementNight): string {
+  const [en, fr] = WHEN[night.observation.basis] ?? [night.observation.basis, night.observation.basis];
+  const at = night.observation.localTime ? (isFrench(locale) ? ` à ${night.observation.localTime.replace(':', ' h ')}` : ` at ${night.observation.localTime}`) : '';
+  return isFrench(locale)
+    ? `Pour ${venue.name}, la nuit du ${longDate(locale, night.localDate)}${at}, heure locale (${fr}).`
+    : `For ${venue.name} on the night of ${longDate(locale, night.localDate)}${at} local time (${en}).`;
+}
+
+/** "Light from Jupiter takes about 43 minutes to reach us tonight", for one venue and night. */
+export const planetLightTonight: StatementTemplate = {
+  id: 'planet-light-tonight',
+  title: 'How long a planet’s light takes to reach us tonight',
+  needs: 'a planet the sky engine computes (Mercury to Neptune) and the venue whose night it is',
+  usesCosmology: false,
+  needsVenue: true,
+  followsTonight: true,
+  evaluate(ctx) {
+    const planet = requirePlanet(ctx);
+    const { venue, night, distanceAu } = requireVenueNight(ctx, planet);
+    const k = DISTANCE_RELATIVE_UNCERTAINTY[planet];
+    const kmPerAu = ASTRONOMICAL_UNIT.value / 1000;
+    const seconds = (distanceAu * kmPerAu) / SPEED_OF_LIGHT.value;
+    const minutes = seconds / 60;
+    const inHours = IN_HOURS.has(planet);
+    const place = `${venue.name} (${venue.latitude}°, ${venue.longitude}°, ${venue.elevationM} m, ${venue.timeZone})`;
+    const distanceStep = derivedStep({
+      title: `${PLANET_NAMES[planet]}’s distance from the Earth at the observation time`,
+      formula: 'd = |r_planet(t − τ) − r_Earth(t)|, τ = d / c (light-time corrected, Meeus ch. 33)',
+      inputs: [
+        { symbol: 't', name: 'observation time (UTC)', value: night.observation.utc.replace(/\.\d+Z$/, 'Z'), unit: '', source: `the sky for ${place} on the night of ${night.localDate}, at ${WHEN[night.observation.basis]?.[0] ?? night.observation.basis}${night.observation.localTime ? ` (${night.observation.localTime} local time)` : ''}` },
+      ],
+      result: { symbol: 'd', name: `distance of ${PLANET_NAMES[planet]} from the Earth’s centre`, value: distanceAu, unit: 'au' },
+      note: `Ephemeris: ${night.ephemeris}. The venue sets the time (its dusk); the distance is from the Earth’s centre, and the venue’s own place moves it by less than one Earth radius (about 4.3 × 10⁻⁵ au; Earth radius 6371 km recalled from memory), far below the wording’s precision.`,
+    });
+    const sigmaStep = derivedStep({
+      title: 'Uncertainty of the distance',
+      formula: 'σ_d = k × d',
+      inputs: [
+        { symbol: 'd', name: 'distance', value: distanceAu, unit: 'au', source: 'previous step' },
+        { symbol: 'k', name: `relative uncertainty given to ${PLANET_NAMES[planet]}’s distance`, value: k, unit: '', source: 'tolerance of our reference test against astropy 5.2.1’s built-in ephemeris (tests/reference/sky)' },
+      ],
+      result: { symbol: 'σ_d', name: 'uncertainty of the distance', value: k * distanceAu, unit: 'au' },
+      note: `The ephemeris distance is far more precise than the wording needs. Largest difference measured against astropy, any planet, 1992–2040: ${LARGEST_MEASURED_DIFFERENCE} (relative), mostly the reference’s own error; full VSOP87 is good to about 1″ in position over these years (recalled from memory). Within ±6 hours of the observation time the distance moves by under ${NIGHT_DRIFT_BOUND * 100} % (our ephemeris), still below the 3 % at which the precision rule drops a figure, so the wording holds for the whole evening.`,
+    });
+    const timeStep = derivedStep({
+      title: 'Light-travel time',
+      formula: 't = d × au / c',
+      inputs: [{ symbol: 'd', name: 'distance', value: distanceAu, unit: 'au', source: 'previous step' }],
+      constants: [fromConstant(ASTRONOMICAL_UNIT), fromConstant(SPEED_OF_LIGHT)],
+      result: { symbol: 't', name: 'light-travel time', value: seconds, unit: 's' },
+      note: 'au in km is au [m] / 1000, so t [s] = d [au] × (au [m] / 1000) / c [km/s].',
+    });
+    const minutesStep = derivedStep({
+      title: 'In minutes',
+      formula: 't [min] = t [s] / 60',
+      inputs: [{ symbol: 't', name: 'light-travel time', value: seconds, unit: 's', source: 'previous step' }],
+      result: { symbol: 't', name: 'light-travel time', value: minutes, unit: 'min' },
+      note: inHours ? `${PLANET_NAMES[planet]}’s light takes over two hours, so the wording gives hours and minutes.` : 'The wording gives minutes.',
+    });
+    const interval = { low: minutes * (1 - k), high: minutes * (1 + k) };
+    // compose applies the same rule; the hours-and-minutes words need the figure count first.
+    const figures = choosePrecision(minutes, interval).significantFigures;
+    const english = ctx.object.name;
+    const basis: NightBasis = {
+      venueId: venue.id,
+      localDate: night.localDate,
+      observationUtc: night.observation.utc,
+      method: {
+        planet,
+        venue: { latitude: venue.latitude, longitude: venue.longitude, elevationM: venue.elevationM, timeZone: venue.timeZone },
+        ephemeris: night.ephemeris,
+        skyVersion: night.skyVersion,
+        constants: { auM: ASTRONOMICAL_UNIT.value, cKmS: SPEED_OF_LIGHT.value },
+        wording: perLocale((locale) => sentence(locale, english, planet, NUMBER_SLOT)),
+      },
+    };
+    const composed = compose({
+      value: minutes,
+      unit: 'min',
+      interval,
+      sentence: (locale) => sentence(locale, english, planet, durationWords(locale, minutes, figures, inHours)),
+      footnote: (locale) => nightFootnote(locale, venue, night),
+      working: [distanceStep, sigmaStep, timeStep, minutesStep],
+      inputs: [],
+      model: null,
+    });
+    return { ...composed, night: basis };
+  },
+};
