@@ -4,7 +4,7 @@
  * monotonic last step computed only at the percentiles, and, for one varied input and a monotonic
  * calculation, no drawing at all. Every shortcut gives the interval the plain loop would.
  */
-import { quantilePair, type MonotoneMap } from './order-statistics.ts';
+import { orderStatistics, quantileFromStatistics, quantilePair, quantileRanks, type MonotoneMap } from './order-statistics.ts';
 import { SAMPLES, seededDeviates, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 
 export type { MonotoneMap } from './order-statistics.ts';
@@ -47,13 +47,43 @@ export interface SlotProblem {
   prepare?: () => void;
 }
 
-/** The draws of the last few runs that had no failures, by drawsKey (oldest first). */
-const recentDraws = new Map<string, Float64Array>();
-const RECENT_DRAWS = 4;
+/**
+ * What a later run with the same draws needs of an earlier one: the order statistics its
+ * percentiles read (the same four for an increasing or a decreasing last step, since the levels are
+ * symmetric), and the smallest and largest draw (whether a last step is finite over all of them).
+ */
+interface DrawSummary {
+  stats: Map<number, number>;
+  min: number;
+  max: number;
+}
 
-function rememberDraws(key: string, draws: Float64Array): void {
-  if (recentDraws.size >= RECENT_DRAWS) recentDraws.delete(recentDraws.keys().next().value as string);
-  recentDraws.set(key, draws.slice());
+const LEVELS = [0.16, 0.84] as const;
+/** The last few runs that had no failures, by drawsKey (oldest first). */
+const recentRuns = new Map<string, DrawSummary>();
+const RECENT_RUNS = 4;
+
+/** Summarises a run's draws (reordering them) and keeps the summary under its key. */
+function rememberRun(key: string, draws: Float64Array): DrawSummary {
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < draws.length; i++) {
+    if (draws[i] < min) min = draws[i];
+    if (draws[i] > max) max = draws[i];
+  }
+  const summary = { stats: orderStatistics(draws, quantileRanks(draws.length, [...LEVELS])), min, max };
+  if (recentRuns.size >= RECENT_RUNS) recentRuns.delete(recentRuns.keys().next().value as string);
+  recentRuns.set(key, summary);
+  return summary;
+}
+
+/** True when a monotonic map is finite (and does not throw) at both ends of the draws, hence at all. */
+function finiteAtEnds(min: number, max: number, last: MonotoneMap): boolean {
+  try {
+    return Number.isFinite(last.map(min)) && Number.isFinite(last.map(max));
+  } catch {
+    return false;
+  }
 }
 
 /** Where a run stands, shared with the draw loop so that a throwing draw can be skipped and the loop resumed. */
@@ -98,11 +128,7 @@ function finiteBetween(a: Float64Array, last: MonotoneMap): boolean {
     if (a[i] < lo) lo = a[i];
     if (a[i] > hi) hi = a[i];
   }
-  try {
-    return Number.isFinite(last.map(lo)) && Number.isFinite(last.map(hi));
-  } catch {
-    return false;
-  }
+  return finiteAtEnds(lo, hi, last);
 }
 
 /**
@@ -115,18 +141,26 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   const centre = Float64Array.from(p.varied, (v) => v.m.value);
   const minus = Float64Array.from(p.varied, (v) => v.m.minus);
   const plus = Float64Array.from(p.varied, (v) => v.m.plus);
-  const out = takeScratch();
   const failures = new Map<string, number>();
   const failed = (): void => {
     const who = p.blame(p.x);
     failures.set(who, (failures.get(who) ?? 0) + 1);
   };
-  const run: Run = { draw: 0, kept: 0 };
-  const reused = p.drawsKey === undefined ? undefined : recentDraws.get(p.drawsKey);
+  const last = p.last;
+  // Drawing again with the last step folded in; prepare is repeated so the draws are the same whether or not this run was reused.
+  const fold = () => propagate({ ...p, f: (x) => last!.map(p.f(x)), last: undefined, drawsKey: undefined });
+  const fromSummary = ({ stats }: DrawSummary): MonteCarloOutcome => {
+    const at = (rank: number) => stats.get(rank)!;
+    return { low: quantileFromStatistics(SAMPLES, LEVELS[0], last, at), high: quantileFromStatistics(SAMPLES, LEVELS[1], last, at), samples: SAMPLES, failures: new Map(), failed: 0 };
+  };
+  const reused = p.drawsKey === undefined ? undefined : recentRuns.get(p.drawsKey);
   if (reused) {
-    out.set(reused);
-    run.draw = run.kept = SAMPLES;
-  } else p.prepare?.();
+    // Some draws leave the range where the last step is finite: run it on every draw instead.
+    return last && !finiteAtEnds(reused.min, reused.max, last) ? fold() : fromSummary(reused);
+  }
+  p.prepare?.();
+  const run: Run = { draw: 0, kept: 0 };
+  const out = takeScratch();
   while (run.draw < SAMPLES) {
     try {
       drawAll(run, p, slots, centre, minus, plus, out, failed);
@@ -138,12 +172,15 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   }
   const kept = out.subarray(0, run.kept);
   // Only a run where every draw was kept is worth sharing (and then keepInfinite cannot matter).
-  if (!reused && p.drawsKey !== undefined && run.kept === SAMPLES && finiteAll(kept)) rememberDraws(p.drawsKey, kept);
-  const last = p.last;
+  if (p.drawsKey !== undefined && run.kept === SAMPLES && finiteAll(kept)) {
+    const summary = rememberRun(p.drawsKey, kept);
+    releaseScratch(out);
+    return last && !finiteAtEnds(summary.min, summary.max, last) ? fold() : fromSummary(summary);
+  }
   if (last && run.kept > 0 && !finiteBetween(kept, last)) {
     // Some draws leave the range where the last step is finite: run it on every draw instead.
     releaseScratch(out);
-    return propagate({ ...p, f: (x) => last.map(p.f(x)), last: undefined, drawsKey: undefined, prepare: undefined });
+    return fold();
   }
   const interval = run.kept > 0 ? quantilePair(kept, 0.16, 0.84, last) : { low: NaN, high: NaN };
   const outcome = {

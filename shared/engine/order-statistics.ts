@@ -114,3 +114,65 @@ export function quantilePair(a: Float64Array, pLow: number, pHigh: number, last:
   const second = last.decreasing ? quantileIn(a, pHigh, last, 0, first.rank) : quantileIn(a, pHigh, last, first.rank, a.length - 1);
   return { low: first.q, high: second.q };
 }
+
+/**
+ * The ranks whose values the p-quantiles of n draws interpolate between, for an increasing and for
+ * a decreasing last step alike (what `quantileIn` selects, and the neighbour it reads).
+ * @param n how many draws
+ * @param ps the probabilities
+ * @returns the ranks, ascending, without repeats
+ */
+export function quantileRanks(n: number, ps: number[]): number[] {
+  const ranks = new Set<number>();
+  for (const p of ps) {
+    const i = Math.floor(p * (n - 1));
+    for (const rank of [i, n - 1 - i]) {
+      ranks.add(rank);
+      if (i + 1 < n) ranks.add(rank === i ? rank + 1 : rank - 1);
+    }
+  }
+  return [...ranks].sort((a, b) => a - b);
+}
+
+/**
+ * The values a sort would put at the given ranks, by successive selections that each search only
+ * what the previous left above it.
+ * @param a the draws (reordered in place), no NaN
+ * @param ranks ascending ranks
+ * @returns each rank's value, by rank
+ */
+export function orderStatistics(a: Float64Array, ranks: number[]): Map<number, number> {
+  const out = new Map<number, number>();
+  let lo = 0;
+  for (const rank of ranks) {
+    if (rank === lo) {
+      // Right after a placed rank, the next order statistic is the smallest of what lies above it;
+      // moving it into place keeps everything above it no smaller, for the next selection.
+      let m = lo;
+      for (let i = lo + 1; i < a.length; i++) if (a[i] < a[m]) m = i;
+      swap(a, lo, m);
+      out.set(rank, a[lo]);
+    } else out.set(rank, selectInPlace(a, rank, lo, a.length - 1));
+    lo = rank + 1;
+  }
+  return out;
+}
+
+/**
+ * The p-quantile of map(draws) from their order statistics, with the same arithmetic as
+ * `quantileIn`, so the result is the one quantilePair gives on the draws themselves.
+ * @param n how many draws
+ * @param p probability in [0, 1]
+ * @param last the monotonic map
+ * @param at the value of a rank (from orderStatistics over quantileRanks)
+ */
+export function quantileFromStatistics(n: number, p: number, last: MonotoneMap = IDENTITY, at: (rank: number) => number): number {
+  const pos = p * (n - 1);
+  const i = Math.floor(pos);
+  const f = pos - i;
+  const rank = last.decreasing ? n - 1 - i : i;
+  const x = last.map(at(rank));
+  if (i + 1 >= n) return x;
+  const y = last.map(at(last.decreasing ? rank - 1 : rank + 1));
+  return x * (1 - f) + y * f;
+}

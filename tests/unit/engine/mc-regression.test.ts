@@ -1,7 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { calculate } from '../../../shared/engine/calculate.ts';
-import { quantilePair } from '../../../shared/engine/order-statistics.ts';
+import { orderStatistics, quantileFromStatistics, quantilePair, quantileRanks } from '../../../shared/engine/order-statistics.ts';
 import { mulberry32, quantile } from '../../../shared/engine/uncertainty.ts';
 import { evaluateStatement } from '../../../shared/statements/index.ts';
 import { calcCases, frozen, statementCases } from './mc-regression.cases.ts';
@@ -73,6 +73,10 @@ describe('Monte Carlo results stay as frozen', () => {
         const mapped = Float64Array.from(draws, last ? last.map : (x) => x).sort();
         const got = quantilePair(draws.slice(), 0.16, 0.84, last);
         expect(got).toEqual({ low: quantile(mapped, 0.16), high: quantile(mapped, 0.84) });
+        // From the four order statistics a reused run keeps: the same numbers for either direction.
+        const stats = orderStatistics(draws.slice(), quantileRanks(n, [0.16, 0.84]));
+        const at = (rank: number) => stats.get(rank)!;
+        expect({ low: quantileFromStatistics(n, 0.16, last, at), high: quantileFromStatistics(n, 0.84, last, at) }).toEqual(got);
       }
     }
   });
