@@ -42,7 +42,7 @@ const UUID = /[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/gi;
 /** Marks where data was taken out of a text; never part of the working's own text. */
 const HOLE = '\u0000';
 
-// Texts seen before (names and sources repeat from statement to statement) are split once.
+// Texts seen before (names and sources repeat from statement to statement) are looked at once.
 const HOLLOWED_LIMIT = 20_000;
 const hollowedTexts = new Map<string, Hollowed>();
 // A step's skeleton by its signature (its hollowed texts joined), per id function: building and
@@ -72,15 +72,11 @@ function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
   // PostgreSQL text cannot hold NUL, so no stored citation can; the engine never writes one.
   if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
   const data: string[] = [];
-  let out: Hollowed;
-  if (pattern.test(text)) {
-    pattern.lastIndex = 0;
-    out = { text: text.replace(pattern, (found) => (data.push(found), HOLE)), data, plain: !text.includes(SEPARATOR) };
-  } else {
-    out = { text, data, plain: !text.includes(SEPARATOR) };
-  }
-  pattern.lastIndex = 0;
-  return cache ? remember(hollowedTexts, HOLLOWED_LIMIT, text, out) : out;
+  const hollow = text.replace(pattern, (found) => (data.push(found), HOLE));
+  const out = { text: hollow, data, plain: !text.includes(SEPARATOR) };
+  // Only texts without data are kept: they are the ones that come back (a name with this
+  // statement's uncertainty in it, or a source with its measurement id, would only crowd them out).
+  return cache && data.length === 0 ? remember(hollowedTexts, HOLLOWED_LIMIT, text, out) : out;
 }
 
 /**
