@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { resolveModel } from '@shared/engine/model-resolve.ts';
-import type { LocalisedText, StatementLocale, StoredNight, UsedInput } from '@shared/statements/index.ts';
+import type { StatementLocale } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import type { StatementStatus } from '../../models/index.ts';
 import { contextKey, type BatchJob, type BatchModel, type BatchStatement } from './evaluate-batch.ts';
@@ -13,9 +13,10 @@ interface StatementRow {
   template_id: string;
   venue_id: string | null;
   status: StatementStatus;
-  acknowledged_texts: LocalisedText | null;
-  inputs: UsedInput[];
-  night: StoredNight | null;
+  /** JSON text, parsed where the batch is computed. */
+  acknowledged_texts: string | null;
+  inputs: string | null;
+  night: string | null;
   model_label: string | null;
   model_h0: number | null;
   preview_text: string | null;
@@ -56,7 +57,8 @@ export async function loadBatchJob(
 ): Promise<BatchJob> {
   const sequelize = getSequelize();
   const rows = await sequelize.query<StatementRow>(
-    `SELECT s.id, s.sky_object_id, s.template_id, s.venue_id, s.status, s.acknowledged_texts, s.inputs, s.night,
+    `SELECT s.id, s.sky_object_id, s.template_id, s.venue_id, s.status,
+            s.acknowledged_texts::text AS acknowledged_texts, s.inputs::text AS inputs, s.night::text AS night,
             d.label AS model_label, (d.description->>'H0')::float8 AS model_h0,
             CASE WHEN $2::text IS NULL THEN NULL ELSE s.texts->>$2::text END AS preview_text
        FROM statements s LEFT JOIN cosmology_descriptions d ON d.id = s.model_id
@@ -83,10 +85,8 @@ export async function loadBatchJob(
     templateId: r.template_id,
     venueId: r.venue_id,
     status: r.status,
-    acknowledgedTexts: r.acknowledged_texts,
-    inputs: r.inputs ?? [],
     model: r.model_label !== null && r.model_h0 !== null ? { label: r.model_label, H0: r.model_h0 } : null,
-    night: r.night,
+    json: { acknowledgedTexts: r.acknowledged_texts, inputs: r.inputs ?? '[]', night: r.night },
     ...(options.previewLocale ? { previewText: r.preview_text } : {}),
   }));
   return {

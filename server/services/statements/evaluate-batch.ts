@@ -4,14 +4,33 @@ import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
 import { packForStorage } from './working-pack.ts';
 
 /** One statement of a batch, as loaded: what it is and what its last computation was. */
-export interface BatchStatement extends PreviousComputation {
+export interface BatchStatement {
   id: string;
   skyObjectId: string;
   templateId: string;
   /** The venue whose night it describes, or null. */
   venueId: string | null;
+  status: PreviousComputation['status'];
+  model: PreviousComputation['model'];
+  /**
+   * Its last computation's JSON columns as the database gave their text: parsed where the batch is
+   * computed, so the server's thread neither parses nor copies them (they are most of a batch).
+   */
+  json: { acknowledgedTexts: string | null; inputs: string; night: string | null };
   /** Its current public text in the preview's locale (previews only). */
   previewText?: string | null;
+}
+
+/** A loaded statement's last computation, its JSON columns parsed. */
+function previousComputation(statement: BatchStatement): PreviousComputation {
+  const { acknowledgedTexts, inputs, night } = statement.json;
+  return {
+    status: statement.status,
+    model: statement.model,
+    acknowledgedTexts: acknowledgedTexts === null ? null : JSON.parse(acknowledgedTexts),
+    inputs: JSON.parse(inputs) ?? [],
+    night: night === null ? null : JSON.parse(night),
+  };
 }
 
 /** The cosmology every statement of the batch is computed under, as stored. */
@@ -106,7 +125,8 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   for (const statement of ordered) {
     const ctx = job.contexts[contextKey(statement.skyObjectId, statement.venueId)];
     if (!ctx) continue;
-    const result = applyOutcome(statement, evaluateStatement(statement.templateId, ctx), findTemplate(statement.templateId));
+    const previous = previousComputation(statement);
+    const result = applyOutcome(previous, evaluateStatement(statement.templateId, ctx), findTemplate(statement.templateId));
     if (job.previewLocale) {
       const newText = result.status === 'broken' ? null : (result.texts[job.previewLocale] ?? null);
       if (newText !== (statement.previewText ?? null) || result.status !== statement.status) {
@@ -129,8 +149,8 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       }
       modelId = job.model!.id;
     }
-    const inputsMoved = !sameInputs(statement.inputs, result.inputs);
-    if (inputsMoved && !sameLinks(statement.inputs, result.inputs)) {
+    const inputsMoved = !sameInputs(previous.inputs, result.inputs);
+    if (inputsMoved && !sameLinks(previous.inputs, result.inputs)) {
       relinked.push(statement.id);
       for (const i of result.inputs) inputLinks.push({ statement_id: statement.id, measurement_id: i.measurementId, source_id: i.sourceId });
     }
@@ -149,7 +169,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       footnotes: result.footnotes,
       // Only a first computation sets the accepted wording; afterwards only a reviewer does, or a
       // new night for a statement that follows tonight (applyOutcome decides).
-      acknowledged_texts: statement.acknowledgedTexts && !result.followedNight ? null : result.acknowledgedTexts,
+      acknowledged_texts: previous.acknowledgedTexts && !result.followedNight ? null : result.acknowledgedTexts,
       inputs: inputsMoved ? result.inputs : null,
       working: packed.stored,
       warnings: result.warnings,

@@ -25,7 +25,7 @@ function job(objects: number): BatchJob {
       ],
     };
     for (const templateId of TEMPLATES) {
-      statements.push({ id: `4${String(i).padStart(7, '0')}-0000-4000-8000-${templateId.length.toString().padStart(12, '0')}`, skyObjectId: id, templateId, venueId: null, status: 'current', acknowledgedTexts: null, inputs: [], model: null, night: null });
+      statements.push({ id: `4${String(i).padStart(7, '0')}-0000-4000-8000-${templateId.length.toString().padStart(12, '0')}`, skyObjectId: id, templateId, venueId: null, status: 'current', model: null, json: { acknowledgedTexts: null, inputs: '[]', night: null } });
     }
   }
   return { statements, contexts, model: { id: 'a'.repeat(64), json: JSON.stringify(resolveModel(model).description) }, settingsVersion: 3, computedAt: '2026-12-02T10:00:00.000Z' };
