@@ -45,8 +45,14 @@ const HOLE = '\u0000';
 // Texts seen before (names and sources repeat from statement to statement) are looked at once.
 const HOLLOWED_LIMIT = 20_000;
 const hollowedTexts = new Map<string, Hollowed>();
-// A step's skeleton by its signature (its hollowed texts joined), per id function: building and
-// hashing the JSON happens once per distinct skeleton, not once per step.
+// Every distinct piece of skeleton text gets a number; a step's signature is its pieces' numbers,
+// a short key however long the texts. Numbers are never reused, so two signatures are equal only
+// when every piece is the same text.
+const PIECE_LIMIT = 50_000;
+const pieceIds = new Map<string, number>();
+let nextPiece = 0;
+// A step's skeleton by its signature, per id function: building and hashing the JSON happens once
+// per distinct skeleton, not once per step.
 const SKELETON_LIMIT = 5_000;
 const skeletonsBySignature = new WeakMap<object, Map<string, { id: string; json: SkeletonJson }>>();
 
@@ -56,15 +62,16 @@ const remember = <K, V>(map: Map<K, V>, limit: number, key: K, value: V): V => {
   return value;
 };
 
-/** A text with its data taken out: the text with holes, and what filled them, in order. */
+function pieceId(text: string): number {
+  return pieceIds.get(text) ?? remember(pieceIds, PIECE_LIMIT, text, nextPiece++);
+}
+
+/** A text with its data taken out: the text with holes, what filled them in order, and the hollow text's piece number. */
 interface Hollowed {
   text: string;
   data: string[];
-  /** False when the text holds the signature separator, so a signature could not tell it apart. */
-  plain: boolean;
+  piece: number;
 }
-
-const SEPARATOR = '\u0001';
 
 function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
   const hit = cache ? hollowedTexts.get(text) : undefined;
@@ -73,7 +80,7 @@ function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
   if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
   const data: string[] = [];
   const hollow = text.replace(pattern, (found) => (data.push(found), HOLE));
-  const out = { text: hollow, data, plain: !text.includes(SEPARATOR) };
+  const out = { text: hollow, data, piece: pieceId(hollow) };
   // Only texts without data are kept: they are the ones that come back (a name with this
   // statement's uncertainty in it, or a source with its measurement id, would only crowd them out).
   return cache && data.length === 0 ? remember(hollowedTexts, HOLLOWED_LIMIT, text, out) : out;
@@ -92,22 +99,18 @@ export function packWorking(steps: Step[], idOf: (skeleton: SkeletonJson) => str
   const w: StoredWorking['w'] = [];
   for (const step of steps) {
     const row: [string, ...Array<number | string>] = [''];
-    const signature: string[] = [step.title, step.formula];
-    let plain = !step.title.includes(SEPARATOR) && !step.formula.includes(SEPARATOR);
-    plain = signValues(step.inputs, row, signature) && plain;
-    plain = signValues(step.constants, row, signature) && plain;
+    let signature = `${pieceId(step.title)},${pieceId(step.formula)}`;
+    signature += signValues(step.inputs, row);
+    signature += signValues(step.constants, row);
     const resultName = hollowed(step.result.name, NUMBER, true);
     pushAll(row, resultName.data);
     row.push(step.result.value);
-    signature.push(step.result.symbol, resultName.text, step.result.unit);
+    signature += `|${pieceId(step.result.symbol)},${resultName.piece},${pieceId(step.result.unit)}`;
     // Notes mostly carry this statement's numbers: split them without keeping them.
     const note = step.note === undefined ? undefined : hollowed(step.note, NUMBER, false);
     if (note) pushAll(row, note.data);
-    signature.push(note === undefined ? '' : `n${note.text}`);
-    plain = plain && resultName.plain && (note?.plain ?? true) && !step.result.symbol.includes(SEPARATOR) && !step.result.unit.includes(SEPARATOR);
-    // A text holding the separator could make two different steps sign alike: such a step skips the memo.
-    const key = plain ? signature.join(SEPARATOR) : null;
-    const entry = key === null ? skeletonEntry(step, idOf) : (known.get(key) ?? remember(known, SKELETON_LIMIT, key, skeletonEntry(step, idOf)));
+    signature += note === undefined ? '|' : `|${note.piece}`;
+    const entry = known.get(signature) ?? remember(known, SKELETON_LIMIT, signature, skeletonEntry(step, idOf));
     row[0] = entry.id;
     skeletons.set(entry.id, entry.json);
     w.push(row);
@@ -119,20 +122,18 @@ function pushAll(row: Array<number | string>, data: string[]): void {
   for (let i = 0; i < data.length; i++) row.push(data[i]);
 }
 
-/** Adds a list of values' data to the row and their texts to the signature; false when a text holds the separator. */
-function signValues(list: WorkingValue[], row: Array<number | string>, signature: string[]): boolean {
-  let plain = true;
-  signature.push(String(list.length));
+/** Adds a list of values' data to the row; returns their part of the signature. */
+function signValues(list: WorkingValue[], row: Array<number | string>): string {
+  let signature = `|${list.length}`;
   for (const v of list) {
     const name = hollowed(v.name, NUMBER, true);
     const source = hollowed(v.source, UUID, true);
     row.push(v.value);
     pushAll(row, name.data);
     pushAll(row, source.data);
-    signature.push(v.symbol, name.text, typeof v.value === 'string' ? 't' : 'n', v.unit, source.text);
-    plain = plain && name.plain && source.plain && !v.symbol.includes(SEPARATOR) && !v.unit.includes(SEPARATOR);
+    signature += `;${pieceId(v.symbol)},${name.piece},${typeof v.value === 'string' ? 't' : 'n'},${pieceId(v.unit)},${source.piece}`;
   }
-  return plain;
+  return signature;
 }
 
 /** The skeleton of a step (its texts hollowed as packWorking does), with its id. */
