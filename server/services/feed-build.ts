@@ -2,12 +2,14 @@ import { Op } from 'sequelize';
 import { FEED_EXTENSION_VERSION, JSON_FEED_VERSION, type FeedItem, type FeedSlide, type KioskFeed } from '@shared/schemas/kiosk-feed.ts';
 import { localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
 import { NotFoundError } from '../errors.ts';
-import { Channel, ChannelSlide, Page, Statement, Venue } from '../models/index.ts';
+import { Channel, ChannelSlide, Page, Venue } from '../models/index.ts';
 import type { FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
 import { feedSky, skyHtml } from './feed-sky.ts';
 import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
 import { getSkySnapshot } from './sky-snapshots.ts';
+import { publicStatements, publicText } from './statements/public-texts.ts';
+import { withStatementTexts } from './page-render.ts';
 
 /** What the feed is for: a channel at its venue, or a screen with no channel (a holding feed). */
 export interface FeedTarget {
@@ -35,7 +37,8 @@ const figureHtml = (img: PublishedImage) =>
 /**
  * Builds a channel's kiosk feed as JSON Feed 1.1 with the `_starproof` extension: slides in order,
  * those outside their window left out, page slides only while the page is published (with the
- * signed-off wording of the chosen statements and their "as of" dates), images only when they may
+ * signed-off wording of the chosen statements and their "as of" dates, tonight's for those that
+ * follow tonight), images only when they may
  * be shown with credit and licence, and the venue's stored sky tonight.
  * @param target the channel (or none) and the venue whose screens read it
  * @param now the server clock, epoch ms
@@ -50,11 +53,11 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   const pageIds = [...new Set(slides.flatMap((s) => (s.pageId ? [s.pageId] : [])))];
   const statementIds = [...new Set(slides.flatMap((s) => s.statementIds ?? []))];
   const [pages, statements] = await Promise.all([
-    pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'publishedSnapshot'] }) : [],
-    statementIds.length ? Statement.findAll({ where: { id: { [Op.in]: statementIds } }, attributes: ['id', 'computedAt', 'acknowledgedAt'] }) : [],
+    pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'locale', 'publishedSnapshot'] }) : [],
+    publicStatements(statementIds),
   ]);
   const live = new Map(pages.filter((p) => p.publishedSnapshot).map((p) => [p.id, p.publishedSnapshot!]));
-  const asOf = new Map(statements.map((s) => [s.id, (s.acknowledgedAt ?? s.computedAt).toISOString()]));
+  const pageLocales = new Map(pages.map((p) => [p.id, p.locale]));
   const imageOf = (s: ChannelSlide) => (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
   const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
   const images = await loadPublishedImages(mediaIds);
@@ -79,8 +82,15 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
     if (s.kind === 'page') {
       const snapshot = live.get(s.pageId!);
       if (!snapshot) continue; // unpublished: gone from the screens at once
-      const chosen = (s.statementIds ?? []).filter((id) => snapshot.statementTexts[id]).map((id) => ({ id, text: snapshot.statementTexts[id], as_of: asOf.get(id) ?? snapshot.signedOffAt }));
-      const text = firstParagraphText(snapshot.html);
+      const locale = pageLocales.get(s.pageId!) ?? 'en-GB';
+      const chosen = (s.statementIds ?? [])
+        .filter((id) => snapshot.statementTexts[id])
+        .map((id) => ({ id, text: publicText(snapshot.statementTexts[id], statements.get(id), locale), as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt }));
+      const tonight = new Map(Object.entries(snapshot.statementTexts).flatMap(([id, signed]) => {
+        const now = publicText(signed, statements.get(id), locale);
+        return now === signed ? [] : [[id, now] as [string, string]];
+      }));
+      const text = firstParagraphText(withStatementTexts(snapshot.html, tonight));
       const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
       items.push({ id: s.id, title: snapshot.title, content_html: html, ...(img ? { image: img.image.hd } : {}), date_published: snapshot.publishedAt ?? snapshot.signedOffAt, _starproof: { slide } });

@@ -1,5 +1,6 @@
 import type { JSONContent } from '@tiptap/core';
 import { renderToHTMLString, serializeAttrsToHTMLString } from '@tiptap/static-renderer/pm/html-string';
+import { publicStatements, publicText } from './statements/public-texts.ts';
 import { Op } from 'sequelize';
 import { isSafeHref, pageExtensions } from '@shared/editor/extensions.ts';
 import { findLicence } from '@shared/media/licences.ts';
@@ -89,6 +90,21 @@ export async function loadRenderMedia(mediaIds: string[]): Promise<Map<string, R
   );
 }
 
+/**
+ * Puts other wording into statements already rendered in a page's HTML (the spans renderPageHtml
+ * writes), for statements that follow tonight on a page published nights ago.
+ * @param html the page's rendered HTML
+ * @param texts the wording to show, by statement id
+ * @returns the HTML with those statements' text replaced
+ */
+export function withStatementTexts(html: string, texts: Map<string, string>): string {
+  if (texts.size === 0) return html;
+  // renderPageHtml escapes a statement's text, so its span holds no markup and ends at the first "<".
+  return html.replace(/(<span class="statement" data-statement-id="([0-9a-f-]{36})">)([^<]*)(<\/span>)/g, (whole, open: string, id: string, _old: string, close: string) =>
+    texts.has(id) ? `${open}${escapeText(texts.get(id)!)}${close}` : whole,
+  );
+}
+
 /** A page as the public (kiosk feed, public API) sees it. */
 export interface PublishedPage {
   id: string;
@@ -103,8 +119,9 @@ export interface PublishedPage {
 
 /**
  * The live version of a page: the HTML stored when it was approved and published, with the
- * statement wording as signed off. It does not change when statements are recomputed; only a new
- * approval and publication replaces it.
+ * statement wording as signed off. It does not change when statements are recomputed (only a new
+ * approval and publication replaces it), except that statements following tonight show the
+ * night's wording, as the public pages and kiosks do (publicStatements).
  * @param pageId the page
  * @returns null when the page does not exist or nothing of it is published
  */
@@ -113,15 +130,18 @@ export async function renderPublishedPage(pageId: string): Promise<PublishedPage
   const page = await Page.findByPk(pageId);
   const live = page?.publishedSnapshot;
   if (!page || !live) return null;
+  const shown = await publicStatements(Object.keys(live.statementTexts));
+  const statementTexts = Object.fromEntries(Object.entries(live.statementTexts).map(([id, signed]) => [id, publicText(signed, shown.get(id), page.locale)]));
+  const moved = new Map(Object.entries(statementTexts).filter(([id, text]) => text !== live.statementTexts[id]));
   return {
     id: page.id,
     title: live.title,
     locale: page.locale,
     objectId: page.skyObjectId,
-    html: live.html,
+    html: withStatementTexts(live.html, moved),
     revisionNumber: live.revisionNumber,
     publishedAt: live.publishedAt ?? null,
-    statementTexts: live.statementTexts,
+    statementTexts,
   };
 }
 

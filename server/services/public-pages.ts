@@ -1,12 +1,14 @@
 import { createHash } from 'node:crypto';
 import { Op } from 'sequelize';
 import type { PublicPageDto } from '@shared/schemas/public-page.ts';
-import { Page, SkyObject, Statement } from '../models/index.ts';
+import { Page, SkyObject } from '../models/index.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
 import { publishingEvents } from './publishing-events.ts';
 import { statementEvents } from './statements/events.ts';
+import { publicStatements, publicText } from './statements/public-texts.ts';
+import { withStatementTexts } from './page-render.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {
@@ -41,17 +43,19 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
   const mediaIds = [...new Set(rows.flatMap((p) => mediaIdsInHtml(p.publishedSnapshot!.html)))];
   const [objects, statements, images] = await Promise.all([
     SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((p) => p.skyObjectId))] } }, attributes: ['id', 'name', 'kind'] }),
-    statementIds.length ? Statement.findAll({ where: { id: { [Op.in]: statementIds } }, attributes: ['id', 'computedAt', 'acknowledgedAt'] }) : [],
+    publicStatements(statementIds),
     loadPublishedImages(mediaIds),
   ]);
   const objectById = new Map(objects.map((o) => [o.id, o]));
-  const asOf = new Map(statements.map((s) => [s.id, (s.acknowledgedAt ?? s.computedAt).toISOString()]));
   const slugCount = new Map<string, number>();
   for (const p of rows) slugCount.set(slugify(p.publishedSnapshot!.title), (slugCount.get(slugify(p.publishedSnapshot!.title)) ?? 0) + 1);
 
   const pages: PublicPageDto[] = rows.map((p) => {
     const live = p.publishedSnapshot!;
     const base = slugify(live.title);
+    // Statements that follow tonight show tonight's wording, in the list and in the page text alike.
+    const texts = new Map(Object.entries(live.statementTexts).map(([id, signed]) => [id, publicText(signed, statements.get(id), p.locale)]));
+    const moved = new Map([...texts].filter(([id, text]) => text !== live.statementTexts[id]));
     const object = objectById.get(p.skyObjectId);
     return {
       id: p.id,
@@ -60,10 +64,10 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
       title: live.title,
       locale: p.locale,
       object: { id: p.skyObjectId, name: object?.name ?? '', kind: object?.kind ?? '' },
-      summary: firstParagraphText(live.html, 300),
+      summary: firstParagraphText(withStatementTexts(live.html, moved), 300),
       publishedAt: live.publishedAt ?? null,
-      html: live.html,
-      statements: Object.entries(live.statementTexts).map(([id, text]) => ({ id, text, asOf: asOf.get(id) ?? live.signedOffAt })),
+      html: withStatementTexts(live.html, moved),
+      statements: [...texts].map(([id, text]) => ({ id, text, asOf: statements.get(id)?.asOf ?? live.signedOffAt })),
       images: mediaIdsInHtml(live.html).flatMap((id) => {
         const img = images.get(id);
         return img ? [{ id, url: img.pageUrl, altText: img.image.alt, credit: img.credit, licence: img.licence, licenceUrl: img.licenceUrl, sourceUrl: img.sourceUrl }] : [];

@@ -2,6 +2,7 @@
  * Statements about a venue's night ("light from a planet tonight"): created for a venue, refused
  * without one, kept current night after night without a new sign-off, reviewed when the venue moves.
  */
+import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { ASTRONOMICAL_UNIT, SPEED_OF_LIGHT } from '../../shared/engine/constants.ts';
 import { localToMs, nextDate, nightDateAt } from '../../shared/sky/time-zone.ts';
@@ -186,6 +187,13 @@ describe('staying current night after night', () => {
       expect(shown.working[0].inputs[0].source).toMatch(new RegExp(`night of ${date}`));
       expect(moved).not.toContain(created.id);
       expect((await Page.findByPk(page.id))!.status).toBe('published');
+      // The public sees tonight's number, in the page text and in its statements, never the approval night's.
+      const publicPage = (await supertest(await getTestApp()).get(`/api/public/pages/${page.id}`)).body.data;
+      expect(publicPage.statements).toEqual([expect.objectContaining({ id: created.id, text: after.texts!['en-GB'] })]);
+      expect(publicPage.html).toContain(after.texts!['en-GB']);
+      expect(publicPage.html).not.toContain(created.texts['en-GB']);
+      const live = (await editor.get(`/api/pages/${page.id}/published`)).body.data;
+      expect(live.statementTexts[created.id]).toBe(after.texts!['en-GB']);
     } finally {
       statementEvents.off('textChanged', onChanged);
     }
