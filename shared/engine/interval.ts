@@ -94,12 +94,15 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
     // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
     drawsKey: varied.length > 1 ? drawsKey(draw, view, env.Msun, names, all) : undefined,
     prepare,
-    f: (x) => {
-      const scale = varyH0 ? x[H0_SLOT] / view.H0 : 1;
-      if (!(scale > 0)) return NaN;
-      env.h0Scale = scale;
-      return draw(env, x);
-    },
+    // Without an H0 range the scale stays 1 and the draw is the sampler itself.
+    f: varyH0
+      ? (x) => {
+          const scale = x[H0_SLOT] / view.H0;
+          if (!(scale > 0)) return NaN;
+          env.h0Scale = scale;
+          return draw(env, x);
+        }
+      : (x) => draw(env, x),
     last: split ? { map: (M) => split.last(env, M), decreasing: split.decreasing } : undefined,
   });
 }

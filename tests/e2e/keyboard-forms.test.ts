@@ -70,6 +70,8 @@ describe('the main forms by keyboard alone', () => {
     await tabTo(page, invite.getByRole('button', { name: 'Send invitation' }));
     await kb.press('Enter');
     await expect.poll(() => page.getByText('Invitation sent').count()).toBe(1);
+    // The form closes and focus goes back to the button that opened it, not to the top of the page.
+    await expect.poll(() => isFocused(page.getByRole('button', { name: 'Invite someone' }))).toBe(true);
     const users = await apiGet<Array<{ email: string; role: string }>>(page, '/users');
     expect(users.find((u) => u.email === `kestrel.${stamp}@example.test`)?.role).toBe('reviewer');
 
@@ -164,6 +166,11 @@ describe('the main forms by keyboard alone', () => {
     await tabTo(page, page.getByRole('button', { name: 'New page' }));
     await kb.press('Enter');
     const pageForm = page.getByRole('form', { name: 'New page' });
+    // Cancelled, the form gives focus back to its button; opened again, it starts in its first field.
+    await tabTo(page, pageForm.getByRole('button', { name: 'Cancel' }));
+    await kb.press('Enter');
+    await expect.poll(() => isFocused(page.getByRole('button', { name: 'New page' }))).toBe(true);
+    await kb.press('Enter');
     await expect.poll(() => isFocused(pageForm.getByLabel('Title'))).toBe(true);
     await kb.type(`Kestrel Cloud, written by keyboard ${stamp}`);
     const listbox = pageForm.getByRole('listbox');

@@ -1,4 +1,4 @@
-import type { ButtonHTMLAttributes } from 'react';
+import type { ButtonHTMLAttributes, Ref } from 'react';
 
 type Variant = 'primary' | 'secondary' | 'quiet' | 'danger';
 
@@ -10,10 +10,11 @@ const STYLES: Record<Variant, string> = {
 };
 
 /** A button in one of four weights; `busy` disables it and says so to screen readers. */
-export function Button({ variant = 'primary', busy, className = '', children, ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean }) {
+export function Button({ variant = 'primary', busy, className = '', children, ref, ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean; ref?: Ref<HTMLButtonElement> }) {
   return (
     <button
       {...props}
+      ref={ref}
       disabled={props.disabled || busy}
       aria-busy={busy || undefined}
       className={`inline-flex items-center justify-center gap-2 rounded-md px-3.5 py-2 text-sm font-medium transition-colors disabled:cursor-not-allowed disabled:opacity-60 ${STYLES[variant]} ${className}`}

@@ -1,4 +1,5 @@
 import { useEffect, useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { KIND_LABELS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
 import { QUANTITIES, QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
@@ -48,7 +49,7 @@ export function Component() {
   const navigate = useNavigate();
   const [query, update] = useCatalogueQuery();
   const [search, setSearch] = useState(query.q ?? '');
-  const [adding, setAdding] = useState(false);
+  const adding = useFormOpener();
   const objects = useSkyObjects(query);
   const keeper = user.role === 'reviewer' || user.role === 'admin';
 
@@ -67,12 +68,12 @@ export function Component() {
           <>
             <a href="/api/catalogue/exports/measurements.csv" className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">Export CSV</a>
             {keeper && <Link to={paths.catalogueImport.href()} className="inline-flex items-center gap-2 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"><Icon name="upload" className="size-4" />Import CSV</Link>}
-            {keeper && !adding && <Button onClick={() => setAdding(true)}><Icon name="plus" className="size-4" />Add object</Button>}
+            {keeper && !adding.open && <Button ref={adding.openerRef} onClick={adding.show}><Icon name="plus" className="size-4" />Add object</Button>}
           </>
         }
       />
       <div className="space-y-4">
-        {adding && <ObjectForm onDone={(o) => navigate(paths.catalogueObject.href(o.id))} onCancel={() => setAdding(false)} />}
+        {adding.open && <ObjectForm onDone={(o) => navigate(paths.catalogueObject.href(o.id))} onCancel={adding.close} />}
         <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Filter the catalogue">
           <label className="text-sm">
             <span className="mb-1 block font-medium">Search</span>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Link, useParams } from 'react-router-dom';
 import { KIND_LABELS } from '@shared/catalogue/kinds.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -20,8 +20,8 @@ export function Component() {
   const object = useSkyObject(id);
   const measurements = useMeasurements(id);
   const history = useMeasurementHistory(id);
-  const [editing, setEditing] = useState(false);
-  const [adding, setAdding] = useState(false);
+  const editing = useFormOpener();
+  const adding = useFormOpener();
 
   if (object.isPending) return <p className="text-sm text-muted">Loading…</p>;
   if (object.error) return <Notice tone="error" title="This object could not be shown">{object.error.message} <Link to={paths.catalogue.href()} className="text-accent underline">Back to the catalogue</Link></Notice>;
@@ -34,10 +34,10 @@ export function Component() {
       <PageHeader
         title={o.name}
         description={[KIND_LABELS[o.kind], ...o.designations].join(' · ')}
-        actions={o.can.update && !editing && <Button variant="secondary" onClick={() => setEditing(true)}>Edit object</Button>}
+        actions={o.can.update && !editing.open && <Button ref={editing.openerRef} variant="secondary" onClick={editing.show}>Edit object</Button>}
       />
-      {editing ? (
-        <div className="mb-6"><ObjectForm object={o} onDone={() => setEditing(false)} onCancel={() => setEditing(false)} /></div>
+      {editing.open ? (
+        <div className="mb-6"><ObjectForm object={o} onDone={editing.close} onCancel={editing.close} /></div>
       ) : (
         <dl className="mb-6 grid gap-x-8 gap-y-2 text-sm sm:grid-cols-[auto_1fr]">
           <dt className="text-muted">Position (J2000)</dt>
@@ -51,11 +51,11 @@ export function Component() {
       <section aria-labelledby="measurements-heading" className="mb-8 space-y-3">
         <div className="flex items-center justify-between">
           <h2 id="measurements-heading" className="text-lg font-semibold">Measurements</h2>
-          {canAdd && !adding && (
-            <Button onClick={() => setAdding(true)}><Icon name="plus" className="size-4" />{o.can.addMeasurement ? 'Add measurement' : 'Propose a measurement'}</Button>
+          {canAdd && !adding.open && (
+            <Button ref={adding.openerRef} onClick={adding.show}><Icon name="plus" className="size-4" />{o.can.addMeasurement ? 'Add measurement' : 'Propose a measurement'}</Button>
           )}
         </div>
-        {adding && <MeasurementForm objectId={o.id} proposal={!o.can.addMeasurement} onDone={() => setAdding(false)} />}
+        {adding.open && <MeasurementForm objectId={o.id} proposal={!o.can.addMeasurement} onDone={adding.close} />}
         {measurements.error && <Notice tone="error">{measurements.error.message}</Notice>}
         {measurements.data && <MeasurementGroups objectId={o.id} measurements={measurements.data} />}
       </section>

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { PAGE_STATUSES, PAGE_STATUS_LABELS, type PageStatus } from '@shared/schemas/page.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -17,7 +18,7 @@ export function Component() {
   const user = useCurrentUser();
   const settings = useSettings();
   const [filters, setFilters] = useState<PageFilters>({});
-  const [creating, setCreating] = useState(false);
+  const creating = useFormOpener();
   const pages = usePages(filters);
   const canCreate = user.role !== 'reviewer';
   return (
@@ -25,11 +26,11 @@ export function Component() {
       <PageHeader
         title="Pages"
         description="Object pages, from draft to published. Numbers on them come from checked statements."
-        actions={canCreate && !creating ? <Button onClick={() => setCreating(true)}><Icon name="plus" className="size-4" />New page</Button> : undefined}
+        actions={canCreate && !creating.open ? <Button ref={creating.openerRef} onClick={creating.show}><Icon name="plus" className="size-4" />New page</Button> : undefined}
       />
-      {creating && (
+      {creating.open && (
         <div className="mb-6">
-          <NewPageForm defaultLocale={(settings.data?.defaultLocale ?? 'en-GB') as StatementLocale} onCancel={() => setCreating(false)} />
+          <NewPageForm defaultLocale={(settings.data?.defaultLocale ?? 'en-GB') as StatementLocale} onCancel={creating.close} />
         </div>
       )}
       <div className="mb-4 flex flex-wrap items-end gap-3">

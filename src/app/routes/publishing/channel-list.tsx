@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
@@ -19,15 +19,15 @@ function NewChannel({ onCancel }: { onCancel: () => void }) {
 
 export function Component() {
   const channels = useChannels();
-  const [adding, setAdding] = useState(false);
+  const adding = useFormOpener();
   return (
     <>
       <PageHeader
         title="Publishing"
         description="Kiosk channels: the slides each venue’s screens play, in order. Only published pages and fully credited images can go on a screen."
         actions={
-          !adding ? (
-            <Button onClick={() => setAdding(true)}>
+          !adding.open ? (
+            <Button ref={adding.openerRef} onClick={adding.show}>
               <Icon name="plus" className="size-4" />
               New channel
             </Button>
@@ -35,7 +35,7 @@ export function Component() {
         }
       />
       <div className="space-y-4">
-        {adding && <NewChannel onCancel={() => setAdding(false)} />}
+        {adding.open && <NewChannel onCancel={adding.close} />}
         {channels.isPending && <p className="text-sm text-muted">Loading channels…</p>}
         {channels.error && <Notice tone="error">{channels.error.message}</Notice>}
         {channels.data && channels.data.length === 0 && <Notice>No channels yet. Create one, add slides, then choose the screens that show it.</Notice>}

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useParams } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
@@ -12,7 +12,7 @@ import { formatPosition } from '@/features/venues/components/venues-table.tsx';
 export function Component() {
   const { venueId = '' } = useParams();
   const venue = useVenue(venueId);
-  const [editing, setEditing] = useState(false);
+  const editing = useFormOpener();
   if (venue.isPending) return <p className="text-sm text-muted">Loading venue…</p>;
   if (venue.error) return <Notice tone="error">{venue.error.message}</Notice>;
   const v = venue.data;
@@ -21,10 +21,10 @@ export function Component() {
       <PageHeader
         title={v.name}
         description={`${formatPosition(v.latitude, v.longitude)} · ${v.elevationM} m above sea level · ${v.timeZone}`}
-        actions={v.can.update && !editing ? <Button variant="secondary" onClick={() => setEditing(true)}>Edit venue</Button> : undefined}
+        actions={v.can.update && !editing.open ? <Button ref={editing.openerRef} variant="secondary" onClick={editing.show}>Edit venue</Button> : undefined}
       />
       <div className="space-y-8">
-        {editing && <VenueForm venue={v} onDone={() => setEditing(false)} onCancel={() => setEditing(false)} />}
+        {editing.open && <VenueForm venue={v} onDone={editing.close} onCancel={editing.close} />}
         <ScreensPanel venueId={v.id} canManage={v.can.manageScreens} />
         <SkyTonightPanel venueId={v.id} />
       </div>

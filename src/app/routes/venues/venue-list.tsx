@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
@@ -14,15 +14,15 @@ export function Component() {
   const venues = useVenues();
   const user = useCurrentUser();
   const navigate = useNavigate();
-  const [adding, setAdding] = useState(false);
+  const adding = useFormOpener();
   return (
     <>
       <PageHeader
         title="Venues"
         description="The buildings with kiosk screens, and the places the sky tonight is worked out for."
         actions={
-          user.role === 'admin' && !adding ? (
-            <Button onClick={() => setAdding(true)}>
+          user.role === 'admin' && !adding.open ? (
+            <Button ref={adding.openerRef} onClick={adding.show}>
               <Icon name="plus" className="size-4" />
               Add a venue
             </Button>
@@ -30,7 +30,7 @@ export function Component() {
         }
       />
       <div className="space-y-4">
-        {adding && <VenueForm onDone={(venue) => navigate(paths.venue.href(venue.id))} onCancel={() => setAdding(false)} />}
+        {adding.open && <VenueForm onDone={(venue) => navigate(paths.venue.href(venue.id))} onCancel={adding.close} />}
         {venues.isPending && <p className="text-sm text-muted">Loading venues…</p>}
         {venues.error && <Notice tone="error">{venues.error.message}</Notice>}
         {venues.data && venues.data.length === 0 && <Notice>No venues yet.</Notice>}
