@@ -2,6 +2,7 @@ import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import pg from 'pg';
 import { config } from './config.ts';
+import { logger } from './logger.ts';
 
 const PgStore = connectPgSimple(session);
 
@@ -15,7 +16,8 @@ export function sessionMiddleware(databaseUrl: string, https: boolean) {
     middleware: session({
       name: 'starproof.sid',
       secret: config.sessionSecret,
-      store: new PgStore({ pool, tableName: 'user_sessions', createTableIfMissing: false, pruneSessionInterval: 60 * 15 }),
+      // Its errors go to the log as lines like any other, not as raw stacks on standard error.
+      store: new PgStore({ pool, tableName: 'user_sessions', createTableIfMissing: false, pruneSessionInterval: 60 * 15, errorLog: (...args: unknown[]) => logger.warn({ err: args.find((a) => a instanceof Error) }, `session store: ${args.filter((a) => typeof a === 'string').join(' ')}`) }),
       resave: false,
       saveUninitialized: false,
       rolling: true,

@@ -77,10 +77,16 @@ async function shutdown(signal: string) {
   stopping = true;
   logger.info({ signal }, 'shutting down');
   server.close();
+  server.closeIdleConnections();
+  // Requests under way finish, their session writes included, before the pools close (5 s at most).
+  await Promise.race([new Promise((resolve) => server.once('close', resolve)), new Promise((resolve) => setTimeout(resolve, 5_000))]);
   server.closeAllConnections();
   await stopJobQueue().catch(() => undefined);
   catcher?.server.close(() => undefined);
-  await (app.locals.sessionPool as { end(): Promise<void> }).end().catch(() => undefined);
+  // A session write started by the last requests may still be on its way: let it land first.
+  const sessions = app.locals.sessionPool as { end(): Promise<void>; totalCount: number; idleCount: number; waitingCount: number };
+  for (let i = 0; i < 50 && (sessions.totalCount > sessions.idleCount || sessions.waitingCount > 0); i++) await new Promise((resolve) => setTimeout(resolve, 100));
+  await sessions.end().catch(() => undefined);
   await closeSequelize();
   if (ownsPostgres) stopLocalPostgres(config.localPostgres.dataDir);
   process.exit(0);

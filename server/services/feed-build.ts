@@ -8,8 +8,8 @@ import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
 import { feedSky, skyHtml } from './feed-sky.ts';
 import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
 import { getSkySnapshot } from './sky-snapshots.ts';
-import { publicStatements, publicText } from './statements/public-texts.ts';
-import { withStatementTexts } from './page-render.ts';
+import { publicPageTexts } from './page-render.ts';
+import { publicStatements } from './statements/public-texts.ts';
 
 /** What the feed is for: a channel at its venue, or a screen with no channel (a holding feed). */
 export interface FeedTarget {
@@ -82,15 +82,11 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
     if (s.kind === 'page') {
       const snapshot = live.get(s.pageId!);
       if (!snapshot) continue; // unpublished: gone from the screens at once
-      const locale = pageLocales.get(s.pageId!) ?? 'en-GB';
+      const shown = publicPageTexts(snapshot, statements, pageLocales.get(s.pageId!) ?? 'en-GB');
       const chosen = (s.statementIds ?? [])
-        .filter((id) => snapshot.statementTexts[id])
-        .map((id) => ({ id, text: publicText(snapshot.statementTexts[id], statements.get(id), locale), as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt }));
-      const tonight = new Map(Object.entries(snapshot.statementTexts).flatMap(([id, signed]) => {
-        const now = publicText(signed, statements.get(id), locale);
-        return now === signed ? [] : [[id, now] as [string, string]];
-      }));
-      const text = firstParagraphText(withStatementTexts(snapshot.html, tonight));
+        .filter((id) => shown.statementTexts[id])
+        .map((id) => ({ id, text: shown.statementTexts[id], as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt }));
+      const text = firstParagraphText(shown.html);
       const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
       items.push({ id: s.id, title: snapshot.title, content_html: html, ...(img ? { image: img.image.hd } : {}), date_published: snapshot.publishedAt ?? snapshot.signedOffAt, _starproof: { slide } });

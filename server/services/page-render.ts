@@ -1,6 +1,6 @@
 import type { JSONContent } from '@tiptap/core';
 import { renderToHTMLString, serializeAttrsToHTMLString } from '@tiptap/static-renderer/pm/html-string';
-import { publicStatements, publicText } from './statements/public-texts.ts';
+import { publicStatements, publicText, type PublicStatement } from './statements/public-texts.ts';
 import { Op } from 'sequelize';
 import { isSafeHref, pageExtensions } from '@shared/editor/extensions.ts';
 import { findLicence } from '@shared/media/licences.ts';
@@ -105,6 +105,23 @@ export function withStatementTexts(html: string, texts: Map<string, string>): st
   );
 }
 
+/**
+ * A published page's statement wording and HTML as the public is shown them now: the signed
+ * wording, with tonight's in place of it for statements that follow tonight.
+ * @param live the page's published snapshot (its HTML and the wording signed with it)
+ * @param shown publicStatements for its statements
+ * @param locale the page's locale
+ */
+export function publicPageTexts(live: { html: string; statementTexts: Record<string, string> }, shown: Map<string, PublicStatement>, locale: string): { statementTexts: Record<string, string>; html: string } {
+  const moved = new Map<string, string>();
+  const statementTexts: Record<string, string> = {};
+  for (const [id, signed] of Object.entries(live.statementTexts)) {
+    statementTexts[id] = publicText(signed, shown.get(id), locale);
+    if (statementTexts[id] !== signed) moved.set(id, statementTexts[id]);
+  }
+  return { statementTexts, html: withStatementTexts(live.html, moved) };
+}
+
 /** A page as the public (kiosk feed, public API) sees it. */
 export interface PublishedPage {
   id: string;
@@ -130,15 +147,13 @@ export async function renderPublishedPage(pageId: string): Promise<PublishedPage
   const page = await Page.findByPk(pageId);
   const live = page?.publishedSnapshot;
   if (!page || !live) return null;
-  const shown = await publicStatements(Object.keys(live.statementTexts));
-  const statementTexts = Object.fromEntries(Object.entries(live.statementTexts).map(([id, signed]) => [id, publicText(signed, shown.get(id), page.locale)]));
-  const moved = new Map(Object.entries(statementTexts).filter(([id, text]) => text !== live.statementTexts[id]));
+  const { statementTexts, html } = publicPageTexts(live, await publicStatements(Object.keys(live.statementTexts)), page.locale);
   return {
     id: page.id,
     title: live.title,
     locale: page.locale,
     objectId: page.skyObjectId,
-    html: withStatementTexts(live.html, moved),
+    html,
     revisionNumber: live.revisionNumber,
     publishedAt: live.publishedAt ?? null,
     statementTexts,

@@ -7,8 +7,8 @@ import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
 import { publishingEvents } from './publishing-events.ts';
 import { statementEvents } from './statements/events.ts';
-import { publicStatements, publicText } from './statements/public-texts.ts';
-import { withStatementTexts } from './page-render.ts';
+import { publicPageTexts } from './page-render.ts';
+import { publicStatements } from './statements/public-texts.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {
@@ -54,8 +54,7 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
     const live = p.publishedSnapshot!;
     const base = slugify(live.title);
     // Statements that follow tonight show tonight's wording, in the list and in the page text alike.
-    const texts = new Map(Object.entries(live.statementTexts).map(([id, signed]) => [id, publicText(signed, statements.get(id), p.locale)]));
-    const moved = new Map([...texts].filter(([id, text]) => text !== live.statementTexts[id]));
+    const shown = publicPageTexts(live, statements, p.locale);
     const object = objectById.get(p.skyObjectId);
     return {
       id: p.id,
@@ -64,10 +63,10 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
       title: live.title,
       locale: p.locale,
       object: { id: p.skyObjectId, name: object?.name ?? '', kind: object?.kind ?? '' },
-      summary: firstParagraphText(withStatementTexts(live.html, moved), 300),
+      summary: firstParagraphText(shown.html, 300),
       publishedAt: live.publishedAt ?? null,
-      html: withStatementTexts(live.html, moved),
-      statements: [...texts].map(([id, text]) => ({ id, text, asOf: statements.get(id)?.asOf ?? live.signedOffAt })),
+      html: shown.html,
+      statements: Object.entries(shown.statementTexts).map(([id, text]) => ({ id, text, asOf: statements.get(id)?.asOf ?? live.signedOffAt })),
       images: mediaIdsInHtml(live.html).flatMap((id) => {
         const img = images.get(id);
         return img ? [{ id, url: img.pageUrl, altText: img.image.alt, credit: img.credit, licence: img.licence, licenceUrl: img.licenceUrl, sourceUrl: img.sourceUrl }] : [];

@@ -37,3 +37,4 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
 export function publicText(signed: string, shown: PublicStatement | undefined, locale: string): string {
   return shown?.tonightTexts?.[locale as StatementLocale] ?? signed;
 }
+
