@@ -4,7 +4,8 @@
  * monotonic last step computed only at the percentiles, and, for one varied input and a monotonic
  * calculation, no drawing at all. Every shortcut gives the interval the plain loop would.
  */
-import { orderStatistics, quantileFromStatistics, quantilePair, quantileRanks, type MonotoneMap } from './order-statistics.ts';
+import { quantileFromStatistics, quantilePair, type MonotoneMap } from './order-statistics.ts';
+import { LEVELS, recalledRun, rememberRun, type DrawSummary } from './recent-runs.ts';
 import { SAMPLES, seededDeviates, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 
 export type { MonotoneMap } from './order-statistics.ts';
@@ -45,36 +46,6 @@ export interface SlotProblem {
   drawsKey?: string;
   /** Called once before drawing (not when earlier draws are reused): set up what only drawing needs. */
   prepare?: () => void;
-}
-
-/**
- * What a later run with the same draws needs of an earlier one: the order statistics its
- * percentiles read (the same four for an increasing or a decreasing last step, since the levels are
- * symmetric), and the smallest and largest draw (whether a last step is finite over all of them).
- */
-interface DrawSummary {
-  stats: Map<number, number>;
-  min: number;
-  max: number;
-}
-
-const LEVELS = [0.16, 0.84] as const;
-/** The last few runs that had no failures, by drawsKey (oldest first). */
-const recentRuns = new Map<string, DrawSummary>();
-const RECENT_RUNS = 4;
-
-/** Summarises a run's draws (reordering them) and keeps the summary under its key. */
-function rememberRun(key: string, draws: Float64Array): DrawSummary {
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = 0; i < draws.length; i++) {
-    if (draws[i] < min) min = draws[i];
-    if (draws[i] > max) max = draws[i];
-  }
-  const summary = { stats: orderStatistics(draws, quantileRanks(draws.length, [...LEVELS])), min, max };
-  if (recentRuns.size >= RECENT_RUNS) recentRuns.delete(recentRuns.keys().next().value as string);
-  recentRuns.set(key, summary);
-  return summary;
 }
 
 /** True when a monotonic map is finite (and does not throw) at both ends of the draws, hence at all. */
@@ -153,7 +124,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
     const at = (rank: number) => stats.get(rank)!;
     return { low: quantileFromStatistics(SAMPLES, LEVELS[0], last, at), high: quantileFromStatistics(SAMPLES, LEVELS[1], last, at), samples: SAMPLES, failures: new Map(), failed: 0 };
   };
-  const reused = p.drawsKey === undefined ? undefined : recentRuns.get(p.drawsKey);
+  const reused = p.drawsKey === undefined ? undefined : recalledRun(p.drawsKey);
   if (reused) {
     // Some draws leave the range where the last step is finite: run it on every draw instead.
     return last && !finiteAtEnds(reused.min, reused.max, last) ? fold() : fromSummary(reused);
