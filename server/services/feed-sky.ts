@@ -65,6 +65,6 @@ export function skyHtml(sky: FeedSky): string {
     .join('');
   return (
     `<p>Sunset ${e(sky.sunset)}. Dark from ${e(sky.dark_from)}. Moon: ${e(sky.moon.phase)}, ${sky.moon.illuminated_percent}% lit.</p>` +
-    `<table><thead><tr><th scope="col">Planet</th><th scope="col">Up after dusk</th><th scope="col">Rises</th><th scope="col">Highest</th><th scope="col">Sets</th><th scope="col">Distance</th><th scope="col">Light takes</th></tr></thead><tbody>${rows}</tbody></table>`
+    `<table><thead><tr><th scope="col">Planet</th><th scope="col">Up between dusk and dawn</th><th scope="col">Rises</th><th scope="col">Highest</th><th scope="col">Sets</th><th scope="col">Distance</th><th scope="col">Light takes</th></tr></thead><tbody>${rows}</tbody></table>`
   );
 }

@@ -28,7 +28,7 @@ function Visible({ planet }: { planet: PlanetTonight }) {
 
 const columns = (atTime: string): DataColumn[] => [
   { label: 'Planet' },
-  { label: 'Up after dusk?' },
+  { label: 'Up between dusk and dawn?' },
   { label: 'Rises' },
   { label: 'Highest' },
   { label: 'Sets' },
