@@ -4,7 +4,10 @@ import { logger } from '../logger.ts';
 /** A background job's handler; throwing makes pg-boss retry it with backoff. */
 export type JobHandler<T extends object> = (data: T) => Promise<void>;
 
-const handlers = new Map<string, JobHandler<object>>();
+/** Several jobs of one kind at once: a queue that fills faster than it drains merges its work. */
+export type BatchHandler<T extends object> = (items: T[]) => Promise<void>;
+
+const handlers = new Map<string, { run: BatchHandler<object>; batchSize: number }>();
 let boss: PgBoss | undefined;
 
 /**
@@ -12,7 +15,22 @@ let boss: PgBoss | undefined;
  * when the queue starts (server start-up, or tests that call startJobQueue).
  */
 export function defineJob<T extends object>(name: string, handler: JobHandler<T>): (data: T) => Promise<void> {
-  handlers.set(name, handler as JobHandler<object>);
+  return defineBatchJob<T>(name, async (items) => {
+    for (const item of items) await handler(item);
+  }, { batchSize: 1 });
+}
+
+/**
+ * Declares a job kind whose worker takes up to `batchSize` waiting jobs at a time and handles them
+ * together (the queue is polled every half second, so one job per poll would drain a burst of a
+ * thousand catalogue edits in eight minutes). Throwing fails, and retries, the whole batch.
+ * @param name the job kind
+ * @param handler handles the jobs' data, oldest first
+ * @param options.batchSize most jobs handled at once
+ * @returns a function that queues one job
+ */
+export function defineBatchJob<T extends object>(name: string, handler: BatchHandler<T>, { batchSize }: { batchSize: number }): (data: T) => Promise<void> {
+  handlers.set(name, { run: handler as BatchHandler<object>, batchSize });
   return async (data: T) => {
     await enqueue(name, data);
   };
@@ -24,10 +42,10 @@ export async function startJobQueue(databaseUrl: string, { pollingIntervalSecond
   const instance = new PgBoss({ connectionString: databaseUrl, max: 4 });
   instance.on('error', (err) => logger.warn({ err }, 'job queue error'));
   await instance.start();
-  for (const [name, handler] of handlers) {
+  for (const [name, { run, batchSize }] of handlers) {
     await instance.createQueue(name, { name, retryLimit: 5, retryDelay: 2, retryBackoff: true });
-    await instance.work<object>(name, { pollingIntervalSeconds, batchSize: 1 }, async (jobs) => {
-      for (const job of jobs) await handler(job.data);
+    await instance.work<object>(name, { pollingIntervalSeconds, batchSize }, async (jobs) => {
+      await run(jobs.map((job) => job.data));
     });
   }
   boss = instance;
@@ -42,7 +60,7 @@ export async function enqueue(name: string, data: object, options: PgBoss.SendOp
   }
   const handler = handlers.get(name);
   if (!handler) throw new Error(`Unknown job ${name}`);
-  await handler(data);
+  await handler.run([data]);
 }
 
 /** Stops the workers, letting running jobs finish. */

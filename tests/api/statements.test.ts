@@ -4,7 +4,7 @@ import { calculate } from '../../shared/engine/calculate.ts';
 import { Measurement, Statement } from '../../server/models/index.ts';
 import { setPreferred } from '../../server/services/measurement-preferred.ts';
 import { retireMeasurement } from '../../server/services/measurement-write.ts';
-import { currentSettingsSnapshot, recomputeStatements, SettingsMovedError } from '../../server/services/statements/recompute.ts';
+import { currentSettingsSnapshot, mergeScopes, recomputeStatements, SettingsMovedError } from '../../server/services/statements/recompute.ts';
 import { buildUser, getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildObjectWithMeasurements } from '../support/sky-fixtures.ts';
 
@@ -180,5 +180,22 @@ describe('changing the adopted cosmology', () => {
     const { agent: editor } = await signedInAgent('editor');
     expect((await editor.post('/api/settings/cosmology/preview').send({ model: { preset: 'wmap9' } })).status).toBe(403);
     expect((await editor.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: 1 })).status).toBe(403);
+  });
+});
+
+describe('a burst of queued recomputes', () => {
+  it('merges into one recompute of the statements they cover; "all" covers everything; a venue’s night keeps its own', async () => {
+    const { agent, user } = await signedInAgent('reviewer');
+    const { object, measurements } = await quasar(user);
+    const other = await quasar(user);
+    const a = (await agent.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' })).body.data.id as string;
+    const b = (await agent.post('/api/statements').send({ objectId: other.object.id, templateId: 'naked-eye' })).body.data.id as string;
+    const night = { venueId: '00000000-0000-4000-8000-00000000abcd', localDate: '2026-12-24' };
+    const merged = await mergeScopes([{ measurementId: measurements[0].id }, { objectId: other.object.id }, night, { statementIds: [a] }]);
+    expect(merged).toHaveLength(2);
+    expect(merged[0]).toEqual(night);
+    expect(new Set((merged[1] as { statementIds: string[] }).statementIds)).toEqual(new Set([a, b]));
+    expect(await mergeScopes([{ objectId: object.id }, { all: true }, night])).toEqual([{ all: true }]);
+    expect(await mergeScopes([{ objectId: object.id }])).toEqual([{ objectId: object.id }]);
   });
 });

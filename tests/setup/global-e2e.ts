@@ -31,6 +31,9 @@ export default async function setup(project: TestProject) {
   return async () => {
     stopping = true;
     await stopServerProcess(server);
+    // Kept for a look after a failed run (git-ignored); STARPROOF_E2E_LOG_LEVEL=info makes it say more.
+    fs.mkdirSync('.data', { recursive: true });
+    fs.writeFileSync('.data/e2e-server.log', server.output());
     if (startedCluster) stopTestCluster();
   };
 }

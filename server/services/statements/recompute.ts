@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { defineJob } from '../../jobs/queue.ts';
+import { defineBatchJob } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
 import { getSettings } from '../organisation-settings.ts';
@@ -159,16 +159,43 @@ export async function recomputeStatements(scope: RecomputeScope, options: { sett
   return totals;
 }
 
-/** The background job: recompute a scope; a settings change mid-way ends quietly (its own job follows). */
-export const enqueueRecompute = defineJob<{ scope: RecomputeScope }>('statements.recompute', async ({ scope }) => {
-  try {
-    const result = await recomputeStatements(scope);
-    logger.info({ scope, written: result.written, changed: result.changed.length, broken: result.broken.length }, 'statements recomputed');
-  } catch (error) {
-    if (error instanceof SettingsMovedError) {
-      logger.info({ scope }, 'recompute superseded by a settings change');
-      return;
+/**
+ * The scopes of many queued recomputes as few recomputes: any "all" makes one of everything; a
+ * venue's named night keeps its own (its night is part of the computation); the rest become one
+ * recompute of the union of their statements.
+ * @param scopes the queued scopes, oldest first
+ * @returns the scopes to run
+ */
+export async function mergeScopes(scopes: RecomputeScope[]): Promise<RecomputeScope[]> {
+  if (scopes.some((s) => 'all' in s)) return [{ all: true }];
+  const nights = scopes.filter((s) => 'venueId' in s && s.localDate);
+  const rest = scopes.filter((s) => !nights.includes(s));
+  if (rest.length <= 1) return [...nights, ...rest];
+  const ids = new Set<string>();
+  for (const scope of rest) for (const id of await idsFor(scope)) ids.add(id);
+  return [...nights, { statementIds: [...ids] }];
+}
+
+/**
+ * The background job: recompute what the queued scopes cover (up to 100 jobs merged at a time, so a
+ * burst of catalogue edits costs one recompute, not one per edit); a settings change mid-way ends
+ * quietly (its own job follows).
+ */
+export const enqueueRecompute = defineBatchJob<{ scope: RecomputeScope }>(
+  'statements.recompute',
+  async (jobs) => {
+    for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
+      try {
+        const result = await recomputeStatements(scope);
+        logger.info({ scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope, jobs: jobs.length, written: result.written, changed: result.changed.length, broken: result.broken.length }, 'statements recomputed');
+      } catch (error) {
+        if (error instanceof SettingsMovedError) {
+          logger.info({ scope }, 'recompute superseded by a settings change');
+          continue;
+        }
+        throw error;
+      }
     }
-    throw error;
-  }
-});
+  },
+  { batchSize: 100 },
+);
