@@ -9,7 +9,7 @@ import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-e
 import { propagate, propagateOne } from './monte-carlo.ts';
 import { deviateRange, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 import { localModulus } from './quantities/local-modulus.ts';
-import { exactModulusAt, sampleLuminosityRatio } from './quantities/sample-photometry.ts';
+import { exactModulusAt } from './quantities/sample-photometry.ts';
 import type { Sampler } from './quantities/sample-env.ts';
 
 /** The name under which an H0 range is varied. */
@@ -44,11 +44,11 @@ function identity(o: object): number {
 
 /**
  * Everything a run's draws depend on besides the fixed deviates: sampler, model, every input, and
- * the band for the one sampler that reads it (the luminosity ratio in full; split runs draw the
- * absolute magnitude, which a brightness statement about the same object draws too).
+ * the band when the draw reads it (a quantity with a band drawn in full; a split run draws the step
+ * before the band enters, the absolute magnitude, which a brightness statement draws too).
  */
-function drawsKey(draw: Sampler, view: ModelView, Msun: number, names: string[], all: Record<string, Measurement>): string {
-  let key = `${identity(draw)}|${identity(view)}|${draw === sampleLuminosityRatio ? Msun : ''}`;
+function drawsKey(draw: Sampler, view: ModelView, band: number | null, names: string[], all: Record<string, Measurement>): string {
+  let key = `${identity(draw)}|${identity(view)}|${band ?? ''}`;
   for (const k of names) key += `|${k}=${all[k].value}-${all[k].minus}+${all[k].plus}`;
   return key;
 }
@@ -92,7 +92,7 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
   return propagate({
     ...problem,
     // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
-    drawsKey: varied.length > 1 ? drawsKey(draw, view, env.Msun, names, all) : undefined,
+    drawsKey: varied.length > 1 ? drawsKey(draw, view, spec.band && !split ? env.Msun : null, names, all) : undefined,
     prepare,
     // Without an H0 range the scale stays 1 and the draw is the sampler itself.
     f: varyH0

@@ -57,20 +57,6 @@ export function selectInPlace(a: Float64Array, k: number, lo: number, hi: number
   return a[k];
 }
 
-/** The smallest of a[lo..hi]. */
-function minOf(a: Float64Array, lo: number, hi: number): number {
-  let m = a[lo];
-  for (let i = lo + 1; i <= hi; i++) if (a[i] < m) m = a[i];
-  return m;
-}
-
-/** The largest of a[lo..hi]. */
-function maxOf(a: Float64Array, lo: number, hi: number): number {
-  let m = a[lo];
-  for (let i = lo + 1; i <= hi; i++) if (a[i] > m) m = a[i];
-  return m;
-}
-
 /** A monotonic last step applied to the draws: only the order statistics used need it. */
 export interface MonotoneMap {
   map: (x: number) => number;
@@ -81,33 +67,9 @@ export interface MonotoneMap {
 const IDENTITY: MonotoneMap = { map: (x) => x, decreasing: false };
 
 /**
- * The p-quantile of map(a) by linear interpolation between order statistics, the same definition
- * as `quantile` on the sorted mapped values. Because the map is monotonic, the k-th smallest
- * mapped value is the map of the k-th smallest (or, decreasing, k-th largest) draw.
- * @param a the draws (reordered in place), at least one value, no NaN
- * @param p probability in [0, 1]
- * @param last a monotonic map applied to the draws
- * @param lo first index known to hold the wanted order statistic's rank (0 when nothing is known)
- * @param hi last such index (a.length − 1 when nothing is known)
- * @returns the quantile and the rank selected, which later selections may narrow to
- */
-function quantileIn(a: Float64Array, p: number, last: MonotoneMap, lo: number, hi: number): { q: number; rank: number } {
-  const n = a.length;
-  const pos = p * (n - 1);
-  const i = Math.floor(pos);
-  const f = pos - i;
-  const rank = last.decreasing ? n - 1 - i : i;
-  const x = last.map(selectInPlace(a, rank, lo, hi));
-  if (i + 1 >= n) return { q: x, rank };
-  // After selection the draws on either side of `rank` are on the correct side of it, so the next
-  // order statistic is the nearest of them.
-  const y = last.map(last.decreasing ? maxOf(a, 0, rank - 1) : minOf(a, rank + 1, n - 1));
-  return { q: x * (1 - f) + y * f, rank };
-}
-
-/**
- * The pLow and pHigh quantiles of map(a) (pLow ≤ pHigh), as `quantile` gives them on the sorted
- * mapped values. The second selection searches only the part the first left on its side.
+ * The pLow and pHigh quantiles of map(a), as `quantile` gives them on the sorted mapped values:
+ * linear interpolation between order statistics, which a monotonic map keeps in order (reversed
+ * when it decreases). Only the order statistics used are selected.
  * @param a the draws (reordered in place), at least one value, no NaN
  * @param pLow lower probability
  * @param pHigh upper probability
@@ -115,14 +77,14 @@ function quantileIn(a: Float64Array, p: number, last: MonotoneMap, lo: number, h
  * @returns the two quantiles
  */
 export function quantilePair(a: Float64Array, pLow: number, pHigh: number, last: MonotoneMap = IDENTITY): { low: number; high: number } {
-  const first = quantileIn(a, pLow, last, 0, a.length - 1);
-  const second = last.decreasing ? quantileIn(a, pHigh, last, 0, first.rank) : quantileIn(a, pHigh, last, first.rank, a.length - 1);
-  return { low: first.q, high: second.q };
+  const stats = orderStatistics(a, quantileRanks(a.length, [pLow, pHigh]));
+  const at = (rank: number) => stats.get(rank)!;
+  return { low: quantileFromStatistics(a.length, pLow, last, at), high: quantileFromStatistics(a.length, pHigh, last, at) };
 }
 
 /**
  * The ranks whose values the p-quantiles of n draws interpolate between, for an increasing and for
- * a decreasing last step alike (what `quantileIn` selects, and the neighbour it reads).
+ * a decreasing last step alike.
  * @param n how many draws
  * @param ps the probabilities
  * @returns the ranks, ascending, without repeats
@@ -164,8 +126,8 @@ export function orderStatistics(a: Float64Array, ranks: number[]): Map<number, n
 }
 
 /**
- * The p-quantile of map(draws) from their order statistics, with the same arithmetic as
- * `quantileIn`, so the result is the one quantilePair gives on the draws themselves.
+ * The p-quantile of map(draws) from their order statistics: the k-th smallest mapped value is the
+ * map of the k-th smallest draw, or for a decreasing map of the k-th largest.
  * @param n how many draws
  * @param p probability in [0, 1]
  * @param last the monotonic map

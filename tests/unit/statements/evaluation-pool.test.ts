@@ -34,7 +34,7 @@ function job(objects: number): BatchJob {
 afterAll(stopEvaluationPool);
 
 describe('computing statement batches on worker threads', () => {
-  it('gives exactly what computing inline gives, including broken statements', async () => {
+  it('gives exactly what computing inline gives, including broken statements', { timeout: 30_000 }, async () => {
     const batch = job(60);
     const inline = evaluateBatch(batch);
     const [first, second] = await Promise.all([runBatch(batch), runBatch(job(60))]);
@@ -44,7 +44,7 @@ describe('computing statement batches on worker threads', () => {
     expect(JSON.parse(inline.computedRows).length + JSON.parse(inline.brokenRows).length).toBe(batch.statements.length);
   });
 
-  it('passes a failure back as an error instead of hanging', async () => {
+  it('passes a failure back as an error instead of hanging', { timeout: 30_000 }, async () => {
     const batch = job(2);
     // A batch whose outcomes name another cosmology than the one given: a settings mix-up.
     await expect(runBatch({ ...batch, model: { id: 'b'.repeat(64), json: '{}' } })).rejects.toThrow(/other than the adopted one/);
