@@ -19,7 +19,12 @@ export default defineConfig({
     emptyOutDir: true,
     sourcemap: false,
     // The kiosk player is its own light entry: no router, no query library, no editor.
-    rollupOptions: { input: { main: fileURLToPath(new URL('./index.html', import.meta.url)), kiosk: fileURLToPath(new URL('./kiosk.html', import.meta.url)) } },
+    rollupOptions: {
+      input: {
+        main: fileURLToPath(new URL('./index.html', import.meta.url)),
+        kiosk: fileURLToPath(new URL('./kiosk.html', import.meta.url)),
+      },
+    },
   },
   server: { port: 5173, proxy: { '/api': 'http://127.0.0.1:4780' } },
   test: {

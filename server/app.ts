@@ -32,7 +32,7 @@ export function createApp(options: AppOptions = {}) {
   if (!databaseUrl) throw new Error('createApp needs a database URL');
   initModels(getSequelize());
   registerStatementTriggers();
-  const https = options.https ?? (config.publicUrl?.startsWith('https:') ?? false);
+  const https = options.https ?? config.publicUrl?.startsWith('https:') ?? false;
 
   const app = express();
   app.disable('x-powered-by');

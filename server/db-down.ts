@@ -1,5 +1,17 @@
 /** Socket errors and PostgreSQL's "shutting down / cannot connect" codes, from pg directly (the session store, pg-boss) or wrapped by Sequelize. */
-const DOWN_CODES = new Set(['ECONNREFUSED', 'ECONNRESET', 'ETIMEDOUT', 'EPIPE', '57P01', '57P02', '57P03', '08000', '08001', '08003', '08006']);
+const DOWN_CODES = new Set([
+  'ECONNREFUSED',
+  'ECONNRESET',
+  'ETIMEDOUT',
+  'EPIPE',
+  '57P01',
+  '57P02',
+  '57P03',
+  '08000',
+  '08001',
+  '08003',
+  '08006',
+]);
 
 /**
  * Whether an error only says the database is unreachable or going away (an outage), not a bug.

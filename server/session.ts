@@ -17,7 +17,17 @@ export function sessionMiddleware(databaseUrl: string, https: boolean) {
       name: 'starproof.sid',
       secret: config.sessionSecret,
       // Its errors go to the log as lines like any other, not as raw stacks on standard error.
-      store: new PgStore({ pool, tableName: 'user_sessions', createTableIfMissing: false, pruneSessionInterval: 60 * 15, errorLog: (...args: unknown[]) => logger.warn({ err: args.find((a) => a instanceof Error) }, `session store: ${args.filter((a) => typeof a === 'string').join(' ')}`) }),
+      store: new PgStore({
+        pool,
+        tableName: 'user_sessions',
+        createTableIfMissing: false,
+        pruneSessionInterval: 60 * 15,
+        errorLog: (...args: unknown[]) =>
+          logger.warn(
+            { err: args.find((a) => a instanceof Error) },
+            `session store: ${args.filter((a) => typeof a === 'string').join(' ')}`,
+          ),
+      }),
       resave: false,
       saveUninitialized: false,
       rolling: true,

@@ -31,7 +31,13 @@ function countFiles(dir: string): number {
 export function writeBackup(databaseUrl: string, uploadsDir: string, archivePath: string): BackupManifest {
   const work = fs.mkdtempSync(path.join(os.tmpdir(), 'starproof-backup-'));
   try {
-    run(findPgBinary('pg_dump'), ['--format=custom', '--no-owner', '--no-privileges', `--file=${path.join(work, 'database.dump')}`, databaseUrl]);
+    run(findPgBinary('pg_dump'), [
+      '--format=custom',
+      '--no-owner',
+      '--no-privileges',
+      `--file=${path.join(work, 'database.dump')}`,
+      databaseUrl,
+    ]);
     fs.mkdirSync(path.join(work, 'uploads'));
     if (fs.existsSync(uploadsDir)) fs.cpSync(uploadsDir, path.join(work, 'uploads'), { recursive: true });
     const manifest: BackupManifest = {
@@ -67,12 +73,20 @@ export async function restoreBackup(archivePath: string, databaseUrl: string, up
     const client = new pg.default.Client({ connectionString: databaseUrl });
     await client.connect();
     try {
-      const tables = await client.query("SELECT count(*)::int AS n FROM pg_tables WHERE schemaname NOT IN ('pg_catalog','information_schema')");
+      const tables = await client.query(
+        "SELECT count(*)::int AS n FROM pg_tables WHERE schemaname NOT IN ('pg_catalog','information_schema')",
+      );
       if (tables.rows[0].n > 0) throw new Error('The target database is not empty; restore into a new, empty database.');
     } finally {
       await client.end();
     }
-    run(findPgBinary('pg_restore'), ['--no-owner', '--no-privileges', '--exit-on-error', `--dbname=${databaseUrl}`, path.join(work, 'database.dump')]);
+    run(findPgBinary('pg_restore'), [
+      '--no-owner',
+      '--no-privileges',
+      '--exit-on-error',
+      `--dbname=${databaseUrl}`,
+      path.join(work, 'database.dump'),
+    ]);
     fs.mkdirSync(uploadsDir, { recursive: true });
     fs.cpSync(path.join(work, 'uploads'), uploadsDir, { recursive: true });
     return manifest;

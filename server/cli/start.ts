@@ -50,7 +50,9 @@ if (!config.smtpUrl) {
 if (config.isProduction) {
   const unsafe = await accountsWithDemoPasswords();
   if (unsafe.length) {
-    console.error(`Refusing to start in production: these accounts still use demo passwords: ${unsafe.join(', ')}. Change or deactivate them first.`);
+    console.error(
+      `Refusing to start in production: these accounts still use demo passwords: ${unsafe.join(', ')}. Change or deactivate them first.`,
+    );
     process.exit(1);
   }
 } else {
@@ -79,13 +81,22 @@ async function shutdown(signal: string) {
   server.close();
   server.closeIdleConnections();
   // Requests under way finish, their session writes included, before the pools close (5 s at most).
-  await Promise.race([new Promise((resolve) => server.once('close', resolve)), new Promise((resolve) => setTimeout(resolve, 5_000))]);
+  await Promise.race([
+    new Promise((resolve) => server.once('close', resolve)),
+    new Promise((resolve) => setTimeout(resolve, 5_000)),
+  ]);
   server.closeAllConnections();
   await stopJobQueue().catch(() => undefined);
   catcher?.server.close(() => undefined);
   // A session write started by the last requests may still be on its way: let it land first.
-  const sessions = app.locals.sessionPool as { end(): Promise<void>; totalCount: number; idleCount: number; waitingCount: number };
-  for (let i = 0; i < 50 && (sessions.totalCount > sessions.idleCount || sessions.waitingCount > 0); i++) await new Promise((resolve) => setTimeout(resolve, 100));
+  const sessions = app.locals.sessionPool as {
+    end(): Promise<void>;
+    totalCount: number;
+    idleCount: number;
+    waitingCount: number;
+  };
+  for (let i = 0; i < 50 && (sessions.totalCount > sessions.idleCount || sessions.waitingCount > 0); i++)
+    await new Promise((resolve) => setTimeout(resolve, 100));
   await sessions.end().catch(() => undefined);
   await closeSequelize();
   if (ownsPostgres) stopLocalPostgres(config.localPostgres.dataDir);

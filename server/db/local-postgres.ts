@@ -21,10 +21,13 @@ const SUPERUSER = 'postgres';
 export function findPgBinary(name: 'initdb' | 'pg_ctl' | 'postgres' | 'pg_dump' | 'pg_restore' | 'psql'): string {
   const onPath = spawnSync('sh', ['-c', `command -v ${name}`], { encoding: 'utf8' }).stdout.trim();
   // Debian puts only client wrappers on PATH; the server tools live in the versioned folder.
-  if (onPath && !onPath.startsWith('/usr/bin/') ) return onPath;
+  if (onPath && !onPath.startsWith('/usr/bin/')) return onPath;
   const root = '/usr/lib/postgresql';
   const versions = fs.existsSync(root)
-    ? fs.readdirSync(root).filter((v) => fs.existsSync(path.join(root, v, 'bin', name))).sort((a, b) => Number(b) - Number(a))
+    ? fs
+        .readdirSync(root)
+        .filter((v) => fs.existsSync(path.join(root, v, 'bin', name)))
+        .sort((a, b) => Number(b) - Number(a))
     : [];
   if (versions.length > 0) return path.join(root, versions[0], 'bin', name);
   if (onPath) return onPath;
@@ -106,7 +109,10 @@ async function waitUntilReady(opts: LocalPostgresOptions): Promise<void> {
 }
 
 /** Creates the database unless it exists. Names are our own constants, never user input. */
-export async function ensureDatabase(opts: Pick<LocalPostgresOptions, 'port' | 'database'>, { recreate = false } = {}): Promise<void> {
+export async function ensureDatabase(
+  opts: Pick<LocalPostgresOptions, 'port' | 'database'>,
+  { recreate = false } = {},
+): Promise<void> {
   const pg = await import('pg');
   const client = new pg.default.Client({ host: '127.0.0.1', port: opts.port, user: SUPERUSER, database: 'postgres' });
   await client.connect();

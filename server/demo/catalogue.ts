@@ -27,14 +27,18 @@ export async function seedCatalogueDemo(): Promise<void> {
     url: null,
     catalogueName: 'Corrie Vale Planetarium (demo)',
     retrievedOn: null,
-    notes: 'Rounded values typed in for the demonstration. Replace them with measurements from published sources before anything is published.',
+    notes:
+      'Rounded values typed in for the demonstration. Replace them with measurements from published sources before anything is published.',
     createdById: reviewer.id,
   });
 
   for (const demo of DEMO_OBJECTS) {
     const existing = await SkyObject.findOne({ where: { name: demo.name } });
     if (existing) continue;
-    const object = await createSkyObject(SkyObjectInputSchema.parse({ ...demo, notes: `${demo.notes ?? ''} Demo object.`.trim() }), reviewer);
+    const object = await createSkyObject(
+      SkyObjectInputSchema.parse({ ...demo, notes: `${demo.notes ?? ''} Demo object.`.trim() }),
+      reviewer,
+    );
     const preferredKeys = new Set<string>();
     for (const entry of demo.measurements) {
       const values = MeasurementInputSchema.parse({ ...entry, sourceId: source.id });

@@ -12,16 +12,29 @@ export async function seedDemoChannels(): Promise<void> {
   const venue = await Venue.findOne({ where: { name: DEMO_VENUE.name } });
   if (!venue || (await Channel.findOne({ where: { venueId: venue.id, name: DEMO_CHANNEL } }))) return;
   const editor = await User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === 'editor')!.email } });
-  const pages = await Page.findAll({ where: { publishedSnapshot: { [Op.ne]: null }, title: { [Op.like]: '%(demo)' } }, order: [['title', 'ASC']] });
+  const pages = await Page.findAll({
+    where: { publishedSnapshot: { [Op.ne]: null }, title: { [Op.like]: '%(demo)' } },
+    order: [['title', 'ASC']],
+  });
   const channel = await Channel.create({ venueId: venue.id, name: DEMO_CHANNEL, createdById: editor?.id ?? null });
   let position = 0;
   for (const page of pages) {
     const statementIds = Object.keys(page.publishedSnapshot!.statementTexts).slice(0, 2);
-    await ChannelSlide.create({ channelId: channel.id, position: position++, kind: 'page', pageId: page.id, statementIds, durationS: 20 });
+    await ChannelSlide.create({
+      channelId: channel.id,
+      position: position++,
+      kind: 'page',
+      pageId: page.id,
+      statementIds,
+      durationS: 20,
+    });
   }
   await ChannelSlide.create({ channelId: channel.id, position: position++, kind: 'sky_tonight', durationS: 25 });
   const screens = await KioskScreen.findAll({ where: { venueId: venue.id } });
   for (const screen of screens) {
-    await ChannelScreen.findOrCreate({ where: { screenId: screen.id }, defaults: { screenId: screen.id, channelId: channel.id, assignedById: editor?.id ?? null, assignedAt: new Date() } });
+    await ChannelScreen.findOrCreate({
+      where: { screenId: screen.id },
+      defaults: { screenId: screen.id, channelId: channel.id, assignedById: editor?.id ?? null, assignedAt: new Date() },
+    });
   }
 }

@@ -54,7 +54,11 @@ export async function seedDemoPages(): Promise<void> {
     const andromeda = await draft(andromedaTitle, 'Andromeda Galaxy', writer, {
       type: 'doc',
       content: [
-        p(t('On a clear autumn night at Corrie Vale, look high in the east for a faint smudge of light: the Andromeda Galaxy, our nearest large neighbour.')),
+        p(
+          t(
+            'On a clear autumn night at Corrie Vale, look high in the east for a faint smudge of light: the Andromeda Galaxy, our nearest large neighbour.',
+          ),
+        ),
         h('A long way off'),
         p(s(distance), t(' The light reaching your eye tonight set out long before there were people to see it.')),
         h('Can I see it?'),
@@ -76,7 +80,11 @@ export async function seedDemoPages(): Promise<void> {
       content: [
         p(t('3C 279 looks like a very faint star in a large telescope, but it is the blazing centre of a distant galaxy.')),
         p(s(luminosity), t(' '), s(travel)),
-        p(t('An old leaflet in our shop says it is about 5 billion light-years away; our reviewers check which distance measure that means.')),
+        p(
+          t(
+            'An old leaflet in our shop says it is about 5 billion light-years away; our reviewers check which distance measure that means.',
+          ),
+        ),
       ],
     });
     await submitPage(quasar.id, undefined, writer);
@@ -86,7 +94,10 @@ export async function seedDemoPages(): Promise<void> {
   await once(sunTitle, async () => {
     await draft(sunTitle, 'Sun', writer, {
       type: 'doc',
-      content: [p(t('Our solar telescope on the terrace shows sunspots on clear days, with a certified filter fitted by our staff.')), { type: 'eyeSafetyNotice' }],
+      content: [
+        p(t('Our solar telescope on the terrace shows sunspots on clear days, with a certified filter fitted by our staff.')),
+        { type: 'eyeSafetyNotice' },
+      ],
     });
   });
 }

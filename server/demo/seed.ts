@@ -16,7 +16,12 @@ export async function seedDemo(): Promise<void> {
   for (const account of DEMO_ACCOUNTS) {
     const existing = await User.findOne({ where: { email: account.email } });
     if (existing) continue;
-    await User.create({ email: account.email, name: account.name, role: account.role, passwordHash: await hashPassword(account.password) });
+    await User.create({
+      email: account.email,
+      name: account.name,
+      role: account.role,
+      passwordHash: await hashPassword(account.password),
+    });
   }
   await seedCatalogueDemo();
   await seedDemoStatements();

@@ -4,7 +4,16 @@ import { findOrCreateStatement } from '../services/statements/create.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 
 /** Demo objects that get checked statements, so the Statements screen has something to show. */
-const DEMO_STATEMENT_OBJECTS = ['3C 279', 'TON 618', 'Andromeda Galaxy', 'Vega', 'Sirius', 'Orion Nebula', 'Pleiades', 'Messier 87'];
+const DEMO_STATEMENT_OBJECTS = [
+  '3C 279',
+  'TON 618',
+  'Andromeda Galaxy',
+  'Vega',
+  'Sirius',
+  'Orion Nebula',
+  'Pleiades',
+  'Messier 87',
+];
 /** Demo planets whose light-travel time tonight is worked out for the demo venue. */
 const DEMO_TONIGHT_PLANETS = ['Jupiter', 'Saturn'];
 

@@ -19,7 +19,10 @@ export async function requestRenditions(mediaId: string): Promise<void> {
     // Without a running queue the job ran inline and has recorded its own failure.
     const media = await Media.findByPk(mediaId);
     if (media && media.renditionsStatus !== 'failed') {
-      await media.update({ renditionsStatus: 'failed', renditionsError: 'The renditions could not be queued. Try again in a moment.' });
+      await media.update({
+        renditionsStatus: 'failed',
+        renditionsError: 'The renditions could not be queued. Try again in a moment.',
+      });
     }
   }
 }

@@ -15,9 +15,13 @@ let boss: PgBoss | undefined;
  * when the queue starts (server start-up, or tests that call startJobQueue).
  */
 export function defineJob<T extends object>(name: string, handler: JobHandler<T>): (data: T) => Promise<void> {
-  return defineBatchJob<T>(name, async (items) => {
-    for (const item of items) await handler(item);
-  }, { batchSize: 1 });
+  return defineBatchJob<T>(
+    name,
+    async (items) => {
+      for (const item of items) await handler(item);
+    },
+    { batchSize: 1 },
+  );
 }
 
 /**
@@ -29,7 +33,11 @@ export function defineJob<T extends object>(name: string, handler: JobHandler<T>
  * @param options.batchSize most jobs handled at once
  * @returns a function that queues one job
  */
-export function defineBatchJob<T extends object>(name: string, handler: BatchHandler<T>, { batchSize }: { batchSize: number }): (data: T) => Promise<void> {
+export function defineBatchJob<T extends object>(
+  name: string,
+  handler: BatchHandler<T>,
+  { batchSize }: { batchSize: number },
+): (data: T) => Promise<void> {
   handlers.set(name, { run: handler as BatchHandler<object>, batchSize });
   return async (data: T) => {
     await enqueue(name, data);

@@ -27,7 +27,10 @@ export async function startMailCatcher(port: number): Promise<{ server: SMTPServ
             receivedAt: new Date(),
           }),
         )
-        .then(() => callback(), (err: Error) => callback(err));
+        .then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
     },
   });
   await new Promise<void>((resolve, reject) => {

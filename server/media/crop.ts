@@ -41,7 +41,11 @@ export function coverCrop(
  * The size of an image fitted inside a box, never enlarged.
  * @returns width and height, at least 1 pixel each
  */
-export function fitInside(width: number, height: number, box: { width: number; height: number }): { width: number; height: number } {
+export function fitInside(
+  width: number,
+  height: number,
+  box: { width: number; height: number },
+): { width: number; height: number } {
   const scale = Math.min(1, box.width / width, box.height / height);
   return { width: Math.max(1, Math.round(width * scale)), height: Math.max(1, Math.round(height * scale)) };
 }

@@ -28,15 +28,23 @@ const grouped = (n: number) => n.toLocaleString('en-GB');
  *   too_many_pixels, animated_refused, multi_page_refused, damaged_image)
  */
 export async function inspectUpload(filePath: string, bytes: number, maxPixels: number): Promise<InspectedImage> {
-  if (bytes === 0) throw refuse('empty_file', 'The file is empty (0 bytes). Choose the image again; it may not have finished downloading.');
+  if (bytes === 0)
+    throw refuse('empty_file', 'The file is empty (0 bytes). Choose the image again; it may not have finished downloading.');
 
   const sniffed = await sniffFile(filePath);
   if ('refused' in sniffed) {
     if (sniffed.refused === 'svg') {
-      throw refuse('svg_refused', 'SVG drawings are not accepted, because they can carry scripts and links. Export the drawing as PNG and upload that.');
+      throw refuse(
+        'svg_refused',
+        'SVG drawings are not accepted, because they can carry scripts and links. Export the drawing as PNG and upload that.',
+      );
     }
-    if (sniffed.refused === 'heic') throw refuse('heic_refused', 'HEIC photos are not accepted. Export the photo as JPEG and upload that.');
-    throw refuse('not_an_image', `This file is not an image Starproof can read, whatever its name says. Accepted: ${ACCEPTED_IMAGE_TYPES.join(', ')}.`);
+    if (sniffed.refused === 'heic')
+      throw refuse('heic_refused', 'HEIC photos are not accepted. Export the photo as JPEG and upload that.');
+    throw refuse(
+      'not_an_image',
+      `This file is not an image Starproof can read, whatever its name says. Accepted: ${ACCEPTED_IMAGE_TYPES.join(', ')}.`,
+    );
   }
 
   // The header only: nothing is decoded until the declared size has passed the limit.
@@ -47,7 +55,8 @@ export async function inspectUpload(filePath: string, bytes: number, maxPixels: 
     });
   const width = meta.autoOrient?.width ?? meta.width;
   const height = meta.autoOrient?.height ?? meta.height;
-  if (!width || !height) throw refuse('damaged_image', 'The image does not say how large it is, so it cannot be read. Upload the complete file.');
+  if (!width || !height)
+    throw refuse('damaged_image', 'The image does not say how large it is, so it cannot be read. Upload the complete file.');
   const pixels = width * height;
   if (pixels > maxPixels) {
     throw refuse(
@@ -57,7 +66,10 @@ export async function inspectUpload(filePath: string, bytes: number, maxPixels: 
   }
   const pages = meta.pages ?? 1;
   if (pages > 1 && (sniffed.format === 'gif' || sniffed.format === 'webp')) {
-    throw refuse('animated_refused', 'Animated images are not accepted: kiosk slides must not flash or move quickly (WCAG 2.3.1). Upload one still frame as PNG or JPEG.');
+    throw refuse(
+      'animated_refused',
+      'Animated images are not accepted: kiosk slides must not flash or move quickly (WCAG 2.3.1). Upload one still frame as PNG or JPEG.',
+    );
   }
   if (pages > 1) throw refuse('multi_page_refused', `This file holds ${pages} pictures. Upload one picture per file.`);
 
@@ -67,7 +79,10 @@ export async function inspectUpload(filePath: string, bytes: number, maxPixels: 
     .raw()
     .toBuffer()
     .catch(() => {
-      throw refuse('damaged_image', 'The image is damaged or incomplete (it may have been cut off while copying). Upload the complete file.');
+      throw refuse(
+        'damaged_image',
+        'The image is damaged or incomplete (it may have been cut off while copying). Upload the complete file.',
+      );
     });
 
   return { format: sniffed.format, width, height, sha256: await sha256File(filePath) };

@@ -3,7 +3,11 @@ import path from 'node:path';
 import { mediaSettings } from './settings.ts';
 
 const started = Date.now();
-const host = os.hostname().replace(/[^A-Za-z0-9.-]/g, '-').slice(0, 100) || 'host';
+const host =
+  os
+    .hostname()
+    .replace(/[^A-Za-z0-9.-]/g, '-')
+    .slice(0, 100) || 'host';
 
 /**
  * This server process (machine, pid, start time), signed on the temporary files and journal notes

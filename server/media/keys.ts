@@ -3,7 +3,14 @@ import { FORMAT_FILES, type RenditionFormat } from '@shared/media/renditions.ts'
 import { mediaSettings } from './settings.ts';
 import type { SniffedFormat } from './sniff.ts';
 
-const ORIGINAL_EXT: Record<SniffedFormat, string> = { jpeg: 'jpg', png: 'png', gif: 'gif', webp: 'webp', tiff: 'tif', avif: 'avif' };
+const ORIGINAL_EXT: Record<SniffedFormat, string> = {
+  jpeg: 'jpg',
+  png: 'png',
+  gif: 'gif',
+  webp: 'webp',
+  tiff: 'tif',
+  avif: 'avif',
+};
 const ORIGINAL_MIME: Record<SniffedFormat, string> = {
   jpeg: 'image/jpeg',
   png: 'image/png',
@@ -32,7 +39,9 @@ export function renditionKey(data: Buffer, format: RenditionFormat): string {
 }
 
 /** MIME types of the files served publicly, by extension. */
-export const RENDITION_MIME_BY_EXT: Record<string, string> = Object.fromEntries(Object.values(FORMAT_FILES).map((f) => [f.ext, f.mime]));
+export const RENDITION_MIME_BY_EXT: Record<string, string> = Object.fromEntries(
+  Object.values(FORMAT_FILES).map((f) => [f.ext, f.mime]),
+);
 
 /** The URL a rendition is shown at: this server's /media/files/, or the CDN when one is configured. */
 export function renditionUrl(key: string): string {

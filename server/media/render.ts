@@ -1,5 +1,11 @@
 import sharp, { type Sharp } from 'sharp';
-import { RENDITION_FORMATS, RENDITION_SPECS, type RenditionFormat, type RenditionName, type RenditionSpec } from '@shared/media/renditions.ts';
+import {
+  RENDITION_FORMATS,
+  RENDITION_SPECS,
+  type RenditionFormat,
+  type RenditionName,
+  type RenditionSpec,
+} from '@shared/media/renditions.ts';
 import { coverCrop, fitInside } from './crop.ts';
 
 // libvips' operation cache only helps when the same image is processed again; for uploads it just
@@ -37,7 +43,10 @@ interface RawImage {
 function intermediateScale(width: number, height: number): number {
   let scale = 0;
   for (const spec of RENDITION_SPECS) {
-    const s = spec.fit === 'cover' ? Math.max(spec.width / width, spec.height / height) : Math.min(spec.width / width, spec.height / height);
+    const s =
+      spec.fit === 'cover'
+        ? Math.max(spec.width / width, spec.height / height)
+        : Math.min(spec.width / width, spec.height / height);
     scale = Math.max(scale, s);
   }
   return Math.min(1, scale);
@@ -52,7 +61,10 @@ async function decodeIntermediate(input: string | Buffer, maxPixels: number): Pr
   const meta = await source.metadata();
   const width = meta.autoOrient?.width ?? meta.width;
   const height = meta.autoOrient?.height ?? meta.height;
-  const size = fitInside(width, height, { width: width * intermediateScale(width, height), height: height * intermediateScale(width, height) });
+  const size = fitInside(width, height, {
+    width: width * intermediateScale(width, height),
+    height: height * intermediateScale(width, height),
+  });
   const { data, info } = await source
     .resize(size.width, size.height, { fit: 'fill', kernel: 'lanczos3' })
     .toColourspace('srgb')
@@ -78,7 +90,8 @@ async function renderSpec(base: RawImage, spec: RenditionSpec, focal: { x: numbe
   const pixels = () => sharp(data, { raw: { width: info.width, height: info.height, channels: info.channels } });
   const flattenOn = spec.fit === 'cover' ? '#000000' : '#ffffff';
   const files: RenderedFile[] = [];
-  for (const format of RENDITION_FORMATS) files.push({ name: spec.name, format, ...size, data: await ENCODE[format](pixels(), flattenOn).toBuffer() });
+  for (const format of RENDITION_FORMATS)
+    files.push({ name: spec.name, format, ...size, data: await ENCODE[format](pixels(), flattenOn).toBuffer() });
   return files;
 }
 

@@ -29,8 +29,13 @@ let cached: MediaSettings | undefined;
 /** The current imagery settings. */
 export function mediaSettings(): MediaSettings {
   cached ??= {
-    uploadMaxBytes: Math.round(positive(process.env.STARPROOF_UPLOAD_MAX_MB, MediaLimits.defaultUploadMaxMb, 'STARPROOF_UPLOAD_MAX_MB') * 1024 * 1024),
-    maxPixels: Math.round(positive(process.env.STARPROOF_UPLOAD_MAX_MEGAPIXELS, MediaLimits.defaultMaxMegapixels, 'STARPROOF_UPLOAD_MAX_MEGAPIXELS') * 1_000_000),
+    uploadMaxBytes: Math.round(
+      positive(process.env.STARPROOF_UPLOAD_MAX_MB, MediaLimits.defaultUploadMaxMb, 'STARPROOF_UPLOAD_MAX_MB') * 1024 * 1024,
+    ),
+    maxPixels: Math.round(
+      positive(process.env.STARPROOF_UPLOAD_MAX_MEGAPIXELS, MediaLimits.defaultMaxMegapixels, 'STARPROOF_UPLOAD_MAX_MEGAPIXELS') *
+        1_000_000,
+    ),
     tmpDir: path.join(config.uploadsDir, 'tmp'),
     publicBaseUrl: process.env.STARPROOF_MEDIA_PUBLIC_URL?.replace(/\/+$/, '') || null,
   };

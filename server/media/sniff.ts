@@ -15,7 +15,8 @@ const ascii = (buf: Buffer, start: number, end: number) => buf.subarray(start, e
  */
 export function sniffImage(head: Buffer): SniffResult {
   if (head.length >= 3 && head[0] === 0xff && head[1] === 0xd8 && head[2] === 0xff) return { format: 'jpeg' };
-  if (head.length >= 8 && head.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]))) return { format: 'png' };
+  if (head.length >= 8 && head.subarray(0, 8).equals(Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a])))
+    return { format: 'png' };
   if (/^GIF8[79]a/.test(ascii(head, 0, 6))) return { format: 'gif' };
   if (ascii(head, 0, 4) === 'RIFF' && ascii(head, 8, 12) === 'WEBP') return { format: 'webp' };
   if (['II*\0', 'MM\0*'].includes(ascii(head, 0, 4))) return { format: 'tiff' };
@@ -25,8 +26,14 @@ export function sniffImage(head: Buffer): SniffResult {
     if (['heic', 'heix', 'hevc', 'hevx', 'mif1', 'msf1'].includes(brand)) return { refused: 'heic' };
   }
   // Skip a byte-order mark and white space, then look for XML or an <svg> element.
-  const text = head.toString('utf8').replace(/^\uFEFF/, '').trimStart().slice(0, 512).toLowerCase();
-  if (text.startsWith('<?xml') || text.startsWith('<svg') || text.startsWith('<!doctype svg') || text.includes('<svg')) return { refused: 'svg' };
+  const text = head
+    .toString('utf8')
+    .replace(/^\uFEFF/, '')
+    .trimStart()
+    .slice(0, 512)
+    .toLowerCase();
+  if (text.startsWith('<?xml') || text.startsWith('<svg') || text.startsWith('<!doctype svg') || text.includes('<svg'))
+    return { refused: 'svg' };
   return { refused: 'unknown' };
 }
 

@@ -16,7 +16,14 @@ export function etagMatches(header: string | undefined, etag: string): boolean {
  * never touched for a 304.
  * @param cacheControl the Cache-Control value for both answers
  */
-export function sendCached(req: Request, res: Response, body: Buffer, etag: string, contentType: string, cacheControl: string): void {
+export function sendCached(
+  req: Request,
+  res: Response,
+  body: Buffer,
+  etag: string,
+  contentType: string,
+  cacheControl: string,
+): void {
   res.set({ ETag: etag, 'Cache-Control': cacheControl });
   if (etagMatches(req.get('if-none-match'), etag)) {
     res.status(304).end();

@@ -14,7 +14,11 @@ declare global {
 }
 
 const invalid = () =>
-  new HttpError(401, 'kiosk_token_invalid', 'This screen is not paired, or its pairing was revoked. Pair it again with a code from an admin.');
+  new HttpError(
+    401,
+    'kiosk_token_invalid',
+    'This screen is not paired, or its pairing was revoked. Pair it again with a code from an admin.',
+  );
 
 /**
  * Accepts only `Authorization: Bearer <token>` of a screen that is paired and not revoked, and
@@ -47,7 +51,10 @@ export function currentKiosk(req: Request): KioskScreen {
  * @throws HttpError 403 `kiosk_wrong_screen`
  */
 export function assertOwnScreen(screen: KioskScreen, target: { screenId?: string; venueId?: string }): void {
-  if ((target.screenId !== undefined && target.screenId !== screen.id) || (target.venueId !== undefined && target.venueId !== screen.venueId)) {
+  if (
+    (target.screenId !== undefined && target.screenId !== screen.id) ||
+    (target.venueId !== undefined && target.venueId !== screen.venueId)
+  ) {
     throw new HttpError(403, 'kiosk_wrong_screen', 'A kiosk token acts only for its own screen and venue.');
   }
 }

@@ -49,16 +49,18 @@ export const requireKioskFeed: RequestHandler = (req, res, next) => {
     return next();
   }
   trusted.delete(header);
-  Promise.resolve(requireKiosk(req, res, async (err?: unknown) => {
-    if (err || !req.kioskScreen) return next(err);
-    try {
-      const row = await ChannelScreen.findByPk(req.kioskScreen.id);
-      req.kioskChannelId = row?.channelId ?? null;
-      if (trusted.size >= MAX_ENTRIES) trusted.clear();
-      trusted.set(header, { screen: req.kioskScreen, channelId: req.kioskChannelId, checkedAt: Date.now() });
-      next();
-    } catch (lookupError) {
-      next(lookupError);
-    }
-  })).catch(next);
+  Promise.resolve(
+    requireKiosk(req, res, async (err?: unknown) => {
+      if (err || !req.kioskScreen) return next(err);
+      try {
+        const row = await ChannelScreen.findByPk(req.kioskScreen.id);
+        req.kioskChannelId = row?.channelId ?? null;
+        if (trusted.size >= MAX_ENTRIES) trusted.clear();
+        trusted.set(header, { screen: req.kioskScreen, channelId: req.kioskChannelId, checkedAt: Date.now() });
+        next();
+      } catch (lookupError) {
+        next(lookupError);
+      }
+    }),
+  ).catch(next);
 };

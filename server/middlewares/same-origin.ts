@@ -19,7 +19,8 @@ export const sameOrigin: RequestHandler = (req, _res, next) => {
     } catch {
       originHost = undefined;
     }
-    if (originHost !== host) return next(new HttpError(403, 'cross_site_request', 'This request came from another site and was refused.'));
+    if (originHost !== host)
+      return next(new HttpError(403, 'cross_site_request', 'This request came from another site and was refused.'));
     return next();
   }
   const site = req.get('sec-fetch-site');

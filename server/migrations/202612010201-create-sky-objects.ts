@@ -19,9 +19,13 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   const q = (sql: string) => qi.sequelize.query(sql);
-  await q(`ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_kind_check CHECK (kind IN (${KINDS.map((k) => `'${k}'`).join(',')}))`);
+  await q(
+    `ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_kind_check CHECK (kind IN (${KINDS.map((k) => `'${k}'`).join(',')}))`,
+  );
   await q('ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_ra_range CHECK (ra_deg IS NULL OR (ra_deg >= 0 AND ra_deg < 360))');
-  await q('ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_dec_range CHECK (dec_deg IS NULL OR (dec_deg >= -90 AND dec_deg <= 90))');
+  await q(
+    'ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_dec_range CHECK (dec_deg IS NULL OR (dec_deg >= -90 AND dec_deg <= 90))',
+  );
   // A position is both coordinates or neither (solar-system bodies have none fixed).
   await q('ALTER TABLE sky_objects ADD CONSTRAINT sky_objects_position_pair CHECK ((ra_deg IS NULL) = (dec_deg IS NULL))');
   // Case-insensitive lookups by name (CSV import matches names this way) and a lower(name) sort for the table.

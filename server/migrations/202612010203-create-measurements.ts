@@ -29,14 +29,24 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   const q = (sql: string) => qi.sequelize.query(sql);
-  await q("ALTER TABLE measurements ADD CONSTRAINT measurements_status_check CHECK (status IN ('proposed','accepted','declined'))");
-  await q('ALTER TABLE measurements ADD CONSTRAINT measurements_uncertainty_check CHECK ((uncertainty IS NULL OR uncertainty >= 0) AND (uncertainty_minus IS NULL OR uncertainty_minus >= 0) AND (uncertainty_plus IS NULL OR uncertainty_plus >= 0))');
+  await q(
+    "ALTER TABLE measurements ADD CONSTRAINT measurements_status_check CHECK (status IN ('proposed','accepted','declined'))",
+  );
+  await q(
+    'ALTER TABLE measurements ADD CONSTRAINT measurements_uncertainty_check CHECK ((uncertainty IS NULL OR uncertainty >= 0) AND (uncertainty_minus IS NULL OR uncertainty_minus >= 0) AND (uncertainty_plus IS NULL OR uncertainty_plus >= 0))',
+  );
   // Symmetric or asymmetric, never both; asymmetric needs both sides.
-  await q('ALTER TABLE measurements ADD CONSTRAINT measurements_uncertainty_shape CHECK ((uncertainty_minus IS NULL) = (uncertainty_plus IS NULL) AND (uncertainty IS NULL OR uncertainty_minus IS NULL))');
+  await q(
+    'ALTER TABLE measurements ADD CONSTRAINT measurements_uncertainty_shape CHECK ((uncertainty_minus IS NULL) = (uncertainty_plus IS NULL) AND (uncertainty IS NULL OR uncertainty_minus IS NULL))',
+  );
   // Statements rest on preferred values: only an accepted, current, sourced measurement may be one.
-  await q("ALTER TABLE measurements ADD CONSTRAINT measurements_preferred_needs_source CHECK (NOT preferred OR (source_id IS NOT NULL AND status = 'accepted' AND retired_at IS NULL))");
+  await q(
+    "ALTER TABLE measurements ADD CONSTRAINT measurements_preferred_needs_source CHECK (NOT preferred OR (source_id IS NOT NULL AND status = 'accepted' AND retired_at IS NULL))",
+  );
   // One preferred value per object, quantity and band, held by the database itself.
-  await q("CREATE UNIQUE INDEX measurements_one_preferred ON measurements (object_id, quantity, coalesce(band, '')) WHERE preferred");
+  await q(
+    "CREATE UNIQUE INDEX measurements_one_preferred ON measurements (object_id, quantity, coalesce(band, '')) WHERE preferred",
+  );
   await q('CREATE INDEX measurements_object_quantity ON measurements (object_id, quantity)');
   await q('CREATE INDEX measurements_source ON measurements (source_id)');
   await q("CREATE INDEX measurements_proposed ON measurements (created_at) WHERE status = 'proposed'");

@@ -4,7 +4,12 @@ import type { Migration } from './runner.ts';
 export const up: Migration['up'] = async ({ context: qi }) => {
   await qi.createTable('measurement_history', {
     id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
-    measurement_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'measurements', key: 'id' }, onDelete: 'RESTRICT' },
+    measurement_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: 'measurements', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     object_id: { type: DataTypes.UUID, allowNull: false },
     action: { type: DataTypes.STRING(24), allowNull: false },
     changed_by_id: { type: DataTypes.UUID, references: { model: 'users', key: 'id' }, onDelete: 'SET NULL' },

@@ -14,7 +14,9 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     created_at: { type: DataTypes.DATE, allowNull: false },
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await qi.sequelize.query("ALTER TABLE catalogue_imports ADD CONSTRAINT catalogue_imports_status_check CHECK (status IN ('checked','committed'))");
+  await qi.sequelize.query(
+    "ALTER TABLE catalogue_imports ADD CONSTRAINT catalogue_imports_status_check CHECK (status IN ('checked','committed'))",
+  );
 };
 
 export const down: Migration['down'] = async ({ context: qi }) => {

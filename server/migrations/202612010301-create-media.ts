@@ -26,7 +26,9 @@ export const up: Migration['up'] = async ({ context: qi }) => {
   });
   const q = (sql: string) => qi.sequelize.query(sql);
   await q('ALTER TABLE media ADD CONSTRAINT media_focal_range CHECK (focal_x BETWEEN 0 AND 1 AND focal_y BETWEEN 0 AND 1)');
-  await q("ALTER TABLE media ADD CONSTRAINT media_renditions_status_check CHECK (renditions_status IN ('pending','processing','ready','failed'))");
+  await q(
+    "ALTER TABLE media ADD CONSTRAINT media_renditions_status_check CHECK (renditions_status IN ('pending','processing','ready','failed'))",
+  );
   await q('ALTER TABLE media ADD CONSTRAINT media_size_positive CHECK (bytes > 0 AND width > 0 AND height > 0)');
   await q('CREATE INDEX media_created_at ON media (created_at DESC)');
 };

@@ -14,7 +14,11 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     storage_key: { type: DataTypes.STRING(200), allowNull: false },
     created_at: { type: DataTypes.DATE, allowNull: false },
   });
-  await qi.addConstraint('media_renditions', { type: 'unique', fields: ['media_id', 'name', 'format'], name: 'media_renditions_one_per_kind' });
+  await qi.addConstraint('media_renditions', {
+    type: 'unique',
+    fields: ['media_id', 'name', 'format'],
+    name: 'media_renditions_one_per_kind',
+  });
   await qi.addIndex('media_renditions', ['storage_key'], { name: 'media_renditions_storage_key' });
 };
 

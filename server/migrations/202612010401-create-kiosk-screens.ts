@@ -19,7 +19,9 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   const q = (sql: string) => qi.sequelize.query(sql);
-  await q('CREATE UNIQUE INDEX kiosk_screens_pairing_code_hash ON kiosk_screens (pairing_code_hash) WHERE pairing_code_hash IS NOT NULL');
+  await q(
+    'CREATE UNIQUE INDEX kiosk_screens_pairing_code_hash ON kiosk_screens (pairing_code_hash) WHERE pairing_code_hash IS NOT NULL',
+  );
   await q('CREATE UNIQUE INDEX kiosk_screens_token_hash ON kiosk_screens (token_hash) WHERE token_hash IS NOT NULL');
   await q('CREATE UNIQUE INDEX kiosk_screens_venue_lower_name ON kiosk_screens (venue_id, lower(name))');
 };

@@ -4,7 +4,12 @@ import type { Migration } from './runner.ts';
 export const up: Migration['up'] = async ({ context: qi }) => {
   await qi.createTable('statements', {
     id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-    sky_object_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'sky_objects', key: 'id' }, onDelete: 'RESTRICT' },
+    sky_object_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: 'sky_objects', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     template_id: { type: DataTypes.STRING(40), allowNull: false },
     status: { type: DataTypes.STRING(10), allowNull: false },
     status_reason: { type: DataTypes.TEXT },
@@ -31,7 +36,9 @@ export const up: Migration['up'] = async ({ context: qi }) => {
   const q = (sql: string) => qi.sequelize.query(sql);
   await q("ALTER TABLE statements ADD CONSTRAINT statements_status_check CHECK (status IN ('current','changed','broken'))");
   // A broken statement has no number to show; a current or changed one always has its text.
-  await q("ALTER TABLE statements ADD CONSTRAINT statements_text_when_ok CHECK (status = 'broken' OR (texts IS NOT NULL AND value IS NOT NULL))");
+  await q(
+    "ALTER TABLE statements ADD CONSTRAINT statements_text_when_ok CHECK (status = 'broken' OR (texts IS NOT NULL AND value IS NOT NULL))",
+  );
   // One statement per object and template: pages share it, so every page shows the same number.
   await q('CREATE UNIQUE INDEX statements_object_template ON statements (sky_object_id, template_id)');
   await q('CREATE INDEX statements_status ON statements (status)');

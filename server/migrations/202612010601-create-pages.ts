@@ -5,7 +5,12 @@ export const up: Migration['up'] = async ({ context: qi }) => {
   await qi.createTable('pages', {
     id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
     title: { type: DataTypes.STRING(200), allowNull: false },
-    sky_object_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'sky_objects', key: 'id' }, onDelete: 'RESTRICT' },
+    sky_object_id: {
+      type: DataTypes.UUID,
+      allowNull: false,
+      references: { model: 'sky_objects', key: 'id' },
+      onDelete: 'RESTRICT',
+    },
     locale: { type: DataTypes.STRING(10), allowNull: false },
     status: { type: DataTypes.STRING(16), allowNull: false, defaultValue: 'draft' },
     writer_id: { type: DataTypes.UUID, allowNull: false, references: { model: 'users', key: 'id' }, onDelete: 'RESTRICT' },
@@ -25,10 +30,14 @@ export const up: Migration['up'] = async ({ context: qi }) => {
     updated_at: { type: DataTypes.DATE, allowNull: false },
   });
   const q = (sql: string) => qi.sequelize.query(sql);
-  await q("ALTER TABLE pages ADD CONSTRAINT pages_status_check CHECK (status IN ('draft','in_review','approved','published','needs_recheck'))");
+  await q(
+    "ALTER TABLE pages ADD CONSTRAINT pages_status_check CHECK (status IN ('draft','in_review','approved','published','needs_recheck'))",
+  );
   await q("ALTER TABLE pages ADD CONSTRAINT pages_locale_check CHECK (locale IN ('en-GB','en-US','fr-FR'))");
   // A published page always has a live version to serve.
-  await q("ALTER TABLE pages ADD CONSTRAINT pages_published_has_snapshot CHECK (status <> 'published' OR published_snapshot IS NOT NULL)");
+  await q(
+    "ALTER TABLE pages ADD CONSTRAINT pages_published_has_snapshot CHECK (status <> 'published' OR published_snapshot IS NOT NULL)",
+  );
   await q('CREATE INDEX pages_status ON pages (status, updated_at DESC)');
   await q('CREATE INDEX pages_writer ON pages (writer_id)');
   await q('CREATE INDEX pages_object ON pages (sky_object_id)');

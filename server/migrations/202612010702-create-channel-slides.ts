@@ -23,9 +23,13 @@ export const up: Migration['up'] = async ({ context: qi }) => {
   await q(`ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_kind_fields CHECK (
     (kind = 'page' AND page_id IS NOT NULL) OR (kind = 'image' AND media_id IS NOT NULL AND page_id IS NULL) OR (kind = 'sky_tonight' AND page_id IS NULL AND media_id IS NULL))`);
   await q('ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_duration CHECK (duration_s BETWEEN 5 AND 120)');
-  await q('ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_window CHECK (starts_at IS NULL OR ends_at IS NULL OR ends_at > starts_at)');
+  await q(
+    'ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_window CHECK (starts_at IS NULL OR ends_at IS NULL OR ends_at > starts_at)',
+  );
   // Deferred so a reorder can swap positions inside one transaction.
-  await q('ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_position UNIQUE (channel_id, position) DEFERRABLE INITIALLY DEFERRED');
+  await q(
+    'ALTER TABLE channel_slides ADD CONSTRAINT channel_slides_position UNIQUE (channel_id, position) DEFERRABLE INITIALLY DEFERRED',
+  );
   await q('CREATE INDEX channel_slides_page ON channel_slides (page_id) WHERE page_id IS NOT NULL');
   await q('CREATE INDEX channel_slides_media ON channel_slides (media_id) WHERE media_id IS NOT NULL');
 };

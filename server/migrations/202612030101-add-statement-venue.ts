@@ -18,7 +18,8 @@ export const down: Migration['down'] = async ({ context: qi }) => {
   const [rows] = await qi.sequelize.query('SELECT count(*)::int AS n FROM statements WHERE venue_id IS NOT NULL');
   const n = (rows as Array<{ n: number }>)[0].n;
   // Without the column these statements would lose what they are about; refuse rather than guess.
-  if (n > 0) throw new Error(`${n} statement${n === 1 ? ' is' : 's are'} for a venue; remove them before undoing this migration.`);
+  if (n > 0)
+    throw new Error(`${n} statement${n === 1 ? ' is' : 's are'} for a venue; remove them before undoing this migration.`);
   await qi.sequelize.query(`
     DROP INDEX statements_venue;
     DROP INDEX statements_object_template_venue;

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** Which channel a kiosk screen shows; one row per screen. */
 export class ChannelScreen extends Model<InferAttributes<ChannelScreen>, InferCreationAttributes<ChannelScreen>> {

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** A kiosk display in a venue. Pairs once with a short code; then acts with a long token stored as a SHA-256 hash. */
 export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreationAttributes<KioskScreen>> {

@@ -1,8 +1,25 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { User } from './user.ts';
 
 /** What a history row records. */
-export type MeasurementHistoryAction = 'created' | 'proposed' | 'updated' | 'preferred' | 'unpreferred' | 'accepted' | 'declined' | 'retired' | 'imported';
+export type MeasurementHistoryAction =
+  | 'created'
+  | 'proposed'
+  | 'updated'
+  | 'preferred'
+  | 'unpreferred'
+  | 'accepted'
+  | 'declined'
+  | 'retired'
+  | 'imported';
 
 /** The fields of a measurement a history row keeps, before and after. */
 export type MeasurementSnapshot = Record<string, string | number | boolean | null>;
@@ -35,7 +52,14 @@ export class MeasurementHistory extends Model<InferAttributes<MeasurementHistory
         newValues: { type: DataTypes.JSONB },
         createdAt: DataTypes.DATE,
       },
-      { sequelize, tableName: 'measurement_history', modelName: 'measurementHistory', underscored: true, updatedAt: false, freezeTableName: true },
+      {
+        sequelize,
+        tableName: 'measurement_history',
+        modelName: 'measurementHistory',
+        underscored: true,
+        updatedAt: false,
+        freezeTableName: true,
+      },
     );
   }
 }

@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { RenditionFormat, RenditionName } from '@shared/media/renditions.ts';
 
 /** One resized, metadata-free copy of an image in one format, stored under a content-addressed key. */

@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { LicenceId } from '@shared/media/licences.ts';
 import type { RenditionStatus } from '@shared/media/renditions.ts';
 import type { MediaRendition } from './media-rendition.ts';
@@ -40,7 +48,13 @@ export class Media extends Model<InferAttributes<Media>, InferCreationAttributes
         fileName: { type: DataTypes.STRING(255), allowNull: false },
         format: { type: DataTypes.STRING(16), allowNull: false },
         // BIGINT comes back from pg as a string; files are far below 2^53 bytes.
-        bytes: { type: DataTypes.BIGINT, allowNull: false, get() { return Number(this.getDataValue('bytes')); } },
+        bytes: {
+          type: DataTypes.BIGINT,
+          allowNull: false,
+          get() {
+            return Number(this.getDataValue('bytes'));
+          },
+        },
         width: { type: DataTypes.INTEGER, allowNull: false },
         height: { type: DataTypes.INTEGER, allowNull: false },
         altText: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },

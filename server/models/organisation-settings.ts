@@ -1,8 +1,18 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 
 /** The organisation's defaults: the adopted cosmology, band, locale and eye-safety wording. */
-export class OrganisationSettings extends Model<InferAttributes<OrganisationSettings>, InferCreationAttributes<OrganisationSettings>> {
+export class OrganisationSettings extends Model<
+  InferAttributes<OrganisationSettings>,
+  InferCreationAttributes<OrganisationSettings>
+> {
   declare id: number;
   declare cosmologyModel: CalcModel;
   declare defaultBand: string;

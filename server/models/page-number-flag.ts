@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** A reviewer's ruling that a flagged number on a page is not a measured quantity, with the reason. */
 export class PageNumberFlag extends Model<InferAttributes<PageNumberFlag>, InferCreationAttributes<PageNumberFlag>> {

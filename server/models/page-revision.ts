@@ -1,5 +1,12 @@
 import type { JSONContent } from '@tiptap/core';
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** One saved version of a page: never changed once written. */
 export class PageRevision extends Model<InferAttributes<PageRevision>, InferCreationAttributes<PageRevision>> {

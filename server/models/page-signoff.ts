@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** A reviewer's sign-off of one statement on a page (with the wording seen), or of the whole page. */
 export class PageSignoff extends Model<InferAttributes<PageSignoff>, InferCreationAttributes<PageSignoff>> {

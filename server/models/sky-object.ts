@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 import type { SkyObjectKind } from '@shared/catalogue/kinds.ts';
 
 /** An object in the sky: a star, galaxy, planet… with its J2000 position (none for solar-system bodies). */

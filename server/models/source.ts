@@ -1,4 +1,11 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from 'sequelize';
 
 /** Where a measurement comes from: a paper, a catalogue or a web page, reusable across measurements. */
 export class Source extends Model<InferAttributes<Source>, InferCreationAttributes<Source>> {

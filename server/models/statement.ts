@@ -1,4 +1,12 @@
-import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from 'sequelize';
 import type { ResolvedModel } from '@shared/schemas/calc.ts';
 import type { StoredWorking } from '@shared/statements/working-codec.ts';
 import type { CosmologyDescription } from './cosmology-description.ts';

@@ -23,6 +23,9 @@ export const pagePolicy = {
   edit: ((user, page) => !!page && (owner(user, page) || desk(user))) as Rule<Page>,
   submit: ((user, page) => !!page && (owner(user, page) || desk(user))) as Rule<Page>,
   review: ((user, page) => !!page && reviewer(user) && !isPrivateDraft(page)) as Rule<Page>,
-  comment: ((user, page) => !!page && (owner(user, page) || desk(user) || reviewer(user)) && (owner(user, page) || !isPrivateDraft(page) || desk(user))) as Rule<Page>,
+  comment: ((user, page) =>
+    !!page &&
+    (owner(user, page) || desk(user) || reviewer(user)) &&
+    (owner(user, page) || !isPrivateDraft(page) || desk(user))) as Rule<Page>,
   publish: ((user, page) => !!page && desk(user)) as Rule<Page>,
 };

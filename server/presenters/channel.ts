@@ -1,7 +1,17 @@
 import { Op } from 'sequelize';
 import type { ChannelDetailDto, ChannelRowDto, ChannelScreenRef, SlideDto, SlideState } from '@shared/schemas/channel.ts';
 import { renditionUrl } from '../media/keys.ts';
-import { Channel, ChannelScreen, ChannelSlide, KioskScreen, Media, MediaRendition, Page, Venue, type User } from '../models/index.ts';
+import {
+  Channel,
+  ChannelScreen,
+  ChannelSlide,
+  KioskScreen,
+  Media,
+  MediaRendition,
+  Page,
+  Venue,
+  type User,
+} from '../models/index.ts';
 import { can } from '../policies/index.ts';
 import { inWindow } from '../services/feed-build.ts';
 import { missingForPublishing } from '../services/media-usage.ts';
@@ -15,10 +25,14 @@ export async function presentChannelRows(channels: Channel[]): Promise<ChannelRo
   if (!ids.length) return [];
   const [venues, counts, links] = await Promise.all([
     Venue.findAll({ where: { id: { [Op.in]: [...new Set(channels.map((c) => c.venueId))] } } }),
-    ChannelSlide.count({ where: { channelId: { [Op.in]: ids } }, group: ['channelId'] }) as unknown as Promise<Array<{ channelId: string; count: number }>>,
+    ChannelSlide.count({ where: { channelId: { [Op.in]: ids } }, group: ['channelId'] }) as unknown as Promise<
+      Array<{ channelId: string; count: number }>
+    >,
     ChannelScreen.findAll({ where: { channelId: { [Op.in]: ids } } }),
   ]);
-  const screens = links.length ? await KioskScreen.findAll({ where: { id: { [Op.in]: links.map((l) => l.screenId) } }, order: [['name', 'ASC']] }) : [];
+  const screens = links.length
+    ? await KioskScreen.findAll({ where: { id: { [Op.in]: links.map((l) => l.screenId) } }, order: [['name', 'ASC']] })
+    : [];
   const venueName = new Map(venues.map((v) => [v.id, v.name]));
   const count = new Map(counts.map((c) => [c.channelId, Number(c.count)]));
   const channelOf = new Map(links.map((l) => [l.screenId, l.channelId]));
@@ -32,10 +46,18 @@ export async function presentChannelRows(channels: Channel[]): Promise<ChannelRo
   }));
 }
 
-function slideState(slide: ChannelSlide, page: Page | undefined, media: Media | undefined, now: number): { state: SlideState; stateText: string | null } {
-  if (slide.kind === 'page' && !page?.publishedSnapshot) return { state: 'page_unpublished', stateText: 'Not shown: the page is not published' };
-  if (slide.kind === 'image' && (!media || missingForPublishing(media).length)) return { state: 'image_not_ready', stateText: 'Not shown: the image lacks a credit, licence or screen sizes' };
-  if (slide.startsAt && slide.startsAt.getTime() > now) return { state: 'scheduled', stateText: `Starts ${slide.startsAt.toISOString()}` };
+function slideState(
+  slide: ChannelSlide,
+  page: Page | undefined,
+  media: Media | undefined,
+  now: number,
+): { state: SlideState; stateText: string | null } {
+  if (slide.kind === 'page' && !page?.publishedSnapshot)
+    return { state: 'page_unpublished', stateText: 'Not shown: the page is not published' };
+  if (slide.kind === 'image' && (!media || missingForPublishing(media).length))
+    return { state: 'image_not_ready', stateText: 'Not shown: the image lacks a credit, licence or screen sizes' };
+  if (slide.startsAt && slide.startsAt.getTime() > now)
+    return { state: 'scheduled', stateText: `Starts ${slide.startsAt.toISOString()}` };
   if (!inWindow(slide, now)) return { state: 'ended', stateText: 'Not shown: its end date has passed' };
   return { state: 'showing', stateText: null };
 }
@@ -50,12 +72,16 @@ export async function presentChannelDetail(channel: Channel, viewer: User, now =
     ChannelSlide.findAll({ where: { channelId: channel.id }, order: [['position', 'ASC']] }),
     KioskScreen.findAll({ where: { venueId: channel.venueId }, order: [['name', 'ASC']] }),
   ]);
-  const links = venueScreens.length ? await ChannelScreen.findAll({ where: { screenId: { [Op.in]: venueScreens.map((s) => s.id) } } }) : [];
+  const links = venueScreens.length
+    ? await ChannelScreen.findAll({ where: { screenId: { [Op.in]: venueScreens.map((s) => s.id) } } })
+    : [];
   const pageIds = slides.flatMap((s) => (s.pageId ? [s.pageId] : []));
   const mediaIds = slides.flatMap((s) => (s.mediaId ? [s.mediaId] : []));
   const [pages, media, channels] = await Promise.all([
     pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot'] }) : [],
-    mediaIds.length ? Media.findAll({ where: { id: { [Op.in]: mediaIds } }, include: [{ model: MediaRendition, as: 'renditions' }] }) : [],
+    mediaIds.length
+      ? Media.findAll({ where: { id: { [Op.in]: mediaIds } }, include: [{ model: MediaRendition, as: 'renditions' }] })
+      : [],
     Channel.findAll({ where: { venueId: channel.venueId }, attributes: ['id', 'name'] }),
   ]);
   const pageById = new Map(pages.map((p) => [p.id, p]));
@@ -65,7 +91,9 @@ export async function presentChannelDetail(channel: Channel, viewer: User, now =
   const slideDtos: SlideDto[] = slides.map((s) => {
     const page = s.pageId ? pageById.get(s.pageId) : undefined;
     const m = s.mediaId ? mediaById.get(s.mediaId) : undefined;
-    const thumb = m?.renditions?.find((r) => r.name === 'thumbnail' && r.format === 'jpeg') ?? m?.renditions?.find((r) => r.name === 'thumbnail');
+    const thumb =
+      m?.renditions?.find((r) => r.name === 'thumbnail' && r.format === 'jpeg') ??
+      m?.renditions?.find((r) => r.name === 'thumbnail');
     return {
       id: s.id,
       position: s.position,

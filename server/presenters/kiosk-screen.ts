@@ -13,7 +13,8 @@ export function screenHealth(screen: KioskScreen, now = Date.now()): ScreenHealt
 
 /** The API contract for a kiosk screen: never its token or pairing code. */
 export function presentKioskScreen(screen: KioskScreen, now = Date.now()): KioskScreenDto {
-  const waiting = screen.pairingExpiresAt && screen.pairingExpiresAt.getTime() > now ? screen.pairingExpiresAt.toISOString() : null;
+  const waiting =
+    screen.pairingExpiresAt && screen.pairingExpiresAt.getTime() > now ? screen.pairingExpiresAt.toISOString() : null;
   return {
     id: screen.id,
     venueId: screen.venueId,
@@ -31,6 +32,15 @@ export function presentKioskScreen(screen: KioskScreen, now = Date.now()): Kiosk
 }
 
 /** A sky snapshot as sent to staff screens and kiosks. */
-export function presentSkySnapshot(snapshot: SkySnapshot | { venueId: string; localDate: string; computedAt: Date; data: SkyTonight }, stored = true): SkySnapshotDto {
-  return { venueId: snapshot.venueId, localDate: snapshot.localDate, computedAt: snapshot.computedAt.toISOString(), stored, sky: snapshot.data };
+export function presentSkySnapshot(
+  snapshot: SkySnapshot | { venueId: string; localDate: string; computedAt: Date; data: SkyTonight },
+  stored = true,
+): SkySnapshotDto {
+  return {
+    venueId: snapshot.venueId,
+    localDate: snapshot.localDate,
+    computedAt: snapshot.computedAt.toISOString(),
+    stored,
+    sky: snapshot.data,
+  };
 }

@@ -29,7 +29,8 @@ const order = (r: MediaRendition) => RENDITION_NAMES.indexOf(r.name) * 10 + REND
 export function presentMedia(media: Media, viewer: User, objects: LinkedObject[]): MediaDto {
   const renditions = [...(media.renditions ?? [])].sort((a, b) => order(a) - order(b));
   const licence = findLicence(media.licenceId);
-  const thumbnail = renditions.find((r) => r.name === 'thumbnail' && r.format === 'webp') ?? renditions.find((r) => r.name === 'thumbnail');
+  const thumbnail =
+    renditions.find((r) => r.name === 'thumbnail' && r.format === 'webp') ?? renditions.find((r) => r.name === 'thumbnail');
   return {
     id: media.id,
     fileName: media.fileName,

@@ -3,11 +3,18 @@ import type { Page, User } from '../models/index.ts';
 import { can } from '../policies/index.ts';
 
 /** The list row: the fields the pages table shows. */
-export function presentPageRow(page: Page, object: { id: string; name: string; kind: string } | undefined, writer: { id: string; name: string } | undefined, revisionNumber: number): PageRow {
+export function presentPageRow(
+  page: Page,
+  object: { id: string; name: string; kind: string } | undefined,
+  writer: { id: string; name: string } | undefined,
+  revisionNumber: number,
+): PageRow {
   return {
     id: page.id,
     title: page.title,
-    object: object ? { id: object.id, name: object.name, kind: object.kind } : { id: page.skyObjectId, name: '(object removed)', kind: 'unknown' },
+    object: object
+      ? { id: object.id, name: object.name, kind: object.kind }
+      : { id: page.skyObjectId, name: '(object removed)', kind: 'unknown' },
     locale: page.locale,
     status: page.status,
     writer: writer ? { id: writer.id, name: writer.name } : { id: page.writerId, name: '(former staff)' },

@@ -9,7 +9,12 @@ import { can } from '../policies/index.ts';
  * reading it means fetching its skeletons: see readWorking). The cosmology needs `modelDescription`
  * loaded, and a statement about a venue its `venue`.
  */
-export function presentStatement(statement: Statement, object: Pick<SkyObject, 'id' | 'name' | 'kind'>, viewer: User, { working }: { working?: Step[] } = {}): StatementDto {
+export function presentStatement(
+  statement: Statement,
+  object: Pick<SkyObject, 'id' | 'name' | 'kind'>,
+  viewer: User,
+  { working }: { working?: Step[] } = {},
+): StatementDto {
   const venue = statement.venue;
   return {
     id: statement.id,
@@ -21,7 +26,10 @@ export function presentStatement(statement: Statement, object: Pick<SkyObject, '
     statusReason: statement.statusReason ?? null,
     value: statement.value ?? null,
     unit: statement.unit ?? null,
-    interval: statement.intervalLow != null && statement.intervalHigh != null ? { low: statement.intervalLow, high: statement.intervalHigh } : null,
+    interval:
+      statement.intervalLow != null && statement.intervalHigh != null
+        ? { low: statement.intervalLow, high: statement.intervalHigh }
+        : null,
     significantFigures: statement.significantFigures ?? null,
     texts: statement.texts ?? null,
     footnotes: statement.footnotes ?? null,

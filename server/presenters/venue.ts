@@ -15,7 +15,11 @@ export function presentVenue(venue: Venue, viewer: User, screenCount: number): V
     screenCount,
     createdAt: venue.createdAt.toISOString(),
     updatedAt: venue.updatedAt.toISOString(),
-    can: { update: can(viewer, 'venue', 'update', venue), delete: can(viewer, 'venue', 'delete', venue), manageScreens: can(viewer, 'venue', 'manageScreens', venue) },
+    can: {
+      update: can(viewer, 'venue', 'update', venue),
+      delete: can(viewer, 'venue', 'delete', venue),
+      manageScreens: can(viewer, 'venue', 'manageScreens', venue),
+    },
   };
 }
 

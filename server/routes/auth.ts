@@ -1,6 +1,15 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPasswordSchema, type ChangePasswordInput, type RequestPasswordResetInput, type SignInInput, type TokenPasswordInput } from '@shared/schemas/auth.ts';
+import {
+  ChangePasswordSchema,
+  RequestPasswordResetSchema,
+  SignInSchema,
+  TokenPasswordSchema,
+  type ChangePasswordInput,
+  type RequestPasswordResetInput,
+  type SignInInput,
+  type TokenPasswordInput,
+} from '@shared/schemas/auth.ts';
 import { TokenLifetimes } from '@shared/validations.ts';
 import { getSequelize } from '../db.ts';
 import { HttpError } from '../errors.ts';
@@ -23,7 +32,8 @@ function addressLimiter(limit: number) {
     limit: Number(process.env.STARPROOF_SIGNIN_LIMIT ?? limit),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many attempts from this address. Wait a few minutes and try again.')),
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'too_many_requests', 'Too many attempts from this address. Wait a few minutes and try again.')),
   });
 }
 
@@ -54,7 +64,8 @@ authRouter.post('/sign-in', addressLimiter(30), validate(SignInSchema), async (r
 authRouter.post('/sign-out', async (req, res) => {
   const userId = req.session.userId;
   await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
-  if (userId) await recordAudit({ actorId: userId, action: 'auth.signed_out', subjectType: 'user', subjectId: userId, ip: req.ip });
+  if (userId)
+    await recordAudit({ actorId: userId, action: 'auth.signed_out', subjectType: 'user', subjectId: userId, ip: req.ip });
   res.clearCookie('starproof.sid');
   res.status(204).end();
 });
@@ -63,7 +74,9 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
   const user = currentUser(req);
   const { currentPassword, newPassword } = req.body as ChangePasswordInput;
   if (!(await verifyPassword(currentPassword, user.passwordHash))) {
-    throw new HttpError(400, 'wrong_password', 'currentPassword: Your current password is not right.', { currentPassword: 'Your current password is not right.' });
+    throw new HttpError(400, 'wrong_password', 'currentPassword: Your current password is not right.', {
+      currentPassword: 'Your current password is not right.',
+    });
   }
   assertAcceptablePassword(newPassword, user.email);
   user.passwordHash = await hashPassword(newPassword);
@@ -71,7 +84,10 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
     await user.save({ transaction });
     // Other devices signed in with the old password are signed out.
     await endUserSessions(user.id, req.sessionID, transaction);
-    await recordAudit({ actorId: user.id, action: 'auth.password_changed', subjectType: 'user', subjectId: user.id, ip: req.ip }, transaction);
+    await recordAudit(
+      { actorId: user.id, action: 'auth.password_changed', subjectType: 'user', subjectId: user.id, ip: req.ip },
+      transaction,
+    );
   });
   res.status(204).end();
 });
@@ -82,7 +98,13 @@ authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordR
   if (user?.passwordHash) {
     const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000);
     await sendMail(passwordResetMail(user.email, user.name, token));
-    await recordAudit({ actorId: null, action: 'auth.password_reset_requested', subjectType: 'user', subjectId: user.id, ip: req.ip });
+    await recordAudit({
+      actorId: null,
+      action: 'auth.password_reset_requested',
+      subjectType: 'user',
+      subjectId: user.id,
+      ip: req.ip,
+    });
   }
   // The same answer whether or not the address has an account.
   res.status(202).json({ data: { message: 'If that address has an account, a reset link is on its way.' } });
@@ -98,7 +120,16 @@ function completeWithToken(purpose: 'invitation' | 'password_reset') {
       found.set({ passwordHash: await hashPassword(newPassword), failedSignIns: 0, throttledUntil: null });
       await found.save({ transaction });
       await endUserSessions(found.id, undefined, transaction);
-      await recordAudit({ actorId: found.id, action: purpose === 'invitation' ? 'user.invitation_accepted' : 'auth.password_reset', subjectType: 'user', subjectId: found.id, ip: req.ip }, transaction);
+      await recordAudit(
+        {
+          actorId: found.id,
+          action: purpose === 'invitation' ? 'user.invitation_accepted' : 'auth.password_reset',
+          subjectType: 'user',
+          subjectId: found.id,
+          ip: req.ip,
+        },
+        transaction,
+      );
       return found;
     });
     await startSession(req, user);
@@ -107,4 +138,9 @@ function completeWithToken(purpose: 'invitation' | 'password_reset') {
 }
 
 authRouter.post('/invitation/accept', addressLimiter(30), validate(TokenPasswordSchema), completeWithToken('invitation'));
-authRouter.post('/password-reset/complete', addressLimiter(30), validate(TokenPasswordSchema), completeWithToken('password_reset'));
+authRouter.post(
+  '/password-reset/complete',
+  addressLimiter(30),
+  validate(TokenPasswordSchema),
+  completeWithToken('password_reset'),
+);

@@ -16,7 +16,8 @@ calcRouter.post(
     keyGenerator: (req) => req.user?.id ?? ipKeyGenerator(req.ip ?? ''),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
-    handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many calculations in a minute. Wait a moment and try again.')),
+    handler: (_req, _res, next) =>
+      next(new HttpError(429, 'too_many_requests', 'Too many calculations in a minute. Wait a moment and try again.')),
   }),
   (req, res) => {
     const result = calculate(req.body);

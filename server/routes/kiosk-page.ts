@@ -12,7 +12,10 @@ export function kioskPage(dist: string): RequestHandler {
   const file = path.join(dist, 'kiosk.html');
   return (_req, res, next) => {
     if (!fs.existsSync(file)) return next();
-    const csp = String(res.getHeader('Content-Security-Policy') ?? '').replace("frame-ancestors 'none'", "frame-ancestors 'self'");
+    const csp = String(res.getHeader('Content-Security-Policy') ?? '').replace(
+      "frame-ancestors 'none'",
+      "frame-ancestors 'self'",
+    );
     res.set({ 'Cache-Control': 'no-cache', 'Content-Security-Policy': csp, 'X-Frame-Options': 'SAMEORIGIN' });
     // `dotfiles: 'allow'`: the build folder may sit under a dot folder (e.g. .data/dist-…).
     res.sendFile(file, { dotfiles: 'allow' });

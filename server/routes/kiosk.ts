@@ -1,6 +1,12 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { KioskHeartbeatSchema, KioskPairSchema, type KioskHeartbeatInput, type KioskPairedDto, type KioskPairInput } from '@shared/schemas/kiosk.ts';
+import {
+  KioskHeartbeatSchema,
+  KioskPairSchema,
+  type KioskHeartbeatInput,
+  type KioskPairedDto,
+  type KioskPairInput,
+} from '@shared/schemas/kiosk.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { HttpError, NotFoundError } from '../errors.ts';
 import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kiosk-auth.ts';
@@ -16,7 +22,10 @@ const pairingLimiter = rateLimit({
   limit: Number(process.env.STARPROOF_PAIRING_LIMIT ?? 30),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
-  handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many pairing attempts from this address. Wait a few minutes and try again.')),
+  handler: (_req, _res, next) =>
+    next(
+      new HttpError(429, 'too_many_requests', 'Too many pairing attempts from this address. Wait a few minutes and try again.'),
+    ),
 });
 
 /** Routes the kiosk player calls: pairing (no token yet), then everything with its Bearer token. */
@@ -43,7 +52,15 @@ kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), asy
 kioskRouter.get('/screen', requireKiosk, async (req, res) => {
   const screen = currentKiosk(req);
   const venue = await Venue.findByPk(screen.venueId);
-  res.json({ data: { id: screen.id, name: screen.name, venueId: screen.venueId, venueName: venue?.name ?? '', serverTime: new Date().toISOString() } });
+  res.json({
+    data: {
+      id: screen.id,
+      name: screen.name,
+      venueId: screen.venueId,
+      venueName: venue?.name ?? '',
+      serverTime: new Date().toISOString(),
+    },
+  });
 });
 
 /** The sky for the screen's own venue (a sky-tonight slide); another venue's is refused. */

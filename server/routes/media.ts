@@ -23,7 +23,12 @@ import { findMediaUsage } from '../services/media-usage.ts';
 /** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
 async function findMedia(id: string): Promise<Media | null> {
   if (!IdSchema.safeParse(id).success) return null;
-  return Media.findByPk(id, { include: [{ model: MediaRendition, as: 'renditions' }, { model: User, as: 'uploadedBy', attributes: ['id', 'name'] }] });
+  return Media.findByPk(id, {
+    include: [
+      { model: MediaRendition, as: 'renditions' },
+      { model: User, as: 'uploadedBy', attributes: ['id', 'name'] },
+    ],
+  });
 }
 
 async function present(media: Media, viewer: User) {
@@ -31,7 +36,9 @@ async function present(media: Media, viewer: User) {
   return presentMedia(media, viewer, objects.get(media.id) ?? []);
 }
 
-const SuggestQuerySchema = z.object({ q: z.string({ message: 'Type part of a name' }).trim().min(1, 'Type part of a name').max(MediaLimits.searchMax) });
+const SuggestQuerySchema = z.object({
+  q: z.string({ message: 'Type part of a name' }).trim().min(1, 'Type part of a name').max(MediaLimits.searchMax),
+});
 
 // Checked before the body is read, so a refused request uploads nothing.
 const mayUpload: RequestHandler = (req, _res, next) => {
@@ -100,7 +107,13 @@ mediaRouter.get('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
   const media = await findMedia(req.params.id as string);
   authorize(viewer, 'media', 'read', media);
-  res.json({ data: { status: media.renditionsStatus, error: media.renditionsError, renditions: (media.renditions ?? []).map(presentRendition) } });
+  res.json({
+    data: {
+      status: media.renditionsStatus,
+      error: media.renditionsError,
+      renditions: (media.renditions ?? []).map(presentRendition),
+    },
+  });
 });
 
 /** Makes the renditions again, e.g. after a failure. */
@@ -108,7 +121,8 @@ mediaRouter.post('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
   const media = await findMedia(req.params.id as string);
   authorize(viewer, 'media', 'update', media);
-  if (media.renditionsStatus === 'processing') throw ConflictError('The renditions are being made right now.', 'already_processing');
+  if (media.renditionsStatus === 'processing')
+    throw ConflictError('The renditions are being made right now.', 'already_processing');
   await media.update({ renditionsStatus: 'pending', renditionsError: null });
   await requestRenditions(media.id);
   await media.reload();

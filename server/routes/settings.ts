@@ -1,5 +1,13 @@
 import { Router } from 'express';
-import { CosmologyChangeSchema, CosmologyPreviewSchema, SettingsUpdateSchema, type CosmologyChangeInput, type CosmologyPreviewInput, type SettingsDto, type SettingsUpdateInput } from '@shared/schemas/settings.ts';
+import {
+  CosmologyChangeSchema,
+  CosmologyPreviewSchema,
+  SettingsUpdateSchema,
+  type CosmologyChangeInput,
+  type CosmologyPreviewInput,
+  type SettingsDto,
+  type SettingsUpdateInput,
+} from '@shared/schemas/settings.ts';
 import type { StatementLocale } from '@shared/statements/index.ts';
 import { calculate } from '@shared/engine/calculate.ts';
 import { HttpError } from '../errors.ts';

@@ -1,7 +1,12 @@
 import { Router } from 'express';
 import { Op, type WhereOptions } from 'sequelize';
 import { IdSchema } from '@shared/schemas/common.ts';
-import { StatementCreateSchema, StatementListQuerySchema, type StatementCreateInput, type StatementListQuery } from '@shared/schemas/statement.ts';
+import {
+  StatementCreateSchema,
+  StatementListQuerySchema,
+  type StatementCreateInput,
+  type StatementListQuery,
+} from '@shared/schemas/statement.ts';
 import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
 import { NotFoundError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
@@ -33,7 +38,14 @@ statementTemplatesRouter.use(requireUser);
 statementTemplatesRouter.get('/', (req, res) => {
   authorize(currentUser(req), 'statement', 'read');
   res.json({
-    data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology, needsVenue, followsTonight }) => ({ id, title, needs, usesCosmology, needsVenue: !!needsVenue, followsTonight: !!followsTonight })),
+    data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology, needsVenue, followsTonight }) => ({
+      id,
+      title,
+      needs,
+      usesCosmology,
+      needsVenue: !!needsVenue,
+      followsTonight: !!followsTonight,
+    })),
   });
 });
 
@@ -55,12 +67,25 @@ statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (re
     attributes: { exclude: ['working'] },
     include: INCLUDE,
     // Statements that need attention first, then the newest computations.
-    order: [[Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'], ['computedAt', 'DESC']],
+    order: [
+      [Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'],
+      ['computedAt', 'DESC'],
+    ],
     limit: q.pageSize,
     offset: (q.page - 1) * q.pageSize,
   });
-  const objects = new Map((await SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((s) => s.skyObjectId))] } }, attributes: ['id', 'name', 'kind'] })).map((o) => [o.id, o]));
-  res.json({ data: rows.map((s) => presentStatement(s, objects.get(s.skyObjectId)!, viewer)), meta: { total: count, page: q.page, pageSize: q.pageSize } });
+  const objects = new Map(
+    (
+      await SkyObject.findAll({
+        where: { id: { [Op.in]: [...new Set(rows.map((s) => s.skyObjectId))] } },
+        attributes: ['id', 'name', 'kind'],
+      })
+    ).map((o) => [o.id, o]),
+  );
+  res.json({
+    data: rows.map((s) => presentStatement(s, objects.get(s.skyObjectId)!, viewer)),
+    meta: { total: count, page: q.page, pageSize: q.pageSize },
+  });
 });
 
 statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => {

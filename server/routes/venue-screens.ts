@@ -20,7 +20,9 @@ async function loadVenue(id: string): Promise<Venue | null> {
 
 /** A screen of this venue; another venue's screen is "not found" here, never touched. */
 async function loadScreen(venue: Venue, screenId: string): Promise<KioskScreen> {
-  const screen = IdSchema.safeParse(screenId).success ? await KioskScreen.findOne({ where: { id: screenId, venueId: venue.id } }) : null;
+  const screen = IdSchema.safeParse(screenId).success
+    ? await KioskScreen.findOne({ where: { id: screenId, venueId: venue.id } })
+    : null;
   if (!screen) throw NotFoundError('There is no such screen at this venue.');
   return screen;
 }
@@ -41,11 +43,26 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const { name } = req.body as ScreenCreateInput;
   const sequelize = getSequelize();
-  const clash = await KioskScreen.findOne({ where: sequelize.and({ venueId: venue.id }, sequelize.where(sequelize.fn('lower', sequelize.col('name')), name.toLowerCase())) });
+  const clash = await KioskScreen.findOne({
+    where: sequelize.and(
+      { venueId: venue.id },
+      sequelize.where(sequelize.fn('lower', sequelize.col('name')), name.toLowerCase()),
+    ),
+  });
   if (clash) throw ConflictError(`This venue already has a screen called "${clash.name}".`, 'screen_name_taken');
   const screen = await getSequelize().transaction(async (transaction) => {
     const created = await KioskScreen.create({ venueId: venue.id, name }, { transaction });
-    await recordAudit({ actorId: viewer.id, action: 'kiosk.screen_added', subjectType: 'kiosk_screen', subjectId: created.id, data: { venueId: venue.id, name }, ip: req.ip }, transaction);
+    await recordAudit(
+      {
+        actorId: viewer.id,
+        action: 'kiosk.screen_added',
+        subjectType: 'kiosk_screen',
+        subjectId: created.id,
+        data: { venueId: venue.id, name },
+        ip: req.ip,
+      },
+      transaction,
+    );
     return created;
   });
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
@@ -78,7 +95,17 @@ venueScreensRouter.delete('/:screenId', async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await loadScreen(venue, params(req.params).screenId);
   await getSequelize().transaction(async (transaction) => {
-    await recordAudit({ actorId: viewer.id, action: 'kiosk.screen_removed', subjectType: 'kiosk_screen', subjectId: screen.id, data: { venueId: venue.id, name: screen.name }, ip: req.ip }, transaction);
+    await recordAudit(
+      {
+        actorId: viewer.id,
+        action: 'kiosk.screen_removed',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { venueId: venue.id, name: screen.name },
+        ip: req.ip,
+      },
+      transaction,
+    );
     await screen.destroy({ transaction });
   });
   res.status(204).end();

@@ -1,6 +1,13 @@
 import { Router } from 'express';
 import { IdSchema } from '@shared/schemas/common.ts';
-import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema, type SkyQuery, type VenueCreateValues, type VenueUpdateValues } from '@shared/schemas/venue.ts';
+import {
+  SkyQuerySchema,
+  VenueCreateSchema,
+  VenueUpdateSchema,
+  type SkyQuery,
+  type VenueCreateValues,
+  type VenueUpdateValues,
+} from '@shared/schemas/venue.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { computeSkyTonight } from '@shared/sky/tonight.ts';
@@ -43,7 +50,9 @@ venuesRouter.get('/', async (req, res) => {
 /** The venues to choose from (e.g. the venue a statement is for): names only, for every member of staff. */
 venuesRouter.get('/choices', async (req, res) => {
   authorize(currentUser(req), 'venue', 'choose');
-  res.json({ data: (await Venue.findAll({ attributes: ['id', 'name', 'timeZone'], order: [['name', 'ASC']] })).map(presentVenueChoice) });
+  res.json({
+    data: (await Venue.findAll({ attributes: ['id', 'name', 'timeZone'], order: [['name', 'ASC']] })).map(presentVenueChoice),
+  });
 });
 
 venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {
@@ -86,10 +95,19 @@ venuesRouter.get('/:id/sky', validate(SkyQuerySchema, 'query'), async (req, res)
   if (query.at) {
     try {
       const now = new Date();
-      const sky = computeSkyTonight({ latitude: venue.latitude, longitude: venue.longitude, elevationM: venue.elevationM, timeZone: venue.timeZone, localDate, observeAt: query.at, now });
+      const sky = computeSkyTonight({
+        latitude: venue.latitude,
+        longitude: venue.longitude,
+        elevationM: venue.elevationM,
+        timeZone: venue.timeZone,
+        localDate,
+        observeAt: query.at,
+        now,
+      });
       return res.json({ data: presentSkySnapshot({ venueId: venue.id, localDate, computedAt: now, data: sky }, false) });
     } catch (err) {
-      if (err instanceof SkyInputError) throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
+      if (err instanceof SkyInputError)
+        throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
       throw err;
     }
   }
@@ -97,7 +115,8 @@ venuesRouter.get('/:id/sky', validate(SkyQuerySchema, 'query'), async (req, res)
     const snapshot = await getSkySnapshot(venue.id, localDate);
     res.json({ data: presentSkySnapshot(snapshot!) });
   } catch (err) {
-    if (err instanceof SkyInputError) throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
+    if (err instanceof SkyInputError)
+      throw ValidationError(err.message, { [err.field === 'localDate' ? 'date' : err.field]: err.message });
     throw err;
   }
 });

@@ -10,10 +10,18 @@ export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw
  * Issues a single-use token and returns it in the clear (for the e-mail only). Earlier unused
  * tokens of the same purpose for this user stop working.
  */
-export async function issueToken(userId: string, purpose: TokenPurpose, lifetimeMs: number, transaction?: Transaction): Promise<string> {
+export async function issueToken(
+  userId: string,
+  purpose: TokenPurpose,
+  lifetimeMs: number,
+  transaction?: Transaction,
+): Promise<string> {
   const raw = crypto.randomBytes(32).toString('base64url');
   await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
-  await AuthToken.create({ userId, purpose, tokenHash: hashToken(raw), expiresAt: new Date(Date.now() + lifetimeMs) }, { transaction });
+  await AuthToken.create(
+    { userId, purpose, tokenHash: hashToken(raw), expiresAt: new Date(Date.now() + lifetimeMs) },
+    { transaction },
+  );
   return raw;
 }
 
@@ -31,7 +39,8 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   const what = purpose === 'invitation' ? 'invitation link' : 'password reset link';
   if (!token) throw new HttpError(400, 'invalid_token', `This ${what} is not valid. Ask for a new one.`);
   if (token.usedAt) throw new HttpError(400, 'invalid_token', `This ${what} has already been used. Ask for a new one.`);
-  if (token.expiresAt.getTime() < Date.now()) throw new HttpError(400, 'invalid_token', `This ${what} has expired. Ask for a new one.`);
+  if (token.expiresAt.getTime() < Date.now())
+    throw new HttpError(400, 'invalid_token', `This ${what} has expired. Ask for a new one.`);
   const user = await User.findByPk(token.userId, { transaction });
   if (!user || !user.active) throw new HttpError(400, 'invalid_token', 'This account has been deactivated.');
   token.usedAt = new Date();

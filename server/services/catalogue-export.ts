@@ -9,7 +9,12 @@ import { safeCell } from './csv-safe.ts';
 const BATCH = 2000;
 
 /** Writes a header and then rows in batches read by id (keyset), so memory stays flat at any size. */
-async function writeInBatches<T extends { id: string }>(out: Writable, header: string[], fetch: (afterId: string) => Promise<T[]>, toCells: (row: T) => unknown[]): Promise<void> {
+async function writeInBatches<T extends { id: string }>(
+  out: Writable,
+  header: string[],
+  fetch: (afterId: string) => Promise<T[]>,
+  toCells: (row: T) => unknown[],
+): Promise<void> {
   // A byte-order mark lets spreadsheet programs open the file as UTF-8.
   out.write(`\uFEFF${stringify([header])}`);
   let after = '00000000-0000-0000-0000-000000000000';
@@ -28,12 +33,35 @@ async function writeInBatches<T extends { id: string }>(out: Writable, header: s
  * @param out the response (or any writable stream)
  */
 export async function exportObjectsCsv(out: Writable): Promise<void> {
-  type Row = { id: string; name: string; designations: string[]; kind: string; ra_deg: number | null; dec_deg: number | null; constellation: string | null; notes: string };
+  type Row = {
+    id: string;
+    name: string;
+    designations: string[];
+    kind: string;
+    ra_deg: number | null;
+    dec_deg: number | null;
+    constellation: string | null;
+    notes: string;
+  };
   await writeInBatches<Row>(
     out,
     ['name', 'designations', 'kind', 'ra_deg', 'dec_deg', 'ra_hms', 'dec_dms', 'constellation', 'notes'],
-    (after) => getSequelize().query<Row>('SELECT id, name, designations, kind, ra_deg, dec_deg, constellation, notes FROM sky_objects WHERE id > $1 ORDER BY id LIMIT $2', { type: QueryTypes.SELECT, bind: [after, BATCH] }),
-    (r) => [r.name, r.designations.join('; '), r.kind, r.ra_deg, r.dec_deg, r.ra_deg === null ? '' : formatRightAscension(r.ra_deg), r.dec_deg === null ? '' : formatDeclination(r.dec_deg), r.constellation, r.notes],
+    (after) =>
+      getSequelize().query<Row>(
+        'SELECT id, name, designations, kind, ra_deg, dec_deg, constellation, notes FROM sky_objects WHERE id > $1 ORDER BY id LIMIT $2',
+        { type: QueryTypes.SELECT, bind: [after, BATCH] },
+      ),
+    (r) => [
+      r.name,
+      r.designations.join('; '),
+      r.kind,
+      r.ra_deg,
+      r.dec_deg,
+      r.ra_deg === null ? '' : formatRightAscension(r.ra_deg),
+      r.dec_deg === null ? '' : formatDeclination(r.dec_deg),
+      r.constellation,
+      r.notes,
+    ],
   );
 }
 
@@ -44,10 +72,42 @@ export async function exportObjectsCsv(out: Writable): Promise<void> {
  * @param objectId only this object's measurements, when given
  */
 export async function exportMeasurementsCsv(out: Writable, objectId?: string): Promise<void> {
-  type Row = { id: string; object: string; quantity: string; band: string | null; value: number; uncertainty: number | null; uncertainty_minus: number | null; uncertainty_plus: number | null; citation: string | null; bibcode: string | null; doi: string | null; preferred: boolean; status: string; note: string; created_at: Date };
+  type Row = {
+    id: string;
+    object: string;
+    quantity: string;
+    band: string | null;
+    value: number;
+    uncertainty: number | null;
+    uncertainty_minus: number | null;
+    uncertainty_plus: number | null;
+    citation: string | null;
+    bibcode: string | null;
+    doi: string | null;
+    preferred: boolean;
+    status: string;
+    note: string;
+    created_at: Date;
+  };
   await writeInBatches<Row>(
     out,
-    ['object', 'quantity', 'value', 'unit', 'band', 'uncertainty', 'uncertainty_minus', 'uncertainty_plus', 'source', 'bibcode', 'doi', 'preferred', 'status', 'note', 'entered_at'],
+    [
+      'object',
+      'quantity',
+      'value',
+      'unit',
+      'band',
+      'uncertainty',
+      'uncertainty_minus',
+      'uncertainty_plus',
+      'source',
+      'bibcode',
+      'doi',
+      'preferred',
+      'status',
+      'note',
+      'entered_at',
+    ],
     (after) =>
       getSequelize().query<Row>(
         `SELECT m.id, o.name AS object, m.quantity, m.band, m.value, m.uncertainty, m.uncertainty_minus, m.uncertainty_plus,
@@ -57,6 +117,22 @@ export async function exportMeasurementsCsv(out: Writable, objectId?: string): P
          ORDER BY m.id LIMIT $2`,
         { type: QueryTypes.SELECT, bind: [after, BATCH, objectId ?? null] },
       ),
-    (r) => [r.object, r.quantity, r.value, findQuantity(r.quantity)?.canonicalUnit ?? '', r.band, r.uncertainty, r.uncertainty_minus, r.uncertainty_plus, r.citation, r.bibcode, r.doi, r.preferred ? 'yes' : 'no', r.status, r.note, new Date(r.created_at).toISOString()],
+    (r) => [
+      r.object,
+      r.quantity,
+      r.value,
+      findQuantity(r.quantity)?.canonicalUnit ?? '',
+      r.band,
+      r.uncertainty,
+      r.uncertainty_minus,
+      r.uncertainty_plus,
+      r.citation,
+      r.bibcode,
+      r.doi,
+      r.preferred ? 'yes' : 'no',
+      r.status,
+      r.note,
+      new Date(r.created_at).toISOString(),
+    ],
   );
 }

@@ -9,9 +9,12 @@ import { readCsvRows, type CsvRow } from './csv-rows.ts';
 import { findExistingDuplicates, lookUpObjects, lookUpSources } from './catalogue-import-lookup.ts';
 
 // In semicolon files the comma is the decimal mark (the convention of the locales that use them).
-const decimalComma = (text: string | undefined) => (text && /^[+-−]?\d+,\d+$/.test(text.trim()) ? text.trim().replace(',', '.') : text);
+const decimalComma = (text: string | undefined) =>
+  text && /^[+-−]?\d+,\d+$/.test(text.trim()) ? text.trim().replace(',', '.') : text;
 
-const distinct = (rows: CsvRow[], field: 'object' | 'source') => [...new Set(rows.map((r) => (r.cells[field] ?? '').trim()).filter(Boolean))];
+const distinct = (rows: CsvRow[], field: 'object' | 'source') => [
+  ...new Set(rows.map((r) => (r.cells[field] ?? '').trim()).filter(Boolean)),
+];
 
 /**
  * The dry run: reads the file, checks every row and stores the accepted ones under an import id,
@@ -20,11 +23,18 @@ const distinct = (rows: CsvRow[], field: 'object' | 'source') => [...new Set(row
  * @param mapping field → column header; guessed from the headers when absent
  * @throws HttpError 422 when the file cannot be read at all (empty, binary, not UTF-8, not CSV)
  */
-export async function checkCatalogueImport(file: { buffer: Buffer; originalname: string }, mapping: ImportMapping | undefined, actor: User): Promise<CatalogueImport> {
+export async function checkCatalogueImport(
+  file: { buffer: Buffer; originalname: string },
+  mapping: ImportMapping | undefined,
+  actor: User,
+): Promise<CatalogueImport> {
   const started = performance.now();
   const decoded = decodeCsv(file.buffer);
   const parsed = readCsvRows(decoded, mapping);
-  const [objects, sources] = await Promise.all([lookUpObjects(distinct(parsed.rows, 'object')), lookUpSources(distinct(parsed.rows, 'source'))]);
+  const [objects, sources] = await Promise.all([
+    lookUpObjects(distinct(parsed.rows, 'object')),
+    lookUpSources(distinct(parsed.rows, 'source')),
+  ]);
 
   const rejections: ImportRejection[] = [];
   const byReason: Partial<Record<ImportRejectionReason, number>> = {};
@@ -50,23 +60,64 @@ export async function checkCatalogueImport(file: { buffer: Buffer; originalname:
       note: cells.note,
     });
     const objectId = objects.get(objectText);
-    if (!objectText) { reject(row, 'unknown_object', 'The object cell is empty.'); continue; }
-    if (!objectId) { reject(row, 'unknown_object', `No object is named "${objectText}" (by name or designation). Add it to the catalogue first.`); continue; }
+    if (!objectText) {
+      reject(row, 'unknown_object', 'The object cell is empty.');
+      continue;
+    }
+    if (!objectId) {
+      reject(
+        row,
+        'unknown_object',
+        `No object is named "${objectText}" (by name or designation). Add it to the catalogue first.`,
+      );
+      continue;
+    }
     if (!result.success) {
       const first = result.error.issues[0];
-      const reason = ((first as { params?: { reason?: MeasurementProblem } }).params?.reason ?? (first.path[0] === 'note' ? 'too_long' : 'non_numeric_value')) as ImportRejectionReason;
+      const reason = ((first as { params?: { reason?: MeasurementProblem } }).params?.reason ??
+        (first.path[0] === 'note' ? 'too_long' : 'non_numeric_value')) as ImportRejectionReason;
       reject(row, reason, result.error.issues.map((i) => i.message).join(' '));
       continue;
     }
-    if (!sourceText) { reject(row, 'missing_source', 'The source cell is empty; every imported measurement needs its source (citation, bibcode or DOI).'); continue; }
+    if (!sourceText) {
+      reject(
+        row,
+        'missing_source',
+        'The source cell is empty; every imported measurement needs its source (citation, bibcode or DOI).',
+      );
+      continue;
+    }
     const sourceId = sources.get(sourceText);
-    if (!sourceId) { reject(row, 'unknown_source', `No source matches "${sourceText}". Add it under Sources first, then name it by its citation, bibcode or DOI.`); continue; }
+    if (!sourceId) {
+      reject(
+        row,
+        'unknown_source',
+        `No source matches "${sourceText}". Add it under Sources first, then name it by its citation, bibcode or DOI.`,
+      );
+      continue;
+    }
     const v = result.data;
     const key = `${objectId}|${v.quantity}|${v.band ?? ''}|${v.value}|${sourceId}`;
     const earlier = seen.get(key);
-    if (earlier !== undefined) { reject(row, 'duplicate', `Same object, quantity, band, value and source as row ${earlier}.`); continue; }
+    if (earlier !== undefined) {
+      reject(row, 'duplicate', `Same object, quantity, band, value and source as row ${earlier}.`);
+      continue;
+    }
     seen.set(key, row);
-    candidates.push({ row, objectId, sourceId, quantity: v.quantity, band: v.band, value: v.value, uncertainty: v.uncertainty, uncertaintyMinus: v.uncertaintyMinus, uncertaintyPlus: v.uncertaintyPlus, enteredValue: v.enteredValue, enteredUnit: v.enteredUnit, note: v.note });
+    candidates.push({
+      row,
+      objectId,
+      sourceId,
+      quantity: v.quantity,
+      band: v.band,
+      value: v.value,
+      uncertainty: v.uncertainty,
+      uncertaintyMinus: v.uncertaintyMinus,
+      uncertaintyPlus: v.uncertaintyPlus,
+      enteredValue: v.enteredValue,
+      enteredUnit: v.enteredUnit,
+      note: v.note,
+    });
   }
 
   const existing = await findExistingDuplicates(candidates);
@@ -100,7 +151,12 @@ export async function checkCatalogueImport(file: { buffer: Buffer; originalname:
  * Stores the report and accepted rows. The rows go in as one JSON text parameter: Sequelize's own
  * JSON escaping takes seconds for 50,000 rows, the driver's parameter takes milliseconds.
  */
-async function storeCheckedImport(actorId: string, fileName: string, report: ImportReport, accepted: AcceptedImportRow[]): Promise<CatalogueImport> {
+async function storeCheckedImport(
+  actorId: string,
+  fileName: string,
+  report: ImportReport,
+  accepted: AcceptedImportRow[],
+): Promise<CatalogueImport> {
   const [[row]] = (await getSequelize().query(
     `INSERT INTO catalogue_imports (id, created_by_id, file_name, status, report, accepted_rows, created_at, updated_at)
      VALUES (gen_random_uuid(), $1, $2, 'checked', $3::jsonb, $4::jsonb, now(), now()) RETURNING id`,
@@ -112,7 +168,11 @@ async function storeCheckedImport(actorId: string, fileName: string, report: Imp
 
 function warningsFor(delimiter: string, rejected: number): string[] {
   const warnings: string[] = [];
-  if (delimiter === ';') warnings.push('Columns are separated by semicolons, so a comma in a number was read as the decimal mark (0,158 = 0.158).');
-  if (rejected > CatalogueLimits.importReportedRejectionsMax) warnings.push(`Only the first ${CatalogueLimits.importReportedRejectionsMax} rejected rows are listed; the counts by reason cover all ${rejected}.`);
+  if (delimiter === ';')
+    warnings.push('Columns are separated by semicolons, so a comma in a number was read as the decimal mark (0,158 = 0.158).');
+  if (rejected > CatalogueLimits.importReportedRejectionsMax)
+    warnings.push(
+      `Only the first ${CatalogueLimits.importReportedRejectionsMax} rejected rows are listed; the counts by reason cover all ${rejected}.`,
+    );
   return warnings;
 }

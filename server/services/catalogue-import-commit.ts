@@ -15,7 +15,11 @@ const RECORDSET = `jsonb_to_recordset(ci.accepted_rows) AS r(
  * @returns the import and how many measurements were inserted
  * @throws HttpError 409 (already_committed, catalogue_changed)
  */
-export async function commitCatalogueImport(importId: string, actor: User, ip?: string): Promise<{ record: CatalogueImport; inserted: number }> {
+export async function commitCatalogueImport(
+  importId: string,
+  actor: User,
+  ip?: string,
+): Promise<{ record: CatalogueImport; inserted: number }> {
   const sequelize = getSequelize();
   let inserted = 0;
   try {
@@ -23,9 +27,14 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
       // A bulk commit of up to 100,000 rows may outlast the 15 s limit meant for ordinary requests.
       await sequelize.query("SET LOCAL statement_timeout = '120s'", { transaction });
       // The rows stay in the database: they are read by the INSERT below, never into Node.
-      const record = await CatalogueImport.findByPk(importId, { attributes: { exclude: ['acceptedRows'] }, transaction, lock: transaction.LOCK.UPDATE });
+      const record = await CatalogueImport.findByPk(importId, {
+        attributes: { exclude: ['acceptedRows'] },
+        transaction,
+        lock: transaction.LOCK.UPDATE,
+      });
       if (!record) throw ConflictError('This import no longer exists; upload the file again.', 'import_missing');
-      if (record.status === 'committed') throw ConflictError('This file has already been imported; nothing was added twice.', 'already_committed');
+      if (record.status === 'committed')
+        throw ConflictError('This file has already been imported; nothing was added twice.', 'already_committed');
 
       const [{ duplicates }] = await sequelize.query<{ duplicates: string }>(
         `SELECT count(*) AS duplicates FROM catalogue_imports ci, ${RECORDSET}
@@ -35,7 +44,10 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
         { type: QueryTypes.SELECT, bind: [importId], transaction },
       );
       if (Number(duplicates) > 0) {
-        throw ConflictError(`Since the dry run, ${duplicates} of these rows have been added by someone else. Check the file again before importing.`, 'catalogue_changed');
+        throw ConflictError(
+          `Since the dry run, ${duplicates} of these rows have been added by someone else. Check the file again before importing.`,
+          'catalogue_changed',
+        );
       }
 
       const [, insertedCount] = (await sequelize.query(
@@ -59,7 +71,17 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
       );
       record.set({ status: 'committed', committedAt: new Date(), acceptedRows: null });
       await record.save({ transaction });
-      await recordAudit({ actorId: actor.id, action: 'catalogue.import_committed', subjectType: 'catalogue_import', subjectId: record.id, data: { fileName: record.fileName, inserted }, ip }, transaction);
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'catalogue.import_committed',
+          subjectType: 'catalogue_import',
+          subjectId: record.id,
+          data: { fileName: record.fileName, inserted },
+          ip,
+        },
+        transaction,
+      );
       return record;
     });
     // No events: imported measurements are new and never preferred, so nothing that listens
@@ -68,7 +90,10 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
     return { record, inserted };
   } catch (error) {
     if (error instanceof ForeignKeyConstraintError) {
-      throw ConflictError('An object or source named in this file was deleted after the dry run. Check the file again; nothing was imported.', 'catalogue_changed');
+      throw ConflictError(
+        'An object or source named in this file was deleted after the dry run. Check the file again; nothing was imported.',
+        'catalogue_changed',
+      );
     }
     throw error;
   }

@@ -2,7 +2,12 @@ import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../db.ts';
 
 /** Normalises a DOI as typed in a cell ("https://doi.org/10.…", "doi:10.…") to the bare "10.…". */
-export const bareDoi = (text: string) => text.trim().replace(/^https?:\/\/(dx\.)?doi\.org\//i, '').replace(/^doi:\s*/i, '').toLowerCase();
+export const bareDoi = (text: string) =>
+  text
+    .trim()
+    .replace(/^https?:\/\/(dx\.)?doi\.org\//i, '')
+    .replace(/^doi:\s*/i, '')
+    .toLowerCase();
 
 /**
  * Finds the objects named in a file: by name (ignoring case) or by an exact designation.

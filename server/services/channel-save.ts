@@ -11,7 +11,10 @@ import { publishingEvents } from './publishing-events.ts';
  * feed caches compare it) and, after commit, this instance's caches hear the event.
  */
 export async function touchChannel(channelId: string, transaction: Transaction): Promise<void> {
-  await getSequelize().query('UPDATE channels SET version = version + 1, updated_at = now() WHERE id = :channelId', { replacements: { channelId }, transaction });
+  await getSequelize().query('UPDATE channels SET version = version + 1, updated_at = now() WHERE id = :channelId', {
+    replacements: { channelId },
+    transaction,
+  });
   transaction.afterCommit(() => void publishingEvents.emit('channelChanged', { channelId }));
 }
 
@@ -22,8 +25,12 @@ export async function lockChannel(channelId: string, transaction: Transaction): 
 
 async function assertNameFree(venueId: string, name: string, exceptId: string | null, transaction: Transaction): Promise<void> {
   const sequelize = getSequelize();
-  const clash = await Channel.findOne({ where: sequelize.and({ venueId }, sequelize.where(sequelize.fn('lower', sequelize.col('name')), name.toLowerCase())), transaction });
-  if (clash && clash.id !== exceptId) throw ConflictError(`This venue already has a channel called "${clash.name}".`, 'channel_name_taken');
+  const clash = await Channel.findOne({
+    where: sequelize.and({ venueId }, sequelize.where(sequelize.fn('lower', sequelize.col('name')), name.toLowerCase())),
+    transaction,
+  });
+  if (clash && clash.id !== exceptId)
+    throw ConflictError(`This venue already has a channel called "${clash.name}".`, 'channel_name_taken');
 }
 
 /**
@@ -36,7 +43,17 @@ export async function createChannel(input: ChannelCreateInput, actor: User, ip?:
     if (!venue) throw ValidationError('There is no such venue.', { venueId: 'There is no such venue' });
     await assertNameFree(venue.id, input.name, null, transaction);
     const channel = await Channel.create({ venueId: venue.id, name: input.name, createdById: actor.id }, { transaction });
-    await recordAudit({ actorId: actor.id, action: 'channel.created', subjectType: 'channel', subjectId: channel.id, data: { venueId: venue.id, name: input.name }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'channel.created',
+        subjectType: 'channel',
+        subjectId: channel.id,
+        data: { venueId: venue.id, name: input.name },
+        ip,
+      },
+      transaction,
+    );
     return channel;
   });
 }
@@ -51,7 +68,17 @@ export async function updateChannel(channel: Channel, input: ChannelUpdateInput,
     await assertNameFree(row.venueId, input.name, row.id, transaction);
     await row.update({ name: input.name }, { transaction });
     await touchChannel(row.id, transaction);
-    await recordAudit({ actorId: actor.id, action: 'channel.renamed', subjectType: 'channel', subjectId: row.id, data: { from: channel.name, to: input.name }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'channel.renamed',
+        subjectType: 'channel',
+        subjectId: row.id,
+        data: { from: channel.name, to: input.name },
+        ip,
+      },
+      transaction,
+    );
   });
   return channel.reload();
 }
@@ -59,7 +86,17 @@ export async function updateChannel(channel: Channel, input: ChannelUpdateInput,
 /** Removes a channel with its slides; its screens show the holding screen until given another. */
 export async function deleteChannel(channel: Channel, actor: User, ip?: string): Promise<void> {
   await getSequelize().transaction(async (transaction) => {
-    await recordAudit({ actorId: actor.id, action: 'channel.deleted', subjectType: 'channel', subjectId: channel.id, data: { venueId: channel.venueId, name: channel.name }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'channel.deleted',
+        subjectType: 'channel',
+        subjectId: channel.id,
+        data: { venueId: channel.venueId, name: channel.name },
+        ip,
+      },
+      transaction,
+    );
     await channel.destroy({ transaction });
     transaction.afterCommit(() => void publishingEvents.emit('channelChanged', { channelId: channel.id }));
   });

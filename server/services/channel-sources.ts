@@ -12,15 +12,29 @@ const LIST_MAX = 300;
  */
 export async function loadSlideSources(): Promise<SlideSourcesDto> {
   const [pages, media] = await Promise.all([
-    Page.findAll({ where: { publishedSnapshot: { [Op.ne]: null } }, attributes: ['id', 'title', 'skyObjectId', 'publishedSnapshot'], order: [['title', 'ASC']], limit: LIST_MAX }),
+    Page.findAll({
+      where: { publishedSnapshot: { [Op.ne]: null } },
+      attributes: ['id', 'title', 'skyObjectId', 'publishedSnapshot'],
+      order: [['title', 'ASC']],
+      limit: LIST_MAX,
+    }),
     Media.findAll({
-      where: { credit: { [Op.ne]: '' }, licenceId: { [Op.ne]: null }, sourceUrl: { [Op.ne]: '' }, altText: { [Op.ne]: '' }, renditionsStatus: 'ready' },
+      where: {
+        credit: { [Op.ne]: '' },
+        licenceId: { [Op.ne]: null },
+        sourceUrl: { [Op.ne]: '' },
+        altText: { [Op.ne]: '' },
+        renditionsStatus: 'ready',
+      },
       include: [{ model: MediaRendition, as: 'renditions', where: { name: 'thumbnail' }, required: false }],
       order: [['updatedAt', 'DESC']],
       limit: LIST_MAX,
     }),
   ]);
-  const objects = await SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(pages.map((p) => p.skyObjectId))] } }, attributes: ['id', 'name'] });
+  const objects = await SkyObject.findAll({
+    where: { id: { [Op.in]: [...new Set(pages.map((p) => p.skyObjectId))] } },
+    attributes: ['id', 'name'],
+  });
   const objectName = new Map(objects.map((o) => [o.id, o.name]));
   return {
     pages: pages.map((p) => ({
@@ -32,7 +46,13 @@ export async function loadSlideSources(): Promise<SlideSourcesDto> {
     })),
     media: media.map((m) => {
       const thumb = m.renditions?.find((r) => r.format === 'jpeg') ?? m.renditions?.[0];
-      return { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText, credit: m.credit, licence: findLicence(m.licenceId)?.label ?? '' };
+      return {
+        id: m.id,
+        thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null,
+        altText: m.altText,
+        credit: m.credit,
+        licence: findLicence(m.licenceId)?.label ?? '',
+      };
     }),
   };
 }

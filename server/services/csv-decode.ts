@@ -53,20 +53,32 @@ export function detectDelimiter(text: string): ',' | ';' | '\t' {
  * @throws HttpError 422 (empty_file, binary_file, not_utf8)
  */
 export function decodeCsv(buffer: Buffer): DecodedCsv {
-  if (buffer.length === 0) throw refuse('empty_file', 'The file is empty. Choose a CSV file with a header row and at least one row of measurements.');
+  if (buffer.length === 0)
+    throw refuse('empty_file', 'The file is empty. Choose a CSV file with a header row and at least one row of measurements.');
   const binary = looksBinary(buffer);
-  if (binary) throw refuse('binary_file', `This file is ${binary}, not CSV text. In your spreadsheet use "Save as" and choose "CSV UTF-8", then upload that file.`);
+  if (binary)
+    throw refuse(
+      'binary_file',
+      `This file is ${binary}, not CSV text. In your spreadsheet use "Save as" and choose "CSV UTF-8", then upload that file.`,
+    );
   let text: string;
   try {
     text = new TextDecoder('utf-8', { fatal: true }).decode(buffer);
   } catch {
     const offset = firstInvalidUtf8(buffer);
     const line = buffer.subarray(0, offset).toString('latin1').split('\n').length;
-    throw refuse('not_utf8', `This file is not UTF-8 text (the first unreadable character is on line ${line}). It was probably saved as "CSV" in a Western or Windows encoding. Save it again as "CSV UTF-8" and upload it again; nothing was imported.`);
+    throw refuse(
+      'not_utf8',
+      `This file is not UTF-8 text (the first unreadable character is on line ${line}). It was probably saved as "CSV" in a Western or Windows encoding. Save it again as "CSV UTF-8" and upload it again; nothing was imported.`,
+    );
   }
   // TextDecoder drops a UTF-8 byte-order mark by default; note that there was one.
   const hadByteOrderMark = buffer[0] === 0xef && buffer[1] === 0xbb && buffer[2] === 0xbf;
-  if (text.trim() === '') throw refuse('empty_file', 'The file has no text in it. Choose a CSV file with a header row and at least one row of measurements.');
+  if (text.trim() === '')
+    throw refuse(
+      'empty_file',
+      'The file has no text in it. Choose a CSV file with a header row and at least one row of measurements.',
+    );
   return { text, hadByteOrderMark, delimiter: detectDelimiter(text) };
 }
 

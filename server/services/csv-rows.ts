@@ -33,7 +33,11 @@ export function resolveMapping(headers: string[], given: ImportMapping | undefin
   if (given && Object.keys(given).length > 0) {
     for (const [field, header] of Object.entries(given)) {
       if (header && !headers.includes(header)) {
-        throw new HttpError(400, 'invalid_mapping', `The column "${header}" chosen for ${field} is not in the file. Its columns are: ${headers.join(', ')}.`);
+        throw new HttpError(
+          400,
+          'invalid_mapping',
+          `The column "${header}" chosen for ${field} is not in the file. Its columns are: ${headers.join(', ')}.`,
+        );
       }
     }
     return Object.fromEntries(Object.entries(given).filter(([, h]) => h)) as ImportMapping;
@@ -51,13 +55,25 @@ export function resolveMapping(headers: string[], given: ImportMapping | undefin
  * blank lines are skipped but still counted, so row numbers match what a spreadsheet shows.
  * @throws HttpError 422 when the text is not CSV, has no data rows, lacks required columns or is too long
  */
-export function readCsvRows(decoded: DecodedCsv, given: ImportMapping | undefined): { headers: string[]; mapping: ImportMapping; rows: CsvRow[] } {
+export function readCsvRows(
+  decoded: DecodedCsv,
+  given: ImportMapping | undefined,
+): { headers: string[]; mapping: ImportMapping; rows: CsvRow[] } {
   let records: string[][];
   try {
-    records = parse(decoded.text, { delimiter: decoded.delimiter, bom: true, relax_column_count: true, skip_empty_lines: false, trim: true }) as string[][];
+    records = parse(decoded.text, {
+      delimiter: decoded.delimiter,
+      bom: true,
+      relax_column_count: true,
+      skip_empty_lines: false,
+      trim: true,
+    }) as string[][];
   } catch (error) {
     const detail = error instanceof Error ? error.message.replace(/^Invalid Record Length: /, '') : 'unreadable';
-    throw refuse('malformed_csv', `The file could not be read as CSV: ${detail}. Check for a quote (") that is opened but never closed.`);
+    throw refuse(
+      'malformed_csv',
+      `The file could not be read as CSV: ${detail}. Check for a quote (") that is opened but never closed.`,
+    );
   }
   const headerIndex = records.findIndex((r) => r.some((c) => c !== ''));
   if (headerIndex < 0) throw refuse('empty_file', 'The file has no header row.');
@@ -65,9 +81,14 @@ export function readCsvRows(decoded: DecodedCsv, given: ImportMapping | undefine
   const mapping = resolveMapping(headers, given);
   const missing = (['object', 'quantity', 'value'] as const).filter((f) => !mapping[f]);
   if (missing.length) {
-    throw refuse('missing_columns', `No column was found for ${missing.join(', ')}. The file's columns are: ${headers.join(', ') || '(none)'}. Name the columns object, quantity, value, unit, band, uncertainty and source, or choose them below.`);
+    throw refuse(
+      'missing_columns',
+      `No column was found for ${missing.join(', ')}. The file's columns are: ${headers.join(', ') || '(none)'}. Name the columns object, quantity, value, unit, band, uncertainty and source, or choose them below.`,
+    );
   }
-  const columnOf = Object.fromEntries(Object.entries(mapping).map(([field, header]) => [field, headers.indexOf(header!)])) as Partial<Record<ImportField, number>>;
+  const columnOf = Object.fromEntries(
+    Object.entries(mapping).map(([field, header]) => [field, headers.indexOf(header!)]),
+  ) as Partial<Record<ImportField, number>>;
   const rows: CsvRow[] = [];
   for (let i = headerIndex + 1; i < records.length; i += 1) {
     const record = records[i];
@@ -76,7 +97,10 @@ export function readCsvRows(decoded: DecodedCsv, given: ImportMapping | undefine
     for (const [field, index] of Object.entries(columnOf)) cells[field as ImportField] = record[index!] ?? '';
     rows.push({ row: i + 1, cells });
     if (rows.length > CatalogueLimits.importMaxRows) {
-      throw refuse('too_many_rows', `The file has more than ${CatalogueLimits.importMaxRows.toLocaleString('en-GB')} rows. Split it into smaller files and import them one after another.`);
+      throw refuse(
+        'too_many_rows',
+        `The file has more than ${CatalogueLimits.importMaxRows.toLocaleString('en-GB')} rows. Split it into smaller files and import them one after another.`,
+      );
     }
   }
   if (rows.length === 0) throw refuse('no_rows', 'The file has a header row but no measurements under it.');

@@ -1,5 +1,11 @@
 import { Op } from 'sequelize';
-import { FEED_EXTENSION_VERSION, JSON_FEED_VERSION, type FeedItem, type FeedSlide, type KioskFeed } from '@shared/schemas/kiosk-feed.ts';
+import {
+  FEED_EXTENSION_VERSION,
+  JSON_FEED_VERSION,
+  type FeedItem,
+  type FeedSlide,
+  type KioskFeed,
+} from '@shared/schemas/kiosk-feed.ts';
 import { localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
 import { NotFoundError } from '../errors.ts';
 import { Channel, ChannelSlide, Page, Venue } from '../models/index.ts';
@@ -29,7 +35,9 @@ export const inWindow = (slide: Pick<ChannelSlide, 'startsAt' | 'endsAt'>, now: 
   (!slide.startsAt || slide.startsAt.getTime() <= now) && (!slide.endsAt || slide.endsAt.getTime() > now);
 
 const imageParts = (img: PublishedImage | undefined) =>
-  img ? { credit: img.credit, licence: img.licence, licence_url: img.licenceUrl, image: img.image } : { credit: null, licence: null, licence_url: null, image: null };
+  img
+    ? { credit: img.credit, licence: img.licence, licence_url: img.licenceUrl, image: img.image }
+    : { credit: null, licence: null, licence_url: null, image: null };
 
 const figureHtml = (img: PublishedImage) =>
   `<figure><img src="${e(img.image.hd)}" alt="${e(img.image.alt)}"><figcaption>${e(img.credit)} · ${e(img.licence)}</figcaption></figure>`;
@@ -53,12 +61,15 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   const pageIds = [...new Set(slides.flatMap((s) => (s.pageId ? [s.pageId] : [])))];
   const statementIds = [...new Set(slides.flatMap((s) => s.statementIds ?? []))];
   const [pages, statements] = await Promise.all([
-    pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'locale', 'publishedSnapshot'] }) : [],
+    pageIds.length
+      ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'locale', 'publishedSnapshot'] })
+      : [],
     publicStatements(statementIds),
   ]);
   const live = new Map(pages.filter((p) => p.publishedSnapshot).map((p) => [p.id, p.publishedSnapshot!]));
   const pageLocales = new Map(pages.map((p) => [p.id, p.locale]));
-  const imageOf = (s: ChannelSlide) => (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
+  const imageOf = (s: ChannelSlide) =>
+    (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
   const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
   const images = await loadPublishedImages(mediaIds);
 
@@ -77,7 +88,13 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
 
   const items: FeedItem[] = [];
   for (const s of active) {
-    const base = { kind: s.kind, position: s.position, duration_s: s.durationS, starts_at: s.startsAt?.toISOString() ?? null, ends_at: s.endsAt?.toISOString() ?? null };
+    const base = {
+      kind: s.kind,
+      position: s.position,
+      duration_s: s.durationS,
+      starts_at: s.startsAt?.toISOString() ?? null,
+      ends_at: s.endsAt?.toISOString() ?? null,
+    };
     const img = images.get(imageOf(s) ?? '');
     if (s.kind === 'page') {
       const snapshot = live.get(s.pageId!);
@@ -89,22 +106,54 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       const text = firstParagraphText(shown.html);
       const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
-      items.push({ id: s.id, title: snapshot.title, content_html: html, ...(img ? { image: img.image.hd } : {}), date_published: snapshot.publishedAt ?? snapshot.signedOffAt, _starproof: { slide } });
+      items.push({
+        id: s.id,
+        title: snapshot.title,
+        content_html: html,
+        ...(img ? { image: img.image.hd } : {}),
+        date_published: snapshot.publishedAt ?? snapshot.signedOffAt,
+        _starproof: { slide },
+      });
     } else if (s.kind === 'image') {
       if (!img) continue; // no picture goes up without its credit and licence
       const slide: FeedSlide = { ...base, layout: 'image', text: s.caption, statements: [], ...imageParts(img) };
-      items.push({ id: s.id, title: s.caption, content_html: `${figureHtml(img)}${s.caption ? `<p>${e(s.caption)}</p>` : ''}`, image: img.image.hd, date_published: s.createdAt.toISOString(), date_modified: img.updatedAt.toISOString(), _starproof: { slide } });
+      items.push({
+        id: s.id,
+        title: s.caption,
+        content_html: `${figureHtml(img)}${s.caption ? `<p>${e(s.caption)}</p>` : ''}`,
+        image: img.image.hd,
+        date_published: s.createdAt.toISOString(),
+        date_modified: img.updatedAt.toISOString(),
+        _starproof: { slide },
+      });
     } else if (sky) {
       const table = feedSky(sky.data, sky.computedAt, venue.name);
-      const slide: FeedSlide = { ...base, layout: 'sky-table', text: `Tonight from ${venue.name}`, statements: [], credit: null, licence: null, licence_url: null, image: null };
-      items.push({ id: s.id, title: 'The sky tonight', content_html: skyHtml(table), date_published: sky.computedAt.toISOString(), _starproof: { slide, sky: table } });
+      const slide: FeedSlide = {
+        ...base,
+        layout: 'sky-table',
+        text: `Tonight from ${venue.name}`,
+        statements: [],
+        credit: null,
+        licence: null,
+        licence_url: null,
+        image: null,
+      };
+      items.push({
+        id: s.id,
+        title: 'The sky tonight',
+        content_html: skyHtml(table),
+        date_published: sky.computedAt.toISOString(),
+        _starproof: { slide, sky: table },
+      });
     }
   }
 
   const feed: KioskFeed = {
     version: JSON_FEED_VERSION,
     title: channel ? `${channel.name} · ${venue.name}` : venue.name,
-    description: channel ? `Kiosk channel "${channel.name}" at ${venue.name}` : `No channel is assigned to this screen at ${venue.name} yet`,
+    description: channel
+      ? `Kiosk channel "${channel.name}" at ${venue.name}`
+      : `No channel is assigned to this screen at ${venue.name} yet`,
     items,
     _starproof: {
       version: FEED_EXTENSION_VERSION,
@@ -115,5 +164,9 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       holding: items.length === 0,
     },
   };
-  return { feed, deps: { channelId: channel?.id ?? null, venueId: venue.id, pageIds, statementIds, mediaIds, skyDate }, validUntil };
+  return {
+    feed,
+    deps: { channelId: channel?.id ?? null, venueId: venue.id, pageIds, statementIds, mediaIds, skyDate },
+    validUntil,
+  };
 }

@@ -64,7 +64,12 @@ async function build(target: FeedTarget, previous: CachedFeed | undefined): Prom
   }
 }
 
-async function refresh(key: string, target: FeedTarget, previous: CachedFeed | undefined, checkOnly: boolean): Promise<CachedFeed> {
+async function refresh(
+  key: string,
+  target: FeedTarget,
+  previous: CachedFeed | undefined,
+  checkOnly: boolean,
+): Promise<CachedFeed> {
   if (checkOnly && previous) {
     stats.checks += 1;
     const now = Date.now();

@@ -47,5 +47,7 @@ export async function feedFingerprint(deps: FeedDeps): Promise<string> {
       },
     },
   );
-  return createHash('sha256').update(rows.map((r) => r.k).join('\n')).digest('hex');
+  return createHash('sha256')
+    .update(rows.map((r) => r.k).join('\n'))
+    .digest('hex');
 }

@@ -44,7 +44,12 @@ export async function loadPublishedImages(mediaIds: string[]): Promise<Map<strin
     const page = jpegOf(renditions, 'page');
     found.set(m.id, {
       id: m.id,
-      image: { hd: renditionUrl(hd.storageKey), uhd: renditionUrl(uhd.storageKey), focal: { x: m.focalX, y: m.focalY }, alt: m.altText },
+      image: {
+        hd: renditionUrl(hd.storageKey),
+        uhd: renditionUrl(uhd.storageKey),
+        focal: { x: m.focalX, y: m.focalY },
+        alt: m.altText,
+      },
       pageUrl: page ? renditionUrl(page.storageKey) : null,
       credit: m.credit,
       licence: licence.label,

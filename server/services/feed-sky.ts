@@ -61,7 +61,10 @@ export function feedSky(sky: SkyTonight, computedAt: Date, venueName: string): F
 export function skyHtml(sky: FeedSky): string {
   const e = escapeMarkup;
   const rows = sky.planets
-    .map((p) => `<tr><th scope="row">${e(p.name)}</th><td>${e(p.up_after_dusk ? 'Yes' : 'No')}</td><td>${e(p.rise)}</td><td>${e(p.highest)}</td><td>${e(p.set)}</td><td>${e(p.distance)}</td><td>${e(p.light_time)}</td></tr>`)
+    .map(
+      (p) =>
+        `<tr><th scope="row">${e(p.name)}</th><td>${e(p.up_after_dusk ? 'Yes' : 'No')}</td><td>${e(p.rise)}</td><td>${e(p.highest)}</td><td>${e(p.set)}</td><td>${e(p.distance)}</td><td>${e(p.light_time)}</td></tr>`,
+    )
     .join('');
   return (
     `<p>Sunset ${e(sky.sunset)}. Dark from ${e(sky.dark_from)}. Moon: ${e(sky.moon.phase)}, ${sky.moon.illuminated_percent}% lit.</p>` +

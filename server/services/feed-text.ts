@@ -13,7 +13,10 @@ export function escapeMarkup(value: string): string {
  */
 export function xmlSafe(value: string): string {
   // eslint-disable-next-line no-control-regex
-  return value.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g, '');
+  return value.replace(
+    /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g,
+    '',
+  );
 }
 
 const NAMED: Record<string, string> = { amp: '&', lt: '<', gt: '>', quot: '"', apos: "'", nbsp: '\u00A0' };
@@ -35,7 +38,9 @@ export function decodeEntities(value: string): string {
  */
 export function firstParagraphText(html: string, max = 240): string {
   const match = /<p[\s>][\s\S]*?<\/p>/i.exec(html);
-  const text = decodeEntities((match?.[0] ?? '').replace(/<[^>]*>/g, '')).replace(/\s+/g, ' ').trim();
+  const text = decodeEntities((match?.[0] ?? '').replace(/<[^>]*>/g, ''))
+    .replace(/\s+/g, ' ')
+    .trim();
   if (text.length <= max) return text;
   const cut = text.slice(0, max - 1);
   const space = cut.lastIndexOf(' ');

@@ -22,15 +22,30 @@ export function newPairingCode(): { display: string; normalised: string } {
  * working until the code is used (or the screen is revoked).
  * @returns the code to show once, and when it expires
  */
-export async function issuePairingCode(screen: KioskScreen, actor: User, ip?: string): Promise<{ code: string; expiresAt: Date }> {
+export async function issuePairingCode(
+  screen: KioskScreen,
+  actor: User,
+  ip?: string,
+): Promise<{ code: string; expiresAt: Date }> {
   return getSequelize().transaction(async (transaction) => {
     let code = newPairingCode();
     // A clash with another screen's code (1 in ~900 million) just draws again.
-    while (await KioskScreen.findOne({ where: { pairingCodeHash: hashToken(code.normalised) }, transaction })) code = newPairingCode();
+    while (await KioskScreen.findOne({ where: { pairingCodeHash: hashToken(code.normalised) }, transaction }))
+      code = newPairingCode();
     const expiresAt = new Date(Date.now() + KioskLimits.pairingCodeMinutes * 60_000);
     screen.set({ pairingCodeHash: hashToken(code.normalised), pairingExpiresAt: expiresAt });
     await screen.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'kiosk.pairing_code_issued', subjectType: 'kiosk_screen', subjectId: screen.id, data: { venueId: screen.venueId }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'kiosk.pairing_code_issued',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { venueId: screen.venueId },
+        ip,
+      },
+      transaction,
+    );
     return { code: code.display, expiresAt };
   });
 }
@@ -43,16 +58,50 @@ export async function issuePairingCode(screen: KioskScreen, actor: User, ip?: st
  */
 export async function pairScreen(code: string, ip?: string): Promise<{ token: string; screen: KioskScreen; venue: Venue }> {
   return getSequelize().transaction(async (transaction) => {
-    const screen = await KioskScreen.findOne({ where: { pairingCodeHash: hashToken(code) }, lock: transaction.LOCK.UPDATE, transaction });
-    if (!screen) throw new HttpError(400, 'pairing_code_unknown', 'No screen is waiting for this pairing code. Check the code, or ask an admin for a new one.');
-    if (!screen.pairingExpiresAt) throw new HttpError(400, 'pairing_code_used', 'This pairing code has already been used. Ask an admin to re-pair the screen for a new code.');
+    const screen = await KioskScreen.findOne({
+      where: { pairingCodeHash: hashToken(code) },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!screen)
+      throw new HttpError(
+        400,
+        'pairing_code_unknown',
+        'No screen is waiting for this pairing code. Check the code, or ask an admin for a new one.',
+      );
+    if (!screen.pairingExpiresAt)
+      throw new HttpError(
+        400,
+        'pairing_code_used',
+        'This pairing code has already been used. Ask an admin to re-pair the screen for a new code.',
+      );
     if (screen.pairingExpiresAt.getTime() < Date.now()) {
-      throw new HttpError(400, 'pairing_code_expired', `This pairing code has expired (codes last ${KioskLimits.pairingCodeMinutes} minutes). Ask an admin for a new one.`);
+      throw new HttpError(
+        400,
+        'pairing_code_expired',
+        `This pairing code has expired (codes last ${KioskLimits.pairingCodeMinutes} minutes). Ask an admin for a new one.`,
+      );
     }
     const token = `spk_${crypto.randomBytes(32).toString('base64url')}`;
-    screen.set({ tokenHash: hashToken(token), tokenIssuedAt: new Date(), pairingExpiresAt: null, revokedAt: null, lastSeenAt: new Date() });
+    screen.set({
+      tokenHash: hashToken(token),
+      tokenIssuedAt: new Date(),
+      pairingExpiresAt: null,
+      revokedAt: null,
+      lastSeenAt: new Date(),
+    });
     await screen.save({ transaction });
-    await recordAudit({ actorId: null, action: 'kiosk.paired', subjectType: 'kiosk_screen', subjectId: screen.id, data: { venueId: screen.venueId }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: null,
+        action: 'kiosk.paired',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { venueId: screen.venueId },
+        ip,
+      },
+      transaction,
+    );
     const venue = (await Venue.findByPk(screen.venueId, { transaction }))!;
     return { token, screen, venue };
   });
@@ -63,7 +112,17 @@ export async function revokeScreen(screen: KioskScreen, actor: User, ip?: string
   await getSequelize().transaction(async (transaction) => {
     screen.set({ tokenHash: null, revokedAt: new Date(), pairingCodeHash: null, pairingExpiresAt: null });
     await screen.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'kiosk.revoked', subjectType: 'kiosk_screen', subjectId: screen.id, data: { venueId: screen.venueId }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'kiosk.revoked',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { venueId: screen.venueId },
+        ip,
+      },
+      transaction,
+    );
     transaction.afterCommit(() => void publishingEvents.emit('screenRevoked', { screenId: screen.id }));
   });
   return screen;

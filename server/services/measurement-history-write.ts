@@ -22,7 +22,10 @@ export function snapshotMeasurement(m: Measurement): MeasurementSnapshot {
 }
 
 /** Keeps only the fields that differ, so a history row reads as "what changed". */
-export function changedFields(before: MeasurementSnapshot, after: MeasurementSnapshot): { old: MeasurementSnapshot; new: MeasurementSnapshot } {
+export function changedFields(
+  before: MeasurementSnapshot,
+  after: MeasurementSnapshot,
+): { old: MeasurementSnapshot; new: MeasurementSnapshot } {
   const old: MeasurementSnapshot = {};
   const next: MeasurementSnapshot = {};
   for (const key of Object.keys(after)) {
@@ -40,7 +43,14 @@ export function changedFields(before: MeasurementSnapshot, after: MeasurementSna
  * @param transaction the transaction that makes the change
  */
 export async function recordMeasurementHistory(
-  props: { measurement: Measurement; action: MeasurementHistoryAction; actorId: string | null; reason?: string | null; old: MeasurementSnapshot | null; new: MeasurementSnapshot | null },
+  props: {
+    measurement: Measurement;
+    action: MeasurementHistoryAction;
+    actorId: string | null;
+    reason?: string | null;
+    old: MeasurementSnapshot | null;
+    new: MeasurementSnapshot | null;
+  },
   transaction: Transaction,
 ): Promise<void> {
   await MeasurementHistory.create(

@@ -20,14 +20,20 @@ function label(m: Measurement): string {
 }
 
 const raceLost = (m: Measurement) =>
-  ConflictError(`Another reviewer has just chosen the preferred ${label(m)} for this object. Reload the page to see their choice before changing it.`, 'preferred_changed');
+  ConflictError(
+    `Another reviewer has just chosen the preferred ${label(m)} for this object. Reload the page to see their choice before changing it.`,
+    'preferred_changed',
+  );
 
 async function setFlag(m: Measurement, preferred: boolean, actor: User, transaction: Transaction) {
   const before = snapshotMeasurement(m);
   m.set({ preferred });
   await m.save({ transaction });
   const diff = changedFields(before, snapshotMeasurement(m));
-  await recordMeasurementHistory({ measurement: m, action: preferred ? 'preferred' : 'unpreferred', actorId: actor.id, old: diff.old, new: diff.new }, transaction);
+  await recordMeasurementHistory(
+    { measurement: m, action: preferred ? 'preferred' : 'unpreferred', actorId: actor.id, old: diff.old, new: diff.new },
+    transaction,
+  );
 }
 
 /**
@@ -42,8 +48,10 @@ export async function setPreferred(measurementId: string, input: MeasurementPref
     return await getSequelize().transaction(async (transaction) => {
       const m = await Measurement.findByPk(measurementId, { transaction, lock: transaction.LOCK.UPDATE });
       if (!m || m.retiredAt) throw ConflictError('This measurement has been retired; it cannot be preferred.', 'retired');
-      if (m.status !== 'accepted') throw ConflictError('Only an accepted measurement can be preferred; review the proposal first.', 'not_accepted');
-      if (input.preferred && !m.sourceId) throw ConflictError('A measurement without a source cannot be preferred. Add its source first.', 'needs_source');
+      if (m.status !== 'accepted')
+        throw ConflictError('Only an accepted measurement can be preferred; review the proposal first.', 'not_accepted');
+      if (input.preferred && !m.sourceId)
+        throw ConflictError('A measurement without a source cannot be preferred. Add its source first.', 'needs_source');
 
       const current = await Measurement.findOne({
         where: { objectId: m.objectId, quantity: m.quantity, band: m.band ?? { [Op.is]: null }, preferred: true },
@@ -55,7 +63,9 @@ export async function setPreferred(measurementId: string, input: MeasurementPref
 
       if (input.preferred && current && current.id !== m.id) await setFlag(current, false, actor, transaction);
       await setFlag(m, input.preferred, actor, transaction);
-      transaction.afterCommit(() => void catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band }));
+      transaction.afterCommit(
+        () => void catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band }),
+      );
       return m;
     });
   } catch (error) {

@@ -7,7 +7,8 @@ import { isPreferredIndexViolation } from './measurement-preferred.ts';
 import { changedFields, recordMeasurementHistory, snapshotMeasurement } from './measurement-history-write.ts';
 
 async function checkSource(sourceId: string | null): Promise<void> {
-  if (sourceId && !(await Source.findByPk(sourceId))) throw ValidationError('That source does not exist; choose one from the list.', { sourceId: 'Choose a source from the list' });
+  if (sourceId && !(await Source.findByPk(sourceId)))
+    throw ValidationError('That source does not exist; choose one from the list.', { sourceId: 'Choose a source from the list' });
 }
 
 /**
@@ -19,11 +20,22 @@ async function checkSource(sourceId: string | null): Promise<void> {
  * @param asProposal true for a proposal
  * @returns the new measurement
  */
-export async function createMeasurement(object: SkyObject, values: MeasurementValues, actor: User, asProposal: boolean): Promise<Measurement> {
+export async function createMeasurement(
+  object: SkyObject,
+  values: MeasurementValues,
+  actor: User,
+  asProposal: boolean,
+): Promise<Measurement> {
   await checkSource(values.sourceId);
   const measurement = await getSequelize().transaction(async (transaction) => {
-    const m = await Measurement.create({ ...values, objectId: object.id, createdById: actor.id, status: asProposal ? 'proposed' : 'accepted' }, { transaction });
-    await recordMeasurementHistory({ measurement: m, action: asProposal ? 'proposed' : 'created', actorId: actor.id, old: null, new: snapshotMeasurement(m) }, transaction);
+    const m = await Measurement.create(
+      { ...values, objectId: object.id, createdById: actor.id, status: asProposal ? 'proposed' : 'accepted' },
+      { transaction },
+    );
+    await recordMeasurementHistory(
+      { measurement: m, action: asProposal ? 'proposed' : 'created', actorId: actor.id, old: null, new: snapshotMeasurement(m) },
+      transaction,
+    );
     transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
     return m;
   });
@@ -35,14 +47,27 @@ export async function createMeasurement(object: SkyObject, values: MeasurementVa
  * its history. The quantity cannot change (retire and add a new one instead).
  * @throws HttpError 400 when the quantity differs; 409 when it was retired meanwhile or a preferred value would lose its source
  */
-export async function updateMeasurement(measurementId: string, values: MeasurementValues, actor: User, reason: string | null): Promise<Measurement> {
+export async function updateMeasurement(
+  measurementId: string,
+  values: MeasurementValues,
+  actor: User,
+  reason: string | null,
+): Promise<Measurement> {
   await checkSource(values.sourceId);
   return getSequelize().transaction(async (transaction) => {
     const m = await Measurement.findByPk(measurementId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!m || m.retiredAt) throw ConflictError('This measurement has been retired meanwhile; reload the page.', 'retired');
-    if (m.status !== 'accepted') throw ConflictError('Only an accepted measurement can be edited; review the proposal first.', 'not_accepted');
-    if (values.quantity !== m.quantity) throw ValidationError('A measurement keeps its quantity; retire it and add a new one instead.', { quantity: 'The quantity cannot change' });
-    if (m.preferred && !values.sourceId) throw ConflictError('A preferred measurement needs a source. Choose another preferred value first, or keep a source.', 'preferred_needs_source');
+    if (m.status !== 'accepted')
+      throw ConflictError('Only an accepted measurement can be edited; review the proposal first.', 'not_accepted');
+    if (values.quantity !== m.quantity)
+      throw ValidationError('A measurement keeps its quantity; retire it and add a new one instead.', {
+        quantity: 'The quantity cannot change',
+      });
+    if (m.preferred && !values.sourceId)
+      throw ConflictError(
+        'A preferred measurement needs a source. Choose another preferred value first, or keep a source.',
+        'preferred_needs_source',
+      );
     const before = snapshotMeasurement(m);
     m.set({ ...values });
     const diff = changedFields(before, snapshotMeasurement(m));
@@ -51,10 +76,17 @@ export async function updateMeasurement(measurementId: string, values: Measureme
       await m.save({ transaction });
     } catch (error) {
       // A preferred value moved to a band where another preferred value already sits.
-      if (isPreferredIndexViolation(error)) throw ConflictError('Another measurement is already preferred for that quantity and band; unmark it first.', 'preferred_changed');
+      if (isPreferredIndexViolation(error))
+        throw ConflictError(
+          'Another measurement is already preferred for that quantity and band; unmark it first.',
+          'preferred_changed',
+        );
       throw error;
     }
-    await recordMeasurementHistory({ measurement: m, action: 'updated', actorId: actor.id, reason, old: diff.old, new: diff.new }, transaction);
+    await recordMeasurementHistory(
+      { measurement: m, action: 'updated', actorId: actor.id, reason, old: diff.old, new: diff.new },
+      transaction,
+    );
     transaction.afterCommit(() => {
       catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId });
       if (m.preferred) catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band });
@@ -77,7 +109,10 @@ export async function retireMeasurement(measurementId: string, reason: string, a
     m.set({ preferred: false, retiredAt: new Date(), retiredById: actor.id, retireReason: reason });
     await m.save({ transaction });
     const diff = changedFields(before, snapshotMeasurement(m));
-    await recordMeasurementHistory({ measurement: m, action: 'retired', actorId: actor.id, reason, old: diff.old, new: diff.new }, transaction);
+    await recordMeasurementHistory(
+      { measurement: m, action: 'retired', actorId: actor.id, reason, old: diff.old, new: diff.new },
+      transaction,
+    );
     transaction.afterCommit(() => {
       catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId });
       if (wasPreferred) catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band });

@@ -13,10 +13,13 @@ import { getStorage } from '../storage/storage.ts';
  */
 export async function noteFiles(keys: string[], transaction?: Transaction): Promise<void> {
   for (const key of new Set(keys)) {
-    await getSequelize().query('INSERT INTO media_file_intents (storage_key, created_at, owner) VALUES (:key, now(), :owner) ON CONFLICT (storage_key) DO NOTHING', {
-      replacements: { key, owner: INSTANCE_TAG },
-      transaction,
-    });
+    await getSequelize().query(
+      'INSERT INTO media_file_intents (storage_key, created_at, owner) VALUES (:key, now(), :owner) ON CONFLICT (storage_key) DO NOTHING',
+      {
+        replacements: { key, owner: INSTANCE_TAG },
+        transaction,
+      },
+    );
   }
 }
 
@@ -44,7 +47,8 @@ export async function settleFiles(keys: Iterable<string>): Promise<void> {
       logger.warn({ err, key }, 'could not remove a stored media file; the sweep will try again');
     }
   }
-  if (settled.length) await getSequelize().query('DELETE FROM media_file_intents WHERE storage_key IN (:settled)', { replacements: { settled } });
+  if (settled.length)
+    await getSequelize().query('DELETE FROM media_file_intents WHERE storage_key IN (:settled)', { replacements: { settled } });
 }
 
 /**

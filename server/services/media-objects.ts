@@ -32,14 +32,24 @@ export async function replaceMediaObjects(mediaId: string, objectIds: string[], 
   const ids = [...new Set(objectIds)];
   const q = getSequelize();
   if (ids.length) {
-    const found = await q.query<{ id: string }>('SELECT id FROM sky_objects WHERE id IN (:ids)', { replacements: { ids }, type: QueryTypes.SELECT, transaction });
+    const found = await q.query<{ id: string }>('SELECT id FROM sky_objects WHERE id IN (:ids)', {
+      replacements: { ids },
+      type: QueryTypes.SELECT,
+      transaction,
+    });
     const known = new Set(found.map((r) => r.id));
     const unknown = ids.filter((id) => !known.has(id));
-    if (unknown.length) throw ValidationError('objectIds: some objects are not in the catalogue (they may have been deleted).', { objectIds: 'Some objects are not in the catalogue.' });
+    if (unknown.length)
+      throw ValidationError('objectIds: some objects are not in the catalogue (they may have been deleted).', {
+        objectIds: 'Some objects are not in the catalogue.',
+      });
   }
   await q.query('DELETE FROM media_object_links WHERE media_id = :mediaId', { replacements: { mediaId }, transaction });
   for (const id of ids) {
-    await q.query('INSERT INTO media_object_links (media_id, sky_object_id) VALUES (:mediaId, :id)', { replacements: { mediaId, id }, transaction });
+    await q.query('INSERT INTO media_object_links (media_id, sky_object_id) VALUES (:mediaId, :id)', {
+      replacements: { mediaId, id },
+      transaction,
+    });
   }
 }
 

@@ -47,15 +47,32 @@ export async function generateRenditions(mediaId: string): Promise<void> {
   const focal = { x: media.focalX, y: media.focalY };
   await media.update({ renditionsStatus: 'processing', renditionsError: null });
 
-  const stored: Array<{ name: MediaRendition['name']; format: MediaRendition['format']; width: number; height: number; bytes: number; storageKey: string }> = [];
+  const stored: Array<{
+    name: MediaRendition['name'];
+    format: MediaRendition['format'];
+    width: number;
+    height: number;
+    bytes: number;
+    storageKey: string;
+  }> = [];
   try {
     const original = await originalOnDisk(media.originalKey);
     try {
       for (const file of await renderAll(original.file, focal, mediaSettings().maxPixels)) {
         const key = renditionKey(file.data, file.format);
         await noteFiles([key]);
-        await getStorage().putBuffer(key, file.data, { contentType: FORMAT_FILES[file.format].mime, cacheControl: IMMUTABLE_CACHE });
-        stored.push({ name: file.name, format: file.format, width: file.width, height: file.height, bytes: file.data.length, storageKey: key });
+        await getStorage().putBuffer(key, file.data, {
+          contentType: FORMAT_FILES[file.format].mime,
+          cacheControl: IMMUTABLE_CACHE,
+        });
+        stored.push({
+          name: file.name,
+          format: file.format,
+          width: file.width,
+          height: file.height,
+          bytes: file.data.length,
+          storageKey: key,
+        });
       }
     } finally {
       await original.cleanup();
@@ -63,7 +80,10 @@ export async function generateRenditions(mediaId: string): Promise<void> {
   } catch (err) {
     logger.warn({ err, mediaId }, 'renditions failed');
     await Media.update(
-      { renditionsStatus: 'failed', renditionsError: `The renditions could not be made: ${(err as Error).message}`.slice(0, 500) },
+      {
+        renditionsStatus: 'failed',
+        renditionsError: `The renditions could not be made: ${(err as Error).message}`.slice(0, 500),
+      },
       { where: { id: mediaId } },
     );
     await settleFiles(stored.map((s) => s.storageKey));
@@ -74,9 +94,15 @@ export async function generateRenditions(mediaId: string): Promise<void> {
     const row = await Media.findByPk(mediaId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!row) return null;
     const old = await MediaRendition.findAll({ where: { mediaId }, transaction });
-    await noteFiles(old.map((r) => r.storageKey), transaction);
+    await noteFiles(
+      old.map((r) => r.storageKey),
+      transaction,
+    );
     await MediaRendition.destroy({ where: { mediaId }, transaction });
-    await MediaRendition.bulkCreate(stored.map((s) => ({ ...s, mediaId })), { transaction });
+    await MediaRendition.bulkCreate(
+      stored.map((s) => ({ ...s, mediaId })),
+      { transaction },
+    );
     const focalMoved = row.focalX !== focal.x || row.focalY !== focal.y;
     await row.update({ renditionsStatus: focalMoved ? 'pending' : 'ready', renditionsError: null }, { transaction });
     return old.map((r) => r.storageKey);

@@ -22,7 +22,12 @@ export async function searchMedia(query: MediaListQuery): Promise<{ rows: Media[
   if (query.q) {
     const pattern = likePattern(query.q);
     where.push({
-      [Op.or]: [{ altText: { [Op.iLike]: pattern } }, { fileName: { [Op.iLike]: pattern } }, { credit: { [Op.iLike]: pattern } }, showsObject(escape(query.q))],
+      [Op.or]: [
+        { altText: { [Op.iLike]: pattern } },
+        { fileName: { [Op.iLike]: pattern } },
+        { credit: { [Op.iLike]: pattern } },
+        showsObject(escape(query.q)),
+      ],
     });
   }
   if (query.object) where.push(showsObject(escape(query.object)));
@@ -36,7 +41,10 @@ export async function searchMedia(query: MediaListQuery): Promise<{ rows: Media[
       { model: MediaRendition, as: 'renditions' },
       { model: User, as: 'uploadedBy', attributes: ['id', 'name'] },
     ],
-    order: [['createdAt', 'DESC'], ['id', 'ASC']],
+    order: [
+      ['createdAt', 'DESC'],
+      ['id', 'ASC'],
+    ],
     limit: MediaLimits.pageSize,
     offset: (page - 1) * MediaLimits.pageSize,
     distinct: true,

@@ -21,10 +21,26 @@ export async function updateMedia(media: Media, input: MediaUpdateInput, actor: 
     if (input.licenceId !== undefined) changes.licenceId = input.licenceId;
     if (input.sourceUrl !== undefined) changes.sourceUrl = input.sourceUrl;
     const moved = !!input.focalPoint && (input.focalPoint.x !== row.focalX || input.focalPoint.y !== row.focalY);
-    if (moved) Object.assign(changes, { focalX: input.focalPoint!.x, focalY: input.focalPoint!.y, renditionsStatus: 'pending', renditionsError: null });
+    if (moved)
+      Object.assign(changes, {
+        focalX: input.focalPoint!.x,
+        focalY: input.focalPoint!.y,
+        renditionsStatus: 'pending',
+        renditionsError: null,
+      });
     await row.update(changes, { transaction });
     if (input.objectIds) await replaceMediaObjects(row.id, input.objectIds, transaction);
-    await recordAudit({ actorId: actor.id, action: 'media.updated', subjectType: 'media', subjectId: row.id, data: { fields: Object.keys(input) }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'media.updated',
+        subjectType: 'media',
+        subjectId: row.id,
+        data: { fields: Object.keys(input) },
+        ip,
+      },
+      transaction,
+    );
     transaction.afterCommit(() => {
       publishingEvents.emit('mediaChanged', { mediaId: row.id });
     });

@@ -32,7 +32,8 @@ const UNSAFE_NAME = /[\u0000-\u001f\u007f-\u009f/\\]/;
  */
 export function checkFileName(name: string): string {
   const message = 'The file name contains path separators or control characters. Rename the file and upload it again.';
-  if (!name || UNSAFE_NAME.test(name) || name === '.' || name === '..') throw new HttpError(400, 'unsafe_file_name', message, { file: message });
+  if (!name || UNSAFE_NAME.test(name) || name === '.' || name === '..')
+    throw new HttpError(400, 'unsafe_file_name', message, { file: message });
   if (name.length > MediaLimits.fileNameMax) {
     const tooLong = `The file name is longer than ${MediaLimits.fileNameMax} characters. Rename the file and upload it again.`;
     throw new HttpError(400, 'unsafe_file_name', tooLong, { file: tooLong });
@@ -41,7 +42,12 @@ export function checkFileName(name: string): string {
 }
 
 const duplicate = (existing: Media | null) =>
-  ConflictError(existing ? `This image is already in the library, uploaded as “${existing.fileName}”.` : 'This image is already in the library.', 'duplicate_image');
+  ConflictError(
+    existing
+      ? `This image is already in the library, uploaded as “${existing.fileName}”.`
+      : 'This image is already in the library.',
+    'duplicate_image',
+  );
 
 /**
  * Checks an upload, keeps its original privately under its SHA-256, creates the library entry and
@@ -82,7 +88,14 @@ export async function uploadMedia({ file, fields, uploader, ip }: UploadProps): 
         { transaction },
       );
       await recordAudit(
-        { actorId: uploader.id, action: 'media.uploaded', subjectType: 'media', subjectId: created.id, data: { fileName, bytes: file.size, width: image.width, height: image.height }, ip },
+        {
+          actorId: uploader.id,
+          action: 'media.uploaded',
+          subjectType: 'media',
+          subjectId: created.id,
+          data: { fileName, bytes: file.size, width: image.width, height: image.height },
+          ip,
+        },
         transaction,
       );
       return created;

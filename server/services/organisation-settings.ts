@@ -22,6 +22,10 @@ export async function getSettings(transaction?: Transaction, lock?: 'update' | '
     lock: lock === 'update' ? transaction?.LOCK.UPDATE : lock === 'share' ? transaction?.LOCK.SHARE : undefined,
   });
   if (found) return found;
-  const [created] = await OrganisationSettings.findOrCreate({ where: { id: 1 }, defaults: { id: 1, ...DEFAULT_SETTINGS }, transaction });
+  const [created] = await OrganisationSettings.findOrCreate({
+    where: { id: 1 },
+    defaults: { id: 1, ...DEFAULT_SETTINGS },
+    transaction,
+  });
   return created;
 }

@@ -26,7 +26,8 @@ export interface RenderContext {
   eyeSafetyNotice: string;
 }
 
-const escapeText = (value: string) => value.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
+const escapeText = (value: string) =>
+  value.replace(/&/g, '&amp;').replace(/</g, '&lt;').replace(/>/g, '&gt;').replace(/"/g, '&quot;');
 
 type Mapped = { node: { attrs: Record<string, unknown> } };
 
@@ -48,16 +49,24 @@ export function renderPageHtml(doc: JSONContent, ctx: RenderContext): string {
         statementRef: ({ node }: Mapped) => {
           const id = String(node.attrs.statementId ?? '');
           const text = ctx.statementText(id);
-          if (text === null) return `<span class="statement statement-missing"${serializeAttrsToHTMLString({ 'data-statement-id': id })}>[statement not available]</span>`;
+          if (text === null)
+            return `<span class="statement statement-missing"${serializeAttrsToHTMLString({ 'data-statement-id': id })}>[statement not available]</span>`;
           return `<span class="statement"${serializeAttrsToHTMLString({ 'data-statement-id': id })}>${escapeText(text)}</span>`;
         },
-        eyeSafetyNotice: () => `<aside class="eye-safety-notice" role="note"><strong>Eye safety</strong> <span>${escapeText(ctx.eyeSafetyNotice)}</span></aside>`,
+        eyeSafetyNotice: () =>
+          `<aside class="eye-safety-notice" role="note"><strong>Eye safety</strong> <span>${escapeText(ctx.eyeSafetyNotice)}</span></aside>`,
         mediaImage: ({ node }: Mapped) => {
           const id = String(node.attrs.mediaId ?? '');
           const media = ctx.media.get(id);
           if (!media?.url) return '';
-          const caption = typeof node.attrs.caption === 'string' && node.attrs.caption.trim() ? `<span class="caption">${escapeText(node.attrs.caption)}</span> ` : '';
-          const credit = [media.credit, media.licence].filter((x): x is string => !!x).map(escapeText).join(' · ');
+          const caption =
+            typeof node.attrs.caption === 'string' && node.attrs.caption.trim()
+              ? `<span class="caption">${escapeText(node.attrs.caption)}</span> `
+              : '';
+          const credit = [media.credit, media.licence]
+            .filter((x): x is string => !!x)
+            .map(escapeText)
+            .join(' · ');
           const img = `<img${serializeAttrsToHTMLString({ src: media.url, alt: media.altText, width: media.width, height: media.height, loading: 'lazy' })}>`;
           return `<figure${serializeAttrsToHTMLString({ 'data-media-id': id })}>${img}<figcaption>${caption}<small class="credit">${credit}</small></figcaption></figure>`;
         },
@@ -80,12 +89,25 @@ export function renderPageHtml(doc: JSONContent, ctx: RenderContext): string {
  */
 export async function loadRenderMedia(mediaIds: string[]): Promise<Map<string, RenderMedia>> {
   if (!mediaIds.length) return new Map();
-  const rows = await Media.findAll({ where: { id: { [Op.in]: mediaIds } }, include: [{ model: MediaRendition, as: 'renditions' }] });
+  const rows = await Media.findAll({
+    where: { id: { [Op.in]: mediaIds } },
+    include: [{ model: MediaRendition, as: 'renditions' }],
+  });
   return new Map(
     rows.map((m) => {
       const renditions = m.renditions ?? [];
       const page = renditions.find((r) => r.name === 'page' && r.format === 'jpeg') ?? renditions.find((r) => r.name === 'page');
-      return [m.id, { url: page ? renditionUrl(page.storageKey) : null, width: page?.width ?? null, height: page?.height ?? null, altText: m.altText, credit: m.credit, licence: findLicence(m.licenceId)?.label ?? null }];
+      return [
+        m.id,
+        {
+          url: page ? renditionUrl(page.storageKey) : null,
+          width: page?.width ?? null,
+          height: page?.height ?? null,
+          altText: m.altText,
+          credit: m.credit,
+          licence: findLicence(m.licenceId)?.label ?? null,
+        },
+      ];
     }),
   );
 }
@@ -100,8 +122,10 @@ export async function loadRenderMedia(mediaIds: string[]): Promise<Map<string, R
 export function withStatementTexts(html: string, texts: Map<string, string>): string {
   if (texts.size === 0) return html;
   // renderPageHtml escapes a statement's text, so its span holds no markup and ends at the first "<".
-  return html.replace(/(<span class="statement" data-statement-id="([0-9a-f-]{36})">)([^<]*)(<\/span>)/g, (whole, open: string, id: string, _old: string, close: string) =>
-    texts.has(id) ? `${open}${escapeText(texts.get(id)!)}${close}` : whole,
+  return html.replace(
+    /(<span class="statement" data-statement-id="([0-9a-f-]{36})">)([^<]*)(<\/span>)/g,
+    (whole, open: string, id: string, _old: string, close: string) =>
+      texts.has(id) ? `${open}${escapeText(texts.get(id)!)}${close}` : whole,
   );
 }
 
@@ -112,7 +136,11 @@ export function withStatementTexts(html: string, texts: Map<string, string>): st
  * @param shown publicStatements for its statements
  * @param locale the page's locale
  */
-export function publicPageTexts(live: { html: string; statementTexts: Record<string, string> }, shown: Map<string, PublicStatement>, locale: string): { statementTexts: Record<string, string>; html: string } {
+export function publicPageTexts(
+  live: { html: string; statementTexts: Record<string, string> },
+  shown: Map<string, PublicStatement>,
+  locale: string,
+): { statementTexts: Record<string, string>; html: string } {
   const moved = new Map<string, string>();
   const statementTexts: Record<string, string> = {};
   for (const [id, signed] of Object.entries(live.statementTexts)) {
@@ -165,7 +193,11 @@ export async function renderPublishedPage(pageId: string): Promise<PublishedPage
  * @param doc the document
  * @param statementText wording per statement id
  */
-export async function renderWithLookups(doc: JSONContent, mediaIds: string[], statementText: RenderContext['statementText']): Promise<string> {
+export async function renderWithLookups(
+  doc: JSONContent,
+  mediaIds: string[],
+  statementText: RenderContext['statementText'],
+): Promise<string> {
   const [media, settings] = await Promise.all([loadRenderMedia(mediaIds), getSettings()]);
   return renderPageHtml(doc, { statementText, media, eyeSafetyNotice: settings.eyeSafetyNotice });
 }

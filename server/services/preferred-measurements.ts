@@ -25,13 +25,17 @@ export async function getPreferredMeasurements(objectId: string): Promise<Prefer
   const rows = await Measurement.findAll({
     where: { objectId, preferred: true },
     include: [{ model: Source, as: 'source', required: true }],
-    order: [['quantity', 'ASC'], ['band', 'ASC']],
+    order: [
+      ['quantity', 'ASC'],
+      ['band', 'ASC'],
+    ],
   });
   return rows.map((m) => {
     const source = m.source!;
     let uncertainty: PreferredMeasurement['uncertainty'] = null;
     if (m.uncertainty !== null) uncertainty = { kind: 'symmetric', sigma: m.uncertainty };
-    else if (m.uncertaintyMinus !== null && m.uncertaintyPlus !== null) uncertainty = { kind: 'asymmetric', minus: m.uncertaintyMinus, plus: m.uncertaintyPlus };
+    else if (m.uncertaintyMinus !== null && m.uncertaintyPlus !== null)
+      uncertainty = { kind: 'asymmetric', minus: m.uncertaintyMinus, plus: m.uncertaintyPlus };
     return {
       measurementId: m.id,
       objectId: m.objectId,

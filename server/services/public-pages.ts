@@ -37,18 +37,28 @@ export function prepare(value: unknown): Prepared {
 }
 
 async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'checkedAt'>> {
-  const rows = await Page.findAll({ where: { publishedSnapshot: { [Op.ne]: null } }, attributes: ['id', 'locale', 'skyObjectId', 'publishedSnapshot'] });
-  rows.sort((a, b) => (b.publishedSnapshot!.publishedAt ?? '').localeCompare(a.publishedSnapshot!.publishedAt ?? '') || a.id.localeCompare(b.id));
+  const rows = await Page.findAll({
+    where: { publishedSnapshot: { [Op.ne]: null } },
+    attributes: ['id', 'locale', 'skyObjectId', 'publishedSnapshot'],
+  });
+  rows.sort(
+    (a, b) =>
+      (b.publishedSnapshot!.publishedAt ?? '').localeCompare(a.publishedSnapshot!.publishedAt ?? '') || a.id.localeCompare(b.id),
+  );
   const statementIds = [...new Set(rows.flatMap((p) => Object.keys(p.publishedSnapshot!.statementTexts)))];
   const mediaIds = [...new Set(rows.flatMap((p) => mediaIdsInHtml(p.publishedSnapshot!.html)))];
   const [objects, statements, images] = await Promise.all([
-    SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(rows.map((p) => p.skyObjectId))] } }, attributes: ['id', 'name', 'kind'] }),
+    SkyObject.findAll({
+      where: { id: { [Op.in]: [...new Set(rows.map((p) => p.skyObjectId))] } },
+      attributes: ['id', 'name', 'kind'],
+    }),
     publicStatements(statementIds),
     loadPublishedImages(mediaIds),
   ]);
   const objectById = new Map(objects.map((o) => [o.id, o]));
   const slugCount = new Map<string, number>();
-  for (const p of rows) slugCount.set(slugify(p.publishedSnapshot!.title), (slugCount.get(slugify(p.publishedSnapshot!.title)) ?? 0) + 1);
+  for (const p of rows)
+    slugCount.set(slugify(p.publishedSnapshot!.title), (slugCount.get(slugify(p.publishedSnapshot!.title)) ?? 0) + 1);
 
   const pages: PublicPageDto[] = rows.map((p) => {
     const live = p.publishedSnapshot!;
@@ -66,10 +76,26 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
       summary: firstParagraphText(shown.html, 300),
       publishedAt: live.publishedAt ?? null,
       html: shown.html,
-      statements: Object.entries(shown.statementTexts).map(([id, text]) => ({ id, text, asOf: statements.get(id)?.asOf ?? live.signedOffAt })),
+      statements: Object.entries(shown.statementTexts).map(([id, text]) => ({
+        id,
+        text,
+        asOf: statements.get(id)?.asOf ?? live.signedOffAt,
+      })),
       images: mediaIdsInHtml(live.html).flatMap((id) => {
         const img = images.get(id);
-        return img ? [{ id, url: img.pageUrl, altText: img.image.alt, credit: img.credit, licence: img.licence, licenceUrl: img.licenceUrl, sourceUrl: img.sourceUrl }] : [];
+        return img
+          ? [
+              {
+                id,
+                url: img.pageUrl,
+                altText: img.image.alt,
+                credit: img.credit,
+                licence: img.licence,
+                licenceUrl: img.licenceUrl,
+                sourceUrl: img.sourceUrl,
+              },
+            ]
+          : [];
       }),
     };
   });

@@ -25,12 +25,24 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
   const settings = await getSequelize().transaction(async (transaction) => {
     const row = await getSettings(transaction, 'update');
     if (row.version !== expectedVersion) {
-      throw ConflictError('Someone changed the organisation settings since you opened the preview. Look at the preview again before switching.', 'settings_moved');
+      throw ConflictError(
+        'Someone changed the organisation settings since you opened the preview. Look at the preview again before switching.',
+        'settings_moved',
+      );
     }
     const before = row.cosmologyModel;
     row.set({ cosmologyModel: model, version: row.version + 1, updatedById: actor.id });
     await row.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'settings.cosmology_changed', subjectType: 'organisation_settings', subjectId: '1', data: { before, after: model } }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'settings.cosmology_changed',
+        subjectType: 'organisation_settings',
+        subjectId: '1',
+        data: { before, after: model },
+      },
+      transaction,
+    );
     return row;
   });
   await enqueueRecompute({ scope: { all: true } });
@@ -44,7 +56,10 @@ export async function updateSettings(input: SettingsUpdateInput, actor: User): P
     const bandChanged = input.defaultBand !== undefined && input.defaultBand !== row.defaultBand;
     row.set({ ...input, updatedById: actor.id, ...(bandChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'settings.updated', subjectType: 'organisation_settings', subjectId: '1', data: { ...input } }, transaction);
+    await recordAudit(
+      { actorId: actor.id, action: 'settings.updated', subjectType: 'organisation_settings', subjectId: '1', data: { ...input } },
+      transaction,
+    );
     return { row, bandChanged };
   });
   if (settings.bandChanged) await enqueueRecompute({ scope: { all: true } });

@@ -14,7 +14,8 @@ export function throttleDelayMs(failedAttempts: number): number {
   return Math.min(MAX_DELAY_MS, 30_000 * 2 ** (failedAttempts - FREE_ATTEMPTS));
 }
 
-const wrongDetails = () => new HttpError(401, 'wrong_credentials', 'That e-mail address and password do not match an active account.');
+const wrongDetails = () =>
+  new HttpError(401, 'wrong_credentials', 'That e-mail address and password do not match an active account.');
 
 /**
  * Checks the credentials, with per-account throttling kept in the database (so it holds across
@@ -25,7 +26,11 @@ export async function signIn(email: string, password: string, ip: string | undef
   const user = await User.findOne({ where: { email } });
   if (user?.throttledUntil && user.throttledUntil.getTime() > Date.now()) {
     const seconds = Math.ceil((user.throttledUntil.getTime() - Date.now()) / 1000);
-    throw new HttpError(429, 'too_many_attempts', `Too many failed attempts for this account. Try again in ${seconds} seconds, or reset your password.`);
+    throw new HttpError(
+      429,
+      'too_many_attempts',
+      `Too many failed attempts for this account. Try again in ${seconds} seconds, or reset your password.`,
+    );
   }
   const ok = await verifyPassword(password, user?.passwordHash);
   if (!user || !ok || !user.active) {

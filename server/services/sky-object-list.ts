@@ -14,7 +14,10 @@ const ORDER: Record<SkyObjectListQuery['sort'], (dir: string) => string> = {
 };
 
 /** Builds the WHERE clause with named replacements; values never reach the SQL text. */
-export function skyObjectFilter(query: Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing'>): { where: string; replacements: Record<string, unknown> } {
+export function skyObjectFilter(query: Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing'>): {
+  where: string;
+  replacements: Record<string, unknown>;
+} {
   const clauses: string[] = [];
   const replacements: Record<string, unknown> = {};
   if (query.q) {
@@ -27,11 +30,17 @@ export function skyObjectFilter(query: Pick<SkyObjectListQuery, 'q' | 'kind' | '
     clauses.push('o.kind = :kind');
   }
   if (query.missing === 'position') clauses.push('o.ra_deg IS NULL');
-  else if (query.missing === 'any_preferred') clauses.push('NOT EXISTS (SELECT 1 FROM measurements p WHERE p.object_id = o.id AND p.preferred)');
-  else if (query.missing === 'source') clauses.push("EXISTS (SELECT 1 FROM measurements s WHERE s.object_id = o.id AND s.source_id IS NULL AND s.retired_at IS NULL AND s.status = 'accepted')");
+  else if (query.missing === 'any_preferred')
+    clauses.push('NOT EXISTS (SELECT 1 FROM measurements p WHERE p.object_id = o.id AND p.preferred)');
+  else if (query.missing === 'source')
+    clauses.push(
+      "EXISTS (SELECT 1 FROM measurements s WHERE s.object_id = o.id AND s.source_id IS NULL AND s.retired_at IS NULL AND s.status = 'accepted')",
+    );
   else if (query.missing && (QUANTITY_IDS as string[]).includes(query.missing)) {
     replacements.missingQuantity = query.missing;
-    clauses.push('NOT EXISTS (SELECT 1 FROM measurements p WHERE p.object_id = o.id AND p.quantity = :missingQuantity AND p.preferred)');
+    clauses.push(
+      'NOT EXISTS (SELECT 1 FROM measurements p WHERE p.object_id = o.id AND p.quantity = :missingQuantity AND p.preferred)',
+    );
   }
   return { where: clauses.length ? `WHERE ${clauses.join(' AND ')}` : '', replacements };
 }
@@ -54,13 +63,19 @@ interface Row {
  * The two statements behind a page: the rows and the total. Exported for the benchmark, which
  * times them at the database with EXPLAIN ANALYZE.
  */
-export function skyObjectPageQueries(query: SkyObjectListQuery): { pageSql: string; countSql: string; replacements: Record<string, unknown> } {
+export function skyObjectPageQueries(query: SkyObjectListQuery): {
+  pageSql: string;
+  countSql: string;
+  replacements: Record<string, unknown>;
+} {
   const { where, replacements } = skyObjectFilter(query);
   const order = ORDER[query.sort](query.dir === 'desc' ? 'DESC' : 'ASC');
   // A search is selective but PostgreSQL cannot tell from trigram statistics, and may walk the whole
   // name index looking for 50 matches; materialising the matches first keeps a search to its hits.
   const from = query.q ? 'matched o' : 'sky_objects o';
-  const cte = query.q ? 'WITH matched AS MATERIALIZED (SELECT * FROM sky_objects o WHERE lower(o.name) LIKE :pattern OR o.designations @> ARRAY[:exact]::text[]) ' : '';
+  const cte = query.q
+    ? 'WITH matched AS MATERIALIZED (SELECT * FROM sky_objects o WHERE lower(o.name) LIKE :pattern OR o.designations @> ARRAY[:exact]::text[]) '
+    : '';
   return {
     // The page is chosen first and the counts computed for its 50 rows only: in one flat query
     // PostgreSQL would compute them for every row skipped by OFFSET too.

@@ -13,7 +13,12 @@ const withConstellation = (values: SkyObjectValues) => ({
 
 async function assertNameFree(name: string, exceptId?: string): Promise<void> {
   const clash = await SkyObject.findOne({
-    where: { [Op.and]: [getSequelize().where(getSequelize().fn('lower', getSequelize().col('name')), name.toLowerCase()), exceptId ? { id: { [Op.ne]: exceptId } } : {}] },
+    where: {
+      [Op.and]: [
+        getSequelize().where(getSequelize().fn('lower', getSequelize().col('name')), name.toLowerCase()),
+        exceptId ? { id: { [Op.ne]: exceptId } } : {},
+      ],
+    },
   });
   if (clash) throw ConflictError(`There is already an object named "${clash.name}".`, 'name_taken');
 }
@@ -26,7 +31,17 @@ export async function createSkyObject(values: SkyObjectValues, actor: User, ip?:
   await assertNameFree(values.name);
   return getSequelize().transaction(async (transaction) => {
     const object = await SkyObject.create({ ...withConstellation(values), createdById: actor.id }, { transaction });
-    await recordAudit({ actorId: actor.id, action: 'catalogue.object_created', subjectType: 'sky_object', subjectId: object.id, data: { name: object.name }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'catalogue.object_created',
+        subjectType: 'sky_object',
+        subjectId: object.id,
+        data: { name: object.name },
+        ip,
+      },
+      transaction,
+    );
     return object;
   });
 }
@@ -41,7 +56,17 @@ export async function updateSkyObject(object: SkyObject, values: SkyObjectValues
     const before = { name: object.name, kind: object.kind, raDeg: object.raDeg, decDeg: object.decDeg };
     object.set(withConstellation(values));
     await object.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'catalogue.object_updated', subjectType: 'sky_object', subjectId: object.id, data: { before, after: { name: object.name, kind: object.kind, raDeg: object.raDeg, decDeg: object.decDeg } }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'catalogue.object_updated',
+        subjectType: 'sky_object',
+        subjectId: object.id,
+        data: { before, after: { name: object.name, kind: object.kind, raDeg: object.raDeg, decDeg: object.decDeg } },
+        ip,
+      },
+      transaction,
+    );
     return object;
   });
 }
@@ -54,8 +79,22 @@ export async function updateSkyObject(object: SkyObject, values: SkyObjectValues
 export async function deleteSkyObject(object: SkyObject, actor: User, ip?: string): Promise<void> {
   await getSequelize().transaction(async (transaction) => {
     const count = await Measurement.count({ where: { objectId: object.id }, transaction });
-    if (count > 0) throw ConflictError(`${object.name} has ${count} measurement${count === 1 ? '' : 's'} with history, so it is kept. Only an object without measurements can be deleted.`, 'has_measurements');
+    if (count > 0)
+      throw ConflictError(
+        `${object.name} has ${count} measurement${count === 1 ? '' : 's'} with history, so it is kept. Only an object without measurements can be deleted.`,
+        'has_measurements',
+      );
     await object.destroy({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'catalogue.object_deleted', subjectType: 'sky_object', subjectId: object.id, data: { name: object.name }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'catalogue.object_deleted',
+        subjectType: 'sky_object',
+        subjectId: object.id,
+        data: { name: object.name },
+        ip,
+      },
+      transaction,
+    );
   });
 }

@@ -10,7 +10,13 @@ import { skyEvents } from './sky-events.ts';
 /** The venue fields the sky depends on; a snapshot made for other values, or by older rules, is stale. */
 function matchesVenue(sky: SkyTonight, venue: Venue): boolean {
   const o = sky.observer;
-  return sky.version === SKY_VERSION && o.latitude === venue.latitude && o.longitude === venue.longitude && o.elevationM === venue.elevationM && sky.timeZone === venue.timeZone;
+  return (
+    sky.version === SKY_VERSION &&
+    o.latitude === venue.latitude &&
+    o.longitude === venue.longitude &&
+    o.elevationM === venue.elevationM &&
+    sky.timeZone === venue.timeZone
+  );
 }
 
 /**
@@ -20,7 +26,14 @@ function matchesVenue(sky: SkyTonight, venue: Venue): boolean {
  * @param now the clock to record as computedAt
  */
 export async function computeSkySnapshot(venue: Venue, localDate: string, now = new Date()): Promise<SkySnapshot> {
-  const sky = computeSkyTonight({ latitude: venue.latitude, longitude: venue.longitude, elevationM: venue.elevationM, timeZone: venue.timeZone, localDate, now });
+  const sky = computeSkyTonight({
+    latitude: venue.latitude,
+    longitude: venue.longitude,
+    elevationM: venue.elevationM,
+    timeZone: venue.timeZone,
+    localDate,
+    now,
+  });
   // One row per venue and night: two jobs racing simply leave the later result.
   await getSequelize().query(
     `INSERT INTO sky_snapshots (venue_id, local_date, computed_at, data) VALUES (:venueId, :localDate, :computedAt, CAST(:data AS jsonb))
@@ -39,7 +52,8 @@ export async function computeSkySnapshot(venue: Venue, localDate: string, now = 
  * @throws SkyInputError when the date is not a real date
  */
 export async function getSkySnapshot(venueId: string, localDate: string): Promise<SkySnapshot | null> {
-  if (!isLocalDate(localDate)) throw new SkyInputError('localDate', 'The date must be a real calendar date written YYYY-MM-DD, between 1800 and 2200.');
+  if (!isLocalDate(localDate))
+    throw new SkyInputError('localDate', 'The date must be a real calendar date written YYYY-MM-DD, between 1800 and 2200.');
   const venue = await Venue.findByPk(venueId);
   if (!venue) return null;
   const stored = await SkySnapshot.findOne({ where: { venueId, localDate } });

@@ -16,7 +16,12 @@ async function assertUnique(values: SourceValues, exceptId?: string): Promise<vo
     { type: QueryTypes.SELECT, bind: [values.citation, values.bibcode, values.doi, exceptId ?? null] },
   );
   if (!clash) return;
-  const what = clash.citation.toLowerCase() === values.citation.toLowerCase() ? 'citation' : clash.bibcode === values.bibcode ? 'bibcode' : 'DOI';
+  const what =
+    clash.citation.toLowerCase() === values.citation.toLowerCase()
+      ? 'citation'
+      : clash.bibcode === values.bibcode
+        ? 'bibcode'
+        : 'DOI';
   throw ConflictError(`A source with this ${what} already exists: "${clash.citation}". Use that one.`, 'source_exists');
 }
 
@@ -28,7 +33,17 @@ export async function createSource(values: SourceValues, actor: User, ip?: strin
   await assertUnique(values);
   return sql().transaction(async (transaction) => {
     const source = await Source.create({ ...values, createdById: actor.id }, { transaction });
-    await recordAudit({ actorId: actor.id, action: 'catalogue.source_created', subjectType: 'source', subjectId: source.id, data: { citation: source.citation }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'catalogue.source_created',
+        subjectType: 'source',
+        subjectId: source.id,
+        data: { citation: source.citation },
+        ip,
+      },
+      transaction,
+    );
     return source;
   });
 }
@@ -43,7 +58,17 @@ export async function updateSource(source: Source, values: SourceValues, actor: 
     const before = { citation: source.citation, bibcode: source.bibcode, doi: source.doi, url: source.url };
     source.set(values);
     await source.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'catalogue.source_updated', subjectType: 'source', subjectId: source.id, data: { before }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'catalogue.source_updated',
+        subjectType: 'source',
+        subjectId: source.id,
+        data: { before },
+        ip,
+      },
+      transaction,
+    );
     transaction.afterCommit(() => void catalogueEvents.emit('sourceChanged', { sourceId: source.id }));
     return source;
   });

@@ -20,7 +20,10 @@ export async function inviteUser(input: UserInviteInput, invitedBy: User, ip?: s
     }
     const user = await User.create({ email: input.email, name: input.name, role: input.role }, { transaction });
     const token = await issueToken(user.id, 'invitation', TokenLifetimes.invitationHours * 3_600_000, transaction);
-    await recordAudit({ actorId: invitedBy.id, action: 'user.invited', subjectType: 'user', subjectId: user.id, data: { role: input.role }, ip }, transaction);
+    await recordAudit(
+      { actorId: invitedBy.id, action: 'user.invited', subjectType: 'user', subjectId: user.id, data: { role: input.role }, ip },
+      transaction,
+    );
     await sendMail(invitationMail(user.email, user.name, invitedBy.name, token));
     return user;
   });
@@ -30,7 +33,10 @@ export async function inviteUser(input: UserInviteInput, invitedBy: User, ip?: s
 export async function resendInvitation(user: User, invitedBy: User): Promise<void> {
   await getSequelize().transaction(async (transaction) => {
     const token = await issueToken(user.id, 'invitation', TokenLifetimes.invitationHours * 3_600_000, transaction);
-    await recordAudit({ actorId: invitedBy.id, action: 'user.invitation_resent', subjectType: 'user', subjectId: user.id }, transaction);
+    await recordAudit(
+      { actorId: invitedBy.id, action: 'user.invitation_resent', subjectType: 'user', subjectId: user.id },
+      transaction,
+    );
     await sendMail(invitationMail(user.email, user.name, invitedBy.name, token));
   });
 }

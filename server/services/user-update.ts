@@ -19,7 +19,17 @@ export async function updateUser(target: User, input: UserUpdateInput, actor: Us
     target.set(input);
     await target.save({ transaction });
     if (input.active === false) await endUserSessions(target.id, undefined, transaction);
-    await recordAudit({ actorId: actor.id, action: 'user.updated', subjectType: 'user', subjectId: target.id, data: { before, after: input }, ip }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'user.updated',
+        subjectType: 'user',
+        subjectId: target.id,
+        data: { before, after: input },
+        ip,
+      },
+      transaction,
+    );
     return target;
   });
 }

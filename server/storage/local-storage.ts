@@ -47,11 +47,13 @@ export class LocalStorage implements MediaStorage {
   }
 
   async exists(key: string): Promise<boolean> {
-    return fsp.stat(this.pathOf(key)).then((s) => s.isFile(), () => false);
+    return fsp.stat(this.pathOf(key)).then(
+      (s) => s.isFile(),
+      () => false,
+    );
   }
 
   async delete(key: string): Promise<void> {
     await fsp.rm(this.pathOf(key), { force: true });
   }
-
 }

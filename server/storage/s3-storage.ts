@@ -1,7 +1,14 @@
 import fs from 'node:fs';
 import fsp from 'node:fs/promises';
 import type { Readable } from 'node:stream';
-import { DeleteObjectCommand, GetObjectCommand, HeadObjectCommand, PutObjectCommand, S3Client, S3ServiceException } from '@aws-sdk/client-s3';
+import {
+  DeleteObjectCommand,
+  GetObjectCommand,
+  HeadObjectCommand,
+  PutObjectCommand,
+  S3Client,
+  S3ServiceException,
+} from '@aws-sdk/client-s3';
 import { assertKey, type MediaStorage, type PutOptions } from './storage.ts';
 
 /** Where the bucket is. Credentials come from the SDK's usual chain (AWS_ACCESS_KEY_ID …) unless given. */
@@ -17,7 +24,8 @@ export interface S3Settings {
 }
 
 const isMissing = (err: unknown) =>
-  err instanceof S3ServiceException && (err.$metadata.httpStatusCode === 404 || err.name === 'NoSuchKey' || err.name === 'NotFound');
+  err instanceof S3ServiceException &&
+  (err.$metadata.httpStatusCode === 404 || err.name === 'NoSuchKey' || err.name === 'NotFound');
 
 /** Files in an S3-compatible bucket, through @aws-sdk/client-s3. */
 export class S3Storage implements MediaStorage {
@@ -62,7 +70,13 @@ export class S3Storage implements MediaStorage {
   async putBuffer(key: string, body: Buffer, options: PutOptions): Promise<void> {
     if (await this.exists(key)) return;
     await this.client.send(
-      new PutObjectCommand({ Bucket: this.settings.bucket, Key: this.objectKey(key), Body: body, ContentType: options.contentType, CacheControl: options.cacheControl }),
+      new PutObjectCommand({
+        Bucket: this.settings.bucket,
+        Key: this.objectKey(key),
+        Body: body,
+        ContentType: options.contentType,
+        CacheControl: options.cacheControl,
+      }),
     );
   }
 

@@ -38,7 +38,9 @@ export function assertKey(key: string): void {
 }
 
 /** The storage settings in the environment: STARPROOF_STORAGE=local (default) or s3. */
-export function storageSettingsFromEnv(env: NodeJS.ProcessEnv = process.env): { driver: 'local'; root: string } | ({ driver: 's3' } & S3Settings) {
+export function storageSettingsFromEnv(
+  env: NodeJS.ProcessEnv = process.env,
+): { driver: 'local'; root: string } | ({ driver: 's3' } & S3Settings) {
   const driver = env.STARPROOF_STORAGE ?? 'local';
   if (driver === 'local') return { driver, root: config.uploadsDir };
   if (driver !== 's3') throw new Error(`STARPROOF_STORAGE must be "local" or "s3", not "${driver}".`);

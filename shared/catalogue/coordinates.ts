@@ -10,7 +10,10 @@ const SEPARATORS = /[hmsd°:'′"″\s]+/gi;
 
 function normalise(text: string): string {
   // The typographic minus (U+2212) and dashes are read as the ASCII sign.
-  return text.trim().replace(/[\u2212\u2013\u2014]/g, '-').replace(/,/g, '.');
+  return text
+    .trim()
+    .replace(/[\u2212\u2013\u2014]/g, '-')
+    .replace(/,/g, '.');
 }
 
 function sexagesimalParts(text: string): number[] | undefined {
@@ -32,7 +35,8 @@ export function parseRightAscension(input: string | number): CoordinateReading {
   if (/^\d+(\.\d+)?\s*h$/i.test(text)) return checkRa(Number.parseFloat(text) * 15);
   if (text.startsWith('-')) return { ok: false, message: 'Right ascension cannot be negative.' };
   const parts = sexagesimalParts(text);
-  if (!parts) return { ok: false, message: 'Write right ascension as degrees (83.82) or hours, minutes and seconds (05h 35m 17.3s).' };
+  if (!parts)
+    return { ok: false, message: 'Write right ascension as degrees (83.82) or hours, minutes and seconds (05h 35m 17.3s).' };
   const [h, m, s = 0] = parts;
   if (m >= 60 || s >= 60) return { ok: false, message: 'Minutes and seconds must be less than 60.' };
   return checkRa((h + m / 60 + s / 3600) * 15);
@@ -48,7 +52,8 @@ export function parseDeclination(input: string | number): CoordinateReading {
   if (!text) return { ok: false, message: 'Enter a declination.' };
   if (/^[+-]?\d+(\.\d+)?\s*°?$/.test(text)) return checkDec(Number(text.replace('°', '')));
   const parts = sexagesimalParts(text);
-  if (!parts) return { ok: false, message: 'Write declination as degrees (−5.39) or degrees, arcminutes and arcseconds (−05° 23′ 28″).' };
+  if (!parts)
+    return { ok: false, message: 'Write declination as degrees (−5.39) or degrees, arcminutes and arcseconds (−05° 23′ 28″).' };
   const [d, m, s = 0] = parts;
   if (m >= 60 || s >= 60) return { ok: false, message: 'Arcminutes and arcseconds must be less than 60.' };
   const sign = text.startsWith('-') ? -1 : 1;
@@ -56,7 +61,8 @@ export function parseDeclination(input: string | number): CoordinateReading {
 }
 
 function checkRa(deg: number): CoordinateReading {
-  if (!Number.isFinite(deg) || deg < 0 || deg >= 360) return { ok: false, message: 'Right ascension must be from 0 up to (not including) 360° or 24h.' };
+  if (!Number.isFinite(deg) || deg < 0 || deg >= 360)
+    return { ok: false, message: 'Right ascension must be from 0 up to (not including) 360° or 24h.' };
   return { ok: true, deg };
 }
 

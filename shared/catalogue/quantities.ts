@@ -3,7 +3,14 @@
  * the units accepted on entry with their factor to the canonical unit, and whether a photometric
  * band is needed. Factors derive from shared/engine/constants.ts so entry and engine agree.
  */
-import { ASTRONOMICAL_UNIT, GRAVITATIONAL_CONSTANT, LIGHT_YEAR, PARSEC, SOLAR_MASS_PARAMETER, SOLAR_RADIUS } from '../engine/constants.ts';
+import {
+  ASTRONOMICAL_UNIT,
+  GRAVITATIONAL_CONSTANT,
+  LIGHT_YEAR,
+  PARSEC,
+  SOLAR_MASS_PARAMETER,
+  SOLAR_RADIUS,
+} from '../engine/constants.ts';
 
 /** A unit accepted for a quantity: value_in_canonical = value × toCanonical. */
 export interface QuantityUnit {
@@ -35,7 +42,11 @@ export interface QuantityDefinition {
  * Earth's nominal mass parameter GM⊕ (IAU 2015 Resolution B3). Not in the engine's constants
  * because no engine computation needs it; only mass entry in Earth masses does.
  */
-export const EARTH_MASS_PARAMETER = { value: 3.986004e14, unit: 'm³ s⁻²', source: 'IAU 2015 Resolution B3 (nominal terrestrial mass parameter)' } as const;
+export const EARTH_MASS_PARAMETER = {
+  value: 3.986004e14,
+  unit: 'm³ s⁻²',
+  source: 'IAU 2015 Resolution B3 (nominal terrestrial mass parameter)',
+} as const;
 
 const G = GRAVITATIONAL_CONSTANT.value;
 const PC_M = PARSEC.value;
@@ -45,12 +56,50 @@ const MAG: QuantityUnit = { id: 'mag', label: 'mag', toCanonical: 1, aliases: ['
 
 /** Every quantity, by id. */
 export const QUANTITIES = {
-  redshift: { id: 'redshift', label: 'Redshift', symbol: 'z', canonicalUnit: '', units: [DIMENSIONLESS], needsBand: false, exclusiveMin: -1, hint: 'Dimensionless; negative for objects approaching us (blueshift).' },
-  apparent_magnitude: { id: 'apparent_magnitude', label: 'Apparent magnitude', symbol: 'm', canonicalUnit: 'mag', units: [MAG], needsBand: true, hint: 'In a named band, e.g. V.' },
-  extinction: { id: 'extinction', label: 'Extinction', symbol: 'A', canonicalUnit: 'mag', units: [MAG], needsBand: true, inclusiveMin: 0, hint: 'Interstellar extinction in a named band; zero or more.' },
-  spectral_index: { id: 'spectral_index', label: 'Spectral index', symbol: 'α', canonicalUnit: '', units: [DIMENSIONLESS], needsBand: false, hint: 'α in f_ν ∝ ν^α; dimensionless.' },
+  redshift: {
+    id: 'redshift',
+    label: 'Redshift',
+    symbol: 'z',
+    canonicalUnit: '',
+    units: [DIMENSIONLESS],
+    needsBand: false,
+    exclusiveMin: -1,
+    hint: 'Dimensionless; negative for objects approaching us (blueshift).',
+  },
+  apparent_magnitude: {
+    id: 'apparent_magnitude',
+    label: 'Apparent magnitude',
+    symbol: 'm',
+    canonicalUnit: 'mag',
+    units: [MAG],
+    needsBand: true,
+    hint: 'In a named band, e.g. V.',
+  },
+  extinction: {
+    id: 'extinction',
+    label: 'Extinction',
+    symbol: 'A',
+    canonicalUnit: 'mag',
+    units: [MAG],
+    needsBand: true,
+    inclusiveMin: 0,
+    hint: 'Interstellar extinction in a named band; zero or more.',
+  },
+  spectral_index: {
+    id: 'spectral_index',
+    label: 'Spectral index',
+    symbol: 'α',
+    canonicalUnit: '',
+    units: [DIMENSIONLESS],
+    needsBand: false,
+    hint: 'α in f_ν ∝ ν^α; dimensionless.',
+  },
   parallax: {
-    id: 'parallax', label: 'Parallax', symbol: 'ϖ', canonicalUnit: 'mas', needsBand: false,
+    id: 'parallax',
+    label: 'Parallax',
+    symbol: 'ϖ',
+    canonicalUnit: 'mas',
+    needsBand: false,
     units: [
       { id: 'mas', label: 'mas', toCanonical: 1 },
       { id: 'arcsec', label: 'arcsec', toCanonical: 1000, aliases: ['as', '″', '"'] },
@@ -59,37 +108,80 @@ export const QUANTITIES = {
     hint: 'Measured parallaxes of distant stars can be negative; keep them as published.',
   },
   distance: {
-    id: 'distance', label: 'Distance', symbol: 'd', canonicalUnit: 'pc', needsBand: false, exclusiveMin: 0,
+    id: 'distance',
+    label: 'Distance',
+    symbol: 'd',
+    canonicalUnit: 'pc',
+    needsBand: false,
+    exclusiveMin: 0,
     units: [
       { id: 'pc', label: 'pc', toCanonical: 1 },
       { id: 'kpc', label: 'kpc', toCanonical: 1e3 },
       { id: 'Mpc', label: 'Mpc', toCanonical: 1e6 },
       { id: 'ly', label: 'ly', toCanonical: LIGHT_YEAR.value / PC_M, source: `${LIGHT_YEAR.source}; ${PARSEC.source}` },
-      { id: 'au', label: 'au', toCanonical: ASTRONOMICAL_UNIT.value / PC_M, source: `${ASTRONOMICAL_UNIT.source}; ${PARSEC.source}` },
+      {
+        id: 'au',
+        label: 'au',
+        toCanonical: ASTRONOMICAL_UNIT.value / PC_M,
+        source: `${ASTRONOMICAL_UNIT.source}; ${PARSEC.source}`,
+      },
       { id: 'km', label: 'km', toCanonical: 1000 / PC_M, source: PARSEC.source },
     ],
     hint: 'A measured distance (not one computed from redshift).',
   },
   radius: {
-    id: 'radius', label: 'Radius', symbol: 'R', canonicalUnit: 'km', needsBand: false, exclusiveMin: 0,
+    id: 'radius',
+    label: 'Radius',
+    symbol: 'R',
+    canonicalUnit: 'km',
+    needsBand: false,
+    exclusiveMin: 0,
     units: [
       { id: 'km', label: 'km', toCanonical: 1 },
-      { id: 'R_sun', label: 'R☉ (nominal)', toCanonical: SOLAR_RADIUS.value / 1000, aliases: ['R☉', 'Rsun'], source: SOLAR_RADIUS.source },
+      {
+        id: 'R_sun',
+        label: 'R☉ (nominal)',
+        toCanonical: SOLAR_RADIUS.value / 1000,
+        aliases: ['R☉', 'Rsun'],
+        source: SOLAR_RADIUS.source,
+      },
       { id: 'au', label: 'au', toCanonical: ASTRONOMICAL_UNIT.value / 1000, source: ASTRONOMICAL_UNIT.source },
     ],
     hint: 'Equatorial or mean radius as published.',
   },
   mass: {
-    id: 'mass', label: 'Mass', symbol: 'M', canonicalUnit: 'kg', needsBand: false, exclusiveMin: 0,
+    id: 'mass',
+    label: 'Mass',
+    symbol: 'M',
+    canonicalUnit: 'kg',
+    needsBand: false,
+    exclusiveMin: 0,
     units: [
       { id: 'kg', label: 'kg', toCanonical: 1 },
-      { id: 'M_sun', label: 'M☉ (nominal)', toCanonical: SOLAR_MASS_PARAMETER.value / G, aliases: ['M☉', 'Msun'], source: `${SOLAR_MASS_PARAMETER.source} GM☉ ÷ ${GRAVITATIONAL_CONSTANT.source} G` },
-      { id: 'M_earth', label: 'M⊕ (nominal)', toCanonical: EARTH_MASS_PARAMETER.value / G, aliases: ['M⊕', 'Mearth'], source: `${EARTH_MASS_PARAMETER.source} ÷ ${GRAVITATIONAL_CONSTANT.source} G` },
+      {
+        id: 'M_sun',
+        label: 'M☉ (nominal)',
+        toCanonical: SOLAR_MASS_PARAMETER.value / G,
+        aliases: ['M☉', 'Msun'],
+        source: `${SOLAR_MASS_PARAMETER.source} GM☉ ÷ ${GRAVITATIONAL_CONSTANT.source} G`,
+      },
+      {
+        id: 'M_earth',
+        label: 'M⊕ (nominal)',
+        toCanonical: EARTH_MASS_PARAMETER.value / G,
+        aliases: ['M⊕', 'Mearth'],
+        source: `${EARTH_MASS_PARAMETER.source} ÷ ${GRAVITATIONAL_CONSTANT.source} G`,
+      },
     ],
     hint: 'Solar and Earth masses are the nominal mass parameters divided by G.',
   },
   angular_size: {
-    id: 'angular_size', label: 'Angular size', symbol: 'θ', canonicalUnit: 'arcsec', needsBand: false, exclusiveMin: 0,
+    id: 'angular_size',
+    label: 'Angular size',
+    symbol: 'θ',
+    canonicalUnit: 'arcsec',
+    needsBand: false,
+    exclusiveMin: 0,
     units: [
       { id: 'arcsec', label: 'arcsec', toCanonical: 1, aliases: ['″', '"'] },
       { id: 'arcmin', label: 'arcmin', toCanonical: 60, aliases: ['′', "'"] },

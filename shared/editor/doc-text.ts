@@ -23,16 +23,25 @@ export function blockTexts(doc: JSONContent, statementText?: (id: string) => str
   const inline = (node: JSONContent): string => {
     if (node.type === 'text') return node.text ?? '';
     if (node.type === 'hardBreak') return '\n';
-    if (node.type === 'statementRef') return statementText ? statementText(String(node.attrs?.statementId)) : STATEMENT_PLACEHOLDER;
+    if (node.type === 'statementRef')
+      return statementText ? statementText(String(node.attrs?.statementId)) : STATEMENT_PLACEHOLDER;
     return (node.content ?? []).map(inline).join('');
   };
   const visit = (node: JSONContent) => {
     if (node.type && TEXT_BLOCKS.has(node.type)) {
-      blocks.push({ index: blocks.length, type: node.type === 'heading' ? `heading ${node.attrs?.level ?? ''}`.trim() : node.type, text: inline(node) });
+      blocks.push({
+        index: blocks.length,
+        type: node.type === 'heading' ? `heading ${node.attrs?.level ?? ''}`.trim() : node.type,
+        text: inline(node),
+      });
       return;
     }
     if (node.type === 'mediaImage') {
-      blocks.push({ index: blocks.length, type: 'image', text: `[Image${node.attrs?.caption ? `: ${node.attrs.caption}` : ''}]` });
+      blocks.push({
+        index: blocks.length,
+        type: 'image',
+        text: `[Image${node.attrs?.caption ? `: ${node.attrs.caption}` : ''}]`,
+      });
       return;
     }
     if (node.type === 'eyeSafetyNotice') {

@@ -42,7 +42,11 @@ const PLAIN_DEGREES = /^[-−+]?\d[\d,.]*\s?degrees$/i;
 
 /** The key resolutions are stored under: case, spaces and dash kinds do not matter. */
 export function normaliseFlagText(text: string): string {
-  return text.toLowerCase().replace(/[\u2010-\u2015−]/g, '-').replace(/[\s\u00a0\u202f]+/g, ' ').trim();
+  return text
+    .toLowerCase()
+    .replace(/[\u2010-\u2015−]/g, '-')
+    .replace(/[\s\u00a0\u202f]+/g, ' ')
+    .trim();
 }
 
 /**
@@ -75,6 +79,12 @@ export function findNumbersInText(text: string): Array<{ text: string; from: num
  */
 export function checkNumbers(doc: JSONContent): NumberFlag[] {
   return blockTexts(doc).flatMap((block) =>
-    findNumbersInText(block.text).map((m) => ({ text: m.text, normalised: normaliseFlagText(m.text), block: block.index, from: m.from, to: m.to })),
+    findNumbersInText(block.text).map((m) => ({
+      text: m.text,
+      normalised: normaliseFlagText(m.text),
+      block: block.index,
+      from: m.from,
+      to: m.to,
+    })),
   );
 }

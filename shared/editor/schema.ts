@@ -19,14 +19,23 @@ export function getPageSchema(): Schema {
 
 /** What each attribute of our nodes and marks may hold; anything not listed is refused. */
 type AttrRule = (value: unknown) => string | null;
-const nullable = (rule: AttrRule): AttrRule => (v) => (v === null || v === undefined ? null : rule(v));
+const nullable =
+  (rule: AttrRule): AttrRule =>
+  (v) =>
+    v === null || v === undefined ? null : rule(v);
 const mustBeNull: AttrRule = (v) => (v === null || v === undefined ? null : 'must be empty');
 const uuid: AttrRule = (v) => (typeof v === 'string' && UUID.test(v) ? null : 'must be a valid id');
-const text = (max: number): AttrRule => (v) => (typeof v === 'string' && v.length <= max ? null : `must be text of at most ${max} characters`);
+const text =
+  (max: number): AttrRule =>
+  (v) =>
+    typeof v === 'string' && v.length <= max ? null : `must be text of at most ${max} characters`;
 
 const ATTRIBUTES: Record<string, Record<string, AttrRule>> = {
   heading: { level: (v) => (v === 2 || v === 3 ? null : 'must be 2 or 3') },
-  orderedList: { start: (v) => (Number.isInteger(v) && (v as number) >= 0 && (v as number) < 1e6 ? null : 'must be a whole number'), type: nullable(text(4)) },
+  orderedList: {
+    start: (v) => (Number.isInteger(v) && (v as number) >= 0 && (v as number) < 1e6 ? null : 'must be a whole number'),
+    type: nullable(text(4)),
+  },
   statementRef: { statementId: uuid },
   mediaImage: { mediaId: uuid, caption: nullable(text(PageLimits.captionMax)) },
   link: {
@@ -42,7 +51,10 @@ const ATTRIBUTES: Record<string, Record<string, AttrRule>> = {
 export type DocCheck = { ok: true; doc: PMNode } | { ok: false; message: string };
 
 function checkAttrs(kind: 'node' | 'mark', type: string, attrs: unknown, where: string): string | null {
-  if (attrs === undefined || attrs === null) return ATTRIBUTES[type] && kind === 'node' && (type === 'statementRef' || type === 'mediaImage') ? `${where}: the ${type} has no id` : null;
+  if (attrs === undefined || attrs === null)
+    return ATTRIBUTES[type] && kind === 'node' && (type === 'statementRef' || type === 'mediaImage')
+      ? `${where}: the ${type} has no id`
+      : null;
   if (typeof attrs !== 'object' || Array.isArray(attrs)) return `${where}: attributes must be an object`;
   const rules = ATTRIBUTES[type] ?? {};
   for (const [key, value] of Object.entries(attrs)) {
@@ -98,7 +110,13 @@ function walk(node: unknown, schema: Schema, where: string, depth: number): stri
 export function validateDoc(json: unknown): DocCheck {
   const schema = getPageSchema();
   if (!json || typeof json !== 'object' || Array.isArray(json) || (json as { type?: unknown }).type !== 'doc') {
-    return { ok: false, message: typeof json === 'string' ? 'The page body must be editor JSON, not HTML or text. Paste into the editor instead.' : 'The page body must be an editor document (type “doc”).' };
+    return {
+      ok: false,
+      message:
+        typeof json === 'string'
+          ? 'The page body must be editor JSON, not HTML or text. Paste into the editor instead.'
+          : 'The page body must be an editor document (type “doc”).',
+    };
   }
   const problem = walk(json, schema, 'page', 0);
   if (problem) return { ok: false, message: `The page cannot be saved: ${problem}.` };

@@ -30,7 +30,10 @@ function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
   const r = req.H0_range;
   if (r === undefined) return undefined;
   if (!(r.low > 0 && r.low <= H0 && H0 <= r.high)) {
-    throw new CalcError('invalid_model', `H0_range must satisfy 0 < low ≤ H0 ≤ high with H0 = ${H0} (got low ${r.low}, high ${r.high})`);
+    throw new CalcError(
+      'invalid_model',
+      `H0_range must satisfy 0 < low ≤ H0 ≤ high with H0 = ${H0} (got low ${r.low}, high ${r.high})`,
+    );
   }
   return { value: H0, minus: H0 - r.low, plus: r.high - H0, source: 'H0_range in the request' };
 }
@@ -66,7 +69,10 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
   const usesModel = spec.usesModel(present);
   const resolved = usesModel ? resolveModel(req.model) : null;
   if (resolved && spec.flrwOnly && resolved.view.kind === 'hubble_law') {
-    throw new CalcError('not_in_hubble_law', `${quantity} needs a cosmology model; the simple Hubble law has no ${quantity.replaceAll('_', ' ')}`);
+    throw new CalcError(
+      'not_in_hubble_law',
+      `${quantity} needs a cosmology model; the simple Hubble law has no ${quantity.replaceAll('_', ' ')}`,
+    );
   }
   const view = resolved?.view ?? { kind: 'flrw' as const, cosmo: null, H0: 1, sources: {} };
   const h0 = usesModel ? h0Measurement(req, view.H0) : undefined;
@@ -84,13 +90,19 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
     if (outcome.failed > MAX_FAILED_FRACTION * SAMPLES || !(outcome.samples > 0)) {
       const [who] = [...outcome.failures.entries()].sort((a, b) => b[1] - a[1])[0];
       const pct = ((100 * outcome.failed) / SAMPLES).toFixed(1);
-      throw new CalcError('interval_outside_domain', `the uncertainty on ${who} reaches values where ${quantity} is not defined (${pct} % of draws); give a smaller uncertainty`);
+      throw new CalcError(
+        'interval_outside_domain',
+        `the uncertainty on ${who} reaches values where ${quantity} is not defined (${pct} % of draws); give a smaller uncertainty`,
+      );
     }
     interval = { low: outcome.low, high: outcome.high, level: 0.68 };
     steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit));
   }
   // The resolved model's description is shared and frozen; only an H0 range makes it this result's own.
-  const description = resolved && h0 ? { ...resolved.description, H0_range: { low: h0.value - h0.minus, high: h0.value + h0.plus } } : (resolved?.description ?? null);
+  const description =
+    resolved && h0
+      ? { ...resolved.description, H0_range: { low: h0.value - h0.minus, high: h0.value + h0.plus } }
+      : (resolved?.description ?? null);
   return {
     ...(id !== undefined ? { id } : {}),
     quantity,
@@ -124,7 +136,10 @@ export function calculate(request: unknown): CalcResult {
     id = requestId(request);
     const result = compute(parseRequest(request), id);
     if (!allFinite(result)) {
-      throw new CalcError('non_finite_result', `${result.quantity} is not a finite number for these inputs (it overflows or underflows double precision)`);
+      throw new CalcError(
+        'non_finite_result',
+        `${result.quantity} is not a finite number for these inputs (it overflows or underflows double precision)`,
+      );
     }
     return result;
   } catch (e) {
@@ -144,7 +159,9 @@ export function calculateLine(line: string): CalcResult {
   try {
     parsed = JSON.parse(line);
   } catch (e) {
-    return { error: { code: 'invalid_json', message: `the line is not valid JSON: ${e instanceof Error ? e.message : String(e)}` } };
+    return {
+      error: { code: 'invalid_json', message: `the line is not valid JSON: ${e instanceof Error ? e.message : String(e)}` },
+    };
   }
   return calculate(parsed);
 }

@@ -47,7 +47,13 @@ function identity(o: object): number {
  * the band when the draw reads it (a quantity with a band drawn in full; a split run draws the step
  * before the band enters, the absolute magnitude, which a brightness statement draws too).
  */
-function drawsKey(draw: Sampler, view: ModelView, band: number | null, names: string[], all: Record<string, Measurement>): string {
+function drawsKey(
+  draw: Sampler,
+  view: ModelView,
+  band: number | null,
+  names: string[],
+  all: Record<string, Measurement>,
+): string {
   let key = `${identity(draw)}|${identity(view)}|${band ?? ''}`;
   for (const k of names) key += `|${k}=${all[k].value}-${all[k].minus}+${all[k].plus}`;
   return key;
@@ -62,7 +68,13 @@ function drawsKey(draw: Sampler, view: ModelView, band: number | null, names: st
  * @param present names of the inputs given
  * @returns the outcome: interval, draws kept, failures by input
  */
-export function quantityInterval(spec: QuantitySpec, all: Record<string, Measurement>, view: ModelView, band: string | undefined, present: Set<string>): MonteCarloOutcome {
+export function quantityInterval(
+  spec: QuantitySpec,
+  all: Record<string, Measurement>,
+  view: ModelView,
+  band: string | undefined,
+  present: Set<string>,
+): MonteCarloOutcome {
   const names = Object.keys(all);
   const env = sampleEnv(view, band, names);
   const x = DRAW.fill(NaN);
@@ -80,13 +92,14 @@ export function quantityInterval(spec: QuantitySpec, all: Record<string, Measure
     return propagateOne(all.z, last, () => propagate({ ...problem, f: (x) => x[Z], last }));
   }
   const varyH0 = varied.includes(H0_KEY);
-  const prepare = spec.modulusInZ && !varyH0 && varied.includes('z')
-    ? () => {
-        const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
-        const z = all.z;
-        env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
-      }
-    : undefined;
+  const prepare =
+    spec.modulusInZ && !varyH0 && varied.includes('z')
+      ? () => {
+          const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
+          const z = all.z;
+          env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
+        }
+      : undefined;
   const split = spec.split?.applies(present) ? spec.split : undefined;
   const draw = split ? split.before : spec.sample;
   return propagate({

@@ -32,9 +32,21 @@ function resolveFlrw(params: CosmologyParams, label: string, sources: Record<str
   return {
     view: { kind: 'flrw', cosmo, H0: model.H0, sources: allSources },
     description: {
-      name: model.name, label, kind: 'flrw', H0: model.H0, Om0: model.Om0, Ode0: model.Ode0, Ok0: model.Ok0,
-      Ogamma0: model.Ogamma0, Onu0: model.Onu0, Tcmb0: model.Tcmb0, Neff: model.Neff, m_nu: model.m_nu,
-      ...(model.Ob0 !== undefined ? { Ob0: model.Ob0 } : {}), flat: model.flat, sources: allSources,
+      name: model.name,
+      label,
+      kind: 'flrw',
+      H0: model.H0,
+      Om0: model.Om0,
+      Ode0: model.Ode0,
+      Ok0: model.Ok0,
+      Ogamma0: model.Ogamma0,
+      Onu0: model.Onu0,
+      Tcmb0: model.Tcmb0,
+      Neff: model.Neff,
+      m_nu: model.m_nu,
+      ...(model.Ob0 !== undefined ? { Ob0: model.Ob0 } : {}),
+      flat: model.flat,
+      sources: allSources,
     },
   };
 }
@@ -49,11 +61,21 @@ function resolveUncached(model: CalcModel): Resolved {
     const sources = { H0: 'request' };
     return {
       view: { kind: 'hubble_law', cosmo: null, H0: model.H0, sources },
-      description: { name: model.name ?? 'hubble_law', label: 'simple Hubble law d = cz/H0 (classroom model, small z only)', kind: 'hubble_law', H0: model.H0, sources },
+      description: {
+        name: model.name ?? 'hubble_law',
+        label: 'simple Hubble law d = cz/H0 (classroom model, small z only)',
+        kind: 'hubble_law',
+        H0: model.H0,
+        sources,
+      },
     };
   }
   const flat = model.Ode0 === undefined;
-  const sources: Record<string, string> = { H0: 'request', Om0: 'request', Ode0: flat ? 'flat model: Ω_Λ = 1 − Ω_m − Ω_γ − Ω_ν' : 'request' };
+  const sources: Record<string, string> = {
+    H0: 'request',
+    Om0: 'request',
+    Ode0: flat ? 'flat model: Ω_Λ = 1 − Ω_m − Ω_γ − Ω_ν' : 'request',
+  };
   if (model.Tcmb0 !== undefined) sources.Tcmb0 = 'request';
   if (model.Neff !== undefined) sources.Neff = 'request';
   if (model.m_nu !== undefined) sources.m_nu = 'request';

@@ -67,7 +67,16 @@ interface Run {
  * Draws from `run.draw` to the end, keeping results in `out`. Free of try/catch and allocation:
  * a draw that throws leaves `run.draw` pointing at itself for the caller to count and skip.
  */
-function drawAll(run: Run, p: SlotProblem, slots: Int32Array, centre: Float64Array, minus: Float64Array, plus: Float64Array, out: Float64Array, failed: () => void): void {
+function drawAll(
+  run: Run,
+  p: SlotProblem,
+  slots: Int32Array,
+  centre: Float64Array,
+  minus: Float64Array,
+  plus: Float64Array,
+  out: Float64Array,
+  failed: () => void,
+): void {
   const { x, f } = p;
   const n = slots.length;
   const dev = seededDeviates(SAMPLES * n);
@@ -122,7 +131,13 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   const fold = () => propagate({ ...p, f: (x) => last!.map(p.f(x)), last: undefined, drawsKey: undefined });
   const fromSummary = ({ stats }: DrawSummary): MonteCarloOutcome => {
     const at = (rank: number) => stats.get(rank)!;
-    return { low: quantileFromStatistics(SAMPLES, LEVELS[0], last, at), high: quantileFromStatistics(SAMPLES, LEVELS[1], last, at), samples: SAMPLES, failures: new Map(), failed: 0 };
+    return {
+      low: quantileFromStatistics(SAMPLES, LEVELS[0], last, at),
+      high: quantileFromStatistics(SAMPLES, LEVELS[1], last, at),
+      samples: SAMPLES,
+      failures: new Map(),
+      failed: 0,
+    };
   };
   const reused = p.drawsKey === undefined ? undefined : recalledRun(p.drawsKey);
   if (reused) {

@@ -32,7 +32,12 @@ export function selectInPlace(a: Float64Array, k: number, lo: number, hi: number
       const z = Math.log(n);
       const s = 0.5 * Math.exp((2 * z) / 3);
       const sd = 0.5 * Math.sqrt((z * s * (n - s)) / n) * (m - n / 2 < 0 ? -1 : 1);
-      selectInPlace(a, k, Math.max(left, Math.floor(k - (m * s) / n + sd)), Math.min(right, Math.floor(k + ((n - m) * s) / n + sd)));
+      selectInPlace(
+        a,
+        k,
+        Math.max(left, Math.floor(k - (m * s) / n + sd)),
+        Math.min(right, Math.floor(k + ((n - m) * s) / n + sd)),
+      );
     }
     const t = a[k];
     let i = left;
@@ -76,7 +81,12 @@ const IDENTITY: MonotoneMap = { map: (x) => x, decreasing: false };
  * @param last a monotonic map applied to the draws (identity when omitted)
  * @returns the two quantiles
  */
-export function quantilePair(a: Float64Array, pLow: number, pHigh: number, last: MonotoneMap = IDENTITY): { low: number; high: number } {
+export function quantilePair(
+  a: Float64Array,
+  pLow: number,
+  pHigh: number,
+  last: MonotoneMap = IDENTITY,
+): { low: number; high: number } {
   const stats = orderStatistics(a, quantileRanks(a.length, [pLow, pHigh]));
   const at = (rank: number) => stats.get(rank)!;
   return { low: quantileFromStatistics(a.length, pLow, last, at), high: quantileFromStatistics(a.length, pHigh, last, at) };

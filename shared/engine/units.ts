@@ -62,6 +62,10 @@ export function conversionsFor(value: number, unit: string): Conversion[] {
     ];
   }
   if (unit === 'Gyr') return [{ value: gyrToYr(value), unit: 'yr' }];
-  if (unit === 'pc') return [{ value: pcToLy(value), unit: 'ly' }, { value: value * AU_PER_PC, unit: 'au' }];
+  if (unit === 'pc')
+    return [
+      { value: pcToLy(value), unit: 'ly' },
+      { value: value * AU_PER_PC, unit: 'au' },
+    ];
   return [];
 }

@@ -59,7 +59,11 @@ export function fromStep(r: StepResult): WorkingValue {
  * @param step the step, built lazily so sampling pays nothing
  * @returns the step's result value
  */
-export function record(sink: StepSink, value: number, step: () => Omit<Step, 'result'> & { result: Omit<StepResult, 'value'> }): number {
+export function record(
+  sink: StepSink,
+  value: number,
+  step: () => Omit<Step, 'result'> & { result: Omit<StepResult, 'value'> },
+): number {
   if (sink !== null) {
     // The step is built fresh by the closure, so its result can take the value in place.
     const s = step() as Step;

@@ -22,9 +22,15 @@ const sourceUrl = z
   .string({ message: 'Enter the web address the image came from' })
   .trim()
   .max(MediaLimits.sourceUrlMax, `Web addresses are at most ${MediaLimits.sourceUrlMax} characters`)
-  .refine((v) => v === '' || /^https?:\/\/[^\s/$.?#][^\s]*$/i.test(v), 'Enter a full web address starting with https:// or http://');
+  .refine(
+    (v) => v === '' || /^https?:\/\/[^\s/$.?#][^\s]*$/i.test(v),
+    'Enter a full web address starting with https:// or http://',
+  );
 
-const fraction = z.number({ message: 'must be a number from 0 to 1' }).min(0, 'must be from 0 to 1').max(1, 'must be from 0 to 1');
+const fraction = z
+  .number({ message: 'must be a number from 0 to 1' })
+  .min(0, 'must be from 0 to 1')
+  .max(1, 'must be from 0 to 1');
 
 /** Where the subject is, as fractions of the upright image's width and height (0,0 is top left). */
 export const FocalPointSchema = z.object({ x: fraction, y: fraction });
@@ -73,7 +79,12 @@ export const MediaListQuerySchema = z.object({
   object: searchText.optional(),
   credit: searchText.optional(),
   licence: z.enum(['none', ...LICENCE_IDS], { message: 'Choose a licence from the list' }).optional(),
-  page: z.coerce.number({ message: 'must be a page number' }).int('must be a page number').min(1, 'must be 1 or more').max(10_000).optional(),
+  page: z.coerce
+    .number({ message: 'must be a page number' })
+    .int('must be a page number')
+    .min(1, 'must be 1 or more')
+    .max(10_000)
+    .optional(),
 });
 export type MediaListQuery = z.infer<typeof MediaListQuerySchema>;
 

@@ -50,8 +50,18 @@ export type MeasuredInput = z.infer<typeof MeasuredInputSchema>;
 
 /** Numeric input names, for user interfaces and validation. */
 export const CALC_NUMERIC_INPUTS = [
-  'z', 'm', 'extinction', 'alpha', 'parallax_mas', 'lookback_gyr', 'distance_mpc',
-  'm1', 'm2', 'delta_mag', 'distance_1', 'distance_2',
+  'z',
+  'm',
+  'extinction',
+  'alpha',
+  'parallax_mas',
+  'lookback_gyr',
+  'distance_mpc',
+  'm1',
+  'm2',
+  'delta_mag',
+  'distance_1',
+  'distance_2',
 ] as const;
 export type CalcNumericInput = (typeof CALC_NUMERIC_INPUTS)[number];
 

@@ -1,7 +1,18 @@
 import { z } from 'zod';
 
 /** The fields a CSV column can be mapped to; `object`, `quantity` and `value` are required. */
-export const IMPORT_FIELDS = ['object', 'quantity', 'value', 'unit', 'band', 'uncertainty', 'uncertaintyMinus', 'uncertaintyPlus', 'source', 'note'] as const;
+export const IMPORT_FIELDS = [
+  'object',
+  'quantity',
+  'value',
+  'unit',
+  'band',
+  'uncertainty',
+  'uncertaintyMinus',
+  'uncertaintyPlus',
+  'source',
+  'note',
+] as const;
 export type ImportField = (typeof IMPORT_FIELDS)[number];
 
 export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
@@ -18,7 +29,9 @@ export const IMPORT_FIELD_LABELS: Record<ImportField, string> = {
 };
 
 /** Field → column header; sent as a JSON text field beside the file. Unmapped fields are left out. */
-export const ImportMappingSchema = z.partialRecord(z.enum(IMPORT_FIELDS, { message: `Fields are ${IMPORT_FIELDS.join(', ')}` }), z.string().max(200)).optional();
+export const ImportMappingSchema = z
+  .partialRecord(z.enum(IMPORT_FIELDS, { message: `Fields are ${IMPORT_FIELDS.join(', ')}` }), z.string().max(200))
+  .optional();
 export type ImportMapping = Partial<Record<ImportField, string>>;
 
 /** Why a row was rejected. */

@@ -19,14 +19,17 @@ export const DurationSchema = z
   .finite('The duration is a number of seconds')
   .transform((v) => Math.min(ChannelLimits.durationMax, Math.max(ChannelLimits.durationMin, Math.round(v))));
 
-const instant = z.iso.datetime({ offset: true, message: 'Give the date and time as ISO 8601, e.g. 2026-12-24T18:00:00Z' }).nullable();
+const instant = z.iso
+  .datetime({ offset: true, message: 'Give the date and time as ISO 8601, e.g. 2026-12-24T18:00:00Z' })
+  .nullable();
 const caption = z.string().trim().max(ChannelLimits.captionMax, `Captions are at most ${ChannelLimits.captionMax} characters`);
 const statementIds = z
   .array(z.uuid({ message: 'Each statement must be a valid id' }))
   .max(ChannelLimits.statementsPerSlideMax, `A slide shows at most ${ChannelLimits.statementsPerSlideMax} statements`)
   .refine((ids) => new Set(ids).size === ids.length, 'A statement is chosen twice');
 
-const windowOk = (v: { startsAt?: string | null; endsAt?: string | null }) => !v.startsAt || !v.endsAt || Date.parse(v.endsAt) > Date.parse(v.startsAt);
+const windowOk = (v: { startsAt?: string | null; endsAt?: string | null }) =>
+  !v.startsAt || !v.endsAt || Date.parse(v.endsAt) > Date.parse(v.startsAt);
 const windowIssue = { message: 'The end must be after the start', path: ['endsAt'] };
 
 export const ChannelCreateSchema = z.object({ venueId: z.uuid({ message: 'Choose a venue' }), name });
@@ -44,8 +47,19 @@ export const SlideCreateSchema = z
   .discriminatedUnion(
     'kind',
     [
-      z.object({ kind: z.literal('page'), pageId: z.uuid({ message: 'Choose a published page' }), statementIds: statementIds.default([]), mediaId: z.uuid().nullable().optional(), ...timing }),
-      z.object({ kind: z.literal('image'), mediaId: z.uuid({ message: 'Choose an image' }), caption: caption.default(''), ...timing }),
+      z.object({
+        kind: z.literal('page'),
+        pageId: z.uuid({ message: 'Choose a published page' }),
+        statementIds: statementIds.default([]),
+        mediaId: z.uuid().nullable().optional(),
+        ...timing,
+      }),
+      z.object({
+        kind: z.literal('image'),
+        mediaId: z.uuid({ message: 'Choose an image' }),
+        caption: caption.default(''),
+        ...timing,
+      }),
       z.object({ kind: z.literal('sky_tonight'), ...timing }),
     ],
     { message: 'The slide kind must be page, image or sky_tonight' },
@@ -54,7 +68,12 @@ export const SlideCreateSchema = z
 export type SlideCreateInput = z.infer<typeof SlideCreateSchema>;
 
 export const SlideUpdateSchema = z
-  .object({ ...timing, caption: caption.optional(), statementIds: statementIds.optional(), mediaId: z.uuid({ message: 'Choose an image' }).nullable().optional() })
+  .object({
+    ...timing,
+    caption: caption.optional(),
+    statementIds: statementIds.optional(),
+    mediaId: z.uuid({ message: 'Choose an image' }).nullable().optional(),
+  })
   .refine(windowOk, windowIssue);
 export type SlideUpdateInput = z.infer<typeof SlideUpdateSchema>;
 
@@ -64,7 +83,10 @@ export const SlideOrderSchema = z.object({
 export type SlideOrderInput = z.infer<typeof SlideOrderSchema>;
 
 export const ChannelScreensSchema = z.object({
-  screenIds: z.array(z.uuid({ message: 'Each screen must be a valid id' })).max(200).refine((ids) => new Set(ids).size === ids.length, 'A screen is listed twice'),
+  screenIds: z
+    .array(z.uuid({ message: 'Each screen must be a valid id' }))
+    .max(200)
+    .refine((ids) => new Set(ids).size === ids.length, 'A screen is listed twice'),
 });
 export type ChannelScreensInput = z.infer<typeof ChannelScreensSchema>;
 
@@ -113,6 +135,12 @@ export interface ChannelDetailDto extends ChannelRowDto {
 
 /** What a slide can be made from: published pages (with their statements) and publishable images. */
 export interface SlideSourcesDto {
-  pages: Array<{ id: string; title: string; objectName: string; publishedAt: string | null; statements: Array<{ id: string; text: string }> }>;
+  pages: Array<{
+    id: string;
+    title: string;
+    objectName: string;
+    publishedAt: string | null;
+    statements: Array<{ id: string; text: string }>;
+  }>;
   media: Array<{ id: string; thumbnailUrl: string | null; altText: string; credit: string; licence: string }>;
 }

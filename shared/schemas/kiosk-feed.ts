@@ -39,7 +39,18 @@ export interface FeedSky {
   dark_from: string;
   darkness: string;
   moon: { phase: string; illuminated_percent: number; rise: string; set: string };
-  planets: Array<{ name: string; up_after_dusk: boolean; rise: string; highest: string; set: string; direction: string; altitude_deg: number; distance: string; light_time: string; visibility: string }>;
+  planets: Array<{
+    name: string;
+    up_after_dusk: boolean;
+    rise: string;
+    highest: string;
+    set: string;
+    direction: string;
+    altitude_deg: number;
+    distance: string;
+    light_time: string;
+    visibility: string;
+  }>;
   computed_at: string;
 }
 

@@ -21,10 +21,17 @@ export const KioskPairSchema = z.object({
 export type KioskPairInput = z.infer<typeof KioskPairSchema>;
 
 export const KioskHeartbeatSchema = z.object({
-  playerVersion: z.string().trim().max(KioskLimits.playerVersionMax, `The player version is at most ${KioskLimits.playerVersionMax} characters`).optional(),
+  playerVersion: z
+    .string()
+    .trim()
+    .max(KioskLimits.playerVersionMax, `The player version is at most ${KioskLimits.playerVersionMax} characters`)
+    .optional(),
   showing: z
     .record(z.string(), z.unknown())
-    .refine((v) => JSON.stringify(v).length <= KioskLimits.showingMaxBytes, `What is showing is at most ${KioskLimits.showingMaxBytes} characters of JSON`)
+    .refine(
+      (v) => JSON.stringify(v).length <= KioskLimits.showingMaxBytes,
+      `What is showing is at most ${KioskLimits.showingMaxBytes} characters of JSON`,
+    )
     .optional(),
   /** When given, must be this token's own screen. */
   screenId: z.string().optional(),

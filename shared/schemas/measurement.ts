@@ -5,7 +5,15 @@ import { CatalogueLimits } from '../validations.ts';
 import type { SourceRefDto } from './source.ts';
 
 /** Why a measurement was refused; CSV reports group rejected rows by these. */
-export type MeasurementProblem = 'unknown_quantity' | 'non_numeric_value' | 'unit_mismatch' | 'band_missing' | 'band_not_allowed' | 'invalid_band' | 'invalid_uncertainty' | 'out_of_range';
+export type MeasurementProblem =
+  | 'unknown_quantity'
+  | 'non_numeric_value'
+  | 'unit_mismatch'
+  | 'band_missing'
+  | 'band_not_allowed'
+  | 'invalid_band'
+  | 'invalid_uncertainty'
+  | 'out_of_range';
 
 /** Reads a number from a form or a CSV cell: '' means none; the typographic minus is accepted. */
 export function readNumber(value: unknown): number | null | 'invalid' {
@@ -37,7 +45,10 @@ export const MeasurementInputSchema = z
     uncertainty: numberish,
     uncertaintyMinus: numberish,
     uncertaintyPlus: numberish,
-    sourceId: z.uuid({ message: 'Choose a source from the list' }).nullish().or(z.literal('').transform(() => null)),
+    sourceId: z
+      .uuid({ message: 'Choose a source from the list' })
+      .nullish()
+      .or(z.literal('').transform(() => null)),
     note: z.string().trim().max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`).nullish(),
   })
   .transform((input, ctx) => {
@@ -47,24 +58,54 @@ export const MeasurementInputSchema = z
       return z.NEVER;
     }
     const value = readNumber(input.value);
-    if (value === 'invalid') issue(ctx, 'value', `"${String(input.value).trim()}" is not a number; write it like 0.158, −1.46 or 2.5e-3.`, 'non_numeric_value');
+    if (value === 'invalid')
+      issue(
+        ctx,
+        'value',
+        `"${String(input.value).trim()}" is not a number; write it like 0.158, −1.46 or 2.5e-3.`,
+        'non_numeric_value',
+      );
     else if (value === null) issue(ctx, 'value', 'Enter a value.', 'non_numeric_value');
     const unit = findUnit(quantity, input.unit);
-    if (!unit) issue(ctx, 'unit', `"${(input.unit ?? '').trim()}" is not a unit of ${quantity.label.toLowerCase()}; use ${describeUnits(quantity)}.`, 'unit_mismatch');
+    if (!unit)
+      issue(
+        ctx,
+        'unit',
+        `"${(input.unit ?? '').trim()}" is not a unit of ${quantity.label.toLowerCase()}; use ${describeUnits(quantity)}.`,
+        'unit_mismatch',
+      );
     const band = (input.band ?? '').trim() || null;
     if (quantity.needsBand && !band) issue(ctx, 'band', `${quantity.label} needs a band, e.g. V.`, 'band_missing');
     if (!quantity.needsBand && band) issue(ctx, 'band', `${quantity.label} has no band; leave it empty.`, 'band_not_allowed');
-    if (band && !BAND_PATTERN.test(band)) issue(ctx, 'band', 'A band is a short name of letters and digits, e.g. V, B, Ks_2MASS.', 'invalid_band');
+    if (band && !BAND_PATTERN.test(band))
+      issue(ctx, 'band', 'A band is a short name of letters and digits, e.g. V, B, Ks_2MASS.', 'invalid_band');
 
     const sigma = readNumber(input.uncertainty);
     const minus = readNumber(input.uncertaintyMinus);
     const plus = readNumber(input.uncertaintyPlus);
-    for (const [path, v] of [['uncertainty', sigma], ['uncertaintyMinus', minus], ['uncertaintyPlus', plus]] as const) {
+    for (const [path, v] of [
+      ['uncertainty', sigma],
+      ['uncertaintyMinus', minus],
+      ['uncertaintyPlus', plus],
+    ] as const) {
       if (v === 'invalid') issue(ctx, path, 'Uncertainties are numbers, e.g. 0.02.', 'invalid_uncertainty');
-      else if (v !== null && v < 0) issue(ctx, path, 'Uncertainties are zero or more; the sign is in the field (minus or plus).', 'invalid_uncertainty');
+      else if (v !== null && v < 0)
+        issue(ctx, path, 'Uncertainties are zero or more; the sign is in the field (minus or plus).', 'invalid_uncertainty');
     }
-    if (sigma !== null && (minus !== null || plus !== null)) issue(ctx, 'uncertainty', 'Give either a symmetric uncertainty (±) or a minus and a plus, not both.', 'invalid_uncertainty');
-    if ((minus === null) !== (plus === null)) issue(ctx, minus === null ? 'uncertaintyMinus' : 'uncertaintyPlus', 'An asymmetric uncertainty needs both a minus and a plus.', 'invalid_uncertainty');
+    if (sigma !== null && (minus !== null || plus !== null))
+      issue(
+        ctx,
+        'uncertainty',
+        'Give either a symmetric uncertainty (±) or a minus and a plus, not both.',
+        'invalid_uncertainty',
+      );
+    if ((minus === null) !== (plus === null))
+      issue(
+        ctx,
+        minus === null ? 'uncertaintyMinus' : 'uncertaintyPlus',
+        'An asymmetric uncertainty needs both a minus and a plus.',
+        'invalid_uncertainty',
+      );
     if (typeof value !== 'number' || !unit) return z.NEVER;
 
     const canonical = value * unit.toCanonical;
@@ -116,7 +157,10 @@ export type MeasurementPreferredInput = z.infer<typeof MeasurementPreferredSchem
 /** A reviewer's decision on a proposed measurement; declining needs a reason. */
 export const MeasurementReviewSchema = z
   .object({ decision: z.enum(['accept', 'decline'], { message: 'Decision is accept or decline' }), reason: reason.optional() })
-  .refine((v) => v.decision === 'accept' || (v.reason ?? '').length > 0, { path: ['reason'], message: 'Say why the measurement is declined.' });
+  .refine((v) => v.decision === 'accept' || (v.reason ?? '').length > 0, {
+    path: ['reason'],
+    message: 'Say why the measurement is declined.',
+  });
 export type MeasurementReviewInput = z.infer<typeof MeasurementReviewSchema>;
 
 /** Retiring keeps the measurement and its history; a reason is required. */

@@ -15,7 +15,11 @@ export const PAGE_STATUS_LABELS: Record<PageStatus, string> = {
   needs_recheck: 'Needs re-check',
 };
 
-const title = z.string({ message: 'Enter a title' }).trim().min(1, 'Enter a title').max(PageLimits.titleMax, `Titles are at most ${PageLimits.titleMax} characters`);
+const title = z
+  .string({ message: 'Enter a title' })
+  .trim()
+  .min(1, 'Enter a title')
+  .max(PageLimits.titleMax, `Titles are at most ${PageLimits.titleMax} characters`);
 
 export const PageCreateSchema = z.object({
   title,
@@ -46,7 +50,11 @@ export const PageListQuerySchema = z.object({
 export type PageListQuery = z.infer<typeof PageListQuerySchema>;
 
 export const PageCommentSchema = z.object({
-  body: z.string({ message: 'Write a comment' }).trim().min(1, 'Write a comment').max(PageLimits.commentMax, `Comments are at most ${PageLimits.commentMax} characters`),
+  body: z
+    .string({ message: 'Write a comment' })
+    .trim()
+    .min(1, 'Write a comment')
+    .max(PageLimits.commentMax, `Comments are at most ${PageLimits.commentMax} characters`),
 });
 
 export const SendBackSchema = z.object({

@@ -17,7 +17,12 @@ export const SettingsUpdateSchema = z
   .object({
     defaultBand: z.string().min(1).max(20).optional(),
     defaultLocale: z.enum(STATEMENT_LOCALES, { message: `Locale must be one of ${STATEMENT_LOCALES.join(', ')}` }).optional(),
-    eyeSafetyNotice: z.string().trim().min(40, 'The eye-safety notice must say enough to be useful (40 characters or more)').max(2000).optional(),
+    eyeSafetyNotice: z
+      .string()
+      .trim()
+      .min(40, 'The eye-safety notice must say enough to be useful (40 characters or more)')
+      .max(2000)
+      .optional(),
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type SettingsUpdateInput = z.infer<typeof SettingsUpdateSchema>;

@@ -10,7 +10,10 @@ export const SkyObjectKindSchema = z.enum(SKY_OBJECT_KINDS, { message: `Kind mus
 function splitDesignations(value: unknown): unknown {
   if (value === undefined || value === null) return [];
   if (typeof value !== 'string') return value;
-  return value.split(/[\n,;]/).map((d) => d.trim()).filter(Boolean);
+  return value
+    .split(/[\n,;]/)
+    .map((d) => d.trim())
+    .filter(Boolean);
 }
 
 const coordinate = z.union([z.string(), z.number()]).nullish();
@@ -21,17 +24,31 @@ const coordinate = z.union([z.string(), z.number()]).nullish();
  */
 export const SkyObjectInputSchema = z
   .object({
-    name: z.string({ message: 'Enter a name' }).trim().min(1, 'Enter a name').max(CatalogueLimits.objectNameMax, `Names are at most ${CatalogueLimits.objectNameMax} characters`),
+    name: z
+      .string({ message: 'Enter a name' })
+      .trim()
+      .min(1, 'Enter a name')
+      .max(CatalogueLimits.objectNameMax, `Names are at most ${CatalogueLimits.objectNameMax} characters`),
     designations: z.preprocess(
       splitDesignations,
       z
-        .array(z.string().trim().min(1).max(CatalogueLimits.designationMax, `Each designation is at most ${CatalogueLimits.designationMax} characters`))
+        .array(
+          z
+            .string()
+            .trim()
+            .min(1)
+            .max(CatalogueLimits.designationMax, `Each designation is at most ${CatalogueLimits.designationMax} characters`),
+        )
         .max(CatalogueLimits.designationsMax, `At most ${CatalogueLimits.designationsMax} designations`),
     ),
     kind: SkyObjectKindSchema,
     ra: coordinate,
     dec: coordinate,
-    notes: z.string().trim().max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`).default(''),
+    notes: z
+      .string()
+      .trim()
+      .max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`)
+      .default(''),
   })
   .transform((input, ctx) => {
     const blank = (v: unknown) => v === undefined || v === null || (typeof v === 'string' && v.trim() === '');
@@ -39,13 +56,21 @@ export const SkyObjectInputSchema = z
     const base = { name: input.name, designations, kind: input.kind, notes: input.notes };
     if (MOVING_KINDS.includes(input.kind)) {
       if (!blank(input.ra) || !blank(input.dec)) {
-        ctx.addIssue({ code: 'custom', path: ['ra'], message: 'Planets, moons and the Sun move across the sky: leave the position empty.' });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['ra'],
+          message: 'Planets, moons and the Sun move across the sky: leave the position empty.',
+        });
         return z.NEVER;
       }
       return { ...base, raDeg: null, decDeg: null };
     }
-    const ra = blank(input.ra) ? ({ ok: false, message: 'Enter a right ascension (J2000).' } as const) : parseRightAscension(input.ra!);
-    const dec = blank(input.dec) ? ({ ok: false, message: 'Enter a declination (J2000).' } as const) : parseDeclination(input.dec!);
+    const ra = blank(input.ra)
+      ? ({ ok: false, message: 'Enter a right ascension (J2000).' } as const)
+      : parseRightAscension(input.ra!);
+    const dec = blank(input.dec)
+      ? ({ ok: false, message: 'Enter a declination (J2000).' } as const)
+      : parseDeclination(input.dec!);
     if (!ra.ok) ctx.addIssue({ code: 'custom', path: ['ra'], message: ra.message });
     if (!dec.ok) ctx.addIssue({ code: 'custom', path: ['dec'], message: dec.message });
     if (!ra.ok || !dec.ok) return z.NEVER;
@@ -74,8 +99,17 @@ export const SkyObjectListQuerySchema = z.object({
   missing: z.enum(MISSING_FILTERS, { message: `Missing must be one of ${MISSING_FILTERS.join(', ')}` }).optional(),
   sort: z.enum(SKY_OBJECT_SORTS, { message: `Sort by one of ${SKY_OBJECT_SORTS.join(', ')}` }).default('name'),
   dir: z.enum(['asc', 'desc'], { message: 'Direction is asc or desc' }).default('asc'),
-  page: z.coerce.number({ message: 'Page must be a number' }).int('Page must be a whole number').min(1, 'Pages start at 1').default(1),
-  pageSize: z.coerce.number({ message: 'Page size must be a number' }).int().min(1).max(CatalogueLimits.pageSizeMax, `At most ${CatalogueLimits.pageSizeMax} rows a page`).default(50),
+  page: z.coerce
+    .number({ message: 'Page must be a number' })
+    .int('Page must be a whole number')
+    .min(1, 'Pages start at 1')
+    .default(1),
+  pageSize: z.coerce
+    .number({ message: 'Page size must be a number' })
+    .int()
+    .min(1)
+    .max(CatalogueLimits.pageSizeMax, `At most ${CatalogueLimits.pageSizeMax} rows a page`)
+    .default(50),
 });
 export type SkyObjectListQuery = z.output<typeof SkyObjectListQuerySchema>;
 

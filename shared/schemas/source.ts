@@ -11,17 +11,30 @@ const optionalText = (max: number, label: string) =>
 
 /** A source as entered: a citation, and any of bibcode, DOI, URL, catalogue name and retrieval date. */
 export const SourceInputSchema = z.object({
-  citation: z.string({ message: 'Enter the citation' }).trim().min(3, 'Enter the citation (authors, year, journal or title)').max(CatalogueLimits.citationMax, `Citations are at most ${CatalogueLimits.citationMax} characters`),
+  citation: z
+    .string({ message: 'Enter the citation' })
+    .trim()
+    .min(3, 'Enter the citation (authors, year, journal or title)')
+    .max(CatalogueLimits.citationMax, `Citations are at most ${CatalogueLimits.citationMax} characters`),
   bibcode: z
     .string()
     .trim()
     .nullish()
     .transform((v) => (v ? v : null))
-    .refine((v) => v === null || /^\d{4}[A-Za-z0-9&.]{14}[A-Z.]$/.test(v), 'A bibcode has 19 characters, e.g. 2018ApJS..236...47W'),
+    .refine(
+      (v) => v === null || /^\d{4}[A-Za-z0-9&.]{14}[A-Z.]$/.test(v),
+      'A bibcode has 19 characters, e.g. 2018ApJS..236...47W',
+    ),
   doi: optionalText(CatalogueLimits.doiMax, 'A DOI')
     .transform((v) => (v ? v.replace(/^https?:\/\/(dx\.)?doi\.org\//i, '').replace(/^doi:\s*/i, '') : null))
-    .refine((v) => v === null || /^10\.\d{4,9}\/\S+$/.test(v), 'A DOI starts with 10. and a slash, e.g. 10.1051/0004-6361/201833910'),
-  url: optionalText(CatalogueLimits.urlMax, 'A URL').refine((v) => v === null || /^https?:\/\/[^\s]+$/i.test(v), 'A URL starts with http:// or https://'),
+    .refine(
+      (v) => v === null || /^10\.\d{4,9}\/\S+$/.test(v),
+      'A DOI starts with 10. and a slash, e.g. 10.1051/0004-6361/201833910',
+    ),
+  url: optionalText(CatalogueLimits.urlMax, 'A URL').refine(
+    (v) => v === null || /^https?:\/\/[^\s]+$/i.test(v),
+    'A URL starts with http:// or https://',
+  ),
   catalogueName: optionalText(CatalogueLimits.catalogueNameMax, 'A catalogue name'),
   retrievedOn: z
     .string()

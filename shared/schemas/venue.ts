@@ -15,9 +15,18 @@ const number = (what: string) =>
     z.number({ message: `Enter the ${what} as a number` }).refine(Number.isFinite, `Enter the ${what} as a number`),
   );
 
-const latitude = number('latitude').pipe(z.number().min(-90, 'Latitude is from −90 (south pole) to 90 (north pole)').max(90, 'Latitude is from −90 (south pole) to 90 (north pole)'));
-const longitude = number('longitude').pipe(z.number().min(-180, 'Longitude is from −180 to 180 (east positive)').max(180, 'Longitude is from −180 to 180 (east positive)'));
-const elevationM = number('elevation').pipe(z.number().min(-500, 'Elevation is from −500 to 9000 metres').max(9000, 'Elevation is from −500 to 9000 metres'));
+const latitude = number('latitude').pipe(
+  z
+    .number()
+    .min(-90, 'Latitude is from −90 (south pole) to 90 (north pole)')
+    .max(90, 'Latitude is from −90 (south pole) to 90 (north pole)'),
+);
+const longitude = number('longitude').pipe(
+  z.number().min(-180, 'Longitude is from −180 to 180 (east positive)').max(180, 'Longitude is from −180 to 180 (east positive)'),
+);
+const elevationM = number('elevation').pipe(
+  z.number().min(-500, 'Elevation is from −500 to 9000 metres').max(9000, 'Elevation is from −500 to 9000 metres'),
+);
 
 /** An IANA time zone the runtime knows, stored under its canonical name. */
 export const TimeZoneSchema = z
@@ -27,18 +36,33 @@ export const TimeZoneSchema = z
   .transform((value, ctx) => {
     const canonical = canonicalTimeZone(value);
     if (!canonical) {
-      ctx.addIssue({ code: 'custom', message: `"${value.slice(0, 64)}" is not a time zone; use an IANA name such as Europe/London` });
+      ctx.addIssue({
+        code: 'custom',
+        message: `"${value.slice(0, 64)}" is not a time zone; use an IANA name such as Europe/London`,
+      });
       return z.NEVER;
     }
     return canonical;
   });
 
-export const VenueCreateSchema = z.object({ name, latitude, longitude, elevationM: elevationM.default(0), timeZone: TimeZoneSchema });
+export const VenueCreateSchema = z.object({
+  name,
+  latitude,
+  longitude,
+  elevationM: elevationM.default(0),
+  timeZone: TimeZoneSchema,
+});
 export type VenueCreateInput = z.input<typeof VenueCreateSchema>;
 export type VenueCreateValues = z.output<typeof VenueCreateSchema>;
 
 export const VenueUpdateSchema = z
-  .object({ name: name.optional(), latitude: latitude.optional(), longitude: longitude.optional(), elevationM: elevationM.optional(), timeZone: TimeZoneSchema.optional() })
+  .object({
+    name: name.optional(),
+    latitude: latitude.optional(),
+    longitude: longitude.optional(),
+    elevationM: elevationM.optional(),
+    timeZone: TimeZoneSchema.optional(),
+  })
   .refine((v) => Object.values(v).some((x) => x !== undefined), { message: 'Nothing to change' });
 export type VenueUpdateValues = z.output<typeof VenueUpdateSchema>;
 

@@ -9,10 +9,22 @@ export const wrap360 = (deg: number): number => ((deg % 360) + 360) % 360;
 export const wrap180 = (deg: number): number => wrap360(deg + 180) - 180;
 
 const POINTS = [
-  'north', 'north-north-east', 'north-east', 'east-north-east',
-  'east', 'east-south-east', 'south-east', 'south-south-east',
-  'south', 'south-south-west', 'south-west', 'west-south-west',
-  'west', 'west-north-west', 'north-west', 'north-north-west',
+  'north',
+  'north-north-east',
+  'north-east',
+  'east-north-east',
+  'east',
+  'east-south-east',
+  'south-east',
+  'south-south-east',
+  'south',
+  'south-south-west',
+  'south-west',
+  'west-south-west',
+  'west',
+  'west-north-west',
+  'north-west',
+  'north-north-west',
 ] as const;
 
 /** One of the sixteen compass points, in words. */

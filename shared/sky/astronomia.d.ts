@@ -77,9 +77,15 @@ declare module 'astronomia/sidereal' {
 
 declare module 'astronomia/solar' {
   /** The Sun's apparent geocentric position by VSOP87 (Meeus ch. 25): ra, dec (radians), range (au). */
-  export function apparentEquatorialVSOP87(earth: import('astronomia/planetposition').Planet, jde: number): { ra: number; dec: number; range: number };
+  export function apparentEquatorialVSOP87(
+    earth: import('astronomia/planetposition').Planet,
+    jde: number,
+  ): { ra: number; dec: number; range: number };
   /** The Sun's apparent ecliptic longitude and latitude by VSOP87, and range in au. */
-  export function apparentVSOP87(earth: import('astronomia/planetposition').Planet, jde: number): { lon: number; lat: number; range: number };
+  export function apparentVSOP87(
+    earth: import('astronomia/planetposition').Planet,
+    jde: number,
+  ): { lon: number; lat: number; range: number };
 }
 
 declare module 'astronomia/moonposition' {

@@ -88,7 +88,12 @@ const POLAR_LATITUDE = 89.99;
 const SAMPLE_MS = 20 * 60_000;
 
 /** Rises and sets found where altitude − h0 changes sign, refined by bisection to a second. */
-function crossingsBySampling(observer: Observer, startMs: number, endMs: number, body: Trackable): { rises: number[]; sets: number[] } {
+function crossingsBySampling(
+  observer: Observer,
+  startMs: number,
+  endMs: number,
+  body: Trackable,
+): { rises: number[]; sets: number[] } {
   const above = (ms: number) => altitudeAt(observer, ms, body).altitudeDeg - body.h0Deg(Math.floor(jdFromMs(ms) - 0.5) + 0.5);
   const rises: number[] = [];
   const sets: number[] = [];
@@ -97,11 +102,11 @@ function crossingsBySampling(observer: Observer, startMs: number, endMs: number,
   for (let t1 = startMs + SAMPLE_MS; t0 < endMs; t1 += SAMPLE_MS) {
     const end = Math.min(t1, endMs);
     const v1 = above(end);
-    if ((v0 <= 0) !== (v1 <= 0)) {
+    if (v0 <= 0 !== v1 <= 0) {
       let [lo, hi] = [t0, end];
       while (hi - lo > 1000) {
         const mid = (lo + hi) / 2;
-        if ((above(mid) <= 0) === (v0 <= 0)) lo = mid;
+        if (above(mid) <= 0 === v0 <= 0) lo = mid;
         else hi = mid;
       }
       (v0 <= 0 ? rises : sets).push(Math.round((lo + hi) / 2));
@@ -131,4 +136,3 @@ export function altitudeAt(observer: Observer, ms: number, body: Trackable): { a
   const dec = interp(p[0].decDeg, p[1].decDeg, p[2].decDeg);
   return toHorizontal(ra * DEG, dec * DEG, observer, jd);
 }
-

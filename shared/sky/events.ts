@@ -30,7 +30,12 @@ const sentence = (s: string) => `${s.charAt(0).toUpperCase()}${s.slice(1)}.`;
  * @param timeZone venue time zone
  * @param localDate the night's date
  */
-export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, timeZone: string, localDate: string): RiseTransitSetTimes {
+export function riseTransitSetTimes(
+  visit: NightVisit,
+  state: HorizonState,
+  timeZone: string,
+  localDate: string,
+): RiseTransitSetTimes {
   const when = (ms: number | null, missing: string) => skyEvent(ms, timeZone, localDate, missing);
   if (state === 'always-up') {
     const words = 'Does not set: above the horizon all day and night (circumpolar)';
@@ -58,7 +63,11 @@ export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, time
     };
   }
   const rise = when(visit.rise, visit.laterRise !== null ? 'Up at noon' : `Does not rise ${WINDOW_WORDS}`);
-  const noTransit = !visit.transitsKnown ? `No transit ${WINDOW_WORDS}` : visit.rise === null ? 'Highest before noon' : 'No transit before it sets';
+  const noTransit = !visit.transitsKnown
+    ? `No transit ${WINDOW_WORDS}`
+    : visit.rise === null
+      ? 'Highest before noon'
+      : 'No transit before it sets';
   const transit = when(visit.transit, noTransit);
   const followed = visit.rise === null ? WINDOW_WORDS : `before noon on ${localDateOf(visit.searchedToMs, timeZone)}`;
   const set = when(visit.set, `Does not set ${followed}`);
@@ -68,9 +77,19 @@ export function riseTransitSetTimes(visit: NightVisit, state: HorizonState, time
   const laterRise = visit.laterRise === null ? null : when(visit.laterRise, '');
   if (!rise.utc) {
     const again = laterRise ? `rises again ${laterRise.text}` : 'does not rise again before noon tomorrow';
-    return { state, rise, transit, set, earlierSet, laterRise, summary: sentence(`above the horizon at noon${highest}${setting}; ${again}`) };
+    return {
+      state,
+      rise,
+      transit,
+      set,
+      earlierSet,
+      laterRise,
+      summary: sentence(`above the horizon at noon${highest}${setting}; ${again}`),
+    };
   }
   // A stay under way at noon that ends before the rise is told apart, never paired with it.
-  const start = earlierSet ? `above the horizon at noon and sets ${earlierSet.text}; rises again ${rise.text}` : `rises ${rise.text}`;
+  const start = earlierSet
+    ? `above the horizon at noon and sets ${earlierSet.text}; rises again ${rise.text}`
+    : `rises ${rise.text}`;
   return { state, rise, transit, set, earlierSet, laterRise, summary: sentence(`${start}${highest}${setting}`) };
 }

@@ -30,7 +30,10 @@ export function toHorizontal(raRad: number, decRad: number, observer: Observer, 
   const lat = observer.latitude * DEG;
   const altitude = Math.asin(Math.sin(lat) * Math.sin(decRad) + Math.cos(lat) * Math.cos(decRad) * Math.cos(hourAngle));
   // (13.5) measures azimuth from the south; adding 180° gives the compass bearing from the north.
-  const azimuthFromSouth = Math.atan2(Math.sin(hourAngle), Math.cos(hourAngle) * Math.sin(lat) - Math.tan(decRad) * Math.cos(lat));
+  const azimuthFromSouth = Math.atan2(
+    Math.sin(hourAngle),
+    Math.cos(hourAngle) * Math.sin(lat) - Math.tan(decRad) * Math.cos(lat),
+  );
   return { altitudeDeg: altitude / DEG, azimuthDeg: wrap360(azimuthFromSouth / DEG + 180) };
 }
 
@@ -41,4 +44,4 @@ export function toHorizontal(raRad: number, decRad: number, observer: Observer, 
  * @param parallaxDeg equatorial horizontal parallax
  */
 export const topocentricAltitude = (altitudeDeg: number, parallaxDeg: number): number =>
-  altitudeDeg - (parallaxDeg * Math.cos(altitudeDeg * DEG));
+  altitudeDeg - parallaxDeg * Math.cos(altitudeDeg * DEG);

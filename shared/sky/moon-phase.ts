@@ -12,10 +12,19 @@ const PRINCIPAL_PHASE_DEG = 6;
  * @param sun apparent place of the Sun (distance in au)
  */
 export function moonPhase(moon: ApparentPlace, sun: ApparentPlace) {
-  const i = phaseAngleEquatorial({ ra: moon.ra, dec: moon.dec, range: moon.distanceAu }, { ra: sun.ra, dec: sun.dec, range: sun.distanceAu });
+  const i = phaseAngleEquatorial(
+    { ra: moon.ra, dec: moon.dec, range: moon.distanceAu },
+    { ra: sun.ra, dec: sun.dec, range: sun.distanceAu },
+  );
   const illuminatedFraction = (1 + Math.cos(i)) / 2; // (48.1)
   const elongationDeg = wrap360((moon.lon - sun.lon) / DEG);
-  return { phaseAngleDeg: i / DEG, illuminatedFraction, elongationDeg, waxing: elongationDeg < 180, phaseName: phaseName(elongationDeg) };
+  return {
+    phaseAngleDeg: i / DEG,
+    illuminatedFraction,
+    elongationDeg,
+    waxing: elongationDeg < 180,
+    phaseName: phaseName(elongationDeg),
+  };
 }
 
 /**

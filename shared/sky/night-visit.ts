@@ -48,7 +48,8 @@ export function nightVisit(observer: Observer, search: VisitSearch, body: Tracka
   const known = { transitsKnown: events.transits.length > 0, searchedToMs: search.followingEndMs };
   const rise = events.rises[0] ?? null;
   const firstSet = events.sets[0] ?? null;
-  const upAtNoonTillDark = rise !== null && firstSet !== null && firstSet < rise && search.sunsetMs !== null && firstSet > search.sunsetMs;
+  const upAtNoonTillDark =
+    rise !== null && firstSet !== null && firstSet < rise && search.sunsetMs !== null && firstSet > search.sunsetMs;
   if (rise === null || upAtNoonTillDark) {
     const transit = events.transits.find((t) => firstSet === null || t < firstSet) ?? null;
     return { ...known, rise: null, transit, set: firstSet, earlierSet: null, laterRise: upAtNoonTillDark ? rise : null };

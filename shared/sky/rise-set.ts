@@ -76,7 +76,7 @@ export function riseTransitSet(input: DayInput): DayEvents {
   const lat = input.latitude * DEG;
   const h0 = input.h0Deg * DEG;
   const dt = input.deltaTSec / 86_400;
-  const m0 = (((ra[1] - input.longitude - input.theta0Deg) / 360) % 1 + 1) % 1;
+  const m0 = ((((ra[1] - input.longitude - input.theta0Deg) / 360) % 1) + 1) % 1;
 
   const at = (m: number) => {
     const n = m + dt;

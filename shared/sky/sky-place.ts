@@ -36,7 +36,6 @@ export function horizonState(events: WindowEvents, altitudeMidDeg: number, h0Deg
   return altitudeMidDeg > h0Deg ? 'always-up' : 'always-down';
 }
 
-
 /** What every body's computation shares for the night. */
 export interface NightContext {
   startMs: number;
@@ -54,7 +53,6 @@ export interface NightContext {
   timeZone: string;
   localDate: string;
 }
-
 
 /** Angle between two places on the sky, degrees. */
 export function angularSeparationDeg(a: ApparentPlace, b: ApparentPlace): number {
@@ -98,14 +96,22 @@ export function describeVisibility(v: VisibilityInput): { upAfterDusk: boolean; 
     // Setting before dawn is what tells an evening planet from one that stays up all night.
     const setsInDark = v.events.sets.find((t) => t > v.night.obs.ms && t < dark.to);
     const setting = setsInDark === undefined ? '' : `; sets ${when(setsInDark)}`;
-    return { upAfterDusk, visibility: `${Math.max(0, Math.round(v.place.altitudeDeg))}° up in the ${v.place.direction} at ${v.night.obsLocalTime}${setting}.` };
+    return {
+      upAfterDusk,
+      visibility: `${Math.max(0, Math.round(v.place.altitudeDeg))}° up in the ${v.place.direction} at ${v.night.obsLocalTime}${setting}.`,
+    };
   }
   if (!upAfterDusk) return { upAfterDusk, visibility: 'Not above the horizon between dusk and dawn.' };
   const laterRise = v.events.rises.find((t) => t > v.night.obs.ms && t < dark.to);
   if (laterRise !== undefined) {
     // Rising in the last few hours of darkness makes it a morning object.
     const morning = dark.to - laterRise < (dark.to - dark.from) / 3;
-    return { upAfterDusk, visibility: morning ? `Morning sky: rises ${when(laterRise)}, before dawn.` : `Rises ${when(laterRise)}; below the horizon at ${v.night.obsLocalTime}.` };
+    return {
+      upAfterDusk,
+      visibility: morning
+        ? `Morning sky: rises ${when(laterRise)}, before dawn.`
+        : `Rises ${when(laterRise)}; below the horizon at ${v.night.obsLocalTime}.`,
+    };
   }
   const earlierSet = v.events.sets.find((t) => t > dark.from && t < v.night.obs.ms);
   if (earlierSet !== undefined) return { upAfterDusk, visibility: `Low after dusk; sets ${when(earlierSet)}.` };

@@ -58,12 +58,30 @@ function extremes(observer: Observer, startMs: number, endMs: number, ephemeris:
   return { lowest, highest };
 }
 
-function darkness(astro: Crossing, nautical: Crossing, civil: Crossing, sunset: Crossing, lowestDeg: number, highestDeg: number): { kind: DarknessKind; text: string } {
-  if (highestDeg < STANDARD_ALTITUDE.astronomicalTwilight) return { kind: 'dark-all-day', text: 'Dark all day and night: the Sun stays more than 18° below the horizon (polar night).' };
-  if (astro.dusk !== null) return { kind: 'astronomical', text: 'Astronomical darkness tonight: the Sun goes more than 18° below the horizon.' };
-  if (nautical.dusk !== null) return { kind: 'nautical', text: 'No astronomical darkness tonight: the Sun stays less than 18° below the horizon, so the faintest stars stay hidden.' };
-  if (civil.dusk !== null) return { kind: 'civil', text: 'No astronomical or nautical darkness tonight: the Sun stays less than 12° below the horizon.' };
-  if (sunset.dusk !== null || lowestDeg < STANDARD_ALTITUDE.sun) return { kind: 'twilight-all-night', text: 'Twilight all night: the Sun stays less than 6° below the horizon.' };
+function darkness(
+  astro: Crossing,
+  nautical: Crossing,
+  civil: Crossing,
+  sunset: Crossing,
+  lowestDeg: number,
+  highestDeg: number,
+): { kind: DarknessKind; text: string } {
+  if (highestDeg < STANDARD_ALTITUDE.astronomicalTwilight)
+    return { kind: 'dark-all-day', text: 'Dark all day and night: the Sun stays more than 18° below the horizon (polar night).' };
+  if (astro.dusk !== null)
+    return { kind: 'astronomical', text: 'Astronomical darkness tonight: the Sun goes more than 18° below the horizon.' };
+  if (nautical.dusk !== null)
+    return {
+      kind: 'nautical',
+      text: 'No astronomical darkness tonight: the Sun stays less than 18° below the horizon, so the faintest stars stay hidden.',
+    };
+  if (civil.dusk !== null)
+    return {
+      kind: 'civil',
+      text: 'No astronomical or nautical darkness tonight: the Sun stays less than 12° below the horizon.',
+    };
+  if (sunset.dusk !== null || lowestDeg < STANDARD_ALTITUDE.sun)
+    return { kind: 'twilight-all-night', text: 'Twilight all night: the Sun stays less than 6° below the horizon.' };
   return { kind: 'no-night', text: 'The Sun does not set tonight (midnight sun).' };
 }
 
@@ -73,7 +91,14 @@ function darkness(astro: Crossing, nautical: Crossing, civil: Crossing, sunset: 
  * @param startMs local noon on the date
  * @param endMs local noon the next day
  */
-export function sunNight(observer: Observer, startMs: number, endMs: number, ephemeris: Ephemeris, timeZone: string, localDate: string): SunNight {
+export function sunNight(
+  observer: Observer,
+  startMs: number,
+  endMs: number,
+  ephemeris: Ephemeris,
+  timeZone: string,
+  localDate: string,
+): SunNight {
   const sunset = crossing(observer, startMs, endMs, ephemeris, STANDARD_ALTITUDE.sun);
   const civil = crossing(observer, startMs, endMs, ephemeris, STANDARD_ALTITUDE.civilTwilight);
   const nautical = crossing(observer, startMs, endMs, ephemeris, STANDARD_ALTITUDE.nauticalTwilight);
@@ -84,7 +109,8 @@ export function sunNight(observer: Observer, startMs: number, endMs: number, eph
   const missing = (h0: number, evening: boolean, name: string): string => {
     const isSun = h0 === STANDARD_ALTITUDE.sun;
     if (lowest.altitudeDeg > h0) {
-      if (isSun) return evening ? 'The Sun does not set tonight (midnight sun)' : 'No sunrise: the Sun stays up all night (midnight sun)';
+      if (isSun)
+        return evening ? 'The Sun does not set tonight (midnight sun)' : 'No sunrise: the Sun stays up all night (midnight sun)';
       return `No ${name}: the Sun stays less than ${-h0}° below the horizon`;
     }
     if (highest.altitudeDeg < h0) {

@@ -57,7 +57,14 @@ export function wallClock(ms: number, timeZone: string): WallClock {
   for (const p of formatterFor(timeZone).formatToParts(new Date(ms))) {
     if (p.type !== 'literal') parts[p.type] = Number(p.value);
   }
-  return { year: parts.year, month: parts.month, day: parts.day, hour: parts.hour % 24, minute: parts.minute, second: parts.second };
+  return {
+    year: parts.year,
+    month: parts.month,
+    day: parts.day,
+    hour: parts.hour % 24,
+    minute: parts.minute,
+    second: parts.second,
+  };
 }
 
 /** Offset of local time from UTC at an instant, in milliseconds (east positive). */

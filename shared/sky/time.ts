@@ -22,4 +22,13 @@ export function deltaTSeconds(jd: number): number {
 /** Julian Ephemeris Day (TT) for a Julian Day (UT). */
 export const jdeFromJd = (jd: number): number => jd + deltaTSeconds(jd) / 86_400;
 
-export { canonicalTimeZone, isLocalDate, localDateOf, localTimeOf, localToMs, nextDate, wallClock, zoneOffsetMs } from './time-zone.ts';
+export {
+  canonicalTimeZone,
+  isLocalDate,
+  localDateOf,
+  localTimeOf,
+  localToMs,
+  nextDate,
+  wallClock,
+  zoneOffsetMs,
+} from './time-zone.ts';

@@ -94,7 +94,19 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   };
   observation.text = `${observation.text}, ${BASIS_WORDS[obs.basis]}`;
 
-  const night: NightContext = { startMs, endMs, followingEndMs, sunsetMs: sun.dusk.sunset, midMs, obs, obsLocalTime: observation.localTime ?? '', obsJde, sunAtObs, timeZone, localDate };
+  const night: NightContext = {
+    startMs,
+    endMs,
+    followingEndMs,
+    sunsetMs: sun.dusk.sunset,
+    midMs,
+    obs,
+    obsLocalTime: observation.localTime ?? '',
+    obsJde,
+    sunAtObs,
+    timeZone,
+    localDate,
+  };
   const planets = PLANET_IDS.map((id) => planetTonight(id, ephemeris, observer, night));
   const moon = moonTonight(ephemeris, observer, night);
 
@@ -110,7 +122,8 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
     moon,
     planets,
     method: {
-      ephemeris: 'VSOP87 (Bretagnon & Francou 1988) for the planets and the Sun; Meeus ch. 47 (ELP-2000/82 terms) for the Moon; via astronomia 4.2.0',
+      ephemeris:
+        'VSOP87 (Bretagnon & Francou 1988) for the planets and the Sun; Meeus ch. 47 (ELP-2000/82 terms) for the Moon; via astronomia 4.2.0',
       algorithms: [
         'Apparent places: light time, aberration, FK5 correction and nutation (Meeus ch. 22, 23, 32, 33)',
         'Rising, transit and setting: Meeus ch. 15 with standard altitudes −0°34′ (planets), −0°50′ (Sun), 0.7275π − 0°34′ (Moon)',
@@ -140,7 +153,17 @@ function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, n
   const now = ephemeris.planet(id, night.obsJde);
   const place = placeFor(now, observer, night.obs.ms, h0);
   const elongationDeg = angularSeparationDeg(now, night.sunAtObs);
-  const { upAfterDusk, visibility } = describeVisibility({ observer, night, track, events, state, place, h0, elongationDeg, minElongationDeg: 10 });
+  const { upAfterDusk, visibility } = describeVisibility({
+    observer,
+    night,
+    track,
+    events,
+    state,
+    place,
+    h0,
+    elongationDeg,
+    minElongationDeg: 10,
+  });
   return {
     id,
     name: PLANET_NAMES[id],

@@ -36,7 +36,11 @@ export function checkSkyRequest(request: SkyRequest): SkyRequest {
     throw new SkyInputError('elevationM', 'Elevation must be a number of metres from −500 to 9000.');
   }
   const timeZone = canonicalTimeZone(request.timeZone);
-  if (!timeZone) throw new SkyInputError('timeZone', `"${String(request.timeZone)}" is not a time zone this system knows; use an IANA name such as Europe/London.`);
+  if (!timeZone)
+    throw new SkyInputError(
+      'timeZone',
+      `"${String(request.timeZone)}" is not a time zone this system knows; use an IANA name such as Europe/London.`,
+    );
   if (typeof request.localDate !== 'string' || !isLocalDate(request.localDate)) {
     throw new SkyInputError('localDate', 'The date must be a real calendar date written YYYY-MM-DD, between 1800 and 2200.');
   }

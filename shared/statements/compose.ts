@@ -48,8 +48,20 @@ export function compose(args: ComposeArgs): TemplateSuccess {
       { symbol: 'value', name: 'computed value', value: args.value, unit: args.unit, source: 'previous step' },
       ...(args.interval
         ? [
-            { symbol: 'low', name: '68 % interval, lower end', value: args.interval.low, unit: args.unit, source: 'uncertainty step' },
-            { symbol: 'high', name: '68 % interval, upper end', value: args.interval.high, unit: args.unit, source: 'uncertainty step' },
+            {
+              symbol: 'low',
+              name: '68 % interval, lower end',
+              value: args.interval.low,
+              unit: args.unit,
+              source: 'uncertainty step',
+            },
+            {
+              symbol: 'high',
+              name: '68 % interval, upper end',
+              value: args.interval.high,
+              unit: args.unit,
+              source: 'uncertainty step',
+            },
           ]
         : []),
     ],
@@ -78,7 +90,10 @@ export function derivedStep(step: Omit<Step, 'constants'> & { constants?: Step['
 }
 
 /** Maps an interval through a monotonic function (ordering the ends if it decreases). */
-export function mapInterval(interval: { low: number; high: number } | undefined, fn: (x: number) => number): { low: number; high: number } | null {
+export function mapInterval(
+  interval: { low: number; high: number } | undefined,
+  fn: (x: number) => number,
+): { low: number; high: number } | null {
   if (!interval) return null;
   const a = fn(interval.low);
   const b = fn(interval.high);
@@ -94,6 +109,8 @@ export function cosmologyFootnote(model: ResolvedModel | null) {
         ? `Calculé avec la loi de Hubble simple (H0 = ${model.H0}), un modèle d'enseignement valable seulement pour les faibles décalages vers le rouge.`
         : `Worked out with the simple Hubble law (H0 = ${model.H0}), a classroom model that only holds for small redshifts.`;
     }
-    return locale.startsWith('fr') ? `Calculé avec le modèle cosmologique ${model.label}.` : `Worked out with the ${model.label} cosmology.`;
+    return locale.startsWith('fr')
+      ? `Calculé avec le modèle cosmologique ${model.label}.`
+      : `Worked out with the ${model.label} cosmology.`;
   };
 }

@@ -31,18 +31,50 @@ export function distanceToday(ctx: TemplateContext): DistanceToday {
   const m = basis.measurement;
   if (basis.kind === 'z') {
     const r = run({ quantity: 'proper_distance', inputs: { z: asInput(m) }, model: ctx.model });
-    return { mpc: r.value, interval: r.interval ?? null, working: r.working, warnings: r.warnings, inputs: [used(m)], model: r.model, basis: 'z' };
+    return {
+      mpc: r.value,
+      interval: r.interval ?? null,
+      working: r.working,
+      warnings: r.warnings,
+      inputs: [used(m)],
+      model: r.model,
+      basis: 'z',
+    };
   }
   if (basis.kind === 'parallax') {
     const r = run({ quantity: 'parallax_distance', inputs: { parallax_mas: asInput(m) } });
-    return { mpc: r.value * 1e-6, interval: mapInterval(r.interval, (pc) => pc * 1e-6), working: r.working, warnings: r.warnings, inputs: [used(m)], model: null, basis: 'parallax' };
+    return {
+      mpc: r.value * 1e-6,
+      interval: mapInterval(r.interval, (pc) => pc * 1e-6),
+      working: r.working,
+      warnings: r.warnings,
+      inputs: [used(m)],
+      model: null,
+      basis: 'parallax',
+    };
   }
   const step = derivedStep({
     title: 'Distance from the catalogue',
     formula: 'd [Mpc] = d [pc] × 10⁻⁶',
-    inputs: [{ symbol: 'd', name: 'preferred distance', value: m.value, unit: 'pc', source: `${m.source.citation} (measurement ${m.id})` }],
+    inputs: [
+      {
+        symbol: 'd',
+        name: 'preferred distance',
+        value: m.value,
+        unit: 'pc',
+        source: `${m.source.citation} (measurement ${m.id})`,
+      },
+    ],
     result: { symbol: 'd', name: 'distance', value: m.value * 1e-6, unit: 'Mpc' },
     note: 'A directly measured distance; no cosmology is involved at this range.',
   });
-  return { mpc: m.value * 1e-6, interval: mapInterval(intervalOf(m), (pc) => pc * 1e-6), working: [step], warnings: [], inputs: [used(m)], model: null, basis: 'distance' };
+  return {
+    mpc: m.value * 1e-6,
+    interval: mapInterval(intervalOf(m), (pc) => pc * 1e-6),
+    working: [step],
+    warnings: [],
+    inputs: [used(m)],
+    model: null,
+    basis: 'distance',
+  };
 }

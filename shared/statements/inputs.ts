@@ -9,7 +9,8 @@ export class TemplateProblem extends Error {
   }
 }
 
-export const missing = (what: string[], reason: string) => new TemplateProblem({ ok: false, code: 'missing_input', reason, missing: what });
+export const missing = (what: string[], reason: string) =>
+  new TemplateProblem({ ok: false, code: 'missing_input', reason, missing: what });
 
 /** The preferred measurement of a quantity (and band), if any. */
 export function find(ctx: TemplateContext, quantity: string, band?: string): StatementMeasurement | undefined {
@@ -65,7 +66,10 @@ export function distanceBasis(ctx: TemplateContext): DistanceBasis | undefined {
 export function requireDistance(ctx: TemplateContext): DistanceBasis {
   const basis = distanceBasis(ctx);
   if (!basis) {
-    throw missing(['redshift', 'distance', 'parallax'], 'Needs a preferred redshift (0.01 or more), a distance or a parallax for this object.');
+    throw missing(
+      ['redshift', 'distance', 'parallax'],
+      'Needs a preferred redshift (0.01 or more), a distance or a parallax for this object.',
+    );
   }
   return basis;
 }
@@ -81,7 +85,11 @@ export function distanceInputs(basis: DistanceBasis): Partial<Record<'z' | 'dist
 export function run(request: CalcRequest): CalcSuccess {
   const result = calculate(request);
   if ('error' in result) {
-    throw new TemplateProblem({ ok: false, code: 'calculation_failed', reason: `The calculation failed: ${result.error.message}.` });
+    throw new TemplateProblem({
+      ok: false,
+      code: 'calculation_failed',
+      reason: `The calculation failed: ${result.error.message}.`,
+    });
   }
   return result;
 }

@@ -27,7 +27,12 @@ function formatter(locale: StatementLocale, significantFigures: number, compact:
   const key = `${locale}|${significantFigures}|${compact}`;
   let f = formatters.get(key);
   if (!f) {
-    f = new Intl.NumberFormat(locale, compact ? { notation: 'compact', compactDisplay: 'long', maximumSignificantDigits: significantFigures } : { maximumSignificantDigits: significantFigures });
+    f = new Intl.NumberFormat(
+      locale,
+      compact
+        ? { notation: 'compact', compactDisplay: 'long', maximumSignificantDigits: significantFigures }
+        : { maximumSignificantDigits: significantFigures },
+    );
     formatters.set(key, f);
   }
   return f;
@@ -41,7 +46,11 @@ function formatter(locale: StatementLocale, significantFigures: number, compact:
  * @param locale the reader's locale
  * @returns the text and the value it stands for after rounding
  */
-export function formatApproximate(value: number, significantFigures: number, locale: StatementLocale): { text: string; shown: number } {
+export function formatApproximate(
+  value: number,
+  significantFigures: number,
+  locale: StatementLocale,
+): { text: string; shown: number } {
   const shown = roundToSignificant(value, significantFigures);
   const abs = Math.abs(shown);
   if (abs < 1e6) {

@@ -29,15 +29,30 @@ export function choosePrecision(value: number, interval?: { low: number; high: n
     return {
       significantFigures: 2,
       relativeUncertainty: null,
-      reason: 'No uncertainty is known for the inputs, so the precision is unknown; shown to 2 significant figures (our rule for unknown precision).',
+      reason:
+        'No uncertainty is known for the inputs, so the precision is unknown; shown to 2 significant figures (our rule for unknown precision).',
     };
   }
   const halfWidth = Math.max(Math.abs(interval.high - value), Math.abs(value - interval.low));
   const relative = halfWidth / Math.abs(value);
   const pct = (relative * 100).toPrecision(2);
-  if (relative > 0.3) return { significantFigures: 1, relativeUncertainty: relative, reason: `Relative uncertainty ${pct} % (above 30 %): 1 significant figure.` };
-  if (relative >= 0.03) return { significantFigures: 2, relativeUncertainty: relative, reason: `Relative uncertainty ${pct} % (3–30 %): 2 significant figures.` };
-  return { significantFigures: 3, relativeUncertainty: relative, reason: `Relative uncertainty ${pct} % (below 3 %): 3 significant figures.` };
+  if (relative > 0.3)
+    return {
+      significantFigures: 1,
+      relativeUncertainty: relative,
+      reason: `Relative uncertainty ${pct} % (above 30 %): 1 significant figure.`,
+    };
+  if (relative >= 0.03)
+    return {
+      significantFigures: 2,
+      relativeUncertainty: relative,
+      reason: `Relative uncertainty ${pct} % (3–30 %): 2 significant figures.`,
+    };
+  return {
+    significantFigures: 3,
+    relativeUncertainty: relative,
+    reason: `Relative uncertainty ${pct} % (below 3 %): 3 significant figures.`,
+  };
 }
 
 /** Rounds to n significant figures (for comparing and storing the shown value). */

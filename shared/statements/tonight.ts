@@ -31,12 +31,22 @@ export function requirePlanet(ctx: TemplateContext): PlanetId {
 }
 
 /** The venue and its night, or a missing-input refusal that says why they are needed. */
-export function requireVenueNight(ctx: TemplateContext, planet: PlanetId): { venue: StatementVenue; night: StatementNight; distanceAu: number } {
-  if (!ctx.venue) throw missing(['venue'], 'Needs a venue: the distance is worked out for one place and night. Choose the venue the statement is for.');
+export function requireVenueNight(
+  ctx: TemplateContext,
+  planet: PlanetId,
+): { venue: StatementVenue; night: StatementNight; distanceAu: number } {
+  if (!ctx.venue)
+    throw missing(
+      ['venue'],
+      'Needs a venue: the distance is worked out for one place and night. Choose the venue the statement is for.',
+    );
   const night = ctx.night;
   const distanceAu = night?.planets.find((p) => p.id === planet)?.distanceAu;
   if (!night || distanceAu === undefined || !Number.isFinite(distanceAu) || distanceAu <= 0) {
-    throw missing(['sky'], `Needs the sky tonight for ${ctx.venue.name}, with ${PLANET_NAMES[planet]}’s distance; it could not be computed.`);
+    throw missing(
+      ['sky'],
+      `Needs the sky tonight for ${ctx.venue.name}, with ${PLANET_NAMES[planet]}’s distance; it could not be computed.`,
+    );
   }
   return { venue: ctx.venue, night, distanceAu };
 }

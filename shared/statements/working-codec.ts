@@ -92,7 +92,10 @@ function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
  * @param idOf names a skeleton (a stable hash of its JSON)
  * @returns what the statement stores, and every skeleton it refers to by id
  */
-export function packWorking(steps: Step[], idOf: (skeleton: SkeletonJson) => string): { stored: StoredWorking; skeletons: Map<string, SkeletonJson> } {
+export function packWorking(
+  steps: Step[],
+  idOf: (skeleton: SkeletonJson) => string,
+): { stored: StoredWorking; skeletons: Map<string, SkeletonJson> } {
   let known = skeletonsBySignature.get(idOf);
   if (!known) skeletonsBySignature.set(idOf, (known = new Map()));
   const skeletons = new Map<string, SkeletonJson>();
@@ -185,7 +188,13 @@ export function unpackWorking(stored: unknown, skeletonOf: (id: string) => Skele
     const fill = (text: string): string => (text.includes(HOLE) ? text.replaceAll(HOLE, () => String(take())) : text);
     const value = (v: SkeletonValue): WorkingValue => {
       const raw = take();
-      return { symbol: v.symbol, name: fill(v.name), value: v.text ? String(raw) : Number(raw), unit: v.unit, source: fill(v.source) };
+      return {
+        symbol: v.symbol,
+        name: fill(v.name),
+        value: v.text ? String(raw) : Number(raw),
+        unit: v.unit,
+        source: fill(v.source),
+      };
     };
     // The same reading order as packWorking: inputs, constants, result name, result, note.
     const inputs = skeleton.inputs.map(value);

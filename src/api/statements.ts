@@ -3,7 +3,12 @@
  * statement (the statements pages, the page editor and review), so it sits outside the features.
  */
 import { keepPreviousData, queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { StatementCreateInput, StatementDto, StatementStatusValue, StatementTemplateDto } from '@shared/schemas/statement.ts';
+import type {
+  StatementCreateInput,
+  StatementDto,
+  StatementStatusValue,
+  StatementTemplateDto,
+} from '@shared/schemas/statement.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 
 /** What the statement list can be narrowed by. */
@@ -24,19 +29,30 @@ const toQuery = (f: StatementFilters) => {
 };
 
 export const statementsQueryOptions = (filters: StatementFilters) =>
-  queryOptions({ queryKey: ['statements', 'list', filters], queryFn: () => api.get<StatementPage>(`/statements${toQuery(filters)}`), placeholderData: keepPreviousData });
+  queryOptions({
+    queryKey: ['statements', 'list', filters],
+    queryFn: () => api.get<StatementPage>(`/statements${toQuery(filters)}`),
+    placeholderData: keepPreviousData,
+  });
 
 /** One page of statements matching the filters (the previous page stays on screen while the next loads). */
 export const useStatements = (filters: StatementFilters) => useQuery(statementsQueryOptions(filters));
 
 export const statementQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['statements', 'one', id], queryFn: async () => (await api.get<ApiData<StatementDto>>(`/statements/${id}`)).data });
+  queryOptions({
+    queryKey: ['statements', 'one', id],
+    queryFn: async () => (await api.get<ApiData<StatementDto>>(`/statements/${id}`)).data,
+  });
 
 /** One statement with its texts and working. */
 export const useStatement = (id: string) => useQuery(statementQueryOptions(id));
 
 export const statementTemplatesQueryOptions = () =>
-  queryOptions({ queryKey: ['statement-templates'], queryFn: async () => (await api.get<ApiData<StatementTemplateDto[]>>('/statement-templates')).data, staleTime: Infinity });
+  queryOptions({
+    queryKey: ['statement-templates'],
+    queryFn: async () => (await api.get<ApiData<StatementTemplateDto[]>>('/statement-templates')).data,
+    staleTime: Infinity,
+  });
 
 /** The statement templates a writer can choose from (they change only with a release). */
 export const useStatementTemplates = () => useQuery(statementTemplatesQueryOptions());
@@ -53,8 +69,11 @@ function useStatementMutation<T>(fn: (arg: T) => Promise<StatementDto>) {
 }
 
 /** Works out a new statement, or finds the existing one for the same object and template. */
-export const useCreateStatement = () => useStatementMutation(async (input: StatementCreateInput) => (await api.post<ApiData<StatementDto>>('/statements', input)).data);
+export const useCreateStatement = () =>
+  useStatementMutation(async (input: StatementCreateInput) => (await api.post<ApiData<StatementDto>>('/statements', input)).data);
 /** Accepts a statement's new wording (the server decides who may). */
-export const useAcceptStatement = () => useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/accept`)).data);
+export const useAcceptStatement = () =>
+  useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/accept`)).data);
 /** Works a statement out again now. */
-export const useRecomputeStatement = () => useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/recompute`)).data);
+export const useRecomputeStatement = () =>
+  useStatementMutation(async (id: string) => (await api.post<ApiData<StatementDto>>(`/statements/${id}/recompute`)).data);

@@ -16,7 +16,11 @@ class ErrorBoundary extends Component<{ children: ReactNode }, { failed: boolean
       <div role="alert" className="mx-auto max-w-lg p-10 text-ink">
         <h1 className="text-xl font-semibold">Something went wrong on this screen</h1>
         <p className="mt-2 text-sm text-muted">Nothing you saved is lost. Reload the page to carry on.</p>
-        <button type="button" className="mt-4 rounded-md bg-accent px-3 py-2 text-sm text-on-accent" onClick={() => location.reload()}>
+        <button
+          type="button"
+          className="mt-4 rounded-md bg-accent px-3 py-2 text-sm text-on-accent"
+          onClick={() => location.reload()}
+        >
           Reload
         </button>
       </div>

@@ -29,7 +29,11 @@ const router = createBrowserRouter([
       { path: paths.catalogueObject.path, lazy: () => import('./routes/catalogue/catalogue-object.tsx') },
       { path: paths.sources.path, lazy: () => import('./routes/catalogue/sources.tsx') },
       {
-        element: <RequireRole roles={['admin', 'editor']}><OutletPassThrough /></RequireRole>,
+        element: (
+          <RequireRole roles={['admin', 'editor']}>
+            <OutletPassThrough />
+          </RequireRole>
+        ),
         children: [
           { path: paths.venues.path, lazy: () => import('./routes/venues/venue-list.tsx') },
           { path: paths.venue.path, lazy: () => import('./routes/venues/venue-detail.tsx') },
@@ -39,7 +43,11 @@ const router = createBrowserRouter([
       },
       {
         path: 'admin',
-        element: <RequireRole roles={['admin']}><OutletPassThrough /></RequireRole>,
+        element: (
+          <RequireRole roles={['admin']}>
+            <OutletPassThrough />
+          </RequireRole>
+        ),
         children: [
           { path: 'organisation', lazy: () => import('./routes/admin/organisation.tsx') },
           { path: 'users', lazy: () => import('./routes/admin/users.tsx') },

@@ -1,7 +1,10 @@
 /** Every client URL, written once. */
 export const paths = {
   home: { path: '/', href: () => '/' },
-  signIn: { path: '/sign-in', href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in') },
+  signIn: {
+    path: '/sign-in',
+    href: (next?: string) => (next && next !== '/' ? `/sign-in?next=${encodeURIComponent(next)}` : '/sign-in'),
+  },
   welcome: { path: '/welcome' },
   resetPassword: { path: '/reset-password' },
   account: { path: '/account', href: () => '/account' },

@@ -9,7 +9,11 @@ export interface PageEditorContextValue {
   openStatement: (statementId: string) => void;
 }
 
-export const PageEditorContext = createContext<PageEditorContextValue>({ locale: 'en-GB', eyeSafetyNotice: '', openStatement: () => undefined });
+export const PageEditorContext = createContext<PageEditorContextValue>({
+  locale: 'en-GB',
+  eyeSafetyNotice: '',
+  openStatement: () => undefined,
+});
 
 /** The page's locale, notice text and the "show working" action, for node views. */
 export const usePageEditorContext = () => useContext(PageEditorContext);

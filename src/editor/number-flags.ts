@@ -28,7 +28,8 @@ export function flagRanges(doc: PMNode): FlagRange[] {
       else if (child.type.name === 'hardBreak') text += '\n';
       else text += STATEMENT_PLACEHOLDER.repeat(child.nodeSize);
     });
-    for (const m of findNumbersInText(text)) ranges.push({ text: m.text, normalised: normaliseFlagText(m.text), from: pos + 1 + m.from, to: pos + 1 + m.to });
+    for (const m of findNumbersInText(text))
+      ranges.push({ text: m.text, normalised: normaliseFlagText(m.text), from: pos + 1 + m.from, to: pos + 1 + m.to });
     return false;
   });
   return ranges;
@@ -43,7 +44,12 @@ export const NumberFlags = Extension.create({
     const build = (doc: PMNode) =>
       DecorationSet.create(
         doc,
-        flagRanges(doc).map((r) => Decoration.inline(r.from, r.to, { class: 'number-flag', title: 'Hand-typed number: make it a statement, or a reviewer marks it as not measured' })),
+        flagRanges(doc).map((r) =>
+          Decoration.inline(r.from, r.to, {
+            class: 'number-flag',
+            title: 'Hand-typed number: make it a statement, or a reviewer marks it as not measured',
+          }),
+        ),
       );
     return [
       new Plugin<DecorationSet>({

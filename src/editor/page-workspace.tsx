@@ -29,7 +29,17 @@ export interface WorkspaceHandle {
  * The writing desk: title, toolbar, the page in serif with live statements and the number check,
  * autosave with a local copy, and a side column for flags, statements and their working.
  */
-export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { page: PageDto; eyeSafetyNotice: string; onSaved: (page: PageDto) => void; handleRef: React.MutableRefObject<WorkspaceHandle | null> }) {
+export function PageWorkspace({
+  page,
+  eyeSafetyNotice,
+  onSaved,
+  handleRef,
+}: {
+  page: PageDto;
+  eyeSafetyNotice: string;
+  onSaved: (page: PageDto) => void;
+  handleRef: React.MutableRefObject<WorkspaceHandle | null>;
+}) {
   const [title, setTitle] = useState(page.title);
   const titleRef = useRef(page.title);
   const [picker, setPicker] = useState<{ replace?: FlagRange } | null>(null);
@@ -44,7 +54,10 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
     content: page.doc as JSONContent,
     editable,
     immediatelyRender: true,
-    editorProps: { attributes: { class: 'page-prose', 'aria-label': 'Page text', role: 'textbox', 'aria-multiline': 'true' }, transformPastedHTML: cleanPastedHtml },
+    editorProps: {
+      attributes: { class: 'page-prose', 'aria-label': 'Page text', role: 'textbox', 'aria-multiline': 'true' },
+      transformPastedHTML: cleanPastedHtml,
+    },
     onUpdate: () => autosaveRef.current?.(),
   });
   const read = useCallback(() => ({ title: titleRef.current, doc: editor.getJSON() }), [editor]);
@@ -90,7 +103,10 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
     setPicker(null);
   };
 
-  const context = useMemo(() => ({ locale: page.locale, eyeSafetyNotice, openStatement: setWorking }), [page.locale, eyeSafetyNotice]);
+  const context = useMemo(
+    () => ({ locale: page.locale, eyeSafetyNotice, openStatement: setWorking }),
+    [page.locale, eyeSafetyNotice],
+  );
 
   return (
     <PageEditorContext.Provider value={context}>
@@ -100,8 +116,15 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
             message="This browser kept changes that were never saved, and the page has been saved since. Compare them and choose."
             mine={restore}
             theirs={{ title: page.title, doc: page.doc as JSONContent, by: page.revision.author }}
-            onKeepMine={() => { apply(restore.title, restore.doc); setRestore(null); autosave.changed(); }}
-            onTakeTheirs={() => { dropLocalDraft(page.id); setRestore(null); }}
+            onKeepMine={() => {
+              apply(restore.title, restore.doc);
+              setRestore(null);
+              autosave.changed();
+            }}
+            onTakeTheirs={() => {
+              dropLocalDraft(page.id);
+              setRestore(null);
+            }}
           />
         </div>
       )}
@@ -110,7 +133,11 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
           <ConflictView
             message={autosave.message ?? ''}
             mine={autosave.conflict.mine}
-            theirs={{ title: autosave.conflict.theirs.title, doc: autosave.conflict.theirs.doc as JSONContent, by: autosave.conflict.theirs.revision.author }}
+            theirs={{
+              title: autosave.conflict.theirs.title,
+              doc: autosave.conflict.theirs.doc as JSONContent,
+              by: autosave.conflict.theirs.revision.author,
+            }}
             onKeepMine={() => autosave.resolve('mine', apply)}
             onTakeTheirs={() => autosave.resolve('theirs', apply)}
           />
@@ -125,27 +152,64 @@ export function PageWorkspace({ page, eyeSafetyNotice, onSaved, handleRef }: { p
               rows={1}
               value={title}
               readOnly={!editable}
-              onKeyDown={(e) => { if (e.key === 'Enter') e.preventDefault(); }}
-              onChange={(e) => { const t = e.target.value.replace(/\s*\n\s*/g, ' '); titleRef.current = t; setTitle(t); autosave.changed(); }}
+              onKeyDown={(e) => {
+                if (e.key === 'Enter') e.preventDefault();
+              }}
+              onChange={(e) => {
+                const t = e.target.value.replace(/\s*\n\s*/g, ' ');
+                titleRef.current = t;
+                setTitle(t);
+                autosave.changed();
+              }}
               className="field-sizing-content w-full resize-none border-0 border-b border-transparent bg-transparent font-serif text-3xl font-semibold text-ink focus:border-accent focus:outline-none"
               aria-label="Title"
             />
           </label>
           {editable && <Toolbar editor={editor} onStatement={() => setPicker({})} onImage={() => setMediaPicker(true)} />}
-          {!editable && <Notice tone="info">{page.status === 'in_review' ? 'This page is with the reviewers; it cannot be changed until it is sent back.' : 'You can read this page but not change it.'}</Notice>}
+          {!editable && (
+            <Notice tone="info">
+              {page.status === 'in_review'
+                ? 'This page is with the reviewers; it cannot be changed until it is sent back.'
+                : 'You can read this page but not change it.'}
+            </Notice>
+          )}
           <div className={`rounded-b-lg border border-rule bg-panel ${editable ? 'border-t-0' : 'rounded-t-lg'}`}>
             <EditorContent editor={editor} />
           </div>
         </div>
         <div className="space-y-4">
           <SaveStatus state={autosave.state} message={autosave.message} savedAt={autosave.savedAt} editable={editable} />
-          {picker && <StatementPicker defaultObject={page.object} replacing={picker.replace?.text} onPick={insertStatement} onClose={() => setPicker(null)} />}
-          {mediaPicker && <MediaPicker onPick={(mediaId) => { editor.chain().focus().insertContent({ type: 'mediaImage', attrs: { mediaId, caption: null } }).run(); setMediaPicker(false); }} onClose={() => setMediaPicker(false)} />}
+          {picker && (
+            <StatementPicker
+              defaultObject={page.object}
+              replacing={picker.replace?.text}
+              onPick={insertStatement}
+              onClose={() => setPicker(null)}
+            />
+          )}
+          {mediaPicker && (
+            <MediaPicker
+              onPick={(mediaId) => {
+                editor
+                  .chain()
+                  .focus()
+                  .insertContent({ type: 'mediaImage', attrs: { mediaId, caption: null } })
+                  .run();
+                setMediaPicker(false);
+              }}
+              onClose={() => setMediaPicker(false)}
+            />
+          )}
           {working && <StatementWorking id={working} locale={page.locale} onClose={() => setWorking(null)} />}
-          <NumberCheckPanel flags={flags} onConvert={editable ? (f) => setPicker({ replace: f }) : undefined} onShow={(f) => editor.chain().focus().setTextSelection({ from: f.from, to: f.to }).scrollIntoView().run()} />
+          <NumberCheckPanel
+            flags={flags}
+            onConvert={editable ? (f) => setPicker({ replace: f }) : undefined}
+            onShow={(f) => editor.chain().focus().setTextSelection({ from: f.from, to: f.to }).scrollIntoView().run()}
+          />
           {page.eyeSafety.required && (
             <Notice tone={page.eyeSafety.present ? 'success' : 'warning'} title="Eye safety">
-              {page.eyeSafety.required}. {page.eyeSafety.present ? 'The notice is on the page.' : 'Add the eye-safety notice block before submitting.'}
+              {page.eyeSafety.required}.{' '}
+              {page.eyeSafety.present ? 'The notice is on the page.' : 'Add the eye-safety notice block before submitting.'}
             </Notice>
           )}
         </div>

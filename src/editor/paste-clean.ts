@@ -10,9 +10,13 @@
 export function cleanPastedHtml(html: string): string {
   const doc = new DOMParser().parseFromString(html, 'text/html');
   // Pictures come from the media library only (with credit and licence); active content never.
-  for (const el of Array.from(doc.querySelectorAll('script, style, iframe, object, embed, img, picture, video, audio, svg, link, meta, form'))) el.remove();
+  for (const el of Array.from(
+    doc.querySelectorAll('script, style, iframe, object, embed, img, picture, video, audio, svg, link, meta, form'),
+  ))
+    el.remove();
   for (const el of Array.from(doc.body.querySelectorAll('*'))) {
-    for (const attr of Array.from(el.attributes)) if (/^on/i.test(attr.name) || attr.name === 'style') el.removeAttribute(attr.name);
+    for (const attr of Array.from(el.attributes))
+      if (/^on/i.test(attr.name) || attr.name === 'style') el.removeAttribute(attr.name);
   }
   for (const a of Array.from(doc.querySelectorAll('a'))) {
     for (const name of ['target', 'rel', 'class', 'title']) a.removeAttribute(name);

@@ -3,7 +3,19 @@ import { useEditorState } from '@tiptap/react';
 import { isSafeHref } from '@shared/editor/extensions.ts';
 import { Icon, type IconName } from '@/components/ui/icon.tsx';
 
-function Tool({ label, icon, text, active, onClick }: { label: string; icon?: IconName; text?: string; active?: boolean; onClick: () => void }) {
+function Tool({
+  label,
+  icon,
+  text,
+  active,
+  onClick,
+}: {
+  label: string;
+  icon?: IconName;
+  text?: string;
+  active?: boolean;
+  onClick: () => void;
+}) {
   return (
     <button
       type="button"
@@ -46,7 +58,11 @@ export function Toolbar({ editor, onStatement, onImage }: { editor: Editor; onSt
     editor.chain().focus().extendMarkRange('link').setLink({ href }).run();
   };
   return (
-    <div role="toolbar" aria-label="Formatting" className="sticky top-0 z-10 flex flex-wrap items-center gap-0.5 rounded-t-lg border border-rule bg-panel px-2 py-1">
+    <div
+      role="toolbar"
+      aria-label="Formatting"
+      className="sticky top-0 z-10 flex flex-wrap items-center gap-0.5 rounded-t-lg border border-rule bg-panel px-2 py-1"
+    >
       <Tool label="Heading" text="H2" active={s.h2} onClick={() => editor.chain().focus().toggleHeading({ level: 2 }).run()} />
       <Tool label="Subheading" text="H3" active={s.h3} onClick={() => editor.chain().focus().toggleHeading({ level: 3 }).run()} />
       <span className="mx-1 h-5 w-px bg-rule" />
@@ -60,7 +76,12 @@ export function Toolbar({ editor, onStatement, onImage }: { editor: Editor; onSt
       <span className="mx-1 h-5 w-px bg-rule" />
       <Tool label="Insert statement" icon="quote" text="Statement" onClick={onStatement} />
       <Tool label="Insert image" icon="image" text="Image" onClick={onImage} />
-      <Tool label="Eye-safety notice" icon="shield" text="Eye-safety notice" onClick={() => editor.chain().focus().insertContent({ type: 'eyeSafetyNotice' }).run()} />
+      <Tool
+        label="Eye-safety notice"
+        icon="shield"
+        text="Eye-safety notice"
+        onClick={() => editor.chain().focus().insertContent({ type: 'eyeSafetyNotice' }).run()}
+      />
     </div>
   );
 }

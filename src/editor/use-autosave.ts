@@ -64,7 +64,8 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
         timer.current = setTimeout(() => void save(), PageLimits.autosaveMs);
       }
     } catch (error) {
-      const e = error instanceof ApiRequestError ? error : new ApiRequestError(0, 'network_error', 'Starproof cannot be reached.');
+      const e =
+        error instanceof ApiRequestError ? error : new ApiRequestError(0, 'network_error', 'Starproof cannot be reached.');
       retrying.current = false;
       if (e.status === 409 && e.code === 'page_changed') {
         blocked.current = true;
@@ -72,10 +73,19 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
         setState('conflict');
         setMessage(e.message);
       } else if (e.status === 0 || e.status >= 500) {
-        const why = e.status === 503 ? 'The database is not answering.' : e.code === 'timeout' ? 'Starproof did not answer in time.' : e.status === 0 ? 'Starproof cannot be reached.' : 'The server ran into a problem.';
+        const why =
+          e.status === 503
+            ? 'The database is not answering.'
+            : e.code === 'timeout'
+              ? 'Starproof did not answer in time.'
+              : e.status === 0
+                ? 'Starproof cannot be reached.'
+                : 'The server ran into a problem.';
         retrying.current = true;
         setState('offline');
-        setMessage(`${why} Your text is kept in this browser; Starproof tries again by itself in ${retryDelay.current / 1000} seconds.`);
+        setMessage(
+          `${why} Your text is kept in this browser; Starproof tries again by itself in ${retryDelay.current / 1000} seconds.`,
+        );
         timer.current = setTimeout(() => void save(), retryDelay.current);
         retryDelay.current = Math.min(retryDelay.current * 2, 30_000);
       } else {

@@ -9,7 +9,17 @@ import { savePairing, type Pairing } from './storage.ts';
  * @param note why the form is shown (e.g. the pairing was revoked), or null
  */
 export function showPairing(root: HTMLElement, note: string | null, onPaired: (pairing: Pairing) => void): void {
-  const input = h('input', { id: 'pairing-code', name: 'code', autocomplete: 'off', autocapitalize: 'characters', spellcheck: 'false', inputmode: 'text', maxlength: '9', placeholder: 'K7Q-4M2', 'aria-describedby': 'pairing-help pairing-error' });
+  const input = h('input', {
+    id: 'pairing-code',
+    name: 'code',
+    autocomplete: 'off',
+    autocapitalize: 'characters',
+    spellcheck: 'false',
+    inputmode: 'text',
+    maxlength: '9',
+    placeholder: 'K7Q-4M2',
+    'aria-describedby': 'pairing-help pairing-error',
+  });
   const error = h('p', { id: 'pairing-error', class: 'pairing-error', role: 'alert' });
   const button = h('button', { type: 'submit' }, 'Pair this screen');
   const form = h(
@@ -17,7 +27,11 @@ export function showPairing(root: HTMLElement, note: string | null, onPaired: (p
     { class: 'pairing', 'aria-labelledby': 'pairing-title' },
     h('h1', { id: 'pairing-title', class: 'title' }, 'Pair this screen'),
     note ? h('p', { class: 'pairing-note' }, note) : null,
-    h('p', { id: 'pairing-help', class: 'body' }, 'An admin adds the screen in Starproof (Venues → the venue → Screens) and gets a six-character code. Type it here.'),
+    h(
+      'p',
+      { id: 'pairing-help', class: 'body' },
+      'An admin adds the screen in Starproof (Venues → the venue → Screens) and gets a six-character code. Type it here.',
+    ),
     h('label', { for: 'pairing-code', class: 'pairing-label' }, 'Pairing code'),
     h('div', { class: 'pairing-row' }, input, button),
     error,
@@ -30,17 +44,31 @@ export function showPairing(root: HTMLElement, note: string | null, onPaired: (p
   input.focus();
 }
 
-async function pair(code: string, button: HTMLButtonElement, error: HTMLElement, onPaired: (pairing: Pairing) => void): Promise<void> {
+async function pair(
+  code: string,
+  button: HTMLButtonElement,
+  error: HTMLElement,
+  onPaired: (pairing: Pairing) => void,
+): Promise<void> {
   error.textContent = '';
   button.disabled = true;
   try {
-    const res = await fetch('/api/kiosk/pair', { method: 'POST', headers: { 'Content-Type': 'application/json', Accept: 'application/json' }, body: JSON.stringify({ code }) });
+    const res = await fetch('/api/kiosk/pair', {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json', Accept: 'application/json' },
+      body: JSON.stringify({ code }),
+    });
     const body = (await res.json().catch(() => ({}))) as { data?: KioskPairedDto; error?: { message: string } };
     if (!res.ok || !body.data) {
       error.textContent = body.error?.message ?? `The server answered ${res.status}. Try again.`;
       return;
     }
-    const pairing: Pairing = { token: body.data.token, screenId: body.data.screen.id, screenName: body.data.screen.name, venueName: body.data.screen.venueName };
+    const pairing: Pairing = {
+      token: body.data.token,
+      screenId: body.data.screen.id,
+      screenName: body.data.screen.name,
+      venueName: body.data.screen.venueName,
+    };
     savePairing(pairing);
     onPaired(pairing);
   } catch {

@@ -107,7 +107,12 @@ export class Player {
         body: JSON.stringify({
           playerVersion: PLAYER_VERSION,
           screenId: this.options.screenId ?? undefined,
-          showing: { slideId: this.current?.id ?? null, title: this.current?.layer.getAttribute('aria-label') ?? 'Holding screen', feedEtag: this.etag, offline: Date.now() - this.lastContact > OFFLINE_AFTER_MS },
+          showing: {
+            slideId: this.current?.id ?? null,
+            title: this.current?.layer.getAttribute('aria-label') ?? 'Holding screen',
+            feedEtag: this.etag,
+            offline: Date.now() - this.lastContact > OFFLINE_AFTER_MS,
+          },
         }),
       });
       if (res.status === 401) return this.unpaired();
@@ -174,5 +179,8 @@ export class Player {
 /** Waits (at most 4 s) for a slide's image to be decoded, so it fades in whole, never half drawn. */
 async function waitForImages(layer: HTMLElement): Promise<void> {
   const images = [...layer.querySelectorAll('img')];
-  await Promise.race([Promise.all(images.map((img) => img.decode().catch(() => undefined))), new Promise((r) => window.setTimeout(r, 4000))]);
+  await Promise.race([
+    Promise.all(images.map((img) => img.decode().catch(() => undefined))),
+    new Promise((r) => window.setTimeout(r, 4000)),
+  ]);
 }

@@ -14,13 +14,32 @@ function asOfText(iso: string, timeZone: string): string {
 
 function statementList(statements: FeedStatement[], timeZone: string): HTMLElement | null {
   if (!statements.length) return null;
-  return h('ul', { class: 'statements' }, ...statements.map((s) => h('li', {}, h('span', { class: 'statement-text' }, s.text), ' ', h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone)))));
+  return h(
+    'ul',
+    { class: 'statements' },
+    ...statements.map((s) =>
+      h(
+        'li',
+        {},
+        h('span', { class: 'statement-text' }, s.text),
+        ' ',
+        h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone)),
+      ),
+    ),
+  );
 }
 
 /** Credit and licence, always on screen with an image, bottom right. */
 function creditLine(slide: FeedSlide): HTMLElement | null {
   if (!slide.image) return null;
-  return h('p', { class: 'credit' }, h('span', { class: 'visually-hidden' }, 'Image: '), slide.credit ?? '', ' · ', slide.licence ?? '');
+  return h(
+    'p',
+    { class: 'credit' },
+    h('span', { class: 'visually-hidden' }, 'Image: '),
+    slide.credit ?? '',
+    ' · ',
+    slide.licence ?? '',
+  );
 }
 
 function picture(slide: FeedSlide, src: string): HTMLElement {
@@ -34,13 +53,27 @@ function skyTable(sky: FeedSky): HTMLElement {
   const down = sky.planets.filter((p) => !p.up_after_dusk);
   const head = h('tr', {}, ...['Planet', 'Rises', 'Highest', 'Sets', 'Light takes'].map((t) => h('th', { scope: 'col' }, t)));
   const rows = up.map((p) =>
-    h('tr', {}, h('th', { scope: 'row' }, p.name), h('td', {}, p.rise), h('td', {}, p.highest), h('td', {}, p.set), h('td', {}, p.light_time)),
+    h(
+      'tr',
+      {},
+      h('th', { scope: 'row' }, p.name),
+      h('td', {}, p.rise),
+      h('td', {}, p.highest),
+      h('td', {}, p.set),
+      h('td', {}, p.light_time),
+    ),
   );
   return h(
     'div',
     { class: 'sky' },
-    h('p', { class: 'sky-summary' }, `Sunset ${sky.sunset} · Dark from ${sky.dark_from} · Moon ${sky.moon.phase.toLowerCase()}, ${sky.moon.illuminated_percent}% lit`),
-    up.length ? h('table', {}, h('thead', {}, head), h('tbody', {}, ...rows)) : h('p', { class: 'body' }, 'No planets are above the horizon after dusk tonight.'),
+    h(
+      'p',
+      { class: 'sky-summary' },
+      `Sunset ${sky.sunset} · Dark from ${sky.dark_from} · Moon ${sky.moon.phase.toLowerCase()}, ${sky.moon.illuminated_percent}% lit`,
+    ),
+    up.length
+      ? h('table', {}, h('thead', {}, head), h('tbody', {}, ...rows))
+      : h('p', { class: 'body' }, 'No planets are above the horizon after dusk tonight.'),
     down.length ? h('p', { class: 'sky-down' }, `Not up after dusk tonight: ${down.map((p) => p.name).join(', ')}.`) : null,
   );
 }
@@ -54,16 +87,36 @@ function skyTable(sky: FeedSky): HTMLElement {
  */
 export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: string): HTMLElement {
   const slide = item._starproof.slide;
-  const layer = h('section', { class: `slide layout-${slide.layout}`, 'data-slide-id': item.id, 'aria-label': item.title || 'Image' });
+  const layer = h('section', {
+    class: `slide layout-${slide.layout}`,
+    'data-slide-id': item.id,
+    'aria-label': item.title || 'Image',
+  });
   if (slide.layout === 'sky-table' && item._starproof.sky) {
-    layer.append(h('div', { class: 'panel' }, h('h1', { class: 'title' }, item.title), h('p', { class: 'subtitle' }, slide.text), skyTable(item._starproof.sky)));
+    layer.append(
+      h(
+        'div',
+        { class: 'panel' },
+        h('h1', { class: 'title' }, item.title),
+        h('p', { class: 'subtitle' }, slide.text),
+        skyTable(item._starproof.sky),
+      ),
+    );
     return layer;
   }
   if (slide.image && imageSrc) layer.append(picture(slide, imageSrc), h('div', { class: 'shade' }));
   if (slide.layout === 'image') {
     if (slide.text) layer.append(h('p', { class: 'caption' }, slide.text));
   } else {
-    layer.append(h('div', { class: 'panel' }, h('h1', { class: 'title' }, item.title), slide.text ? h('p', { class: 'body' }, slide.text) : null, statementList(slide.statements, timeZoneOr(timeZone))));
+    layer.append(
+      h(
+        'div',
+        { class: 'panel' },
+        h('h1', { class: 'title' }, item.title),
+        slide.text ? h('p', { class: 'body' }, slide.text) : null,
+        statementList(slide.statements, timeZoneOr(timeZone)),
+      ),
+    );
   }
   const credit = creditLine(slide);
   if (credit && imageSrc) layer.append(credit);
@@ -74,5 +127,9 @@ const timeZoneOr = (tz: string) => tz || 'UTC';
 
 /** The calm screen shown when the channel has nothing to show (or before the first feed). */
 export function renderHolding(venueName: string, note: string): HTMLElement {
-  return h('section', { class: 'slide layout-holding', 'aria-label': 'Nothing scheduled' }, h('div', { class: 'holding' }, h('p', { class: 'holding-venue' }, venueName), h('p', { class: 'holding-note' }, note)));
+  return h(
+    'section',
+    { class: 'slide layout-holding', 'aria-label': 'Nothing scheduled' },
+    h('div', { class: 'holding' }, h('p', { class: 'holding-venue' }, venueName), h('p', { class: 'holding-note' }, note)),
+  );
 }

@@ -25,13 +25,18 @@ async function request<T>(method: Method, url: string, body?: unknown, { timeout
     response = await fetch(`/api${url}`, {
       method,
       credentials: 'same-origin',
-      headers: body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
+      headers:
+        body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
       body: body === undefined ? undefined : JSON.stringify(body),
       signal: timeoutMs ? AbortSignal.timeout(timeoutMs) : undefined,
     });
   } catch (error) {
     if (error instanceof DOMException && error.name === 'TimeoutError') {
-      throw new ApiRequestError(0, 'timeout', `Starproof did not answer within ${Math.round(timeoutMs! / 1000)} seconds. Nothing was lost.`);
+      throw new ApiRequestError(
+        0,
+        'timeout',
+        `Starproof did not answer within ${Math.round(timeoutMs! / 1000)} seconds. Nothing was lost.`,
+      );
     }
     throw new ApiRequestError(0, 'network_error', 'Starproof cannot be reached. Check the connection; nothing was lost.');
   }
@@ -39,7 +44,12 @@ async function request<T>(method: Method, url: string, body?: unknown, { timeout
   const payload = (await response.json().catch(() => undefined)) as (ApiError & { data?: unknown }) | undefined;
   if (!response.ok) {
     const error = payload?.error;
-    throw new ApiRequestError(response.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${response.status}.`, error?.fields);
+    throw new ApiRequestError(
+      response.status,
+      error?.code ?? 'http_error',
+      error?.message ?? `The server answered ${response.status}.`,
+      error?.fields,
+    );
   }
   return payload as T;
 }

@@ -20,7 +20,8 @@ export function RequireUser({ children }: { children: ReactNode }) {
   const location = useLocation();
   if (isPending) return <p className="p-8 text-sm text-muted">Loading…</p>;
   // A failed refresh keeps the screen (and any open editor) as it is; only a first load that fails says so.
-  if (isError && user === undefined) return <p className="p-8 text-sm text-broken">Starproof cannot be reached. Reload the page in a moment.</p>;
+  if (isError && user === undefined)
+    return <p className="p-8 text-sm text-broken">Starproof cannot be reached. Reload the page in a moment.</p>;
   if (!user) return <Navigate to={paths.signIn.href(location.pathname + location.search)} replace />;
   return <CurrentUserContext.Provider value={user}>{children}</CurrentUserContext.Provider>;
 }

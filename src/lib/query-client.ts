@@ -8,7 +8,8 @@ export function createQueryClient(): QueryClient {
       queries: {
         staleTime: 60_000,
         refetchOnWindowFocus: false,
-        retry: (failures, error) => !(error instanceof ApiRequestError && error.status >= 400 && error.status < 500) && failures < 2,
+        retry: (failures, error) =>
+          !(error instanceof ApiRequestError && error.status >= 400 && error.status < 500) && failures < 2,
       },
     },
   });

@@ -174,7 +174,9 @@ describe('changing an id does not widen access', () => {
     }
     const list = await writer.get('/api/pages');
     expect(JSON.stringify(list.body)).not.toContain(world.page.id);
-    const save = await writer.put(`/api/pages/${world.page.id}`).send({ version: world.page.version, title: 'Taken over', doc: { type: 'doc', content: [] } });
+    const save = await writer
+      .put(`/api/pages/${world.page.id}`)
+      .send({ version: world.page.version, title: 'Taken over', doc: { type: 'doc', content: [] } });
     expect([403, 404]).toContain(save.status);
   });
 
@@ -236,7 +238,8 @@ describe('access matrix', () => {
         asked += 1;
         const got = classify(res.status);
         const want = row[CALLERS.indexOf(caller)];
-        if (res.status >= 500 || got !== want) wrong.push(`${key} as ${caller}: expected ${want}, got ${res.status} ${JSON.stringify(res.body?.error?.code ?? '')}`);
+        if (res.status >= 500 || got !== want)
+          wrong.push(`${key} as ${caller}: expected ${want}, got ${res.status} ${JSON.stringify(res.body?.error?.code ?? '')}`);
         if (rank(route) >= 0 && res.status < 300) break;
       }
     }

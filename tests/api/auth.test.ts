@@ -1,7 +1,15 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuthToken, User } from '../../server/models/index.ts';
-import { buildUser, getTestApp, resetDatabase, signedInAgent, TEST_PASSWORD, tokenFromMail, waitForMail } from '../support/app.ts';
+import {
+  buildUser,
+  getTestApp,
+  resetDatabase,
+  signedInAgent,
+  TEST_PASSWORD,
+  tokenFromMail,
+  waitForMail,
+} from '../support/app.ts';
 
 beforeAll(async () => {
   await getTestApp();
@@ -28,7 +36,9 @@ describe('sign-in', () => {
   it('gives the same clear answer for a wrong password and an unknown user', async () => {
     const user = await buildUser();
     const wrong = await (await request()).post('/api/auth/sign-in').send({ email: user.email, password: 'not-the-password' });
-    const unknown = await (await request()).post('/api/auth/sign-in').send({ email: 'nobody@example.test', password: 'whatever-123' });
+    const unknown = await (await request())
+      .post('/api/auth/sign-in')
+      .send({ email: 'nobody@example.test', password: 'whatever-123' });
     for (const res of [wrong, unknown]) {
       expect(res.status).toBe(401);
       expect(res.body.error).toEqual({ code: 'wrong_credentials', message: expect.stringMatching(/do not match/) });
@@ -43,7 +53,9 @@ describe('sign-in', () => {
   });
 
   it('refuses a too-long field with a message', async () => {
-    const res = await (await request()).post('/api/auth/sign-in').send({ email: `${'a'.repeat(300)}@example.test`, password: 'x' });
+    const res = await (await request())
+      .post('/api/auth/sign-in')
+      .send({ email: `${'a'.repeat(300)}@example.test`, password: 'x' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.email).toMatch(/at most 254/);
   });
@@ -81,7 +93,9 @@ describe('passwords', () => {
     const second = supertest.agent(await getTestApp());
     await first.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
     await second.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
-    const res = await first.post('/api/auth/password').send({ currentPassword: TEST_PASSWORD, newPassword: 'a-brand-new-phrase' });
+    const res = await first
+      .post('/api/auth/password')
+      .send({ currentPassword: TEST_PASSWORD, newPassword: 'a-brand-new-phrase' });
     expect(res.status).toBe(204);
     expect((await first.get('/api/auth/me')).status).toBe(200);
     expect((await second.get('/api/auth/me')).status).toBe(401);
@@ -89,7 +103,9 @@ describe('passwords', () => {
 
   it('refuses a wrong current password and a common new one', async () => {
     const { agent } = await signedInAgent('writer');
-    const wrong = await agent.post('/api/auth/password').send({ currentPassword: 'nope-nope-nope', newPassword: 'a-brand-new-phrase' });
+    const wrong = await agent
+      .post('/api/auth/password')
+      .send({ currentPassword: 'nope-nope-nope', newPassword: 'a-brand-new-phrase' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields.currentPassword).toMatch(/not right/);
     const common = await agent.post('/api/auth/password').send({ currentPassword: TEST_PASSWORD, newPassword: 'password123' });
@@ -131,7 +147,9 @@ describe('passwords', () => {
   });
 
   it('refuses an unknown token', async () => {
-    const res = await (await request()).post('/api/auth/invitation/accept').send({ token: 'x'.repeat(43), newPassword: 'moonrise-over-the-fells' });
+    const res = await (await request())
+      .post('/api/auth/invitation/accept')
+      .send({ token: 'x'.repeat(43), newPassword: 'moonrise-over-the-fells' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('invalid_token');
   });

@@ -16,7 +16,9 @@ async function snapshot(url: string) {
   const client = new pg.Client({ connectionString: url });
   await client.connect();
   try {
-    const tables = (await client.query("SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename")).rows.map((r) => r.tablename as string);
+    const tables = (
+      await client.query("SELECT tablename FROM pg_tables WHERE schemaname = 'public' ORDER BY tablename")
+    ).rows.map((r) => r.tablename as string);
     const counts: Record<string, number> = {};
     for (const t of tables) counts[t] = (await client.query(`SELECT count(*)::int AS n FROM "${t}"`)).rows[0].n;
     const users = (await client.query('SELECT id, email, name, role, password_hash FROM users ORDER BY email')).rows;
@@ -47,7 +49,9 @@ describe('backup and restore', () => {
     await restoreBackup(archive, target.toString(), restoredUploads);
 
     expect(await snapshot(target.toString())).toEqual(await snapshot(sourceUrl));
-    expect(fs.readFileSync(path.join(restoredUploads, 'originals', 'abc.jpg'))).toEqual(fs.readFileSync(path.join(uploads, 'originals', 'abc.jpg')));
+    expect(fs.readFileSync(path.join(restoredUploads, 'originals', 'abc.jpg'))).toEqual(
+      fs.readFileSync(path.join(uploads, 'originals', 'abc.jpg')),
+    );
 
     // A second restore into the now non-empty database is refused, not merged.
     await expect(restoreBackup(archive, target.toString(), restoredUploads)).rejects.toThrow(/not empty/);

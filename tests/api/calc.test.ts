@@ -13,7 +13,9 @@ beforeAll(async () => {
 
 describe('POST /api/calc', () => {
   it('refuses anyone not signed in', async () => {
-    const res = await supertest(await getTestApp()).post('/api/calc').send({ quantity: 'age_now' });
+    const res = await supertest(await getTestApp())
+      .post('/api/calc')
+      .send({ quantity: 'age_now' });
     expect(res.status).toBe(401);
     expect(res.body.error.code).toBeTruthy();
     expect(res.body.data).toBeUndefined();
@@ -22,7 +24,12 @@ describe('POST /api/calc', () => {
   it('computes a preset quantity with its working, model and interval, and echoes the id', async () => {
     const res = await agent
       .post('/api/calc')
-      .send({ id: 'quasar-7', quantity: 'lookback_time', inputs: { z: { value: 1.5, sigma: 0.01 } }, model: { preset: 'planck18' } });
+      .send({
+        id: 'quasar-7',
+        quantity: 'lookback_time',
+        inputs: { z: { value: 1.5, sigma: 0.01 } },
+        model: { preset: 'planck18' },
+      });
     expect(res.status).toBe(200);
     const data = CalcSuccessSchema.parse(res.body.data);
     expect(data.id).toBe('quasar-7');
@@ -51,13 +58,17 @@ describe('POST /api/calc', () => {
   });
 
   it('warns when the simple Hubble law is used above z = 0.1, and not below', async () => {
-    const high = await agent.post('/api/calc').send({ quantity: 'luminosity_distance', inputs: { z: 0.3 }, model: { law: 'hubble', H0: 70 } });
+    const high = await agent
+      .post('/api/calc')
+      .send({ quantity: 'luminosity_distance', inputs: { z: 0.3 }, model: { law: 'hubble', H0: 70 } });
     expect(high.status).toBe(200);
     // d = cz/H0 = 299792.458 × 0.3 / 70 (common practice: the Hubble law worked by hand).
     expect(high.body.data.value).toBeCloseTo((299792.458 * 0.3) / 70, 6);
     expect(high.body.data.warnings).toHaveLength(1);
     expect(high.body.data.warnings[0]).toMatch(/only holds for small redshifts/);
-    const low = await agent.post('/api/calc').send({ quantity: 'luminosity_distance', inputs: { z: 0.05 }, model: { law: 'hubble', H0: 70 } });
+    const low = await agent
+      .post('/api/calc')
+      .send({ quantity: 'luminosity_distance', inputs: { z: 0.05 }, model: { law: 'hubble', H0: 70 } });
     expect(low.status).toBe(200);
     expect(low.body.data.warnings).toEqual([]);
   });

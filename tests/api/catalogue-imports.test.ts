@@ -11,7 +11,8 @@ beforeAll(async () => {
   await resetDatabase();
   citation = (await buildSource({ citation: 'Import Test Survey (2020)', bibcode: '2020ApJ...900....1X' })).citation;
   objectIds = [];
-  for (const name of ['Alpha Import', 'Beta Import', 'Gamma, the Comma Galaxy']) objectIds.push((await buildSkyObject({ name, designations: [`D-${name.slice(0, 4)}`] })).id);
+  for (const name of ['Alpha Import', 'Beta Import', 'Gamma, the Comma Galaxy'])
+    objectIds.push((await buildSkyObject({ name, designations: [`D-${name.slice(0, 4)}`] })).id);
 });
 
 async function dryRun(body: Buffer | string, name = 'measurements.csv', mapping?: Record<string, string>) {
@@ -55,7 +56,10 @@ describe('CSV import: the dry run', () => {
   });
 
   it('reads a byte-order mark, semicolons with decimal commas, and quoted commas', async () => {
-    const csv = '\uFEFFObject;Quantity;Value;Unit;Band;Source\n"Gamma, the Comma Galaxy";redshift;0,0452;;;"Import Test Survey (2020)"\n"Gamma, the Comma Galaxy";distance;"1,5";Mpc;;' + citation + '\n';
+    const csv =
+      '\uFEFFObject;Quantity;Value;Unit;Band;Source\n"Gamma, the Comma Galaxy";redshift;0,0452;;;"Import Test Survey (2020)"\n"Gamma, the Comma Galaxy";distance;"1,5";Mpc;;' +
+      citation +
+      '\n';
     const { res } = await dryRun(csv);
     expect(res.status).toBe(201);
     expect(res.body.data.report).toMatchObject({ hadByteOrderMark: true, delimiter: ';', acceptedCount: 2, rejectedCount: 0 });
@@ -68,7 +72,12 @@ describe('CSV import: the dry run', () => {
     const unmapped = await dryRun(csv);
     expect(unmapped.res.status).toBe(422);
     expect(unmapped.res.body.error.message).toMatch(/No column was found for object, quantity, value/);
-    const { res } = await dryRun(csv, 'own-headers.csv', { object: 'Target name', quantity: 'What', value: 'Number', source: 'Ref' });
+    const { res } = await dryRun(csv, 'own-headers.csv', {
+      object: 'Target name',
+      quantity: 'What',
+      value: 'Number',
+      source: 'Ref',
+    });
     expect(res.status).toBe(201);
     expect(res.body.data.report.acceptedCount).toBe(1);
     const wrong = await dryRun(csv, 'own-headers.csv', { object: 'Nope', quantity: 'What', value: 'Number' });
@@ -78,10 +87,17 @@ describe('CSV import: the dry run', () => {
 
   it('refuses a file in the wrong encoding, saying how to fix it', async () => {
     // "Gamma Café" in Windows-1252: é is the single byte 0xE9, invalid as UTF-8.
-    const latin = Buffer.concat([Buffer.from('object,quantity,value,source\nGamma Caf', 'latin1'), Buffer.from([0xe9]), Buffer.from(`,redshift,0.1,${citation}\n`, 'latin1')]);
+    const latin = Buffer.concat([
+      Buffer.from('object,quantity,value,source\nGamma Caf', 'latin1'),
+      Buffer.from([0xe9]),
+      Buffer.from(`,redshift,0.1,${citation}\n`, 'latin1'),
+    ]);
     const { res } = await dryRun(latin);
     expect(res.status).toBe(422);
-    expect(res.body.error).toMatchObject({ code: 'not_utf8', message: expect.stringMatching(/not UTF-8 text \(the first unreadable character is on line 2\).*CSV UTF-8/) });
+    expect(res.body.error).toMatchObject({
+      code: 'not_utf8',
+      message: expect.stringMatching(/not UTF-8 text \(the first unreadable character is on line 2\).*CSV UTF-8/),
+    });
   });
 
   it('refuses an empty file, a header with no rows, and a binary file named .csv', async () => {
@@ -147,7 +163,8 @@ describe('CSV import: the commit', () => {
   it('imports 50,000 rows', async () => {
     const object = await SkyObject.findByPk(objectIds[0]);
     const lines = ['object,quantity,value,unit,band,uncertainty,source'];
-    for (let i = 0; i < 50_000; i += 1) lines.push(`${object!.name},apparent_magnitude,${(10 + i / 100000).toFixed(6)},mag,g_SDSS,0.01,${citation}`);
+    for (let i = 0; i < 50_000; i += 1)
+      lines.push(`${object!.name},apparent_magnitude,${(10 + i / 100000).toFixed(6)},mag,g_SDSS,0.01,${citation}`);
     const { res, agent } = await dryRun(lines.join('\n'), 'big.csv');
     expect(res.status).toBe(201);
     expect(res.body.data.report).toMatchObject({ totalRows: 50_000, acceptedCount: 50_000, rejectedCount: 0 });

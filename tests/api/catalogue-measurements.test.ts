@@ -18,14 +18,36 @@ describe('measurements', () => {
     const { agent } = await signedInAgent('reviewer');
     const object = await buildSkyObject({ kind: 'star' });
     const source = await buildSource();
-    const res = await agent.post(url(object.id)).send({ quantity: 'distance', value: '2.5', unit: 'kpc', uncertaintyMinus: '0.1', uncertaintyPlus: '0.3', sourceId: source.id });
+    const res = await agent
+      .post(url(object.id))
+      .send({
+        quantity: 'distance',
+        value: '2.5',
+        unit: 'kpc',
+        uncertaintyMinus: '0.1',
+        uncertaintyPlus: '0.3',
+        sourceId: source.id,
+      });
     expect(res.status).toBe(201);
-    expect(res.body.data).toMatchObject({ value: 2500, unit: 'pc', uncertaintyMinus: 100, uncertaintyPlus: 300, enteredValue: 2.5, enteredUnit: 'kpc', status: 'accepted', preferred: false });
+    expect(res.body.data).toMatchObject({
+      value: 2500,
+      unit: 'pc',
+      uncertaintyMinus: 100,
+      uncertaintyPlus: 300,
+      enteredValue: 2.5,
+      enteredUnit: 'kpc',
+      status: 'accepted',
+      preferred: false,
+    });
     // 1 R☉ = 695 700 km (IAU 2015 Resolution B3, nominal solar radius).
-    const radius = await agent.post(url(object.id)).send({ quantity: 'radius', value: 2, unit: 'R_sun', uncertainty: 0.1, sourceId: source.id });
+    const radius = await agent
+      .post(url(object.id))
+      .send({ quantity: 'radius', value: 2, unit: 'R_sun', uncertainty: 0.1, sourceId: source.id });
     expect(radius.body.data).toMatchObject({ value: 1_391_400, unit: 'km', uncertainty: 69_570 });
     // 1 arcsec = 1000 mas by definition.
-    const parallax = await agent.post(url(object.id)).send({ quantity: 'parallax', value: '−0.0012', unit: 'arcsec', sourceId: source.id });
+    const parallax = await agent
+      .post(url(object.id))
+      .send({ quantity: 'parallax', value: '−0.0012', unit: 'arcsec', sourceId: source.id });
     expect(parallax.body.data.value).toBeCloseTo(-1.2, 12);
   });
 
@@ -39,7 +61,9 @@ describe('measurements', () => {
     expect(band.body.error.fields.band).toMatch(/needs a band/);
     const value = await agent.post(url(object.id)).send({ quantity: 'redshift', value: 'about 0.1' });
     expect(value.body.error.fields.value).toMatch(/is not a number/);
-    const both = await agent.post(url(object.id)).send({ quantity: 'redshift', value: 0.1, uncertainty: 0.01, uncertaintyMinus: 0.01, uncertaintyPlus: 0.02 });
+    const both = await agent
+      .post(url(object.id))
+      .send({ quantity: 'redshift', value: 0.1, uncertainty: 0.01, uncertaintyMinus: 0.01, uncertaintyPlus: 0.02 });
     expect(both.body.error.fields.uncertainty).toMatch(/not both/);
     const negative = await agent.post(url(object.id)).send({ quantity: 'distance', value: -4, unit: 'pc' });
     expect(negative.body.error.fields.value).toMatch(/greater than 0/);
@@ -56,20 +80,30 @@ describe('measurements', () => {
     const proposed = await writer.post(url(object.id)).send({ quantity: 'redshift', value: 0.02, sourceId: source.id });
     expect(proposed.status).toBe(201);
     expect(proposed.body.data.status).toBe('proposed');
-    expect((await writer.put(`/api/catalogue/measurements/${proposed.body.data.id}/preferred`).send({ preferred: true })).status).toBe(403);
+    expect(
+      (await writer.put(`/api/catalogue/measurements/${proposed.body.data.id}/preferred`).send({ preferred: true })).status,
+    ).toBe(403);
     const notYet = await reviewer.put(`/api/catalogue/measurements/${proposed.body.data.id}/preferred`).send({ preferred: true });
     expect(notYet.status).toBe(409);
     expect(notYet.body.error.message).toMatch(/review the proposal first/);
-    const noReason = await reviewer.post(`/api/catalogue/measurements/${proposed.body.data.id}/review`).send({ decision: 'decline' });
+    const noReason = await reviewer
+      .post(`/api/catalogue/measurements/${proposed.body.data.id}/review`)
+      .send({ decision: 'decline' });
     expect(noReason.body.error.fields.reason).toMatch(/Say why/);
-    const declined = await reviewer.post(`/api/catalogue/measurements/${proposed.body.data.id}/review`).send({ decision: 'decline', reason: 'Copied from a press release.' });
+    const declined = await reviewer
+      .post(`/api/catalogue/measurements/${proposed.body.data.id}/review`)
+      .send({ decision: 'decline', reason: 'Copied from a press release.' });
     expect(declined.body.data).toMatchObject({ status: 'declined', reviewReason: 'Copied from a press release.' });
     expect(declined.body.data.reviewedBy).toBeTruthy();
     const twice = await reviewer.post(`/api/catalogue/measurements/${proposed.body.data.id}/review`).send({ decision: 'accept' });
     expect(twice.status).toBe(409);
     const history = await reviewer.get(`/api/catalogue/objects/${object.id}/history`);
     expect(history.body.data.map((h: { action: string }) => h.action)).toEqual(['declined', 'proposed']);
-    expect(history.body.data[0]).toMatchObject({ reason: 'Copied from a press release.', oldValues: { status: 'proposed' }, newValues: { status: 'declined' } });
+    expect(history.body.data[0]).toMatchObject({
+      reason: 'Copied from a press release.',
+      oldValues: { status: 'proposed' },
+      newValues: { status: 'declined' },
+    });
   });
 
   it('a measurement without a source cannot be preferred, in code and in the database', async () => {
@@ -79,22 +113,37 @@ describe('measurements', () => {
     const res = await agent.put(`/api/catalogue/measurements/${created.body.data.id}/preferred`).send({ preferred: true });
     expect(res.status).toBe(409);
     expect(res.body.error.message).toMatch(/without a source cannot be preferred/);
-    await expect(Measurement.update({ preferred: true }, { where: { id: created.body.data.id } })).rejects.toThrow(/measurements_preferred_needs_source/);
+    await expect(Measurement.update({ preferred: true }, { where: { id: created.body.data.id } })).rejects.toThrow(
+      /measurements_preferred_needs_source/,
+    );
   });
 
   it('choosing a preferred value replaces the previous one and records both changes', async () => {
     const { agent } = await signedInAgent('reviewer');
     const object = await buildSkyObject();
     const source = await buildSource();
-    const a = await agent.post(url(object.id)).send({ quantity: 'apparent_magnitude', band: 'V', value: 3.4, unit: 'mag', sourceId: source.id });
-    const b = await agent.post(url(object.id)).send({ quantity: 'apparent_magnitude', band: 'V', value: 3.5, unit: 'mag', sourceId: source.id });
-    const other = await agent.post(url(object.id)).send({ quantity: 'apparent_magnitude', band: 'B', value: 4.2, unit: 'mag', sourceId: source.id });
+    const a = await agent
+      .post(url(object.id))
+      .send({ quantity: 'apparent_magnitude', band: 'V', value: 3.4, unit: 'mag', sourceId: source.id });
+    const b = await agent
+      .post(url(object.id))
+      .send({ quantity: 'apparent_magnitude', band: 'V', value: 3.5, unit: 'mag', sourceId: source.id });
+    const other = await agent
+      .post(url(object.id))
+      .send({ quantity: 'apparent_magnitude', band: 'B', value: 4.2, unit: 'mag', sourceId: source.id });
     const events: unknown[] = [];
     const listener = (e: unknown) => events.push(e);
     catalogueEvents.on('preferredChanged', listener);
-    expect((await agent.put(`/api/catalogue/measurements/${a.body.data.id}/preferred`).send({ preferred: true, replaces: null })).status).toBe(200);
-    expect((await agent.put(`/api/catalogue/measurements/${other.body.data.id}/preferred`).send({ preferred: true })).status).toBe(200);
-    const swap = await agent.put(`/api/catalogue/measurements/${b.body.data.id}/preferred`).send({ preferred: true, replaces: a.body.data.id });
+    expect(
+      (await agent.put(`/api/catalogue/measurements/${a.body.data.id}/preferred`).send({ preferred: true, replaces: null }))
+        .status,
+    ).toBe(200);
+    expect(
+      (await agent.put(`/api/catalogue/measurements/${other.body.data.id}/preferred`).send({ preferred: true })).status,
+    ).toBe(200);
+    const swap = await agent
+      .put(`/api/catalogue/measurements/${b.body.data.id}/preferred`)
+      .send({ preferred: true, replaces: a.body.data.id });
     catalogueEvents.off('preferredChanged', listener);
     expect(swap.status).toBe(200);
     expect(await Measurement.count({ where: { objectId: object.id, preferred: true } })).toBe(2);
@@ -118,7 +167,7 @@ describe('measurements', () => {
     const { agent: second } = await signedInAgent('reviewer');
     const object = await buildSkyObject();
     const source = await buildSource();
-    const a = await buildMeasurement(object.id, { quantity: 'redshift', value: 0.10, sourceId: source.id });
+    const a = await buildMeasurement(object.id, { quantity: 'redshift', value: 0.1, sourceId: source.id });
     const b = await buildMeasurement(object.id, { quantity: 'redshift', value: 0.11, sourceId: source.id });
     const results = await Promise.all([
       first.put(`/api/catalogue/measurements/${a.id}/preferred`).send({ preferred: true, replaces: null }),
@@ -126,7 +175,10 @@ describe('measurements', () => {
     ]);
     expect(results.map((r) => r.status).sort()).toEqual([200, 409]);
     const loser = results.find((r) => r.status === 409)!;
-    expect(loser.body.error).toMatchObject({ code: 'preferred_changed', message: expect.stringMatching(/Another reviewer has just chosen the preferred redshift/) });
+    expect(loser.body.error).toMatchObject({
+      code: 'preferred_changed',
+      message: expect.stringMatching(/Another reviewer has just chosen the preferred redshift/),
+    });
     expect(await Measurement.count({ where: { objectId: object.id, preferred: true } })).toBe(1);
   });
 
@@ -135,7 +187,9 @@ describe('measurements', () => {
     const source = await buildSource();
     await buildMeasurement(object.id, { quantity: 'redshift', value: 0.2, sourceId: source.id, preferred: true });
     const second = await buildMeasurement(object.id, { quantity: 'redshift', value: 0.21, sourceId: source.id });
-    const error = await getSequelize().query(`UPDATE measurements SET preferred = true WHERE id = '${second.id}'`).catch((e: { parent?: { constraint?: string } }) => e);
+    const error = await getSequelize()
+      .query(`UPDATE measurements SET preferred = true WHERE id = '${second.id}'`)
+      .catch((e: { parent?: { constraint?: string } }) => e);
     expect((error as { parent?: { constraint?: string } }).parent?.constraint).toBe('measurements_one_preferred');
   });
 
@@ -146,22 +200,53 @@ describe('measurements', () => {
     const created = await agent.post(url(object.id)).send({ quantity: 'redshift', value: 0.158, sourceId: source.id });
     const id = created.body.data.id as string;
     await agent.put(`/api/catalogue/measurements/${id}/preferred`).send({ preferred: true });
-    const noSource = await agent.patch(`/api/catalogue/measurements/${id}`).send({ quantity: 'redshift', value: 0.158, sourceId: null });
+    const noSource = await agent
+      .patch(`/api/catalogue/measurements/${id}`)
+      .send({ quantity: 'redshift', value: 0.158, sourceId: null });
     expect(noSource.status).toBe(409);
     expect(noSource.body.error.message).toMatch(/preferred measurement needs a source/);
-    const changed = await agent.patch(`/api/catalogue/measurements/${id}`).send({ quantity: 'redshift', value: 0.1583, uncertainty: 0.0002, sourceId: source.id, reason: 'Corrected a typing error.' });
+    const changed = await agent
+      .patch(`/api/catalogue/measurements/${id}`)
+      .send({
+        quantity: 'redshift',
+        value: 0.1583,
+        uncertainty: 0.0002,
+        sourceId: source.id,
+        reason: 'Corrected a typing error.',
+      });
     expect(changed.status).toBe(200);
-    const quantity = await agent.patch(`/api/catalogue/measurements/${id}`).send({ quantity: 'parallax', value: 1, unit: 'mas', sourceId: source.id });
+    const quantity = await agent
+      .patch(`/api/catalogue/measurements/${id}`)
+      .send({ quantity: 'parallax', value: 1, unit: 'mas', sourceId: source.id });
     expect(quantity.status).toBe(400);
     const noReason = await agent.delete(`/api/catalogue/measurements/${id}`);
     expect(noReason.status).toBe(400);
     const retired = await agent.delete(`/api/catalogue/measurements/${id}`).query({ reason: 'Superseded by a better spectrum.' });
-    expect(retired.body.data).toMatchObject({ retired: true, preferred: false, retireReason: 'Superseded by a better spectrum.' });
-    expect((await agent.patch(`/api/catalogue/measurements/${id}`).send({ quantity: 'redshift', value: 0.2, sourceId: source.id })).status).toBe(409);
-    const history = (await agent.get(`/api/catalogue/objects/${object.id}/history`)).body.data as Array<{ action: string; oldValues: Record<string, unknown>; newValues: Record<string, unknown>; reason: string | null }>;
+    expect(retired.body.data).toMatchObject({
+      retired: true,
+      preferred: false,
+      retireReason: 'Superseded by a better spectrum.',
+    });
+    expect(
+      (await agent.patch(`/api/catalogue/measurements/${id}`).send({ quantity: 'redshift', value: 0.2, sourceId: source.id }))
+        .status,
+    ).toBe(409);
+    const history = (await agent.get(`/api/catalogue/objects/${object.id}/history`)).body.data as Array<{
+      action: string;
+      oldValues: Record<string, unknown>;
+      newValues: Record<string, unknown>;
+      reason: string | null;
+    }>;
     expect(history.map((h) => h.action)).toEqual(['retired', 'updated', 'preferred', 'created']);
-    expect(history[1]).toMatchObject({ reason: 'Corrected a typing error.', oldValues: { value: 0.158, uncertainty: null, enteredValue: 0.158 }, newValues: { value: 0.1583, uncertainty: 0.0002, enteredValue: 0.1583 } });
-    expect(history[0]).toMatchObject({ oldValues: { preferred: true, retired: false }, newValues: { preferred: false, retired: true } });
+    expect(history[1]).toMatchObject({
+      reason: 'Corrected a typing error.',
+      oldValues: { value: 0.158, uncertainty: null, enteredValue: 0.158 },
+      newValues: { value: 0.1583, uncertainty: 0.0002, enteredValue: 0.1583 },
+    });
+    expect(history[0]).toMatchObject({
+      oldValues: { preferred: true, retired: false },
+      newValues: { preferred: false, retired: true },
+    });
     expect(await Measurement.count({ where: { id } })).toBe(1);
     expect(await getPreferredMeasurements(object.id)).toEqual([]);
   });

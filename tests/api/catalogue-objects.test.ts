@@ -13,9 +13,16 @@ describe('catalogue objects', () => {
   it('a reviewer adds an object in sexagesimal and gets degrees and the constellation back', async () => {
     const { agent } = await signedInAgent('reviewer');
     // Betelgeuse, J2000 position recalled from memory (SIMBAD-style rounding); it lies in Orion.
-    const res = await agent.post('/api/catalogue/objects').send({ name: 'Betelgeuse', designations: 'α Ori, HD 39801', kind: 'star', ra: '05h 55m 10.3s', dec: '+07° 24′ 25″' });
+    const res = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Betelgeuse', designations: 'α Ori, HD 39801', kind: 'star', ra: '05h 55m 10.3s', dec: '+07° 24′ 25″' });
     expect(res.status).toBe(201);
-    expect(res.body.data).toMatchObject({ name: 'Betelgeuse', kind: 'star', constellation: 'Ori', designations: ['α Ori', 'HD 39801'] });
+    expect(res.body.data).toMatchObject({
+      name: 'Betelgeuse',
+      kind: 'star',
+      constellation: 'Ori',
+      designations: ['α Ori', 'HD 39801'],
+    });
     expect(res.body.data.raDeg).toBeCloseTo(88.7929, 3);
     expect(res.body.data.decDeg).toBeCloseTo(7.4069, 3);
     expect(await AuditEvent.count({ where: { action: 'catalogue.object_created' } })).toBe(1);
@@ -23,10 +30,14 @@ describe('catalogue objects', () => {
 
   it('accepts decimal degrees, and recomputes the constellation when the position changes', async () => {
     const { agent } = await signedInAgent('admin');
-    const created = await agent.post('/api/catalogue/objects').send({ name: 'Moving Test', kind: 'galaxy', ra: 10.6847, dec: 41.2690 });
+    const created = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Moving Test', kind: 'galaxy', ra: 10.6847, dec: 41.269 });
     expect(created.body.data.constellation).toBe('And');
     // The quasar 3C 279's position (recalled from memory) is in Virgo.
-    const moved = await agent.patch(`/api/catalogue/objects/${created.body.data.id}`).send({ name: 'Moving Test', kind: 'galaxy', ra: '12 56 11.2', dec: '-05 47 22' });
+    const moved = await agent
+      .patch(`/api/catalogue/objects/${created.body.data.id}`)
+      .send({ name: 'Moving Test', kind: 'galaxy', ra: '12 56 11.2', dec: '-05 47 22' });
     expect(moved.status).toBe(200);
     expect(moved.body.data.constellation).toBe('Vir');
   });
@@ -38,19 +49,28 @@ describe('catalogue objects', () => {
     expect(planet.body.data).toMatchObject({ raDeg: null, decDeg: null, constellation: null });
     const star = await agent.post('/api/catalogue/objects').send({ name: 'Nameless Star', kind: 'star', ra: '', dec: '' });
     expect(star.status).toBe(400);
-    expect(star.body.error.fields).toMatchObject({ ra: expect.stringMatching(/right ascension/i), dec: expect.stringMatching(/declination/i) });
-    const withPosition = await agent.post('/api/catalogue/objects').send({ name: 'Uranus', kind: 'planet', ra: '1 2 3', dec: '4' });
+    expect(star.body.error.fields).toMatchObject({
+      ra: expect.stringMatching(/right ascension/i),
+      dec: expect.stringMatching(/declination/i),
+    });
+    const withPosition = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Uranus', kind: 'planet', ra: '1 2 3', dec: '4' });
     expect(withPosition.status).toBe(400);
     expect(withPosition.body.error.fields.ra).toMatch(/move across the sky/);
   });
 
   it('refuses impossible coordinates with messages on the fields', async () => {
     const { agent } = await signedInAgent('reviewer');
-    const res = await agent.post('/api/catalogue/objects').send({ name: 'Bad Place', kind: 'star', ra: '25h 00m 00s', dec: '+95' });
+    const res = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Bad Place', kind: 'star', ra: '25h 00m 00s', dec: '+95' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.ra).toMatch(/360° or 24h/);
     expect(res.body.error.fields.dec).toMatch(/−90° and \+90°/);
-    const minutes = await agent.post('/api/catalogue/objects').send({ name: 'Bad Place', kind: 'star', ra: '05 61 00', dec: 'north' });
+    const minutes = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Bad Place', kind: 'star', ra: '05 61 00', dec: 'north' });
     expect(minutes.body.error.fields.ra).toMatch(/less than 60/);
     expect(minutes.body.error.fields.dec).toMatch(/Write declination/);
     expect(await SkyObject.count({ where: { name: 'Bad Place' } })).toBe(0);
@@ -79,10 +99,16 @@ describe('catalogue objects', () => {
     for (let i = 0; i < 7; i += 1) await buildSkyObject({ name: `Pager Quasar ${String(i).padStart(2, '0')}`, kind: 'quasar' });
     const withRedshift = await buildSkyObject({ name: 'Pager Quasar 99', kind: 'quasar' });
     await buildMeasurement(withRedshift.id, { quantity: 'redshift', preferred: false });
-    const page2 = await agent.get('/api/catalogue/objects').query({ kind: 'quasar', q: 'pager', sort: 'name', dir: 'desc', page: 2, pageSize: 3 });
+    const page2 = await agent
+      .get('/api/catalogue/objects')
+      .query({ kind: 'quasar', q: 'pager', sort: 'name', dir: 'desc', page: 2, pageSize: 3 });
     expect(page2.status).toBe(200);
     expect(page2.body.data.total).toBe(8);
-    expect(page2.body.data.rows.map((r: { name: string }) => r.name)).toEqual(['Pager Quasar 04', 'Pager Quasar 03', 'Pager Quasar 02']);
+    expect(page2.body.data.rows.map((r: { name: string }) => r.name)).toEqual([
+      'Pager Quasar 04',
+      'Pager Quasar 03',
+      'Pager Quasar 02',
+    ]);
     // "missing redshift" means no preferred redshift: an unpreferred one does not count.
     const missing = await agent.get('/api/catalogue/objects').query({ q: 'pager', missing: 'redshift', pageSize: 50 });
     expect(missing.body.data.total).toBe(8);

@@ -15,13 +15,35 @@ describe('sources', () => {
   it('a reviewer adds a source; identifiers are checked and normalised; duplicates are refused', async () => {
     const { agent } = await signedInAgent('reviewer');
     // Willmer (2018), ApJS 236, 47: bibcode and DOI as published.
-    const res = await agent.post('/api/catalogue/sources').send({ citation: 'Willmer, C. N. A. (2018), ApJS 236, 47', bibcode: '2018ApJS..236...47W', doi: 'https://doi.org/10.3847/1538-4365/aabfdf', retrievedOn: '2026-11-30' });
+    const res = await agent
+      .post('/api/catalogue/sources')
+      .send({
+        citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
+        bibcode: '2018ApJS..236...47W',
+        doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
+        retrievedOn: '2026-11-30',
+      });
     expect(res.status).toBe(201);
-    expect(res.body.data).toMatchObject({ doi: '10.3847/1538-4365/aabfdf', bibcode: '2018ApJS..236...47W', retrievedOn: '2026-11-30', measurementCount: 0 });
-    const bad = await agent.post('/api/catalogue/sources').send({ citation: 'X', bibcode: 'not-a-bibcode', doi: '11.1/x', url: 'ftp://x', retrievedOn: '30/11/2026' });
+    expect(res.body.data).toMatchObject({
+      doi: '10.3847/1538-4365/aabfdf',
+      bibcode: '2018ApJS..236...47W',
+      retrievedOn: '2026-11-30',
+      measurementCount: 0,
+    });
+    const bad = await agent
+      .post('/api/catalogue/sources')
+      .send({ citation: 'X', bibcode: 'not-a-bibcode', doi: '11.1/x', url: 'ftp://x', retrievedOn: '30/11/2026' });
     expect(bad.status).toBe(400);
-    expect(bad.body.error.fields).toMatchObject({ citation: expect.stringMatching(/Enter the citation/), bibcode: expect.stringMatching(/19 characters/), doi: expect.stringMatching(/starts with 10\./), url: expect.stringMatching(/http/), retrievedOn: expect.stringMatching(/YYYY-MM-DD/) });
-    const again = await agent.post('/api/catalogue/sources').send({ citation: 'Another name for the same paper', doi: '10.3847/1538-4365/AABFDF' });
+    expect(bad.body.error.fields).toMatchObject({
+      citation: expect.stringMatching(/Enter the citation/),
+      bibcode: expect.stringMatching(/19 characters/),
+      doi: expect.stringMatching(/starts with 10\./),
+      url: expect.stringMatching(/http/),
+      retrievedOn: expect.stringMatching(/YYYY-MM-DD/),
+    });
+    const again = await agent
+      .post('/api/catalogue/sources')
+      .send({ citation: 'Another name for the same paper', doi: '10.3847/1538-4365/AABFDF' });
     expect(again.status).toBe(409);
     expect(again.body.error.message).toMatch(/this DOI already exists/);
   });
@@ -52,8 +74,13 @@ describe('exports', () => {
     expect(res.status).toBe(200);
     expect(res.headers['content-type']).toMatch(/text\/csv/);
     expect(res.headers['content-disposition']).toMatch(/attachment; filename="?starproof-measurements-\d{4}-\d{2}-\d{2}\.csv/);
-    const [header, row] = res.text.replace(/^\uFEFF/, '').trim().split('\n');
-    expect(header).toBe('object,quantity,value,unit,band,uncertainty,uncertainty_minus,uncertainty_plus,source,bibcode,doi,preferred,status,note,entered_at');
+    const [header, row] = res.text
+      .replace(/^\uFEFF/, '')
+      .trim()
+      .split('\n');
+    expect(header).toBe(
+      'object,quantity,value,unit,band,uncertainty,uncertainty_minus,uncertainty_plus,source,bibcode,doi,preferred,status,note,entered_at',
+    );
     expect(row.startsWith('"\'=HYPERLINK(""http://evil.example"")",apparent_magnitude,-1.46,mag,V')).toBe(true);
     expect(row).toContain("'@SUM(A1:A9) et al. (2020)");
     const objects = await agent.get('/api/catalogue/exports/objects.csv');

@@ -32,7 +32,9 @@ describe('channels', () => {
     const created = await crew.admin.agent.post('/api/channels').send({ venueId: venue.id, name: 'Admin channel' });
     expect(created.status).toBe(201);
     expect(created.body.data).toMatchObject({ name: 'Admin channel', slides: [], can: { update: true, delete: true } });
-    expect((await crew.editor.agent.get('/api/channels')).body.data.map((c: { name: string }) => c.name)).toContain('Admin channel');
+    expect((await crew.editor.agent.get('/api/channels')).body.data.map((c: { name: string }) => c.name)).toContain(
+      'Admin channel',
+    );
   });
 
   it('explains bad input: empty or duplicate names, unknown venues, unknown ids', async () => {
@@ -43,7 +45,9 @@ describe('channels', () => {
     const dup = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name: 'LOBBY' });
     expect(dup.status).toBe(409);
     expect(dup.body.error.code).toBe('channel_name_taken');
-    const noVenue = await crew.editor.agent.post('/api/channels').send({ venueId: '00000000-0000-4000-8000-000000000000', name: 'Ghost' });
+    const noVenue = await crew.editor.agent
+      .post('/api/channels')
+      .send({ venueId: '00000000-0000-4000-8000-000000000000', name: 'Ghost' });
     expect(noVenue.status).toBe(400);
     expect(noVenue.body.error.fields.venueId).toBe('There is no such venue');
     expect((await crew.editor.agent.get('/api/channels/not-an-id')).status).toBe(403);
@@ -84,11 +88,20 @@ describe('channels', () => {
     const ok = await add({ kind: 'page', pageId: page.pageId, statementIds: page.statementIds, durationS: 30 });
     expect(ok.status).toBe(201);
     const slide = ok.body.data.slides.at(-1);
-    expect(slide).toMatchObject({ kind: 'page', page: { id: page.pageId, title: 'Checked page' }, statementIds: page.statementIds, state: 'showing' });
-    const changed = await crew.editor.agent.patch(`/api/channels/${channel.id}/slides/${slide.id}`).send({ startsAt: '2099-01-01T00:00:00Z', durationS: 45 });
+    expect(slide).toMatchObject({
+      kind: 'page',
+      page: { id: page.pageId, title: 'Checked page' },
+      statementIds: page.statementIds,
+      state: 'showing',
+    });
+    const changed = await crew.editor.agent
+      .patch(`/api/channels/${channel.id}/slides/${slide.id}`)
+      .send({ startsAt: '2099-01-01T00:00:00Z', durationS: 45 });
     expect(changed.status).toBe(200);
     expect(changed.body.data.slides.at(-1)).toMatchObject({ durationS: 45, state: 'scheduled' });
-    const tooEarly = await crew.editor.agent.patch(`/api/channels/${channel.id}/slides/${slide.id}`).send({ endsAt: '2098-01-01T00:00:00Z' });
+    const tooEarly = await crew.editor.agent
+      .patch(`/api/channels/${channel.id}/slides/${slide.id}`)
+      .send({ endsAt: '2098-01-01T00:00:00Z' });
     expect(tooEarly.status).toBe(400);
     expect(await AuditEvent.count({ where: { action: 'channel.slide_added', subjectId: channel.id } })).toBe(3);
   });
@@ -96,17 +109,29 @@ describe('channels', () => {
   it('reorders slides as a whole list and refuses a stale one; removing closes the gap', async () => {
     const channel = await newChannel('Order');
     const ids: string[] = [];
-    for (let i = 0; i < 3; i += 1) ids.push((await crew.editor.agent.post(`/api/channels/${channel.id}/slides`).send({ kind: 'sky_tonight', durationS: 10 + i })).body.data.slides.at(-1).id);
-    const reordered = await crew.editor.agent.put(`/api/channels/${channel.id}/slide-order`).send({ slideIds: [ids[2], ids[0], ids[1]] });
+    for (let i = 0; i < 3; i += 1)
+      ids.push(
+        (
+          await crew.editor.agent.post(`/api/channels/${channel.id}/slides`).send({ kind: 'sky_tonight', durationS: 10 + i })
+        ).body.data.slides.at(-1).id,
+      );
+    const reordered = await crew.editor.agent
+      .put(`/api/channels/${channel.id}/slide-order`)
+      .send({ slideIds: [ids[2], ids[0], ids[1]] });
     expect(reordered.status).toBe(200);
     expect(reordered.body.data.slides.map((s: { id: string }) => s.id)).toEqual([ids[2], ids[0], ids[1]]);
     const stale = await crew.editor.agent.put(`/api/channels/${channel.id}/slide-order`).send({ slideIds: [ids[0], ids[1]] });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('slides_changed');
-    const twice = await crew.editor.agent.put(`/api/channels/${channel.id}/slide-order`).send({ slideIds: [ids[0], ids[0], ids[1]] });
+    const twice = await crew.editor.agent
+      .put(`/api/channels/${channel.id}/slide-order`)
+      .send({ slideIds: [ids[0], ids[0], ids[1]] });
     expect(twice.status).toBe(409);
     const removed = await crew.editor.agent.delete(`/api/channels/${channel.id}/slides/${ids[2]}`);
-    expect(removed.body.data.slides.map((s: { id: string; position: number }) => [s.id, s.position])).toEqual([[ids[0], 0], [ids[1], 1]]);
+    expect(removed.body.data.slides.map((s: { id: string; position: number }) => [s.id, s.position])).toEqual([
+      [ids[0], 0],
+      [ids[1], 1],
+    ]);
     expect((await crew.editor.agent.delete(`/api/channels/${channel.id}/slides/${ids[2]}`)).status).toBe(404);
   });
 
@@ -114,11 +139,16 @@ describe('channels', () => {
     const a = await newChannel('Channel A');
     const b = await newChannel('Channel B');
     const screen = await pairedScreen(crew.admin.agent, venue.id, 'Moving screen');
-    expect((await crew.editor.agent.put(`/api/channels/${a.id}/screens`).send({ screenIds: [screen.screenId] })).status).toBe(200);
+    expect((await crew.editor.agent.put(`/api/channels/${a.id}/screens`).send({ screenIds: [screen.screenId] })).status).toBe(
+      200,
+    );
     const moved = await crew.editor.agent.put(`/api/channels/${b.id}/screens`).send({ screenIds: [screen.screenId] });
     expect(moved.body.data.screens.map((s: { id: string }) => s.id)).toEqual([screen.screenId]);
     expect((await crew.editor.agent.get(`/api/channels/${a.id}`)).body.data.screens).toEqual([]);
-    expect((await crew.editor.agent.put(`/api/channels/${b.id}/screens`).send({ screenIds: [screen.screenId, screen.screenId] })).status).toBe(400);
+    expect(
+      (await crew.editor.agent.put(`/api/channels/${b.id}/screens`).send({ screenIds: [screen.screenId, screen.screenId] }))
+        .status,
+    ).toBe(400);
 
     const image = await buildKioskMedia(crew.editor.user);
     await crew.editor.agent.post(`/api/channels/${b.id}/slides`).send({ kind: 'image', mediaId: image.id, caption: 'Kept' });

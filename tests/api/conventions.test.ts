@@ -22,7 +22,10 @@ describe('API conventions', () => {
   });
 
   it('malformed JSON gets a clear 400 and no stack trace', async () => {
-    const res = await supertest(await getTestApp()).post('/api/auth/sign-in').set('Content-Type', 'application/json').send('{"email": ');
+    const res = await supertest(await getTestApp())
+      .post('/api/auth/sign-in')
+      .set('Content-Type', 'application/json')
+      .send('{"email": ');
     expect(res.status).toBe(400);
     expect(res.body.error).toEqual({ code: 'malformed_json', message: 'The request body is not valid JSON.' });
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);

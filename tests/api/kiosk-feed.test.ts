@@ -20,7 +20,9 @@ async function channelWithScreen(name: string, screenName: string) {
   const channel = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name });
   expect(channel.status, JSON.stringify(channel.body)).toBe(201);
   const screen = await pairedScreen(crew.admin.agent, venue.id, screenName);
-  const assigned = await crew.editor.agent.put(`/api/channels/${channel.body.data.id}/screens`).send({ screenIds: [screen.screenId] });
+  const assigned = await crew.editor.agent
+    .put(`/api/channels/${channel.body.data.id}/screens`)
+    .send({ screenIds: [screen.screenId] });
   expect(assigned.status).toBe(200);
   return { channelId: channel.body.data.id as string, ...screen };
 }
@@ -55,8 +57,18 @@ describe('the kiosk feed', () => {
     const image = await buildKioskMedia(crew.editor.user);
     const page = await publishedPage(crew, 'A quasar for the foyer', image.id);
     const { channelId, token } = await channelWithScreen('Foyer', 'Foyer screen');
-    const pageSlide = await addSlide(channelId, { kind: 'page', pageId: page.pageId, statementIds: [page.statementIds[0]], durationS: 20 });
-    const imageSlide = await addSlide(channelId, { kind: 'image', mediaId: image.id, caption: 'Gas & dust <in> the Swan', durationS: 3 });
+    const pageSlide = await addSlide(channelId, {
+      kind: 'page',
+      pageId: page.pageId,
+      statementIds: [page.statementIds[0]],
+      durationS: 20,
+    });
+    const imageSlide = await addSlide(channelId, {
+      kind: 'image',
+      mediaId: image.id,
+      caption: 'Gas & dust <in> the Swan',
+      durationS: 3,
+    });
     const skySlide = await addSlide(channelId, { kind: 'sky_tonight', durationS: 600 });
 
     const res = await getFeed(token);
@@ -68,14 +80,27 @@ describe('the kiosk feed', () => {
     expect(p.content_html).toContain('<p>A bright quasar you can find with a small telescope.</p>');
     expect(p.image).toMatch(/^\/media\/files\/[0-9a-f]{64}\.jpg$/);
     expect(Date.parse(p.date_published)).not.toBeNaN();
-    expect(p._starproof.slide).toMatchObject({ kind: 'page', duration_s: 20, layout: 'image-text', credit: 'Corrie Vale Observatory (demo)', licence: 'CC BY 4.0', licence_url: 'https://creativecommons.org/licenses/by/4.0/' });
+    expect(p._starproof.slide).toMatchObject({
+      kind: 'page',
+      duration_s: 20,
+      layout: 'image-text',
+      credit: 'Corrie Vale Observatory (demo)',
+      licence: 'CC BY 4.0',
+      licence_url: 'https://creativecommons.org/licenses/by/4.0/',
+    });
     expect(p._starproof.slide.statements).toHaveLength(1);
     expect(p._starproof.slide.statements[0]).toMatchObject({ id: page.statementIds[0], text: page.distanceText });
     expect(Date.parse(p._starproof.slide.statements[0].as_of)).not.toBeNaN();
     expect(p._starproof.slide.image).toMatchObject({ focal: { x: 0.4, y: 0.6 } });
     expect(p._starproof.slide.image.hd).not.toBe(p._starproof.slide.image.uhd);
     // Durations are clamped to 5–120 s rather than refused.
-    expect(i._starproof.slide).toMatchObject({ kind: 'image', layout: 'image', duration_s: 5, text: 'Gas & dust <in> the Swan', credit: 'Corrie Vale Observatory (demo)' });
+    expect(i._starproof.slide).toMatchObject({
+      kind: 'image',
+      layout: 'image',
+      duration_s: 5,
+      text: 'Gas & dust <in> the Swan',
+      credit: 'Corrie Vale Observatory (demo)',
+    });
     expect(i.content_html).toContain('Gas &amp; dust &lt;in&gt; the Swan');
     expect(s._starproof.slide).toMatchObject({ kind: 'sky_tonight', layout: 'sky-table', duration_s: 120 });
     expect(s._starproof.sky.planets).toHaveLength(7);
@@ -138,7 +163,10 @@ describe('the kiosk feed', () => {
     const soon = await addSlide(channelId, { kind: 'sky_tonight', startsAt: iso(now + 2_500) });
     const open = await addSlide(channelId, { kind: 'sky_tonight', startsAt: iso(now - 60_000), endsAt: iso(now + 3_600_000) });
     // A kiosk whose own clock is a day off changes nothing: the server decides by its clock.
-    const first = await supertest(await getTestApp()).get('/api/kiosk/feed').set('Authorization', `Bearer ${token}`).set('Date', new Date(now + 86_400_000).toUTCString());
+    const first = await supertest(await getTestApp())
+      .get('/api/kiosk/feed')
+      .set('Authorization', `Bearer ${token}`)
+      .set('Date', new Date(now + 86_400_000).toUTCString());
     const feed = JSON.parse(first.text);
     expect(feed.items.map((i: { id: string }) => i.id)).toEqual([open]);
     expect(Math.abs(Date.parse(feed._starproof.server_time) - Date.now())).toBeLessThan(5_000);
@@ -156,8 +184,20 @@ describe('the kiosk feed', () => {
     expect(unknown.status).toBe(401);
     expect(unknown.body.error.code).toBe('kiosk_token_invalid');
     expect((await supertest(await getTestApp()).get('/api/kiosk/feed')).status).toBe(401);
-    expect((await supertest(await getTestApp()).get('/api/kiosk/feed').set('Authorization', 'Basic abc')).status).toBe(401);
-    expect((await supertest(await getTestApp()).get(`/api/channels/${channelId}/preview-feed`).set('Authorization', `Bearer ${token}`)).status).toBe(401);
+    expect(
+      (
+        await supertest(await getTestApp())
+          .get('/api/kiosk/feed')
+          .set('Authorization', 'Basic abc')
+      ).status,
+    ).toBe(401);
+    expect(
+      (
+        await supertest(await getTestApp())
+          .get(`/api/channels/${channelId}/preview-feed`)
+          .set('Authorization', `Bearer ${token}`)
+      ).status,
+    ).toBe(401);
     expect((await crew.admin.agent.post(`/api/venues/${venue.id}/screens/${screenId}/revoke`)).status).toBe(200);
     const revoked = await getFeed(token);
     expect(revoked.status).toBe(401);
@@ -169,7 +209,9 @@ describe('the kiosk feed', () => {
     const theirs = await crew.editor.agent.post('/api/channels').send({ venueId: other.id, name: 'Their channel' });
     await crew.editor.agent.post(`/api/channels/${theirs.body.data.id}/slides`).send({ kind: 'sky_tonight' });
     const ours = await pairedScreen(crew.admin.agent, venue.id, 'Our screen');
-    const refused = await crew.editor.agent.put(`/api/channels/${theirs.body.data.id}/screens`).send({ screenIds: [ours.screenId] });
+    const refused = await crew.editor.agent
+      .put(`/api/channels/${theirs.body.data.id}/screens`)
+      .send({ screenIds: [ours.screenId] });
     expect(refused.status).toBe(400);
     expect(refused.body.error.code).toBe('screen_other_venue');
     const feed = JSON.parse((await getFeed(ours.token)).text);

@@ -11,7 +11,17 @@ beforeAll(async () => {
 let venueCounter = 0;
 async function venueWithScreen(agent: Awaited<ReturnType<typeof signedInAgent>>['agent'], screenName = 'Foyer') {
   venueCounter += 1;
-  const venue = (await agent.post('/api/venues').send({ name: `Kiosk Test Dome ${venueCounter}`, latitude: 51.5, longitude: -0.1, elevationM: 10, timeZone: 'Europe/London' })).body.data;
+  const venue = (
+    await agent
+      .post('/api/venues')
+      .send({
+        name: `Kiosk Test Dome ${venueCounter}`,
+        latitude: 51.5,
+        longitude: -0.1,
+        elevationM: 10,
+        timeZone: 'Europe/London',
+      })
+  ).body.data;
   const added = await agent.post(`/api/venues/${venue.id}/screens`).send({ name: screenName });
   expect(added.status).toBe(201);
   return { venue, screen: added.body.data.screen, code: added.body.data.pairingCode as string };
@@ -19,7 +29,8 @@ async function venueWithScreen(agent: Awaited<ReturnType<typeof signedInAgent>>[
 
 const kiosk = async () => supertest(await getTestApp());
 const pair = async (code: string) => (await kiosk()).post('/api/kiosk/pair').send({ code });
-const heartbeat = async (token: string, body: object = {}) => (await kiosk()).post('/api/kiosk/heartbeat').set('Authorization', `Bearer ${token}`).send(body);
+const heartbeat = async (token: string, body: object = {}) =>
+  (await kiosk()).post('/api/kiosk/heartbeat').set('Authorization', `Bearer ${token}`).send(body);
 
 describe('kiosk pairing and tokens', () => {
   it('an admin adds a screen and sees a one-time code like K7Q-4M2; the player trades it for a token', async () => {
@@ -96,7 +107,9 @@ describe('kiosk pairing and tokens', () => {
     const after = await heartbeat(token);
     expect(after.status).toBe(401);
     expect(after.body.error.code).toBe('kiosk_token_invalid');
-    expect((await (await kiosk()).get(`/api/kiosk/venues/${venue.id}/sky`).set('Authorization', `Bearer ${token}`)).status).toBe(401);
+    expect((await (await kiosk()).get(`/api/kiosk/venues/${venue.id}/sky`).set('Authorization', `Bearer ${token}`)).status).toBe(
+      401,
+    );
   });
 
   it('re-pairing gives a new code; the old token works until the new code is used, then stops', async () => {
@@ -127,7 +140,9 @@ describe('kiosk pairing and tokens', () => {
     expect(otherScreen.status).toBe(403);
     expect((await KioskScreen.findByPk(b.screen.id))!.playerVersion).toBeNull();
     // The admin routes do not accept a kiosk token either.
-    expect((await (await kiosk()).get(`/api/venues/${a.venue.id}/screens`).set('Authorization', `Bearer ${tokenA}`)).status).toBe(401);
+    expect((await (await kiosk()).get(`/api/venues/${a.venue.id}/screens`).set('Authorization', `Bearer ${tokenA}`)).status).toBe(
+      401,
+    );
   });
 
   it('an admin cannot reach another venue’s screen through this venue’s URL', async () => {

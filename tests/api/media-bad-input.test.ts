@@ -51,18 +51,33 @@ function multipartWithHeader(disposition: string, data: Buffer) {
 
 describe('refusing bad uploads with a clear message and nothing stored', () => {
   it('a text file named .jpg', async () => {
-    const res = await upload(agent, Buffer.from('Observing log, 14 March: clear skies, seeing 3/5.\n'.repeat(20)), 'observing-log.jpg');
+    const res = await upload(
+      agent,
+      Buffer.from('Observing log, 14 March: clear skies, seeing 3/5.\n'.repeat(20)),
+      'observing-log.jpg',
+    );
     await expectRefused(res, 400, 'not_an_image', /not an image .* whatever its name says/);
   });
 
   it('a truncated JPEG (the header is intact, the picture is cut off)', async () => {
-    const noisy = await sharp({ create: { width: 1600, height: 1200, channels: 3, background: '#000000', noise: { type: 'gaussian', mean: 120, sigma: 50 } } }).jpeg().toBuffer();
+    const noisy = await sharp({
+      create: {
+        width: 1600,
+        height: 1200,
+        channels: 3,
+        background: '#000000',
+        noise: { type: 'gaussian', mean: 120, sigma: 50 },
+      },
+    })
+      .jpeg()
+      .toBuffer();
     const res = await upload(agent, noisy.subarray(0, Math.floor(noisy.length / 2)), 'cut-off.jpg');
     await expectRefused(res, 400, 'damaged_image', /damaged or incomplete/);
   });
 
   it('an SVG, even with an innocent name (scripts never reach a parser)', async () => {
-    const svg = '<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100"><script>alert(document.cookie)</script><circle cx="50" cy="50" r="40"/></svg>';
+    const svg =
+      '<?xml version="1.0"?>\n<svg xmlns="http://www.w3.org/2000/svg" width="100" height="100"><script>alert(document.cookie)</script><circle cx="50" cy="50" r="40"/></svg>';
     const res = await upload(agent, Buffer.from(svg), 'orion.png');
     await expectRefused(res, 400, 'svg_refused', /SVG drawings are not accepted.*Export the drawing as PNG/);
     const bare = await upload(agent, Buffer.from('\uFEFF  <svg xmlns="http://www.w3.org/2000/svg"/>'), 'bare.svg');
@@ -93,7 +108,9 @@ describe('refusing bad uploads with a clear message and nothing stored', () => {
     const app = await getTestApp();
     const { user } = await signedInAgent('writer');
     const boundary = 'starproof-test-boundary';
-    const head = Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="stream.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`);
+    const head = Buffer.from(
+      `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="stream.jpg"\r\nContent-Type: image/jpeg\r\n\r\n`,
+    );
     const tail = Buffer.from(`\r\n--${boundary}--\r\n`);
     const server = app.listen(0, '127.0.0.1');
     await new Promise((r) => server.once('listening', r));
@@ -135,10 +152,13 @@ describe('refusing bad uploads with a clear message and nothing stored', () => {
     await expectNothingStored();
   });
 
-  it.each([['../../etc/passwd.jpg'], ['..\\..\\windows\\win.ini.jpg'], ['/var/lib/starproof/x.jpg']])('a file name with path separators: %j', async (name) => {
-    const res = await upload(agent, await solidImage(200, 100, '#102030'), name);
-    await expectRefused(res, 400, 'unsafe_file_name', /path separators or control characters/);
-  });
+  it.each([['../../etc/passwd.jpg'], ['..\\..\\windows\\win.ini.jpg'], ['/var/lib/starproof/x.jpg']])(
+    'a file name with path separators: %j',
+    async (name) => {
+      const res = await upload(agent, await solidImage(200, 100, '#102030'), name);
+      await expectRefused(res, 400, 'unsafe_file_name', /path separators or control characters/);
+    },
+  );
 
   it.each([['night%07sky.jpg'], ['night%00sky.jpg'], ['moon%1B%5B31m.jpg'], ['tab%09bed.jpg'], ['c1%C2%85.jpg']])(
     'a file name with control characters, percent-encoded as RFC 5987 allows: %s',
@@ -149,13 +169,16 @@ describe('refusing bad uploads with a clear message and nothing stored', () => {
     },
   );
 
-  it.each([['night\u0007sky.jpg'], ['moon\u001b[31m.jpg'], ['line\rbreak.jpg']])('a raw control character in the part header: %j', async (name) => {
-    const res = await multipartWithHeader(`form-data; name="file"; filename="${name}"`, await solidImage(200, 100, '#102030'));
-    expect(res.status).toBe(400);
-    expect(['malformed_upload', 'unsafe_file_name']).toContain(res.body.error.code);
-    expect(res.body.error.message).toMatch(/control characters/);
-    await expectNothingStored();
-  });
+  it.each([['night\u0007sky.jpg'], ['moon\u001b[31m.jpg'], ['line\rbreak.jpg']])(
+    'a raw control character in the part header: %j',
+    async (name) => {
+      const res = await multipartWithHeader(`form-data; name="file"; filename="${name}"`, await solidImage(200, 100, '#102030'));
+      expect(res.status).toBe(400);
+      expect(['malformed_upload', 'unsafe_file_name']).toContain(res.body.error.code);
+      expect(res.body.error.message).toMatch(/control characters/);
+      await expectNothingStored();
+    },
+  );
 
   it.each(['gif', 'webp'] as const)('an animated %s (refused: kiosk slides must not flash)', async (format) => {
     const res = await upload(agent, await animated(format), `blink.${format}`);
@@ -163,7 +186,9 @@ describe('refusing bad uploads with a clear message and nothing stored', () => {
   });
 
   it('a still GIF is fine', async () => {
-    const still = await sharp({ create: { width: 120, height: 80, channels: 3, background: '#203040' } }).gif().toBuffer();
+    const still = await sharp({ create: { width: 120, height: 80, channels: 3, background: '#203040' } })
+      .gif()
+      .toBuffer();
     const res = await upload(agent, still, 'still.gif');
     expect(res.status).toBe(201);
     await Media.destroy({ where: {} });
@@ -178,8 +203,18 @@ describe('refusing bad uploads with a clear message and nothing stored', () => {
 
   it('a bad licence or source address in the upload fields', async () => {
     const img = await solidImage(300, 200, '#445566');
-    await expectRefused(await upload(agent, img, 'a.jpg', { licenceId: 'cc-by-99' }), 400, 'invalid_input', /Choose a licence from the list/);
-    await expectRefused(await upload(agent, img, 'a.jpg', { sourceUrl: 'javascript:alert(1)' }), 400, 'invalid_input', /https:\/\//);
+    await expectRefused(
+      await upload(agent, img, 'a.jpg', { licenceId: 'cc-by-99' }),
+      400,
+      'invalid_input',
+      /Choose a licence from the list/,
+    );
+    await expectRefused(
+      await upload(agent, img, 'a.jpg', { sourceUrl: 'javascript:alert(1)' }),
+      400,
+      'invalid_input',
+      /https:\/\//,
+    );
   });
 
   it('anonymous visitors get 401 and upload nothing', async () => {

@@ -13,7 +13,11 @@ import { getSequelize } from '../../server/db.ts';
 import { AuditEvent, Media } from '../../server/models/index.ts';
 import { noteFiles } from '../../server/services/media-file-journal.ts';
 import { sweepOrphanMedia } from '../../server/services/media-sweep.ts';
-import { isMediaReadyForPublishing, registerMediaUsageProvider, unregisterMediaUsageProvider } from '../../server/services/media-usage.ts';
+import {
+  isMediaReadyForPublishing,
+  registerMediaUsageProvider,
+  unregisterMediaUsageProvider,
+} from '../../server/services/media-usage.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { clearUploads, solidImage, storedFiles, upload } from '../support/media.ts';
 
@@ -33,9 +37,14 @@ beforeAll(async () => {
     { replacements: { a: objects.andromeda, o: objects.orion } },
   );
   writer = await signedInAgent('writer');
-  const up = async (colour: string, name: string, fields: Record<string, string>) => (await upload(writer.agent, await solidImage(640, 360, colour), name, fields)).body.data.id as string;
+  const up = async (colour: string, name: string, fields: Record<string, string>) =>
+    (await upload(writer.agent, await solidImage(640, 360, colour), name, fields)).body.data.id as string;
   ids = {
-    galaxy: await up('#101830', 'm31-wide.jpg', { credit: 'Corrie Vale Astro Society (demo)', licenceId: 'cc-by-4.0', altText: 'A faint oval glow' }),
+    galaxy: await up('#101830', 'm31-wide.jpg', {
+      credit: 'Corrie Vale Astro Society (demo)',
+      licenceId: 'cc-by-4.0',
+      altText: 'A faint oval glow',
+    }),
     nebula: await up('#301018', 'orion.jpg', { credit: 'Demo Observatory 50% archive', licenceId: 'cc0-1.0' }),
     moon: await up('#303030', 'moon.jpg', {}),
   };
@@ -45,7 +54,8 @@ beforeAll(async () => {
 
 afterAll(() => unregisterMediaUsageProvider('test-pages'));
 
-const found = async (query: string) => ((await writer.agent.get(`/api/media?${query}`)).body.data as Array<{ id: string }>).map((m) => m.id).sort();
+const found = async (query: string) =>
+  ((await writer.agent.get(`/api/media?${query}`)).body.data as Array<{ id: string }>).map((m) => m.id).sort();
 
 describe('the library', () => {
   it('lists newest first with paging and the upload limits', async () => {
@@ -53,7 +63,11 @@ describe('the library', () => {
     expect(res.status).toBe(200);
     expect(res.body.data.map((m: { id: string }) => m.id)).toEqual([ids.moon, ids.nebula, ids.galaxy]);
     expect(res.body.meta).toMatchObject({ total: 3, page: 1, uploadMaxBytes: 100 * 1024 * 1024, maxMegapixels: 100 });
-    expect(res.body.data[2]).toMatchObject({ credit: 'Corrie Vale Astro Society (demo)', licence: { id: 'cc-by-4.0', label: 'CC BY 4.0' }, objects: [{ name: 'Andromeda Galaxy' }] });
+    expect(res.body.data[2]).toMatchObject({
+      credit: 'Corrie Vale Astro Society (demo)',
+      licence: { id: 'cc-by-4.0', label: 'CC BY 4.0' },
+      objects: [{ name: 'Andromeda Galaxy' }],
+    });
   });
 
   it('searches by object name or designation, credit and licence', async () => {
@@ -79,7 +93,10 @@ describe('the library', () => {
 
 describe('details and readiness for publishing', () => {
   it('says what is missing until credit, licence, source, alt text and renditions are all there', async () => {
-    expect(await isMediaReadyForPublishing(ids.moon)).toEqual({ ready: false, missing: ['credit', 'licence', 'sourceUrl', 'altText'] });
+    expect(await isMediaReadyForPublishing(ids.moon)).toEqual({
+      ready: false,
+      missing: ['credit', 'licence', 'sourceUrl', 'altText'],
+    });
     const res = await writer.agent.patch(`/api/media/${ids.moon}`).send({
       credit: 'Corrie Vale Planetarium (demo)',
       licenceId: 'all-rights-reserved-permission',
@@ -129,9 +146,13 @@ describe('details and readiness for publishing', () => {
 
 describe('where used, and deleting', () => {
   it('shows where an image is used and refuses to delete it then', async () => {
-    registerMediaUsageProvider('test-pages', async (mediaId) => (mediaId === ids.nebula ? [{ kind: 'page', id: 'p1', title: 'The Orion Nebula' }] : []));
+    registerMediaUsageProvider('test-pages', async (mediaId) =>
+      mediaId === ids.nebula ? [{ kind: 'page', id: 'p1', title: 'The Orion Nebula' }] : [],
+    );
     const { agent: editor } = await signedInAgent('editor');
-    expect((await editor.get(`/api/media/${ids.nebula}`)).body.data.usage).toEqual([{ kind: 'page', id: 'p1', title: 'The Orion Nebula' }]);
+    expect((await editor.get(`/api/media/${ids.nebula}`)).body.data.usage).toEqual([
+      { kind: 'page', id: 'p1', title: 'The Orion Nebula' },
+    ]);
     const res = await editor.delete(`/api/media/${ids.nebula}`);
     expect(res.status).toBe(409);
     expect(res.body.error).toMatchObject({ code: 'in_use', message: expect.stringContaining('page “The Orion Nebula”') });
@@ -143,7 +164,9 @@ describe('where used, and deleting', () => {
     const res = await other.agent.delete(`/api/media/${ids.moon}`);
     expect(res.status).toBe(403);
     expect((await other.agent.get(`/api/media/${ids.moon}`)).body.data.can).toEqual({ update: true, delete: false });
-    const urls = ((await writer.agent.get(`/api/media/${ids.moon}`)).body.data.renditions as Array<{ url: string }>).map((r) => r.url);
+    const urls = ((await writer.agent.get(`/api/media/${ids.moon}`)).body.data.renditions as Array<{ url: string }>).map(
+      (r) => r.url,
+    );
     const original = (await Media.findByPk(ids.moon))!.originalKey;
     expect(storedFiles()).toContain(original);
     expect((await writer.agent.delete(`/api/media/${ids.moon}`)).status).toBe(204);
@@ -164,7 +187,12 @@ describe('where used, and deleting', () => {
 
   it('anonymous visitors get 401 from every media endpoint', async () => {
     const anon = supertest(await getTestApp());
-    for (const res of [await anon.get('/api/media'), await anon.get(`/api/media/${ids.nebula}`), await anon.patch(`/api/media/${ids.nebula}`).send({ credit: 'x' }), await anon.delete(`/api/media/${ids.nebula}`)]) {
+    for (const res of [
+      await anon.get('/api/media'),
+      await anon.get(`/api/media/${ids.nebula}`),
+      await anon.patch(`/api/media/${ids.nebula}`).send({ credit: 'x' }),
+      await anon.delete(`/api/media/${ids.nebula}`),
+    ]) {
       expect(res.status).toBe(401);
     }
   });

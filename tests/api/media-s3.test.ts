@@ -57,7 +57,14 @@ const readAll = async (stream: NodeJS.ReadableStream) => {
 
 describe('the S3 storage driver against s3rver on loopback', () => {
   it('stores, reads, checks and deletes files under its prefix', async () => {
-    const storage = new S3Storage({ bucket: BUCKET, region: 'us-east-1', endpoint, forcePathStyle: true, prefix: 'driver/', credentials });
+    const storage = new S3Storage({
+      bucket: BUCKET,
+      region: 'us-east-1',
+      endpoint,
+      forcePathStyle: true,
+      prefix: 'driver/',
+      credentials,
+    });
     const tmp = path.join(os.tmpdir(), `starproof-s3-${process.pid}.bin`);
     fs.writeFileSync(tmp, Buffer.from('from a file on disk'));
     try {
@@ -74,7 +81,9 @@ describe('the S3 storage driver against s3rver on loopback', () => {
       await storage.delete(key('c')); // a missing file is not an error
       expect(await storage.exists(key('a'))).toBe(false);
       // Keys that are not ours never reach the bucket.
-      await expect(storage.putBuffer('../originals/x.jpg', Buffer.from('x'), { contentType: 'image/jpeg' })).rejects.toThrow(/Not a media storage key/);
+      await expect(storage.putBuffer('../originals/x.jpg', Buffer.from('x'), { contentType: 'image/jpeg' })).rejects.toThrow(
+        /Not a media storage key/,
+      );
       // The prefix really is where the objects live.
       expect(fs.readdirSync(path.join(directory, BUCKET))).toContain('driver');
     } finally {
@@ -92,7 +101,9 @@ describe('the S3 storage driver against s3rver on loopback', () => {
     expect(await getStorage().exists(media.originalKey)).toBe(true);
     // Nothing but the temporary folder (now empty) on local disk.
     expect(storedFiles()).toEqual([]);
-    const thumb = res.body.data.renditions.find((r: { name: string; format: string }) => r.name === 'thumbnail' && r.format === 'jpeg');
+    const thumb = res.body.data.renditions.find(
+      (r: { name: string; format: string }) => r.name === 'thumbnail' && r.format === 'jpeg',
+    );
     const served = await supertest(await getTestApp()).get(thumb.url);
     expect(served.status).toBe(200);
     expect(served.headers['content-type']).toBe('image/jpeg');

@@ -26,8 +26,12 @@ async function leftBy(tag: string) {
   const key = `originals/${randomUUID().replace(/-/g, '')}${'0'.repeat(32)}.jpg`;
   fs.mkdirSync(path.join(config.uploadsDir, 'originals'), { recursive: true });
   fs.writeFileSync(path.join(config.uploadsDir, key), 'stored, never given a row');
-  await getSequelize().query('INSERT INTO media_file_intents (storage_key, created_at, owner) VALUES (:key, now(), :tag)', { replacements: { key, tag } });
-  const noted = async () => (await getSequelize().query('SELECT 1 FROM media_file_intents WHERE storage_key = :key', { replacements: { key } }))[0].length === 1;
+  await getSequelize().query('INSERT INTO media_file_intents (storage_key, created_at, owner) VALUES (:key, now(), :tag)', {
+    replacements: { key, tag },
+  });
+  const noted = async () =>
+    (await getSequelize().query('SELECT 1 FROM media_file_intents WHERE storage_key = :key', { replacements: { key } }))[0]
+      .length === 1;
   return { tmpFile, stored: path.join(config.uploadsDir, key), noted };
 }
 

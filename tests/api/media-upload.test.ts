@@ -18,11 +18,14 @@ const sha256 = (data: Buffer) => createHash('sha256').update(data).digest('hex')
 type Rendition = { name: string; format: string; width: number; height: number; url: string };
 
 async function fetchRendition(url: string): Promise<Buffer> {
-  const res = await supertest(await getTestApp()).get(url).buffer(true).parse((r, cb) => {
-    const parts: Buffer[] = [];
-    r.on('data', (c: Buffer) => parts.push(c));
-    r.on('end', () => cb(null, Buffer.concat(parts)));
-  });
+  const res = await supertest(await getTestApp())
+    .get(url)
+    .buffer(true)
+    .parse((r, cb) => {
+      const parts: Buffer[] = [];
+      r.on('data', (c: Buffer) => parts.push(c));
+      r.on('end', () => cb(null, Buffer.concat(parts)));
+    });
   expect(res.status).toBe(200);
   return res.body as Buffer;
 }
@@ -44,7 +47,10 @@ describe('uploading an image', () => {
     const meta = await sharp(photo).metadata();
     expect(meta.orientation).toBe(6);
     expect(meta.exif?.includes(Buffer.from([0x25, 0x88]))).toBe(true);
-    const res = await upload(agent, photo, 'Andromeda über Corrie Vale.jpg', { altText: 'The Andromeda galaxy above the hills', credit: 'Corrie Vale Planetarium (demo)' });
+    const res = await upload(agent, photo, 'Andromeda über Corrie Vale.jpg', {
+      altText: 'The Andromeda galaxy above the hills',
+      credit: 'Corrie Vale Planetarium (demo)',
+    });
     expect(res.status).toBe(201);
     body = res.body.data;
   });
@@ -55,9 +61,17 @@ describe('uploading an image', () => {
     expect(body.renditionsStatus).toBe('ready');
     expect(body.renditions).toHaveLength(12);
     const size = (name: string) => body.renditions.filter((r) => r.name === name).map((r) => [r.width, r.height]);
-    expect(size('thumbnail')).toEqual([[267, 400], [267, 400], [267, 400]]);
+    expect(size('thumbnail')).toEqual([
+      [267, 400],
+      [267, 400],
+      [267, 400],
+    ]);
     // Never enlarged: the page rendition stays at the original's size.
-    expect(size('page')).toEqual([[800, 1200], [800, 1200], [800, 1200]]);
+    expect(size('page')).toEqual([
+      [800, 1200],
+      [800, 1200],
+      [800, 1200],
+    ]);
     // Kiosk crops keep 16:9 at the largest size the image allows (800 wide), never upscaled to 1920.
     expect(size('kiosk-hd')[0]).toEqual([800, 450]);
     expect(size('kiosk-4k')[0]).toEqual([800, 450]);
@@ -82,7 +96,12 @@ describe('uploading an image', () => {
     expect((await Media.findByPk(body.id))!.sha256).toBe(hash);
     // No URL reaches it: not its name under /media/files, not a path outside renditions/.
     const app = supertest(await getTestApp());
-    for (const url of [`/media/files/${hash}.jpg`, `/media/files/..%2Foriginals%2F${hash}.jpg`, `/media/originals/${hash}.jpg`, `/media/files/originals/${hash}.jpg`]) {
+    for (const url of [
+      `/media/files/${hash}.jpg`,
+      `/media/files/..%2Foriginals%2F${hash}.jpg`,
+      `/media/originals/${hash}.jpg`,
+      `/media/files/originals/${hash}.jpg`,
+    ]) {
       expect((await app.get(url)).status, url).toBe(404);
     }
     expect(JSON.stringify(body)).not.toContain(hash);

@@ -33,7 +33,8 @@ async function submittedPage() {
 }
 
 async function signOffEverything(reviewer: Awaited<ReturnType<typeof signedInAgent>>, pageId: string, statementIds: string[]) {
-  for (const id of statementIds) expect((await reviewer.agent.post(`/api/pages/${pageId}/signoffs/statements`).send({ statementId: id })).status).toBe(200);
+  for (const id of statementIds)
+    expect((await reviewer.agent.post(`/api/pages/${pageId}/signoffs/statements`).send({ statementId: id })).status).toBe(200);
   const res = await reviewer.agent.post(`/api/pages/${pageId}/signoffs/page`);
   expect(res.status, JSON.stringify(res.body)).toBe(200);
   return res;
@@ -51,14 +52,26 @@ describe('from draft to published', () => {
     expect(early.body.error.message).toMatch(/One hand-typed number is not resolved \(“3 times brighter”\)/);
     expect(early.body.error.message).toMatch(/2 statements have not been signed off/);
 
-    expect((await writer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: q.distanceId })).status).toBe(403);
-    expect((await writer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'A comparison with nearby objects in the picture.' })).status).toBe(403);
+    expect(
+      (await writer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: q.distanceId })).status,
+    ).toBe(403);
+    expect(
+      (
+        await writer.agent
+          .post(`/api/pages/${page.id}/flags`)
+          .send({ text: '3 times brighter', reason: 'A comparison with nearby objects in the picture.' })
+      ).status,
+    ).toBe(403);
     const short = await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'fine' });
     expect(short.status).toBe(400);
     expect(short.body.error.fields.reason).toMatch(/at least 10 characters/);
-    const notThere = await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '12 billion years', reason: 'Not on this page at all, really.' });
+    const notThere = await reviewer.agent
+      .post(`/api/pages/${page.id}/flags`)
+      .send({ text: '12 billion years', reason: 'Not on this page at all, really.' });
     expect(notThere.status).toBe(409);
-    const resolved = await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3  Times brighter', reason: 'A loose comparison in the picture caption, not a measurement.' });
+    const resolved = await reviewer.agent
+      .post(`/api/pages/${page.id}/flags`)
+      .send({ text: '3  Times brighter', reason: 'A loose comparison in the picture caption, not a measurement.' });
     expect(resolved.status).toBe(200);
     expect(resolved.body.data.flags[0].resolution.reason).toMatch(/loose comparison/);
 
@@ -78,27 +91,64 @@ describe('from draft to published', () => {
     expect(live!.html).toContain('<h2>How far away</h2>');
     expect(live!.html).not.toMatch(/<script|\son\w+=|javascript:/i);
 
-    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map((e) => e.action);
-    expect(actions).toEqual(['page.created', 'page.submitted', 'page.number_resolved', 'page.statement_signed_off', 'page.statement_signed_off', 'page.approved', 'page.published']);
+    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
+    expect(actions).toEqual([
+      'page.created',
+      'page.submitted',
+      'page.number_resolved',
+      'page.statement_signed_off',
+      'page.statement_signed_off',
+      'page.approved',
+      'page.published',
+    ]);
   });
 
   it('a page about the Sun, or one that mentions an eclipse, needs the eye-safety notice to be submitted', async () => {
     const { agent, user } = await signedInAgent('writer');
-    const { object: sun } = await buildObjectWithMeasurements('Our Sun', 'sun', [{ quantity: 'radius', value: 1, unit: 'R_sun' }], user);
+    const { object: sun } = await buildObjectWithMeasurements(
+      'Our Sun',
+      'sun',
+      [{ quantity: 'radius', value: 1, unit: 'R_sun' }],
+      user,
+    );
     const sunPage = await pageWithBody(agent, sun.id, doc(paragraph(text('The Sun is our star.'))), 'The Sun');
     const refused = await agent.post(`/api/pages/${sunPage.id}/submit`).send({});
     expect(refused.status).toBe(422);
-    expect(refused.body.error.message).toBe('This page cannot be submitted yet: This page is about the Sun: add the eye-safety notice block (toolbar, “Eye-safety notice”) before submitting.');
+    expect(refused.body.error.message).toBe(
+      'This page cannot be submitted yet: This page is about the Sun: add the eye-safety notice block (toolbar, “Eye-safety notice”) before submitting.',
+    );
 
-    const { object: moon } = await buildObjectWithMeasurements('Test moon', 'moon', [{ quantity: 'radius', value: 1737.4, unit: 'km' }], user);
-    const moonPage = await pageWithBody(agent, moon.id, doc(paragraph(text('Watch the total eclipse from the car park.'))), 'Moon');
+    const { object: moon } = await buildObjectWithMeasurements(
+      'Test moon',
+      'moon',
+      [{ quantity: 'radius', value: 1737.4, unit: 'km' }],
+      user,
+    );
+    const moonPage = await pageWithBody(
+      agent,
+      moon.id,
+      doc(paragraph(text('Watch the total eclipse from the car park.'))),
+      'Moon',
+    );
     const eclipse = await agent.post(`/api/pages/${moonPage.id}/submit`).send({});
     expect(eclipse.status).toBe(422);
     expect(eclipse.body.error.message).toMatch(/mentions “eclipse”/);
-    const withNotice = await agent.put(`/api/pages/${moonPage.id}`).send({ version: moonPage.version, title: 'Moon', doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }) });
-    expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(200);
+    const withNotice = await agent
+      .put(`/api/pages/${moonPage.id}`)
+      .send({
+        version: moonPage.version,
+        title: 'Moon',
+        doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
+      });
+    expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(
+      200,
+    );
     const html = (await agent.get(`/api/pages/${moonPage.id}/preview`)).body.data.html as string;
-    expect(html).toMatch(/<aside class="eye-safety-notice" role="note"><strong>Eye safety<\/strong> <span>Never look at the Sun directly/);
+    expect(html).toMatch(
+      /<aside class="eye-safety-notice" role="note"><strong>Eye safety<\/strong> <span>Never look at the Sun directly/,
+    );
   });
 
   it('approval is refused while an image lacks its credit and licence; the library lists the page', async () => {
@@ -106,17 +156,25 @@ describe('from draft to published', () => {
     const reviewer = await signedInAgent('reviewer');
     const q = await quasarWithStatements(agent, user);
     const bare = await buildMedia(user, false);
-    const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('A quasar shines.')), { type: 'mediaImage', attrs: { mediaId: bare.id, caption: 'The field' } }));
+    const page = await pageWithBody(
+      agent,
+      q.object.id,
+      doc(paragraph(text('A quasar shines.')), { type: 'mediaImage', attrs: { mediaId: bare.id, caption: 'The field' } }),
+    );
     expect(await findMediaUsage(bare.id)).toContainEqual({ kind: 'page', id: page.id, title: 'A page for checks' });
     await agent.post(`/api/pages/${page.id}/submit`).send({});
     const refused = await reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`);
     expect(refused.status).toBe(422);
-    expect(refused.body.error.message).toMatch(/An image is not ready for publishing: it lacks credit line, licence, source web address/);
+    expect(refused.body.error.message).toMatch(
+      /An image is not ready for publishing: it lacks credit line, licence, source web address/,
+    );
     await bare.update({ credit: 'Test credit line', licenceId: 'cc-by-4.0', sourceUrl: 'https://example.org/image' });
     const ok = await reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`);
     expect(ok.status).toBe(200);
     const snapshot = (await Page.findByPk(page.id))!.approvedSnapshot!;
-    expect(snapshot.html).toMatch(/<figure data-media-id="[^"]+"><img src="\/media\/files\/[0-9a-f]{64}\.jpg" alt="A glowing cloud of gas \(test image\)" width="800" height="600" loading="lazy"><figcaption><span class="caption">The field<\/span> <small class="credit">Test credit line · CC BY 4.0<\/small><\/figcaption><\/figure>/);
+    expect(snapshot.html).toMatch(
+      /<figure data-media-id="[^"]+"><img src="\/media\/files\/[0-9a-f]{64}\.jpg" alt="A glowing cloud of gas \(test image\)" width="800" height="600" loading="lazy"><figcaption><span class="caption">The field<\/span> <small class="credit">Test credit line · CC BY 4.0<\/small><\/figcaption><\/figure>/,
+    );
   });
 });
 
@@ -130,7 +188,13 @@ describe('who may do what', () => {
     expect((await other.agent.get(`/api/pages/${page.id}`)).status).toBe(403);
     expect((await other.agent.get(`/api/pages/${page.id}/revisions`)).status).toBe(403);
     expect((await other.agent.get(`/api/pages/${page.id}/preview`)).status).toBe(403);
-    expect((await other.agent.put(`/api/pages/${page.id}`).send({ version: page.version, title: 'Mine now', doc: doc(paragraph(text('x'))) })).status).toBe(403);
+    expect(
+      (
+        await other.agent
+          .put(`/api/pages/${page.id}`)
+          .send({ version: page.version, title: 'Mine now', doc: doc(paragraph(text('x'))) })
+      ).status,
+    ).toBe(403);
     expect((await reviewer.agent.get(`/api/pages/${page.id}`)).status).toBe(403);
     const listed = (await other.agent.get('/api/pages?pageSize=200')).body.data.map((p: { id: string }) => p.id);
     expect(listed).not.toContain(page.id);
@@ -138,9 +202,17 @@ describe('who may do what', () => {
 
     await owner.agent.post(`/api/pages/${page.id}/submit`).send({});
     expect((await other.agent.get(`/api/pages/${page.id}`)).status).toBe(200);
-    expect((await other.agent.put(`/api/pages/${page.id}`).send({ version: page.version, title: 'Mine now', doc: doc(paragraph(text('x'))) })).status).toBe(403);
+    expect(
+      (
+        await other.agent
+          .put(`/api/pages/${page.id}`)
+          .send({ version: page.version, title: 'Mine now', doc: doc(paragraph(text('x'))) })
+      ).status,
+    ).toBe(403);
     // While it is with the reviewers, even its writer cannot change it.
-    const locked = await owner.agent.put(`/api/pages/${page.id}`).send({ version: page.version, title: 'Edit', doc: doc(paragraph(text('y'))) });
+    const locked = await owner.agent
+      .put(`/api/pages/${page.id}`)
+      .send({ version: page.version, title: 'Edit', doc: doc(paragraph(text('y'))) });
     expect(locked.status).toBe(409);
     expect(locked.body.error.code).toBe('page_in_review');
   });
@@ -153,12 +225,20 @@ describe('who may do what', () => {
     await owner.agent.post(`/api/pages/${page.id}/submit`).send({});
     expect((await owner.agent.post(`/api/pages/${page.id}/send-back`).send({ comment: 'x' })).status).toBe(403);
     expect((await reviewer.agent.post(`/api/pages/${page.id}/send-back`).send({ comment: '' })).status).toBe(400);
-    const back = await reviewer.agent.post(`/api/pages/${page.id}/send-back`).send({ comment: 'Please add a statement about its distance.' });
+    const back = await reviewer.agent
+      .post(`/api/pages/${page.id}/send-back`)
+      .send({ comment: 'Please add a statement about its distance.' });
     expect(back.body.data.status).toBe('draft');
     expect((await waitForMail(owner.user.email)).textBody).toMatch(/Please add a statement about its distance/);
     const comments = (await owner.agent.get(`/api/pages/${page.id}/comments`)).body.data;
     expect(comments[0]).toMatchObject({ body: 'Please add a statement about its distance.', revisionNumber: 2 });
-    expect((await owner.agent.put(`/api/pages/${page.id}`).send({ version: page.version, title: 'Send me back', doc: doc(paragraph(text('Longer now.'))) })).status).toBe(200);
+    expect(
+      (
+        await owner.agent
+          .put(`/api/pages/${page.id}`)
+          .send({ version: page.version, title: 'Send me back', doc: doc(paragraph(text('Longer now.'))) })
+      ).status,
+    ).toBe(200);
   });
 
   it('anonymous visitors get 401', async () => {
@@ -170,14 +250,26 @@ describe('who may do what', () => {
 describe('when a statement’s data changes after publication', () => {
   it('the page needs a re-check, its writer and reviewer are mailed, and the public still sees the approved text', async () => {
     const { reviewer, editor, writer, q, page } = await submittedPage();
-    await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'A loose comparison, not a measurement.' });
+    await reviewer.agent
+      .post(`/api/pages/${page.id}/flags`)
+      .send({ text: '3 times brighter', reason: 'A loose comparison, not a measurement.' });
     await signOffEverything(reviewer, page.id, [q.distanceId, q.nakedEyeId]);
     await editor.agent.post(`/api/pages/${page.id}/publish`);
     const before = await renderPublishedPage(page.id);
 
     const better = await Measurement.create({
-      objectId: q.object.id, quantity: 'redshift', band: null, value: 0.3, uncertainty: 0.001, uncertaintyMinus: null, uncertaintyPlus: null,
-      enteredValue: 0.3, enteredUnit: '', sourceId: q.source.id, status: 'accepted', createdById: reviewer.user.id,
+      objectId: q.object.id,
+      quantity: 'redshift',
+      band: null,
+      value: 0.3,
+      uncertainty: 0.001,
+      uncertaintyMinus: null,
+      uncertaintyPlus: null,
+      enteredValue: 0.3,
+      enteredUnit: '',
+      sourceId: q.source.id,
+      status: 'accepted',
+      createdById: reviewer.user.id,
     });
     await OutboxMessage.destroy({ where: {} });
     await setPreferred(better.id, { preferred: true, replaces: q.measurements[0].id }, reviewer.user);
@@ -209,15 +301,27 @@ describe('when a statement’s data changes after publication', () => {
     const republished = await renderPublishedPage(page.id);
     expect(republished!.html).toContain(distance.text);
     expect(republished!.html).not.toContain(q.distanceText);
-    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map((e) => e.action);
+    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
     expect(actions.slice(-4)).toEqual(['page.needs_recheck', 'page.statement_signed_off', 'page.approved', 'page.published']);
   });
 
   it('a draft or in-review page is not sent to re-check; an unrelated page is untouched', async () => {
     const { reviewer, q, page } = await submittedPage();
     const better = await Measurement.create({
-      objectId: q.object.id, quantity: 'redshift', band: null, value: 0.25, uncertainty: 0.001, uncertaintyMinus: null, uncertaintyPlus: null,
-      enteredValue: 0.25, enteredUnit: '', sourceId: q.source.id, status: 'accepted', createdById: reviewer.user.id,
+      objectId: q.object.id,
+      quantity: 'redshift',
+      band: null,
+      value: 0.25,
+      uncertainty: 0.001,
+      uncertaintyMinus: null,
+      uncertaintyPlus: null,
+      enteredValue: 0.25,
+      enteredUnit: '',
+      sourceId: q.source.id,
+      status: 'accepted',
+      createdById: reviewer.user.id,
     });
     await setPreferred(better.id, { preferred: true, replaces: q.measurements[0].id }, reviewer.user);
     await new Promise((r) => setTimeout(r, 1500));
@@ -230,13 +334,31 @@ describe('revisions, scheduling and the digest', () => {
     const { agent, user } = await signedInAgent('writer');
     const q = await quasarWithStatements(agent, user);
     const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('The first words.'))), 'Diff me');
-    const second = await agent.put(`/api/pages/${page.id}`).send({ version: page.version, title: 'Diff me again', doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))) });
+    const second = await agent
+      .put(`/api/pages/${page.id}`)
+      .send({
+        version: page.version,
+        title: 'Diff me again',
+        doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
+      });
     const list = (await agent.get(`/api/pages/${page.id}/revisions`)).body.data;
     expect(list.map((r: { number: number }) => r.number)).toEqual([3, 2, 1]);
     expect(list[0].marks).toEqual(['current']);
     const diff = (await agent.get(`/api/pages/${page.id}/revisions/diff?from=2&to=3`)).body.data;
-    expect(diff.blocks).toEqual([{ value: 'The ' }, { value: 'first', removed: true }, { value: 'second', added: true }, { value: ' words.' }, { value: '\n' }, { value: '⟦Distance today in light-years⟧\n', added: true }]);
-    expect(diff.title.filter((p: { added?: boolean }) => p.added).map((p: { value: string }) => p.value).join('')).toBe(' again');
+    expect(diff.blocks).toEqual([
+      { value: 'The ' },
+      { value: 'first', removed: true },
+      { value: 'second', added: true },
+      { value: ' words.' },
+      { value: '\n' },
+      { value: '⟦Distance today in light-years⟧\n', added: true },
+    ]);
+    expect(
+      diff.title
+        .filter((p: { added?: boolean }) => p.added)
+        .map((p: { value: string }) => p.value)
+        .join(''),
+    ).toBe(' again');
     expect((await agent.get(`/api/pages/${page.id}/revisions/diff?from=2&to=99`)).status).toBe(404);
     expect((await agent.get(`/api/pages/${page.id}/revisions/diff?from=x&to=2`)).status).toBe(400);
 
@@ -251,7 +373,9 @@ describe('revisions, scheduling and the digest', () => {
 
   it('an editor schedules an approved page, and it goes live when due', async () => {
     const { reviewer, editor, q, page } = await submittedPage();
-    await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'A loose comparison, not a measurement.' });
+    await reviewer.agent
+      .post(`/api/pages/${page.id}/flags`)
+      .send({ text: '3 times brighter', reason: 'A loose comparison, not a measurement.' });
     await signOffEverything(reviewer, page.id, [q.distanceId, q.nakedEyeId]);
     expect((await editor.agent.put(`/api/pages/${page.id}/schedule`).send({ at: '2000-01-01T00:00:00Z' })).status).toBe(409);
     expect((await editor.agent.put(`/api/pages/${page.id}/schedule`).send({ at: 'tomorrow' })).status).toBe(400);

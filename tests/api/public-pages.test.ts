@@ -43,7 +43,11 @@ describe('the public API', () => {
     expect(page.statements).toHaveLength(2);
     expect(page.statements[0]).toMatchObject({ id: expect.any(String), text: expect.any(String) });
     expect(Date.parse(page.statements[0].asOf)).not.toBeNaN();
-    expect(page.images[0]).toMatchObject({ credit: 'Ama & Co <Imaging>', licence: 'CC BY 4.0', licenceUrl: 'https://creativecommons.org/licenses/by/4.0/' });
+    expect(page.images[0]).toMatchObject({
+      credit: 'Ama & Co <Imaging>',
+      licence: 'CC BY 4.0',
+      licenceUrl: 'https://creativecommons.org/licenses/by/4.0/',
+    });
     expect(page.object.name).toBe(hostile.objectName);
   });
 
@@ -69,7 +73,12 @@ describe('the public API', () => {
     expect(res.headers['content-type']).toBe('application/atom+xml; charset=utf-8');
     expect(xml.validate(res.text)).toBe(true);
     expect(res.text).not.toContain('<script>');
-    const doc = xml.parse(res.text, { ignoreAttributes: false, attributeNamePrefix: '@_', textNodeName: '#text', parseNodeValue: false });
+    const doc = xml.parse(res.text, {
+      ignoreAttributes: false,
+      attributeNamePrefix: '@_',
+      textNodeName: '#text',
+      parseNodeValue: false,
+    });
     // RFC 4287: feed needs id, title, updated, author (or per-entry authors); entries need id, title, updated.
     expect(doc.feed['@_xmlns']).toBe('http://www.w3.org/2005/Atom');
     expect(doc.feed.id).toBe('http://starproof.example/api/public/pages.atom');
@@ -82,7 +91,16 @@ describe('the public API', () => {
     expect(Date.parse(entry.updated)).not.toBeNaN();
     expect(entry.content['@_type']).toBe('html');
     expect(res.text).toContain('&lt;p&gt;Tags like &amp;lt;b&amp;gt; &amp;amp; ampersands stay text.&lt;/p&gt;');
-    expect((await (await visitor()).get('/api/public/pages.atom').set('Host', 'starproof.example').set('If-None-Match', res.headers.etag)).status).toBe(304);
+    expect(
+      (
+        await (
+          await visitor()
+        )
+          .get('/api/public/pages.atom')
+          .set('Host', 'starproof.example')
+          .set('If-None-Match', res.headers.etag)
+      ).status,
+    ).toBe(304);
   });
 
   it('drops an unpublished page from the list and the feed at once', async () => {
@@ -94,13 +112,20 @@ describe('the public API', () => {
   });
 
   it('is read-only with open CORS for GET, answers preflights, and is rate limited with standard headers', async () => {
-    const preflight = await (await visitor()).options('/api/public/pages').set('Origin', 'https://corrie-vale.example').set('Access-Control-Request-Method', 'GET');
+    const preflight = await (await visitor())
+      .options('/api/public/pages')
+      .set('Origin', 'https://corrie-vale.example')
+      .set('Access-Control-Request-Method', 'GET');
     expect(preflight.status).toBe(204);
     expect(preflight.headers['access-control-allow-methods']).toBe('GET, HEAD, OPTIONS');
     const post = await (await visitor()).post('/api/public/pages').send({});
     expect(post.status).toBe(405);
     // Staff routes stay closed to other sites: no CORS header outside /api/public.
-    expect((await (await visitor()).get('/api/channels').set('Origin', 'https://corrie-vale.example')).headers['access-control-allow-origin']).toBeUndefined();
+    expect(
+      (await (await visitor()).get('/api/channels').set('Origin', 'https://corrie-vale.example')).headers[
+        'access-control-allow-origin'
+      ],
+    ).toBeUndefined();
     const res = await (await visitor()).get('/api/public/pages');
     // IETF draft-ietf-httpapi-ratelimit-headers (draft 8), as express-rate-limit writes it.
     expect(res.headers['ratelimit-policy']).toMatch(/q=60; w=60/);

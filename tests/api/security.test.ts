@@ -2,7 +2,15 @@ import fs from 'node:fs';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { User } from '../../server/models/index.ts';
-import { buildUser, getTestApp, resetDatabase, signedInAgent, TEST_PASSWORD, tokenFromMail, waitForMail } from '../support/app.ts';
+import {
+  buildUser,
+  getTestApp,
+  resetDatabase,
+  signedInAgent,
+  TEST_PASSWORD,
+  tokenFromMail,
+  waitForMail,
+} from '../support/app.ts';
 import { fillPath } from '../support/access-fixtures.ts';
 import { listRoutes } from '../support/routes.ts';
 
@@ -14,7 +22,8 @@ beforeAll(async () => {
   await resetDatabase();
 });
 
-const sidOf = (res: supertest.Response) => /starproof\.sid=([^;]+)/.exec((res.headers['set-cookie'] as unknown as string[] | undefined)?.join(';') ?? '')?.[1];
+const sidOf = (res: supertest.Response) =>
+  /starproof\.sid=([^;]+)/.exec((res.headers['set-cookie'] as unknown as string[] | undefined)?.join(';') ?? '')?.[1];
 
 describe('sessions', () => {
   it('signing in on a browser that already holds a session gives a new session id, and the old one is dead', async () => {
@@ -28,7 +37,9 @@ describe('sessions', () => {
     expect(sidB).toBeTruthy();
     expect(sidB).not.toBe(sidA);
     // A fixed (planted) session id is worth nothing after the victim signs in.
-    const planted = await supertest(await getTestApp()).get('/api/auth/me').set('Cookie', `starproof.sid=${sidA}`);
+    const planted = await supertest(await getTestApp())
+      .get('/api/auth/me')
+      .set('Cookie', `starproof.sid=${sidA}`);
     expect(planted.status).toBe(401);
     expect((await agent.get('/api/auth/me')).body.data.email).toBe(second.email);
   });
@@ -37,7 +48,8 @@ describe('sessions', () => {
     const { agent: admin } = await signedInAgent('admin');
     const user = await buildUser({ role: 'reviewer' });
     const browsers = [supertest.agent(await getTestApp()), supertest.agent(await getTestApp())];
-    for (const b of browsers) expect((await b.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD })).status).toBe(200);
+    for (const b of browsers)
+      expect((await b.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD })).status).toBe(200);
     expect((await admin.patch(`/api/users/${user.id}`).send({ active: false })).status).toBe(200);
     for (const b of browsers) expect((await b.get('/api/pages')).status).toBe(401);
   });
@@ -47,7 +59,9 @@ describe('sessions', () => {
     const agent = supertest.agent(await getTestApp());
     const sid = sidOf(await agent.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD }));
     expect((await agent.post('/api/auth/sign-out')).status).toBe(204);
-    const replay = await supertest(await getTestApp()).get('/api/auth/me').set('Cookie', `starproof.sid=${sid}`);
+    const replay = await supertest(await getTestApp())
+      .get('/api/auth/me')
+      .set('Cookie', `starproof.sid=${sid}`);
     expect(replay.status).toBe(401);
   });
 });
@@ -65,8 +79,12 @@ describe('cross-site request forgery', () => {
       const path = fillPath(route.path, ids);
       const byOrigin = await agent[m](path).set('Origin', 'https://evil.example').send({});
       const byFetchSite = await agent[m](path).set('Sec-Fetch-Site', 'cross-site').send({});
-      for (const [how, res] of [['Origin', byOrigin], ['Sec-Fetch-Site', byFetchSite]] as const) {
-        if (res.status !== 403 || res.body?.error?.code !== 'cross_site_request') wrong.push(`${route.method} ${route.path} (${how}): ${res.status} ${res.body?.error?.code}`);
+      for (const [how, res] of [
+        ['Origin', byOrigin],
+        ['Sec-Fetch-Site', byFetchSite],
+      ] as const) {
+        if (res.status !== 403 || res.body?.error?.code !== 'cross_site_request')
+          wrong.push(`${route.method} ${route.path} (${how}): ${res.status} ${res.body?.error?.code}`);
       }
     }
     expect(wrong, wrong.join('\n')).toEqual([]);
@@ -76,9 +94,17 @@ describe('cross-site request forgery', () => {
 
   it('the same site, a look-alike host and an unparsable Origin are told apart', async () => {
     const { agent } = await signedInAgent('writer');
-    const same = await agent.put('/api/pages/digest').set('Host', 'starproof.example').set('Origin', 'http://starproof.example').send({ enabled: false });
+    const same = await agent
+      .put('/api/pages/digest')
+      .set('Host', 'starproof.example')
+      .set('Origin', 'http://starproof.example')
+      .send({ enabled: false });
     expect(same.status).toBe(200);
-    const lookAlike = await agent.put('/api/pages/digest').set('Host', 'starproof.example').set('Origin', 'http://starproof.example.evil.example').send({ enabled: false });
+    const lookAlike = await agent
+      .put('/api/pages/digest')
+      .set('Host', 'starproof.example')
+      .set('Origin', 'http://starproof.example.evil.example')
+      .send({ enabled: false });
     expect(lookAlike.status).toBe(403);
     const garbage = await agent.put('/api/pages/digest').set('Origin', 'not a url').send({ enabled: false });
     expect(garbage.status).toBe(403);
@@ -92,7 +118,15 @@ describe('headers on the API', () => {
     const api = supertest(await getTestApp());
     for (const res of [await api.get('/api/auth/me'), await api.get('/api/public/pages'), await api.get('/api/no-such-route')]) {
       const csp = res.headers['content-security-policy'] ?? '';
-      for (const part of ["default-src 'self'", "script-src 'self'", "object-src 'none'", "base-uri 'self'", "form-action 'self'", "frame-ancestors 'none'"]) expect(csp).toContain(part);
+      for (const part of [
+        "default-src 'self'",
+        "script-src 'self'",
+        "object-src 'none'",
+        "base-uri 'self'",
+        "form-action 'self'",
+        "frame-ancestors 'none'",
+      ])
+        expect(csp).toContain(part);
       expect(csp).not.toContain("'unsafe-eval'");
       expect(res.headers['x-content-type-options']).toBe('nosniff');
       expect(res.headers['x-frame-options']).toBe('SAMEORIGIN');
@@ -108,7 +142,10 @@ describe('headers on the API', () => {
     const { createApp } = await import('../../server/app.ts');
     const app = createApp({ https: true });
     const user = await buildUser();
-    const res = await supertest(app).post('/api/auth/sign-in').set('X-Forwarded-Proto', 'https').send({ email: user.email, password: TEST_PASSWORD });
+    const res = await supertest(app)
+      .post('/api/auth/sign-in')
+      .set('X-Forwarded-Proto', 'https')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
     expect(res.headers['strict-transport-security']).toMatch(/max-age=\d+/);
     expect(String(res.headers['set-cookie'])).toMatch(/Secure/);
@@ -154,14 +191,23 @@ describe('sign-in throttling per address', () => {
     // The app trusts one proxy hop on loopback, so X-Forwarded-For names the caller's address.
     const attacker = '203.0.113.77';
     for (let i = 0; i < limit; i += 1) {
-      const res = await api.post('/api/auth/sign-in').set('X-Forwarded-For', attacker).send({ email: `guess${i}@example.test` });
+      const res = await api
+        .post('/api/auth/sign-in')
+        .set('X-Forwarded-For', attacker)
+        .send({ email: `guess${i}@example.test` });
       expect(res.status).toBe(400);
     }
-    const blocked = await api.post('/api/auth/sign-in').set('X-Forwarded-For', attacker).send({ email: user.email, password: TEST_PASSWORD });
+    const blocked = await api
+      .post('/api/auth/sign-in')
+      .set('X-Forwarded-For', attacker)
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error).toMatchObject({ code: 'too_many_requests', message: expect.stringMatching(/Wait/) });
     expect(blocked.headers['set-cookie']).toBeUndefined();
-    const other = await api.post('/api/auth/sign-in').set('X-Forwarded-For', '198.51.100.20').send({ email: user.email, password: TEST_PASSWORD });
+    const other = await api
+      .post('/api/auth/sign-in')
+      .set('X-Forwarded-For', '198.51.100.20')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(other.status).toBe(200);
   }, 120_000);
 });

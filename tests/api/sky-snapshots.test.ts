@@ -21,7 +21,15 @@ describe('sky snapshots', () => {
     const first = await agent.get(`/api/venues/${venue.id}/sky?date=2026-10-10`);
     expect(first.status).toBe(200);
     expect(first.body.data).toMatchObject({ localDate: '2026-10-10', stored: true });
-    expect(first.body.data.sky.planets.map((p: { name: string }) => p.name)).toEqual(['Mercury', 'Venus', 'Mars', 'Jupiter', 'Saturn', 'Uranus', 'Neptune']);
+    expect(first.body.data.sky.planets.map((p: { name: string }) => p.name)).toEqual([
+      'Mercury',
+      'Venus',
+      'Mars',
+      'Jupiter',
+      'Saturn',
+      'Uranus',
+      'Neptune',
+    ]);
     const second = await agent.get(`/api/venues/${venue.id}/sky?date=2026-10-10`);
     expect(second.body.data.computedAt).toBe(first.body.data.computedAt);
     expect(await SkySnapshot.count({ where: { venueId: venue.id, localDate: '2026-10-10' } })).toBe(1);
@@ -50,11 +58,18 @@ describe('sky snapshots', () => {
 
   it('moving a venue replaces its stored skies at once (never served stale)', async () => {
     const { agent } = await signedInAgent('admin');
-    const created = (await agent.post('/api/venues').send({ name: 'Moving Dome', latitude: 40, longitude: -3.7, elevationM: 600, timeZone: 'Europe/Madrid' })).body.data;
+    const created = (
+      await agent
+        .post('/api/venues')
+        .send({ name: 'Moving Dome', latitude: 40, longitude: -3.7, elevationM: 600, timeZone: 'Europe/Madrid' })
+    ).body.data;
     const tonight = nightDateAt(Date.now(), 'Europe/Madrid');
     const before = await SkySnapshot.findOne({ where: { venueId: created.id, localDate: tonight } });
     expect(before!.data.observer.latitude).toBe(40);
-    expect((await agent.patch(`/api/venues/${created.id}`).send({ latitude: -33.9, longitude: 18.4, timeZone: 'Africa/Johannesburg' })).status).toBe(200);
+    expect(
+      (await agent.patch(`/api/venues/${created.id}`).send({ latitude: -33.9, longitude: 18.4, timeZone: 'Africa/Johannesburg' }))
+        .status,
+    ).toBe(200);
     const tonightThere = nightDateAt(Date.now(), 'Africa/Johannesburg');
     const after = await SkySnapshot.findOne({ where: { venueId: created.id, localDate: tonightThere } });
     expect(after!.data.observer).toMatchObject({ latitude: -33.9, longitude: 18.4 });
@@ -67,7 +82,9 @@ describe('sky snapshots', () => {
     const venue = await makeVenue('Old Rules Dome', 54.62, -2.95, 'Europe/London');
     const first = await getSkySnapshot(venue.id, '2026-11-20');
     expect(first!.data.version).toBe(SKY_VERSION);
-    await SkySnapshot.sequelize!.query(`UPDATE sky_snapshots SET data = jsonb_set(data, '{version}', '1') WHERE id = :id`, { replacements: { id: first!.id } });
+    await SkySnapshot.sequelize!.query(`UPDATE sky_snapshots SET data = jsonb_set(data, '{version}', '1') WHERE id = :id`, {
+      replacements: { id: first!.id },
+    });
     const again = await getSkySnapshot(venue.id, '2026-11-20');
     expect(again!.data.version).toBe(SKY_VERSION);
     expect(again!.data.planets.every((p) => p.times.earlierSet !== undefined)).toBe(true);

@@ -27,7 +27,15 @@ async function makeVenue(latitude = 54.62, longitude = -2.95) {
 
 /** A planet object; the name is unique in the catalogue, the designation tells the sky engine which planet. */
 async function makePlanet(planet: string, creator: User) {
-  return SkyObject.create({ name: `${planet} (test ${++counter})`, designations: [planet], kind: 'planet', raDeg: null, decDeg: null, constellation: null, createdById: creator.id });
+  return SkyObject.create({
+    name: `${planet} (test ${++counter})`,
+    designations: [planet],
+    kind: 'planet',
+    raDeg: null,
+    decDeg: null,
+    constellation: null,
+    createdById: creator.id,
+  });
 }
 
 /** Midday at the venue `days` after today: the instant a daily sky run would see that night. */
@@ -55,7 +63,9 @@ describe('creating a statement for a venue', () => {
     const minutes = (distanceAu * (ASTRONOMICAL_UNIT.value / 1000)) / SPEED_OF_LIGHT.value / 60;
     const data = res.body.data;
     expect(data.value).toBeCloseTo(minutes, 9);
-    expect(data.texts['en-GB']).toBe(`Light from ${jupiter.name} takes about ${Number(minutes.toPrecision(3))} minutes to reach us tonight.`);
+    expect(data.texts['en-GB']).toBe(
+      `Light from ${jupiter.name} takes about ${Number(minutes.toPrecision(3))} minutes to reach us tonight.`,
+    );
     expect(data.texts['fr-FR']).toMatch(/^La lumière de Jupiter met environ/);
     expect(data.venue).toEqual({ id: venue.id, name: venue.name, timeZone: ZONE });
     expect(data.night.localDate).toBe(tonight);
@@ -66,11 +76,15 @@ describe('creating a statement for a venue', () => {
     const again = await agent.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: venue.id });
     expect(again.status).toBe(200);
     expect(again.body.data.id).toBe(data.id);
-    const elsewhere = await agent.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: (await makeVenue(-33.93, 18.42)).id });
+    const elsewhere = await agent
+      .post('/api/statements')
+      .send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: (await makeVenue(-33.93, 18.42)).id });
     expect(elsewhere.status).toBe(201);
     expect(elsewhere.body.data.id).not.toBe(data.id);
     const list = await agent.get(`/api/statements?objectId=${jupiter.id}`);
-    expect(list.body.data.map((s: { venue: { name: string } }) => s.venue.name).sort()).toEqual([venue.name, elsewhere.body.data.venue.name].sort());
+    expect(list.body.data.map((s: { venue: { name: string } }) => s.venue.name).sort()).toEqual(
+      [venue.name, elsewhere.body.data.venue.name].sort(),
+    );
   });
 
   it('refuses without a venue, and a venue for a template that does not use one, saying why', async () => {
@@ -79,7 +93,9 @@ describe('creating a statement for a venue', () => {
     const none = await agent.post('/api/statements').send({ objectId: saturn.id, templateId: TEMPLATE });
     expect(none.status).toBe(400);
     expect(none.body.error.code).toBe('venue_required');
-    expect(none.body.error.message).toBe('“How long a planet’s light takes to reach us tonight” is about one venue’s night: choose the venue it is for.');
+    expect(none.body.error.message).toBe(
+      '“How long a planet’s light takes to reach us tonight” is about one venue’s night: choose the venue it is for.',
+    );
     expect(none.body.error.fields.venueId).toBeTruthy();
     const venue = await makeVenue();
     const extra = await agent.post('/api/statements').send({ objectId: saturn.id, templateId: 'naked-eye', venueId: venue.id });
@@ -91,7 +107,9 @@ describe('creating a statement for a venue', () => {
   it('an unknown venue is 404; a hostile venueId is 400 with the field named; nothing is stored', async () => {
     const { agent, user } = await signedInAgent('writer');
     const mars = await makePlanet('Mars', user);
-    const unknown = await agent.post('/api/statements').send({ objectId: mars.id, templateId: TEMPLATE, venueId: '00000000-0000-4000-8000-000000000000' });
+    const unknown = await agent
+      .post('/api/statements')
+      .send({ objectId: mars.id, templateId: TEMPLATE, venueId: '00000000-0000-4000-8000-000000000000' });
     expect(unknown.status).toBe(404);
     expect(unknown.body.error.message).toBe('There is no such venue.');
     for (const venueId of ["'; DROP TABLE statements; --", { $ne: null }, 12345, '../venues']) {
@@ -104,10 +122,21 @@ describe('creating a statement for a venue', () => {
 
   it('an object that is not a planet the sky engine knows cannot be worked out (422, with the reason)', async () => {
     const { agent, user } = await signedInAgent('writer');
-    const pluto = await SkyObject.create({ name: `Pluto (test ${++counter})`, kind: 'planet', raDeg: null, decDeg: null, constellation: null, createdById: user.id });
-    const res = await agent.post('/api/statements').send({ objectId: pluto.id, templateId: TEMPLATE, venueId: (await makeVenue()).id });
+    const pluto = await SkyObject.create({
+      name: `Pluto (test ${++counter})`,
+      kind: 'planet',
+      raDeg: null,
+      decDeg: null,
+      constellation: null,
+      createdById: user.id,
+    });
+    const res = await agent
+      .post('/api/statements')
+      .send({ objectId: pluto.id, templateId: TEMPLATE, venueId: (await makeVenue()).id });
     expect(res.status).toBe(422);
-    expect(res.body.error.message).toMatch(/Needs one of the planets the sky engine computes \(Mercury, .*Neptune\); “Pluto \(test \d+\)” is not one of them/);
+    expect(res.body.error.message).toMatch(
+      /Needs one of the planets the sky engine computes \(Mercury, .*Neptune\); “Pluto \(test \d+\)” is not one of them/,
+    );
   });
 
   it('every member of staff may list venues to choose from (names only)', async () => {
@@ -125,7 +154,9 @@ describe('one statement per object, template and venue', () => {
     const { agent, user } = await signedInAgent('writer');
     const venue = await makeVenue();
     const uranus = await makePlanet('Uranus', user);
-    const first = await Statement.findByPk((await agent.post('/api/statements').send({ objectId: uranus.id, templateId: TEMPLATE, venueId: venue.id })).body.data.id);
+    const first = await Statement.findByPk(
+      (await agent.post('/api/statements').send({ objectId: uranus.id, templateId: TEMPLATE, venueId: venue.id })).body.data.id,
+    );
     const copy = (venueId: string | null, templateId = TEMPLATE) => {
       const { id: _id, createdAt: _c, updatedAt: _u, ...row } = first!.get({ plain: true });
       return Statement.create({ ...row, templateId, venueId });
@@ -145,11 +176,15 @@ describe('deleting a venue', () => {
     const { agent: admin } = await signedInAgent('admin');
     const venue = await makeVenue();
     const neptune = await makePlanet('Neptune', user);
-    expect((await writer.post('/api/statements').send({ objectId: neptune.id, templateId: TEMPLATE, venueId: venue.id })).status).toBe(201);
+    expect(
+      (await writer.post('/api/statements').send({ objectId: neptune.id, templateId: TEMPLATE, venueId: venue.id })).status,
+    ).toBe(201);
     const res = await admin.delete(`/api/venues/${venue.id}`);
     expect(res.status).toBe(409);
     expect(res.body.error.code).toBe('venue_in_use');
-    expect(res.body.error.message).toBe(`${venue.name} cannot be deleted: a checked statement is about its sky tonight (${neptune.name}), and pages may show it. Rename the venue or change its position instead.`);
+    expect(res.body.error.message).toBe(
+      `${venue.name} cannot be deleted: a checked statement is about its sky tonight (${neptune.name}), and pages may show it. Rename the venue or change its position instead.`,
+    );
     expect(await Venue.findByPk(venue.id)).not.toBeNull();
     await expect(Venue.destroy({ where: { id: venue.id } })).rejects.toThrow(/foreign key/);
     const unused = await makeVenue();
@@ -164,8 +199,14 @@ describe('staying current night after night', () => {
     const { agent: editor } = await signedInAgent('editor');
     const venue = await makeVenue();
     const jupiter = await makePlanet('Jupiter', user);
-    const created = (await writer.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: venue.id })).body.data;
-    const page = await pageWithBody(writer, jupiter.id, doc(paragraph(text('The largest planet, bright in the evening sky.')), paragraph(statement(created.id))), 'Jupiter tonight');
+    const created = (await writer.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: venue.id }))
+      .body.data;
+    const page = await pageWithBody(
+      writer,
+      jupiter.id,
+      doc(paragraph(text('The largest planet, bright in the evening sky.')), paragraph(statement(created.id))),
+      'Jupiter tonight',
+    );
     expect((await writer.post(`/api/pages/${page.id}/submit`).send({ version: page.version })).status).toBe(200);
     expect((await reviewer.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: created.id })).status).toBe(200);
     expect((await reviewer.post(`/api/pages/${page.id}/signoffs/page`)).status).toBe(200);
@@ -204,7 +245,8 @@ describe('staying current night after night', () => {
     const { agent: reviewer } = await signedInAgent('reviewer');
     const venue = await makeVenue();
     const saturn = await makePlanet('Saturn', user);
-    const created = (await writer.post('/api/statements').send({ objectId: saturn.id, templateId: TEMPLATE, venueId: venue.id })).body.data;
+    const created = (await writer.post('/api/statements').send({ objectId: saturn.id, templateId: TEMPLATE, venueId: venue.id }))
+      .body.data;
     const page = await pageWithBody(writer, saturn.id, doc(paragraph(statement(created.id))), 'Saturn tonight');
     expect((await writer.post(`/api/pages/${page.id}/submit`).send({ version: page.version })).status).toBe(200);
     expect((await reviewer.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: created.id })).status).toBe(200);
@@ -224,10 +266,13 @@ describe('staying current night after night', () => {
     const { agent: reviewer } = await signedInAgent('reviewer');
     const venue = await makeVenue();
     const jupiter = await makePlanet('Jupiter', user);
-    const created = (await writer.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: venue.id })).body.data;
+    const created = (await writer.post('/api/statements').send({ objectId: jupiter.id, templateId: TEMPLATE, venueId: venue.id }))
+      .body.data;
     expect((await admin.patch(`/api/venues/${venue.id}`).send({ latitude: 51.48, longitude: 0 })).status).toBe(200);
     // The move recomputes tonight's sky, and with it the statement (same night, same words: still current).
-    await expect.poll(async () => (await Statement.findByPk(created.id))?.night?.method.venue.latitude, { timeout: 15_000 }).toBe(51.48);
+    await expect
+      .poll(async () => (await Statement.findByPk(created.id))?.night?.method.venue.latitude, { timeout: 15_000 })
+      .toBe(51.48);
     expect((await Statement.findByPk(created.id))!.status).toBe('current');
 
     const { date, at } = middayIn(42);

@@ -4,7 +4,12 @@ import { calculate } from '../../shared/engine/calculate.ts';
 import { Measurement, Statement } from '../../server/models/index.ts';
 import { setPreferred } from '../../server/services/measurement-preferred.ts';
 import { retireMeasurement } from '../../server/services/measurement-write.ts';
-import { currentSettingsSnapshot, mergeScopes, recomputeStatements, SettingsMovedError } from '../../server/services/statements/recompute.ts';
+import {
+  currentSettingsSnapshot,
+  mergeScopes,
+  recomputeStatements,
+  SettingsMovedError,
+} from '../../server/services/statements/recompute.ts';
 import { buildUser, getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildObjectWithMeasurements } from '../support/sky-fixtures.ts';
 
@@ -35,7 +40,11 @@ describe('creating statements', () => {
     const { object } = await quasar(user);
     const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'luminosity-sun' });
     expect(res.status).toBe(201);
-    const engine = calculate({ quantity: 'luminosity_ratio_sun', inputs: { m: { value: 14.6, sigma: 0.1 }, z: { value: 0.241, sigma: 0.0005 }, band: 'V' }, model: { preset: 'planck18' } });
+    const engine = calculate({
+      quantity: 'luminosity_ratio_sun',
+      inputs: { m: { value: 14.6, sigma: 0.1 }, z: { value: 0.241, sigma: 0.0005 }, band: 'V' },
+      model: { preset: 'planck18' },
+    });
     if ('error' in engine) throw new Error(engine.error.message);
     expect(res.body.data.value).toBeCloseTo(engine.value, 6);
     // ±0.1 mag is about ±10 %: two significant figures (our precision rule).
@@ -52,7 +61,12 @@ describe('creating statements', () => {
 
   it('refuses a template whose inputs are missing, says which, and stores nothing', async () => {
     const { agent, user } = await signedInAgent('writer');
-    const { object } = await buildObjectWithMeasurements('Bare galaxy', 'galaxy', [{ quantity: 'redshift', value: 0.05, unit: '' }], user);
+    const { object } = await buildObjectWithMeasurements(
+      'Bare galaxy',
+      'galaxy',
+      [{ quantity: 'redshift', value: 0.05, unit: '' }],
+      user,
+    );
     const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' });
     expect(res.status).toBe(422);
     expect(res.body.error.code).toBe('statement_not_computable');
@@ -62,7 +76,12 @@ describe('creating statements', () => {
 
   it('says in the working when an input has no uncertainty', async () => {
     const { agent, user } = await signedInAgent('writer');
-    const { object } = await buildObjectWithMeasurements('Plain star', 'star', [{ quantity: 'parallax', value: 130.23, unit: 'mas' }], user);
+    const { object } = await buildObjectWithMeasurements(
+      'Plain star',
+      'star',
+      [{ quantity: 'parallax', value: 130.23, unit: 'mas' }],
+      user,
+    );
     const res = await agent.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' });
     expect(res.status).toBe(201);
     const wording = res.body.data.working.at(-1);
@@ -75,7 +94,10 @@ describe('creating statements', () => {
     const { agent, user } = await signedInAgent('writer');
     const { object } = await quasar(user);
     expect((await agent.post('/api/statements').send({ objectId: object.id, templateId: 'horoscope' })).status).toBe(404);
-    expect((await agent.post('/api/statements').send({ objectId: '00000000-0000-4000-8000-000000000000', templateId: 'naked-eye' })).status).toBe(404);
+    expect(
+      (await agent.post('/api/statements').send({ objectId: '00000000-0000-4000-8000-000000000000', templateId: 'naked-eye' }))
+        .status,
+    ).toBe(404);
     const bad = await agent.post('/api/statements').send({ objectId: 'nope', templateId: 'naked-eye' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.objectId).toBe('Choose an object');
@@ -90,12 +112,23 @@ describe('staying correct when data changes', () => {
     const { object, source, measurements } = await quasar(reviewerUser);
     const created = await writer.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' });
     const id = created.body.data.id as string;
-    const untouched = (await writer.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' })).body.data.id as string;
+    const untouched = (await writer.post('/api/statements').send({ objectId: object.id, templateId: 'naked-eye' })).body.data
+      .id as string;
     const oldText = created.body.data.texts['en-GB'];
 
     const better = await Measurement.create({
-      objectId: object.id, quantity: 'redshift', band: null, value: 0.3, uncertainty: 0.001, uncertaintyMinus: null, uncertaintyPlus: null,
-      enteredValue: 0.3, enteredUnit: '', sourceId: source.id, status: 'accepted', createdById: reviewerUser.id,
+      objectId: object.id,
+      quantity: 'redshift',
+      band: null,
+      value: 0.3,
+      uncertainty: 0.001,
+      uncertaintyMinus: null,
+      uncertaintyPlus: null,
+      enteredValue: 0.3,
+      enteredUnit: '',
+      sourceId: source.id,
+      status: 'accepted',
+      createdById: reviewerUser.id,
     });
     await setPreferred(better.id, { preferred: true, replaces: measurements[0].id }, reviewerUser);
     await waitForStatus(id, 'changed');
@@ -143,7 +176,9 @@ describe('changing the adopted cosmology', () => {
     expect(row.newText).not.toBe(before);
     expect((await Statement.findByPk(created.body.data.id))!.texts!['en-GB']).toBe(before);
 
-    const stale = await admin.put('/api/settings/cosmology').send({ model: hubble, expectedVersion: settings.version - 1 || 999 });
+    const stale = await admin
+      .put('/api/settings/cosmology')
+      .send({ model: hubble, expectedVersion: settings.version - 1 || 999 });
     expect(stale.status).toBe(409);
     expect(stale.body.error.code).toBe('settings_moved');
 
@@ -155,7 +190,9 @@ describe('changing the adopted cosmology', () => {
     expect(after!.texts!['en-GB']).toBe(row.newText);
     expect(after!.footnotes!['en-GB']).toMatch(/simple Hubble law/);
     // Back to Planck 2018 for the other tests.
-    await admin.put('/api/settings/cosmology').send({ model: { preset: 'planck18' }, expectedVersion: switched.body.data.version });
+    await admin
+      .put('/api/settings/cosmology')
+      .send({ model: { preset: 'planck18' }, expectedVersion: switched.body.data.version });
   });
 
   it('a recompute that started before a model change writes nothing', async () => {
@@ -166,7 +203,9 @@ describe('changing the adopted cosmology', () => {
     const settings = (await admin.get('/api/settings')).body.data;
     await admin.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: settings.version });
     const computedAt = (await Statement.findByPk(created.body.data.id))!.computedAt;
-    await expect(recomputeStatements({ statementIds: [created.body.data.id] }, { settings: { ...stale, model: { preset: 'planck18' } } })).rejects.toBeInstanceOf(SettingsMovedError);
+    await expect(
+      recomputeStatements({ statementIds: [created.body.data.id] }, { settings: { ...stale, model: { preset: 'planck18' } } }),
+    ).rejects.toBeInstanceOf(SettingsMovedError);
     expect((await Statement.findByPk(created.body.data.id))!.computedAt).toEqual(computedAt);
     const now = (await admin.get('/api/settings')).body.data;
     await admin.put('/api/settings/cosmology').send({ model: { preset: 'planck18' }, expectedVersion: now.version });
@@ -179,7 +218,9 @@ describe('changing the adopted cosmology', () => {
     expect(res.body.error.code).toBe('invalid_model');
     const { agent: editor } = await signedInAgent('editor');
     expect((await editor.post('/api/settings/cosmology/preview').send({ model: { preset: 'wmap9' } })).status).toBe(403);
-    expect((await editor.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: 1 })).status).toBe(403);
+    expect((await editor.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: 1 })).status).toBe(
+      403,
+    );
   });
 });
 
@@ -188,10 +229,17 @@ describe('a burst of queued recomputes', () => {
     const { agent, user } = await signedInAgent('reviewer');
     const { object, measurements } = await quasar(user);
     const other = await quasar(user);
-    const a = (await agent.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' })).body.data.id as string;
-    const b = (await agent.post('/api/statements').send({ objectId: other.object.id, templateId: 'naked-eye' })).body.data.id as string;
+    const a = (await agent.post('/api/statements').send({ objectId: object.id, templateId: 'distance-today' })).body.data
+      .id as string;
+    const b = (await agent.post('/api/statements').send({ objectId: other.object.id, templateId: 'naked-eye' })).body.data
+      .id as string;
     const night = { venueId: '00000000-0000-4000-8000-00000000abcd', localDate: '2026-12-24' };
-    const merged = await mergeScopes([{ measurementId: measurements[0].id }, { objectId: other.object.id }, night, { statementIds: [a] }]);
+    const merged = await mergeScopes([
+      { measurementId: measurements[0].id },
+      { objectId: other.object.id },
+      night,
+      { statementIds: [a] },
+    ]);
     expect(merged).toHaveLength(2);
     expect(merged[0]).toEqual(night);
     expect(new Set((merged[1] as { statementIds: string[] }).statementIds)).toEqual(new Set([a, b]));

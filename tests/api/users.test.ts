@@ -1,7 +1,15 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, User } from '../../server/models/index.ts';
-import { buildUser, getTestApp, resetDatabase, signedInAgent, TEST_PASSWORD, tokenFromMail, waitForMail } from '../support/app.ts';
+import {
+  buildUser,
+  getTestApp,
+  resetDatabase,
+  signedInAgent,
+  TEST_PASSWORD,
+  tokenFromMail,
+  waitForMail,
+} from '../support/app.ts';
 
 beforeAll(async () => {
   await getTestApp();
@@ -17,7 +25,9 @@ describe('users (admin)', () => {
     const mail = await waitForMail('new.writer@example.test');
     expect(mail.subject).toMatch(/invited/);
     const invitee = supertest.agent(await getTestApp());
-    const accepted = await invitee.post('/api/auth/invitation/accept').send({ token: tokenFromMail(mail), newPassword: 'comet-tails-point-away' });
+    const accepted = await invitee
+      .post('/api/auth/invitation/accept')
+      .send({ token: tokenFromMail(mail), newPassword: 'comet-tails-point-away' });
     expect(accepted.status).toBe(200);
     expect((await invitee.get('/api/auth/me')).body.data.email).toBe('new.writer@example.test');
     expect(await AuditEvent.count({ where: { action: 'user.invitation_accepted' } })).toBe(1);
@@ -47,7 +57,9 @@ describe('users (admin)', () => {
     const res = await admin.patch(`/api/users/${user.id}`).send({ active: false });
     expect(res.status).toBe(200);
     expect((await writer.get('/api/auth/me')).status).toBe(401);
-    const again = await supertest(await getTestApp()).post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+    const again = await supertest(await getTestApp())
+      .post('/api/auth/sign-in')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(again.status).toBe(401);
   });
 

@@ -16,7 +16,12 @@ describe('venues (admin manages, editor reads)', () => {
     const { agent } = await signedInAgent('admin');
     const res = await agent.post('/api/venues').send({ ...VALID, name: 'Tidewell Observatory', timeZone: 'europe/lisbon' });
     expect(res.status).toBe(201);
-    expect(res.body.data).toMatchObject({ name: 'Tidewell Observatory', timeZone: 'Europe/Lisbon', screenCount: 0, can: { update: true } });
+    expect(res.body.data).toMatchObject({
+      name: 'Tidewell Observatory',
+      timeZone: 'Europe/Lisbon',
+      screenCount: 0,
+      can: { update: true },
+    });
     expect(await SkySnapshot.count({ where: { venueId: res.body.data.id } })).toBe(2);
     expect(await AuditEvent.count({ where: { action: 'venue.created', subjectId: res.body.data.id } })).toBe(1);
   });
@@ -44,7 +49,9 @@ describe('venues (admin manages, editor reads)', () => {
 
   it('accepts a venue at the north pole', async () => {
     const { agent } = await signedInAgent('admin');
-    const res = await agent.post('/api/venues').send({ ...VALID, name: 'Pole Station Dome', latitude: 90, longitude: 0, timeZone: 'UTC' });
+    const res = await agent
+      .post('/api/venues')
+      .send({ ...VALID, name: 'Pole Station Dome', latitude: 90, longitude: 0, timeZone: 'UTC' });
     expect(res.status).toBe(201);
   });
 
@@ -74,7 +81,11 @@ describe('venues (admin manages, editor reads)', () => {
     const { agent } = await signedInAgent('editor');
     const list = await agent.get('/api/venues');
     expect(list.status).toBe(200);
-    expect(list.body.data.find((v: { id: string }) => v.id === venue.id).can).toEqual({ update: false, delete: false, manageScreens: false });
+    expect(list.body.data.find((v: { id: string }) => v.id === venue.id).can).toEqual({
+      update: false,
+      delete: false,
+      manageScreens: false,
+    });
     expect((await agent.get(`/api/venues/${venue.id}/screens`)).status).toBe(200);
     for (const res of [
       await agent.post('/api/venues').send({ ...VALID, name: 'Editor Made Dome' }),

@@ -44,7 +44,9 @@ export function bundleBudget(): Plugin {
         if (!fs.existsSync(path.join(outDir, entry))) continue;
         const size = entrySize(outDir, entry);
         const fits = size.gzip <= budget.bytes;
-        console.log(`${budget.label}: ${kb(size.raw)} raw, ${kb(size.gzip)} gzipped (${size.files.length} files; ${fits ? 'within' : 'OVER'} the ${kb(budget.bytes)} budget)`);
+        console.log(
+          `${budget.label}: ${kb(size.raw)} raw, ${kb(size.gzip)} gzipped (${size.files.length} files; ${fits ? 'within' : 'OVER'} the ${kb(budget.bytes)} budget)`,
+        );
         if (!fits) over.push(`${budget.label} is ${kb(size.gzip)} gzipped, over its ${kb(budget.bytes)} budget`);
       }
       if (over.length) throw new Error(`Bundle budget exceeded: ${over.join('; ')}. Load the new code lazily or trim it.`);

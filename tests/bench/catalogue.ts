@@ -30,7 +30,11 @@ const { stopTestCluster } = await import('../setup/test-postgres.ts');
 
 const sql = getSequelize();
 if (process.env.BENCH_SLOW_SQL) {
-  Object.assign((sql as unknown as { options: object }).options, { benchmark: true, logging: (text: string, took: number) => took > 200 && console.log(`  [slow SQL ${took} ms] ${text.slice(0, 120).replace(/\s+/g, ' ')}`) });
+  Object.assign((sql as unknown as { options: object }).options, {
+    benchmark: true,
+    logging: (text: string, took: number) =>
+      took > 200 && console.log(`  [slow SQL ${took} ms] ${text.slice(0, 120).replace(/\s+/g, ' ')}`),
+  });
 }
 await migrate(sql);
 initModels(sql);
@@ -45,7 +49,15 @@ const time = async <T>(fn: () => Promise<T> | T): Promise<[T, number]> => {
 
 console.log(`Seeding ${OBJECTS.toLocaleString('en-GB')} objects…`);
 const user = await User.create({ email: 'bench@example.test', name: 'Bench Reviewer', role: 'reviewer' });
-const source = await Source.create({ citation: 'Benchmark Survey (2026)', bibcode: null, doi: null, url: null, catalogueName: null, retrievedOn: null, createdById: user.id });
+const source = await Source.create({
+  citation: 'Benchmark Survey (2026)',
+  bibcode: null,
+  doi: null,
+  url: null,
+  catalogueName: null,
+  retrievedOn: null,
+  createdById: user.id,
+});
 // In chunks of 10,000 so each statement stays within the app's query time limits on a busy machine.
 for (let from = 1; from <= OBJECTS; from += 10_000) {
   const to = Math.min(OBJECTS, from + 9_999);
@@ -97,20 +109,30 @@ const [, plainInsert] = await time(() =>
 );
 
 console.log('\nCSV import (50,000 rows; limit: each well under 30 s)');
-console.log(`  dry run   ${ms(dryRun)}  (${checked.report.acceptedCount} accepted, ${checked.report.rejectedCount} rejected)   peer: csv-parse alone ${ms(parseOnly)}  ratio ${(dryRun / parseOnly).toFixed(1)}×`);
-console.log(`  commit    ${ms(commit)}  (${committed.inserted} inserted with history)   peer: plain INSERT of ${ROWS} rows ${ms(plainInsert)}  ratio ${(commit / plainInsert).toFixed(1)}×`);
+console.log(
+  `  dry run   ${ms(dryRun)}  (${checked.report.acceptedCount} accepted, ${checked.report.rejectedCount} rejected)   peer: csv-parse alone ${ms(parseOnly)}  ratio ${(dryRun / parseOnly).toFixed(1)}×`,
+);
+console.log(
+  `  commit    ${ms(commit)}  (${committed.inserted} inserted with history)   peer: plain INSERT of ${ROWS} rows ${ms(plainInsert)}  ratio ${(commit / plainInsert).toFixed(1)}×`,
+);
 
 // 2. The catalogue table
 await sql.query('ANALYZE');
 const CASES: Array<[string, SkyObjectListQuery]> = [
   ['kind = galaxy, by name, page 1', { kind: 'galaxy', sort: 'name', dir: 'asc', page: 1, pageSize: 50 }],
   ['kind = quasar, by name desc, page 40', { kind: 'quasar', sort: 'name', dir: 'desc', page: 40, pageSize: 50 }],
-  ['missing redshift, kind = star, by name', { kind: 'star', missing: 'redshift', sort: 'name', dir: 'asc', page: 3, pageSize: 50 }],
+  [
+    'missing redshift, kind = star, by name',
+    { kind: 'star', missing: 'redshift', sort: 'name', dir: 'asc', page: 3, pageSize: 50 },
+  ],
   ['search "04217", by name', { q: '04217', sort: 'name', dir: 'asc', page: 1, pageSize: 50 }],
 ];
 
 async function executionMs(statement: string, replacements: Record<string, unknown>): Promise<number> {
-  const [row] = await sql.query<{ 'QUERY PLAN': Array<{ 'Execution Time': number; 'Planning Time': number }> }>(`EXPLAIN (ANALYZE, FORMAT JSON) ${statement}`, { type: QueryTypes.SELECT, replacements });
+  const [row] = await sql.query<{ 'QUERY PLAN': Array<{ 'Execution Time': number; 'Planning Time': number }> }>(
+    `EXPLAIN (ANALYZE, FORMAT JSON) ${statement}`,
+    { type: QueryTypes.SELECT, replacements },
+  );
   const plan = row['QUERY PLAN'][0];
   return plan['Execution Time'] + plan['Planning Time'];
 }
@@ -126,7 +148,9 @@ async function measure(query: SkyObjectListQuery): Promise<{ page: number; count
   return { page: median(pages), count: median(counts) };
 }
 
-console.log(`\nCatalogue table: page of 50 out of ${OBJECTS.toLocaleString('en-GB')} objects, at the database (planning + execution, median of 15; limit 50 ms)`);
+console.log(
+  `\nCatalogue table: page of 50 out of ${OBJECTS.toLocaleString('en-GB')} objects, at the database (planning + execution, median of 15; limit 50 ms)`,
+);
 await sql.query('SET enable_indexonlyscan = off; SET enable_indexscan = off; SET enable_bitmapscan = off');
 const fullReads: number[] = [];
 for (let i = 0; i < 15; i += 1) fullReads.push(await executionMs('SELECT count(*) FROM sky_objects', {}));
@@ -136,7 +160,9 @@ console.log(`  peer: one sequential read of all ${OBJECTS.toLocaleString('en-GB'
 for (const [label, query] of CASES) {
   const t = await measure(query);
   const total = t.page + t.count;
-  console.log(`  ${label.padEnd(40)} rows ${ms(t.page).padStart(9)} + total ${ms(t.count).padStart(9)} = ${ms(total).padStart(9)}   ratio to peer ${(total / fullRead).toFixed(2)}×`);
+  console.log(
+    `  ${label.padEnd(40)} rows ${ms(t.page).padStart(9)} + total ${ms(t.count).padStart(9)} = ${ms(total).padStart(9)}   ratio to peer ${(total / fullRead).toFixed(2)}×`,
+  );
 }
 
 await sql.query('DROP TABLE peer_measurements');

@@ -24,7 +24,11 @@ for (let i = 0; i < N; i++) zs[i] = 0.01 + rand() * 9.99;
 
 const MODELS: { label: string; params: CosmologyParams; astropy: string }[] = [
   { label: 'Planck 2018 preset', params: PLANCK18.params, astropy: 'Planck18' },
-  { label: 'flat, no radiation (H0 = 70, Ωm = 0.3)', params: { name: 'flat', H0: 70, Om0: 0.3 }, astropy: 'FlatLambdaCDM(H0=70, Om0=0.3, Tcmb0=0)' },
+  {
+    label: 'flat, no radiation (H0 = 70, Ωm = 0.3)',
+    params: { name: 'flat', H0: 70, Om0: 0.3 },
+    astropy: 'FlatLambdaCDM(H0=70, Om0=0.3, Tcmb0=0)',
+  },
 ];
 
 /** D_L by direct adaptive quadrature at tight tolerance, independent of the table. */
@@ -57,7 +61,11 @@ print(json.dumps(out))
   writeFileSync(join(dir, 'z.bin'), Buffer.from(zs.buffer));
   for (const py of ['/usr/bin/python3', 'python3']) {
     try {
-      const text = execFileSync(py, ['-c', script, join(dir, 'z.bin'), join(dir, 'd')], { encoding: 'utf8', stdio: ['ignore', 'pipe', 'ignore'], timeout: 300_000 });
+      const text = execFileSync(py, ['-c', script, join(dir, 'z.bin'), join(dir, 'd')], {
+        encoding: 'utf8',
+        stdio: ['ignore', 'pipe', 'ignore'],
+        timeout: 300_000,
+      });
       return JSON.parse(text.trim().split('\n').pop() as string) as Record<string, number>;
     } catch {
       // try the next interpreter; astropy (and scipy) may be missing from this one
@@ -98,7 +106,9 @@ try {
     console.log(`${label}`);
     console.log(`  set-up (model + table): first ${setups[0].toFixed(2)} ms, median of 7 ${median(setups).toFixed(2)} ms`);
     console.log(`  time per million:       ${(evalMs / 1000).toFixed(3)} s (${((evalMs * 1e6) / N).toFixed(1)} ns per redshift)`);
-    console.log(`  largest relative difference vs slow adaptive quadrature (tolerance 1e-15) on every ${N / SLOW_SUBSAMPLE}th point (${SLOW_SUBSAMPLE.toLocaleString('en')} points, ${(slowMs / 1000).toFixed(1)} s): ${worst.toExponential(2)}\n`);
+    console.log(
+      `  largest relative difference vs slow adaptive quadrature (tolerance 1e-15) on every ${N / SLOW_SUBSAMPLE}th point (${SLOW_SUBSAMPLE.toLocaleString('en')} points, ${(slowMs / 1000).toFixed(1)} s): ${worst.toExponential(2)}\n`,
+    );
   }
   const py = astropyRun(dir);
   if (py === null) {
@@ -110,7 +120,9 @@ try {
       let worst = 0;
       for (let k = 0; k < N; k++) worst = Math.max(worst, Math.abs(ours[i][k] - theirs[k]) / theirs[k]);
       const t = py[`t${i}`];
-      console.log(`  ${m.astropy}: ${t.toFixed(3)} s per million; Starproof is ${(t / (ourTimes[i] / 1000)).toFixed(0)}× faster; largest relative difference from astropy ${worst.toExponential(2)}`);
+      console.log(
+        `  ${m.astropy}: ${t.toFixed(3)} s per million; Starproof is ${(t / (ourTimes[i] / 1000)).toFixed(0)}× faster; largest relative difference from astropy ${worst.toExponential(2)}`,
+      );
     });
   }
 } finally {

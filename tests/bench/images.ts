@@ -21,7 +21,11 @@ const work = fs.mkdtempSync(path.join(os.tmpdir(), 'starproof-bench-'));
 async function makeSource(file: string) {
   const width = 6000;
   const height = 4000;
-  const base = await sharp({ create: { width, height, channels: 3, background: '#000000', noise: { type: 'gaussian', mean: 18, sigma: 9 } } }).raw().toBuffer();
+  const base = await sharp({
+    create: { width, height, channels: 3, background: '#000000', noise: { type: 'gaussian', mean: 18, sigma: 9 } },
+  })
+    .raw()
+    .toBuffer();
   for (let y = 0; y < height; y++) {
     for (let x = 0; x < width; x++) {
       const i = (y * width + x) * 3;
@@ -32,7 +36,9 @@ async function makeSource(file: string) {
       if ((x * 7919 + y * 104729) % 9973 === 0) base[i] = base[i + 1] = base[i + 2] = 255;
     }
   }
-  await sharp(base, { raw: { width, height, channels: 3 } }).jpeg({ quality: 90 }).toFile(file);
+  await sharp(base, { raw: { width, height, channels: 3 } })
+    .jpeg({ quality: 90 })
+    .toFile(file);
 }
 
 /** GNU time's "Maximum resident set size" (kB) is the peak of the process tree's largest member. */
@@ -54,7 +60,10 @@ function timed(cmd: string, args: string[]): { seconds: number; cpuSeconds: numb
 function convertArgs(source: string, outDir: string): string[] {
   const args = [source, '-auto-orient', '-colorspace', 'sRGB', '-strip'];
   for (const spec of RENDITION_SPECS) {
-    const geometry = spec.fit === 'cover' ? [`-resize`, `${spec.width}x${spec.height}^>`, '-gravity', 'center', '-extent', `${spec.width}x${spec.height}`] : ['-resize', `${spec.width}x${spec.height}>`];
+    const geometry =
+      spec.fit === 'cover'
+        ? [`-resize`, `${spec.width}x${spec.height}^>`, '-gravity', 'center', '-extent', `${spec.width}x${spec.height}`]
+        : ['-resize', `${spec.width}x${spec.height}>`];
     args.push('(', '+clone', ...geometry, '-write', path.join(outDir, `${spec.name}.jpg`));
     args.push('-quality', '80', '-write', path.join(outDir, `${spec.name}.webp`));
     args.push('-quality', '55', '-write', path.join(outDir, `${spec.name}.avif`), '+delete', ')');
@@ -69,7 +78,9 @@ async function child(sources: string[]) {
   const started = process.hrtime.bigint();
   await Promise.all(sources.map((s) => renderAll(s, { x: 0.6, y: 0.45 }, 100_000_000)));
   const used = process.cpuUsage(cpu);
-  console.log(JSON.stringify({ seconds: Number(process.hrtime.bigint() - started) / 1e9, cpuSeconds: (used.user + used.system) / 1e6 }));
+  console.log(
+    JSON.stringify({ seconds: Number(process.hrtime.bigint() - started) / 1e9, cpuSeconds: (used.user + used.system) / 1e6 }),
+  );
 }
 
 async function main() {
@@ -95,18 +106,30 @@ async function main() {
   const sharpTwo = timed(node, [...tsx, a, b]);
 
   const row = (label: string, r: ReturnType<typeof timed>) =>
-    console.log(`${label.padEnd(40)} ${r.seconds.toFixed(2).padStart(7)} s wall ${r.cpuSeconds.toFixed(2).padStart(7)} s CPU ${r.peakMb.toFixed(0).padStart(6)} MB peak RSS`);
+    console.log(
+      `${label.padEnd(40)} ${r.seconds.toFixed(2).padStart(7)} s wall ${r.cpuSeconds.toFixed(2).padStart(7)} s CPU ${r.peakMb.toFixed(0).padStart(6)} MB peak RSS`,
+    );
   console.log(`\nMALLOC_ARENA_MAX=${process.env.MALLOC_ARENA_MAX ?? '(unset: glibc default, more fragmentation with threads)'}`);
-  console.log(`12 renditions (thumbnail 400, page 1600, kiosk 1920×1080 and 3840×2160 crops; AVIF, WebP, JPEG) on ${os.cpus().length} cores:`);
+  console.log(
+    `12 renditions (thumbnail 400, page 1600, kiosk 1920×1080 and 3840×2160 crops; AVIF, WebP, JPEG) on ${os.cpus().length} cores:`,
+  );
   row('sharp (Starproof), one image', sharpOne);
   row('ImageMagick convert, one image', magick);
   row('sharp (Starproof), two images at once', sharpTwo);
   const ratio = magick.seconds / sharpOne.seconds;
   const cpuRatio = magick.cpuSeconds / sharpOne.cpuSeconds;
-  console.log(`\nsharp is ${ratio.toFixed(1)}× faster than convert by wall time (target ≥ 3×): ${ratio >= 3 ? 'met' : 'NOT met'}`);
-  console.log(`         ${cpuRatio.toFixed(1)}× by CPU time (steadier when the machine is busy; load average now ${os.loadavg()[0].toFixed(1)})`);
-  console.log(`peak RSS one image ${sharpOne.peakMb.toFixed(0)} MB, two at once ${sharpTwo.peakMb.toFixed(0)} MB (target < 500 MB): ${Math.max(sharpOne.peakMb, sharpTwo.peakMb) < 500 ? 'met' : 'NOT met'}`);
-  console.log('(sharp times are of the rendering alone, without Node.js start-up; peak RSS includes Node.js itself, about 60 MB.)');
+  console.log(
+    `\nsharp is ${ratio.toFixed(1)}× faster than convert by wall time (target ≥ 3×): ${ratio >= 3 ? 'met' : 'NOT met'}`,
+  );
+  console.log(
+    `         ${cpuRatio.toFixed(1)}× by CPU time (steadier when the machine is busy; load average now ${os.loadavg()[0].toFixed(1)})`,
+  );
+  console.log(
+    `peak RSS one image ${sharpOne.peakMb.toFixed(0)} MB, two at once ${sharpTwo.peakMb.toFixed(0)} MB (target < 500 MB): ${Math.max(sharpOne.peakMb, sharpTwo.peakMb) < 500 ? 'met' : 'NOT met'}`,
+  );
+  console.log(
+    '(sharp times are of the rendering alone, without Node.js start-up; peak RSS includes Node.js itself, about 60 MB.)',
+  );
   fs.rmSync(work, { recursive: true, force: true });
 }
 

@@ -31,7 +31,15 @@ await ensureDatabase({ port: pgPort, database }, { recreate: true });
 const databaseUrl = localDatabaseUrl({ port: pgPort, database });
 
 const server = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {
-  env: { ...process.env, DATABASE_URL: databaseUrl, PORT: String(appPort), STARPROOF_SMTP_PORT: '0', LOG_LEVEL: 'warn', UPLOADS_DIR: path.resolve('.data/bench-load-uploads'), STARPROOF_PUBLIC_LIMIT: '1000000000' },
+  env: {
+    ...process.env,
+    DATABASE_URL: databaseUrl,
+    PORT: String(appPort),
+    STARPROOF_SMTP_PORT: '0',
+    LOG_LEVEL: 'warn',
+    UPLOADS_DIR: path.resolve('.data/bench-load-uploads'),
+    STARPROOF_PUBLIC_LIMIT: '1000000000',
+  },
   stdio: ['ignore', 'pipe', 'inherit'],
 });
 await new Promise<void>((resolve, reject) => {
@@ -60,16 +68,26 @@ const { code } = await issuePairingCode(screen, admin);
 const { token } = await pairScreen(code.replace('-', ''));
 
 const editor = DEMO_ACCOUNTS.find((a) => a.role === 'editor')!;
-const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: editor.email, password: editor.password }) });
+const signIn = await fetch(`${base}/api/auth/sign-in`, {
+  method: 'POST',
+  headers: { 'Content-Type': 'application/json' },
+  body: JSON.stringify({ email: editor.email, password: editor.password }),
+});
 const cookie = signIn.headers.get('set-cookie')!.split(';')[0];
 const pages = (await (await fetch(`${base}/api/pages`, { headers: { cookie } })).json()) as { data: Array<{ id: string }> };
 const pageId = pages.data[0]?.id;
 
 // One draft per connection for the saves, written by the demo writer.
 const writer = DEMO_ACCOUNTS.find((a) => a.role === 'writer')!;
-const writerSignIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': '10.9.9.9' }, body: JSON.stringify({ email: writer.email, password: writer.password }) });
+const writerSignIn = await fetch(`${base}/api/auth/sign-in`, {
+  method: 'POST',
+  headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': '10.9.9.9' },
+  body: JSON.stringify({ email: writer.email, password: writer.password }),
+});
 const writerCookie = writerSignIn.headers.get('set-cookie')!.split(';')[0];
-const objects = (await (await fetch(`${base}/api/catalogue/objects?pageSize=1`, { headers: { cookie } })).json()) as { data: { rows: Array<{ id: string }> } };
+const objects = (await (await fetch(`${base}/api/catalogue/objects?pageSize=1`, { headers: { cookie } })).json()) as {
+  data: { rows: Array<{ id: string }> };
+};
 const drafts: Array<{ id: string; version: number }> = [];
 for (let i = 0; i < 100; i++) {
   const made = await fetch(`${base}/api/pages`, {
@@ -82,7 +100,10 @@ for (let i = 0; i < 100; i++) {
 }
 let nextDraft = 0;
 type SaveContext = { draft?: { id: string; version: number }; edits?: number };
-const draftDoc = (n: number) => ({ type: 'doc', content: [{ type: 'paragraph', content: [{ type: 'text', text: `Autosaved text, edit ${n}.` }] }] });
+const draftDoc = (n: number) => ({
+  type: 'doc',
+  content: [{ type: 'paragraph', content: [{ type: 'text', text: `Autosaved text, edit ${n}.` }] }],
+});
 const feed = await fetch(`${base}/api/kiosk/feed`, { headers: { authorization: `Bearer ${token}` } });
 const etag = feed.headers.get('etag') ?? '';
 
@@ -102,10 +123,15 @@ const requests = [
     setupRequest: (req: Record<string, unknown>, context: SaveContext) => {
       context.draft ??= drafts[nextDraft++ % drafts.length];
       context.edits = (context.edits ?? 0) + 1;
-      return { ...req, path: `/api/pages/${context.draft.id}`, body: JSON.stringify({ version: context.draft.version, title: `Load draft (benchmark)`, doc: draftDoc(context.edits) }) };
+      return {
+        ...req,
+        path: `/api/pages/${context.draft.id}`,
+        body: JSON.stringify({ version: context.draft.version, title: `Load draft (benchmark)`, doc: draftDoc(context.edits) }),
+      };
     },
     onResponse: (status: number, body: string, context: SaveContext) => {
-      if (status === 200 && context.draft) context.draft.version = (JSON.parse(body) as { data: { version: number } }).data.version;
+      if (status === 200 && context.draft)
+        context.draft.version = (JSON.parse(body) as { data: { version: number } }).data.version;
     },
   },
 ];
@@ -114,7 +140,9 @@ async function phase(name: string, connections: number, duration: number) {
   const startRss = rssMb();
   const result = await autocannon({ url: base, connections, duration, requests, excludeErrorStats: false } as never);
   const bad = result.non2xx - (result.statusCodeStats?.['304']?.count ?? 0);
-  const codes = Object.entries(result.statusCodeStats ?? {}).filter(([code]) => !/^(2..|304)$/.test(code)).map(([code, v]) => `${code}×${(v as { count: number }).count}`);
+  const codes = Object.entries(result.statusCodeStats ?? {})
+    .filter(([code]) => !/^(2..|304)$/.test(code))
+    .map(([code, v]) => `${code}×${(v as { count: number }).count}`);
   console.log(
     `${name}: ${connections} connections, ${duration} s — ${Math.round(result.requests.average)} req/s, ` +
       `p50 ${result.latency.p50} ms, p99 ${result.latency.p99} ms, errors ${bad + result.errors + result.timeouts} ` +
@@ -127,13 +155,21 @@ console.log(`mixed traffic: ${requests.length} request kinds per connection, in 
 const first = await phase('load', 100, LOAD_SECONDS);
 // A save in flight when a phase ends was stored without its answer being read: start from the stored versions.
 for (const draft of drafts) {
-  draft.version = ((await (await fetch(`${base}/api/pages/${draft.id}`, { headers: { cookie: writerCookie } })).json()) as { data: { version: number } }).data.version;
+  draft.version = (
+    (await (await fetch(`${base}/api/pages/${draft.id}`, { headers: { cookie: writerCookie } })).json()) as {
+      data: { version: number };
+    }
+  ).data.version;
 }
 const soak = await phase('soak', 10, SOAK_SECONDS);
 const growth = ((soak.endRss - first.startRss) / first.startRss) * 100;
 const soakGrowth = ((soak.endRss - soak.startRss) / soak.startRss) * 100;
-console.log(`resident memory: ${first.startRss.toFixed(0)} MB idle before any traffic, ${soak.startRss.toFixed(0)} MB after the load phase, ${soak.endRss.toFixed(0)} MB at the end of the soak`);
-console.log(`  growth over the soak ${soakGrowth.toFixed(1)} % (target < 15 %); from idle ${growth.toFixed(1)} % (warm-up included: compiled code, connection pools, caches)`);
+console.log(
+  `resident memory: ${first.startRss.toFixed(0)} MB idle before any traffic, ${soak.startRss.toFixed(0)} MB after the load phase, ${soak.endRss.toFixed(0)} MB at the end of the soak`,
+);
+console.log(
+  `  growth over the soak ${soakGrowth.toFixed(1)} % (target < 15 %); from idle ${growth.toFixed(1)} % (warm-up included: compiled code, connection pools, caches)`,
+);
 
 server.kill('SIGTERM');
 await new Promise((r) => server.once('exit', r));

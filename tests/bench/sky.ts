@@ -10,7 +10,18 @@ import { Ephemeris } from '../../shared/sky/ephemeris.ts';
 import { computeSkyTonight, type SkyRequest } from '../../shared/sky/tonight.ts';
 
 const DATE = '2026-11-20';
-const ZONES = ['Europe/London', 'America/New_York', 'Asia/Tokyo', 'Australia/Sydney', 'America/Santiago', 'Africa/Nairobi', 'Asia/Kolkata', 'Pacific/Auckland', 'America/Anchorage', 'Europe/Oslo'];
+const ZONES = [
+  'Europe/London',
+  'America/New_York',
+  'Asia/Tokyo',
+  'Australia/Sydney',
+  'America/Santiago',
+  'Africa/Nairobi',
+  'Asia/Kolkata',
+  'Pacific/Auckland',
+  'America/Anchorage',
+  'Europe/Oslo',
+];
 
 /** 100 venues spread over latitudes −70..70 and all longitudes (deterministic). */
 const venues: SkyRequest[] = Array.from({ length: 100 }, (_, i) => ({
@@ -21,7 +32,14 @@ const venues: SkyRequest[] = Array.from({ length: 100 }, (_, i) => ({
   localDate: DATE,
   now: Date.UTC(2026, 10, 20, 9),
 }));
-const demo: SkyRequest = { latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London', localDate: DATE, now: Date.UTC(2026, 10, 20, 9) };
+const demo: SkyRequest = {
+  latitude: 54.62,
+  longitude: -2.95,
+  elevationM: 160,
+  timeZone: 'Europe/London',
+  localDate: DATE,
+  now: Date.UTC(2026, 10, 20, 9),
+};
 
 const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 function time(fn: () => void, runs: number): number {
@@ -48,7 +66,9 @@ const hundredShared = time(() => {
 const probe = new Ephemeris();
 computeSkyTonight(demo, { ephemeris: probe });
 const places = probe.placesComputed();
-const planetPlaces = places.filter((p) => (PLANET_IDS as readonly string[]).includes(p.body) || p.body === 'sun' || p.body === 'moon');
+const planetPlaces = places.filter(
+  (p) => (PLANET_IDS as readonly string[]).includes(p.body) || p.body === 'sun' || p.body === 'moon',
+);
 const oursPositions = time(() => {
   const e = new Ephemeris();
   for (const p of planetPlaces) {
@@ -70,14 +90,26 @@ const check = existsSync(python) ? spawnSync(python, ['-c', 'import astropy'], {
 if (!check || check.status !== 0) {
   console.log('  astropy: not available (install Debian python3-astropy for the ratio)');
 } else {
-  const run = spawnSync(python, ['tests/bench/sky-astropy.py'], { input: JSON.stringify(planetPlaces.map((p) => ({ body: p.body, jde: p.jde }))), encoding: 'utf8' });
+  const run = spawnSync(python, ['tests/bench/sky-astropy.py'], {
+    input: JSON.stringify(planetPlaces.map((p) => ({ body: p.body, jde: p.jde }))),
+    encoding: 'utf8',
+  });
   if (run.status !== 0) {
     console.log(`  astropy: failed: ${run.stderr.split('\n').slice(-3).join(' ')}`);
   } else {
-    const peer = JSON.parse(run.stdout) as { astropy_version: string; positions: number; one_by_one_s: number; vectorised_s: number };
+    const peer = JSON.parse(run.stdout) as {
+      astropy_version: string;
+      positions: number;
+      one_by_one_s: number;
+      vectorised_s: number;
+    };
     const oneByOne = peer.one_by_one_s * 1000;
     const vectorised = peer.vectorised_s * 1000;
-    console.log(`  astropy ${peer.astropy_version} get_body, same ${peer.positions} places, one call each: ${ms(oneByOne)}  (ratio astropy/ours ${(oneByOne / oursPositions).toFixed(1)}×)`);
-    console.log(`  astropy ${peer.astropy_version} get_body, same places, one vectorised call per body: ${ms(vectorised)}  (ratio astropy/ours ${(vectorised / oursPositions).toFixed(1)}×)`);
+    console.log(
+      `  astropy ${peer.astropy_version} get_body, same ${peer.positions} places, one call each: ${ms(oneByOne)}  (ratio astropy/ours ${(oneByOne / oursPositions).toFixed(1)}×)`,
+    );
+    console.log(
+      `  astropy ${peer.astropy_version} get_body, same places, one vectorised call per body: ${ms(vectorised)}  (ratio astropy/ours ${(vectorised / oursPositions).toFixed(1)}×)`,
+    );
   }
 }

@@ -79,7 +79,9 @@ function postgresCpuSeconds(dataDir: string): number {
 }
 
 /** Wall time, this process's CPU (every thread, the workers included) and PostgreSQL's CPU over fn. */
-async function measured<T>(fn: () => Promise<T>): Promise<{ result: T; wallMs: number; nodeCpu: number; pgCpu: number; loopP99: number }> {
+async function measured<T>(
+  fn: () => Promise<T>,
+): Promise<{ result: T; wallMs: number; nodeCpu: number; pgCpu: number; loopP99: number }> {
   const loop = monitorEventLoopDelay({ resolution: 10 });
   const cpu0 = process.cpuUsage();
   const pg0 = postgresCpuSeconds(PG.dataDir);
@@ -89,7 +91,13 @@ async function measured<T>(fn: () => Promise<T>): Promise<{ result: T; wallMs: n
   loop.disable();
   const wallMs = performance.now() - start;
   const used = process.cpuUsage(cpu0);
-  return { result, wallMs, nodeCpu: (used.user + used.system) / 1e6, pgCpu: postgresCpuSeconds(PG.dataDir) - pg0, loopP99: loop.percentile(99) / 1e6 };
+  return {
+    result,
+    wallMs,
+    nodeCpu: (used.user + used.system) / 1e6,
+    pgCpu: postgresCpuSeconds(PG.dataDir) - pg0,
+    loopP99: loop.percentile(99) / 1e6,
+  };
 }
 
 const cpuLine = (m: { wallMs: number; nodeCpu: number; pgCpu: number; loopP99: number }) =>
@@ -124,13 +132,17 @@ async function main(): Promise<void> {
     await migrate(sequelize);
     const [, seedMs] = await timed(() => seed((sql) => sequelize.query(sql)));
     const total = await Statement.count();
-    console.log(`seeded ${OBJECTS.toLocaleString('en-GB')} objects and ${total.toLocaleString('en-GB')} statements in ${seconds(seedMs)}`);
+    console.log(
+      `seeded ${OBJECTS.toLocaleString('en-GB')} objects and ${total.toLocaleString('en-GB')} statements in ${seconds(seedMs)}`,
+    );
     await getSettings();
 
     const firstRun = await measured(() => recomputeStatements({ all: true }));
     const first = firstRun.result;
     const firstMs = firstRun.wallMs;
-    console.log(`first computation (Planck 2018): ${first.written.toLocaleString('en-GB')} statements in ${seconds(firstMs)} (${rate(first.written, firstMs)}), ${first.broken.length} broken`);
+    console.log(
+      `first computation (Planck 2018): ${first.written.toLocaleString('en-GB')} statements in ${seconds(firstMs)} (${rate(first.written, firstMs)}), ${first.broken.length} broken`,
+    );
     console.log(cpuLine(firstRun));
 
     // The admin switches the model; without a running job queue the recompute runs inline.
@@ -141,9 +153,13 @@ async function main(): Promise<void> {
     const changeRun = await measured(() => changeCosmology({ preset: 'wmap9' }, version, admin));
     const changeMs = changeRun.wallMs;
     const byStatus = await Statement.count({ group: ['status'] });
-    console.log(`model change to WMAP9, recompute with writes: ${total.toLocaleString('en-GB')} statements in ${seconds(changeMs)} (${rate(total, changeMs)}); target < 20 s`);
+    console.log(
+      `model change to WMAP9, recompute with writes: ${total.toLocaleString('en-GB')} statements in ${seconds(changeMs)} (${rate(total, changeMs)}); target < 20 s`,
+    );
     console.log(cpuLine(changeRun));
-    console.log(`  wording changed: ${changed.toLocaleString('en-GB')}; statuses now ${byStatus.map((g) => `${g.status} ${g.count}`).join(', ')}`);
+    console.log(
+      `  wording changed: ${changed.toLocaleString('en-GB')}; statuses now ${byStatus.map((g) => `${g.status} ${g.count}`).join(', ')}`,
+    );
 
     // Render one statement with its working, warm, per template.
     const sample = await Statement.findOne({ where: { templateId: TEMPLATES[0] }, rejectOnEmpty: true });
@@ -162,25 +178,39 @@ async function main(): Promise<void> {
 
     // Read one stored statement back as the statement page does: the row, its cosmology, its working unpacked.
     const { readWorking } = await import('../../server/services/statements/working-store.ts');
-    const sampleIds = (await Statement.findAll({ attributes: ['id'], limit: RENDER_CALLS, order: [['id', 'ASC']] })).map((s) => s.id);
+    const sampleIds = (await Statement.findAll({ attributes: ['id'], limit: RENDER_CALLS, order: [['id', 'ASC']] })).map(
+      (s) => s.id,
+    );
     const reads: number[] = [];
     for (const id of sampleIds) {
       const start = performance.now();
-      const row = await Statement.findByPk(id, { include: [{ model: CosmologyDescription, as: 'modelDescription' }], rejectOnEmpty: true });
+      const row = await Statement.findByPk(id, {
+        include: [{ model: CosmologyDescription, as: 'modelDescription' }],
+        rejectOnEmpty: true,
+      });
       await readWorking(row.working);
       reads.push(performance.now() - start);
     }
-    console.log(`  read a stored statement with its working (row, cosmology, unpacked steps) median ${median(reads).toFixed(3)} ms over ${reads.length}`);
+    console.log(
+      `  read a stored statement with its working (row, cosmology, unpacked steps) median ${median(reads).toFixed(3)} ms over ${reads.length}`,
+    );
 
     // Peer: the same recompute, row by row with Statement.save(), over 2,000 statements.
-    const peerRows = await Statement.findAll({ order: [['skyObjectId', 'ASC']], limit: PEER_ROWS, include: [{ model: CosmologyDescription, as: 'modelDescription' }] });
+    const peerRows = await Statement.findAll({
+      order: [['skyObjectId', 'ASC']],
+      limit: PEER_ROWS,
+      include: [{ model: CosmologyDescription, as: 'modelDescription' }],
+    });
     const [bulk, bulkMs] = await timed(() => recomputeStatements({ statementIds: peerRows.map((s) => s.id) }));
     const [, rowMs] = await timed(async () => {
       const objects = await SkyObject.findAll({ where: { id: [...new Set(peerRows.map((s) => s.skyObjectId))] } });
       const contexts = await buildTemplateContexts(objects, settings);
       const modelId = (await batchModelFor(settings))?.id ?? null;
       for (const statement of peerRows) {
-        const outcome = applyOutcome(previousOf(statement), evaluateStatement(statement.templateId, contexts.get(statement.skyObjectId)!));
+        const outcome = applyOutcome(
+          previousOf(statement),
+          evaluateStatement(statement.templateId, contexts.get(statement.skyObjectId)!),
+        );
         if (outcome.status === 'broken') statement.set({ status: 'broken', statusReason: outcome.statusReason });
         else {
           const { model, ...fields } = outcome;
@@ -190,7 +220,9 @@ async function main(): Promise<void> {
         await statement.save();
       }
     });
-    console.log(`peer, ${PEER_ROWS.toLocaleString('en-GB')} statements: batched recompute ${seconds(bulkMs)} (${rate(bulk.written, bulkMs)}), per-row save() loop ${seconds(rowMs)} (${rate(PEER_ROWS, rowMs)}); batched is ${(rowMs / bulkMs).toFixed(1)}× faster`);
+    console.log(
+      `peer, ${PEER_ROWS.toLocaleString('en-GB')} statements: batched recompute ${seconds(bulkMs)} (${rate(bulk.written, bulkMs)}), per-row save() loop ${seconds(rowMs)} (${rate(PEER_ROWS, rowMs)}); batched is ${(rowMs / bulkMs).toFixed(1)}× faster`,
+    );
     await stopEvaluationPool();
     await closeSequelize();
   } finally {

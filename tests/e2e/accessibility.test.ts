@@ -22,12 +22,21 @@ async function seriousViolations(page: Page): Promise<string[]> {
   await page.evaluate(AXE_SOURCE);
   const violations = await page.evaluate(async () => {
     const axe = (window as unknown as { axe: { run(ctx: Document, opts: object): Promise<{ violations: AxeViolation[] }> } }).axe;
-    const result = await axe.run(document, { runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] }, resultTypes: ['violations'] });
+    const result = await axe.run(document, {
+      runOnly: { type: 'tag', values: ['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa'] },
+      resultTypes: ['violations'],
+    });
     return result.violations;
   });
   return violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.impact} ${v.id}: ${v.help}\n${v.nodes.slice(0, 5).map((n) => `    at ${n.target.join(' ')}${n.failureSummary ? ` — ${n.failureSummary.replace(/\s+/g, ' ')}` : ''}`).join('\n')}`);
+    .map(
+      (v) =>
+        `${v.impact} ${v.id}: ${v.help}\n${v.nodes
+          .slice(0, 5)
+          .map((n) => `    at ${n.target.join(' ')}${n.failureSummary ? ` — ${n.failureSummary.replace(/\s+/g, ' ')}` : ''}`)
+          .join('\n')}`,
+    );
 }
 
 /** Opens a screen, waits for its main heading (the app has loaded its data), and checks it. */
@@ -49,7 +58,8 @@ describe('accessibility', () => {
     await check(page, baseUrl, '/kiosk', () => page.locator('input').count(), 'kiosk-pairing', found);
     // The pairing form by keyboard alone: Tab reaches the field, Enter submits, the answer is announced.
     await page.locator('body').focus();
-    for (let i = 0; i < 5 && !(await page.evaluate(() => document.activeElement?.tagName === 'INPUT')); i += 1) await page.keyboard.press('Tab');
+    for (let i = 0; i < 5 && !(await page.evaluate(() => document.activeElement?.tagName === 'INPUT')); i += 1)
+      await page.keyboard.press('Tab');
     expect(await page.evaluate(() => document.activeElement?.tagName)).toBe('INPUT');
     await page.keyboard.type('ZZZ-ZZZ');
     await page.keyboard.press('Enter');

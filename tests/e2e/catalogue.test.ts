@@ -45,7 +45,10 @@ describe('the catalogue, as a reviewer uses it', () => {
     await expect.poll(() => page.getByText('Boötes (Boo)').count()).toBe(1);
 
     // Two sourced parallaxes (values recalled from memory, for the test only).
-    for (const [value, sigma] of [['88.83', '0.54'], ['88.85', '0.74']]) {
+    for (const [value, sigma] of [
+      ['88.83', '0.54'],
+      ['88.85', '0.74'],
+    ]) {
       await page.getByRole('button', { name: 'Add measurement' }).click();
       const form = page.getByRole('form', { name: 'Add a measurement' });
       await form.getByLabel('Quantity').selectOption('parallax');
@@ -58,7 +61,9 @@ describe('the catalogue, as a reviewer uses it', () => {
         await form.getByLabel('Value').fill(value);
         await form.getByRole('button', { name: 'Add measurement' }).click();
       }
-      await expect.poll(() => page.getByRole('region', { name: 'Parallax' }).getByText(`${value} ± ${sigma} mas`).count()).toBe(1);
+      await expect
+        .poll(() => page.getByRole('region', { name: 'Parallax' }).getByText(`${value} ± ${sigma} mas`).count())
+        .toBe(1);
     }
     const group = page.getByRole('region', { name: 'Parallax' });
     await group.getByRole('button', { name: 'Make preferred' }).first().click();
@@ -73,17 +78,22 @@ describe('the catalogue, as a reviewer uses it', () => {
     // A CSV with a byte-order mark, a quoted comma and three bad rows.
     await page.getByRole('link', { name: '← Catalogue' }).click();
     await page.getByRole('link', { name: 'Import CSV' }).click();
-    const csv = '\uFEFFobject,quantity,value,unit,band,uncertainty,source\n'
-      + 'Arcturus,apparent_magnitude,-0.05,mag,V,0.01,2007A&A...474..653V\n'
-      + '"Arcturus",radius,25.4,R_sun,,0.2,"van Leeuwen, F. (2007), A&A 474, 653"\n'
-      + 'Nowhere Star,redshift,0.1,,,,2007A&A...474..653V\n'
-      + 'Arcturus,distance,eleven,pc,,,2007A&A...474..653V\n'
-      + 'Arcturus,distance,11.3,kg,,,2007A&A...474..653V\n';
-    await page.getByLabel('CSV file (UTF-8, up to 10 MB)').setInputFiles({ name: 'arcturus.csv', mimeType: 'text/csv', buffer: Buffer.from(csv, 'utf8') });
+    const csv =
+      '\uFEFFobject,quantity,value,unit,band,uncertainty,source\n' +
+      'Arcturus,apparent_magnitude,-0.05,mag,V,0.01,2007A&A...474..653V\n' +
+      '"Arcturus",radius,25.4,R_sun,,0.2,"van Leeuwen, F. (2007), A&A 474, 653"\n' +
+      'Nowhere Star,redshift,0.1,,,,2007A&A...474..653V\n' +
+      'Arcturus,distance,eleven,pc,,,2007A&A...474..653V\n' +
+      'Arcturus,distance,11.3,kg,,,2007A&A...474..653V\n';
+    await page
+      .getByLabel('CSV file (UTF-8, up to 10 MB)')
+      .setInputFiles({ name: 'arcturus.csv', mimeType: 'text/csv', buffer: Buffer.from(csv, 'utf8') });
     await page.getByRole('button', { name: 'Check file' }).click();
     const rejected = page.getByRole('table', { name: 'Rejected rows' });
     await expect.poll(() => rejected.getByRole('row').count()).toBe(4);
-    await expect.poll(() => rejected.textContent()).toMatch(/4Unknown object.*5Value is not a number.*6Unit does not fit the quantity/);
+    await expect
+      .poll(() => rejected.textContent())
+      .toMatch(/4Unknown object.*5Value is not a number.*6Unit does not fit the quantity/);
     await screenshot(page, 'catalogue-import-report');
     await page.getByRole('button', { name: 'Import 2 rows' }).click();
     await expect.poll(() => page.getByText('2 measurements were added').count()).toBe(1);
@@ -92,7 +102,9 @@ describe('the catalogue, as a reviewer uses it', () => {
     await page.goto(`${baseUrl}/catalogue?q=Arcturus`);
     await page.getByRole('link', { name: 'Arcturus' }).click();
     const history = page.getByRole('list', { name: 'Measurement history' });
-    await expect.poll(() => history.getByText(/imported (apparent magnitude \(V\) −0\.05 ± 0\.01 mag|radius 25\.4 ± 0\.2 R☉)/).count()).toBe(2);
+    await expect
+      .poll(() => history.getByText(/imported (apparent magnitude \(V\) −0\.05 ± 0\.01 mag|radius 25\.4 ± 0\.2 R☉)/).count())
+      .toBe(2);
     await expect.poll(() => history.getByText('“Imported from arcturus.csv”').count()).toBe(2);
     await screenshot(page, 'catalogue-history');
     expect(errors).toEqual([]);

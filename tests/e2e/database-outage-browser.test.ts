@@ -17,17 +17,46 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
 
     // A venue of its own (the demo venue's screens are counted elsewhere), a channel with a picture
     // and tonight's sky, and a screen the kiosk pairs with below.
-    const venue = ok(await admin.call<{ data: { id: string } }>('POST', '/api/venues', { ...DEMO_VENUE, name: 'Outage test dome (test)' }), 'venue').body.data;
+    const venue = ok(
+      await admin.call<{ data: { id: string } }>('POST', '/api/venues', { ...DEMO_VENUE, name: 'Outage test dome (test)' }),
+      'venue',
+    ).body.data;
     const image = await readyImage(admin, await solidImage(1920, 1080, '#1b2a4a'), 'Corrie Vale Observatory (demo)');
-    const channel = ok(await admin.call<{ data: { id: string } }>('POST', '/api/channels', { venueId: venue.id, name: 'Outage test loop' }), 'channel').body.data;
-    ok(await admin.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'image', mediaId: image, caption: 'A quiet blue field (demo picture)', durationS: 5 }), 'image slide');
+    const channel = ok(
+      await admin.call<{ data: { id: string } }>('POST', '/api/channels', { venueId: venue.id, name: 'Outage test loop' }),
+      'channel',
+    ).body.data;
+    ok(
+      await admin.call('POST', `/api/channels/${channel.id}/slides`, {
+        kind: 'image',
+        mediaId: image,
+        caption: 'A quiet blue field (demo picture)',
+        durationS: 5,
+      }),
+      'image slide',
+    );
     ok(await admin.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'sky_tonight', durationS: 5 }), 'sky slide');
-    const added = ok(await admin.call<{ data: { pairingCode: string; screen: { id: string } } }>('POST', `/api/venues/${venue.id}/screens`, { name: 'Outage test screen' }), 'screen').body.data;
+    const added = ok(
+      await admin.call<{ data: { pairingCode: string; screen: { id: string } } }>('POST', `/api/venues/${venue.id}/screens`, {
+        name: 'Outage test screen',
+      }),
+      'screen',
+    ).body.data;
     ok(await admin.call('PUT', `/api/channels/${channel.id}/screens`, { screenIds: [added.screen.id] }), 'assign screen');
 
     // The writer's page, opened in the editor.
-    const crab = ok(await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Crab'), 'find object').body.data.rows.find((o) => o.name === 'Crab Nebula')!;
-    const created = ok(await writer.call<{ data: { id: string } }>('POST', '/api/pages', { title: 'The Crab Nebula through an outage', objectId: crab.id, locale: 'en-GB' }), 'page').body.data;
+    const crab = ok(
+      await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Crab'),
+      'find object',
+    ).body.data.rows.find((o) => o.name === 'Crab Nebula')!;
+    const created = ok(
+      await writer.call<{ data: { id: string } }>('POST', '/api/pages', {
+        title: 'The Crab Nebula through an outage',
+        objectId: crab.id,
+        locale: 'en-GB',
+      }),
+      'page',
+    ).body.data;
 
     const kiosk = await context.newPage();
     kiosk.on('pageerror', (e) => errors.push(`kiosk: ${e.message}`));
@@ -58,7 +87,9 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
       await editor.keyboard.press('End');
       await editor.keyboard.type(DURING);
       // The save fails: the writer reads that it is retrying by itself, and the text stays on screen.
-      await expect.poll(() => status.textContent(), { timeout: 30_000 }).toMatch(/Not saved yet: retrying.*database is not answering.*tries again by itself/s);
+      await expect
+        .poll(() => status.textContent(), { timeout: 30_000 })
+        .toMatch(/Not saved yet: retrying.*database is not answering.*tries again by itself/s);
       expect(await body.innerText()).toContain(BEFORE.trim());
       expect(await body.innerText()).toContain(DURING);
       await screenshot(editor, 'outage-editor-retrying');
@@ -91,7 +122,12 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     await screenshot(editor, 'outage-editor-saved');
 
     // The kiosk is still paired and playing, and its feed answers again.
-    await expect.poll(() => feedAnswers.some((a) => a.at > restarted && (a.status === 200 || a.status === 304)), { timeout: 60_000, interval: 1000 }).toBe(true);
+    await expect
+      .poll(() => feedAnswers.some((a) => a.at > restarted && (a.status === 200 || a.status === 304)), {
+        timeout: 60_000,
+        interval: 1000,
+      })
+      .toBe(true);
     expect(await kiosk.locator('.slide.shown').count()).toBe(1);
     ok(await admin.call('POST', `/api/venues/${venue.id}/screens/${added.screen.id}/revoke`), 'revoke the test screen');
     expect(errors.filter((e) => !/Failed to load resource: the server responded with a status of 503/.test(e))).toEqual([]);

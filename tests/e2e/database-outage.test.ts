@@ -17,7 +17,11 @@ async function timed(url: string, init: RequestInit = {}) {
 describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage while the app runs', () => {
   it('stays up, reports the outage, answers quickly with a clear error, and recovers with nothing lost', async () => {
     const base = inject('baseUrl');
-    const signIn = await fetch(`${base}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email: admin.email, password: admin.password }) });
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email: admin.email, password: admin.password }),
+    });
     const cookie = signIn.headers.get('set-cookie')!.split(';')[0];
     expect((await timed(`${base}/api/health`)).status).toBe(200);
 
@@ -44,9 +48,7 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage wh
       await startLocalPostgres({ ...TEST_CLUSTER, database: 'postgres', fast: true });
     }
 
-    await expect
-      .poll(async () => (await timed(`${base}/api/health`)).status, { timeout: 30_000, interval: 500 })
-      .toBe(200);
+    await expect.poll(async () => (await timed(`${base}/api/health`)).status, { timeout: 30_000, interval: 500 }).toBe(200);
     // The session made before the outage still works, and a write lands.
     const me = await timed(`${base}/api/auth/me`, { headers: { cookie } });
     expect(me.status).toBe(200);
@@ -59,12 +61,24 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage wh
 
     // Background jobs run again: a new image gets its renditions.
     const form = new FormData();
-    form.append('file', new Blob([new Uint8Array(await solidImage(800, 600, '#203040'))], { type: 'image/jpeg' }), 'after-outage.jpg');
+    form.append(
+      'file',
+      new Blob([new Uint8Array(await solidImage(800, 600, '#203040'))], { type: 'image/jpeg' }),
+      'after-outage.jpg',
+    );
     const uploaded = await fetch(`${base}/api/media`, { method: 'POST', headers: { cookie, Origin: base }, body: form });
     expect(uploaded.status).toBe(201);
     const mediaId = ((await uploaded.json()) as { data: { id: string } }).data.id;
     await expect
-      .poll(async () => ((await (await fetch(`${base}/api/media/${mediaId}`, { headers: { cookie } })).json()) as { data: { renditionsStatus: string } }).data.renditionsStatus, { timeout: 60_000, interval: 1000 })
+      .poll(
+        async () =>
+          (
+            (await (await fetch(`${base}/api/media/${mediaId}`, { headers: { cookie } })).json()) as {
+              data: { renditionsStatus: string };
+            }
+          ).data.renditionsStatus,
+        { timeout: 60_000, interval: 1000 },
+      )
       .toBe('ready');
   });
 });

@@ -14,44 +14,117 @@ type Data<T> = { data: T };
 async function plantPayloads(admin: E2eSession, writer: E2eSession, reviewer: E2eSession, editor: E2eSession) {
   const objectIds: string[] = [];
   for (const [i, p] of XSS_PAYLOADS.entries()) {
-    const res = ok(await admin.call('POST', '/api/catalogue/objects', { name: `${p} ${tag}-${i}`.slice(0, 120), kind: 'galaxy', ra: '10 00 00', dec: '+10 00 00', notes: p }), `object ${i}`);
+    const res = ok(
+      await admin.call('POST', '/api/catalogue/objects', {
+        name: `${p} ${tag}-${i}`.slice(0, 120),
+        kind: 'galaxy',
+        ra: '10 00 00',
+        dec: '+10 00 00',
+        notes: p,
+      }),
+      `object ${i}`,
+    );
     objectIds.push((res.body as Data<{ id: string }>).data.id);
   }
-  for (const [i, p] of FORMULA_PAYLOADS.entries()) ok(await admin.call('POST', '/api/catalogue/objects', { name: `${p}${tag}${i}`, kind: 'galaxy', ra: '11 00 00', dec: '+11 00 00', notes: p }), `formula object ${i}`);
+  for (const [i, p] of FORMULA_PAYLOADS.entries())
+    ok(
+      await admin.call('POST', '/api/catalogue/objects', {
+        name: `${p}${tag}${i}`,
+        kind: 'galaxy',
+        ra: '11 00 00',
+        dec: '+11 00 00',
+        notes: p,
+      }),
+      `formula object ${i}`,
+    );
   const sourceIds: string[] = [];
   for (const [i, p] of [...XSS_PAYLOADS, ...FORMULA_PAYLOADS].entries()) {
-    const res = ok(await admin.call('POST', '/api/catalogue/sources', { citation: `${p} (hostile test ${tag}-${i})` }), `source ${i}`);
+    const res = ok(
+      await admin.call('POST', '/api/catalogue/sources', { citation: `${p} (hostile test ${tag}-${i})` }),
+      `source ${i}`,
+    );
     sourceIds.push((res.body as Data<{ id: string }>).data.id);
   }
   const target = objectIds[0];
   for (const [i, p] of [...XSS_PAYLOADS.slice(0, 8), ...FORMULA_PAYLOADS].entries()) {
-    ok(await admin.call('POST', `/api/catalogue/objects/${target}/measurements`, { quantity: 'redshift', value: String(0.01 + i / 1000), sourceId: sourceIds[i], note: p }), `measurement ${i}`);
+    ok(
+      await admin.call('POST', `/api/catalogue/objects/${target}/measurements`, {
+        quantity: 'redshift',
+        value: String(0.01 + i / 1000),
+        sourceId: sourceIds[i],
+        note: p,
+      }),
+      `measurement ${i}`,
+    );
   }
 
   // An image whose credit, alt text and captions are payloads.
-  const png = await sharp({ create: { width: 640, height: 400, channels: 3, background: '#1b2340' } }).png().toBuffer();
+  const png = await sharp({ create: { width: 640, height: 400, channels: 3, background: '#1b2340' } })
+    .png()
+    .toBuffer();
   const media = ok(await writer.upload(png, `${XSS_PAYLOADS[5]}.png`), 'upload').body.data;
-  ok(await writer.call('PATCH', `/api/media/${media.id}`, { altText: XSS_PAYLOADS[0], credit: XSS_PAYLOADS[23], licenceId: 'cc-by-4.0', sourceUrl: 'https://example.org/hostile-test' }), 'media details');
-  await expect.poll(async () => ((await writer.call('GET', `/api/media/${media.id}`)).body as Data<{ renditionsStatus: string }>).data.renditionsStatus, { timeout: 60_000 }).toBe('ready');
+  ok(
+    await writer.call('PATCH', `/api/media/${media.id}`, {
+      altText: XSS_PAYLOADS[0],
+      credit: XSS_PAYLOADS[23],
+      licenceId: 'cc-by-4.0',
+      sourceUrl: 'https://example.org/hostile-test',
+    }),
+    'media details',
+  );
+  await expect
+    .poll(
+      async () =>
+        ((await writer.call('GET', `/api/media/${media.id}`)).body as Data<{ renditionsStatus: string }>).data.renditionsStatus,
+      { timeout: 60_000 },
+    )
+    .toBe('ready');
 
   // A page with a payload title, every payload as text, the image with a payload caption; published.
   const paragraphs = XSS_PAYLOADS.map((p) => ({ type: 'paragraph', content: [{ type: 'text', text: p }] }));
-  const docBody = { type: 'doc', content: [{ type: 'mediaImage', attrs: { mediaId: media.id, caption: XSS_PAYLOADS[18] } }, ...paragraphs] };
-  const created = ok(await writer.call('POST', '/api/pages', { title: XSS_PAYLOADS[3], objectId: target, locale: 'en-GB' }), 'page').body as Data<{ id: string; version: number }>;
+  const docBody = {
+    type: 'doc',
+    content: [{ type: 'mediaImage', attrs: { mediaId: media.id, caption: XSS_PAYLOADS[18] } }, ...paragraphs],
+  };
+  const created = ok(
+    await writer.call('POST', '/api/pages', { title: XSS_PAYLOADS[3], objectId: target, locale: 'en-GB' }),
+    'page',
+  ).body as Data<{ id: string; version: number }>;
   const pageId = created.data.id;
-  const saved = ok(await writer.call('PUT', `/api/pages/${pageId}`, { version: created.data.version, title: XSS_PAYLOADS[3], doc: docBody }), 'save').body as Data<{ version: number }>;
+  const saved = ok(
+    await writer.call('PUT', `/api/pages/${pageId}`, { version: created.data.version, title: XSS_PAYLOADS[3], doc: docBody }),
+    'save',
+  ).body as Data<{ version: number }>;
   ok(await writer.call('POST', `/api/pages/${pageId}/submit`, { version: saved.data.version }), 'submit');
-  const detail = (await reviewer.call('GET', `/api/pages/${pageId}`)).body as Data<{ flags: Array<{ text: string; resolution: unknown }> }>;
+  const detail = (await reviewer.call('GET', `/api/pages/${pageId}`)).body as Data<{
+    flags: Array<{ text: string; resolution: unknown }>;
+  }>;
   for (const text of new Set(detail.data.flags.filter((f) => !f.resolution).map((f) => f.text))) {
-    ok(await reviewer.call('POST', `/api/pages/${pageId}/flags`, { text, reason: 'Part of a test string, not a measured quantity.' }), `flag ${text}`);
+    ok(
+      await reviewer.call('POST', `/api/pages/${pageId}/flags`, {
+        text,
+        reason: 'Part of a test string, not a measured quantity.',
+      }),
+      `flag ${text}`,
+    );
   }
   ok(await reviewer.call('POST', `/api/pages/${pageId}/signoffs/page`), 'sign off');
   ok(await editor.call('POST', `/api/pages/${pageId}/publish`), 'publish');
 
   // A channel with a payload name and an image slide with a payload caption.
   const venues = (await admin.call('GET', '/api/venues')).body as Data<Array<{ id: string }>>;
-  const channel = ok(await admin.call('POST', '/api/channels', { venueId: venues.data[0].id, name: `${XSS_PAYLOADS[24]} ${tag}`.slice(0, 80) }), 'channel').body as Data<{ id: string }>;
-  ok(await admin.call('POST', `/api/channels/${channel.data.id}/slides`, { kind: 'image', mediaId: media.id, caption: XSS_PAYLOADS[13] }), 'image slide');
+  const channel = ok(
+    await admin.call('POST', '/api/channels', { venueId: venues.data[0].id, name: `${XSS_PAYLOADS[24]} ${tag}`.slice(0, 80) }),
+    'channel',
+  ).body as Data<{ id: string }>;
+  ok(
+    await admin.call('POST', `/api/channels/${channel.data.id}/slides`, {
+      kind: 'image',
+      mediaId: media.id,
+      caption: XSS_PAYLOADS[13],
+    }),
+    'image slide',
+  );
   ok(await admin.call('POST', `/api/channels/${channel.data.id}/slides`, { kind: 'page', pageId }), 'page slide');
   return { objectId: target, pageId, channelId: channel.data.id, mediaId: media.id };
 }
@@ -64,19 +137,31 @@ async function plantPayloads(admin: E2eSession, writer: E2eSession, reviewer: E2
 async function assertInert(page: Page, dialogs: string[], screen: string) {
   await page.waitForTimeout(600);
   expect(dialogs, `${screen}: a dialog opened`).toEqual([]);
-  expect(await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned), `${screen}: a payload ran`).toBeUndefined();
+  expect(
+    await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned),
+    `${screen}: a payload ran`,
+  ).toBeUndefined();
   const found = await page.evaluate(() => {
     const bad: string[] = [];
     for (const el of Array.from(document.querySelectorAll('*'))) {
       for (const attr of Array.from(el.attributes)) {
         if (/^on/i.test(attr.name)) bad.push(`${el.tagName} ${attr.name}`);
-        if (/^\s*(javascript|data:text\/javascript)/i.test(attr.value.replace(/[\s\u0000-\u001f]/g, '')) && /href|src|action|data/i.test(attr.name)) bad.push(`${el.tagName} ${attr.name}=${attr.value}`);
+        if (
+          /^\s*(javascript|data:text\/javascript)/i.test(attr.value.replace(/[\s\u0000-\u001f]/g, '')) &&
+          /href|src|action|data/i.test(attr.name)
+        )
+          bad.push(`${el.tagName} ${attr.name}=${attr.value}`);
       }
     }
-    for (const s of Array.from(document.scripts)) if (!s.src || new URL(s.src).origin !== location.origin) bad.push(`script ${s.src || s.textContent?.slice(0, 40)}`);
+    for (const s of Array.from(document.scripts))
+      if (!s.src || new URL(s.src).origin !== location.origin) bad.push(`script ${s.src || s.textContent?.slice(0, 40)}`);
     // The channel screen frames our own kiosk preview; any other frame came from a payload.
-    const ownFrame = (el: Element) => el instanceof HTMLIFrameElement && new URL(el.src, location.href).origin === location.origin && new URL(el.src, location.href).pathname === '/kiosk';
-    for (const el of Array.from(document.querySelectorAll('iframe, object, embed, base, meta[http-equiv="refresh"], template'))) if (!ownFrame(el)) bad.push(`${el.tagName} ${el.outerHTML.slice(0, 80)}`);
+    const ownFrame = (el: Element) =>
+      el instanceof HTMLIFrameElement &&
+      new URL(el.src, location.href).origin === location.origin &&
+      new URL(el.src, location.href).pathname === '/kiosk';
+    for (const el of Array.from(document.querySelectorAll('iframe, object, embed, base, meta[http-equiv="refresh"], template')))
+      if (!ownFrame(el)) bad.push(`${el.tagName} ${el.outerHTML.slice(0, 80)}`);
     return bad;
   });
   expect(found, `${screen}: live markup from a payload`).toEqual([]);
@@ -85,7 +170,9 @@ async function assertInert(page: Page, dialogs: string[], screen: string) {
 describe('hostile content', () => {
   it('payloads in every field that reaches a screen are shown as text and never run', async () => {
     const { context, page, baseUrl } = await openBrowser();
-    const [admin, writer, reviewer, editor] = await Promise.all((['admin', 'writer', 'reviewer', 'editor'] as const).map((r) => demoSession(baseUrl, r)));
+    const [admin, writer, reviewer, editor] = await Promise.all(
+      (['admin', 'writer', 'reviewer', 'editor'] as const).map((r) => demoSession(baseUrl, r)),
+    );
     const planted = await plantPayloads(admin, writer, reviewer, editor);
     const dialogs: string[] = [];
     page.on('dialog', (d) => {
@@ -106,7 +193,10 @@ describe('hostile content', () => {
     ];
     for (const [name, url, visible] of screens) {
       await page.goto(`${baseUrl}${url}`);
-      if (visible) await expect.poll(() => page.locator('body').innerText(), { ...WAIT, message: `${name} shows the payload as text` }).toContain(visible);
+      if (visible)
+        await expect
+          .poll(() => page.locator('body').innerText(), { ...WAIT, message: `${name} shows the payload as text` })
+          .toContain(visible);
       await assertInert(page, dialogs, name);
       await screenshot(page, `hostile-${name.replace(/ /g, '-')}`);
     }
@@ -119,7 +209,10 @@ describe('hostile content', () => {
     await assertInert(page, dialogs, 'image details');
 
     // The public API's HTML, rendered as a site embedding it would, on a page with no CSP at all.
-    const live = (await (await fetch(`${baseUrl}/api/public/pages/${planted.pageId}`)).json()) as Data<{ title: string; html: string }>;
+    const live = (await (await fetch(`${baseUrl}/api/public/pages/${planted.pageId}`)).json()) as Data<{
+      title: string;
+      html: string;
+    }>;
     expect(live.data.title).toBe(XSS_PAYLOADS[3]);
     await page.goto('about:blank');
     await page.setContent(`<!doctype html><title>embed</title><h1 id="t"></h1><main>${live.data.html}</main>`);
@@ -154,7 +247,8 @@ describe('hostile content', () => {
       const csp = res.headers.get('content-security-policy') ?? '';
       // The kiosk player may be framed by the staff app's own channel preview, and by nothing else.
       const frames = url === '/kiosk' ? "frame-ancestors 'self'" : "frame-ancestors 'none'";
-      for (const part of ["default-src 'self'", "script-src 'self'", "object-src 'none'", "base-uri 'self'", frames]) expect(csp, url).toContain(part);
+      for (const part of ["default-src 'self'", "script-src 'self'", "object-src 'none'", "base-uri 'self'", frames])
+        expect(csp, url).toContain(part);
       expect(csp, url).not.toMatch(/script-src[^;]*'unsafe-(inline|eval)'/);
       expect(res.headers.get('x-content-type-options'), url).toBe('nosniff');
       expect(res.headers.get('referrer-policy'), url).toBe('no-referrer');

@@ -15,7 +15,9 @@ const focusDrawn = (target: Locator) =>
     const s = getComputedStyle(el);
     const transparent = /rgba\(0, 0, 0, 0\)|transparent/;
     const outline = s.outlineStyle !== 'none' && parseFloat(s.outlineWidth) >= 1 && !transparent.test(s.outlineColor);
-    const ring = s.boxShadow !== 'none' && s.boxShadow.split(/,(?![^(]*\))/).some((layer) => !transparent.test(layer) && /[1-9][\d.]*px/.test(layer));
+    const ring =
+      s.boxShadow !== 'none' &&
+      s.boxShadow.split(/,(?![^(]*\))/).some((layer) => !transparent.test(layer) && /[1-9][\d.]*px/.test(layer));
     return el.matches(':focus-visible') && (outline || ring);
   });
 
@@ -35,11 +37,14 @@ async function arrowTo(page: Page, select: Locator, matches: (value: string) => 
 }
 
 /** A GET from inside the page, with the browser's own session. */
-const apiGet = <T>(page: Page, url: string) => page.evaluate(async (u) => ((await (await fetch(`/api${u}`)).json()) as { data: unknown }).data, url) as Promise<T>;
+const apiGet = <T>(page: Page, url: string) =>
+  page.evaluate(async (u) => ((await (await fetch(`/api${u}`)).json()) as { data: unknown }).data, url) as Promise<T>;
 const idFromUrl = (page: Page) => page.url().split('?')[0].split('/').pop()!;
 
 describe('the main forms by keyboard alone', () => {
-  it('sign-in, invite, object and measurement, venue, channel, page and image details: filled and sent with keys only, focus always visible', async ({ onTestFailed }) => {
+  it('sign-in, invite, object and measurement, venue, channel, page and image details: filled and sent with keys only, focus always visible', async ({
+    onTestFailed,
+  }) => {
     const { context, page, errors, baseUrl } = await openBrowser();
     onTestFailed(() => screenshot(page, 'keyboard-forms-failed'));
     // Its own test address, so this form sign-in does not use up the allowance the other browser tests share.
@@ -120,7 +125,9 @@ describe('the main forms by keyboard alone', () => {
     await tabTo(page, measurementForm.getByRole('button', { name: 'Add measurement' }));
     await kb.press('Enter');
     await expect.poll(() => measurementForm.count()).toBe(0);
-    const measurements = await apiGet<Array<{ quantity: string; value: number; uncertainty: number | null; source: { id: string } | null }>>(page, `/catalogue/objects/${objectId}/measurements`);
+    const measurements = await apiGet<
+      Array<{ quantity: string; value: number; uncertainty: number | null; source: { id: string } | null }>
+    >(page, `/catalogue/objects/${objectId}/measurements`);
     expect(measurements).toHaveLength(1);
     expect(measurements[0]).toMatchObject({ quantity: 'redshift', value: 0.0019, uncertainty: 0.00015 });
     expect(measurements[0].source?.id).toBeTruthy();
@@ -144,7 +151,9 @@ describe('the main forms by keyboard alone', () => {
     await kb.type('210');
     await kb.press('Enter');
     await page.waitForURL(/\/venues\/[0-9a-f-]{36}$/);
-    expect(await apiGet<{ name: string; timeZone: string; elevationM: number }>(page, `/venues/${idFromUrl(page)}`)).toMatchObject({ name: `Kestrel Hill Dome ${stamp} (test)`, timeZone: 'Europe/London', elevationM: 210 });
+    expect(
+      await apiGet<{ name: string; timeZone: string; elevationM: number }>(page, `/venues/${idFromUrl(page)}`),
+    ).toMatchObject({ name: `Kestrel Hill Dome ${stamp} (test)`, timeZone: 'Europe/London', elevationM: 210 });
 
     // A channel at the demo venue.
     await page.goto(`${baseUrl}/publishing`);
@@ -176,7 +185,10 @@ describe('the main forms by keyboard alone', () => {
     const listbox = pageForm.getByRole('listbox');
     const matches = listbox.getByRole('option');
     /** Waits until every option listed matches the search (a whole name here, so the results have settled). */
-    const settled = (name: RegExp) => expect.poll(async () => (await matches.count()) > 0 && (await matches.allTextContents()).every((t) => name.test(t))).toBe(true);
+    const settled = (name: RegExp) =>
+      expect
+        .poll(async () => (await matches.count()) > 0 && (await matches.allTextContents()).every((t) => name.test(t)))
+        .toBe(true);
     await tabTo(page, pageForm.getByRole('searchbox'));
     await kb.type('Crab Nebula');
     await settled(/Crab Nebula/);
@@ -197,7 +209,10 @@ describe('the main forms by keyboard alone', () => {
     await tabTo(page, pageForm.getByRole('button', { name: 'Create and start writing' }));
     await kb.press('Enter');
     await page.waitForURL(/\/pages\/[0-9a-f-]{36}$/);
-    expect(await apiGet<{ title: string; object: { id: string } }>(page, `/pages/${idFromUrl(page)}`)).toMatchObject({ title: `Kestrel Cloud, written by keyboard ${stamp}`, object: { id: objectId } });
+    expect(await apiGet<{ title: string; object: { id: string } }>(page, `/pages/${idFromUrl(page)}`)).toMatchObject({
+      title: `Kestrel Cloud, written by keyboard ${stamp}`,
+      object: { id: objectId },
+    });
 
     // An image: chosen through the button (Enter opens the file chooser), then described in its panel.
     // Listening from before the page loads: Playwright takes over the file chooser asynchronously.
@@ -205,7 +220,11 @@ describe('the main forms by keyboard alone', () => {
     await page.goto(`${baseUrl}/media`);
     await tabTo(page, page.getByRole('button', { name: 'choose files' }));
     await kb.press('Enter');
-    await (await chooser).setFiles({ name: `kestrel-${stamp}.jpg`, mimeType: 'image/jpeg', buffer: await solidImage(1200, 800, '#243a5e') });
+    await (await chooser).setFiles({
+      name: `kestrel-${stamp}.jpg`,
+      mimeType: 'image/jpeg',
+      buffer: await solidImage(1200, 800, '#243a5e'),
+    });
     await tabTo(page, page.getByRole('button', { name: 'Describe it' }));
     await kb.press('Enter');
     const details = page.getByRole('form', { name: 'Image details' });
@@ -221,7 +240,12 @@ describe('the main forms by keyboard alone', () => {
     await kb.press('Enter');
     await expect.poll(() => details.getByRole('status').textContent()).toBe('Saved.');
     const mediaId = new URL(page.url()).searchParams.get('image')!;
-    expect(await apiGet<{ altText: string; credit: string; licence: { id: string } | null; sourceUrl: string }>(page, `/media/${mediaId}`)).toMatchObject({
+    expect(
+      await apiGet<{ altText: string; credit: string; licence: { id: string } | null; sourceUrl: string }>(
+        page,
+        `/media/${mediaId}`,
+      ),
+    ).toMatchObject({
       altText: 'A plain deep blue square with nothing else in it (test picture)',
       credit: 'Corrie Vale Planetarium (demo)',
       licence: { id: 'cc-by-4.0' },

@@ -9,12 +9,21 @@ describe('the kiosk player', () => {
   it('pairs with a code, plays slides with credit and licence, keeps playing through an outage, and returns to pairing when revoked', async () => {
     const { context, page, errors, baseUrl } = await openBrowser();
     const admin = await StaffClient.signIn(baseUrl, account('admin').email, account('admin').password);
-    const venue = (await admin.call<Array<{ id: string; name: string }>>('GET', '/venues')).find((v) => v.name === DEMO_VENUE.name)!;
+    const venue = (await admin.call<Array<{ id: string; name: string }>>('GET', '/venues')).find(
+      (v) => v.name === DEMO_VENUE.name,
+    )!;
     const image = await admin.uploadReadyImage('Corrie Vale Observatory (demo)', 'cc-by-sa-4.0');
     const channel = await admin.call<{ id: string }>('POST', '/channels', { venueId: venue.id, name: 'Player test loop' });
-    await admin.call('POST', `/channels/${channel.id}/slides`, { kind: 'image', mediaId: image, caption: 'A glowing cloud of gas (demo picture)', durationS: 5 });
+    await admin.call('POST', `/channels/${channel.id}/slides`, {
+      kind: 'image',
+      mediaId: image,
+      caption: 'A glowing cloud of gas (demo picture)',
+      durationS: 5,
+    });
     await admin.call('POST', `/channels/${channel.id}/slides`, { kind: 'sky_tonight', durationS: 5 });
-    const added = await admin.call<{ pairingCode: string; screen: { id: string } }>('POST', `/venues/${venue.id}/screens`, { name: 'Player test screen' });
+    const added = await admin.call<{ pairingCode: string; screen: { id: string } }>('POST', `/venues/${venue.id}/screens`, {
+      name: 'Player test screen',
+    });
     await admin.call('PUT', `/channels/${channel.id}/screens`, { screenIds: [added.screen.id] });
 
     await page.setViewportSize({ width: 1920, height: 1080 });
@@ -28,15 +37,23 @@ describe('the kiosk player', () => {
     await page.getByRole('button', { name: 'Pair this screen' }).click();
 
     const shownCredit = page.locator('.slide.shown .credit');
-    await expect.poll(() => shownCredit.textContent(), { timeout: 20_000 }).toBe('Image: Corrie Vale Observatory (demo) · CC BY-SA 4.0');
+    await expect
+      .poll(() => shownCredit.textContent(), { timeout: 20_000 })
+      .toBe('Image: Corrie Vale Observatory (demo) · CC BY-SA 4.0');
     await page.waitForTimeout(1700); // let the cross-fade finish before the picture is taken
     // Readable across a room: credit at least 20 px, caption at least 40 px (at 1920 × 1080).
     expect(parseFloat(await shownCredit.evaluate((el) => getComputedStyle(el).fontSize))).toBeGreaterThanOrEqual(20);
-    expect(parseFloat(await page.locator('.slide.shown .caption').evaluate((el) => getComputedStyle(el).fontSize))).toBeGreaterThanOrEqual(40);
+    expect(
+      parseFloat(await page.locator('.slide.shown .caption').evaluate((el) => getComputedStyle(el).fontSize)),
+    ).toBeGreaterThanOrEqual(40);
     await screenshot(page, 'kiosk-image-slide');
-    await expect.poll(() => page.locator('.slide.shown').getAttribute('class'), { timeout: 15_000 }).toContain('layout-sky-table');
+    await expect
+      .poll(() => page.locator('.slide.shown').getAttribute('class'), { timeout: 15_000 })
+      .toContain('layout-sky-table');
     await page.waitForTimeout(1700);
-    expect(parseFloat(await page.locator('.slide.shown h1').evaluate((el) => getComputedStyle(el).fontSize))).toBeGreaterThanOrEqual(64);
+    expect(
+      parseFloat(await page.locator('.slide.shown h1').evaluate((el) => getComputedStyle(el).fontSize)),
+    ).toBeGreaterThanOrEqual(64);
     await screenshot(page, 'kiosk-sky-slide');
 
     // The server stops answering: every request fails, as in a network outage.
@@ -58,7 +75,9 @@ describe('the kiosk player', () => {
     await context.unroute('**/api/**');
     await context.unroute('**/media/**');
     await admin.call('POST', `/venues/${venue.id}/screens/${added.screen.id}/revoke`);
-    await expect.poll(() => page.getByRole('heading', { name: 'Pair this screen' }).isVisible(), { timeout: 50_000, interval: 1000 }).toBe(true);
+    await expect
+      .poll(() => page.getByRole('heading', { name: 'Pair this screen' }).isVisible(), { timeout: 50_000, interval: 1000 })
+      .toBe(true);
     expect(await page.getByText(/pairing was revoked/).count()).toBe(1);
     await screenshot(page, 'kiosk-revoked');
     expect(errors.filter((e) => !/Failed to load resource|ERR_INTERNET_DISCONNECTED|ERR_FAILED/.test(e))).toEqual([]);
@@ -80,7 +99,9 @@ describe('the kiosk player', () => {
     await page.keyboard.press('Enter');
     await expect.poll(() => slides.nth(1).locator('p.font-medium').textContent()).toBe(firstTitle);
     // Focus follows the moved slide (to its Move up button once it is last), so a keyboard user can keep moving it.
-    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toMatch(new RegExp(`^Move “${firstTitle!.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}” (up|down)$`));
+    expect(await page.evaluate(() => document.activeElement?.getAttribute('aria-label'))).toMatch(
+      new RegExp(`^Move “${firstTitle!.replace(/[.*+?^${}()|[\]\\]/g, '\\$&')}” (up|down)$`),
+    );
     const frame = page.frameLocator('iframe[title="Live preview of the kiosk player"]');
     await expect.poll(() => frame.locator('.slide.shown').count(), { timeout: 15_000 }).toBe(1);
     await page.waitForTimeout(1700);

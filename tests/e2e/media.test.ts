@@ -9,7 +9,10 @@ const writer = DEMO_ACCOUNTS.find((a) => a.role === 'writer')!;
 
 /** A made-up star field: dark sky, a glow, a few stars (drawn by sharp, no outside imagery). */
 async function starField(): Promise<Buffer> {
-  const stars = Array.from({ length: 60 }, (_, i) => `<circle cx="${(i * 97) % 1600}" cy="${(i * 53) % 900}" r="${1 + (i % 3)}" fill="#fff"/>`).join('');
+  const stars = Array.from(
+    { length: 60 },
+    (_, i) => `<circle cx="${(i * 97) % 1600}" cy="${(i * 53) % 900}" r="${1 + (i % 3)}" fill="#fff"/>`,
+  ).join('');
   const svg = `<svg xmlns="http://www.w3.org/2000/svg" width="1600" height="900"><rect width="1600" height="900" fill="#05070d"/>
     <radialGradient id="g"><stop offset="0" stop-color="#c86b9a" stop-opacity="0.9"/><stop offset="1" stop-color="#05070d" stop-opacity="0"/></radialGradient>
     <ellipse cx="1100" cy="420" rx="380" ry="240" fill="url(#g)"/>${stars}</svg>`;
@@ -37,7 +40,12 @@ describe('the media library, as a writer uses it', () => {
     await page.getByTestId('drop-zone').dispatchEvent('drop', { dataTransfer });
 
     const uploads = page.getByRole('list', { name: 'Uploads' });
-    await expect.poll(() => uploads.getByRole('progressbar', { name: 'Upload of orion-wide-field.jpg' }).getAttribute('aria-valuenow'), WAIT).toBe('100');
+    await expect
+      .poll(
+        () => uploads.getByRole('progressbar', { name: 'Upload of orion-wide-field.jpg' }).getAttribute('aria-valuenow'),
+        WAIT,
+      )
+      .toBe('100');
     await expect.poll(() => uploads.getByRole('alert').textContent(), WAIT).toMatch(/not an image Starproof can read/);
     await expect.poll(() => page.getByRole('list', { name: 'Images' }).getByRole('button').count(), WAIT).toBe(before + 1);
     await screenshot(page, 'media-uploaded');
@@ -46,7 +54,9 @@ describe('the media library, as a writer uses it', () => {
     const panel = page.getByRole('dialog');
     await expect.poll(() => panel.getByRole('heading', { name: 'orion-wide-field.jpg' }).count(), WAIT).toBe(1);
     // The thumbnail grid card says what is missing, in words.
-    await expect.poll(() => page.getByRole('list', { name: 'Images' }).textContent(), WAIT).toMatch(/Needs alt text|Making renditions/);
+    await expect
+      .poll(() => page.getByRole('list', { name: 'Images' }).textContent(), WAIT)
+      .toMatch(/Needs alt text|Making renditions/);
 
     const form = panel.getByRole('form', { name: 'Image details' });
     await form.getByLabel('Source web address').fill('not a web address');

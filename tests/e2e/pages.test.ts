@@ -19,7 +19,11 @@ async function signInAs(page: BrowserPage, baseUrl: string, role: string) {
 async function apiCall<T>(page: BrowserPage, method: string, url: string, body?: unknown): Promise<T> {
   return page.evaluate(
     async ({ method, url, body }) => {
-      const res = await fetch(`/api${url}`, { method, headers: { 'Content-Type': 'application/json' }, body: body === undefined ? undefined : JSON.stringify(body) });
+      const res = await fetch(`/api${url}`, {
+        method,
+        headers: { 'Content-Type': 'application/json' },
+        body: body === undefined ? undefined : JSON.stringify(body),
+      });
       return res.json();
     },
     { method, url, body },
@@ -55,15 +59,23 @@ describe('object pages, from writing to re-check', () => {
 
     // A first statement from the toolbar.
     await page.getByRole('button', { name: 'Insert statement' }).click();
-    await page.getByRole('dialog', { name: 'Insert a statement' }).getByRole('button', { name: /Distance today in light-years/ }).click();
+    await page
+      .getByRole('dialog', { name: 'Insert a statement' })
+      .getByRole('button', { name: /Distance today in light-years/ })
+      .click();
     await expect.poll(() => page.locator('.page-prose [data-statement-id]').count()).toBe(1);
 
     // The hand-typed number becomes the second statement.
     await panel.getByRole('button', { name: 'Make it a statement' }).click();
-    await page.getByRole('dialog', { name: 'Insert a statement' }).getByRole('button', { name: /When its light set out/ }).click();
+    await page
+      .getByRole('dialog', { name: 'Insert a statement' })
+      .getByRole('button', { name: /When its light set out/ })
+      .click();
     await expect.poll(() => page.locator('.page-prose [data-statement-id]').count()).toBe(2);
     await expect.poll(() => page.locator('.page-prose .number-flag').count()).toBe(0);
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'All changes saved' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'All changes saved' }).count(), { timeout: 15_000 })
+      .toBe(1);
     await screenshot(page, 'pages-editor-statements');
 
     await page.getByRole('button', { name: 'Submit for review' }).click();
@@ -98,16 +110,31 @@ describe('object pages, from writing to re-check', () => {
     await signInAs(page, baseUrl, 'reviewer');
     const objects = await apiCall<{ data: { rows: Array<{ id: string }> } }>(page, 'GET', '/catalogue/objects?q=3C%2048');
     const objectId = objects.data.rows[0].id;
-    const measurements = await apiCall<{ data: Array<{ id: string; quantity: string; preferred: boolean; source: { id: string } | null }> }>(page, 'GET', `/catalogue/objects/${objectId}/measurements`);
+    const measurements = await apiCall<{
+      data: Array<{ id: string; quantity: string; preferred: boolean; source: { id: string } | null }>;
+    }>(page, 'GET', `/catalogue/objects/${objectId}/measurements`);
     const oldZ = measurements.data.find((m) => m.quantity === 'redshift' && m.preferred)!;
-    const added = await apiCall<{ data: { id: string } }>(page, 'POST', `/catalogue/objects/${objectId}/measurements`, { quantity: 'redshift', value: 0.45, unit: '', uncertainty: 0.001, sourceId: oldZ.source!.id });
+    const added = await apiCall<{ data: { id: string } }>(page, 'POST', `/catalogue/objects/${objectId}/measurements`, {
+      quantity: 'redshift',
+      value: 0.45,
+      unit: '',
+      uncertainty: 0.001,
+      sourceId: oldZ.source!.id,
+    });
     await apiCall(page, 'PUT', `/catalogue/measurements/${added.data.id}/preferred`, { preferred: true, replaces: oldZ.id });
 
     await expect
-      .poll(async () => {
-        await page.goto(`${baseUrl}/pages/${pageId}/review`);
-        return page.getByRole('heading', { level: 1 }).first().textContent().then(() => page.getByText('Needs re-check').count());
-      }, { timeout: 30_000, interval: 2000 })
+      .poll(
+        async () => {
+          await page.goto(`${baseUrl}/pages/${pageId}/review`);
+          return page
+            .getByRole('heading', { level: 1 })
+            .first()
+            .textContent()
+            .then(() => page.getByText('Needs re-check').count());
+        },
+        { timeout: 30_000, interval: 2000 },
+      )
       .toBeGreaterThan(0);
     await expect.poll(() => page.getByText('Signed off (live now)').count()).toBeGreaterThan(0);
     await expect.poll(() => page.getByText('New wording').count()).toBeGreaterThan(0);
@@ -116,7 +143,9 @@ describe('object pages, from writing to re-check', () => {
     expect(after.data.html).toBe(before);
 
     await page.goto(`${baseUrl}/`);
-    await expect.poll(() => page.getByRole('region', { name: 'Pages needing a re-check' }).textContent()).toMatch(/The quasar 3C 48/);
+    await expect
+      .poll(() => page.getByRole('region', { name: 'Pages needing a re-check' }).textContent())
+      .toMatch(/The quasar 3C 48/);
     await screenshot(page, 'pages-dashboard-reviewer');
     expect(errors).toEqual([]);
   }, 240_000);
@@ -139,13 +168,19 @@ describe('object pages, from writing to re-check', () => {
         const data = new DataTransfer();
         data.setData('text/html', h);
         data.setData('text/plain', h.replace(/<[^>]+>/g, ''));
-        document.querySelector('.page-prose')!.dispatchEvent(new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }));
+        document
+          .querySelector('.page-prose')!
+          .dispatchEvent(new ClipboardEvent('paste', { clipboardData: data, bubbles: true, cancelable: true }));
       }, html);
     }
-    await expect.poll(() => page.getByRole('status').filter({ hasText: 'All changes saved' }).count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(() => page.getByRole('status').filter({ hasText: 'All changes saved' }).count(), { timeout: 15_000 })
+      .toBe(1);
     const saved = await apiCall<{ data: { doc: unknown } }>(page, 'GET', `/pages/${pageId}`);
     const json = JSON.stringify(saved.data.doc);
-    const first = (saved.data.doc as { content: Array<{ type: string; attrs?: { level?: number }; content?: Array<{ text?: string }> }> }).content[0];
+    const first = (
+      saved.data.doc as { content: Array<{ type: string; attrs?: { level?: number }; content?: Array<{ text?: string }> }> }
+    ).content[0];
     expect([first.type, first.attrs?.level, first.content?.[0]?.text]).toEqual(['heading', 2, 'Vega at a glance']);
     expect(json).toContain('"type":"bold"');
     expect(json).toContain('"type":"italic"');
@@ -156,6 +191,11 @@ describe('object pages, from writing to re-check', () => {
     await screenshot(page, 'pages-pasted');
     // The browser reports the pasted event handlers it refused under our Content-Security-Policy;
     // those are the only console messages allowed here, and none of the handlers ran (checked above).
-    expect(errors.filter((e) => !/Executing inline event handler violates the following Content Security Policy.*The action has been blocked/.test(e))).toEqual([]);
+    expect(
+      errors.filter(
+        (e) =>
+          !/Executing inline event handler violates the following Content Security Policy.*The action has been blocked/.test(e),
+      ),
+    ).toEqual([]);
   });
 });

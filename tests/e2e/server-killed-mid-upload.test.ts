@@ -15,7 +15,9 @@ async function bigPhoto(): Promise<Buffer> {
   const height = 2000;
   const raw = Buffer.alloc(width * height * 3);
   for (let i = 0; i < raw.length; i += 1) raw[i] = Math.imul(i, 2654435761) >>> 24;
-  return sharp(raw, { raw: { width, height, channels: 3 } }).jpeg({ quality: 95 }).toBuffer();
+  return sharp(raw, { raw: { width, height, channels: 3 } })
+    .jpeg({ quality: 95 })
+    .toBuffer();
 }
 
 /**
@@ -25,11 +27,17 @@ async function bigPhoto(): Promise<Buffer> {
  */
 function startSlowUpload(baseUrl: string, cookie: string, image: Buffer, fileName: string) {
   const boundary = `starproof-${Date.now()}`;
-  const head = Buffer.from(`--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="${fileName}"\r\nContent-Type: image/jpeg\r\n\r\n`);
+  const head = Buffer.from(
+    `--${boundary}\r\nContent-Disposition: form-data; name="file"; filename="${fileName}"\r\nContent-Type: image/jpeg\r\n\r\n`,
+  );
   const tail = Buffer.from(`\r\n--${boundary}--\r\n`);
   const req = http.request(`${baseUrl}/api/media`, {
     method: 'POST',
-    headers: { Cookie: cookie, 'Content-Type': `multipart/form-data; boundary=${boundary}`, 'Content-Length': head.length + image.length + tail.length },
+    headers: {
+      Cookie: cookie,
+      'Content-Type': `multipart/form-data; boundary=${boundary}`,
+      'Content-Length': head.length + image.length + tail.length,
+    },
   });
   const answered: number[] = [];
   req.on('error', () => undefined);
@@ -40,7 +48,10 @@ function startSlowUpload(baseUrl: string, cookie: string, image: Buffer, fileNam
 }
 
 /** Temporary files under uploads/tmp, with their sizes. */
-const tmpFiles = (root: string) => storedFiles(root).filter((f) => f.startsWith(`tmp${path.sep}`)).map((f) => ({ f, size: fs.statSync(path.join(root, f)).size }));
+const tmpFiles = (root: string) =>
+  storedFiles(root)
+    .filter((f) => f.startsWith(`tmp${path.sep}`))
+    .map((f) => ({ f, size: fs.statSync(path.join(root, f)).size }));
 
 const db = new pg.Client({ connectionString: inject('e2eDatabaseUrl') });
 const servers: ServerProcess[] = [];
@@ -81,7 +92,9 @@ describe('a server killed in the middle of an upload', () => {
     expect(fs.readdirSync(path.join(uploadsDir, 'tmp'))).toEqual([]);
     const rows = await db.query('SELECT count(*)::int AS n FROM media WHERE file_name = $1', [fileName]);
     expect(rows.rows[0].n).toBe(0);
-    const notes = await db.query('SELECT count(*)::int AS n FROM media_file_intents WHERE owner LIKE $1', [`%\\_${killedPid}\\_%`]);
+    const notes = await db.query('SELECT count(*)::int AS n FROM media_file_intents WHERE owner LIKE $1', [
+      `%\\_${killedPid}\\_%`,
+    ]);
     expect(notes.rows[0].n).toBe(0);
 
     // The restarted server works: the same session reads the library, and the image is not in it.

@@ -11,7 +11,10 @@ describe('checked statements in the browser', () => {
     await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
     await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Statements' }).click();
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe('Statements');
-    await page.getByRole('link', { name: /TON 618 set out about/ }).first().click();
+    await page
+      .getByRole('link', { name: /TON 618 set out about/ })
+      .first()
+      .click();
     await expect.poll(() => page.getByRole('heading', { name: 'Public wording', exact: true }).count()).toBe(1);
     await expect.poll(() => page.getByText('Worked out with the Planck 2018').count()).toBeGreaterThan(0);
     await expect.poll(() => page.getByRole('heading', { name: 'Working', exact: true }).count()).toBe(1);
@@ -24,7 +27,10 @@ describe('checked statements in the browser', () => {
     const { context, page, errors, baseUrl } = await openBrowser();
     const writer = await demoSession(baseUrl, 'writer');
     await useSessionInBrowser(context, baseUrl, writer);
-    const found = ok(await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Mars'), 'find Mars').body.data.rows;
+    const found = ok(
+      await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Mars'),
+      'find Mars',
+    ).body.data.rows;
     await page.goto(`${baseUrl}/catalogue/${found.find((o) => o.name === 'Mars')!.id}`);
     await page.getByLabel('Add a statement').selectOption({ label: 'How long a planet’s light takes to reach us tonight' });
     const venue = page.getByLabel('Venue whose night it is');
@@ -60,11 +66,14 @@ describe('checked statements in the browser', () => {
     const first = page.getByRole('link', { name: /3C 279/ }).first();
     // The recompute runs in the background and the list does not refresh itself: look again until it is done.
     await expect
-      .poll(async () => {
-        await page.goto(`${baseUrl}/statements?status=changed`);
-        await page.waitForLoadState('networkidle');
-        return first.count();
-      }, { timeout: 90_000, interval: 1000 })
+      .poll(
+        async () => {
+          await page.goto(`${baseUrl}/statements?status=changed`);
+          await page.waitForLoadState('networkidle');
+          return first.count();
+        },
+        { timeout: 90_000, interval: 1000 },
+      )
       .toBeGreaterThan(0);
     await first.click();
     await expect.poll(() => page.getByText('Accepted wording (on pages now)').count()).toBeGreaterThan(0);

@@ -27,11 +27,17 @@ describe('venues, kiosk screens and the sky tonight', () => {
     await dialog.getByRole('button', { name: 'Done' }).click();
     await expect.poll(() => page.getByText(code!).count()).toBe(0);
 
-    await page.getByRole('listitem').filter({ hasText: 'Dome entrance screen (demo)' }).getByRole('button', { name: 'Revoke' }).click();
+    await page
+      .getByRole('listitem')
+      .filter({ hasText: 'Dome entrance screen (demo)' })
+      .getByRole('button', { name: 'Revoke' })
+      .click();
     const confirm = page.getByRole('dialog', { name: 'Revoke Dome entrance screen (demo)?' });
     await screenshot(page, 'venue-revoke-confirm');
     await confirm.getByRole('button', { name: 'Revoke screen' }).click();
-    await expect.poll(() => page.getByRole('listitem').filter({ hasText: 'Dome entrance screen (demo)' }).textContent()).toMatch(/Revoked/);
+    await expect
+      .poll(() => page.getByRole('listitem').filter({ hasText: 'Dome entrance screen (demo)' }).textContent())
+      .toMatch(/Revoked/);
     expect(errors).toEqual([]);
   });
 

@@ -24,7 +24,10 @@ export default async function setup(project: TestProject) {
   // A server that dies under a test (an outage, a bug) says why, instead of tests failing with "fetch failed".
   let stopping = false;
   server.child.once('exit', (code, signal) => {
-    if (!stopping) console.error(`\nThe e2e server stopped unexpectedly (${signal ?? code}). Its last output:\n${server.output().slice(-20_000)}`);
+    if (!stopping)
+      console.error(
+        `\nThe e2e server stopped unexpectedly (${signal ?? code}). Its last output:\n${server.output().slice(-20_000)}`,
+      );
   });
   project.provide('baseUrl', server.baseUrl);
   project.provide('e2eDatabaseUrl', url);

@@ -1,5 +1,11 @@
 import path from 'node:path';
-import { ensureDatabase, isRunning, localDatabaseUrl, startLocalPostgres, stopLocalPostgres } from '../../server/db/local-postgres.ts';
+import {
+  ensureDatabase,
+  isRunning,
+  localDatabaseUrl,
+  startLocalPostgres,
+  stopLocalPostgres,
+} from '../../server/db/local-postgres.ts';
 
 /** The test cluster: its own folder and port, never the development data. */
 export const TEST_CLUSTER = {

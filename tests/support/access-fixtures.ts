@@ -19,16 +19,29 @@ export const CALLERS: Caller[] = ['anonymous', 'kiosk', 'writer', 'reviewer', 'e
  */
 export async function buildAccessWorld() {
   const roles: Role[] = ['writer', 'reviewer', 'editor', 'admin'];
-  const signed = Object.fromEntries(await Promise.all(roles.map(async (r) => [r, await signedInAgent(r)] as const))) as Record<Role, Signed>;
+  const signed = Object.fromEntries(await Promise.all(roles.map(async (r) => [r, await signedInAgent(r)] as const))) as Record<
+    Role,
+    Signed
+  >;
   const owner = await signedInAgent('writer');
   const target = await signedInAgent('writer');
   const quasar = await quasarWithStatements(owner.agent, owner.user);
   const object = quasar.object;
   const source = await buildSource({ citation: 'Access matrix test values (invented)' });
   const measurement = await buildMeasurement(object.id, { sourceId: source.id, quantity: 'parallax', value: 1.5 });
-  const page = await pageWithBody(owner.agent, object.id, doc(paragraph(text('An unsubmitted draft of another writer.'))), 'Another writer’s draft');
+  const page = await pageWithBody(
+    owner.agent,
+    object.id,
+    doc(paragraph(text('An unsubmitted draft of another writer.'))),
+    'Another writer’s draft',
+  );
   // A second page, submitted for review, for the routes that only act on a page in review.
-  const inReview = await pageWithBody(owner.agent, object.id, doc(paragraph(text('A page in review. '), statement(quasar.distanceId))), 'A page in review');
+  const inReview = await pageWithBody(
+    owner.agent,
+    object.id,
+    doc(paragraph(text('A page in review. '), statement(quasar.distanceId))),
+    'A page in review',
+  );
   const submitted = await owner.agent.post(`/api/pages/${inReview.id}/submit`).send({ version: inReview.version });
   if (submitted.status !== 200) throw new Error(`submit: ${JSON.stringify(submitted.body)}`);
   const media = await buildMedia(owner.user);
@@ -114,7 +127,9 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'POST /api/calc': { body: { z: { value: 0.158 } } },
     'POST /api/pages': { body: { title: 'Access matrix page', objectId: ids.object, locale: 'en-GB' } },
     'PUT /api/pages/digest': { body: { enabled: false } },
-    'PUT /api/pages/:id': { body: { version: pageVersion, title: 'Another writer’s draft', doc: { type: 'doc', content: [{ type: 'paragraph' }] } } },
+    'PUT /api/pages/:id': {
+      body: { version: pageVersion, title: 'Another writer’s draft', doc: { type: 'doc', content: [{ type: 'paragraph' }] } },
+    },
     'POST /api/pages/:id/send-back': { body: { comment: 'Please check the distance.' } },
     'POST /api/pages/:id/signoffs/statements': { body: { statementId: ids.statement } },
     'POST /api/pages/:id/flags': { body: { text: '42', reason: 'It is a catalogue number, not a measurement.' } },
@@ -128,8 +143,12 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'PUT /api/settings/cosmology': { body: { model: { preset: 'planck18' }, expectedVersion: 999 } },
     'GET /api/media/object-suggestions': { query: 'q=gal' },
     'PATCH /api/media/:id': { body: { altText: 'A glowing cloud of gas (access matrix test image)' } },
-    'POST /api/catalogue/objects': { body: { name: `Access matrix object ${randomUUID().slice(0, 8)}`, kind: 'galaxy', ra: '12 29 06.7', dec: '+02 03 09' } },
-    'PATCH /api/catalogue/objects/:id': { body: { name: `Access matrix quasar ${randomUUID().slice(0, 8)}`, kind: 'quasar', ra: '12 29 06.7', dec: '+02 03 09' } },
+    'POST /api/catalogue/objects': {
+      body: { name: `Access matrix object ${randomUUID().slice(0, 8)}`, kind: 'galaxy', ra: '12 29 06.7', dec: '+02 03 09' },
+    },
+    'PATCH /api/catalogue/objects/:id': {
+      body: { name: `Access matrix quasar ${randomUUID().slice(0, 8)}`, kind: 'quasar', ra: '12 29 06.7', dec: '+02 03 09' },
+    },
     'POST /api/catalogue/objects/:id/measurements': { body: { quantity: 'redshift', value: '0.01', sourceId: ids.source } },
     'PATCH /api/catalogue/measurements/:id': { body: { quantity: 'redshift', value: '0.01', sourceId: ids.source } },
     'PUT /api/catalogue/measurements/:id/preferred': { body: { preferred: true } },
@@ -137,7 +156,15 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'DELETE /api/catalogue/measurements/:id': { query: 'reason=Superseded+by+a+newer+value' },
     'POST /api/catalogue/sources': { body: { citation: `Access matrix source ${randomUUID().slice(0, 8)}` } },
     'PATCH /api/catalogue/sources/:id': { body: { citation: 'Access matrix test values (invented)' } },
-    'POST /api/venues': { body: { name: `Access matrix venue ${randomUUID().slice(0, 8)}`, latitude: 54.6, longitude: -2.9, elevationM: 100, timeZone: 'Europe/London' } },
+    'POST /api/venues': {
+      body: {
+        name: `Access matrix venue ${randomUUID().slice(0, 8)}`,
+        latitude: 54.6,
+        longitude: -2.9,
+        elevationM: 100,
+        timeZone: 'Europe/London',
+      },
+    },
     'PATCH /api/venues/:id': { body: { elevationM: 120 } },
     'POST /api/venues/:venueId/screens': { body: { name: 'Access matrix screen' } },
     'POST /api/kiosk/heartbeat': { body: { screenId: ids.screen } },

@@ -35,14 +35,17 @@ export async function resetDatabase(): Promise<void> {
     "SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'schema_migrations'",
     { type: QueryTypes.SELECT },
   );
-  if (tables.length) await getSequelize().query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`);
+  if (tables.length)
+    await getSequelize().query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`);
 }
 
 export const TEST_PASSWORD = 'glass-telescope-42';
 
 let counter = 0;
 /** Creates a user who can sign in with TEST_PASSWORD. */
-export async function buildUser(overrides: Partial<{ role: Role; email: string; name: string; active: boolean; password: string | null }> = {}) {
+export async function buildUser(
+  overrides: Partial<{ role: Role; email: string; name: string; active: boolean; password: string | null }> = {},
+) {
   counter += 1;
   const password = overrides.password === undefined ? TEST_PASSWORD : overrides.password;
   return User.create({

@@ -16,7 +16,15 @@ export async function openBrowser(): Promise<{ context: BrowserContext; page: Pa
     executablePath: CHROMIUM,
     headless: true,
     viewport: { width: 1280, height: 860 },
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
   const page = context.pages()[0] ?? (await context.newPage());
   const errors: string[] = [];

@@ -3,7 +3,15 @@ import { Measurement, SkyObject, Source } from '../../server/models/index.ts';
 let counter = 0;
 
 /** Creates an object directly in the database (constellation left to the API tests that check it). */
-export async function buildSkyObject(overrides: Partial<{ name: string; kind: SkyObject['kind']; raDeg: number | null; decDeg: number | null; designations: string[] }> = {}) {
+export async function buildSkyObject(
+  overrides: Partial<{
+    name: string;
+    kind: SkyObject['kind'];
+    raDeg: number | null;
+    decDeg: number | null;
+    designations: string[];
+  }> = {},
+) {
   counter += 1;
   return SkyObject.create({
     name: overrides.name ?? `Test Object ${counter}-${Date.now()}`,
@@ -31,7 +39,10 @@ export async function buildSource(overrides: Partial<{ citation: string; bibcode
 }
 
 /** Creates an accepted measurement directly (history is the services' job; tests of history go through the API). */
-export async function buildMeasurement(objectId: string, overrides: Partial<{ quantity: string; band: string | null; value: number; sourceId: string | null; preferred: boolean }> = {}) {
+export async function buildMeasurement(
+  objectId: string,
+  overrides: Partial<{ quantity: string; band: string | null; value: number; sourceId: string | null; preferred: boolean }> = {},
+) {
   return Measurement.create({
     objectId,
     quantity: overrides.quantity ?? 'redshift',

@@ -6,7 +6,11 @@ let addressCounter = 0;
 /** A signed-in API session against the e2e server, from Node (no Origin header, as any non-browser client). */
 export interface E2eSession {
   cookie: string;
-  call<T = { data: unknown; error?: { code: string; message: string } }>(method: string, path: string, body?: unknown): Promise<{ status: number; body: T }>;
+  call<T = { data: unknown; error?: { code: string; message: string } }>(
+    method: string,
+    path: string,
+    body?: unknown,
+  ): Promise<{ status: number; body: T }>;
   upload(file: Buffer, fileName: string): Promise<{ status: number; body: { data: { id: string } } }>;
 }
 
@@ -27,7 +31,11 @@ export async function demoSession(baseUrl: string, role: 'admin' | 'editor' | 'r
   if (res.status !== 200) throw new Error(`sign-in as ${role}: ${res.status} ${await res.text()}`);
   const cookie = /starproof\.sid=[^;]+/.exec(res.headers.get('set-cookie') ?? '')![0];
   const call: E2eSession['call'] = async (method, path, body) => {
-    const r = await fetch(`${baseUrl}${path}`, { method, headers: { Cookie: cookie, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) }, body: body === undefined ? undefined : JSON.stringify(body) });
+    const r = await fetch(`${baseUrl}${path}`, {
+      method,
+      headers: { Cookie: cookie, ...(body === undefined ? {} : { 'Content-Type': 'application/json' }) },
+      body: body === undefined ? undefined : JSON.stringify(body),
+    });
     const text = await r.text();
     return { status: r.status, body: text ? JSON.parse(text) : undefined } as never;
   };
@@ -60,10 +68,20 @@ export function ok<T extends { status: number; body: unknown }>(res: T, what: st
 export async function readyImage(session: E2eSession, image: Buffer, credit: string, licenceId = 'cc-by-4.0'): Promise<string> {
   const id = ok(await session.upload(image, 'demo-picture.jpg'), 'upload').body.data.id;
   const deadline = Date.now() + 60_000;
-  while ((await session.call<{ data: { renditionsStatus: string } }>('GET', `/api/media/${id}`)).body.data.renditionsStatus !== 'ready') {
+  while (
+    (await session.call<{ data: { renditionsStatus: string } }>('GET', `/api/media/${id}`)).body.data.renditionsStatus !== 'ready'
+  ) {
     if (Date.now() > deadline) throw new Error(`renditions of ${id} not ready after 60 s`);
     await new Promise((r) => setTimeout(r, 300));
   }
-  ok(await session.call('PATCH', `/api/media/${id}`, { altText: 'A dark blue field with a soft glow (demo picture)', credit, licenceId, sourceUrl: 'https://example.org/demo-picture' }), 'image details');
+  ok(
+    await session.call('PATCH', `/api/media/${id}`, {
+      altText: 'A dark blue field with a soft glow (demo picture)',
+      credit,
+      licenceId,
+      sourceUrl: 'https://example.org/demo-picture',
+    }),
+    'image details',
+  );
   return id;
 }

@@ -6,8 +6,15 @@ import type { Agent } from 'supertest';
 import { config } from '../../server/config.ts';
 
 /** Solid colour image of the given size in a format, made by sharp (no files on disk). */
-export async function solidImage(width: number, height: number, colour: string, format: 'jpeg' | 'png' | 'webp' = 'jpeg'): Promise<Buffer> {
-  return sharp({ create: { width, height, channels: 3, background: colour } })[format]().toBuffer();
+export async function solidImage(
+  width: number,
+  height: number,
+  colour: string,
+  format: 'jpeg' | 'png' | 'webp' = 'jpeg',
+): Promise<Buffer> {
+  return sharp({ create: { width, height, channels: 3, background: colour } })
+    [format]()
+    .toBuffer();
 }
 
 /** A photo-like JPEG with a gradient, an EXIF orientation of 6 (rotate 90° clockwise), a camera model and a GPS position. */
@@ -41,18 +48,26 @@ export async function halvesImage(width = 4000, height = 1000): Promise<Buffer> 
 
 /** A CMYK JPEG of a strong red. */
 export async function cmykJpeg(): Promise<Buffer> {
-  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#d01010' } }).toColourspace('cmyk').jpeg().toBuffer();
+  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#d01010' } })
+    .toColourspace('cmyk')
+    .jpeg()
+    .toBuffer();
 }
 
 /** A 16-bit-per-channel PNG of a mid blue. */
 export async function png16(): Promise<Buffer> {
-  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#2050c0' } }).toColourspace('rgb16').png().toBuffer();
+  return sharp({ create: { width: 640, height: 480, channels: 3, background: '#2050c0' } })
+    .toColourspace('rgb16')
+    .png()
+    .toBuffer();
 }
 
 /** An animated image of two frames (GIF or WebP). */
 export async function animated(format: 'gif' | 'webp'): Promise<Buffer> {
   const frames = await Promise.all(['#ffffff', '#000000'].map((c) => solidImage(64, 64, c, 'png')));
-  return sharp(frames, { join: { animated: true } })[format]({ delay: [100, 100], loop: 0 }).toBuffer();
+  return sharp(frames, { join: { animated: true } })
+    [format]({ delay: [100, 100], loop: 0 })
+    .toBuffer();
 }
 
 function chunk(type: string, data: Buffer): Buffer {
@@ -87,13 +102,18 @@ export function upload(agent: Agent, data: Buffer, fileName: string, fields: Rec
   let req = agent.post('/api/media');
   for (const [k, v] of Object.entries(fields)) req = req.field(k, v);
   // `filepath` makes form-data send the name as given (with `filename` it would keep only the base name).
-  return req.attach('file', data, { filepath: fileName, contentType: 'application/octet-stream' } as unknown as { filename: string });
+  return req.attach('file', data, { filepath: fileName, contentType: 'application/octet-stream' } as unknown as {
+    filename: string;
+  });
 }
 
 /** Every file under the uploads folder (originals, renditions, tmp), relative to it. */
 export function storedFiles(root = config.uploadsDir): string[] {
   if (!fs.existsSync(root)) return [];
-  return fs.readdirSync(root, { recursive: true, withFileTypes: true }).filter((e) => e.isFile() && e.name !== '.gitkeep').map((e) => path.relative(root, path.join(e.parentPath, e.name)));
+  return fs
+    .readdirSync(root, { recursive: true, withFileTypes: true })
+    .filter((e) => e.isFile() && e.name !== '.gitkeep')
+    .map((e) => path.relative(root, path.join(e.parentPath, e.name)));
 }
 
 /** Empties the uploads folder this run uses (UPLOADS_DIR; never the development uploads/ when it is set). */

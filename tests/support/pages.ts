@@ -16,11 +16,18 @@ export async function quasarWithStatements(agent: Agent, creator: User) {
   );
   const distance = await agent.post('/api/statements').send({ objectId: built.object.id, templateId: 'distance-today' });
   const nakedEye = await agent.post('/api/statements').send({ objectId: built.object.id, templateId: 'naked-eye' });
-  if (distance.status >= 300 || nakedEye.status >= 300) throw new Error(`statements not created: ${JSON.stringify(distance.body)} ${JSON.stringify(nakedEye.body)}`);
-  return { ...built, distanceId: distance.body.data.id as string, nakedEyeId: nakedEye.body.data.id as string, distanceText: distance.body.data.texts['en-GB'] as string };
+  if (distance.status >= 300 || nakedEye.status >= 300)
+    throw new Error(`statements not created: ${JSON.stringify(distance.body)} ${JSON.stringify(nakedEye.body)}`);
+  return {
+    ...built,
+    distanceId: distance.body.data.id as string,
+    nakedEyeId: nakedEye.body.data.id as string,
+    distanceText: distance.body.data.texts['en-GB'] as string,
+  };
 }
 
-export const text = (t: string, marks?: JSONContent['marks']): JSONContent => (marks ? { type: 'text', text: t, marks } : { type: 'text', text: t });
+export const text = (t: string, marks?: JSONContent['marks']): JSONContent =>
+  marks ? { type: 'text', text: t, marks } : { type: 'text', text: t };
 export const statement = (statementId: string): JSONContent => ({ type: 'statementRef', attrs: { statementId } });
 export const paragraph = (...content: JSONContent[]): JSONContent => ({ type: 'paragraph', content });
 export const doc = (...content: JSONContent[]): JSONContent => ({ type: 'doc', content });
@@ -29,7 +36,9 @@ export const doc = (...content: JSONContent[]): JSONContent => ({ type: 'doc', c
 export async function pageWithBody(agent: Agent, objectId: string, body: JSONContent, title = 'A page for checks') {
   const created = await agent.post('/api/pages').send({ title, objectId, locale: 'en-GB' });
   if (created.status !== 201) throw new Error(`page not created: ${JSON.stringify(created.body)}`);
-  const saved = await agent.put(`/api/pages/${created.body.data.id}`).send({ version: created.body.data.version, title, doc: body });
+  const saved = await agent
+    .put(`/api/pages/${created.body.data.id}`)
+    .send({ version: created.body.data.version, title, doc: body });
   if (saved.status !== 200) throw new Error(`page not saved: ${JSON.stringify(saved.body)}`);
   return saved.body.data as { id: string; version: number; status: string };
 }
@@ -52,6 +61,14 @@ export async function buildMedia(uploader: User, complete = true) {
     renditionsStatus: 'ready',
     uploadedById: uploader.id,
   });
-  await MediaRendition.create({ mediaId: media.id, name: 'page', format: 'jpeg', width: 800, height: 600, bytes: 900, storageKey: `renditions/${'a'.repeat(63)}${sha.slice(0, 1)}.jpg` });
+  await MediaRendition.create({
+    mediaId: media.id,
+    name: 'page',
+    format: 'jpeg',
+    width: 800,
+    height: 600,
+    bytes: 900,
+    storageKey: `renditions/${'a'.repeat(63)}${sha.slice(0, 1)}.jpg`,
+  });
   return media;
 }

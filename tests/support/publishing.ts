@@ -10,7 +10,10 @@ let n = 0;
 const hex = (seed: string) => seed.repeat(64).slice(0, 64);
 
 /** A library image ready for publishing, with thumbnail, page and both kiosk renditions (rows only). */
-export async function buildKioskMedia(uploader: User, overrides: Partial<{ credit: string; licenceId: string | null; altText: string }> = {}) {
+export async function buildKioskMedia(
+  uploader: User,
+  overrides: Partial<{ credit: string; licenceId: string | null; altText: string }> = {},
+) {
   n += 1;
   const id = `${Date.now().toString(16)}${n.toString(16)}`;
   const media = await Media.create({
@@ -37,14 +40,27 @@ export async function buildKioskMedia(uploader: User, overrides: Partial<{ credi
     ['kiosk-4k', 3840, 2160],
   ] as const;
   for (const [i, [name, width, height]] of sizes.entries()) {
-    await MediaRendition.create({ mediaId: media.id, name, format: 'jpeg', width, height, bytes: 1000, storageKey: `renditions/${hex(`${id}${i}`)}.jpg` });
+    await MediaRendition.create({
+      mediaId: media.id,
+      name,
+      format: 'jpeg',
+      width,
+      height,
+      bytes: 1000,
+      storageKey: `renditions/${hex(`${id}${i}`)}.jpg`,
+    });
   }
   return media;
 }
 
 /** Desk staff for publishing tests: an editor and an admin (plus the writer and reviewer a page needs). */
 export async function publishingCrew() {
-  const [writer, reviewer, editor, admin] = await Promise.all([signedInAgent('writer'), signedInAgent('reviewer'), signedInAgent('editor'), signedInAgent('admin')]);
+  const [writer, reviewer, editor, admin] = await Promise.all([
+    signedInAgent('writer'),
+    signedInAgent('reviewer'),
+    signedInAgent('editor'),
+    signedInAgent('admin'),
+  ]);
   return { writer, reviewer, editor, admin };
 }
 
@@ -52,7 +68,12 @@ export async function publishingCrew() {
  * A page written, signed off and published through the API, with two statements (and an image
  * when given).
  */
-export async function publishedPage(crew: { writer: Signed; reviewer: Signed; editor: Signed }, title: string, mediaId?: string, opening = 'A bright quasar you can find with a small telescope.') {
+export async function publishedPage(
+  crew: { writer: Signed; reviewer: Signed; editor: Signed },
+  title: string,
+  mediaId?: string,
+  opening = 'A bright quasar you can find with a small telescope.',
+) {
   const q = await quasarWithStatements(crew.writer.agent, crew.writer.user);
   const blocks = [
     ...(mediaId ? [{ type: 'mediaImage', attrs: { mediaId, caption: null } }] : []),
@@ -66,7 +87,11 @@ export async function publishedPage(crew: { writer: Signed; reviewer: Signed; ed
     return res;
   };
   ok(await crew.writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: page.version }), 'submit');
-  for (const id of [q.distanceId, q.nakedEyeId]) ok(await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: id }), 'sign off statement');
+  for (const id of [q.distanceId, q.nakedEyeId])
+    ok(
+      await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: id }),
+      'sign off statement',
+    );
   ok(await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`), 'sign off page');
   ok(await crew.editor.agent.post(`/api/pages/${page.id}/publish`), 'publish');
   return { pageId: page.id, statementIds: [q.distanceId, q.nakedEyeId], distanceText: q.distanceText, objectName: q.object.name };
@@ -74,7 +99,9 @@ export async function publishedPage(crew: { writer: Signed; reviewer: Signed; ed
 
 /** A venue made by an admin through the API. */
 export async function makeVenue(admin: Agent, name: string) {
-  const res = await admin.post('/api/venues').send({ name, latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London' });
+  const res = await admin
+    .post('/api/venues')
+    .send({ name, latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London' });
   if (res.status !== 201) throw new Error(`venue: ${JSON.stringify(res.body)}`);
   return res.body.data as { id: string; name: string };
 }
@@ -83,14 +110,18 @@ export async function makeVenue(admin: Agent, name: string) {
 export async function pairedScreen(admin: Agent, venueId: string, name: string) {
   const added = await admin.post(`/api/venues/${venueId}/screens`).send({ name });
   if (added.status !== 201) throw new Error(`screen: ${JSON.stringify(added.body)}`);
-  const paired = await supertest(await getTestApp()).post('/api/kiosk/pair').send({ code: added.body.data.pairingCode });
+  const paired = await supertest(await getTestApp())
+    .post('/api/kiosk/pair')
+    .send({ code: added.body.data.pairingCode });
   if (paired.status !== 201) throw new Error(`pair: ${JSON.stringify(paired.body)}`);
   return { screenId: added.body.data.screen.id as string, token: paired.body.data.token as string };
 }
 
 /** GET /api/kiosk/feed with a screen's token (and an If-None-Match when given). */
 export async function getFeed(token: string, etag?: string) {
-  let req = supertest(await getTestApp()).get('/api/kiosk/feed').set('Authorization', `Bearer ${token}`);
+  let req = supertest(await getTestApp())
+    .get('/api/kiosk/feed')
+    .set('Authorization', `Bearer ${token}`);
   if (etag) req = req.set('If-None-Match', etag);
   return req;
 }

@@ -28,7 +28,15 @@ export interface ServerProcess {
 export async function startServerProcess(env: Record<string, string>): Promise<ServerProcess> {
   const port = await freePort();
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {
-    env: { ...process.env, NODE_ENV: 'test', PORT: String(port), HOST: '127.0.0.1', STARPROOF_SMTP_PORT: '0', LOG_LEVEL: process.env.STARPROOF_E2E_LOG_LEVEL ?? 'warn', ...env },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      STARPROOF_SMTP_PORT: '0',
+      LOG_LEVEL: process.env.STARPROOF_E2E_LOG_LEVEL ?? 'warn',
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';

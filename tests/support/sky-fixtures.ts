@@ -4,7 +4,15 @@ let counter = 0;
 
 /** A source for test measurements (named as such, never publishable). */
 export async function buildSource(citation = 'Test values for automated checks') {
-  return Source.create({ citation: `${citation} ${++counter}`, bibcode: null, doi: null, url: null, catalogueName: null, retrievedOn: null, createdById: null });
+  return Source.create({
+    citation: `${citation} ${++counter}`,
+    bibcode: null,
+    doi: null,
+    url: null,
+    catalogueName: null,
+    retrievedOn: null,
+    createdById: null,
+  });
 }
 
 /** An object with preferred measurements given as { quantity: [value, sigma?, band?] }. */
@@ -15,7 +23,14 @@ export async function buildObjectWithMeasurements(
   creator: User,
 ) {
   const source = await buildSource();
-  const object = await SkyObject.create({ name: `${name} ${++counter}`, kind, raDeg: null, decDeg: null, constellation: null, createdById: creator.id });
+  const object = await SkyObject.create({
+    name: `${name} ${++counter}`,
+    kind,
+    raDeg: null,
+    decDeg: null,
+    constellation: null,
+    createdById: creator.id,
+  });
   const rows = [];
   for (const m of measurements) {
     rows.push(

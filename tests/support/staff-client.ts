@@ -9,7 +9,11 @@ export class StaffClient {
 
   /** Signs in with a demo (or any) account. */
   static async signIn(baseUrl: string, email: string, password: string): Promise<StaffClient> {
-    const res = await fetch(`${baseUrl}/api/auth/sign-in`, { method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }) });
+    const res = await fetch(`${baseUrl}/api/auth/sign-in`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ email, password }),
+    });
     if (res.status !== 200) throw new Error(`sign-in failed: ${res.status} ${await res.text()}`);
     const cookie = (res.headers.get('set-cookie') ?? '').split(';')[0];
     return new StaffClient(baseUrl, cookie);
@@ -48,7 +52,12 @@ export class StaffClient {
       if (Date.now() > deadline) throw new Error(`renditions not ready: ${media.renditionsStatus}`);
       await new Promise((r) => setTimeout(r, 300));
     }
-    await this.call('PATCH', `/media/${id}`, { altText: 'A soft red glow of gas against a dark blue sky (demo picture)', credit, licenceId, sourceUrl: 'https://example.org/demo-picture' });
+    await this.call('PATCH', `/media/${id}`, {
+      altText: 'A soft red glow of gas against a dark blue sky (demo picture)',
+      credit,
+      licenceId,
+      sourceUrl: 'https://example.org/demo-picture',
+    });
     return id;
   }
 }

@@ -55,9 +55,9 @@ export const XSS_PAYLOADS: readonly string[] = [
 /** Spreadsheet formula starters (common practice: the CSV injection advice of spreadsheet vendors). */
 export const FORMULA_PAYLOADS: readonly string[] = [
   '=HYPERLINK("https://evil.example","Click")',
-  '+1+cmd|\' /C calc\'!A0',
+  "+1+cmd|' /C calc'!A0",
   '-2+3',
-  '@SUM(1+1)*cmd|\' /C calc\'!A0',
+  "@SUM(1+1)*cmd|' /C calc'!A0",
   '\t=1+1',
   '\r=1+1',
   '\u22121+2',

@@ -16,9 +16,13 @@ exportsRouter.get('/objects.csv', async (req, res) => {
   res.end();
 });
 
-exportsRouter.get('/measurements.csv', validate(z.object({ objectId: z.uuid({ message: 'objectId must be an object id' }).optional() }), 'query'), async (req, res) => {
-  authorize(currentUser(req), 'catalogue', 'export');
-  res.attachment(`starproof-measurements-${stamp()}.csv`).type('text/csv; charset=utf-8');
-  await exportMeasurementsCsv(res, (req.query as { objectId?: string }).objectId);
-  res.end();
-});
+exportsRouter.get(
+  '/measurements.csv',
+  validate(z.object({ objectId: z.uuid({ message: 'objectId must be an object id' }).optional() }), 'query'),
+  async (req, res) => {
+    authorize(currentUser(req), 'catalogue', 'export');
+    res.attachment(`starproof-measurements-${stamp()}.csv`).type('text/csv; charset=utf-8');
+    await exportMeasurementsCsv(res, (req.query as { objectId?: string }).objectId);
+    res.end();
+  },
+);

@@ -13,16 +13,28 @@ import { checkCatalogueImport } from '../../services/catalogue-import-check.ts';
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 
 // Files are read in memory: they are checked and turned into rows, never kept as files.
-const upload = multer({ storage: multer.memoryStorage(), limits: { fileSize: CatalogueLimits.importMaxBytes, files: 1, fields: 5, fieldSize: 64 * 1024 } });
+const upload = multer({
+  storage: multer.memoryStorage(),
+  limits: { fileSize: CatalogueLimits.importMaxBytes, files: 1, fields: 5, fieldSize: 64 * 1024 },
+});
 
 /** Multer's errors, turned into messages a person can act on. */
 const receiveFile: RequestHandler = (req, res, next) => {
   upload.single('file')(req, res, (error: unknown) => {
     if (!error) return next();
     if (error instanceof multer.MulterError && error.code === 'LIMIT_FILE_SIZE') {
-      return next(new HttpError(413, 'file_too_large', `The file is larger than ${megabytes(CatalogueLimits.importMaxBytes)}, the most one import takes. Split it into smaller files (about 100,000 rows each at most) and import them one after another.`));
+      return next(
+        new HttpError(
+          413,
+          'file_too_large',
+          `The file is larger than ${megabytes(CatalogueLimits.importMaxBytes)}, the most one import takes. Split it into smaller files (about 100,000 rows each at most) and import them one after another.`,
+        ),
+      );
     }
-    if (error instanceof multer.MulterError) return next(new HttpError(400, 'bad_upload', `The upload could not be read (${error.message}). Send one file in the field "file".`));
+    if (error instanceof multer.MulterError)
+      return next(
+        new HttpError(400, 'bad_upload', `The upload could not be read (${error.message}). Send one file in the field "file".`),
+      );
     next(error);
   });
 };
@@ -39,23 +51,33 @@ const present = (record: CatalogueImport, insertedCount?: number): ImportDto => 
 export const importsRouter = Router();
 
 // Authorize before reading the upload, so nobody without the right streams 10 MB at us.
-importsRouter.post('/', (req, _res, next) => { authorize(currentUser(req), 'catalogue', 'import'); next(); }, receiveFile, async (req, res) => {
-  const viewer = currentUser(req);
-  if (!req.file) throw ValidationError('Choose a CSV file to check.', { file: 'Choose a CSV file' });
-  let mapping: unknown;
-  try {
-    mapping = req.body?.mapping ? JSON.parse(req.body.mapping as string) : undefined;
-  } catch {
-    throw ValidationError('The column mapping is not valid JSON.', { mapping: 'Not valid JSON' });
-  }
-  const parsedMapping = ImportMappingSchema.parse(mapping);
-  const record = await checkCatalogueImport(req.file, parsedMapping, viewer);
-  res.status(201).json({ data: present(record) });
-});
+importsRouter.post(
+  '/',
+  (req, _res, next) => {
+    authorize(currentUser(req), 'catalogue', 'import');
+    next();
+  },
+  receiveFile,
+  async (req, res) => {
+    const viewer = currentUser(req);
+    if (!req.file) throw ValidationError('Choose a CSV file to check.', { file: 'Choose a CSV file' });
+    let mapping: unknown;
+    try {
+      mapping = req.body?.mapping ? JSON.parse(req.body.mapping as string) : undefined;
+    } catch {
+      throw ValidationError('The column mapping is not valid JSON.', { mapping: 'Not valid JSON' });
+    }
+    const parsedMapping = ImportMappingSchema.parse(mapping);
+    const record = await checkCatalogueImport(req.file, parsedMapping, viewer);
+    res.status(201).json({ data: present(record) });
+  },
+);
 
 importsRouter.get('/:id', async (req, res) => {
   authorize(currentUser(req), 'catalogue', 'import');
-  const record = IdSchema.safeParse(req.params.id).success ? await CatalogueImport.findByPk(req.params.id, { attributes: { exclude: ['acceptedRows'] } }) : null;
+  const record = IdSchema.safeParse(req.params.id).success
+    ? await CatalogueImport.findByPk(req.params.id, { attributes: { exclude: ['acceptedRows'] } })
+    : null;
   if (!record) throw NotFoundError('There is no import with that id.');
   res.json({ data: present(record) });
 });

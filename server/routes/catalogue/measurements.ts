@@ -1,6 +1,13 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { MeasurementInputSchema, MeasurementPreferredSchema, MeasurementRetireSchema, MeasurementReviewSchema, type MeasurementPreferredInput, type MeasurementReviewInput } from '@shared/schemas/measurement.ts';
+import {
+  MeasurementInputSchema,
+  MeasurementPreferredSchema,
+  MeasurementRetireSchema,
+  MeasurementReviewSchema,
+  type MeasurementPreferredInput,
+  type MeasurementReviewInput,
+} from '@shared/schemas/measurement.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
 import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
@@ -13,7 +20,9 @@ import { retireMeasurement, updateMeasurement } from '../../services/measurement
 import { findMeasurement } from './load.ts';
 
 const notFound = () => NotFoundError('There is no measurement with that id.');
-const ChangeReasonSchema = z.object({ reason: z.string().trim().max(CatalogueLimits.reasonMax, `At most ${CatalogueLimits.reasonMax} characters`).optional() });
+const ChangeReasonSchema = z.object({
+  reason: z.string().trim().max(CatalogueLimits.reasonMax, `At most ${CatalogueLimits.reasonMax} characters`).optional(),
+});
 
 export const measurementsRouter = Router();
 

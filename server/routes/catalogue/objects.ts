@@ -1,6 +1,11 @@
 import { Router } from 'express';
 import { MeasurementInputSchema, type MeasurementValues } from '@shared/schemas/measurement.ts';
-import { SkyObjectInputSchema, SkyObjectListQuerySchema, type SkyObjectListQuery, type SkyObjectValues } from '@shared/schemas/sky-object.ts';
+import {
+  SkyObjectInputSchema,
+  SkyObjectListQuerySchema,
+  type SkyObjectListQuery,
+  type SkyObjectValues,
+} from '@shared/schemas/sky-object.ts';
 import { AuthorizationError, NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
@@ -59,7 +64,16 @@ objectsRouter.get('/:id/measurements', async (req, res) => {
   authorize(viewer, 'catalogue', 'read');
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
-  const measurements = await Measurement.findAll({ where: { objectId: object.id }, include: measurementIncludes(), order: [['quantity', 'ASC'], ['band', 'ASC'], ['preferred', 'DESC'], ['createdAt', 'DESC']] });
+  const measurements = await Measurement.findAll({
+    where: { objectId: object.id },
+    include: measurementIncludes(),
+    order: [
+      ['quantity', 'ASC'],
+      ['band', 'ASC'],
+      ['preferred', 'DESC'],
+      ['createdAt', 'DESC'],
+    ],
+  });
   res.json({ data: measurements.map((m) => presentMeasurement(m, viewer)) });
 });
 
@@ -80,7 +94,15 @@ objectsRouter.get('/:id/history', async (req, res) => {
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
   const [history, measurements] = await Promise.all([
-    MeasurementHistory.findAll({ where: { objectId: object.id }, include: [{ model: User, as: 'changedBy', attributes: ['id', 'name'] }], order: [['createdAt', 'DESC'], ['id', 'DESC']], limit: 500 }),
+    MeasurementHistory.findAll({
+      where: { objectId: object.id },
+      include: [{ model: User, as: 'changedBy', attributes: ['id', 'name'] }],
+      order: [
+        ['createdAt', 'DESC'],
+        ['id', 'DESC'],
+      ],
+      limit: 500,
+    }),
     Measurement.findAll({ where: { objectId: object.id }, attributes: ['id', 'quantity'] }),
   ]);
   const quantityOf = new Map(measurements.map((m) => [m.id, m.quantity]));

@@ -54,5 +54,7 @@ sourcesRouter.patch('/:id', validate(SourceInputSchema), async (req, res) => {
   const source = await findSource(req.params.id);
   if (!source) throw notFound();
   const updated = await updateSource(source, req.body as SourceValues, viewer, req.ip);
-  res.json({ data: presentSource(updated, viewer, await Measurement.count({ where: { sourceId: source.id, retiredAt: null } })) });
+  res.json({
+    data: presentSource(updated, viewer, await Measurement.count({ where: { sourceId: source.id, retiredAt: null } })),
+  });
 });

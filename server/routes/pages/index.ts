@@ -1,7 +1,16 @@
 import { Router } from 'express';
 import type { JSONContent } from '@tiptap/core';
 import { validateDoc } from '@shared/editor/schema.ts';
-import { DigestSchema, docBytes, PageCreateSchema, PageListQuerySchema, PageSaveSchema, type PageCreateInput, type PageListQuery, type PageSaveInput } from '@shared/schemas/page.ts';
+import {
+  DigestSchema,
+  docBytes,
+  PageCreateSchema,
+  PageListQuerySchema,
+  PageSaveSchema,
+  type PageCreateInput,
+  type PageListQuery,
+  type PageSaveInput,
+} from '@shared/schemas/page.ts';
 import { PageLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
@@ -24,7 +33,11 @@ import '../../services/pages/page-digest.ts';
 registerPageReactions();
 
 const tooLarge = () =>
-  new HttpError(413, 'page_too_large', `This page is larger than ${PageLimits.docMaxBytes / 1024 / 1024} MB and cannot be saved. Split it into shorter pages, or remove pasted material you do not need.`);
+  new HttpError(
+    413,
+    'page_too_large',
+    `This page is larger than ${PageLimits.docMaxBytes / 1024 / 1024} MB and cannot be saved. Split it into shorter pages, or remove pasted material you do not need.`,
+  );
 
 /**
  * Checks a document sent by a client: size first (before walking it), then the editor schema.

@@ -28,8 +28,19 @@ revisionsRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageParam(req));
   authorize(viewer, 'page', 'read', page);
-  const revisions = await PageRevision.findAll({ where: { pageId: page.id }, attributes: ['id', 'number', 'title', 'authorId', 'createdAt', 'restoredFrom'], order: [['number', 'DESC']] });
-  const authors = new Map((await User.findAll({ attributes: ['id', 'name'], where: { id: [...new Set(revisions.map((r) => r.authorId).filter((x): x is string => !!x))] } })).map((u) => [u.id, u.name]));
+  const revisions = await PageRevision.findAll({
+    where: { pageId: page.id },
+    attributes: ['id', 'number', 'title', 'authorId', 'createdAt', 'restoredFrom'],
+    order: [['number', 'DESC']],
+  });
+  const authors = new Map(
+    (
+      await User.findAll({
+        attributes: ['id', 'name'],
+        where: { id: [...new Set(revisions.map((r) => r.authorId).filter((x): x is string => !!x))] },
+      })
+    ).map((u) => [u.id, u.name]),
+  );
   const data: PageRevisionDto[] = revisions.map((r) => ({
     id: r.id,
     number: r.number,
@@ -71,7 +82,11 @@ revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, re
   authorize(viewer, 'page', 'edit', page);
   const r = await revisionOf(page, req.params.number);
   try {
-    const { page: saved } = await savePage(page.id, { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number }, viewer);
+    const { page: saved } = await savePage(
+      page.id,
+      { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
+      viewer,
+    );
     res.json({ data: await loadPageDetail(saved, viewer) });
   } catch (error) {
     if (!(error instanceof PageConflictError)) throw error;

@@ -105,8 +105,20 @@ workflowRouter.get('/comments', async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'read', page);
-  const comments = await PageComment.findAll({ where: { pageId: page.id }, include: [{ model: User, as: 'author', attributes: ['name'] }], order: [['createdAt', 'ASC']] });
-  res.json({ data: comments.map((c) => ({ id: c.id, body: c.body, author: c.author?.name ?? null, revisionNumber: c.revisionNumber, createdAt: c.createdAt.toISOString() })) });
+  const comments = await PageComment.findAll({
+    where: { pageId: page.id },
+    include: [{ model: User, as: 'author', attributes: ['name'] }],
+    order: [['createdAt', 'ASC']],
+  });
+  res.json({
+    data: comments.map((c) => ({
+      id: c.id,
+      body: c.body,
+      author: c.author?.name ?? null,
+      revisionNumber: c.revisionNumber,
+      createdAt: c.createdAt.toISOString(),
+    })),
+  });
 });
 
 workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) => {
@@ -114,7 +126,28 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'comment', page);
   const revision = await PageRevision.findByPk(page.currentRevisionId!, { attributes: ['number'] });
-  const comment = await PageComment.create({ pageId: page.id, revisionNumber: revision?.number ?? null, authorId: viewer.id, body: (req.body as { body: string }).body });
-  await recordAudit({ actorId: viewer.id, action: 'page.commented', subjectType: 'page', subjectId: page.id, data: { commentId: comment.id } });
-  res.status(201).json({ data: { id: comment.id, body: comment.body, author: viewer.name, revisionNumber: comment.revisionNumber, createdAt: comment.createdAt.toISOString() } });
+  const comment = await PageComment.create({
+    pageId: page.id,
+    revisionNumber: revision?.number ?? null,
+    authorId: viewer.id,
+    body: (req.body as { body: string }).body,
+  });
+  await recordAudit({
+    actorId: viewer.id,
+    action: 'page.commented',
+    subjectType: 'page',
+    subjectId: page.id,
+    data: { commentId: comment.id },
+  });
+  res
+    .status(201)
+    .json({
+      data: {
+        id: comment.id,
+        body: comment.body,
+        author: viewer.name,
+        revisionNumber: comment.revisionNumber,
+        createdAt: comment.createdAt.toISOString(),
+      },
+    });
 });

@@ -18,7 +18,14 @@ const limiter = rateLimit({
   limit: Number(process.env.STARPROOF_PUBLIC_LIMIT ?? 300),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
-  handler: (_req, _res, next) => next(new HttpError(429, 'too_many_requests', 'Too many requests to the public API from this address. Wait a minute and try again.')),
+  handler: (_req, _res, next) =>
+    next(
+      new HttpError(
+        429,
+        'too_many_requests',
+        'Too many requests to the public API from this address. Wait a minute and try again.',
+      ),
+    ),
 });
 
 /** Open CORS for reading only: any website may GET; no cookies are honoured across sites. */
@@ -44,7 +51,8 @@ const cors: RequestHandler = (req, res, next) => {
 };
 
 /** Links in Atom must be absolute: PUBLIC_URL when set, else the address the request came to. */
-const baseUrlOf = (req: Parameters<RequestHandler>[0]) => (config.publicUrl ?? `${req.protocol}://${req.get('host') ?? `${config.host}:${config.port}`}`).replace(/\/+$/, '');
+const baseUrlOf = (req: Parameters<RequestHandler>[0]) =>
+  (config.publicUrl ?? `${req.protocol}://${req.get('host') ?? `${config.host}:${config.port}`}`).replace(/\/+$/, '');
 
 /** GET /api/public/…: published pages for the venue's website, read-only and without sign-in. */
 export const publicRouter = Router();
@@ -74,4 +82,6 @@ publicRouter.get('/pages/:slugOrId', async (req, res) => {
   sendCached(req, res, found.body, found.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
-publicRouter.use((req, _res, next) => next(NotFoundError(`There is no public API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`)));
+publicRouter.use((req, _res, next) =>
+  next(NotFoundError(`There is no public API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`)),
+);

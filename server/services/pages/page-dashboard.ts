@@ -10,18 +10,58 @@ type Section = { id: string; title: string; hint: string; where: WhereOptions<Pa
 function sectionsFor(user: User): Section[] {
   const mine = { writerId: user.id };
   const writer: Section[] = [
-    { id: 'my-recheck', title: 'Your pages needing a re-check', hint: 'The data behind a statement changed after sign-off.', where: { ...mine, status: 'needs_recheck' } },
-    { id: 'my-drafts', title: 'Your drafts', hint: 'Write, convert hand-typed numbers into statements, then submit.', where: { ...mine, status: 'draft' } },
-    { id: 'my-review', title: 'Your pages with reviewers', hint: 'Waiting for sign-off.', where: { ...mine, status: 'in_review' } },
+    {
+      id: 'my-recheck',
+      title: 'Your pages needing a re-check',
+      hint: 'The data behind a statement changed after sign-off.',
+      where: { ...mine, status: 'needs_recheck' },
+    },
+    {
+      id: 'my-drafts',
+      title: 'Your drafts',
+      hint: 'Write, convert hand-typed numbers into statements, then submit.',
+      where: { ...mine, status: 'draft' },
+    },
+    {
+      id: 'my-review',
+      title: 'Your pages with reviewers',
+      hint: 'Waiting for sign-off.',
+      where: { ...mine, status: 'in_review' },
+    },
   ];
   const reviewer: Section[] = [
-    { id: 'recheck', title: 'Pages needing a re-check', hint: 'A statement’s wording moved after sign-off; the published version is still live.', where: { status: 'needs_recheck' } },
-    { id: 'review', title: 'Waiting for review', hint: 'Check each statement’s working, resolve flagged numbers, sign off.', where: { status: 'in_review' } },
+    {
+      id: 'recheck',
+      title: 'Pages needing a re-check',
+      hint: 'A statement’s wording moved after sign-off; the published version is still live.',
+      where: { status: 'needs_recheck' },
+    },
+    {
+      id: 'review',
+      title: 'Waiting for review',
+      hint: 'Check each statement’s working, resolve flagged numbers, sign off.',
+      where: { status: 'in_review' },
+    },
   ];
   const editor: Section[] = [
-    { id: 'approved', title: 'Approved, ready to publish', hint: 'Signed off by a reviewer; publish or schedule.', where: { status: 'approved' } },
-    { id: 'stale', title: 'Live pages needing a re-check', hint: 'The public still sees the approved wording until a new version is signed off.', where: { status: 'needs_recheck', publishedRevisionId: { [Op.ne]: null } } },
-    { id: 'scheduled', title: 'Scheduled', hint: 'Will go live by themselves.', where: { scheduledPublishAt: { [Op.ne]: null } } },
+    {
+      id: 'approved',
+      title: 'Approved, ready to publish',
+      hint: 'Signed off by a reviewer; publish or schedule.',
+      where: { status: 'approved' },
+    },
+    {
+      id: 'stale',
+      title: 'Live pages needing a re-check',
+      hint: 'The public still sees the approved wording until a new version is signed off.',
+      where: { status: 'needs_recheck', publishedRevisionId: { [Op.ne]: null } },
+    },
+    {
+      id: 'scheduled',
+      title: 'Scheduled',
+      hint: 'Will go live by themselves.',
+      where: { scheduledPublishAt: { [Op.ne]: null } },
+    },
   ];
   switch (user.role) {
     case 'writer':
@@ -47,7 +87,10 @@ export async function dashboardFor(user: User, limit = 8): Promise<DashboardDto>
 
 /** Whether the person asked for the morning e-mail. */
 export async function digestEnabled(userId: string): Promise<boolean> {
-  const [row] = await getSequelize().query<{ page_digest: boolean }>('SELECT page_digest FROM users WHERE id = :userId', { replacements: { userId }, type: QueryTypes.SELECT });
+  const [row] = await getSequelize().query<{ page_digest: boolean }>('SELECT page_digest FROM users WHERE id = :userId', {
+    replacements: { userId },
+    type: QueryTypes.SELECT,
+  });
   return !!row?.page_digest;
 }
 

@@ -18,14 +18,21 @@ const PUBLISH_DUE = 'pages.publish-due';
  * @returns how many people were mailed
  */
 export async function sendDailyDigests(): Promise<number> {
-  const ids = await getSequelize().query<{ id: string }>('SELECT id FROM users WHERE page_digest AND active', { type: QueryTypes.SELECT });
+  const ids = await getSequelize().query<{ id: string }>('SELECT id FROM users WHERE page_digest AND active', {
+    type: QueryTypes.SELECT,
+  });
   let sent = 0;
   for (const { id } of ids) {
     const user = await User.findByPk(id);
     if (!user) continue;
     const sections = [];
     for (const s of sectionsFor(user)) {
-      const pages = await Page.findAll({ where: s.where, order: [['updatedAt', 'DESC']], limit: 20, attributes: ['id', 'title'] });
+      const pages = await Page.findAll({
+        where: s.where,
+        order: [['updatedAt', 'DESC']],
+        limit: 20,
+        attributes: ['id', 'title'],
+      });
       if (pages.length) sections.push({ title: s.title, pages: pages.map((p) => ({ id: p.id, title: p.title })) });
     }
     if (!sections.length) continue;

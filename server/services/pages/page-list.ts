@@ -10,9 +10,15 @@ import { presentPageRow } from '../../presenters/page.ts';
 export async function pageRows(pages: Page[]): Promise<PageRow[]> {
   if (!pages.length) return [];
   const [objects, writers, revisions] = await Promise.all([
-    SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(pages.map((p) => p.skyObjectId))] } }, attributes: ['id', 'name', 'kind'] }),
+    SkyObject.findAll({
+      where: { id: { [Op.in]: [...new Set(pages.map((p) => p.skyObjectId))] } },
+      attributes: ['id', 'name', 'kind'],
+    }),
     User.findAll({ where: { id: { [Op.in]: [...new Set(pages.map((p) => p.writerId))] } }, attributes: ['id', 'name'] }),
-    PageRevision.findAll({ where: { id: { [Op.in]: pages.map((p) => p.currentRevisionId!).filter(Boolean) } }, attributes: ['id', 'number'] }),
+    PageRevision.findAll({
+      where: { id: { [Op.in]: pages.map((p) => p.currentRevisionId!).filter(Boolean) } },
+      attributes: ['id', 'number'],
+    }),
   ]);
   const o = new Map(objects.map((x) => [x.id, x]));
   const w = new Map(writers.map((x) => [x.id, x]));
@@ -26,7 +32,9 @@ export async function pageRows(pages: Page[]): Promise<PageRow[]> {
  */
 export function visibleTo(viewer: User): WhereOptions<Page> {
   if (viewer.role === 'admin' || viewer.role === 'editor') return {};
-  return { [Op.or]: [{ writerId: viewer.id }, { status: { [Op.ne]: 'draft' } }, { submittedAt: { [Op.ne]: null } }] } as WhereOptions<Page>;
+  return {
+    [Op.or]: [{ writerId: viewer.id }, { status: { [Op.ne]: 'draft' } }, { submittedAt: { [Op.ne]: null } }],
+  } as WhereOptions<Page>;
 }
 
 /**
@@ -43,6 +51,14 @@ export async function listPages(query: PageListQuery, viewer: User): Promise<{ r
       query.q ? { title: { [Op.iLike]: `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` } } : {},
     ],
   } as WhereOptions<Page>;
-  const { rows, count } = await Page.findAndCountAll({ where, order: [['updatedAt', 'DESC'], ['id', 'ASC']], limit: query.pageSize, offset: (query.page - 1) * query.pageSize });
+  const { rows, count } = await Page.findAndCountAll({
+    where,
+    order: [
+      ['updatedAt', 'DESC'],
+      ['id', 'ASC'],
+    ],
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  });
   return { rows: await pageRows(rows), total: count };
 }

@@ -5,7 +5,11 @@ import { User } from '../../models/index.ts';
 
 /** Sends after the change is committed; a mail failure is logged, never undoes the change. */
 export async function deliver(messages: MailMessage[]): Promise<void> {
-  await Promise.all(messages.map((m) => sendMail(m).catch((err: unknown) => logger.error({ err, to: m.to, subject: m.subject }, 'page mail not sent'))));
+  await Promise.all(
+    messages.map((m) =>
+      sendMail(m).catch((err: unknown) => logger.error({ err, to: m.to, subject: m.subject }, 'page mail not sent')),
+    ),
+  );
 }
 
 /** Active reviewers (and admins, who may review), to tell about a submitted page. */

@@ -17,17 +17,34 @@ export async function publishPage(pageId: string, actor: User | null): Promise<P
   return getSequelize().transaction(async (transaction) => {
     const { page } = await lockPage(pageId, transaction);
     if (page.status !== 'approved' || !page.approvedSnapshot) {
-      throw WorkflowError(page.status === 'published' ? 'This version is already published.' : 'Only an approved page can be published. A reviewer signs it off first.');
+      throw WorkflowError(
+        page.status === 'published'
+          ? 'This version is already published.'
+          : 'Only an approved page can be published. A reviewer signs it off first.',
+      );
     }
     const publishedAt = new Date();
     page.set({
       status: 'published',
       publishedRevisionId: page.approvedRevisionId,
-      publishedSnapshot: { ...page.approvedSnapshot, publishedAt: publishedAt.toISOString(), publishedBy: actor ? { id: actor.id, name: actor.name } : null },
+      publishedSnapshot: {
+        ...page.approvedSnapshot,
+        publishedAt: publishedAt.toISOString(),
+        publishedBy: actor ? { id: actor.id, name: actor.name } : null,
+      },
       scheduledPublishAt: null,
     });
     await page.save({ transaction });
-    await recordAudit({ actorId: actor?.id ?? null, action: 'page.published', subjectType: 'page', subjectId: page.id, data: { revision: page.approvedSnapshot.revisionNumber, scheduled: !actor } }, transaction);
+    await recordAudit(
+      {
+        actorId: actor?.id ?? null,
+        action: 'page.published',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { revision: page.approvedSnapshot.revisionNumber, scheduled: !actor },
+      },
+      transaction,
+    );
     transaction.afterCommit(() => void publishingEvents.emit('pagePublished', { pageId: page.id }));
     return page;
   });
@@ -43,9 +60,16 @@ export async function unpublishPage(pageId: string, actor: User): Promise<Page> 
     const { page } = await lockPage(pageId, transaction);
     if (!page.publishedSnapshot) throw WorkflowError('This page is not published.');
     const from = page.status;
-    page.set({ publishedSnapshot: null, publishedRevisionId: null, status: page.status === 'published' ? 'approved' : page.status });
+    page.set({
+      publishedSnapshot: null,
+      publishedRevisionId: null,
+      status: page.status === 'published' ? 'approved' : page.status,
+    });
     await page.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'page.unpublished', subjectType: 'page', subjectId: page.id, data: { from } }, transaction);
+    await recordAudit(
+      { actorId: actor.id, action: 'page.unpublished', subjectType: 'page', subjectId: page.id, data: { from } },
+      transaction,
+    );
     transaction.afterCommit(() => void publishingEvents.emit('pageUnpublished', { pageId: page.id }));
     return page;
   });
@@ -63,7 +87,16 @@ export async function schedulePublish(pageId: string, at: Date | null, actor: Us
     if (at && at.getTime() <= Date.now()) throw WorkflowError('Choose a time in the future, or publish now.', 'time_in_past');
     page.scheduledPublishAt = at;
     await page.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: at ? 'page.publication_scheduled' : 'page.schedule_cleared', subjectType: 'page', subjectId: page.id, data: { at: at?.toISOString() ?? null } }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: at ? 'page.publication_scheduled' : 'page.schedule_cleared',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { at: at?.toISOString() ?? null },
+      },
+      transaction,
+    );
     return page;
   });
 }

@@ -29,9 +29,13 @@ export function registerPageReactions(): void {
   if (registered) return;
   registered = true;
   const queue = ({ statementIds }: { statementIds: string[] }) => {
-    enqueuePageRecheck({ statementIds }).catch((err: unknown) => logger.error({ err, statementIds }, 'could not queue a page re-check'));
+    enqueuePageRecheck({ statementIds }).catch((err: unknown) =>
+      logger.error({ err, statementIds }, 'could not queue a page re-check'),
+    );
   };
   statementEvents.on('textChanged', queue);
   statementEvents.on('broken', queue);
-  registerMediaUsageProvider('pages', (mediaId) => (/^[0-9a-f-]{36}$/i.test(mediaId) ? pagesUsingMedia(mediaId) : Promise.resolve([])));
+  registerMediaUsageProvider('pages', (mediaId) =>
+    /^[0-9a-f-]{36}$/i.test(mediaId) ? pagesUsingMedia(mediaId) : Promise.resolve([]),
+  );
 }

@@ -39,8 +39,15 @@ export async function markPagesForRecheck(statementIds: string[]): Promise<strin
       const from = page.status;
       page.set({ status: 'needs_recheck', recheckStatementIds: [...new Set([...page.recheckStatementIds, ...moved])] });
       await page.save({ transaction });
-      const changes = moved.map((sid) => ({ statementId: sid, oldText: signed[sid] ?? null, newText: statements.get(sid)!.status === 'broken' ? null : currentText(statements.get(sid)!, page.locale) }));
-      await recordAudit({ actorId: null, action: 'page.needs_recheck', subjectType: 'page', subjectId: page.id, data: { from, changes } }, transaction);
+      const changes = moved.map((sid) => ({
+        statementId: sid,
+        oldText: signed[sid] ?? null,
+        newText: statements.get(sid)!.status === 'broken' ? null : currentText(statements.get(sid)!, page.locale),
+      }));
+      await recordAudit(
+        { actorId: null, action: 'page.needs_recheck', subjectType: 'page', subjectId: page.id, data: { from, changes } },
+        transaction,
+      );
       return { page, changes, live: !!page.publishedSnapshot };
     });
     if (!result) continue;

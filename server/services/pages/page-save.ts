@@ -18,10 +18,22 @@ export async function createPage(input: PageCreateInput, writer: User): Promise<
   const locale = input.locale ?? ((await getSettings()).defaultLocale as Page['locale']);
   return getSequelize().transaction(async (transaction) => {
     const page = await Page.create({ title: input.title, skyObjectId: object.id, locale, writerId: writer.id }, { transaction });
-    const revision = await appendRevision({ pageId: page.id, title: input.title, doc: EMPTY_DOC, authorId: writer.id }, transaction);
+    const revision = await appendRevision(
+      { pageId: page.id, title: input.title, doc: EMPTY_DOC, authorId: writer.id },
+      transaction,
+    );
     page.currentRevisionId = revision.id;
     await page.save({ transaction });
-    await recordAudit({ actorId: writer.id, action: 'page.created', subjectType: 'page', subjectId: page.id, data: { title: input.title, objectId: object.id } }, transaction);
+    await recordAudit(
+      {
+        actorId: writer.id,
+        action: 'page.created',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { title: input.title, objectId: object.id },
+      },
+      transaction,
+    );
     return page;
   });
 }
@@ -56,26 +68,66 @@ const STATUS_AFTER_EDIT: Record<PageStatus, PageStatus | null> = {
  * @param doc a document that passed validateDoc
  * @throws PageConflictError 409 on a stale version; HttpError 409 while the page is in review
  */
-export async function savePage(pageId: string, input: { version: number; title: string; doc: JSONContent; restoredFrom?: number }, actor: User): Promise<{ page: Page; saved: boolean }> {
+export async function savePage(
+  pageId: string,
+  input: { version: number; title: string; doc: JSONContent; restoredFrom?: number },
+  actor: User,
+): Promise<{ page: Page; saved: boolean }> {
   const outcome = await getSequelize().transaction(async (transaction) => {
     const page = await Page.findByPk(pageId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!page) throw NotFoundError('There is no such page.');
     if (page.version !== input.version) return { page, conflict: true, saved: false };
     const next = STATUS_AFTER_EDIT[page.status as PageStatus];
-    if (!next) throw WorkflowError('This page is with a reviewer. Ask them to send it back before you change it; your text is kept in this browser.', 'page_in_review');
+    if (!next)
+      throw WorkflowError(
+        'This page is with a reviewer. Ask them to send it back before you change it; your text is kept in this browser.',
+        'page_in_review',
+      );
     const current = await PageRevision.findByPk(page.currentRevisionId!, { transaction });
-    if (current && current.title === input.title && JSON.stringify(current.doc) === JSON.stringify(input.doc) && input.restoredFrom === undefined) {
+    if (
+      current &&
+      current.title === input.title &&
+      JSON.stringify(current.doc) === JSON.stringify(input.doc) &&
+      input.restoredFrom === undefined
+    ) {
       return { page, conflict: false, saved: false };
     }
-    const revision = await appendRevision({ pageId: page.id, title: input.title, doc: input.doc, authorId: actor.id, restoredFrom: input.restoredFrom }, transaction);
+    const revision = await appendRevision(
+      { pageId: page.id, title: input.title, doc: input.doc, authorId: actor.id, restoredFrom: input.restoredFrom },
+      transaction,
+    );
     const before = page.status;
-    page.set({ title: input.title, currentRevisionId: revision.id, version: page.version + 1, status: next, recheckStatementIds: next === 'draft' ? [] : page.recheckStatementIds });
+    page.set({
+      title: input.title,
+      currentRevisionId: revision.id,
+      version: page.version + 1,
+      status: next,
+      recheckStatementIds: next === 'draft' ? [] : page.recheckStatementIds,
+    });
     await page.save({ transaction });
     if (before !== next) {
-      await recordAudit({ actorId: actor.id, action: 'page.reopened', subjectType: 'page', subjectId: page.id, data: { from: before, to: next, revision: revision.number } }, transaction);
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'page.reopened',
+          subjectType: 'page',
+          subjectId: page.id,
+          data: { from: before, to: next, revision: revision.number },
+        },
+        transaction,
+      );
     }
     if (input.restoredFrom !== undefined) {
-      await recordAudit({ actorId: actor.id, action: 'page.revision_restored', subjectType: 'page', subjectId: page.id, data: { from: input.restoredFrom, as: revision.number } }, transaction);
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'page.revision_restored',
+          subjectType: 'page',
+          subjectId: page.id,
+          data: { from: input.restoredFrom, as: revision.number },
+        },
+        transaction,
+      );
     }
     return { page, conflict: false, saved: true };
   });

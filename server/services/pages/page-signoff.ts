@@ -30,12 +30,29 @@ export async function signOffStatement(pageId: string, statementId: string, revi
   await getSequelize().transaction(async (transaction) => {
     const { page, revision } = await lockPage(pageId, transaction);
     if (!REVIEWABLE.has(page.status)) throw notReviewable();
-    if (!revision.statementIds.includes(statementId)) throw WorkflowError('That statement is not on this version of the page.', 'not_on_page');
+    if (!revision.statementIds.includes(statementId))
+      throw WorkflowError('That statement is not on this version of the page.', 'not_on_page');
     const fresh = await Statement.findByPk(statementId, { transaction });
     const text = fresh ? currentText(fresh, page.locale) : null;
-    if (!fresh || fresh.status === 'broken' || !text) throw WorkflowError(`This statement cannot be signed off: ${fresh?.statusReason ?? 'it cannot be worked out'}.`, 'statement_broken');
-    await PageSignoff.create({ pageId: page.id, revisionId: revision.id, kind: 'statement', statementId, statementText: text, reviewerId: reviewer.id }, { transaction });
-    await recordAudit({ actorId: reviewer.id, action: 'page.statement_signed_off', subjectType: 'page', subjectId: page.id, data: { statementId, text, revision: revision.number } }, transaction);
+    if (!fresh || fresh.status === 'broken' || !text)
+      throw WorkflowError(
+        `This statement cannot be signed off: ${fresh?.statusReason ?? 'it cannot be worked out'}.`,
+        'statement_broken',
+      );
+    await PageSignoff.create(
+      { pageId: page.id, revisionId: revision.id, kind: 'statement', statementId, statementText: text, reviewerId: reviewer.id },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actorId: reviewer.id,
+        action: 'page.statement_signed_off',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { statementId, text, revision: revision.number },
+      },
+      transaction,
+    );
   });
 }
 
@@ -52,8 +69,20 @@ export async function resolveNumberFlag(pageId: string, text: string, reason: st
     const flag = (await flagsWithResolutions(page, revision)).find((f) => f.normalised === normalised);
     if (!flag) throw WorkflowError(`“${text}” is not flagged on this page.`, 'not_flagged');
     await PageNumberFlag.destroy({ where: { pageId: page.id, normalisedText: normalised }, transaction });
-    await PageNumberFlag.create({ pageId: page.id, normalisedText: normalised, text: flag.text, reason, resolvedById: reviewer.id }, { transaction });
-    await recordAudit({ actorId: reviewer.id, action: 'page.number_resolved', subjectType: 'page', subjectId: page.id, data: { text: flag.text, reason } }, transaction);
+    await PageNumberFlag.create(
+      { pageId: page.id, normalisedText: normalised, text: flag.text, reason, resolvedById: reviewer.id },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actorId: reviewer.id,
+        action: 'page.number_resolved',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { text: flag.text, reason },
+      },
+      transaction,
+    );
   });
 }
 
@@ -74,7 +103,8 @@ export async function signOffPage(pageId: string, reviewer: User): Promise<Page>
     const statementTexts: Record<string, string> = {};
     for (const id of revision.statementIds) statementTexts[id] = currentText(statements.get(id)!.statement, page.locale)!;
     const html = await renderWithLookups(revision.doc, revision.mediaIds, (id) => statementTexts[id] ?? null);
-    if (Buffer.byteLength(html) > 20 * 1024 * 1024) throw new HttpError(422, 'page_too_large', 'The rendered page is too large to publish.');
+    if (Buffer.byteLength(html) > 20 * 1024 * 1024)
+      throw new HttpError(422, 'page_too_large', 'The rendered page is too large to publish.');
     const snapshot: PageSnapshot = {
       revisionId: revision.id,
       revisionNumber: revision.number,
@@ -85,10 +115,28 @@ export async function signOffPage(pageId: string, reviewer: User): Promise<Page>
       signedOffBy: { id: reviewer.id, name: reviewer.name },
     };
     const from = page.status;
-    await PageSignoff.create({ pageId: page.id, revisionId: revision.id, kind: 'page', statementId: null, statementText: null, reviewerId: reviewer.id }, { transaction });
-    page.set({ status: 'approved', approvedRevisionId: revision.id, approvedSnapshot: snapshot, lastReviewerId: reviewer.id, recheckStatementIds: [] });
+    await PageSignoff.create(
+      { pageId: page.id, revisionId: revision.id, kind: 'page', statementId: null, statementText: null, reviewerId: reviewer.id },
+      { transaction },
+    );
+    page.set({
+      status: 'approved',
+      approvedRevisionId: revision.id,
+      approvedSnapshot: snapshot,
+      lastReviewerId: reviewer.id,
+      recheckStatementIds: [],
+    });
     await page.save({ transaction });
-    await recordAudit({ actorId: reviewer.id, action: 'page.approved', subjectType: 'page', subjectId: page.id, data: { from, revision: revision.number } }, transaction);
+    await recordAudit(
+      {
+        actorId: reviewer.id,
+        action: 'page.approved',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { from, revision: revision.number },
+      },
+      transaction,
+    );
     return page;
   });
 }

@@ -17,9 +17,23 @@ export interface LoadedStatement {
 export async function loadStatements(ids: string[]): Promise<Map<string, LoadedStatement>> {
   if (!ids.length) return new Map();
   const statements = await Statement.findAll({ where: { id: { [Op.in]: ids } } });
-  const objects = new Map((await SkyObject.findAll({ where: { id: { [Op.in]: [...new Set(statements.map((s) => s.skyObjectId))] } }, attributes: ['id', 'name'] })).map((o) => [o.id, o.name]));
+  const objects = new Map(
+    (
+      await SkyObject.findAll({
+        where: { id: { [Op.in]: [...new Set(statements.map((s) => s.skyObjectId))] } },
+        attributes: ['id', 'name'],
+      })
+    ).map((o) => [o.id, o.name]),
+  );
   return new Map(
-    statements.map((s) => [s.id, { statement: s, objectName: objects.get(s.skyObjectId) ?? '', templateTitle: findTemplate(s.templateId)?.title ?? s.templateId }]),
+    statements.map((s) => [
+      s.id,
+      {
+        statement: s,
+        objectName: objects.get(s.skyObjectId) ?? '',
+        templateTitle: findTemplate(s.templateId)?.title ?? s.templateId,
+      },
+    ]),
   );
 }
 

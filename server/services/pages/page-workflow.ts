@@ -27,13 +27,28 @@ export async function lockPage(pageId: string, transaction: import('sequelize').
 export async function submitPage(pageId: string, expectedVersion: number | undefined, actor: User): Promise<Page> {
   const page = await getSequelize().transaction(async (transaction) => {
     const { page, revision } = await lockPage(pageId, transaction);
-    if (page.status !== 'draft') throw WorkflowError(page.status === 'in_review' ? 'This page is already with the reviewers.' : 'Only a draft can be submitted. Edit the page to start a new draft.');
-    if (expectedVersion !== undefined && expectedVersion !== page.version) throw WorkflowError('The page was saved again since you loaded it. Reload it, check it, then submit.', 'page_changed');
+    if (page.status !== 'draft')
+      throw WorkflowError(
+        page.status === 'in_review'
+          ? 'This page is already with the reviewers.'
+          : 'Only a draft can be submitted. Edit the page to start a new draft.',
+      );
+    if (expectedVersion !== undefined && expectedVersion !== page.version)
+      throw WorkflowError('The page was saved again since you loaded it. Reload it, check it, then submit.', 'page_changed');
     const problems = await submissionProblems(page, revision, await loadStatements(revision.statementIds));
     if (problems.length) throw ChecksFailedError('This page cannot be submitted yet', problems);
     page.set({ status: 'in_review', submittedAt: new Date() });
     await page.save({ transaction });
-    await recordAudit({ actorId: actor.id, action: 'page.submitted', subjectType: 'page', subjectId: page.id, data: { revision: revision.number } }, transaction);
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'page.submitted',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { revision: revision.number },
+      },
+      transaction,
+    );
     return page;
   });
   const reviewers = await reviewersToNotify();
@@ -48,16 +63,30 @@ export async function submitPage(pageId: string, expectedVersion: number | undef
 export async function sendBackPage(pageId: string, comment: string, reviewer: User): Promise<Page> {
   const page = await getSequelize().transaction(async (transaction) => {
     const { page, revision } = await lockPage(pageId, transaction);
-    if (page.status !== 'in_review' && page.status !== 'needs_recheck') throw WorkflowError('Only a page in review or waiting for a re-check can be sent back.');
+    if (page.status !== 'in_review' && page.status !== 'needs_recheck')
+      throw WorkflowError('Only a page in review or waiting for a re-check can be sent back.');
     const from = page.status;
     page.set({ status: 'draft', lastReviewerId: reviewer.id });
     await page.save({ transaction });
-    await PageComment.create({ pageId: page.id, revisionNumber: revision.number, authorId: reviewer.id, body: comment }, { transaction });
-    await recordAudit({ actorId: reviewer.id, action: 'page.sent_back', subjectType: 'page', subjectId: page.id, data: { from, revision: revision.number } }, transaction);
+    await PageComment.create(
+      { pageId: page.id, revisionNumber: revision.number, authorId: reviewer.id, body: comment },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        actorId: reviewer.id,
+        action: 'page.sent_back',
+        subjectType: 'page',
+        subjectId: page.id,
+        data: { from, revision: revision.number },
+      },
+      transaction,
+    );
     return page;
   });
   const [writer] = await activeUsers([page.writerId]);
-  if (writer && writer.id !== reviewer.id) await deliver([pageSentBackMail(writer.email, writer.name, page, reviewer.name, comment)]);
+  if (writer && writer.id !== reviewer.id)
+    await deliver([pageSentBackMail(writer.email, writer.name, page, reviewer.name, comment)]);
   return page;
 }
 

@@ -22,9 +22,25 @@ export async function acceptStatementWording(statement: Statement, reviewer: Use
     const before = statement.acknowledgedTexts;
     // For a statement that follows tonight the reviewer accepts its method too: later nights follow it.
     const night = statement.night ? { ...statement.night, acceptedMethod: statement.night.method } : null;
-    statement.set({ acknowledgedTexts: statement.texts, acknowledgedById: reviewer.id, acknowledgedAt: new Date(), status: 'current', statusReason: null, night });
+    statement.set({
+      acknowledgedTexts: statement.texts,
+      acknowledgedById: reviewer.id,
+      acknowledgedAt: new Date(),
+      status: 'current',
+      statusReason: null,
+      night,
+    });
     await statement.save({ transaction });
-    await recordAudit({ actorId: reviewer.id, action: 'statement.wording_accepted', subjectType: 'statement', subjectId: statement.id, data: { before, after: statement.texts } }, transaction);
+    await recordAudit(
+      {
+        actorId: reviewer.id,
+        action: 'statement.wording_accepted',
+        subjectType: 'statement',
+        subjectId: statement.id,
+        data: { before, after: statement.texts },
+      },
+      transaction,
+    );
   });
   statementEvents.emit('accepted', { statementIds: [statement.id] });
   return statement;

@@ -1,4 +1,11 @@
-import type { LocalisedText, NightBasis, StatementTemplate, StoredNight, TemplateOutcome, UsedInput } from '@shared/statements/index.ts';
+import type {
+  LocalisedText,
+  NightBasis,
+  StatementTemplate,
+  StoredNight,
+  TemplateOutcome,
+  UsedInput,
+} from '@shared/statements/index.ts';
 import type { ResolvedModel } from '@shared/schemas/calc.ts';
 import type { Step } from '@shared/engine/working.ts';
 import type { Statement, StatementStatus } from '../../models/index.ts';
@@ -63,7 +70,12 @@ export function previousOf(statement: Statement): PreviousComputation {
 }
 
 /** Says in words what moved between the inputs last accepted and now. */
-export function describeInputChanges(before: UsedInput[], after: UsedInput[], modelBefore: ModelSummary | null, modelAfter: ModelSummary | null): string[] {
+export function describeInputChanges(
+  before: UsedInput[],
+  after: UsedInput[],
+  modelBefore: ModelSummary | null,
+  modelAfter: ModelSummary | null,
+): string[] {
   const changes: string[] = [];
   const key = (i: UsedInput) => `${i.quantity}|${i.band ?? ''}`;
   const old = new Map(before.map((i) => [key(i), i]));
@@ -71,8 +83,10 @@ export function describeInputChanges(before: UsedInput[], after: UsedInput[], mo
     const was = old.get(key(now));
     const label = `${now.quantity.replaceAll('_', ' ')}${now.band ? ` (${now.band})` : ''}`;
     if (!was) changes.push(`${label} is now used (${now.value} ${now.unit}, ${now.citation})`);
-    else if (was.measurementId !== now.measurementId) changes.push(`a different ${label} measurement is preferred: ${was.value} → ${now.value} ${now.unit} (${now.citation})`);
-    else if (was.value !== now.value || was.sigma !== now.sigma || was.minus !== now.minus || was.plus !== now.plus) changes.push(`${label} was corrected: ${was.value} → ${now.value} ${now.unit}`);
+    else if (was.measurementId !== now.measurementId)
+      changes.push(`a different ${label} measurement is preferred: ${was.value} → ${now.value} ${now.unit} (${now.citation})`);
+    else if (was.value !== now.value || was.sigma !== now.sigma || was.minus !== now.minus || was.plus !== now.plus)
+      changes.push(`${label} was corrected: ${was.value} → ${now.value} ${now.unit}`);
     else if (was.citation !== now.citation) changes.push(`the source of ${label} was edited`);
     old.delete(key(now));
   }
@@ -95,8 +109,10 @@ export function describeMethodChanges(a: NightBasis['method'], b: NightBasis['me
   const changes: string[] = [];
   if (a.planet !== b.planet) changes.push(`the object is now worked out as ${b.planet} (was ${a.planet})`);
   if (place(a.venue) !== place(b.venue)) changes.push(`the venue moved: ${place(a.venue)} → ${place(b.venue)}`);
-  if (a.venue.timeZone !== b.venue.timeZone) changes.push(`the venue's time zone changed: ${a.venue.timeZone} → ${b.venue.timeZone}`);
-  if (a.constants.auM !== b.constants.auM || a.constants.cKmS !== b.constants.cKmS) changes.push('the astronomical unit or the speed of light used changed');
+  if (a.venue.timeZone !== b.venue.timeZone)
+    changes.push(`the venue's time zone changed: ${a.venue.timeZone} → ${b.venue.timeZone}`);
+  if (a.constants.auM !== b.constants.auM || a.constants.cKmS !== b.constants.cKmS)
+    changes.push('the astronomical unit or the speed of light used changed');
   if (a.ephemeris !== b.ephemeris || a.skyVersion !== b.skyVersion) changes.push('the ephemeris or the sky rules changed');
   if (JSON.stringify(a.wording) !== JSON.stringify(b.wording)) changes.push('the sentence around the number changed');
   return changes;
@@ -117,7 +133,11 @@ export function describeMethodChanges(a: NightBasis['method'], b: NightBasis['me
  * @param template the template's flags (followsTonight)
  * @returns the new status, with the computed columns unless broken
  */
-export function applyOutcome(previous: PreviousComputation | null, outcome: TemplateOutcome, template: Pick<StatementTemplate, 'followsTonight'> = {}): Recomputed {
+export function applyOutcome(
+  previous: PreviousComputation | null,
+  outcome: TemplateOutcome,
+  template: Pick<StatementTemplate, 'followsTonight'> = {},
+): Recomputed {
   if (!outcome.ok) return { status: 'broken', statusReason: outcome.reason };
   const acceptedMethod = previous?.night?.acceptedMethod ?? null;
   const methodChanges = acceptedMethod && outcome.night ? describeMethodChanges(acceptedMethod, outcome.night.method) : null;
@@ -127,7 +147,10 @@ export function applyOutcome(previous: PreviousComputation | null, outcome: Temp
   let statusReason: string | null = null;
   if (status === 'changed') {
     const model = outcome.model ? { label: outcome.model.label, H0: outcome.model.H0 } : null;
-    const what = [...describeInputChanges(previous?.inputs ?? [], outcome.inputs, previous?.model ?? null, model), ...(methodChanges ?? [])];
+    const what = [
+      ...describeInputChanges(previous?.inputs ?? [], outcome.inputs, previous?.model ?? null, model),
+      ...(methodChanges ?? []),
+    ];
     statusReason = `The public wording changed${what.length ? `: ${what.join('; ')}` : ''}. A reviewer must accept the new wording.`;
   }
   return {
@@ -147,7 +170,12 @@ export function applyOutcome(previous: PreviousComputation | null, outcome: Temp
     model: outcome.model,
     // A first computation is accepted as it stands, method included; later ones keep the accepted
     // method (a reviewer's acceptance moves it), unless none was ever accepted and the wording stands.
-    night: outcome.night ? { ...outcome.night, acceptedMethod: acceptedMethod ?? (previous === null || status === 'current' ? outcome.night.method : null) } : null,
+    night: outcome.night
+      ? {
+          ...outcome.night,
+          acceptedMethod: acceptedMethod ?? (previous === null || status === 'current' ? outcome.night.method : null),
+        }
+      : null,
     followedNight: followedNight && !sameTexts(previous?.acknowledgedTexts ?? null, outcome.texts),
   };
 }

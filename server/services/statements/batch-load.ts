@@ -67,13 +67,20 @@ export async function loadBatchJob(
   );
   const objectIds = [...new Set(rows.map((r) => r.sky_object_id))];
   const objects = objectIds.length
-    ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[] }>('SELECT id, name, kind, designations FROM sky_objects WHERE id = ANY($1::uuid[])', {
-        bind: [objectIds],
-        type: QueryTypes.SELECT,
-      })
+    ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[] }>(
+        'SELECT id, name, kind, designations FROM sky_objects WHERE id = ANY($1::uuid[])',
+        {
+          bind: [objectIds],
+          type: QueryTypes.SELECT,
+        },
+      )
     : [];
   const contexts = await buildTemplateContexts(objects, settings);
-  const venues = await buildVenueNights([...new Set(rows.flatMap((r) => (r.venue_id ? [r.venue_id] : [])))], options.computedAt, options.night);
+  const venues = await buildVenueNights(
+    [...new Set(rows.flatMap((r) => (r.venue_id ? [r.venue_id] : [])))],
+    options.computedAt,
+    options.night,
+  );
   for (const r of rows) {
     const base = contexts.get(r.sky_object_id);
     const venue = r.venue_id ? venues.get(r.venue_id) : undefined;

@@ -1,5 +1,11 @@
 import { Op, QueryTypes } from 'sequelize';
-import { nightFromSky, type StatementMeasurement, type StatementNight, type StatementVenue, type TemplateContext } from '@shared/statements/index.ts';
+import {
+  nightFromSky,
+  type StatementMeasurement,
+  type StatementNight,
+  type StatementVenue,
+  type TemplateContext,
+} from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import { findQuantity } from '@shared/catalogue/quantities.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
@@ -18,7 +24,9 @@ export interface SettingsSnapshot {
 
 type ObjectRef = { id: string; name: string; kind: string; designations?: string[] };
 
-function asStatementMeasurement(m: Pick<PreferredMeasurement, 'measurementId' | 'quantity' | 'value' | 'unit' | 'band' | 'uncertainty' | 'source'>): StatementMeasurement {
+function asStatementMeasurement(
+  m: Pick<PreferredMeasurement, 'measurementId' | 'quantity' | 'value' | 'unit' | 'band' | 'uncertainty' | 'source'>,
+): StatementMeasurement {
   return {
     id: m.measurementId,
     quantity: m.quantity,
@@ -33,7 +41,12 @@ function asStatementMeasurement(m: Pick<PreferredMeasurement, 'measurementId' | 
 }
 
 function contextFor(object: ObjectRef, measurements: StatementMeasurement[], settings: SettingsSnapshot): TemplateContext {
-  return { object: { id: object.id, name: object.name, kind: object.kind, designations: object.designations ?? [] }, measurements, model: settings.model, band: settings.band };
+  return {
+    object: { id: object.id, name: object.name, kind: object.kind, designations: object.designations ?? [] },
+    measurements,
+    model: settings.model,
+    band: settings.band,
+  };
 }
 
 /** A venue and the night a statement about it reads (null when its sky could not be computed). */
@@ -51,7 +64,11 @@ export interface VenueNight {
  * @param night a night chosen for one venue
  * @returns by venue id; venues that no longer exist are left out
  */
-export async function buildVenueNights(venueIds: string[], at: Date, night?: { venueId: string; localDate: string }): Promise<Map<string, VenueNight>> {
+export async function buildVenueNights(
+  venueIds: string[],
+  at: Date,
+  night?: { venueId: string; localDate: string },
+): Promise<Map<string, VenueNight>> {
   const found = new Map<string, VenueNight>();
   if (venueIds.length === 0) return found;
   for (const v of await Venue.findAll({ where: { id: { [Op.in]: venueIds } } })) {
@@ -64,7 +81,17 @@ export async function buildVenueNights(venueIds: string[], at: Date, night?: { v
       // A venue the sky cannot be computed for: its statements break, saying so (the template's refusal).
       if (!(error instanceof SkyInputError)) throw error;
     }
-    found.set(v.id, { venue: { id: v.id, name: v.name, latitude: v.latitude, longitude: v.longitude, elevationM: v.elevationM, timeZone: v.timeZone }, night: sky });
+    found.set(v.id, {
+      venue: {
+        id: v.id,
+        name: v.name,
+        latitude: v.latitude,
+        longitude: v.longitude,
+        elevationM: v.elevationM,
+        timeZone: v.timeZone,
+      },
+      night: sky,
+    });
   }
   return found;
 }
@@ -104,7 +131,10 @@ interface PreferredRow {
  * @param settings the adopted settings
  * @returns each object's context by object id
  */
-export async function buildTemplateContexts(objects: ObjectRef[], settings: SettingsSnapshot): Promise<Map<string, TemplateContext>> {
+export async function buildTemplateContexts(
+  objects: ObjectRef[],
+  settings: SettingsSnapshot,
+): Promise<Map<string, TemplateContext>> {
   const byObject = new Map<string, StatementMeasurement[]>(objects.map((o) => [o.id, []]));
   if (objects.length > 0) {
     const rows = await getSequelize().query<PreferredRow>(

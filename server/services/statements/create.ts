@@ -19,7 +19,12 @@ import { buildTemplateContext, buildVenueNights, withVenue } from './context.ts'
  * @param venueId the venue, required by templates that need one and refused by the others
  * @throws HttpError 400 `venue_required` / `venue_not_used`, 404 unknown object, template or venue, 422 `statement_not_computable`
  */
-export async function findOrCreateStatement(objectId: string, templateId: string, actor: User, venueId: string | null = null): Promise<{ statement: Statement; created: boolean }> {
+export async function findOrCreateStatement(
+  objectId: string,
+  templateId: string,
+  actor: User,
+  venueId: string | null = null,
+): Promise<{ statement: Statement; created: boolean }> {
   const template = findTemplate(templateId);
   if (!template) throw NotFoundError(`There is no statement template “${templateId}”.`);
   if (template.needsVenue && !venueId) {
@@ -37,15 +42,28 @@ export async function findOrCreateStatement(objectId: string, templateId: string
   const object = await SkyObject.findByPk(objectId);
   if (!object) throw NotFoundError('That object is not in the catalogue.');
   const settings = await getSettings();
-  const base = await buildTemplateContext(object, { model: settings.cosmologyModel, band: settings.defaultBand, version: settings.version });
+  const base = await buildTemplateContext(object, {
+    model: settings.cosmologyModel,
+    band: settings.defaultBand,
+    version: settings.version,
+  });
   const night = venue ? (await buildVenueNights([venue.id], new Date())).get(venue.id) : undefined;
   const ctx = night ? withVenue(base, night) : base;
   const outcome = evaluateStatement(templateId, ctx);
   if (!outcome.ok) {
-    throw new HttpError(422, 'statement_not_computable', `“${template.title}” cannot be worked out for ${object.name}: ${outcome.reason}`);
+    throw new HttpError(
+      422,
+      'statement_not_computable',
+      `“${template.title}” cannot be worked out for ${object.name}: ${outcome.reason}`,
+    );
   }
   const computed = applyOutcome(null, outcome);
-  if (computed.status === 'broken') throw new HttpError(422, 'statement_not_computable', `“${template.title}” cannot be worked out for ${object.name}: ${computed.statusReason}`);
+  if (computed.status === 'broken')
+    throw new HttpError(
+      422,
+      'statement_not_computable',
+      `“${template.title}” cannot be worked out for ${object.name}: ${computed.statusReason}`,
+    );
   const { model, working, followedNight: _first, ...fields } = computed;
   const packed = packForStorage(working);
   return getSequelize().transaction(async (transaction) => {
@@ -53,12 +71,31 @@ export async function findOrCreateStatement(objectId: string, templateId: string
     await saveSkeletons(packed.skeletons, transaction);
     const [statement, created] = await Statement.findOrCreate({
       where: { skyObjectId: objectId, templateId, venueId },
-      defaults: { ...fields, working: packed.stored, modelId, settingsVersion: settings.version, computedAt: new Date(), skyObjectId: objectId, templateId, venueId, createdById: actor.id },
+      defaults: {
+        ...fields,
+        working: packed.stored,
+        modelId,
+        settingsVersion: settings.version,
+        computedAt: new Date(),
+        skyObjectId: objectId,
+        templateId,
+        venueId,
+        createdById: actor.id,
+      },
       transaction,
     });
     if (created) {
       await linkStatementInputs(statement.id, fields.inputs, transaction);
-      await recordAudit({ actorId: actor.id, action: 'statement.created', subjectType: 'statement', subjectId: statement.id, data: { objectId, templateId, venueId } }, transaction);
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'statement.created',
+          subjectType: 'statement',
+          subjectId: statement.id,
+          data: { objectId, templateId, venueId },
+        },
+        transaction,
+      );
     }
     return { statement, created };
   });

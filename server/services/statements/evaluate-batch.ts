@@ -1,4 +1,10 @@
-import { evaluateStatement, findTemplate, type StatementLocale, type TemplateContext, type UsedInput } from '@shared/statements/index.ts';
+import {
+  evaluateStatement,
+  findTemplate,
+  type StatementLocale,
+  type TemplateContext,
+  type UsedInput,
+} from '@shared/statements/index.ts';
 import type { SkeletonJson } from '@shared/statements/working-codec.ts';
 import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
 import { packForStorage } from './working-pack.ts';
@@ -45,7 +51,8 @@ export interface BatchModel {
  * Where a statement's context is in BatchJob.contexts: by object, or by object and venue for a
  * statement about a venue's night (its context adds the venue and the night's sky).
  */
-export const contextKey = (skyObjectId: string, venueId: string | null): string => (venueId ? `${skyObjectId}@${venueId}` : skyObjectId);
+export const contextKey = (skyObjectId: string, venueId: string | null): string =>
+  venueId ? `${skyObjectId}@${venueId}` : skyObjectId;
 
 /** A batch of statements to compute: plain data, so it can cross to a worker thread. */
 export interface BatchJob {
@@ -86,7 +93,18 @@ export interface PreviewChange {
   reason: string | null;
 }
 
-const INPUT_FIELDS = ['measurementId', 'quantity', 'band', 'value', 'unit', 'sigma', 'minus', 'plus', 'sourceId', 'citation'] as const;
+const INPUT_FIELDS = [
+  'measurementId',
+  'quantity',
+  'band',
+  'value',
+  'unit',
+  'sigma',
+  'minus',
+  'plus',
+  'sourceId',
+  'citation',
+] as const;
 
 /** Same inputs, field by field (stored inputs come back from jsonb with their keys reordered). */
 function sameInputs(a: UsedInput[], b: UsedInput[]): boolean {
@@ -112,7 +130,9 @@ function sameLinks(a: UsedInput[], b: UsedInput[]): boolean {
 export function evaluateBatch(job: BatchJob & { previewLocale: StatementLocale }): PreviewChange[];
 export function evaluateBatch(job: BatchJob): WriteBatchResult;
 export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[] {
-  const ordered = [...job.statements].sort((a, b) => (a.skyObjectId < b.skyObjectId ? -1 : a.skyObjectId > b.skyObjectId ? 1 : 0));
+  const ordered = [...job.statements].sort((a, b) =>
+    a.skyObjectId < b.skyObjectId ? -1 : a.skyObjectId > b.skyObjectId ? 1 : 0,
+  );
   const computed: Record<string, unknown>[] = [];
   const brokenRows: Record<string, unknown>[] = [];
   const changed: string[] = [];
@@ -130,13 +150,23 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     if (job.previewLocale) {
       const newText = result.status === 'broken' ? null : (result.texts[job.previewLocale] ?? null);
       if (newText !== (statement.previewText ?? null) || result.status !== statement.status) {
-        preview.push({ statementId: statement.id, newText, newStatus: result.status, reason: result.status === 'broken' ? result.statusReason : null });
+        preview.push({
+          statementId: statement.id,
+          newText,
+          newStatus: result.status,
+          reason: result.status === 'broken' ? result.statusReason : null,
+        });
       }
       continue;
     }
     if (result.status === 'broken') {
       if (statement.status !== 'broken') broken.push(statement.id);
-      brokenRows.push({ id: statement.id, status_reason: result.statusReason, settings_version: job.settingsVersion, computed_at: job.computedAt });
+      brokenRows.push({
+        id: statement.id,
+        status_reason: result.statusReason,
+        settings_version: job.settingsVersion,
+        computed_at: job.computedAt,
+      });
       continue;
     }
     if (result.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
@@ -144,7 +174,8 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     if (result.model) {
       // Outcomes share the engine's one description per model: compare each distinct one once.
       if (result.model !== checkedModel) {
-        if (!job.model || JSON.stringify(result.model) !== job.model.json) throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
+        if (!job.model || JSON.stringify(result.model) !== job.model.json)
+          throw new Error(`Statement ${statement.id} was computed under a cosmology other than the adopted one.`);
         checkedModel = result.model;
       }
       modelId = job.model!.id;
@@ -152,7 +183,8 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     const inputsMoved = !sameInputs(previous.inputs, result.inputs);
     if (inputsMoved && !sameLinks(previous.inputs, result.inputs)) {
       relinked.push(statement.id);
-      for (const i of result.inputs) inputLinks.push({ statement_id: statement.id, measurement_id: i.measurementId, source_id: i.sourceId });
+      for (const i of result.inputs)
+        inputLinks.push({ statement_id: statement.id, measurement_id: i.measurementId, source_id: i.sourceId });
     }
     const packed = packForStorage(result.working);
     for (const entry of packed.skeletons) skeletons.set(...entry);
@@ -180,5 +212,14 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     });
   }
   if (job.previewLocale) return preview;
-  return { computedRows: JSON.stringify(computed), brokenRows: JSON.stringify(brokenRows), skeletons: [...skeletons], relinked, inputLinks: JSON.stringify(inputLinks), written: computed.length + brokenRows.length, changed, broken };
+  return {
+    computedRows: JSON.stringify(computed),
+    brokenRows: JSON.stringify(brokenRows),
+    skeletons: [...skeletons],
+    relinked,
+    inputLinks: JSON.stringify(inputLinks),
+    written: computed.length + brokenRows.length,
+    changed,
+    broken,
+  };
 }

@@ -55,10 +55,11 @@ function startWorker(): Slot {
   worker.on('error', (error) => logger.error({ err: error }, 'statement worker failed'));
   worker.on('exit', (code) => {
     // Whatever it was computing is lost: fail those batches (the job is retried) and replace it.
-    for (const [id, waiting] of pending) if (waiting.slot === slot) {
-      pending.delete(id);
-      waiting.reject(new Error(`A statement worker stopped (exit code ${code}) in the middle of a batch.`));
-    }
+    for (const [id, waiting] of pending)
+      if (waiting.slot === slot) {
+        pending.delete(id);
+        waiting.reject(new Error(`A statement worker stopped (exit code ${code}) in the middle of a batch.`));
+      }
     if (slots) slots = slots.filter((s) => s !== slot);
   });
   return slot;
@@ -77,9 +78,15 @@ function leastBusy(size: number): Slot {
  * @param options.inline compute on this thread
  * @returns what evaluateBatch returns for it
  */
-export function runBatch(job: BatchJob & { previewLocale: StatementLocale }, options?: { inline?: boolean }): Promise<PreviewChange[]>;
+export function runBatch(
+  job: BatchJob & { previewLocale: StatementLocale },
+  options?: { inline?: boolean },
+): Promise<PreviewChange[]>;
 export function runBatch(job: BatchJob, options?: { inline?: boolean }): Promise<WriteBatchResult>;
-export function runBatch(job: BatchJob, { inline = false }: { inline?: boolean } = {}): Promise<WriteBatchResult | PreviewChange[]> {
+export function runBatch(
+  job: BatchJob,
+  { inline = false }: { inline?: boolean } = {},
+): Promise<WriteBatchResult | PreviewChange[]> {
   const size = poolSize();
   if (size === 0 || inline) {
     try {

@@ -10,7 +10,9 @@ export interface WorkerRequest {
   job: BatchJob;
 }
 
-export type WorkerReply = { id: number; ok: true; result: ReturnType<typeof evaluateBatch> } | { id: number; ok: false; message: string };
+export type WorkerReply =
+  | { id: number; ok: true; result: ReturnType<typeof evaluateBatch> }
+  | { id: number; ok: false; message: string };
 
 parentPort!.on('message', ({ id, job }: WorkerRequest) => {
   let reply: WorkerReply;

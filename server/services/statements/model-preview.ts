@@ -23,10 +23,13 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
   const locale = settings.defaultLocale as StatementLocale;
   const cosmological = STATEMENT_TEMPLATES.filter((t) => t.usesCosmology).map((t) => t.id);
   const ids = (
-    await getSequelize().query<{ id: string }>('SELECT id FROM statements WHERE template_id = ANY($1::text[]) ORDER BY sky_object_id', {
-      bind: [cosmological],
-      type: QueryTypes.SELECT,
-    })
+    await getSequelize().query<{ id: string }>(
+      'SELECT id FROM statements WHERE template_id = ANY($1::text[]) ORDER BY sky_object_id',
+      {
+        bind: [cosmological],
+        type: QueryTypes.SELECT,
+      },
+    )
   ).map((r) => r.id);
   const proposed = { model, band: settings.defaultBand, version: settings.version };
   const computedAt = new Date();
@@ -43,9 +46,19 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
   if (changes.length === 0) return { rows: [], checked: ids.length };
 
   // Names and current texts only for the statements that move.
-  const moved = await Statement.findAll({ attributes: ['id', 'skyObjectId', 'templateId', 'texts'], where: { id: { [Op.in]: changes.map((c) => c.statementId) } } });
+  const moved = await Statement.findAll({
+    attributes: ['id', 'skyObjectId', 'templateId', 'texts'],
+    where: { id: { [Op.in]: changes.map((c) => c.statementId) } },
+  });
   const byId = new Map(moved.map((s) => [s.id, s]));
-  const objects = new Map((await SkyObject.findAll({ attributes: ['id', 'name'], where: { id: { [Op.in]: [...new Set(moved.map((s) => s.skyObjectId))] } } })).map((o) => [o.id, o]));
+  const objects = new Map(
+    (
+      await SkyObject.findAll({
+        attributes: ['id', 'name'],
+        where: { id: { [Op.in]: [...new Set(moved.map((s) => s.skyObjectId))] } },
+      })
+    ).map((o) => [o.id, o]),
+  );
   const order = new Map(ids.map((id, i) => [id, i]));
   const rows: PreviewRow[] = [];
   for (const change of changes.sort((a, b) => order.get(a.statementId)! - order.get(b.statementId)!)) {

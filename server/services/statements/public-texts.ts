@@ -28,7 +28,13 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
   return new Map(
     rows.map((s) => {
       const follows = !!findTemplate(s.templateId)?.followsTonight && s.status === 'current' && s.acknowledgedTexts !== null;
-      return [s.id, { tonightTexts: follows ? s.acknowledgedTexts : null, asOf: (follows ? s.computedAt : (s.acknowledgedAt ?? s.computedAt)).toISOString() }];
+      return [
+        s.id,
+        {
+          tonightTexts: follows ? s.acknowledgedTexts : null,
+          asOf: (follows ? s.computedAt : (s.acknowledgedAt ?? s.computedAt)).toISOString(),
+        },
+      ];
     }),
   );
 }
@@ -37,4 +43,3 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
 export function publicText(signed: string, shown: PublicStatement | undefined, locale: string): string {
   return shown?.tonightTexts?.[locale as StatementLocale] ?? signed;
 }
-

@@ -36,10 +36,20 @@ export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
 
 async function idsFor(scope: RecomputeScope): Promise<string[]> {
   if ('statementIds' in scope) return scope.statementIds;
-  if ('venueId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { venueId: scope.venueId }, order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
-  if ('objectId' in scope) return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
+  if ('venueId' in scope)
+    return (
+      await Statement.findAll({
+        attributes: ['id'],
+        where: { venueId: scope.venueId },
+        order: [['skyObjectId', 'ASC']],
+        raw: true,
+      })
+    ).map((s) => s.id);
+  if ('objectId' in scope)
+    return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
-  if ('all' in scope) return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
+  if ('all' in scope)
+    return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
   // Statements whose inputs used this measurement or source.
   const rows = await getSequelize().query<{ id: string }>(
     'measurementId' in scope
@@ -99,7 +109,8 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
   const sequelize = getSequelize();
   await sequelize.transaction(async (transaction) => {
     const current = await getSettings(transaction, 'share');
-    if (current.version !== settings.version) throw new SettingsMovedError('The organisation settings changed during the recompute.');
+    if (current.version !== settings.version)
+      throw new SettingsMovedError('The organisation settings changed during the recompute.');
     await saveSkeletons(result.skeletons, transaction);
     if (result.computedRows !== '[]') await sequelize.query(UPDATE_COMPUTED, { bind: [result.computedRows], transaction });
     if (result.brokenRows !== '[]') await sequelize.query(UPDATE_BROKEN, { bind: [result.brokenRows], transaction });
@@ -121,7 +132,10 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
  * @returns how many statements were written, and which changed or broke
  * @throws SettingsMovedError when the settings changed during the recompute
  */
-export async function recomputeStatements(scope: RecomputeScope, options: { settings?: SettingsSnapshot } = {}): Promise<{ written: number; changed: string[]; broken: string[] }> {
+export async function recomputeStatements(
+  scope: RecomputeScope,
+  options: { settings?: SettingsSnapshot } = {},
+): Promise<{ written: number; changed: string[]; broken: string[] }> {
   const settings = options.settings ?? (await currentSettingsSnapshot());
   const ids = await idsFor(scope);
   // Every venue's new night asks, most with no statements: nothing to load or store then.
@@ -187,7 +201,16 @@ export const enqueueRecompute = defineBatchJob<{ scope: RecomputeScope }>(
     for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
       try {
         const result = await recomputeStatements(scope);
-        logger.info({ scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope, jobs: jobs.length, written: result.written, changed: result.changed.length, broken: result.broken.length }, 'statements recomputed');
+        logger.info(
+          {
+            scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope,
+            jobs: jobs.length,
+            written: result.written,
+            changed: result.changed.length,
+            broken: result.broken.length,
+          },
+          'statements recomputed',
+        );
       } catch (error) {
         if (error instanceof SettingsMovedError) {
           logger.info({ scope }, 'recompute superseded by a settings change');

@@ -15,6 +15,9 @@ export async function linkStatementInputs(statementId: string, inputs: UsedInput
     `INSERT INTO statement_inputs (statement_id, measurement_id, source_id)
        SELECT $1::uuid, l.measurement_id, l.source_id FROM json_to_recordset($2::json) AS l(measurement_id uuid, source_id uuid)
      ON CONFLICT (statement_id, measurement_id) DO NOTHING`,
-    { bind: [statementId, JSON.stringify(inputs.map((i) => ({ measurement_id: i.measurementId, source_id: i.sourceId })))], transaction },
+    {
+      bind: [statementId, JSON.stringify(inputs.map((i) => ({ measurement_id: i.measurementId, source_id: i.sourceId })))],
+      transaction,
+    },
   );
 }

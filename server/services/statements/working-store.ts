@@ -42,10 +42,13 @@ export async function saveSkeletons(skeletons: Iterable<[string, SkeletonJson]>,
 export async function readWorking(stored: unknown): Promise<Step[]> {
   const missing = skeletonIds(stored).filter((id) => !cache.has(id));
   if (missing.length > 0) {
-    const rows = await getSequelize().query<{ id: string; skeleton: string }>('SELECT id, skeleton::text AS skeleton FROM working_skeletons WHERE id = ANY($1::text[])', {
-      bind: [missing],
-      type: QueryTypes.SELECT,
-    });
+    const rows = await getSequelize().query<{ id: string; skeleton: string }>(
+      'SELECT id, skeleton::text AS skeleton FROM working_skeletons WHERE id = ANY($1::text[])',
+      {
+        bind: [missing],
+        type: QueryTypes.SELECT,
+      },
+    );
     for (const row of rows) remember(row.id, row.skeleton);
   }
   return unpackWorking(stored, (id) => cache.get(id));

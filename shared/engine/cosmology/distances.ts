@@ -36,7 +36,10 @@ export function prepareCosmology(model: FlrwModel): Cosmology {
 function checkRedshift(model: FlrwModel, z: number): void {
   if (!(z > -1)) throw new CalcError('out_of_range', `z must be greater than −1 (got ${z})`);
   if (z >= model.zBounce) {
-    throw new CalcError('no_big_bang', `z must be below ${model.zBounce.toPrecision(6)}, where this model has no big bang: E(z)² ≤ 0 there (got z = ${z})`);
+    throw new CalcError(
+      'no_big_bang',
+      `z must be below ${model.zBounce.toPrecision(6)}, where this model has no big bang: E(z)² ≤ 0 there (got z = ${z})`,
+    );
   }
 }
 
@@ -163,22 +166,41 @@ export function luminosityDistanceMpc(c: Cosmology, z: number): number {
  * @returns the root
  */
 export function brent(f: (x: number) => number, lo: number, hi: number, tol = 1e-13): number {
-  let a = lo, b = hi, fa = f(a), fb = f(b);
+  let a = lo,
+    b = hi,
+    fa = f(a),
+    fb = f(b);
   if (fa * fb > 0) throw new CalcError('no_solution', 'no root in the bracket');
   if (Math.abs(fa) < Math.abs(fb)) [a, b, fa, fb] = [b, a, fb, fa];
-  let c = a, fc = fa, d = b - a, mflag = true;
+  let c = a,
+    fc = fa,
+    d = b - a,
+    mflag = true;
   for (let i = 0; i < 200 && fb !== 0 && Math.abs(b - a) > tol * (1 + Math.abs(b)); i++) {
-    let s = fa !== fc && fb !== fc
-      ? (a * fb * fc) / ((fa - fb) * (fa - fc)) + (b * fa * fc) / ((fb - fa) * (fb - fc)) + (c * fa * fb) / ((fc - fa) * (fc - fb))
-      : b - (fb * (b - a)) / (fb - fa);
+    let s =
+      fa !== fc && fb !== fc
+        ? (a * fb * fc) / ((fa - fb) * (fa - fc)) +
+          (b * fa * fc) / ((fb - fa) * (fb - fc)) +
+          (c * fa * fb) / ((fc - fa) * (fc - fb))
+        : b - (fb * (b - a)) / (fb - fa);
     const lowBound = (3 * a + b) / 4;
-    const bisect: boolean = !((s > Math.min(lowBound, b) && s < Math.max(lowBound, b))) ||
-      (mflag && Math.abs(s - b) >= Math.abs(b - c) / 2) || (!mflag && Math.abs(s - b) >= Math.abs(c - d) / 2);
+    const bisect: boolean =
+      !(s > Math.min(lowBound, b) && s < Math.max(lowBound, b)) ||
+      (mflag && Math.abs(s - b) >= Math.abs(b - c) / 2) ||
+      (!mflag && Math.abs(s - b) >= Math.abs(c - d) / 2);
     if (bisect) s = (a + b) / 2;
     mflag = bisect;
     const fs = f(s);
-    d = c; c = b; fc = fb;
-    if (fa * fs < 0) { b = s; fb = fs; } else { a = s; fa = fs; }
+    d = c;
+    c = b;
+    fc = fb;
+    if (fa * fs < 0) {
+      b = s;
+      fb = fs;
+    } else {
+      a = s;
+      fa = fs;
+    }
     if (Math.abs(fa) < Math.abs(fb)) [a, b, fa, fb] = [b, a, fb, fa];
   }
   return b;

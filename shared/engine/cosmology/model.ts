@@ -139,7 +139,10 @@ export function createModel(p: CosmologyParams): FlrwModel {
   const flat = p.Ode0 === undefined;
   const Ode0 = flat ? 1 - p.Om0 - Ogamma0 - Onu0 : (p.Ode0 as number);
   if (Ode0 < 0) {
-    throw new CalcError('negative_density', `model.Om0 is too large for a flat model: ΩΛ = 1 − Ωm − Ωr would be ${Ode0.toPrecision(4)}`);
+    throw new CalcError(
+      'negative_density',
+      `model.Om0 is too large for a flat model: ΩΛ = 1 − Ωm − Ωr would be ${Ode0.toPrecision(4)}`,
+    );
   }
   const Ok0 = flat ? 0 : 1 - p.Om0 - Ode0 - Ogamma0 - Onu0;
   const Om0 = p.Om0;
@@ -153,10 +156,24 @@ export function createModel(p: CosmologyParams): FlrwModel {
   const zBounce = findBounce(a4e2);
   const hasBigBang = zBounce === Infinity && (radiation(0) > 0 || Om0 > 0 || Ok0 > 0);
   return {
-    name: p.name, H0: p.H0, Om0, Ode0, Ok0, Ogamma0, Onu0, Tcmb0, Neff, m_nu: masses, Ob0: p.Ob0, flat,
+    name: p.name,
+    H0: p.H0,
+    Om0,
+    Ode0,
+    Ok0,
+    Ogamma0,
+    Onu0,
+    Tcmb0,
+    Neff,
+    m_nu: masses,
+    Ob0: p.Ob0,
+    flat,
     hubbleDistance: hubbleDistanceMpc(p.H0),
     hubbleTime: hubbleTimeGyr(p.H0),
-    zBounce, hasBigBang, e2, a4e2,
+    zBounce,
+    hasBigBang,
+    e2,
+    a4e2,
   };
 }
 

@@ -17,7 +17,8 @@ export interface Preset {
   sources: Record<string, string>;
 }
 
-const PLANCK18_REF = 'Planck Collaboration (2020), Planck 2018 results VI, A&A 641, A6, Table 2, TT,TE,EE+lowE+lensing+BAO column';
+const PLANCK18_REF =
+  'Planck Collaboration (2020), Planck 2018 results VI, A&A 641, A6, Table 2, TT,TE,EE+lowE+lensing+BAO column';
 const WMAP9_REF = 'Hinshaw et al. (2013), ApJS 208, 19, Table 4, WMAP+eCMB+BAO+H0 column (as astropy.cosmology.WMAP9)';
 
 /** Planck 2018, as astropy's Planck18. */

@@ -72,7 +72,13 @@ export function currentH0(ctx: Ctx): number {
  * @returns the working value
  */
 export function h0Value(ctx: Ctx): WorkingValue {
-  return { symbol: 'H0', name: 'Hubble constant', value: currentH0(ctx), unit: 'km/s/Mpc', source: ctx.model.sources.H0 ?? 'model' };
+  return {
+    symbol: 'H0',
+    name: 'Hubble constant',
+    value: currentH0(ctx),
+    unit: 'km/s/Mpc',
+    source: ctx.model.sources.H0 ?? 'model',
+  };
 }
 
 /**

@@ -88,10 +88,17 @@ export function transverseSteps(ctx: Ctx, z: number): number {
   const Ok = c.model.Ok0;
   const value = dH * transverseFromLineOfSight(Ok, dC / dH);
   if (Ok < 0 && z > 0 && !(value > 0)) {
-    throw new CalcError('out_of_range', `z = ${z} lies beyond the antipode of this closed model, where the transverse comoving distance is not positive`);
+    throw new CalcError(
+      'out_of_range',
+      `z = ${z} lies beyond the antipode of this closed model, where the transverse comoving distance is not positive`,
+    );
   }
   const formula =
-    Ok > 0 ? 'D_M = (D_H/√Ω_k) sinh(√Ω_k D_C/D_H)' : Ok < 0 ? 'D_M = (D_H/√|Ω_k|) sin(√|Ω_k| D_C/D_H)' : 'D_M = D_C (flat: Ω_k = 0)';
+    Ok > 0
+      ? 'D_M = (D_H/√Ω_k) sinh(√Ω_k D_C/D_H)'
+      : Ok < 0
+        ? 'D_M = (D_H/√|Ω_k|) sin(√|Ω_k| D_C/D_H)'
+        : 'D_M = D_C (flat: Ω_k = 0)';
   return record(ctx.steps, value, () => ({
     title: 'Transverse comoving distance (Hogg 1999, eq. 16)',
     formula,
@@ -111,7 +118,10 @@ export function angularDiameterSteps(ctx: Ctx, z: number): number {
   return record(ctx.steps, dM / (1 + z), () => ({
     title: 'Angular-diameter distance (Hogg 1999, eq. 18)',
     formula: 'D_A = D_M / (1 + z)',
-    inputs: [inputValue(ctx, 'z', z), { symbol: 'D_M', name: 'transverse comoving distance', value: dM, unit: 'Mpc', source: 'previous step' }],
+    inputs: [
+      inputValue(ctx, 'z', z),
+      { symbol: 'D_M', name: 'transverse comoving distance', value: dM, unit: 'Mpc', source: 'previous step' },
+    ],
     constants: [],
     result: { symbol: 'D_A', name: 'angular-diameter distance', unit: 'Mpc' },
   }));
@@ -123,7 +133,10 @@ export function luminositySteps(ctx: Ctx, z: number): number {
   return record(ctx.steps, (1 + z) * dM, () => ({
     title: 'Luminosity distance (Hogg 1999, eq. 21)',
     formula: 'D_L = (1 + z) D_M',
-    inputs: [inputValue(ctx, 'z', z), { symbol: 'D_M', name: 'transverse comoving distance', value: dM, unit: 'Mpc', source: 'previous step' }],
+    inputs: [
+      inputValue(ctx, 'z', z),
+      { symbol: 'D_M', name: 'transverse comoving distance', value: dM, unit: 'Mpc', source: 'previous step' },
+    ],
     constants: [],
     result: { symbol: 'D_L', name: 'luminosity distance', unit: 'Mpc' },
   }));
@@ -168,9 +181,16 @@ export function ageSteps(ctx: Ctx, z: number, today: boolean): number {
   return record(ctx.steps, tH * integral, () => ({
     title: today ? 'Age of the universe today' : 'Age of the universe when the light set out',
     formula: today ? 't₀ = t_H ∫₀^∞ dz′ / ((1+z′) E(z′))' : 't(z) = t_H ∫_z^∞ dz′ / ((1+z′) E(z′))',
-    inputs: [...(today ? [] : [inputValue(ctx, 'z', z)]), { symbol: 't_H', name: 'Hubble time', value: tH, unit: 'Gyr', source: 'previous step' }],
+    inputs: [
+      ...(today ? [] : [inputValue(ctx, 'z', z)]),
+      { symbol: 't_H', name: 'Hubble time', value: tH, unit: 'Gyr', source: 'previous step' },
+    ],
     constants: [],
-    result: { symbol: today ? 't₀' : 't(z)', name: today ? 'age of the universe today' : 'age of the universe at z', unit: 'Gyr' },
+    result: {
+      symbol: today ? 't₀' : 't(z)',
+      name: today ? 'age of the universe today' : 'age of the universe at z',
+      unit: 'Gyr',
+    },
     note: `Integral = ${integral}. Evaluated with the substitution a = s² (a = 1/(1+z)), which keeps the integrand smooth down to the big bang; adaptive Gauss–Legendre quadrature.`,
   }));
 }
@@ -181,7 +201,10 @@ export function hubbleParameterSteps(ctx: Ctx, z: number): number {
   return record(ctx.steps, currentH0(ctx) * e, () => ({
     title: 'Hubble parameter at the redshift',
     formula: 'H(z) = H0 E(z)',
-    inputs: [h0Value(ctx), { symbol: 'E(z)', name: 'dimensionless Hubble parameter', value: e, unit: '', source: 'previous step' }],
+    inputs: [
+      h0Value(ctx),
+      { symbol: 'E(z)', name: 'dimensionless Hubble parameter', value: e, unit: '', source: 'previous step' },
+    ],
     constants: [],
     result: { symbol: 'H(z)', name: 'Hubble parameter', unit: 'km/s/Mpc' },
   }));

@@ -23,7 +23,10 @@ export function zFromLookbackSteps(ctx: Ctx, t: number): number {
   if (c.model.hasBigBang) {
     const age = ageIntegral(c, 0) * tH;
     if (t >= age) {
-      throw new CalcError('no_solution', `lookback_gyr must be less than the age of the universe in this model, ${age.toFixed(4)} Gyr (got ${t})`);
+      throw new CalcError(
+        'no_solution',
+        `lookback_gyr must be less than the age of the universe in this model, ${age.toFixed(4)} Gyr (got ${t})`,
+      );
     }
   }
   const f = (u: number): number => lookbackIntegral(c, Math.expm1(u)) * tH - t;
@@ -58,7 +61,11 @@ export function zFromLuminosityDistanceSteps(ctx: Ctx, d: number): number {
     lo = uu;
     if (uu >= limit) break;
   }
-  if (hi < 0) throw new CalcError('no_solution', `distance_mpc = ${d} is larger than any luminosity distance this model reaches below z = 10⁶`);
+  if (hi < 0)
+    throw new CalcError(
+      'no_solution',
+      `distance_mpc = ${d} is larger than any luminosity distance this model reaches below z = 10⁶`,
+    );
   const z = Math.expm1(brent(f, lo, hi));
   return record(ctx.steps, z, () => ({
     title: 'Redshift at which the luminosity distance equals the given distance',

@@ -52,7 +52,15 @@ export function distanceModulusSteps(ctx: Ctx, v: Values): number {
   return record(ctx.steps, distanceModulus(dL), () => ({
     title: 'Distance modulus from the luminosity distance',
     formula: 'μ = 5 log10(d_L / 10 pc) = 5 log10(d_L [Mpc]) + 25',
-    inputs: [{ symbol: 'd_L', name: 'luminosity distance', value: dL, unit: 'Mpc', source: v.distance_mpc !== undefined ? inputValue(ctx, 'distance_mpc', dL).source : 'previous step' }],
+    inputs: [
+      {
+        symbol: 'd_L',
+        name: 'luminosity distance',
+        value: dL,
+        unit: 'Mpc',
+        source: v.distance_mpc !== undefined ? inputValue(ctx, 'distance_mpc', dL).source : 'previous step',
+      },
+    ],
     constants: [],
     result: { symbol: 'μ', name: 'distance modulus', unit: 'mag' },
   }));
@@ -87,8 +95,16 @@ export function absoluteMagnitudeSteps(ctx: Ctx, v: Values): number {
     inputs: [
       inputValue(ctx, 'm', m),
       { symbol: 'μ', name: 'distance modulus', value: mu, unit: 'mag', source: 'previous step' },
-      v.extinction !== undefined ? inputValue(ctx, 'extinction', A) : { symbol: 'A', name: 'extinction', value: 0, unit: 'mag', source: 'not given; taken as 0' },
-      { symbol: 'K', name: 'K-correction', value: K, unit: 'mag', source: v.alpha !== undefined ? 'previous step' : 'no spectral index given; taken as 0' },
+      v.extinction !== undefined
+        ? inputValue(ctx, 'extinction', A)
+        : { symbol: 'A', name: 'extinction', value: 0, unit: 'mag', source: 'not given; taken as 0' },
+      {
+        symbol: 'K',
+        name: 'K-correction',
+        value: K,
+        unit: 'mag',
+        source: v.alpha !== undefined ? 'previous step' : 'no spectral index given; taken as 0',
+      },
     ],
     constants: [],
     result: { symbol: 'M', name: 'absolute magnitude', unit: 'mag' },
@@ -105,7 +121,10 @@ export function solarBand(band: string | undefined) {
   if (band === undefined) throw new CalcError('missing_input', `band is required: one of ${SOLAR_BANDS.join(', ')}`);
   const entry = Object.hasOwn(SOLAR_MAGNITUDES, band) ? SOLAR_MAGNITUDES[band] : undefined;
   if (entry === undefined) {
-    throw new CalcError('unknown_band', `band "${band}" has no solar absolute magnitude here; use one of ${SOLAR_BANDS.join(', ')}`);
+    throw new CalcError(
+      'unknown_band',
+      `band "${band}" has no solar absolute magnitude here; use one of ${SOLAR_BANDS.join(', ')}`,
+    );
   }
   return entry;
 }
@@ -118,7 +137,15 @@ export function luminosityRatioSteps(ctx: Ctx, v: Values): number {
     title: `Luminosity compared with the Sun in the same band (${sun.label})`,
     formula: 'L / L☉ = 10^(−0.4 (M − M☉))',
     inputs: [{ symbol: 'M', name: 'absolute magnitude', value: M, unit: 'mag', source: 'previous step' }],
-    constants: [{ symbol: 'M☉', name: `absolute magnitude of the Sun, ${sun.label} (${sun.system})`, value: sun.absolute, unit: 'mag', source: sun.source }],
+    constants: [
+      {
+        symbol: 'M☉',
+        name: `absolute magnitude of the Sun, ${sun.label} (${sun.system})`,
+        value: sun.absolute,
+        unit: 'mag',
+        source: sun.source,
+      },
+    ],
     result: { symbol: 'L/L☉', name: 'luminosity relative to the Sun', unit: '' },
   }));
 }
@@ -139,7 +166,10 @@ export function fluxRatioSteps(ctx: Ctx, v: Values): number {
     }));
   }
   const dm = v.delta_mag ?? (v.m1 as number) - (v.m2 as number);
-  const inputs = v.delta_mag !== undefined ? [inputValue(ctx, 'delta_mag', dm)] : [inputValue(ctx, 'm1', v.m1 as number), inputValue(ctx, 'm2', v.m2 as number)];
+  const inputs =
+    v.delta_mag !== undefined
+      ? [inputValue(ctx, 'delta_mag', dm)]
+      : [inputValue(ctx, 'm1', v.m1 as number), inputValue(ctx, 'm2', v.m2 as number)];
   return record(ctx.steps, fluxRatioFromMagnitudes(dm), () => ({
     title: 'Flux ratio from a magnitude difference (Pogson relation)',
     formula: v.delta_mag !== undefined ? 'F₁ / F₂ = 10^(−0.4 Δm)' : 'F₁ / F₂ = 10^(−0.4 (m₁ − m₂))',

@@ -148,20 +148,60 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     monotoneInZ: 'increasing',
   },
   age_at_z: {
-    unit: 'Gyr', required: ['z'], flrwOnly: true, usesModel: always,
-    compute: (ctx, v) => ageSteps(ctx, z(v), false), sample: (env, x) => sampleAge(env, x[Z], false),
+    unit: 'Gyr',
+    required: ['z'],
+    flrwOnly: true,
+    usesModel: always,
+    compute: (ctx, v) => ageSteps(ctx, z(v), false),
+    sample: (env, x) => sampleAge(env, x[Z], false),
     monotoneInZ: 'decreasing',
   },
-  age_now: { unit: 'Gyr', required: [], flrwOnly: true, usesModel: always, compute: (ctx) => ageSteps(ctx, 0, true), sample: (env) => sampleAge(env, 0, true) },
-  hubble_parameter: {
-    unit: 'km/s/Mpc', required: ['z'], flrwOnly: true, usesModel: always,
-    compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)), sample: (env, x) => sampleHubbleParameter(env, x[Z]),
+  age_now: {
+    unit: 'Gyr',
+    required: [],
+    flrwOnly: true,
+    usesModel: always,
+    compute: (ctx) => ageSteps(ctx, 0, true),
+    sample: (env) => sampleAge(env, 0, true),
   },
-  distance_modulus: { unit: 'mag', required: [], oneOf: DISTANCE_SOURCES, usesModel: (p) => p.has('z'), compute: distanceModulusSteps, sample: sampleDistanceModulus, modulusInZ: true },
-  absolute_magnitude: { unit: 'mag', ...magnitudeInputs, usesModel: (p) => p.has('z'), compute: absoluteMagnitudeSteps, sample: sampleAbsoluteMagnitude, modulusInZ: true },
+  hubble_parameter: {
+    unit: 'km/s/Mpc',
+    required: ['z'],
+    flrwOnly: true,
+    usesModel: always,
+    compute: (ctx, v) => hubbleParameterSteps(ctx, z(v)),
+    sample: (env, x) => sampleHubbleParameter(env, x[Z]),
+  },
+  distance_modulus: {
+    unit: 'mag',
+    required: [],
+    oneOf: DISTANCE_SOURCES,
+    usesModel: (p) => p.has('z'),
+    compute: distanceModulusSteps,
+    sample: sampleDistanceModulus,
+    modulusInZ: true,
+  },
+  absolute_magnitude: {
+    unit: 'mag',
+    ...magnitudeInputs,
+    usesModel: (p) => p.has('z'),
+    compute: absoluteMagnitudeSteps,
+    sample: sampleAbsoluteMagnitude,
+    modulusInZ: true,
+  },
   luminosity_ratio_sun: {
-    unit: '', ...magnitudeInputs, band: true, usesModel: (p) => p.has('z'), compute: luminosityRatioSteps, sample: sampleLuminosityRatio,
-    split: { applies: always, before: sampleAbsoluteMagnitude, last: (env, M) => luminosityRatioSun(M, env.Msun), decreasing: true },
+    unit: '',
+    ...magnitudeInputs,
+    band: true,
+    usesModel: (p) => p.has('z'),
+    compute: luminosityRatioSteps,
+    sample: sampleLuminosityRatio,
+    split: {
+      applies: always,
+      before: sampleAbsoluteMagnitude,
+      last: (env, M) => luminosityRatioSun(M, env.Msun),
+      decreasing: true,
+    },
     modulusInZ: true,
   },
   z_from_lookback_time: {
@@ -169,7 +209,9 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     required: ['lookback_gyr'],
     usesModel: always,
     compute: (ctx, v) =>
-      isLaw(ctx) ? hubbleLawRedshiftSteps(ctx, 'lookback_gyr', v.lookback_gyr as number) : zFromLookbackSteps(ctx, v.lookback_gyr as number),
+      isLaw(ctx)
+        ? hubbleLawRedshiftSteps(ctx, 'lookback_gyr', v.lookback_gyr as number)
+        : zFromLookbackSteps(ctx, v.lookback_gyr as number),
     sample: (env, x) => (drawIsLaw(env) ? sampleLawRedshift(env, 'lookback_gyr', x[LOOKBACK]) : lookbackInverse(env, x)),
   },
   z_from_luminosity_distance: {
@@ -180,11 +222,15 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
       isLaw(ctx)
         ? hubbleLawRedshiftSteps(ctx, 'distance_mpc', v.distance_mpc as number)
         : zFromLuminosityDistanceSteps(ctx, v.distance_mpc as number),
-    sample: (env, x) => (drawIsLaw(env) ? sampleLawRedshift(env, 'distance_mpc', x[DISTANCE]) : luminosityDistanceInverse(env, x)),
+    sample: (env, x) =>
+      drawIsLaw(env) ? sampleLawRedshift(env, 'distance_mpc', x[DISTANCE]) : luminosityDistanceInverse(env, x),
   },
   parallax_distance: {
-    unit: 'pc', required: ['parallax_mas'], usesModel: never,
-    compute: (ctx, v) => parallaxSteps(ctx, v.parallax_mas as number), sample: (_env, x) => sampleParallax(x[PARALLAX]),
+    unit: 'pc',
+    required: ['parallax_mas'],
+    usesModel: never,
+    compute: (ctx, v) => parallaxSteps(ctx, v.parallax_mas as number),
+    sample: (_env, x) => sampleParallax(x[PARALLAX]),
   },
   flux_ratio: {
     unit: '',
@@ -193,7 +239,12 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     usesModel: never,
     compute: fluxRatioSteps,
     sample: sampleFluxRatio,
-    split: { applies: (p) => !p.has('distance_1'), before: sampleMagnitudeDifference, last: (_env, dm) => fluxRatioFromMagnitudes(dm), decreasing: true },
+    split: {
+      applies: (p) => !p.has('distance_1'),
+      before: sampleMagnitudeDifference,
+      last: (_env, dm) => fluxRatioFromMagnitudes(dm),
+      decreasing: true,
+    },
   },
 };
 
@@ -215,10 +266,17 @@ export function checkInputs(quantity: CalcQuantity, present: Set<string>): void 
     const names = spec.oneOf.map((g) => g.join(' and ')).join(', or ');
     if (touched.length === 0) throw new CalcError('missing_input', `${quantity} needs ${names}`);
     if (touched.length > 1) {
-      throw new CalcError('conflicting_inputs', `${quantity} takes only one of ${names} (got ${touched.map((g) => g.filter((k) => present.has(k)).join(' and ')).join(' and ')})`);
+      throw new CalcError(
+        'conflicting_inputs',
+        `${quantity} takes only one of ${names} (got ${touched.map((g) => g.filter((k) => present.has(k)).join(' and ')).join(' and ')})`,
+      );
     }
     const missing = touched[0].find((k) => !present.has(k));
-    if (missing) throw new CalcError('missing_input', `${missing} is required with ${touched[0].filter((k) => present.has(k)).join(', ')} for ${quantity}`);
+    if (missing)
+      throw new CalcError(
+        'missing_input',
+        `${missing} is required with ${touched[0].filter((k) => present.has(k)).join(', ')} for ${quantity}`,
+      );
     touched[0].forEach((k) => allowed.add(k));
   }
   if (spec.band && !present.has('band')) throw new CalcError('missing_input', `band is required for ${quantity}`);

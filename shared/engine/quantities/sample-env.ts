@@ -11,8 +11,19 @@ import type { Values } from './photometry.ts';
 
 /** Every input a draw can vary, in slot order; H0 (from an H0 range) comes last. */
 export const SLOT_NAMES = [
-  'z', 'm', 'extinction', 'alpha', 'parallax_mas', 'lookback_gyr', 'distance_mpc',
-  'm1', 'm2', 'delta_mag', 'distance_1', 'distance_2', 'H0',
+  'z',
+  'm',
+  'extinction',
+  'alpha',
+  'parallax_mas',
+  'lookback_gyr',
+  'distance_mpc',
+  'm1',
+  'm2',
+  'delta_mag',
+  'distance_1',
+  'distance_2',
+  'H0',
 ] as const;
 
 // Slot numbers, named for the samplers (same order as SLOT_NAMES).
@@ -109,5 +120,9 @@ export function valuesOf(env: SampleEnv, x: Float64Array): Values {
  * @returns the sampler (may throw for a draw outside the domain; the Monte Carlo loop counts it)
  */
 export function viaCompute(compute: (ctx: Ctx, v: Values) => number): Sampler {
-  return (env, x) => compute({ model: env.model, h0Scale: env.h0Scale, inputs: {}, band: undefined, steps: null, warnings: null }, valuesOf(env, x));
+  return (env, x) =>
+    compute(
+      { model: env.model, h0Scale: env.h0Scale, inputs: {}, band: undefined, steps: null, warnings: null },
+      valuesOf(env, x),
+    );
 }

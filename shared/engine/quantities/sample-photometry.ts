@@ -3,9 +3,30 @@
  * without working steps or throws; a draw where the working path would refuse (a distance or
  * parallax not above zero, a negative extinction) gives NaN.
  */
-import { absoluteMagnitude, distanceModulus, fluxRatioFromDistances, fluxRatioFromMagnitudes, kCorrection, luminosityRatioSun } from '../magnitudes.ts';
+import {
+  absoluteMagnitude,
+  distanceModulus,
+  fluxRatioFromDistances,
+  fluxRatioFromMagnitudes,
+  kCorrection,
+  luminosityRatioSun,
+} from '../magnitudes.ts';
 import { sampleLawDistance, sampleLuminosity } from './sample-cosmic.ts';
-import { ALPHA, DELTA_MAG, DISTANCE, DISTANCE_1, DISTANCE_2, EXTINCTION, has, M, M1, M2, PARALLAX, Z, type SampleEnv } from './sample-env.ts';
+import {
+  ALPHA,
+  DELTA_MAG,
+  DISTANCE,
+  DISTANCE_1,
+  DISTANCE_2,
+  EXTINCTION,
+  has,
+  M,
+  M1,
+  M2,
+  PARALLAX,
+  Z,
+  type SampleEnv,
+} from './sample-env.ts';
 
 /** Distance in pc from a parallax in mas; NaN unless the parallax is positive. */
 export const sampleParallax = (p: number): number => (p > 0 ? 1000 / p : NaN);

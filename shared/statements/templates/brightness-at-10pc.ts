@@ -13,14 +13,23 @@ export const brightnessAt10pc: StatementTemplate = {
   usesCosmology: true,
   evaluate(ctx) {
     const mag = pickMagnitude(ctx);
-    if (!mag?.band) throw missing(['apparent_magnitude'], `Needs a preferred apparent magnitude in the ${ctx.band} band (or another band with a known solar magnitude).`);
+    if (!mag?.band)
+      throw missing(
+        ['apparent_magnitude'],
+        `Needs a preferred apparent magnitude in the ${ctx.band} band (or another band with a known solar magnitude).`,
+      );
     const sun = SOLAR_MAGNITUDES[mag.band];
     const basis = requireDistance(ctx);
     const extinction = find(ctx, 'extinction', mag.band);
     const alpha = basis.kind === 'z' ? find(ctx, 'spectral_index') : undefined;
     const r = run({
       quantity: 'absolute_magnitude',
-      inputs: { m: asInput(mag), ...distanceInputs(basis), ...(extinction ? { extinction: asInput(extinction) } : {}), ...(alpha ? { alpha: asInput(alpha) } : {}) },
+      inputs: {
+        m: asInput(mag),
+        ...distanceInputs(basis),
+        ...(extinction ? { extinction: asInput(extinction) } : {}),
+        ...(alpha ? { alpha: asInput(alpha) } : {}),
+      },
       model: ctx.model,
     });
     const ratioOf = (M: number) => 10 ** (-0.4 * (M - sun.apparent));
@@ -30,9 +39,30 @@ export const brightnessAt10pc: StatementTemplate = {
     const step = derivedStep({
       title: brighter ? 'Compare with the Sun as we see it' : 'Compare with the Sun as we see it (how many times fainter)',
       formula: brighter ? 'ratio = 10^(−0.4 (M − m☉))' : 'ratio = 10^(0.4 (M − m☉))',
-      inputs: [{ symbol: 'M', name: 'absolute magnitude (its apparent magnitude seen from 10 pc)', value: r.value, unit: 'mag', source: 'previous step' }],
-      constants: [{ symbol: 'm☉', name: `apparent magnitude of the Sun (${sun.label})`, value: sun.apparent, unit: 'mag', source: sun.source }],
-      result: { symbol: 'ratio', name: brighter ? 'times as bright as the Sun in our sky' : 'times fainter than the Sun in our sky', value, unit: '' },
+      inputs: [
+        {
+          symbol: 'M',
+          name: 'absolute magnitude (its apparent magnitude seen from 10 pc)',
+          value: r.value,
+          unit: 'mag',
+          source: 'previous step',
+        },
+      ],
+      constants: [
+        {
+          symbol: 'm☉',
+          name: `apparent magnitude of the Sun (${sun.label})`,
+          value: sun.apparent,
+          unit: 'mag',
+          source: sun.source,
+        },
+      ],
+      result: {
+        symbol: 'ratio',
+        name: brighter ? 'times as bright as the Sun in our sky' : 'times fainter than the Sun in our sky',
+        value,
+        unit: '',
+      },
       note: 'An object’s absolute magnitude is, by definition, how bright it would look from 10 parsecs (32.6 light-years).',
     });
     return compose({
@@ -43,7 +73,10 @@ export const brightnessAt10pc: StatementTemplate = {
         isFrench(locale)
           ? `À 10 parsecs de nous (environ 33 années-lumière), ${ctx.object.name} brillerait environ ${frenchCount(n, 'fois')} ${brighter ? 'plus' : 'moins'} que le Soleil dans notre ciel.`
           : `Seen from 10 parsecs (about 33 light-years) away, ${ctx.object.name} would look about ${n} times ${brighter ? 'as bright as' : 'fainter than'} the Sun does in our sky.`,
-      footnote: (locale) => [bandFootnote(locale, mag.band!), basis.kind === 'z' ? cosmologyFootnote(r.model)(locale) : null].filter(Boolean).join(' '),
+      footnote: (locale) =>
+        [bandFootnote(locale, mag.band!), basis.kind === 'z' ? cosmologyFootnote(r.model)(locale) : null]
+          .filter(Boolean)
+          .join(' '),
       working: [...r.working, step],
       warnings: r.warnings,
       inputs: [mag, basis.measurement, extinction, alpha].filter((m) => m !== undefined).map(used),

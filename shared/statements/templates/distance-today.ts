@@ -16,8 +16,24 @@ export const distanceTodayTemplate: StatementTemplate = {
     const step = derivedStep({
       title: d.basis === 'z' ? 'In light-years (proper distance today)' : 'In light-years',
       formula: 'd [ly] = d [Mpc] × 10⁶ × (pc / ly)',
-      inputs: [{ symbol: 'd', name: d.basis === 'z' ? 'proper distance today (= line-of-sight comoving distance)' : 'distance', value: d.mpc, unit: 'Mpc', source: 'previous step' }],
-      constants: [{ symbol: 'pc/ly', name: 'light-years per parsec', value: LY_PER_PC, unit: 'ly/pc', source: 'IAU 2015 B2 (parsec) and the Julian year (light-year)' }],
+      inputs: [
+        {
+          symbol: 'd',
+          name: d.basis === 'z' ? 'proper distance today (= line-of-sight comoving distance)' : 'distance',
+          value: d.mpc,
+          unit: 'Mpc',
+          source: 'previous step',
+        },
+      ],
+      constants: [
+        {
+          symbol: 'pc/ly',
+          name: 'light-years per parsec',
+          value: LY_PER_PC,
+          unit: 'ly/pc',
+          source: 'IAU 2015 B2 (parsec) and the Julian year (light-year)',
+        },
+      ],
       result: { symbol: 'd', name: 'distance', value: toLy(d.mpc), unit: 'ly' },
       note:
         d.basis === 'z'

@@ -23,7 +23,15 @@ export const lightTravel: StatementTemplate = {
         title: 'Light-travel time from the distance',
         formula: 't [years] = d [light-years] = d [pc] × (pc / ly)',
         inputs: [{ symbol: 'd', name: 'distance', value: d.mpc * 1e6, unit: 'pc', source: 'previous step' }],
-        constants: [{ symbol: 'pc/ly', name: 'light-years per parsec', value: LY_PER_PC, unit: 'ly/pc', source: 'IAU 2015 B2 (parsec) and the Julian year (light-year)' }],
+        constants: [
+          {
+            symbol: 'pc/ly',
+            name: 'light-years per parsec',
+            value: LY_PER_PC,
+            unit: 'ly/pc',
+            source: 'IAU 2015 B2 (parsec) and the Julian year (light-year)',
+          },
+        ],
         result: { symbol: 't', name: 'light-travel time', value: toYears(d.mpc), unit: 'yr' },
       });
       return compose({
@@ -45,24 +53,46 @@ export const lightTravel: StatementTemplate = {
     const age = lookback.model?.kind === 'flrw' ? run({ quantity: 'age_at_z', inputs: z, model: ctx.model }) : undefined;
     const years = lookback.value * 1e9;
     const ageYears = age ? age.value * 1e9 : 0;
-    const agePrecision = age ? choosePrecision(ageYears, age.interval ? { low: age.interval.low * 1e9, high: age.interval.high * 1e9 } : null) : undefined;
-    const ageWords = (locale: Parameters<typeof isFrench>[0]) => (agePrecision ? yearsPhrase(locale, formatApproximate(ageYears, agePrecision.significantFigures, locale).text, ageYears) : '');
-    const ageStep = age && agePrecision
-      ? [derivedStep({
-          title: 'Public wording of the age then',
-          formula: `round(age, ${agePrecision.significantFigures} significant figures)`,
-          inputs: [{ symbol: 't(z)', name: 'age of the universe when the light set out', value: age.value, unit: 'Gyr', source: 'previous step' }],
-          result: { symbol: 't(z)', name: 'age as worded', value: Number((age.value).toPrecision(agePrecision.significantFigures)), unit: 'Gyr' },
-          note: agePrecision.reason,
-        })]
-      : [];
+    const agePrecision = age
+      ? choosePrecision(ageYears, age.interval ? { low: age.interval.low * 1e9, high: age.interval.high * 1e9 } : null)
+      : undefined;
+    const ageWords = (locale: Parameters<typeof isFrench>[0]) =>
+      agePrecision
+        ? yearsPhrase(locale, formatApproximate(ageYears, agePrecision.significantFigures, locale).text, ageYears)
+        : '';
+    const ageStep =
+      age && agePrecision
+        ? [
+            derivedStep({
+              title: 'Public wording of the age then',
+              formula: `round(age, ${agePrecision.significantFigures} significant figures)`,
+              inputs: [
+                {
+                  symbol: 't(z)',
+                  name: 'age of the universe when the light set out',
+                  value: age.value,
+                  unit: 'Gyr',
+                  source: 'previous step',
+                },
+              ],
+              result: {
+                symbol: 't(z)',
+                name: 'age as worded',
+                value: Number(age.value.toPrecision(agePrecision.significantFigures)),
+                unit: 'Gyr',
+              },
+              note: agePrecision.reason,
+            }),
+          ]
+        : [];
     return compose({
       value: years,
       unit: 'yr',
       interval: lookback.interval ? { low: lookback.interval.low * 1e9, high: lookback.interval.high * 1e9 } : null,
       sentence: (locale, n) => {
         const t = yearsPhrase(locale, n, years);
-        if (isFrench(locale)) return `La lumière que nous recevons de ${ctx.object.name} est partie il y a environ ${t}${age ? `, quand l’univers avait environ ${ageWords(locale)}` : ''}.`;
+        if (isFrench(locale))
+          return `La lumière que nous recevons de ${ctx.object.name} est partie il y a environ ${t}${age ? `, quand l’univers avait environ ${ageWords(locale)}` : ''}.`;
         return `The light we see from ${ctx.object.name} set out about ${t} ago${age ? `, when the universe was about ${ageWords(locale)} old` : ''}.`;
       },
       footnote: cosmologyFootnote(lookback.model),

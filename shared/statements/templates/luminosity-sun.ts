@@ -6,7 +6,10 @@ import { bandFootnote, frenchCount, isFrench } from './words.ts';
 
 /** The apparent magnitude to use: in the organisation's band if there is one, else any band with a known solar magnitude. */
 export function pickMagnitude(ctx: TemplateContext) {
-  return find(ctx, 'apparent_magnitude', ctx.band) ?? ctx.measurements.find((m) => m.quantity === 'apparent_magnitude' && m.band && SOLAR_MAGNITUDES[m.band]);
+  return (
+    find(ctx, 'apparent_magnitude', ctx.band) ??
+    ctx.measurements.find((m) => m.quantity === 'apparent_magnitude' && m.band && SOLAR_MAGNITUDES[m.band])
+  );
 }
 
 /** "It gives out about N times as much light as the Sun" (in the same band). */
@@ -17,7 +20,11 @@ export const luminositySun: StatementTemplate = {
   usesCosmology: true,
   evaluate(ctx) {
     const mag = pickMagnitude(ctx);
-    if (!mag?.band) throw missing(['apparent_magnitude'], `Needs a preferred apparent magnitude in the ${ctx.band} band (or another band with a known solar magnitude).`);
+    if (!mag?.band)
+      throw missing(
+        ['apparent_magnitude'],
+        `Needs a preferred apparent magnitude in the ${ctx.band} band (or another band with a known solar magnitude).`,
+      );
     const basis = requireDistance(ctx);
     const extinction = find(ctx, 'extinction', mag.band);
     const alpha = basis.kind === 'z' ? find(ctx, 'spectral_index') : undefined;
@@ -40,7 +47,10 @@ export const luminositySun: StatementTemplate = {
         value: r.value,
         unit: '× Sun',
         interval: r.interval ?? null,
-        sentence: (locale, n) => (isFrench(locale) ? `${ctx.object.name} émet environ ${frenchCount(n, 'fois')} plus de lumière que le Soleil.` : `${ctx.object.name} gives out about ${n} times as much light as the Sun.`),
+        sentence: (locale, n) =>
+          isFrench(locale)
+            ? `${ctx.object.name} émet environ ${frenchCount(n, 'fois')} plus de lumière que le Soleil.`
+            : `${ctx.object.name} gives out about ${n} times as much light as the Sun.`,
         footnote,
         working: r.working,
         warnings: r.warnings,
@@ -58,7 +68,10 @@ export const luminositySun: StatementTemplate = {
       value: r.value * 100,
       unit: '%',
       interval: r.interval ? { low: r.interval.low * 100, high: r.interval.high * 100 } : null,
-      sentence: (locale, n) => (isFrench(locale) ? `${ctx.object.name} émet seulement environ ${n} % de la lumière du Soleil.` : `${ctx.object.name} gives out only about ${n} per cent as much light as the Sun.`),
+      sentence: (locale, n) =>
+        isFrench(locale)
+          ? `${ctx.object.name} émet seulement environ ${n} % de la lumière du Soleil.`
+          : `${ctx.object.name} gives out only about ${n} per cent as much light as the Sun.`,
       footnote,
       working: [...r.working, pct],
       warnings: r.warnings,

@@ -14,11 +14,18 @@ export const nakedEye: StatementTemplate = {
   usesCosmology: false,
   evaluate(ctx) {
     const mag = find(ctx, 'apparent_magnitude', 'V');
-    if (!mag) throw missing(['apparent_magnitude'], 'Needs a preferred apparent magnitude in the V band (the unaided-eye limit is a visual magnitude).');
+    if (!mag)
+      throw missing(
+        ['apparent_magnitude'],
+        'Needs a preferred apparent magnitude in the V band (the unaided-eye limit is a visual magnitude).',
+      );
     const fainter = mag.value > NAKED_EYE_LIMIT;
     const limit = { value: NAKED_EYE_LIMIT, source: 'unaided-eye limit on a dark night, about magnitude 6 (common practice)' };
     // flux_ratio gives F1/F2 = 10^(−0.4 (m1 − m2)); put the brighter one first so the ratio is ≥ 1.
-    const r = run({ quantity: 'flux_ratio', inputs: fainter ? { m1: limit, m2: asInput(mag) } : { m1: asInput(mag), m2: limit } });
+    const r = run({
+      quantity: 'flux_ratio',
+      inputs: fainter ? { m1: limit, m2: asInput(mag) } : { m1: asInput(mag), m2: limit },
+    });
     return compose({
       value: r.value,
       unit: '',

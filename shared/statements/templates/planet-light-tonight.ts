@@ -5,12 +5,26 @@ import { compose, derivedStep } from '../compose.ts';
 import { perLocale, type StatementLocale } from '../locales.ts';
 import { formatApproximate } from '../number-words.ts';
 import { choosePrecision, roundToSignificant } from '../precision.ts';
-import { DISTANCE_RELATIVE_UNCERTAINTY, LARGEST_MEASURED_DIFFERENCE, NIGHT_DRIFT_BOUND, requirePlanet, requireVenueNight } from '../tonight.ts';
+import {
+  DISTANCE_RELATIVE_UNCERTAINTY,
+  LARGEST_MEASURED_DIFFERENCE,
+  NIGHT_DRIFT_BOUND,
+  requirePlanet,
+  requireVenueNight,
+} from '../tonight.ts';
 import type { NightBasis, StatementNight, StatementTemplate, StatementVenue } from '../types.ts';
 import { isFrench } from './words.ts';
 
 /** Planet names in French (the catalogue's names are English). */
-const FRENCH_NAMES: Record<PlanetId, string> = { mercury: 'Mercure', venus: 'Vénus', mars: 'Mars', jupiter: 'Jupiter', saturn: 'Saturne', uranus: 'Uranus', neptune: 'Neptune' };
+const FRENCH_NAMES: Record<PlanetId, string> = {
+  mercury: 'Mercure',
+  venus: 'Vénus',
+  mars: 'Mars',
+  jupiter: 'Jupiter',
+  saturn: 'Saturne',
+  uranus: 'Uranus',
+  neptune: 'Neptune',
+};
 
 // Decided by planet, not by the night's value, so a planet's sentence keeps one shape all year:
 // Uranus (about 2 h 40 min) and Neptune (about 4 h) read better in hours and minutes than as
@@ -27,7 +41,8 @@ const plural = (n: number, en: string, fr: string, locale: StatementLocale) => {
 
 /** "43.2 minutes", "2 hours and 40 minutes", "4 heures 6 minutes", from minutes already rounded. */
 function durationWords(locale: StatementLocale, minutes: number, significantFigures: number, inHours: boolean): string {
-  if (!inHours) return `${formatApproximate(minutes, significantFigures, locale).text} ${plural(minutes, 'minute', 'minute', locale)}`;
+  if (!inHours)
+    return `${formatApproximate(minutes, significantFigures, locale).text} ${plural(minutes, 'minute', 'minute', locale)}`;
   const shown = Math.round(roundToSignificant(minutes, significantFigures));
   const h = Math.floor(shown / 60);
   const m = shown - h * 60;
@@ -60,7 +75,11 @@ const WHEN: Record<string, [string, string]> = {
 /** Which venue and night, as small print under the sentence. */
 function nightFootnote(locale: StatementLocale, venue: StatementVenue, night: StatementNight): string {
   const [en, fr] = WHEN[night.observation.basis] ?? [night.observation.basis, night.observation.basis];
-  const at = night.observation.localTime ? (isFrench(locale) ? ` à ${night.observation.localTime.replace(':', ' h ')}` : ` at ${night.observation.localTime}`) : '';
+  const at = night.observation.localTime
+    ? isFrench(locale)
+      ? ` à ${night.observation.localTime.replace(':', ' h ')}`
+      : ` at ${night.observation.localTime}`
+    : '';
   return isFrench(locale)
     ? `Pour ${venue.name}, la nuit du ${longDate(locale, night.localDate)}${at}, heure locale (${fr}).`
     : `For ${venue.name} on the night of ${longDate(locale, night.localDate)}${at} local time (${en}).`;
@@ -87,7 +106,13 @@ export const planetLightTonight: StatementTemplate = {
       title: `${PLANET_NAMES[planet]}’s distance from the Earth at the observation time`,
       formula: 'd = |r_planet(t − τ) − r_Earth(t)|, τ = d / c (light-time corrected, Meeus ch. 33)',
       inputs: [
-        { symbol: 't', name: 'observation time (UTC)', value: night.observation.utc.replace(/\.\d+Z$/, 'Z'), unit: '', source: `the sky for ${place} on the night of ${night.localDate}, at ${WHEN[night.observation.basis]?.[0] ?? night.observation.basis}${night.observation.localTime ? ` (${night.observation.localTime} local time)` : ''}` },
+        {
+          symbol: 't',
+          name: 'observation time (UTC)',
+          value: night.observation.utc.replace(/\.\d+Z$/, 'Z'),
+          unit: '',
+          source: `the sky for ${place} on the night of ${night.localDate}, at ${WHEN[night.observation.basis]?.[0] ?? night.observation.basis}${night.observation.localTime ? ` (${night.observation.localTime} local time)` : ''}`,
+        },
       ],
       result: { symbol: 'd', name: `distance of ${PLANET_NAMES[planet]} from the Earth’s centre`, value: distanceAu, unit: 'au' },
       note: `Ephemeris: ${night.ephemeris}. The venue sets the time (its dusk); the distance is from the Earth’s centre, and the venue’s own place moves it by less than one Earth radius (about 4.3 × 10⁻⁵ au; Earth radius 6371 km recalled from memory), far below the wording’s precision.`,
@@ -97,7 +122,13 @@ export const planetLightTonight: StatementTemplate = {
       formula: 'σ_d = k × d',
       inputs: [
         { symbol: 'd', name: 'distance', value: distanceAu, unit: 'au', source: 'previous step' },
-        { symbol: 'k', name: `relative uncertainty given to ${PLANET_NAMES[planet]}’s distance`, value: k, unit: '', source: 'tolerance of our reference test against astropy 5.2.1’s built-in ephemeris (tests/reference/sky)' },
+        {
+          symbol: 'k',
+          name: `relative uncertainty given to ${PLANET_NAMES[planet]}’s distance`,
+          value: k,
+          unit: '',
+          source: 'tolerance of our reference test against astropy 5.2.1’s built-in ephemeris (tests/reference/sky)',
+        },
       ],
       result: { symbol: 'σ_d', name: 'uncertainty of the distance', value: k * distanceAu, unit: 'au' },
       note: `The ephemeris distance is far more precise than the wording needs. Largest difference measured against astropy, any planet, 1992–2040: ${LARGEST_MEASURED_DIFFERENCE} (relative), mostly the reference’s own error; full VSOP87 is good to about 1″ in position over these years (recalled from memory). Within ±6 hours of the observation time the distance moves by under ${NIGHT_DRIFT_BOUND * 100} % (our ephemeris), still below the 3 % at which the precision rule drops a figure, so the wording holds for the whole evening.`,
@@ -115,7 +146,9 @@ export const planetLightTonight: StatementTemplate = {
       formula: 't [min] = t [s] / 60',
       inputs: [{ symbol: 't', name: 'light-travel time', value: seconds, unit: 's', source: 'previous step' }],
       result: { symbol: 't', name: 'light-travel time', value: minutes, unit: 'min' },
-      note: inHours ? `${PLANET_NAMES[planet]}’s light takes over two hours, so the wording gives hours and minutes.` : 'The wording gives minutes.',
+      note: inHours
+        ? `${PLANET_NAMES[planet]}’s light takes over two hours, so the wording gives hours and minutes.`
+        : 'The wording gives minutes.',
     });
     const interval = { low: minutes * (1 - k), high: minutes * (1 + k) };
     // compose applies the same rule; the hours-and-minutes words need the figure count first.

@@ -27,7 +27,13 @@ export const scaleModel: StatementTemplate = {
       formula: 'd_model = d × (1 cm / (2 R☉))',
       inputs: [{ symbol: 'd', name: 'distance', value: d.mpc * KM_PER_MPC, unit: 'km', source: 'previous step' }],
       constants: [
-        { symbol: 'R☉', name: SOLAR_RADIUS.name, value: SOLAR_RADIUS.value, unit: SOLAR_RADIUS.unit, source: SOLAR_RADIUS.source },
+        {
+          symbol: 'R☉',
+          name: SOLAR_RADIUS.name,
+          value: SOLAR_RADIUS.value,
+          unit: SOLAR_RADIUS.unit,
+          source: SOLAR_RADIUS.source,
+        },
         { symbol: 'bead', name: 'diameter of the bead the Sun becomes', value: 1, unit: 'cm', source: 'the model’s choice' },
       ],
       result: { symbol: 'd_model', name: 'distance in the scale model', value, unit: inMetres ? 'm' : 'km' },

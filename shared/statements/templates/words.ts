@@ -15,7 +15,8 @@ export function frenchCount(numberText: string, noun: string): string {
 
 /** "12 billion years" / "12 milliards d'années" / "640 ans", from a number already in words. */
 export function yearsPhrase(locale: StatementLocale, numberText: string, years: number): string {
-  if (isFrench(locale)) return /\p{L}$/u.test(numberText) ? frenchCount(numberText, 'années') : `${numberText} ${years >= 2 ? 'ans' : 'an'}`;
+  if (isFrench(locale))
+    return /\p{L}$/u.test(numberText) ? frenchCount(numberText, 'années') : `${numberText} ${years >= 2 ? 'ans' : 'an'}`;
   return `${numberText} years`;
 }
 
@@ -27,7 +28,8 @@ export function bandFootnote(locale: StatementLocale, band: string): string {
 
 /** Metric units spelled out, in the reader's spelling. */
 export function unitWord(locale: StatementLocale, unit: 'kilometre' | 'metre' | 'centimetre' | 'light-year'): string {
-  if (isFrench(locale)) return { kilometre: 'kilomètres', metre: 'mètres', centimetre: 'centimètre', 'light-year': 'années-lumière' }[unit];
+  if (isFrench(locale))
+    return { kilometre: 'kilomètres', metre: 'mètres', centimetre: 'centimètre', 'light-year': 'années-lumière' }[unit];
   const plural = { kilometre: 'kilometres', metre: 'metres', centimetre: 'centimetre', 'light-year': 'light-years' }[unit];
   return isAmerican(locale) ? plural.replace('metre', 'meter') : plural;
 }

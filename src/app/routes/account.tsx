@@ -15,7 +15,9 @@ export function Component() {
   const user = useCurrentUser();
   const change = useChangePassword();
   const [formError, setFormError] = useState<string>();
-  const { register, handleSubmit, setError, reset, formState } = useForm<ChangePasswordInput>({ resolver: zodResolver(ChangePasswordSchema) });
+  const { register, handleSubmit, setError, reset, formState } = useForm<ChangePasswordInput>({
+    resolver: zodResolver(ChangePasswordSchema),
+  });
 
   const onSubmit = handleSubmit((values) => {
     setFormError(undefined);
@@ -34,8 +36,21 @@ export function Component() {
         <form onSubmit={onSubmit} noValidate className="mt-4 space-y-4">
           {formError && <Notice tone="error">{formError}</Notice>}
           {change.isSuccess && <Notice tone="success">Your password has been changed.</Notice>}
-          <TextField label="Current password" type="password" autoComplete="current-password" error={formState.errors.currentPassword?.message} {...register('currentPassword')} />
-          <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters." error={formState.errors.newPassword?.message} {...register('newPassword')} />
+          <TextField
+            label="Current password"
+            type="password"
+            autoComplete="current-password"
+            error={formState.errors.currentPassword?.message}
+            {...register('currentPassword')}
+          />
+          <TextField
+            label="New password"
+            type="password"
+            autoComplete="new-password"
+            hint="At least 10 characters."
+            error={formState.errors.newPassword?.message}
+            {...register('newPassword')}
+          />
           <Button type="submit" busy={change.isPending}>
             Change password
           </Button>

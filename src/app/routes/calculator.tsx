@@ -40,7 +40,12 @@ export function Component() {
         <div className="mt-6 space-y-6">
           <CalcResult result={outcome.result} />
           {redshift && outcome.result.model && (
-            <LazyDistanceRedshiftChart z={redshift.z} zInterval={redshift.zInterval} model={model} alternatives={alternativesTo(model)} />
+            <LazyDistanceRedshiftChart
+              z={redshift.z}
+              zInterval={redshift.zInterval}
+              model={model}
+              alternatives={alternativesTo(model)}
+            />
           )}
           <WorkingSteps working={outcome.result.working} model={outcome.result.model} />
         </div>

@@ -8,7 +8,10 @@ export function Component() {
   const user = useCurrentUser();
   return (
     <>
-      <PageHeader title={`Good to see you, ${user.name.split(' ')[0]}`} description={`Signed in as ${ROLE_LABELS[user.role].toLowerCase()}: ${ROLE_DESCRIPTIONS[user.role].toLowerCase()}.`} />
+      <PageHeader
+        title={`Good to see you, ${user.name.split(' ')[0]}`}
+        description={`Signed in as ${ROLE_LABELS[user.role].toLowerCase()}: ${ROLE_DESCRIPTIONS[user.role].toLowerCase()}.`}
+      />
       <Dashboard />
     </>
   );

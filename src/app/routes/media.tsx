@@ -37,18 +37,28 @@ export function Component() {
         {list.isPending && <p className="text-sm text-muted">Loading images…</p>}
         {list.data && list.data.data.length === 0 && (
           <p className="rounded-lg border border-rule bg-panel px-4 py-6 text-center text-sm text-muted">
-            {Object.values(query).some(Boolean) ? 'No image matches this search.' : 'No images yet. Drop some above to start the library.'}
+            {Object.values(query).some(Boolean)
+              ? 'No image matches this search.'
+              : 'No images yet. Drop some above to start the library.'}
           </p>
         )}
         {list.data && list.data.data.length > 0 && (
           <>
-            <p className="text-sm text-muted tabular-nums">{meta!.total} {meta!.total === 1 ? 'image' : 'images'}</p>
+            <p className="text-sm text-muted tabular-nums">
+              {meta!.total} {meta!.total === 1 ? 'image' : 'images'}
+            </p>
             <MediaGrid items={list.data.data} onOpen={open} />
             {pages > 1 && (
               <nav aria-label="Pages" className="flex items-center gap-3 text-sm">
-                <Button variant="secondary" disabled={page <= 1} onClick={() => setPage(page - 1)}>Previous</Button>
-                <span className="tabular-nums text-muted">Page {page} of {pages}</span>
-                <Button variant="secondary" disabled={page >= pages} onClick={() => setPage(page + 1)}>Next</Button>
+                <Button variant="secondary" disabled={page <= 1} onClick={() => setPage(page - 1)}>
+                  Previous
+                </Button>
+                <span className="tabular-nums text-muted">
+                  Page {page} of {pages}
+                </span>
+                <Button variant="secondary" disabled={page >= pages} onClick={() => setPage(page + 1)}>
+                  Next
+                </Button>
               </nav>
             )}
           </>

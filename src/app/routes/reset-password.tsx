@@ -12,12 +12,20 @@ import { TokenPasswordForm } from '@/features/auth/components/token-password-for
 
 function RequestForm() {
   const request = useRequestPasswordReset();
-  const { register, handleSubmit, formState } = useForm<RequestPasswordResetInput>({ resolver: zodResolver(RequestPasswordResetSchema) });
+  const { register, handleSubmit, formState } = useForm<RequestPasswordResetInput>({
+    resolver: zodResolver(RequestPasswordResetSchema),
+  });
   if (request.isSuccess) return <Notice tone="success">{request.data.data.message}</Notice>;
   return (
     <form onSubmit={handleSubmit((v) => request.mutate(v))} noValidate className="space-y-4">
       {request.error && <Notice tone="error">{request.error.message}</Notice>}
-      <TextField label="E-mail address" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
+      <TextField
+        label="E-mail address"
+        type="email"
+        autoComplete="username"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
       <Button type="submit" busy={request.isPending} className="w-full">
         Send reset link
       </Button>
@@ -30,7 +38,10 @@ export function Component() {
   const [params] = useSearchParams();
   const token = params.get('token');
   return (
-    <AuthLayout title={token ? 'Choose a new password' : 'Reset your password'} intro={token ? undefined : 'We will e-mail you a link that works once, for an hour.'}>
+    <AuthLayout
+      title={token ? 'Choose a new password' : 'Reset your password'}
+      intro={token ? undefined : 'We will e-mail you a link that works once, for an hour.'}
+    >
       {token ? <TokenPasswordForm kind="reset" token={token} submitLabel="Set new password" /> : <RequestForm />}
       <p className="mt-4 text-center text-sm">
         <Link to={paths.signIn.href()} className="text-accent hover:underline">

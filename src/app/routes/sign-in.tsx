@@ -34,11 +34,26 @@ export function Component() {
   });
 
   return (
-    <AuthLayout title="Sign in" intro="For the staff of your venue. Visitors read the kiosks and public pages without signing in.">
+    <AuthLayout
+      title="Sign in"
+      intro="For the staff of your venue. Visitors read the kiosks and public pages without signing in."
+    >
       <form onSubmit={onSubmit} noValidate className="space-y-4">
         {formError && <Notice tone="error">{formError}</Notice>}
-        <TextField label="E-mail address" type="email" autoComplete="username" error={formState.errors.email?.message} {...register('email')} />
-        <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
+        <TextField
+          label="E-mail address"
+          type="email"
+          autoComplete="username"
+          error={formState.errors.email?.message}
+          {...register('email')}
+        />
+        <TextField
+          label="Password"
+          type="password"
+          autoComplete="current-password"
+          error={formState.errors.password?.message}
+          {...register('password')}
+        />
         <Button type="submit" busy={signIn.isPending} className="w-full">
           Sign in
         </Button>

@@ -9,7 +9,11 @@ export function Component() {
   const token = params.get('token');
   return (
     <AuthLayout title="Welcome to Starproof" intro="Choose a password to finish setting up your account.">
-      {token ? <TokenPasswordForm kind="invitation" token={token} submitLabel="Set password and continue" /> : <Notice tone="error">This link is incomplete. Open the link from your invitation e-mail again.</Notice>}
+      {token ? (
+        <TokenPasswordForm kind="invitation" token={token} submitLabel="Set password and continue" />
+      ) : (
+        <Notice tone="error">This link is incomplete. Open the link from your invitation e-mail again.</Notice>
+      )}
     </AuthLayout>
   );
 }

@@ -32,7 +32,10 @@ export function AppShell() {
 
   return (
     <div className="flex min-h-screen bg-paper text-ink">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-panel focus:px-3 focus:py-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:z-50 focus:rounded focus:bg-panel focus:px-3 focus:py-2"
+      >
         Skip to content
       </a>
       <aside className="sticky top-0 flex h-screen w-56 shrink-0 flex-col border-r border-rule bg-panel px-3 py-4">

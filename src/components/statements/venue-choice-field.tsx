@@ -8,14 +8,23 @@ import { SelectField } from '@/components/ui/field.tsx';
  * @param value the chosen venue id ('' for none yet)
  * @param onChange called with the venue id
  */
-export function VenueChoiceField({ value, onChange, className = '' }: { value: string; onChange: (venueId: string) => void; className?: string }) {
+export function VenueChoiceField({
+  value,
+  onChange,
+  className = '',
+}: {
+  value: string;
+  onChange: (venueId: string) => void;
+  className?: string;
+}) {
   const venues = useVenueChoices();
   const list = venues.data ?? [];
   const only = list.length === 1 ? list[0].id : null;
   useEffect(() => {
     if (only && value === '') onChange(only);
   }, [only, value, onChange]);
-  if (venues.isSuccess && list.length === 0) return <p className="text-xs text-muted">No venues yet: an admin adds them under Venues.</p>;
+  if (venues.isSuccess && list.length === 0)
+    return <p className="text-xs text-muted">No venues yet: an admin adds them under Venues.</p>;
   return (
     <SelectField
       label="Venue whose night it is"
@@ -27,7 +36,9 @@ export function VenueChoiceField({ value, onChange, className = '' }: { value: s
     >
       <option value="">{venues.isPending ? 'Loading venues…' : 'Choose a venue…'}</option>
       {list.map((v) => (
-        <option key={v.id} value={v.id}>{v.name} ({v.timeZone})</option>
+        <option key={v.id} value={v.id}>
+          {v.name} ({v.timeZone})
+        </option>
       ))}
     </SelectField>
   );

@@ -16,4 +16,6 @@ export function venueNightText(statement: Pick<StatementDto, 'venue' | 'night'>)
 
 /** An instant as the venue's clock shows it ("17:20", to the nearest minute as the sky shows times), in its own time zone. */
 export const venueClock = (utc: string, timeZone: string): string =>
-  new Intl.DateTimeFormat(undefined, { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(new Date(Math.round(Date.parse(utc) / 60_000) * 60_000));
+  new Intl.DateTimeFormat(undefined, { hour: '2-digit', minute: '2-digit', hourCycle: 'h23', timeZone }).format(
+    new Date(Math.round(Date.parse(utc) / 60_000) * 60_000),
+  );

@@ -10,7 +10,14 @@ const STYLES: Record<Variant, string> = {
 };
 
 /** A button in one of four weights; `busy` disables it and says so to screen readers. */
-export function Button({ variant = 'primary', busy, className = '', children, ref, ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean; ref?: Ref<HTMLButtonElement> }) {
+export function Button({
+  variant = 'primary',
+  busy,
+  className = '',
+  children,
+  ref,
+  ...props
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant; busy?: boolean; ref?: Ref<HTMLButtonElement> }) {
   return (
     <button
       {...props}

@@ -34,7 +34,11 @@ export function DataTable({ columns, children, caption, compact = false, footer 
           <thead className="sticky top-0 border-b border-rule bg-wash text-xs uppercase tracking-wide text-muted">
             <tr>
               {columns.map((c) => (
-                <th key={c.label} scope="col" className={`${cell} py-2.5 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}>
+                <th
+                  key={c.label}
+                  scope="col"
+                  className={`${cell} py-2.5 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}
+                >
                   {c.hidden ? <span className="sr-only">{c.label}</span> : c.label}
                 </th>
               ))}

@@ -44,32 +44,31 @@ export const TextField = forwardRef<HTMLInputElement, InputHTMLAttributes<HTMLIn
 });
 
 /** A labelled select with its inline error. */
-export const SelectField = forwardRef<HTMLSelectElement, SelectHTMLAttributes<HTMLSelectElement> & FieldProps>(function SelectField(
-  { label, error, id, className = '', children, ...props },
-  ref,
-) {
-  const autoId = useId();
-  const selectId = id ?? autoId;
-  return (
-    <div className={className}>
-      <label htmlFor={selectId} className="mb-1 block text-sm font-medium text-ink">
-        {label}
-      </label>
-      <select
-        ref={ref}
-        id={selectId}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${selectId}-error` : undefined}
-        className={`${CONTROL} ${error ? 'border-broken' : 'border-rule'}`}
-        {...props}
-      >
-        {children}
-      </select>
-      {error && (
-        <p id={`${selectId}-error`} className="mt-1 text-xs font-medium text-broken">
-          {error}
-        </p>
-      )}
-    </div>
-  );
-});
+export const SelectField = forwardRef<HTMLSelectElement, SelectHTMLAttributes<HTMLSelectElement> & FieldProps>(
+  function SelectField({ label, error, id, className = '', children, ...props }, ref) {
+    const autoId = useId();
+    const selectId = id ?? autoId;
+    return (
+      <div className={className}>
+        <label htmlFor={selectId} className="mb-1 block text-sm font-medium text-ink">
+          {label}
+        </label>
+        <select
+          ref={ref}
+          id={selectId}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={error ? `${selectId}-error` : undefined}
+          className={`${CONTROL} ${error ? 'border-broken' : 'border-rule'}`}
+          {...props}
+        >
+          {children}
+        </select>
+        {error && (
+          <p id={`${selectId}-error`} className="mt-1 text-xs font-medium text-broken">
+            {error}
+          </p>
+        )}
+      </div>
+    );
+  },
+);

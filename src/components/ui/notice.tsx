@@ -15,7 +15,10 @@ export function Notice({ tone = 'info', title, children }: { tone?: Tone; title?
   const style = TONES[tone];
   return (
     <div role={tone === 'error' ? 'alert' : 'status'} className={`flex gap-3 rounded-md border px-3.5 py-3 text-sm ${style.box}`}>
-      <Icon name={style.icon} className={`mt-0.5 size-4 shrink-0 ${tone === 'error' ? 'text-broken' : tone === 'warning' ? 'text-changed' : tone === 'success' ? 'text-ok' : 'text-muted'}`} />
+      <Icon
+        name={style.icon}
+        className={`mt-0.5 size-4 shrink-0 ${tone === 'error' ? 'text-broken' : tone === 'warning' ? 'text-changed' : tone === 'success' ? 'text-ok' : 'text-muted'}`}
+      />
       <div>
         {title && <p className="font-semibold">{title}</p>}
         {children && <div className={title ? 'mt-0.5' : ''}>{children}</div>}

@@ -5,7 +5,17 @@
  */
 
 const SUPERSCRIPT: Record<string, string> = {
-  '-': '⁻', '0': '⁰', '1': '¹', '2': '²', '3': '³', '4': '⁴', '5': '⁵', '6': '⁶', '7': '⁷', '8': '⁸', '9': '⁹',
+  '-': '⁻',
+  '0': '⁰',
+  '1': '¹',
+  '2': '²',
+  '3': '³',
+  '4': '⁴',
+  '5': '⁵',
+  '6': '⁶',
+  '7': '⁷',
+  '8': '⁸',
+  '9': '⁹',
 };
 
 // Outside this range plain decimals get long enough to misread, so powers of ten are used.
@@ -34,7 +44,10 @@ export function formatSig(value: number, digits = 6): string {
   // toPrecision itself writes "2.49510e+6" once the integer part has more digits than asked for.
   if (abs >= PLAIN_MIN && abs < PLAIN_MAX) return withMinus(String(Number(value.toPrecision(digits))));
   const [mantissa, exponent] = value.toExponential(digits - 1).split('e');
-  const power = String(Number(exponent)).split('').map((c) => SUPERSCRIPT[c] ?? c).join('');
+  const power = String(Number(exponent))
+    .split('')
+    .map((c) => SUPERSCRIPT[c] ?? c)
+    .join('');
   return `${withMinus(trimZeros(mantissa))} × 10${power}`;
 }
 
@@ -56,7 +69,11 @@ export function formatFull(value: number): string {
  */
 export function formatInWords(value: number, digits = 6): string {
   const abs = Math.abs(value);
-  const scales: Array<[number, string]> = [[1e12, 'trillion'], [1e9, 'billion'], [1e6, 'million']];
+  const scales: Array<[number, string]> = [
+    [1e12, 'trillion'],
+    [1e9, 'billion'],
+    [1e6, 'million'],
+  ];
   for (const [size, word] of scales) {
     if (abs >= size && abs < size * 1000) return `${formatSig(value / size, digits)} ${word}`;
   }

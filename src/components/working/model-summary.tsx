@@ -57,11 +57,21 @@ export function ModelSummary({ model, defaultOpen = false }: { model: ResolvedMo
           <caption className="sr-only">Parameters of {model.label}, with their sources</caption>
           <thead className="text-xs text-muted">
             <tr>
-              <th scope="col" className="py-1.5 pr-3 font-medium">Symbol</th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">Parameter</th>
-              <th scope="col" className="py-1.5 pr-3 text-right font-medium">Value</th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">Unit</th>
-              <th scope="col" className="py-1.5 font-medium">Source</th>
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Symbol
+              </th>
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Parameter
+              </th>
+              <th scope="col" className="py-1.5 pr-3 text-right font-medium">
+                Value
+              </th>
+              <th scope="col" className="py-1.5 pr-3 font-medium">
+                Unit
+              </th>
+              <th scope="col" className="py-1.5 font-medium">
+                Source
+              </th>
             </tr>
           </thead>
           <tbody className="align-baseline">

@@ -15,7 +15,17 @@ export function SymbolText({ text }: { text: string }) {
     const index = match.index ?? 0;
     if (index > last) parts.push(text.slice(last, index));
     const body = match[2].startsWith('{') ? match[2].slice(1, -1) : match[2];
-    parts.push(match[1] === '_' ? <sub key={index} className="text-[0.72em]">{body}</sub> : <sup key={index} className="text-[0.72em]">{body}</sup>);
+    parts.push(
+      match[1] === '_' ? (
+        <sub key={index} className="text-[0.72em]">
+          {body}
+        </sub>
+      ) : (
+        <sup key={index} className="text-[0.72em]">
+          {body}
+        </sup>
+      ),
+    );
     last = index + match[0].length;
   }
   if (last < text.length) parts.push(text.slice(last));

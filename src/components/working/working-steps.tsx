@@ -40,7 +40,9 @@ function ValueRows({ steps, index, values }: { steps: Step[]; index: number; val
         <span className="block text-xs leading-5 text-muted wrap-anywhere @lg:hidden">{sourceText(steps, index, v)}</span>
       </td>
       <td className="py-1.5 pr-3 text-right tabular-nums">
-        <span className="whitespace-nowrap"><ValueCell value={v.value} exact={/\bexact\b/.test(v.source)} /></span>
+        <span className="whitespace-nowrap">
+          <ValueCell value={v.value} exact={/\bexact\b/.test(v.source)} />
+        </span>
         {v.unit && <span className="block text-muted @lg:hidden">{v.unit}</span>}
       </td>
       <td className="hidden py-1.5 pr-3 whitespace-nowrap text-muted @lg:table-cell">{v.unit}</td>
@@ -52,7 +54,11 @@ function ValueRows({ steps, index, values }: { steps: Step[]; index: number; val
 function GroupRow({ label }: { label: string }) {
   return (
     <tr>
-      <th scope="rowgroup" colSpan={5} className="pt-3 pb-1 text-left text-[11px] font-semibold tracking-wider text-muted uppercase">
+      <th
+        scope="rowgroup"
+        colSpan={5}
+        className="pt-3 pb-1 text-left text-[11px] font-semibold tracking-wider text-muted uppercase"
+      >
         {label}
       </th>
     </tr>
@@ -66,7 +72,10 @@ function StepItem({ steps, index }: { steps: Step[]; index: number }) {
   return (
     <li className="@container rounded-lg border border-rule bg-panel">
       <div className="flex items-start gap-3 px-4 pt-3.5">
-        <span aria-hidden="true" className="mt-px flex size-6 shrink-0 items-center justify-center rounded-full bg-wash text-xs font-semibold text-ink tabular-nums">
+        <span
+          aria-hidden="true"
+          className="mt-px flex size-6 shrink-0 items-center justify-center rounded-full bg-wash text-xs font-semibold text-ink tabular-nums"
+        >
           {index + 1}
         </span>
         <h3 className="text-[15px] font-medium leading-6 text-ink">
@@ -86,11 +95,21 @@ function StepItem({ steps, index }: { steps: Step[]; index: number }) {
               <caption className="sr-only">Inputs and constants of step {index + 1}</caption>
               <thead className="text-xs text-muted">
                 <tr>
-                  <th scope="col" className="pb-1 pr-3 text-left font-medium @lg:w-20">Symbol</th>
-                  <th scope="col" className="pb-1 pr-3 text-left font-medium">Quantity</th>
-                  <th scope="col" className="pb-1 pr-3 text-right font-medium">Value</th>
-                  <th scope="col" className="hidden w-20 pb-1 pr-3 text-left font-medium @lg:table-cell">Unit</th>
-                  <th scope="col" className="hidden w-[38%] pb-1 text-left font-medium @lg:table-cell">Source</th>
+                  <th scope="col" className="pb-1 pr-3 text-left font-medium @lg:w-20">
+                    Symbol
+                  </th>
+                  <th scope="col" className="pb-1 pr-3 text-left font-medium">
+                    Quantity
+                  </th>
+                  <th scope="col" className="pb-1 pr-3 text-right font-medium">
+                    Value
+                  </th>
+                  <th scope="col" className="hidden w-20 pb-1 pr-3 text-left font-medium @lg:table-cell">
+                    Unit
+                  </th>
+                  <th scope="col" className="hidden w-[38%] pb-1 text-left font-medium @lg:table-cell">
+                    Source
+                  </th>
                 </tr>
               </thead>
               <tbody className="align-baseline">

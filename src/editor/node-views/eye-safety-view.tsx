@@ -6,7 +6,12 @@ import { usePageEditorContext } from '../editor-context.tsx';
 export function EyeSafetyView({ selected }: ReactNodeViewProps) {
   const { eyeSafetyNotice } = usePageEditorContext();
   return (
-    <NodeViewWrapper as="aside" className={`eye-safety-block ${selected ? 'is-selected' : ''}`} contentEditable={false} data-drag-handle="">
+    <NodeViewWrapper
+      as="aside"
+      className={`eye-safety-block ${selected ? 'is-selected' : ''}`}
+      contentEditable={false}
+      data-drag-handle=""
+    >
       <Icon name="shield" className="mt-0.5 size-5 shrink-0" />
       <div>
         <p className="font-sans text-sm font-semibold">Eye safety</p>

@@ -6,10 +6,17 @@ import { useMediaItem } from '@/features/pages/api/pages.ts';
 export function MediaImageView({ node, updateAttributes, selected }: ReactNodeViewProps) {
   const media = useMediaItem(String(node.attrs.mediaId));
   const m = media.data;
-  const page = m?.renditions.find((r) => r.name === 'page' && r.format === 'webp') ?? m?.renditions.find((r) => r.name === 'page');
+  const page =
+    m?.renditions.find((r) => r.name === 'page' && r.format === 'webp') ?? m?.renditions.find((r) => r.name === 'page');
   return (
     <NodeViewWrapper as="figure" className={`media-block ${selected ? 'is-selected' : ''}`} data-drag-handle="">
-      {page ? <img src={page.url} alt={m?.altText ?? ''} className="max-h-96 w-auto rounded" /> : <div className="grid h-40 place-items-center rounded bg-wash font-sans text-sm text-muted">{media.isPending ? 'Loading image…' : 'Image not available'}</div>}
+      {page ? (
+        <img src={page.url} alt={m?.altText ?? ''} className="max-h-96 w-auto rounded" />
+      ) : (
+        <div className="grid h-40 place-items-center rounded bg-wash font-sans text-sm text-muted">
+          {media.isPending ? 'Loading image…' : 'Image not available'}
+        </div>
+      )}
       <figcaption className="mt-2 space-y-1 font-sans text-sm" contentEditable={false}>
         <input
           aria-label="Caption"
@@ -18,8 +25,14 @@ export function MediaImageView({ node, updateAttributes, selected }: ReactNodeVi
           onChange={(e) => updateAttributes({ caption: e.target.value || null })}
           className="w-full rounded border border-rule bg-panel px-2 py-1"
         />
-        <span className="block text-xs text-muted">{[m?.credit, m?.licence?.label].filter(Boolean).join(' · ') || 'No credit yet'}</span>
-        {m && m.missing.length > 0 && <span className="block text-xs text-changed">Before approval this image needs: {m.missing.map((x) => REQUIREMENT_LABELS[x]).join(', ')}.</span>}
+        <span className="block text-xs text-muted">
+          {[m?.credit, m?.licence?.label].filter(Boolean).join(' · ') || 'No credit yet'}
+        </span>
+        {m && m.missing.length > 0 && (
+          <span className="block text-xs text-changed">
+            Before approval this image needs: {m.missing.map((x) => REQUIREMENT_LABELS[x]).join(', ')}.
+          </span>
+        )}
       </figcaption>
     </NodeViewWrapper>
   );

@@ -21,9 +21,18 @@ export function StatementRefView({ node, selected }: ReactNodeViewProps) {
       data-statement-id={id}
       contentEditable={false}
     >
-      <button type="button" className="statement-ref-button" onClick={() => openStatement(id)} title="Checked statement: show its working">
-        {statement.isPending ? 'Loading statement…' : text ?? `[${s?.template.title ?? 'Statement'}: cannot be worked out]`}
-        <Icon name={state === 'current' ? 'check' : 'alert'} className="statement-ref-mark" label={state === 'current' ? 'checked statement' : `statement ${state}`} />
+      <button
+        type="button"
+        className="statement-ref-button"
+        onClick={() => openStatement(id)}
+        title="Checked statement: show its working"
+      >
+        {statement.isPending ? 'Loading statement…' : (text ?? `[${s?.template.title ?? 'Statement'}: cannot be worked out]`)}
+        <Icon
+          name={state === 'current' ? 'check' : 'alert'}
+          className="statement-ref-mark"
+          label={state === 'current' ? 'checked statement' : `statement ${state}`}
+        />
       </button>
     </NodeViewWrapper>
   );

@@ -111,7 +111,12 @@ export function parseNumber(text: string): number | undefined {
 
 const NOT_A_NUMBER = 'Enter a number, for example 1.5 or 2e-3.';
 
-function readMeasured(key: CalcNumericInput, f: MeasuredField, required: boolean, problems: FieldProblem[]): MeasuredInput | undefined {
+function readMeasured(
+  key: CalcNumericInput,
+  f: MeasuredField,
+  required: boolean,
+  problems: FieldProblem[],
+): MeasuredInput | undefined {
   const base = `inputs.${key}`;
   const value = parseNumber(f.value);
   if (value === undefined) {
@@ -131,7 +136,10 @@ function readMeasured(key: CalcNumericInput, f: MeasuredField, required: boolean
     const plus = pos(`${base}.plus`, f.plus);
     if (minus === undefined && plus === undefined) return value;
     if (minus === undefined || plus === undefined) {
-      problems.push({ path: `${base}.${minus === undefined ? 'minus' : 'plus'}`, message: 'Give both the lower and the upper uncertainty, or neither.' });
+      problems.push({
+        path: `${base}.${minus === undefined ? 'minus' : 'plus'}`,
+        message: 'Give both the lower and the upper uncertainty, or neither.',
+      });
       return undefined;
     }
     return { value, minus, plus };
@@ -151,7 +159,8 @@ function readModel(v: CalcFormValues, problems: FieldProblem[]): CalcModel | und
   if (v.model === 'planck18' || v.model === 'wmap9') return { preset: v.model };
   if (v.model === 'hubble') {
     const H0 = readNumber('hubbleH0', v.hubbleH0, problems, 'H₀');
-    if (H0 === undefined && !problems.some((p) => p.path === 'hubbleH0')) problems.push({ path: 'hubbleH0', message: 'Enter the Hubble constant H₀.' });
+    if (H0 === undefined && !problems.some((p) => p.path === 'hubbleH0'))
+      problems.push({ path: 'hubbleH0', message: 'Enter the Hubble constant H₀.' });
     return H0 === undefined ? undefined : { law: 'hubble', H0 };
   }
   const c = v.custom;
@@ -160,8 +169,18 @@ function readModel(v: CalcFormValues, problems: FieldProblem[]): CalcModel | und
   const Om0 = num('Om0');
   if (c.H0.trim() === '') problems.push({ path: 'custom.H0', message: 'Enter the Hubble constant H₀.' });
   if (c.Om0.trim() === '') problems.push({ path: 'custom.Om0', message: 'Enter the matter density Ω_m.' });
-  const masses = c.m_nu.trim() === '' ? undefined : c.m_nu.split(/[,\s]+/).filter(Boolean).map((t) => parseNumber(t) ?? NaN);
-  if (masses?.some(Number.isNaN)) problems.push({ path: 'custom.m_nu', message: 'List the neutrino masses in eV separated by commas, for example 0, 0, 0.06.' });
+  const masses =
+    c.m_nu.trim() === ''
+      ? undefined
+      : c.m_nu
+          .split(/[,\s]+/)
+          .filter(Boolean)
+          .map((t) => parseNumber(t) ?? NaN);
+  if (masses?.some(Number.isNaN))
+    problems.push({
+      path: 'custom.m_nu',
+      message: 'List the neutrino masses in eV separated by commas, for example 0, 0, 0.06.',
+    });
   if (H0 === undefined || Om0 === undefined) return undefined;
   const optional = { Ode0: num('Ode0'), Tcmb0: num('Tcmb0'), Neff: num('Neff') };
   return {
@@ -204,11 +223,15 @@ export function buildRequest(v: CalcFormValues): { request: CalcRequest } | { pr
   if (problems.length > 0) return { problems };
   const candidate = { quantity: v.quantity, inputs, ...(model ? { model } : {}), ...(H0_range ? { H0_range } : {}) };
   const parsed = CalcRequestSchema.safeParse(candidate);
-  if (!parsed.success) return { problems: [{ path: 'root', message: parsed.error.issues[0]?.message ?? 'The request is not valid.' }] };
+  if (!parsed.success)
+    return { problems: [{ path: 'root', message: parsed.error.issues[0]?.message ?? 'The request is not valid.' }] };
   return { request: parsed.data };
 }
 
-const KEY_PATTERN = new RegExp(`\\b(${[...CALC_NUMERIC_INPUTS, ...CALC_QUANTITIES].sort((a, b) => b.length - a.length).join('|')})\\b`, 'g');
+const KEY_PATTERN = new RegExp(
+  `\\b(${[...CALC_NUMERIC_INPUTS, ...CALC_QUANTITIES].sort((a, b) => b.length - a.length).join('|')})\\b`,
+  'g',
+);
 
 /**
  * Rewrites an engine message in the form's words: input and quantity keys become their labels.

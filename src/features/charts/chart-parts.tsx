@@ -4,7 +4,15 @@
  * and the visually hidden data table.
  */
 import { mpcToLy } from '@shared/engine/units.ts';
-import { HUBBLE_KEY, MEASURE_LABELS, MEASURES, seriesKey, type ChartModel, type ChartRow, type Measure } from './distance-curves.ts';
+import {
+  HUBBLE_KEY,
+  MEASURE_LABELS,
+  MEASURES,
+  seriesKey,
+  type ChartModel,
+  type ChartRow,
+  type Measure,
+} from './distance-curves.ts';
 
 /** How one line is drawn; dash patterns carry meaning as well as colour, so no line is told apart by colour alone. */
 export interface SeriesStyle {
@@ -47,7 +55,17 @@ export const formatZ = (z: number): string => new Intl.NumberFormat('en-GB', { m
  * @returns styles keyed as in chart rows
  */
 export function seriesStyles(models: ChartModel[]): SeriesStyle[] {
-  const styles: SeriesStyle[] = [{ key: HUBBLE_KEY, label: `Simple Hubble law d = cz/H₀`, short: 'Hubble law cz/H₀', colour: HUBBLE_COLOUR, dash: HUBBLE_DASH, width: 2, opacity: 1 }];
+  const styles: SeriesStyle[] = [
+    {
+      key: HUBBLE_KEY,
+      label: `Simple Hubble law d = cz/H₀`,
+      short: 'Hubble law cz/H₀',
+      colour: HUBBLE_COLOUR,
+      dash: HUBBLE_DASH,
+      width: 2,
+      opacity: 1,
+    },
+  ];
   models.forEach((m, i) => {
     if (!m.cosmo) return;
     for (const measure of MEASURES) {
@@ -75,9 +93,23 @@ export function Swatch({ colour, dash, width = 2 }: { colour: string; dash?: str
 }
 
 /** A checkbox with a swatch: the legend and the switch are the same control. */
-export function Toggle({ label, checked, onChange, colour, dash }: { label: string; checked: boolean; onChange: () => void; colour: string; dash?: string }) {
+export function Toggle({
+  label,
+  checked,
+  onChange,
+  colour,
+  dash,
+}: {
+  label: string;
+  checked: boolean;
+  onChange: () => void;
+  colour: string;
+  dash?: string;
+}) {
   return (
-    <label className={`flex cursor-pointer items-center gap-2 rounded-md border px-2.5 py-1 text-[13px] ${checked ? 'border-rule bg-panel text-ink' : 'border-dashed border-rule text-muted'}`}>
+    <label
+      className={`flex cursor-pointer items-center gap-2 rounded-md border px-2.5 py-1 text-[13px] ${checked ? 'border-rule bg-panel text-ink' : 'border-dashed border-rule text-muted'}`}
+    >
       <input type="checkbox" checked={checked} onChange={onChange} className="accent-accent" />
       <Swatch colour={colour} dash={dash} />
       {label}
@@ -100,8 +132,12 @@ export function ChartTooltip({ active, row, styles }: { active?: boolean; row?: 
             <th scope="col" colSpan={2} className="pb-1 pr-3 text-left font-semibold text-ink">
               z = {formatZ(row.z)}
             </th>
-            <th scope="col" className="pb-1 pr-3 text-right font-medium">Mpc</th>
-            <th scope="col" className="pb-1 text-right font-medium">billion ly</th>
+            <th scope="col" className="pb-1 pr-3 text-right font-medium">
+              Mpc
+            </th>
+            <th scope="col" className="pb-1 text-right font-medium">
+              billion ly
+            </th>
           </tr>
         </thead>
         <tbody>

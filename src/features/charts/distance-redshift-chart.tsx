@@ -4,11 +4,45 @@
  * lazy-distance-redshift-chart.tsx) so the charting library stays out of the first bundle.
  */
 import { useId, useMemo, useState } from 'react';
-import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
+import {
+  CartesianGrid,
+  ComposedChart,
+  Line,
+  ReferenceArea,
+  ReferenceDot,
+  ReferenceLine,
+  ResponsiveContainer,
+  Tooltip,
+  XAxis,
+  YAxis,
+} from 'recharts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import { Notice } from '@/components/ui/notice.tsx';
-import { ChartDataTable, ChartTooltip, HUBBLE_COLOUR, HUBBLE_DASH, MEASURE_COLOURS, MODEL_DASHES, Toggle, formatGly, formatMpc, formatZ, seriesStyles } from './chart-parts.tsx';
-import { HUBBLE_KEY, MEASURE_LABELS, MEASURES, chartModel, chartZMin, chartRows, redshiftGrid, seriesKey, type ChartRow, type Measure } from './distance-curves.ts';
+import {
+  ChartDataTable,
+  ChartTooltip,
+  HUBBLE_COLOUR,
+  HUBBLE_DASH,
+  MEASURE_COLOURS,
+  MODEL_DASHES,
+  Toggle,
+  formatGly,
+  formatMpc,
+  formatZ,
+  seriesStyles,
+} from './chart-parts.tsx';
+import {
+  HUBBLE_KEY,
+  MEASURE_LABELS,
+  MEASURES,
+  chartModel,
+  chartZMin,
+  chartRows,
+  redshiftGrid,
+  seriesKey,
+  type ChartRow,
+  type Measure,
+} from './distance-curves.ts';
 import { failureSentence, pointModel } from './failure-sentence.ts';
 
 /** Props of the chart, as statement pages pass them. */
@@ -50,7 +84,15 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
   const hubbleH0 = chosen.H0;
   const rows = useMemo(() => chartRows(models, hubbleH0, redshiftGrid(zMin, zMax)), [models, hubbleH0, zMin, zMax]);
   const [object] = useMemo(() => chartRows(models, hubbleH0, [z]), [models, hubbleH0, z]);
-  const tableRows = useMemo(() => chartRows(models, hubbleH0, [...new Set([...TABLE_Z.filter((t) => t >= zMin && t <= zMax), z])].sort((a, b) => a - b)), [models, hubbleH0, zMin, zMax, z]);
+  const tableRows = useMemo(
+    () =>
+      chartRows(
+        models,
+        hubbleH0,
+        [...new Set([...TABLE_Z.filter((t) => t >= zMin && t <= zMax), z])].sort((a, b) => a - b),
+      ),
+    [models, hubbleH0, zMin, zMax, z],
+  );
 
   const [hiddenMeasures, setHiddenMeasures] = useState<Set<string>>(new Set());
   const [hiddenModels, setHiddenModels] = useState<Set<string>>(new Set());
@@ -70,7 +112,9 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
   const values = rows.flatMap((r) => visible.map((s) => r[s.key])).filter((d): d is number => typeof d === 'number' && d > 0);
   const yMin = values.length ? 10 ** Math.floor(Math.log10(Math.min(...values))) : 1;
   const yMax = values.length ? Math.max(...values) * 1.05 : 10;
-  const yTicks = logY ? Array.from({ length: Math.round(Math.log10(yMax / yMin)) + 1 }, (_, i) => yMin * 10 ** i).filter((t) => t <= yMax) : undefined;
+  const yTicks = logY
+    ? Array.from({ length: Math.round(Math.log10(yMax / yMin)) + 1 }, (_, i) => yMin * 10 ** i).filter((t) => t <= yMax)
+    : undefined;
 
   const objectLabel = objectName ?? 'the object';
   const zText = zInterval ? `z = ${formatZ(z)} (${formatZ(zInterval.low)} to ${formatZ(zInterval.high)})` : `z = ${formatZ(z)}`;
@@ -109,9 +153,21 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
         <fieldset className="flex flex-wrap items-center gap-1.5">
           <legend className="mb-1 text-xs font-semibold tracking-wider text-muted uppercase">Curves</legend>
           {MEASURES.map((m: Measure) => (
-            <Toggle key={m} label={MEASURE_LABELS[m]} colour={MEASURE_COLOURS[m]} checked={!hiddenMeasures.has(m)} onChange={() => setHiddenMeasures((s) => flip(s, m))} />
+            <Toggle
+              key={m}
+              label={MEASURE_LABELS[m]}
+              colour={MEASURE_COLOURS[m]}
+              checked={!hiddenMeasures.has(m)}
+              onChange={() => setHiddenMeasures((s) => flip(s, m))}
+            />
           ))}
-          <Toggle label="Simple Hubble law" colour={HUBBLE_COLOUR} dash={HUBBLE_DASH} checked={!hiddenMeasures.has(HUBBLE_KEY)} onChange={() => setHiddenMeasures((s) => flip(s, HUBBLE_KEY))} />
+          <Toggle
+            label="Simple Hubble law"
+            colour={HUBBLE_COLOUR}
+            dash={HUBBLE_DASH}
+            checked={!hiddenMeasures.has(HUBBLE_KEY)}
+            onChange={() => setHiddenMeasures((s) => flip(s, HUBBLE_KEY))}
+          />
         </fieldset>
         <fieldset className="flex flex-wrap items-center gap-1.5">
           <legend className="mb-1 text-xs font-semibold tracking-wider text-muted uppercase">Models</legend>
@@ -148,7 +204,13 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
               tickFormatter={formatZ}
               stroke="var(--sp-muted)"
               tick={{ fill: 'var(--sp-muted)', fontSize: 12 }}
-              label={{ value: 'Redshift z (logarithmic)', position: 'insideBottom', offset: -14, fill: 'var(--sp-muted)', fontSize: 12 }}
+              label={{
+                value: 'Redshift z (logarithmic)',
+                position: 'insideBottom',
+                offset: -14,
+                fill: 'var(--sp-muted)',
+                fontSize: 12,
+              }}
             />
             <YAxis
               type="number"
@@ -160,10 +222,31 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
               width={64}
               stroke="var(--sp-muted)"
               tick={{ fill: 'var(--sp-muted)', fontSize: 12 }}
-              label={{ value: 'Distance (Mpc)', angle: -90, position: 'insideLeft', offset: -4, fill: 'var(--sp-muted)', fontSize: 12, style: { textAnchor: 'middle' } }}
+              label={{
+                value: 'Distance (Mpc)',
+                angle: -90,
+                position: 'insideLeft',
+                offset: -4,
+                fill: 'var(--sp-muted)',
+                fontSize: 12,
+                style: { textAnchor: 'middle' },
+              }}
             />
-            {zInterval && <ReferenceArea x1={Math.max(zInterval.low, zMin)} x2={Math.min(zInterval.high, zMax)} fill="var(--sp-accent)" fillOpacity={0.1} ifOverflow="hidden" />}
-            <ReferenceLine x={0.1} stroke="var(--sp-muted)" strokeDasharray="3 3" label={{ value: 'z = 0.1', position: 'insideTopLeft', fill: 'var(--sp-muted)', fontSize: 11 }} />
+            {zInterval && (
+              <ReferenceArea
+                x1={Math.max(zInterval.low, zMin)}
+                x2={Math.min(zInterval.high, zMax)}
+                fill="var(--sp-accent)"
+                fillOpacity={0.1}
+                ifOverflow="hidden"
+              />
+            )}
+            <ReferenceLine
+              x={0.1}
+              stroke="var(--sp-muted)"
+              strokeDasharray="3 3"
+              label={{ value: 'z = 0.1', position: 'insideTopLeft', fill: 'var(--sp-muted)', fontSize: 11 }}
+            />
             <ReferenceLine x={z} stroke="var(--sp-accent)" strokeOpacity={0.5} ifOverflow="hidden" />
             {visible.map((s) => (
               <Line
@@ -185,30 +268,68 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
               pointsOn.map((m) => {
                 const d = object[seriesKey(dotted!.key, m)];
                 return typeof d === 'number' ? (
-                  <ReferenceLine key={`bar-${m}`} segment={[{ x: Math.max(zInterval.low, zMin), y: d }, { x: zInterval.high, y: d }]} stroke={MEASURE_COLOURS[m]} strokeWidth={2} ifOverflow="hidden" />
+                  <ReferenceLine
+                    key={`bar-${m}`}
+                    segment={[
+                      { x: Math.max(zInterval.low, zMin), y: d },
+                      { x: zInterval.high, y: d },
+                    ]}
+                    stroke={MEASURE_COLOURS[m]}
+                    strokeWidth={2}
+                    ifOverflow="hidden"
+                  />
                 ) : null;
               })}
             {pointsOn.map((m) => {
               const d = object[seriesKey(dotted!.key, m)];
-              return typeof d === 'number' ? <ReferenceDot key={m} x={z} y={d} r={5} fill={MEASURE_COLOURS[m]} stroke="var(--sp-panel)" strokeWidth={2} ifOverflow="hidden" /> : null;
+              return typeof d === 'number' ? (
+                <ReferenceDot
+                  key={m}
+                  x={z}
+                  y={d}
+                  r={5}
+                  fill={MEASURE_COLOURS[m]}
+                  stroke="var(--sp-panel)"
+                  strokeWidth={2}
+                  ifOverflow="hidden"
+                />
+              ) : null;
             })}
             {!hiddenMeasures.has(HUBBLE_KEY) && (
-              <ReferenceDot x={z} y={object[HUBBLE_KEY] as number} r={5} fill="var(--sp-panel)" stroke={HUBBLE_COLOUR} strokeWidth={2} ifOverflow="hidden" />
+              <ReferenceDot
+                x={z}
+                y={object[HUBBLE_KEY] as number}
+                r={5}
+                fill="var(--sp-panel)"
+                stroke={HUBBLE_COLOUR}
+                strokeWidth={2}
+                ifOverflow="hidden"
+              />
             )}
             <Tooltip
               cursor={{ stroke: 'var(--sp-muted)', strokeDasharray: '2 2' }}
               isAnimationActive={false}
-              content={({ active, payload }) => <ChartTooltip active={active} row={payload?.[0]?.payload as ChartRow | undefined} styles={visible} />}
+              content={({ active, payload }) => (
+                <ChartTooltip active={active} row={payload?.[0]?.payload as ChartRow | undefined} styles={visible} />
+              )}
             />
           </ComposedChart>
         </ResponsiveContainer>
       </div>
       <p className="text-xs text-muted">
-        {dotted && <>Filled dots: {objectLabel} on {dotted.label}’s curves{zInterval ? ', with its redshift interval shaded' : ''}. </>}
-        Open dot: where the simple Hubble law puts it, {formatMpc(object[HUBBLE_KEY] as number)} ({formatGly(object[HUBBLE_KEY] as number)}). Point at a curve to read its
-        distances.
+        {dotted && (
+          <>
+            Filled dots: {objectLabel} on {dotted.label}’s curves{zInterval ? ', with its redshift interval shaded' : ''}.{' '}
+          </>
+        )}
+        Open dot: where the simple Hubble law puts it, {formatMpc(object[HUBBLE_KEY] as number)} (
+        {formatGly(object[HUBBLE_KEY] as number)}). Point at a curve to read its distances.
       </p>
-      <ChartDataTable rows={tableRows} styles={styles} caption={`Distances in megaparsecs at selected redshifts, including ${objectLabel}’s z = ${formatZ(z)}`} />
+      <ChartDataTable
+        rows={tableRows}
+        styles={styles}
+        caption={`Distances in megaparsecs at selected redshifts, including ${objectLabel}’s z = ${formatZ(z)}`}
+      />
     </figure>
   );
 }

@@ -43,7 +43,8 @@ export function failureSentence(z: number, object: ChartRow, chosen: ChartModel,
   const distances =
     `${under} the luminosity distance is ${formatMpc(lum)}, the proper distance today ${formatMpc(proper)} ` +
     `and the light-travel distance ${formatMpc(travel)} (${formatGly(travel)})`;
-  if (worst < FAIR_GUIDE) return `${lawText}. ${distances}: all within ${pct(worst)} % of it, so this close the law is a fair guide.`;
+  if (worst < FAIR_GUIDE)
+    return `${lawText}. ${distances}: all within ${pct(worst)} % of it, so this close the law is a fair guide.`;
   const properOff = offs[1];
   return (
     `${lawText}. ${distances}. The distance measures no longer agree with each other, and cz/H₀ is up to ${pct(worst)} % from them ` +

@@ -10,7 +10,13 @@ const Chart = lazy(() => import('./distance-redshift-chart.tsx').then((m) => ({ 
  */
 export function LazyDistanceRedshiftChart(props: DistanceRedshiftChartProps) {
   return (
-    <Suspense fallback={<div className="flex h-40 items-center justify-center rounded-lg border border-rule bg-panel text-sm text-muted">Drawing the chart…</div>}>
+    <Suspense
+      fallback={
+        <div className="flex h-40 items-center justify-center rounded-lg border border-rule bg-panel text-sm text-muted">
+          Drawing the chart…
+        </div>
+      }
+    >
       <Chart {...props} />
     </Suspense>
   );

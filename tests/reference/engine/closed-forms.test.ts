@@ -28,7 +28,9 @@ describe('Hogg (1999) closed forms', () => {
   it('empty (Milne) universe (Ωm = ΩΛ = 0): D_L = D_H z (1 + z/2)', () => {
     for (const z of ZS) {
       const expected = DH * z * (1 + z / 2); // Hogg (1999), empty universe
-      expect(rel(valueOf({ quantity: 'luminosity_distance', inputs: { z }, model: { H0, Om0: 0, Ode0: 0 } }), expected)).toBeLessThan(1e-9);
+      expect(
+        rel(valueOf({ quantity: 'luminosity_distance', inputs: { z }, model: { H0, Om0: 0, Ode0: 0 } }), expected),
+      ).toBeLessThan(1e-9);
     }
   });
 

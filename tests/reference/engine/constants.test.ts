@@ -6,7 +6,8 @@ import { rel, valueOf } from './helpers.ts';
 
 describe('constants against their defining resolutions', () => {
   it('speed of light: 299 792 458 m/s exactly (SI)', () => expect(K.SPEED_OF_LIGHT.value * 1000).toBe(299_792_458));
-  it('astronomical unit: 149 597 870 700 m exactly (IAU 2012 Resolution B2)', () => expect(K.ASTRONOMICAL_UNIT.value).toBe(149_597_870_700));
+  it('astronomical unit: 149 597 870 700 m exactly (IAU 2012 Resolution B2)', () =>
+    expect(K.ASTRONOMICAL_UNIT.value).toBe(149_597_870_700));
   it('parsec: 648000/π au ≈ 3.085 677 581 491 367e16 m (IAU 2015 Resolution B2)', () =>
     expect(rel(K.PARSEC.value, 3.085677581491367e16)).toBeLessThan(1e-15));
   it('light-year: c × 365.25 d = 9 460 730 472 580 800 m (IAU)', () => expect(K.LIGHT_YEAR.value).toBe(9_460_730_472_580_800));

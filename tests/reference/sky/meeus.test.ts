@@ -81,7 +81,14 @@ describe('Meeus worked examples (recalled from memory)', () => {
     // Boston keeps EST (UTC−5) in March 1988: rise 12h25m UT = 07:25, transit 19h41m UT = 14:41.
     // Venus was an evening star: up at noon on the 19th and still up after sunset, so the night's
     // stay is the one under way, and the book's rise (07:25 on the 20th) is the next rise after it.
-    const sky = computeSkyTonight({ latitude: 42.3333, longitude: -71.0833, elevationM: 0, timeZone: 'America/New_York', localDate: '1988-03-19', now: 0 });
+    const sky = computeSkyTonight({
+      latitude: 42.3333,
+      longitude: -71.0833,
+      elevationM: 0,
+      timeZone: 'America/New_York',
+      localDate: '1988-03-19',
+      now: 0,
+    });
     const venus = sky.planets.find((p) => p.id === 'venus')!;
     const minutesOff = (utc: string | null, hh: number, mm: number, day: number) =>
       Math.abs((Date.parse(utc!) - Date.UTC(1988, 2, day, hh, mm)) / 60_000);

@@ -35,9 +35,28 @@ describe('quantities and their units', () => {
   });
 
   it('the shared schema converts value and uncertainty together and keeps what was typed', () => {
-    const parsed = MeasurementInputSchema.parse({ quantity: 'distance', value: '2.5', unit: 'Mpc', uncertaintyMinus: '0.1', uncertaintyPlus: '0.2' });
-    expect(parsed).toMatchObject({ value: 2_500_000, uncertaintyMinus: 100_000, uncertaintyPlus: 200_000, enteredValue: 2.5, enteredUnit: 'Mpc', band: null });
-    const issues = MeasurementInputSchema.safeParse({ quantity: 'apparent_magnitude', value: '1,5', unit: 'mag', band: 'V', uncertaintyMinus: '0.1' });
+    const parsed = MeasurementInputSchema.parse({
+      quantity: 'distance',
+      value: '2.5',
+      unit: 'Mpc',
+      uncertaintyMinus: '0.1',
+      uncertaintyPlus: '0.2',
+    });
+    expect(parsed).toMatchObject({
+      value: 2_500_000,
+      uncertaintyMinus: 100_000,
+      uncertaintyPlus: 200_000,
+      enteredValue: 2.5,
+      enteredUnit: 'Mpc',
+      band: null,
+    });
+    const issues = MeasurementInputSchema.safeParse({
+      quantity: 'apparent_magnitude',
+      value: '1,5',
+      unit: 'mag',
+      band: 'V',
+      uncertaintyMinus: '0.1',
+    });
     expect(issues.success).toBe(false);
     expect(issues.error!.issues.map((i) => i.path[0])).toEqual(['value', 'uncertaintyPlus']);
   });

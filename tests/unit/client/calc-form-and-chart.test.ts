@@ -8,7 +8,12 @@ import { HUBBLE_KEY, chartModel, chartRows, seriesKey } from '../../../src/featu
 describe('the calculator form', () => {
   it('offers only the inputs the engine takes for each quantity', () => {
     expect(fieldsFor('lookback_time', 0)).toMatchObject({ required: ['z'], optional: [], band: false, usesModel: true });
-    expect(fieldsFor('luminosity_ratio_sun', 2)).toMatchObject({ required: ['m', 'parallax_mas'], optional: ['extinction', 'alpha'], band: true, usesModel: false });
+    expect(fieldsFor('luminosity_ratio_sun', 2)).toMatchObject({
+      required: ['m', 'parallax_mas'],
+      optional: ['extinction', 'alpha'],
+      band: true,
+      usesModel: false,
+    });
     expect(fieldsFor('flux_ratio', 1).required).toEqual(['m1', 'm2']);
     expect(fieldsFor('age_now', 0)).toMatchObject({ required: [], flrwOnly: true });
   });
@@ -46,7 +51,9 @@ describe('the calculator form', () => {
   it('puts a server message on its field, in words', () => {
     const v = defaultFormValues();
     expect(fieldForMessage('parallax_mas must be greater than 0 (got -1)', v)).toBe('inputs.parallax_mas.value');
-    expect(fieldForMessage('the uncertainty on z reaches values where lookback_time is not defined (3.0 % of draws)', v)).toBe('inputs.z.sigma');
+    expect(fieldForMessage('the uncertainty on z reaches values where lookback_time is not defined (3.0 % of draws)', v)).toBe(
+      'inputs.z.sigma',
+    );
     expect(inWords('parallax_mas must be greater than 0 (got -1)')).toBe('Parallax (mas) must be greater than 0 (got −1)');
   });
 });
@@ -55,7 +62,11 @@ describe('the chart’s curves', () => {
   it('agree with the engine’s contract at the same redshift', () => {
     const planck = chartModel({ preset: 'planck18' }, 0);
     const [row] = chartRows([planck], planck.H0, [1.5]);
-    for (const [quantity, key] of [['luminosity_distance', 'luminosity'], ['proper_distance', 'proper'], ['light_travel_distance', 'lightTravel']] as const) {
+    for (const [quantity, key] of [
+      ['luminosity_distance', 'luminosity'],
+      ['proper_distance', 'proper'],
+      ['light_travel_distance', 'lightTravel'],
+    ] as const) {
       const r = calculate({ quantity, inputs: { z: 1.5 }, model: { preset: 'planck18' } }) as CalcSuccess;
       expect(row[seriesKey('planck18', key)]).toBeCloseTo(r.value, 6);
     }

@@ -37,10 +37,19 @@ describe('the hand-typed number check', () => {
       type: 'doc',
       content: [
         { type: 'paragraph', content: [{ type: 'text', text: 'Intro.' }] },
-        { type: 'paragraph', content: [{ type: 'text', text: 'It is ' }, { type: 'statementRef', attrs: { statementId: 'x' } }, { type: 'text', text: ' and 5 billion light-years off.' }] },
+        {
+          type: 'paragraph',
+          content: [
+            { type: 'text', text: 'It is ' },
+            { type: 'statementRef', attrs: { statementId: 'x' } },
+            { type: 'text', text: ' and 5 billion light-years off.' },
+          ],
+        },
       ],
     };
-    expect(checkNumbers(doc)).toEqual([{ text: '5 billion light-years', normalised: '5 billion light-years', block: 1, from: 12, to: 33 }]);
+    expect(checkNumbers(doc)).toEqual([
+      { text: '5 billion light-years', normalised: '5 billion light-years', block: 1, from: 12, to: 33 },
+    ]);
   });
 
   it('normalises case, spaces and dashes so a resolution covers the same words', () => {

@@ -29,7 +29,8 @@ describe('calculate', () => {
       for (const step of r.working) {
         expect(step.title.length).toBeGreaterThan(3);
         expect(step.formula.length).toBeGreaterThan(3);
-        for (const v of [...step.inputs, ...step.constants]) expect(v.source.length, `${quantity}: ${step.title}`).toBeGreaterThan(0);
+        for (const v of [...step.inputs, ...step.constants])
+          expect(v.source.length, `${quantity}: ${step.title}`).toBeGreaterThan(0);
       }
       expect(r.working.at(-1)?.result.value).toBe(r.value);
     }
@@ -65,7 +66,12 @@ describe('calculate', () => {
   });
 
   it('propagates an H0 range with the densities fixed (distance ∝ 1/H0)', () => {
-    const r = ok({ quantity: 'comoving_distance', inputs: { z: 1 }, model: { H0: 70, Om0: 0.3 }, H0_range: { low: 68, high: 72 } });
+    const r = ok({
+      quantity: 'comoving_distance',
+      inputs: { z: 1 },
+      model: { H0: 70, Om0: 0.3 },
+      H0_range: { low: 68, high: 72 },
+    });
     expect(r.interval!.low / r.value).toBeCloseTo(70 / 72, 2);
     expect(r.interval!.high / r.value).toBeCloseTo(70 / 68, 2);
     expect(r.model?.H0_range).toEqual({ low: 68, high: 72 });
@@ -93,8 +99,15 @@ describe('calculate', () => {
   it('inverse quantities invert their forward ones', () => {
     const z = ok({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 10 } }).value;
     expect(ok({ quantity: 'lookback_time', inputs: { z } }).value).toBeCloseTo(10, 9);
-    const z2 = ok({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: 5000 }, model: { H0: 70, Om0: 0.4, Ode0: 0.8 } }).value;
-    expect(ok({ quantity: 'luminosity_distance', inputs: { z: z2 }, model: { H0: 70, Om0: 0.4, Ode0: 0.8 } }).value).toBeCloseTo(5000, 6);
+    const z2 = ok({
+      quantity: 'z_from_luminosity_distance',
+      inputs: { distance_mpc: 5000 },
+      model: { H0: 70, Om0: 0.4, Ode0: 0.8 },
+    }).value;
+    expect(ok({ quantity: 'luminosity_distance', inputs: { z: z2 }, model: { H0: 70, Om0: 0.4, Ode0: 0.8 } }).value).toBeCloseTo(
+      5000,
+      6,
+    );
   });
 
   it('absolute magnitude includes extinction and the K-correction K = −2.5 (1 + α) log10(1 + z)', () => {

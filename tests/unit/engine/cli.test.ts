@@ -12,7 +12,10 @@ describe('calc command line', () => {
       '{"id":4,"quantity":"luminosity_distance","inputs":{"z":0.05},"model":{"law":"hubble","H0":70}}',
     ].join('\n');
     const out = execFileSync('npx', ['tsx', 'server/cli/calc.ts'], { input, encoding: 'utf8' });
-    const lines = out.trim().split('\n').map((l) => JSON.parse(l));
+    const lines = out
+      .trim()
+      .split('\n')
+      .map((l) => JSON.parse(l));
     expect(lines).toHaveLength(4);
     expect(lines[0]).toMatchObject({ id: 1, unit: 'Gyr' });
     expect(lines[1].error.code).toBe('invalid_json');

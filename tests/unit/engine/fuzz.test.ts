@@ -12,8 +12,38 @@ import { CALC_NUMERIC_INPUTS, CALC_QUANTITIES, CalcResultSchema } from '../../..
 const rand = mulberry32(20_250_101);
 const pick = <T>(xs: readonly T[]): T => xs[Math.floor(rand() * xs.length)];
 
-const HOSTILE_NUMBERS = [0, -0, 1, -1, -1 + 1e-12, -0.999, 1e-300, -1e-300, 1e308, -1e308, 5e-324, 1e20, 1100, 1e6, NaN, Infinity, -Infinity];
-const HOSTILE_VALUES: unknown[] = ['NaN', 'Infinity', '1', null, true, [], {}, [1], { value: 'x' }, { value: 1, sigma: -1 }, { value: 1, minus: 1 }];
+const HOSTILE_NUMBERS = [
+  0,
+  -0,
+  1,
+  -1,
+  -1 + 1e-12,
+  -0.999,
+  1e-300,
+  -1e-300,
+  1e308,
+  -1e308,
+  5e-324,
+  1e20,
+  1100,
+  1e6,
+  NaN,
+  Infinity,
+  -Infinity,
+];
+const HOSTILE_VALUES: unknown[] = [
+  'NaN',
+  'Infinity',
+  '1',
+  null,
+  true,
+  [],
+  {},
+  [1],
+  { value: 'x' },
+  { value: 1, sigma: -1 },
+  { value: 1, minus: 1 },
+];
 
 function number(): number {
   const r = rand();
@@ -39,7 +69,10 @@ function randomModel(): unknown {
   if (r < 0.15) return { preset: pick(['planck18', 'wmap9', 'planck13', 7]) };
   if (r < 0.3) return { law: pick(['hubble', 'hubble', 'linear']), H0: number() };
   if (r < 0.35) return pick([null, 'planck18', [], { H0: 70 }, { Om0: 0.3 }]);
-  const m: Record<string, unknown> = { H0: rand() < 0.9 ? 40 + rand() * 60 : number(), Om0: rand() < 0.85 ? rand() * 1.2 : number() };
+  const m: Record<string, unknown> = {
+    H0: rand() < 0.9 ? 40 + rand() * 60 : number(),
+    Om0: rand() < 0.85 ? rand() * 1.2 : number(),
+  };
   if (rand() < 0.5) m.Ode0 = rand() < 0.85 ? rand() * 1.5 : number();
   if (rand() < 0.4) m.Tcmb0 = rand() < 0.9 ? 2.7255 : number();
   if (rand() < 0.3) m.Neff = rand() < 0.8 ? 3.046 : number();
@@ -71,7 +104,12 @@ function plausibleRequest(): unknown {
   for (const k of keys) {
     const v = rand() < 0.05 ? number() : PLAUSIBLE[k]();
     const r = rand();
-    inputs[k] = r < 0.6 ? v : r < 0.85 ? { value: v, sigma: Math.abs(v) * rand() * 0.1 } : { value: v, minus: Math.abs(v) * 0.05, plus: Math.abs(v) * rand() * 0.2 };
+    inputs[k] =
+      r < 0.6
+        ? v
+        : r < 0.85
+          ? { value: v, sigma: Math.abs(v) * rand() * 0.1 }
+          : { value: v, minus: Math.abs(v) * 0.05, plus: Math.abs(v) * rand() * 0.2 };
   }
   if (spec.band) inputs.band = rand() < 0.9 ? pick(['V', 'B', 'g_SDSS', 'Ks_2MASS', 'r_SDSS']) : 'Y';
   const req: Record<string, unknown> = { quantity, inputs };

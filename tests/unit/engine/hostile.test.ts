@@ -14,7 +14,9 @@ describe('hostile requests', () => {
     expect(e.code).toBe('out_of_range');
     expect(e.message).toBe('z must be greater than −1 (got -1.5)');
     expect(errorOf({ quantity: 'comoving_distance', inputs: { z: -1 } }).message).toContain('z must be greater than −1');
-    expect(errorOf({ quantity: 'lookback_time', inputs: { z: -3 }, model: { law: 'hubble', H0: 70 } }).message).toContain('z must be');
+    expect(errorOf({ quantity: 'lookback_time', inputs: { z: -3 }, model: { law: 'hubble', H0: 70 } }).message).toContain(
+      'z must be',
+    );
   });
 
   it('NaN and Infinity, as numbers or as strings from JSON', () => {
@@ -25,7 +27,9 @@ describe('hostile requests', () => {
     }
     const line = calculateLine('{"quantity":"luminosity_distance","inputs":{"z":1e999}}');
     expect('error' in line && line.error.message).toMatch(/^z must be a finite number/);
-    expect(errorOf({ quantity: 'age_now', model: { H0: 'NaN', Om0: 0.3 } }).message).toMatch(/^model\.H0 must be a finite number/);
+    expect(errorOf({ quantity: 'age_now', model: { H0: 'NaN', Om0: 0.3 } }).message).toMatch(
+      /^model\.H0 must be a finite number/,
+    );
     expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: { value: 1, sigma: NaN } } }).message).toMatch(/^z must be/);
   });
 
@@ -35,10 +39,16 @@ describe('hostile requests', () => {
       message: 'model.Om0 must not be negative (got -0.3)',
     });
     expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Ode0: -0.7 } }).message).toContain('model.Ode0');
-    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 1.5 } }).message).toContain('model.Om0 is too large for a flat model');
-    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0, 0, -1] } }).message).toContain('model.m_nu[2]');
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 1.5 } }).message).toContain(
+      'model.Om0 is too large for a flat model',
+    );
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0, 0, -1] } }).message).toContain(
+      'model.m_nu[2]',
+    );
     expect(errorOf({ quantity: 'age_now', model: { H0: -70, Om0: 0.3 } }).message).toContain('model.H0 must be greater than 0');
-    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0.1] } }).message).toContain('floor(Neff) = 3');
+    expect(errorOf({ quantity: 'age_now', model: { H0: 70, Om0: 0.3, Tcmb0: 2.7, m_nu: [0.1] } }).message).toContain(
+      'floor(Neff) = 3',
+    );
   });
 
   it('a model with no big bang (it bounces: Ωm = 0.3, ΩΛ = 3)', () => {
@@ -66,8 +76,12 @@ describe('hostile requests', () => {
     const e = errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10, band: 'Gaia_G' } });
     expect(e.code).toBe('unknown_band');
     expect(e.message).toContain('band "Gaia_G"');
-    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10, band: '__proto__' } }).code).toBe('unknown_band');
-    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10 } }).message).toContain('band is required');
+    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10, band: '__proto__' } }).code).toBe(
+      'unknown_band',
+    );
+    expect(errorOf({ quantity: 'luminosity_ratio_sun', inputs: { m: 10, parallax_mas: 10 } }).message).toContain(
+      'band is required',
+    );
   });
 
   it('unknown quantity, unknown fields, missing and conflicting inputs', () => {
@@ -79,7 +93,9 @@ describe('hostile requests', () => {
     expect(errorOf({ quantity: 'luminosity_distance', inputs: { zz: 1 } }).message).toContain('"zz"');
     expect(errorOf({ quantity: 'luminosity_distance', inputs: {} }).message).toBe('z is required for luminosity_distance');
     expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1, m: 3 } }).code).toBe('unused_input');
-    expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 3, z: 0.1, parallax_mas: 3 } }).code).toBe('conflicting_inputs');
+    expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 3, z: 0.1, parallax_mas: 3 } }).code).toBe(
+      'conflicting_inputs',
+    );
     expect(errorOf({ quantity: 'flux_ratio', inputs: { m1: 3 } }).message).toContain('m2 is required');
     expect(errorOf({ quantity: 'absolute_magnitude', inputs: { m: 3, parallax_mas: 3, alpha: 0.5 } }).message).toContain('alpha');
     expect(errorOf({ quantity: 'age_now', model: { preset: 'planck13' } }).message).toContain('model.preset');
@@ -95,7 +111,9 @@ describe('hostile requests', () => {
 
   it('overflowing results become errors, not Infinity', () => {
     expect(errorOf({ quantity: 'flux_ratio', inputs: { delta_mag: -1e6 } }).code).toBe('non_finite_result');
-    expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1 }, model: { H0: 1e-320, Om0: 0.3 } }).code).toBe('non_finite_result');
+    expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1 }, model: { H0: 1e-320, Om0: 0.3 } }).code).toBe(
+      'non_finite_result',
+    );
   });
 
   it('an uncertainty reaching outside the domain names the input', () => {

@@ -8,9 +8,20 @@ const envFor = (model: object) => sampleEnv(resolveModel(model as never).view, u
 
 describe('the distance modulus interpolated over a run’s redshift draws', () => {
   it('agrees with the exact modulus everywhere on the range, in open, closed, flat and Hubble-law models', () => {
-    for (const model of [{ preset: 'planck18' }, { preset: 'wmap9' }, { H0: 68, Om0: 0.3, Ode0: 0.6 }, { H0: 72, Om0: 0.45, Ode0: 0.75 }, { law: 'hubble', H0: 70 }]) {
+    for (const model of [
+      { preset: 'planck18' },
+      { preset: 'wmap9' },
+      { H0: 68, Om0: 0.3, Ode0: 0.6 },
+      { H0: 72, Om0: 0.45, Ode0: 0.75 },
+      { law: 'hubble', H0: 70 },
+    ]) {
       const env = envFor(model);
-      for (const [z, sigma] of [[0.02, 0.0002], [0.3, 0.003], [2.1, 0.02], [6, 0.06]]) {
+      for (const [z, sigma] of [
+        [0.02, 0.0002],
+        [0.3, 0.003],
+        [2.1, 0.02],
+        [6, 0.06],
+      ]) {
         const lo = z - 4 * sigma;
         const hi = z + 4 * sigma;
         const at = localModulus((x) => exactModulusAt(env, x), lo, hi);

@@ -25,10 +25,23 @@ const MODELS: Array<{ model: Model; H0: number }> = [
 ];
 
 const QUANTITIES = [
-  'comoving_distance', 'transverse_comoving_distance', 'angular_diameter_distance', 'luminosity_distance',
-  'light_travel_distance', 'proper_distance', 'lookback_time', 'age_at_z', 'age_now', 'hubble_parameter',
-  'distance_modulus', 'absolute_magnitude', 'luminosity_ratio_sun', 'z_from_lookback_time',
-  'z_from_luminosity_distance', 'parallax_distance', 'flux_ratio',
+  'comoving_distance',
+  'transverse_comoving_distance',
+  'angular_diameter_distance',
+  'luminosity_distance',
+  'light_travel_distance',
+  'proper_distance',
+  'lookback_time',
+  'age_at_z',
+  'age_now',
+  'hubble_parameter',
+  'distance_modulus',
+  'absolute_magnitude',
+  'luminosity_ratio_sun',
+  'z_from_lookback_time',
+  'z_from_luminosity_distance',
+  'parallax_distance',
+  'flux_ratio',
 ] as const;
 
 const BANDS = ['V', 'B', 'U', 'R', 'I', 'J', 'H', 'K', 'g', 'r'];
@@ -44,7 +57,12 @@ export function calcCases(): unknown[] {
     if (kind < 0.15) return value;
     if (kind < 0.25) return { value, sigma: 0 };
     if (kind < 0.65) return { value, sigma: Math.abs(value) * rel * logUniform(0.1, 3) || rel };
-    return { value, minus: Math.abs(value) * rel * logUniform(0.1, 3) || rel, plus: Math.abs(value) * rel * logUniform(0.1, 3) || rel, source: 'catalogue entry 7' };
+    return {
+      value,
+      minus: Math.abs(value) * rel * logUniform(0.1, 3) || rel,
+      plus: Math.abs(value) * rel * logUniform(0.1, 3) || rel,
+      source: 'catalogue entry 7',
+    };
   };
   const redshift = () => (rand() < 0.1 ? pick([-0.5, 0, 1100, 2e4, 5e5]) : logUniform(0.001, 12));
   const out: unknown[] = [];
@@ -73,7 +91,8 @@ export function calcCases(): unknown[] {
       const which = rand();
       if (which < 0.33) inputs.delta_mag = measured(rand() * 10 - 5, 0.02);
       else if (which < 0.66) Object.assign(inputs, { m1: measured(rand() * 15, 0.01), m2: measured(rand() * 15, 0.01) });
-      else Object.assign(inputs, { distance_1: measured(logUniform(1, 100), 0.1), distance_2: measured(logUniform(1, 100), 0.1) });
+      else
+        Object.assign(inputs, { distance_1: measured(logUniform(1, 100), 0.1), distance_2: measured(logUniform(1, 100), 0.1) });
     } else if (quantity !== 'age_now') inputs.z = measured(redshift(), 0.02);
     const request: Record<string, unknown> = { id: i, quantity, inputs };
     if (model !== undefined) request.model = model;
@@ -81,22 +100,44 @@ export function calcCases(): unknown[] {
     out.push(request);
   }
   // Hand-picked: the profiled luminosity call, a draw pushed below z = −1, an H0 range alone.
-  out.push({ quantity: 'luminosity_ratio_sun', inputs: { m: { value: 12.9, sigma: 0.1 }, z: { value: 0.158, sigma: 0.0003 }, band: 'V' } });
+  out.push({
+    quantity: 'luminosity_ratio_sun',
+    inputs: { m: { value: 12.9, sigma: 0.1 }, z: { value: 0.158, sigma: 0.0003 }, band: 'V' },
+  });
   out.push({ quantity: 'comoving_distance', inputs: { z: { value: 0.05, sigma: 0.5 } } });
   out.push({ quantity: 'age_now', H0_range: { low: 66, high: 69 } });
-  out.push({ quantity: 'lookback_time', inputs: { z: { value: 0.3, minus: 0.01, plus: 0.2 } }, model: { law: 'hubble', H0: 70 }, H0_range: { low: 60, high: 75 } });
+  out.push({
+    quantity: 'lookback_time',
+    inputs: { z: { value: 0.3, minus: 0.01, plus: 0.2 } },
+    model: { law: 'hubble', H0: 70 },
+    H0_range: { low: 60, high: 75 },
+  });
   return out;
 }
 
 const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({ id, quantity, value, unit: '', band: null, source: src, ...extra });
-const ctx = (name: string, measurements: StatementMeasurement[], model: TemplateContext['model'] = { preset: 'planck18' }, band = 'V'): TemplateContext => ({
+const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
+  id,
+  quantity,
+  value,
+  unit: '',
+  band: null,
+  source: src,
+  ...extra,
+});
+const ctx = (
+  name: string,
+  measurements: StatementMeasurement[],
+  model: TemplateContext['model'] = { preset: 'planck18' },
+  band = 'V',
+): TemplateContext => ({
   object: { id: 'o', name, kind: 'quasar' },
   measurements,
   model,
   band,
 });
-const vmag = (value: number, extra: Partial<StatementMeasurement> = { sigma: 0.1 }) => m('v', 'apparent_magnitude', value, { band: 'V', unit: 'mag', ...extra });
+const vmag = (value: number, extra: Partial<StatementMeasurement> = { sigma: 0.1 }) =>
+  m('v', 'apparent_magnitude', value, { band: 'V', unit: 'mag', ...extra });
 
 /** Statement contexts: each is evaluated with every template. */
 export function statementCases(): Array<{ templateId: string; ctx: TemplateContext }> {
@@ -104,13 +145,27 @@ export function statementCases(): Array<{ templateId: string; ctx: TemplateConte
     ctx('Q1', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), vmag(12.9)]),
     ctx('Q1 wmap', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), vmag(12.9)], { preset: 'wmap9' }),
     ctx('Q1 law', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), vmag(12.9)], { law: 'hubble', H0: 70 }),
-    ctx('Far', [m('z', 'redshift', 5.8, { minus: 0.02, plus: 0.05 }), vmag(19.5, { minus: 0.05, plus: 0.2 }), m('a', 'spectral_index', -0.7, { sigma: 0.1 }), m('e', 'extinction', 0.12, { band: 'V', sigma: 0.02 })]),
+    ctx('Far', [
+      m('z', 'redshift', 5.8, { minus: 0.02, plus: 0.05 }),
+      vmag(19.5, { minus: 0.05, plus: 0.2 }),
+      m('a', 'spectral_index', -0.7, { sigma: 0.1 }),
+      m('e', 'extinction', 0.12, { band: 'V', sigma: 0.02 }),
+    ]),
     ctx('Near galaxy', [m('z', 'redshift', 0.021, { sigma: 0.001 }), vmag(11.2, {})]),
     ctx('Open', [m('z', 'redshift', 1.2, { sigma: 0.01 }), vmag(17.1)], { name: 'open', H0: 68, Om0: 0.3, Ode0: 0.6 }),
     ctx('Closed', [m('z', 'redshift', 2.4, { sigma: 0.03 }), vmag(18.3)], { name: 'closed', H0: 72, Om0: 0.45, Ode0: 0.75 }),
-    ctx('Neutrinos', [m('z', 'redshift', 0.7, { sigma: 0.002 }), vmag(16.0, { sigma: 0.3 })], { H0: 67.7, Om0: 0.31, Tcmb0: 2.7255, Neff: 3.046, m_nu: [0, 0.02, 0.06] }),
+    ctx('Neutrinos', [m('z', 'redshift', 0.7, { sigma: 0.002 }), vmag(16.0, { sigma: 0.3 })], {
+      H0: 67.7,
+      Om0: 0.31,
+      Tcmb0: 2.7255,
+      Neff: 3.046,
+      m_nu: [0, 0.02, 0.06],
+    }),
     ctx('Exact', [m('z', 'redshift', 0.5), vmag(15, {})]),
-    ctx('Blue band', [m('z', 'redshift', 0.3, { sigma: 0.01 }), m('b', 'apparent_magnitude', 14.2, { band: 'B', unit: 'mag', sigma: 0.05 })]),
+    ctx('Blue band', [
+      m('z', 'redshift', 0.3, { sigma: 0.01 }),
+      m('b', 'apparent_magnitude', 14.2, { band: 'B', unit: 'mag', sigma: 0.05 }),
+    ]),
     ctx('Star', [m('p', 'parallax', 130.23, { sigma: 0.36, unit: 'mas' }), vmag(3.2, { sigma: 0.01 })]),
     ctx('Bright star', [m('p', 'parallax', 379.21, { minus: 0.4, plus: 1.6, unit: 'mas' }), vmag(-1.46, { sigma: 0.01 })]),
     ctx('Cluster', [m('d', 'distance', 2.5e6, { sigma: 1e5, unit: 'pc' }), vmag(3.44, { sigma: 0.05 })]),
@@ -124,7 +179,8 @@ export function statementCases(): Array<{ templateId: string; ctx: TemplateConte
 }
 
 type Working = Array<{ title: string; result: { value: number }; inputs: Array<{ value: number | string }>; note?: string }>;
-const compactWorking = (working: Working) => working.map((s) => ({ title: s.title, value: s.result.value, inputs: s.inputs.map((i) => i.value), note: s.note ?? null }));
+const compactWorking = (working: Working) =>
+  working.map((s) => ({ title: s.title, value: s.result.value, inputs: s.inputs.map((i) => i.value), note: s.note ?? null }));
 
 /**
  * What the fixture keeps of a result: numbers, interval, texts, warnings, errors and the working's
@@ -134,7 +190,21 @@ const compactWorking = (working: Working) => working.map((s) => ({ title: s.titl
  */
 export function frozen(r: Record<string, unknown>): Record<string, unknown> {
   const out: Record<string, unknown> = {};
-  for (const key of ['id', 'ok', 'code', 'reason', 'missing', 'error', 'value', 'unit', 'interval', 'significantFigures', 'texts', 'footnotes', 'warnings']) {
+  for (const key of [
+    'id',
+    'ok',
+    'code',
+    'reason',
+    'missing',
+    'error',
+    'value',
+    'unit',
+    'interval',
+    'significantFigures',
+    'texts',
+    'footnotes',
+    'warnings',
+  ]) {
     if (r[key] !== undefined) out[key] = r[key];
   }
   if (Array.isArray(r.working)) out.working = compactWorking(r.working as Working);

@@ -18,13 +18,15 @@ const NUMBER = /-?\d+(?:\.\d+)?(?:e[+-]?\d+)?/gi;
 /** Differences between two values: numbers to a relative 1e-9, strings exactly (numbers inside notes to 1e-9). */
 function differences(actual: unknown, expected: unknown, path: string, out: string[]): void {
   if (typeof expected === 'number' && typeof actual === 'number') {
-    if (Math.abs(actual - expected) > REL * Math.max(Math.abs(actual), Math.abs(expected))) out.push(`${path}: ${actual} ≠ ${expected}`);
+    if (Math.abs(actual - expected) > REL * Math.max(Math.abs(actual), Math.abs(expected)))
+      out.push(`${path}: ${actual} ≠ ${expected}`);
     return;
   }
   if (typeof expected === 'string' && typeof actual === 'string' && path.endsWith('.note')) {
     const a = actual.match(NUMBER) ?? [];
     const e = expected.match(NUMBER) ?? [];
-    if (actual.replace(NUMBER, '#') !== expected.replace(NUMBER, '#') || a.length !== e.length) out.push(`${path}: ${JSON.stringify(actual)} ≠ ${JSON.stringify(expected)}`);
+    if (actual.replace(NUMBER, '#') !== expected.replace(NUMBER, '#') || a.length !== e.length)
+      out.push(`${path}: ${JSON.stringify(actual)} ≠ ${JSON.stringify(expected)}`);
     else e.forEach((x, i) => differences(Number(a[i]), Number(x), `${path}[number ${i}]`, out));
     return;
   }
@@ -34,7 +36,8 @@ function differences(actual: unknown, expected: unknown, path: string, out: stri
       return;
     }
     const keys = new Set([...Object.keys(expected), ...Object.keys(actual)]);
-    for (const k of keys) differences((actual as Record<string, unknown>)[k], (expected as Record<string, unknown>)[k], `${path}.${k}`, out);
+    for (const k of keys)
+      differences((actual as Record<string, unknown>)[k], (expected as Record<string, unknown>)[k], `${path}.${k}`, out);
     return;
   }
   if (actual !== expected) out.push(`${path}: ${JSON.stringify(actual)} ≠ ${JSON.stringify(expected)}`);
@@ -69,7 +72,11 @@ describe('Monte Carlo results stay as frozen', () => {
     for (const n of [1, 2, 3, 17, 1000, 3999]) {
       // Coarse values, so that many draws tie.
       const draws = Float64Array.from({ length: n }, () => Math.round(rand() * 50) / 7 - 3);
-      for (const last of [undefined, { map: (x: number) => 10 ** (-0.4 * x), decreasing: true }, { map: (x: number) => Math.exp(x), decreasing: false }]) {
+      for (const last of [
+        undefined,
+        { map: (x: number) => 10 ** (-0.4 * x), decreasing: true },
+        { map: (x: number) => Math.exp(x), decreasing: false },
+      ]) {
         const mapped = Float64Array.from(draws, last ? last.map : (x) => x).sort();
         const got = quantilePair(draws.slice(), 0.16, 0.84, last);
         expect(got).toEqual({ low: quantile(mapped, 0.16), high: quantile(mapped, 0.84) });

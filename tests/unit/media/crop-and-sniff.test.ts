@@ -6,13 +6,19 @@ import { sniffImage } from '../../../server/media/sniff.ts';
 describe('kiosk crops', () => {
   const hd = { width: 1920, height: 1080 };
   it('keeps the whole height of a wide image and slides the window to the focal point', () => {
-    expect(coverCrop(6000, 2000, hd, { x: 0.5, y: 0.5 })).toEqual({ region: { left: 1222, top: 0, width: 3556, height: 2000 }, output: hd });
+    expect(coverCrop(6000, 2000, hd, { x: 0.5, y: 0.5 })).toEqual({
+      region: { left: 1222, top: 0, width: 3556, height: 2000 },
+      output: hd,
+    });
     expect(coverCrop(6000, 2000, hd, { x: 1, y: 0.5 }).region.left).toBe(6000 - 3556);
     expect(coverCrop(6000, 2000, hd, { x: 0, y: 0.5 }).region.left).toBe(0);
   });
 
   it('keeps the whole width of a tall image and never enlarges a small one', () => {
-    expect(coverCrop(800, 1200, hd, { x: 0.5, y: 0.2 })).toEqual({ region: { left: 0, top: 15, width: 800, height: 450 }, output: { width: 800, height: 450 } });
+    expect(coverCrop(800, 1200, hd, { x: 0.5, y: 0.2 })).toEqual({
+      region: { left: 0, top: 15, width: 800, height: 450 },
+      output: { width: 800, height: 450 },
+    });
   });
 
   it('fits inside a box without enlarging', () => {

@@ -45,7 +45,12 @@ describe('polar cases are said in words', () => {
   it('north pole at midsummer: every planet circumpolar or never rising, the Sun does not set', () => {
     const sky = computeSkyTonight({ ...base, latitude: 90, timeZone: 'UTC', localDate: '2026-06-21' });
     assertFinite(sky);
-    expect(sky.sun.sunset).toEqual({ utc: null, localDate: null, localTime: null, text: 'The Sun does not set tonight (midnight sun)' });
+    expect(sky.sun.sunset).toEqual({
+      utc: null,
+      localDate: null,
+      localTime: null,
+      text: 'The Sun does not set tonight (midnight sun)',
+    });
     expect(sky.sun.darkness.kind).toBe('no-night');
     expect(sky.observation.basis).toBe('sun-lowest');
     for (const p of sky.planets) {
@@ -77,7 +82,13 @@ describe('polar cases are said in words', () => {
   });
 
   it('at 78° N in midsummer a planet far south of the equator never rises, one far north never sets', () => {
-    const sky = computeSkyTonight({ ...base, latitude: 78.22, longitude: 15.65, timeZone: 'Arctic/Longyearbyen', localDate: '2026-06-21' });
+    const sky = computeSkyTonight({
+      ...base,
+      latitude: 78.22,
+      longitude: 15.65,
+      timeZone: 'Arctic/Longyearbyen',
+      localDate: '2026-06-21',
+    });
     for (const p of sky.planets) {
       // Rises and sets only when |δ| < 90° − φ (allowing for the −0.57° standard altitude).
       if (p.declinationDeg > 90 - 78.22 + 0.6) expect(p.times.state).toBe('always-up');

@@ -71,7 +71,9 @@ describe('the night of 2026-11-20 at the demo venue', () => {
 
   it('the sentence tells the afternoon set apart instead of pairing it with the rise', () => {
     const t = mars.times;
-    expect(t.summary).toBe(`Above the horizon at noon and sets ${t.earlierSet!.text}; rises again ${t.rise.text}, highest ${t.transit.text}, sets ${t.set.text}.`);
+    expect(t.summary).toBe(
+      `Above the horizon at noon and sets ${t.earlierSet!.text}; rises again ${t.rise.text}, highest ${t.transit.text}, sets ${t.set.text}.`,
+    );
   });
 
   it('every planet and the Moon: rise before transit before set, and a set before the rise only as earlierSet', () => {
@@ -87,7 +89,9 @@ describe('the night of 2026-11-20 at the demo venue', () => {
     const saturn = sky.planets.find((p) => p.id === 'saturn')!;
     expect(up('saturn', ms(sky.window.startUtc))).toBe(false);
     expect(saturn.times.earlierSet).toBeNull();
-    expect(saturn.times.summary).toBe(`Rises ${saturn.times.rise.text}, highest ${saturn.times.transit.text}, sets ${saturn.times.set.text}.`);
+    expect(saturn.times.summary).toBe(
+      `Rises ${saturn.times.rise.text}, highest ${saturn.times.transit.text}, sets ${saturn.times.set.text}.`,
+    );
   });
 });
 
@@ -105,9 +109,13 @@ describe('other nights at the demo venue', () => {
     const later = ms(saturn.times.laterRise!.utc);
     expect(later).toBeGreaterThan(ms(sky.sun.sunrise.utc));
     expect(staysThroughout('saturn', set, later, false)).toBe(true);
-    expect(saturn.times.summary).toMatch(new RegExp(`^Above the horizon at noon.*, sets ${saturn.times.set.text}; rises again ${saturn.times.laterRise!.text}\\.$`));
+    expect(saturn.times.summary).toMatch(
+      new RegExp(`^Above the horizon at noon.*, sets ${saturn.times.set.text}; rises again ${saturn.times.laterRise!.text}\\.$`),
+    );
     expect(saturn.upAfterDusk).toBe(true);
-    expect(saturn.visibility).toMatch(new RegExp(`^\\d+° up in the [a-z-]+ at ${sky.observation.localTime}; sets ${saturn.times.set.text}\\.$`));
+    expect(saturn.visibility).toMatch(
+      new RegExp(`^\\d+° up in the [a-z-]+ at ${sky.observation.localTime}; sets ${saturn.times.set.text}\\.$`),
+    );
   });
 
   it('the visibility words name a set only when it comes before dawn (2026-11-20: Saturn yes, Uranus no)', () => {
@@ -126,14 +134,25 @@ describe('other nights at the demo venue', () => {
     expect(moon.times.earlierSet).toBeNull();
     expect(ms(moon.times.transit.utc)).toBeGreaterThan(ms(window.startUtc));
     expect(ms(moon.times.transit.utc)).toBeLessThan(ms(moon.times.set.utc));
-    expect(moon.times.summary).toBe(`Above the horizon at noon, highest ${moon.times.transit.text}, sets ${moon.times.set.text}; does not rise again before noon tomorrow.`);
+    expect(moon.times.summary).toBe(
+      `Above the horizon at noon, highest ${moon.times.transit.text}, sets ${moon.times.set.text}; does not rise again before noon tomorrow.`,
+    );
   });
 });
 
 describe('words for a stay that cannot be given in full', () => {
   const start = Date.UTC(2026, 10, 20, 12);
-  const words = (visit: Parameters<typeof riseTransitSetTimes>[0]) => riseTransitSetTimes(visit, 'rises-and-sets', 'Europe/London', '2026-11-20');
-  const base = { rise: null, transit: null, set: null, earlierSet: null, laterRise: null, transitsKnown: true, searchedToMs: start + 48 * 60 * MINUTE };
+  const words = (visit: Parameters<typeof riseTransitSetTimes>[0]) =>
+    riseTransitSetTimes(visit, 'rises-and-sets', 'Europe/London', '2026-11-20');
+  const base = {
+    rise: null,
+    transit: null,
+    set: null,
+    earlierSet: null,
+    laterRise: null,
+    transitsKnown: true,
+    searchedToMs: start + 48 * 60 * MINUTE,
+  };
 
   it('up at noon and past its highest: "Highest before noon", not a time from another stay', () => {
     const t = words({ ...base, set: start + 3 * 60 * MINUTE });

@@ -61,11 +61,27 @@ describe('words', () => {
 });
 
 describe('an ordinary night at the demo venue', () => {
-  const sky = computeSkyTonight({ latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London', localDate: '2026-11-20', now: 0 });
+  const sky = computeSkyTonight({
+    latitude: 54.62,
+    longitude: -2.95,
+    elevationM: 160,
+    timeZone: 'Europe/London',
+    localDate: '2026-11-20',
+    now: 0,
+  });
 
   it('puts the twilights in order between sunset and sunrise', () => {
     const s = sky.sun;
-    const order = [s.sunset, s.civilDusk, s.nauticalDusk, s.astronomicalDusk, s.astronomicalDawn, s.nauticalDawn, s.civilDawn, s.sunrise].map((e) => Date.parse(e.utc!));
+    const order = [
+      s.sunset,
+      s.civilDusk,
+      s.nauticalDusk,
+      s.astronomicalDusk,
+      s.astronomicalDawn,
+      s.nauticalDawn,
+      s.civilDawn,
+      s.sunrise,
+    ].map((e) => Date.parse(e.utc!));
     expect(order.every((t, i) => i === 0 || t > order[i - 1])).toBe(true);
     expect(s.darkness.kind).toBe('astronomical');
   });
@@ -73,7 +89,7 @@ describe('an ordinary night at the demo venue', () => {
   it('gives each planet distance in au and km with the light time, and rise before set when both are tonight', () => {
     for (const p of sky.planets) {
       expect(p.distanceKm / p.distanceAu).toBeCloseTo(149_597_870.7, 3);
-      expect(p.lightTimeSeconds).toBeCloseTo((p.distanceKm / 299_792.458), 6);
+      expect(p.lightTimeSeconds).toBeCloseTo(p.distanceKm / 299_792.458, 6);
       expect(p.times.state).toBe('rises-and-sets');
       expect(p.aboveHorizon).toBe(p.altitudeDeg > -0.5667);
     }

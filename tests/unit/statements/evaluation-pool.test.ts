@@ -20,15 +20,49 @@ function job(objects: number): BatchJob {
       band: 'V',
       model,
       measurements: [
-        ...(i % 7 === 3 ? [] : [{ id: `20000000-0000-4000-8000-${String(i).padStart(12, '0')}`, quantity: 'apparent_magnitude', value: 12 + (i % 10), unit: 'mag', band: 'V', sigma: 0.05, source }]),
-        { id: `30000000-0000-4000-8000-${String(i).padStart(12, '0')}`, quantity: 'redshift', value: z, unit: '', band: null, sigma: (1 + z) * 0.004, source },
+        ...(i % 7 === 3
+          ? []
+          : [
+              {
+                id: `20000000-0000-4000-8000-${String(i).padStart(12, '0')}`,
+                quantity: 'apparent_magnitude',
+                value: 12 + (i % 10),
+                unit: 'mag',
+                band: 'V',
+                sigma: 0.05,
+                source,
+              },
+            ]),
+        {
+          id: `30000000-0000-4000-8000-${String(i).padStart(12, '0')}`,
+          quantity: 'redshift',
+          value: z,
+          unit: '',
+          band: null,
+          sigma: (1 + z) * 0.004,
+          source,
+        },
       ],
     };
     for (const templateId of TEMPLATES) {
-      statements.push({ id: `4${String(i).padStart(7, '0')}-0000-4000-8000-${templateId.length.toString().padStart(12, '0')}`, skyObjectId: id, templateId, venueId: null, status: 'current', model: null, json: { acknowledgedTexts: null, inputs: '[]', night: null } });
+      statements.push({
+        id: `4${String(i).padStart(7, '0')}-0000-4000-8000-${templateId.length.toString().padStart(12, '0')}`,
+        skyObjectId: id,
+        templateId,
+        venueId: null,
+        status: 'current',
+        model: null,
+        json: { acknowledgedTexts: null, inputs: '[]', night: null },
+      });
     }
   }
-  return { statements, contexts, model: { id: 'a'.repeat(64), json: JSON.stringify(resolveModel(model).description) }, settingsVersion: 3, computedAt: '2026-12-02T10:00:00.000Z' };
+  return {
+    statements,
+    contexts,
+    model: { id: 'a'.repeat(64), json: JSON.stringify(resolveModel(model).description) },
+    settingsVersion: 3,
+    computedAt: '2026-12-02T10:00:00.000Z',
+  };
 }
 
 afterAll(stopEvaluationPool);

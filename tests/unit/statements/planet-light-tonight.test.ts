@@ -9,11 +9,28 @@ import { ASTRONOMICAL_UNIT, SPEED_OF_LIGHT } from '../../../shared/engine/consta
 import { PLANET_IDS, type PlanetId } from '../../../shared/sky/bodies.ts';
 import { Ephemeris } from '../../../shared/sky/ephemeris.ts';
 import { computeSkyTonight } from '../../../shared/sky/tonight.ts';
-import { evaluateStatement, nightFromSky, type StatementNight, type TemplateContext, type TemplateSuccess } from '../../../shared/statements/index.ts';
-import { DISTANCE_RELATIVE_UNCERTAINTY, LARGEST_MEASURED_DIFFERENCE, NIGHT_DRIFT_BOUND } from '../../../shared/statements/tonight.ts';
+import {
+  evaluateStatement,
+  nightFromSky,
+  type StatementNight,
+  type TemplateContext,
+  type TemplateSuccess,
+} from '../../../shared/statements/index.ts';
+import {
+  DISTANCE_RELATIVE_UNCERTAINTY,
+  LARGEST_MEASURED_DIFFERENCE,
+  NIGHT_DRIFT_BOUND,
+} from '../../../shared/statements/tonight.ts';
 import fixture from '../../reference/sky/astropy-fixture.json';
 
-const venue = { id: 'venue-1', name: 'Corrie Vale Planetarium (demo)', latitude: 54.6, longitude: -2.9, elevationM: 120, timeZone: 'Europe/London' };
+const venue = {
+  id: 'venue-1',
+  name: 'Corrie Vale Planetarium (demo)',
+  latitude: 54.6,
+  longitude: -2.9,
+  elevationM: 120,
+  timeZone: 'Europe/London',
+};
 const sky = computeSkyTonight({ ...venue, localDate: '2026-12-03', now: Date.UTC(2026, 11, 3, 9) });
 const SECONDS_PER_AU = ASTRONOMICAL_UNIT.value / 1000 / SPEED_OF_LIGHT.value;
 
@@ -29,7 +46,10 @@ const ctx = (object: TemplateContext['object'], extra: Partial<TemplateContext> 
 const planet = (name: string, designations: string[] = []) => ({ id: 'o', name, kind: 'planet', designations });
 
 /** A night whose planets all sit at the given distance (for hand-worked values). */
-const nightAt = (distanceAu: number): StatementNight => ({ ...nightFromSky(sky), planets: PLANET_IDS.map((id) => ({ id, distanceAu })) });
+const nightAt = (distanceAu: number): StatementNight => ({
+  ...nightFromSky(sky),
+  planets: PLANET_IDS.map((id) => ({ id, distanceAu })),
+});
 
 function ok(c: TemplateContext): TemplateSuccess {
   const r = evaluateStatement('planet-light-tonight', c);
@@ -48,8 +68,12 @@ describe('planet-light-tonight', () => {
     expect(r.significantFigures).toBe(3);
     expect(r.texts['en-GB']).toBe(`Light from Jupiter takes about ${shown} minutes to reach us tonight.`);
     expect(r.texts['en-US']).toBe(r.texts['en-GB']);
-    expect(r.texts['fr-FR']).toBe(`La lumière de Jupiter met environ ${String(shown).replace('.', ',')} minutes à nous parvenir ce soir.`);
-    expect(r.footnotes?.['en-GB']).toMatch(/^For Corrie Vale Planetarium \(demo\) on the night of 3 December 2026 at \d\d:\d\d local time \(the end of nautical twilight\)\.$/);
+    expect(r.texts['fr-FR']).toBe(
+      `La lumière de Jupiter met environ ${String(shown).replace('.', ',')} minutes à nous parvenir ce soir.`,
+    );
+    expect(r.footnotes?.['en-GB']).toMatch(
+      /^For Corrie Vale Planetarium \(demo\) on the night of 3 December 2026 at \d\d:\d\d local time \(the end of nautical twilight\)\.$/,
+    );
     expect(r.footnotes?.['en-US']).toMatch(/December 3, 2026/);
     expect(r.footnotes?.['fr-FR']).toMatch(/la nuit du 3 décembre 2026 à \d\d h \d\d, heure locale/);
     expect(r.model).toBeNull();
@@ -120,7 +144,10 @@ describe('planet-light-tonight', () => {
     expect(sigma.inputs[1]).toMatchObject({ symbol: 'k', value: DISTANCE_RELATIVE_UNCERTAINTY.jupiter });
     expect(sigma.note).toMatch(/far more precise than the wording/);
     expect(time.formula).toBe('t = d × au / c');
-    expect(time.constants.map((c) => c.source)).toEqual(['IAU 2012 Resolution B2; exact', 'SI definition of the metre (CGPM 1983); exact']);
+    expect(time.constants.map((c) => c.source)).toEqual([
+      'IAU 2012 Resolution B2; exact',
+      'SI definition of the metre (CGPM 1983); exact',
+    ]);
     expect(r.working.at(-1)!.note).toMatch(/below 3 %\): 3 significant figures/);
     expect(r.interval!.high / r.value - 1).toBeCloseTo(DISTANCE_RELATIVE_UNCERTAINTY.jupiter, 12);
   });
@@ -128,7 +155,11 @@ describe('planet-light-tonight', () => {
   it('records the night and, apart from it, the method a reviewer signs off', () => {
     const r = ok(ctx(planet('Jupiter')));
     expect(r.night).toMatchObject({ venueId: 'venue-1', localDate: '2026-12-03', observationUtc: sky.observation.utc });
-    expect(r.night!.method).toMatchObject({ planet: 'jupiter', venue: { latitude: 54.6, longitude: -2.9, elevationM: 120, timeZone: 'Europe/London' }, constants: { auM: 149_597_870_700, cKmS: 299_792.458 } });
+    expect(r.night!.method).toMatchObject({
+      planet: 'jupiter',
+      venue: { latitude: 54.6, longitude: -2.9, elevationM: 120, timeZone: 'Europe/London' },
+      constants: { auM: 149_597_870_700, cKmS: 299_792.458 },
+    });
     expect(r.night!.method.wording['en-GB']).toBe('Light from Jupiter takes about … to reach us tonight.');
     // Another night: same method, another number.
     const later = computeSkyTonight({ ...venue, localDate: '2027-02-10', now: 0 });
@@ -152,7 +183,8 @@ describe('planet-light-tonight', () => {
     let largest = 0;
     for (let jd = 2_458_849.5; jd < 2_466_154.5; jd += 11) {
       const d = ephemeris.planet('mercury', jd).distanceAu;
-      for (const offset of [-0.25, 0.25]) largest = Math.max(largest, Math.abs(ephemeris.planet('mercury', jd + offset).distanceAu - d) / d);
+      for (const offset of [-0.25, 0.25])
+        largest = Math.max(largest, Math.abs(ephemeris.planet('mercury', jd + offset).distanceAu - d) / d);
     }
     expect(largest).toBeGreaterThan(NIGHT_DRIFT_BOUND / 4);
     expect(largest).toBeLessThan(NIGHT_DRIFT_BOUND);

@@ -1,18 +1,38 @@
 import { describe, expect, it } from 'vitest';
 import { calculate } from '../../../shared/engine/calculate.ts';
 import { LY_PER_PC } from '../../../shared/engine/units.ts';
-import { evaluateStatement, STATEMENT_TEMPLATES, type StatementMeasurement, type TemplateContext } from '../../../shared/statements/index.ts';
+import {
+  evaluateStatement,
+  STATEMENT_TEMPLATES,
+  type StatementMeasurement,
+  type TemplateContext,
+} from '../../../shared/statements/index.ts';
 
 const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({ id, quantity, value, unit: '', band: null, source: src, ...extra });
-const ctx = (name: string, measurements: StatementMeasurement[], model: TemplateContext['model'] = { preset: 'planck18' }): TemplateContext => ({
+const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
+  id,
+  quantity,
+  value,
+  unit: '',
+  band: null,
+  source: src,
+  ...extra,
+});
+const ctx = (
+  name: string,
+  measurements: StatementMeasurement[],
+  model: TemplateContext['model'] = { preset: 'planck18' },
+): TemplateContext => ({
   object: { id: 'o', name, kind: 'quasar' },
   measurements,
   model,
   band: 'V',
 });
 
-const quasar = ctx('Q1', [m('z', 'redshift', 0.241, { sigma: 0.0005 }), m('v', 'apparent_magnitude', 14.6, { sigma: 0.1, band: 'V', unit: 'mag' })]);
+const quasar = ctx('Q1', [
+  m('z', 'redshift', 0.241, { sigma: 0.0005 }),
+  m('v', 'apparent_magnitude', 14.6, { sigma: 0.1, band: 'V', unit: 'mag' }),
+]);
 
 function ok(templateId: string, c: TemplateContext) {
   const r = evaluateStatement(templateId, c);
@@ -36,10 +56,16 @@ describe('statement templates', () => {
 
   it('light-travel uses the engine’s lookback time and age (reference-tested) with the cosmology named', () => {
     const r = ok('light-travel', quasar);
-    const lookback = calculate({ quantity: 'lookback_time', inputs: { z: { value: 0.241, sigma: 0.0005 } }, model: { preset: 'planck18' } });
+    const lookback = calculate({
+      quantity: 'lookback_time',
+      inputs: { z: { value: 0.241, sigma: 0.0005 } },
+      model: { preset: 'planck18' },
+    });
     if ('error' in lookback) throw new Error();
     expect(r.value).toBeCloseTo(lookback.value * 1e9, 0);
-    expect(r.texts['en-GB']).toMatch(/^The light we see from Q1 set out about 2\.95 billion years ago, when the universe was about 10\.8 billion years old\.$/);
+    expect(r.texts['en-GB']).toMatch(
+      /^The light we see from Q1 set out about 2\.95 billion years ago, when the universe was about 10\.8 billion years old\.$/,
+    );
     expect(r.footnotes?.['en-GB']).toMatch(/Planck 2018/);
   });
 

@@ -5,11 +5,28 @@
  */
 import { describe, expect, it } from 'vitest';
 import { computeSkyTonight } from '../../../shared/sky/tonight.ts';
-import { evaluateStatement, findTemplate, nightFromSky, type TemplateContext, type TemplateSuccess } from '../../../shared/statements/index.ts';
-import { applyOutcome, type ComputedOutcome, type PreviousComputation } from '../../../server/services/statements/apply-outcome.ts';
+import {
+  evaluateStatement,
+  findTemplate,
+  nightFromSky,
+  type TemplateContext,
+  type TemplateSuccess,
+} from '../../../shared/statements/index.ts';
+import {
+  applyOutcome,
+  type ComputedOutcome,
+  type PreviousComputation,
+} from '../../../server/services/statements/apply-outcome.ts';
 
 const template = findTemplate('planet-light-tonight')!;
-const venue = { id: 'venue-1', name: 'Corrie Vale Planetarium (demo)', latitude: 54.62, longitude: -2.95, elevationM: 160, timeZone: 'Europe/London' };
+const venue = {
+  id: 'venue-1',
+  name: 'Corrie Vale Planetarium (demo)',
+  latitude: 54.62,
+  longitude: -2.95,
+  elevationM: 160,
+  timeZone: 'Europe/London',
+};
 
 /** Jupiter's statement for a night (dates far enough apart that the wording moves). */
 function outcome(localDate: string, place: Partial<typeof venue> = {}): TemplateSuccess {
@@ -28,7 +45,13 @@ function outcome(localDate: string, place: Partial<typeof venue> = {}): Template
 }
 
 /** What the next computation reads of this one. */
-const previousOf = (r: ComputedOutcome): PreviousComputation => ({ status: r.status, acknowledgedTexts: r.acknowledgedTexts, inputs: r.inputs, model: null, night: r.night });
+const previousOf = (r: ComputedOutcome): PreviousComputation => ({
+  status: r.status,
+  acknowledgedTexts: r.acknowledgedTexts,
+  inputs: r.inputs,
+  model: null,
+  night: r.night,
+});
 
 function computed(previous: PreviousComputation | null, o: TemplateSuccess, flags = template): ComputedOutcome {
   const r = applyOutcome(previous, o, flags);
@@ -81,9 +104,24 @@ describe('statements that follow tonight', () => {
 
   it('other constants or another sentence are changes of method too', () => {
     const previous = previousOf(first);
-    const oldAu = { ...previous, night: { ...first.night!, acceptedMethod: { ...first.night!.method, constants: { auM: 149_597_870_691, cKmS: 299_792.458 } } } };
+    const oldAu = {
+      ...previous,
+      night: {
+        ...first.night!,
+        acceptedMethod: { ...first.night!.method, constants: { auM: 149_597_870_691, cKmS: 299_792.458 } },
+      },
+    };
     expect(computed(oldAu, outcome('2027-01-20')).statusReason).toMatch(/astronomical unit or the speed of light used changed/);
-    const oldSentence = { ...previous, night: { ...first.night!, acceptedMethod: { ...first.night!.method, wording: { ...first.night!.method.wording, 'en-GB': 'Jupiter’s light needs about … to get here tonight.' } } } };
+    const oldSentence = {
+      ...previous,
+      night: {
+        ...first.night!,
+        acceptedMethod: {
+          ...first.night!.method,
+          wording: { ...first.night!.method.wording, 'en-GB': 'Jupiter’s light needs about … to get here tonight.' },
+        },
+      },
+    };
     expect(computed(oldSentence, outcome('2027-01-20')).statusReason).toMatch(/the sentence around the number changed/);
   });
 });

@@ -28,7 +28,9 @@ describe('precision follows the interval (our written rule)', () => {
 describe('numbers in words', () => {
   it('matches Intl.NumberFormat below a million in each locale', () => {
     for (const locale of ['en-GB', 'en-US', 'fr-FR'] as const) {
-      expect(formatApproximate(4321, 2, locale).text).toBe(new Intl.NumberFormat(locale, { maximumSignificantDigits: 2 }).format(4300));
+      expect(formatApproximate(4321, 2, locale).text).toBe(
+        new Intl.NumberFormat(locale, { maximumSignificantDigits: 2 }).format(4300),
+      );
     }
   });
 
@@ -54,7 +56,10 @@ describe('numbers in words', () => {
       const n = 1 + (i % 3);
       const { text, shown } = formatApproximate(value, n, 'en-GB');
       expect(shown).toBe(roundToSignificant(value, n));
-      const digits = text.replace(/[^0-9]/g, '').replace(/^0+/, '').replace(/0+$/, '');
+      const digits = text
+        .replace(/[^0-9]/g, '')
+        .replace(/^0+/, '')
+        .replace(/0+$/, '');
       expect(digits.length).toBeLessThanOrEqual(n);
     }
   });

@@ -55,7 +55,13 @@ describe('the stored form of a working', () => {
   });
 
   it('never mixes up two steps whose texts differ only around a separator character', () => {
-    const step = (name: string, unit: string): Step => ({ title: 'Same title', formula: 'x', inputs: [{ symbol: 'a', name, value: 1, unit, source: 's' }], constants: [], result: { symbol: 'r', name: 'r', value: 2, unit: '' } });
+    const step = (name: string, unit: string): Step => ({
+      title: 'Same title',
+      formula: 'x',
+      inputs: [{ symbol: 'a', name, value: 1, unit, source: 's' }],
+      constants: [],
+      result: { symbol: 'r', name: 'r', value: 2, unit: '' },
+    });
     const one = [step('left\u0001middle', 'right')];
     const two = [step('left', 'middle\u0001right')];
     const store = new Map<string, string>();
@@ -69,7 +75,13 @@ describe('the stored form of a working', () => {
   });
 
   it('refuses a text holding the character it uses to mark data', () => {
-    const step: Step = { title: 't', formula: 'f', inputs: [], constants: [], result: { symbol: 'x', name: 'bad\u0000name', value: 1, unit: '' } };
+    const step: Step = {
+      title: 't',
+      formula: 'f',
+      inputs: [],
+      constants: [],
+      result: { symbol: 'x', name: 'bad\u0000name', value: 1, unit: '' },
+    };
     expect(() => packWorking([step], skeletonId)).toThrow(/NUL/);
   });
 });

@@ -24,11 +24,18 @@ export function Component() {
 
   return (
     <>
-      <PageHeader title="Organisation" description="Defaults every statement and page uses. Changing the cosmology recomputes every statement; you see what would change first." />
+      <PageHeader
+        title="Organisation"
+        description="Defaults every statement and page uses. Changing the cosmology recomputes every statement; you see what would change first."
+      />
       <div className="space-y-8">
         <section aria-labelledby="cosmology-heading" className="space-y-4 rounded-lg border border-rule bg-panel p-6">
-          <h2 id="cosmology-heading" className="text-lg font-semibold">Adopted cosmology</h2>
-          <p className="text-sm">Now: <strong>{s.cosmologyLabel}</strong></p>
+          <h2 id="cosmology-heading" className="text-lg font-semibold">
+            Adopted cosmology
+          </h2>
+          <p className="text-sm">
+            Now: <strong>{s.cosmologyLabel}</strong>
+          </p>
           <ModelChooser
             onChange={(m) => {
               setModel(m);
@@ -41,14 +48,23 @@ export function Component() {
               Preview the change
             </Button>
             {preview.data && model && (
-              <Button busy={change.isPending} onClick={() => change.mutate({ model, expectedVersion: preview.data.version }, { onSuccess: () => preview.reset() })}>
+              <Button
+                busy={change.isPending}
+                onClick={() =>
+                  change.mutate({ model, expectedVersion: preview.data.version }, { onSuccess: () => preview.reset() })
+                }
+              >
                 Switch to {preview.data.proposedLabel}
               </Button>
             )}
           </div>
           {preview.error && <Notice tone="error">{preview.error.message}</Notice>}
           {change.error && <Notice tone="error">{change.error.message}</Notice>}
-          {change.isSuccess && <Notice tone="success">Switched. Every statement is being recomputed in the background; changed wording waits for a reviewer.</Notice>}
+          {change.isSuccess && (
+            <Notice tone="success">
+              Switched. Every statement is being recomputed in the background; changed wording waits for a reviewer.
+            </Notice>
+          )}
           {preview.data && (
             <>
               <p className="text-sm text-muted">
@@ -62,14 +78,20 @@ export function Component() {
         </section>
 
         <section aria-labelledby="defaults-heading" className="space-y-4 rounded-lg border border-rule bg-panel p-6">
-          <h2 id="defaults-heading" className="text-lg font-semibold">Band, locale and eye-safety notice</h2>
+          <h2 id="defaults-heading" className="text-lg font-semibold">
+            Band, locale and eye-safety notice
+          </h2>
           <form
             className="space-y-4"
             onSubmit={(e) => {
               e.preventDefault();
               const data = new FormData(e.currentTarget);
               update.mutate(
-                { defaultBand: String(data.get('band')), defaultLocale: String(data.get('locale')) as StatementLocale, eyeSafetyNotice: String(data.get('notice')) },
+                {
+                  defaultBand: String(data.get('band')),
+                  defaultLocale: String(data.get('locale')) as StatementLocale,
+                  eyeSafetyNotice: String(data.get('notice')),
+                },
                 { onSuccess: () => setNotice('Saved.') },
               );
             }}
@@ -77,23 +99,39 @@ export function Component() {
             <div className="grid gap-4 sm:grid-cols-2">
               <SelectField label="Band for brightness statements" name="band" defaultValue={s.defaultBand}>
                 {Object.values(SOLAR_MAGNITUDES).map((b) => (
-                  <option key={b.band} value={b.band}>{b.label} ({b.system})</option>
+                  <option key={b.band} value={b.band}>
+                    {b.label} ({b.system})
+                  </option>
                 ))}
               </SelectField>
               <SelectField label="Locale of the staff screens" name="locale" defaultValue={s.defaultLocale}>
                 {STATEMENT_LOCALES.map((l) => (
-                  <option key={l} value={l}>{LOCALE_LABELS[l]}</option>
+                  <option key={l} value={l}>
+                    {LOCALE_LABELS[l]}
+                  </option>
                 ))}
               </SelectField>
             </div>
             <div>
-              <label htmlFor="notice" className="mb-1 block text-sm font-medium">Eye-safety notice (shown on pages about the Sun, eclipses and solar observing)</label>
-              <textarea id="notice" name="notice" rows={4} defaultValue={s.eyeSafetyNotice} className="block w-full rounded-md border border-rule bg-panel px-3 py-2 font-serif text-[15px]" />
-              <p className="mt-1 text-xs text-muted">Write it with your venue’s safety staff; they have the last word on solar observing at your events.</p>
+              <label htmlFor="notice" className="mb-1 block text-sm font-medium">
+                Eye-safety notice (shown on pages about the Sun, eclipses and solar observing)
+              </label>
+              <textarea
+                id="notice"
+                name="notice"
+                rows={4}
+                defaultValue={s.eyeSafetyNotice}
+                className="block w-full rounded-md border border-rule bg-panel px-3 py-2 font-serif text-[15px]"
+              />
+              <p className="mt-1 text-xs text-muted">
+                Write it with your venue’s safety staff; they have the last word on solar observing at your events.
+              </p>
             </div>
             {update.error && <Notice tone="error">{update.error.message}</Notice>}
             {notice && update.isSuccess && <Notice tone="success">{notice}</Notice>}
-            <Button type="submit" busy={update.isPending}>Save defaults</Button>
+            <Button type="submit" busy={update.isPending}>
+              Save defaults
+            </Button>
           </form>
         </section>
       </div>

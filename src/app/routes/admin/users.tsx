@@ -17,15 +17,30 @@ export function Component() {
       <PageHeader
         title="Users"
         description="Everyone who works in Starproof, with their role. Deactivating someone signs them out at once."
-        actions={!invite.open && (
-          <Button ref={invite.openerRef} onClick={() => { invite.show(); setSent(false); }}>
-            <Icon name="plus" className="size-4" />
-            Invite someone
-          </Button>
-        )}
+        actions={
+          !invite.open && (
+            <Button
+              ref={invite.openerRef}
+              onClick={() => {
+                invite.show();
+                setSent(false);
+              }}
+            >
+              <Icon name="plus" className="size-4" />
+              Invite someone
+            </Button>
+          )
+        }
       />
       <div className="space-y-4">
-        {invite.open && <InviteUserForm onDone={() => { invite.close(); setSent(true); }} />}
+        {invite.open && (
+          <InviteUserForm
+            onDone={() => {
+              invite.close();
+              setSent(true);
+            }}
+          />
+        )}
         {sent && <Notice tone="success">Invitation sent. It is in the Outbox while mail is caught locally.</Notice>}
         {users.isPending && <p className="text-sm text-muted">Loading users…</p>}
         {users.error && <Notice tone="error">{users.error.message}</Notice>}

@@ -18,10 +18,14 @@ const MISSING_LABELS: Record<(typeof MISSING_FILTERS)[number], string> = {
   any_preferred: 'No preferred value at all',
   position: 'No position',
   source: 'A measurement without a source',
-  ...(Object.fromEntries(QUANTITY_IDS.map((id) => [id, `No preferred ${QUANTITIES[id].label.toLowerCase()}`])) as Record<(typeof QUANTITY_IDS)[number], string>),
+  ...(Object.fromEntries(QUANTITY_IDS.map((id) => [id, `No preferred ${QUANTITIES[id].label.toLowerCase()}`])) as Record<
+    (typeof QUANTITY_IDS)[number],
+    string
+  >),
 };
 
-const pick = <T extends string>(value: string | null, allowed: readonly T[]): T | undefined => (allowed as readonly string[]).includes(value ?? '') ? (value as T) : undefined;
+const pick = <T extends string>(value: string | null, allowed: readonly T[]): T | undefined =>
+  (allowed as readonly string[]).includes(value ?? '') ? (value as T) : undefined;
 
 /** Reads the table's state from the URL, so a filtered view can be bookmarked and shared. */
 function useCatalogueQuery(): [CatalogueQuery, (patch: Partial<CatalogueQuery>) => void] {
@@ -55,7 +59,9 @@ export function Component() {
 
   // Searching waits for a pause in typing rather than asking the server at every key.
   useEffect(() => {
-    const timer = setTimeout(() => { if ((query.q ?? '') !== search) update({ q: search || undefined }); }, 300);
+    const timer = setTimeout(() => {
+      if ((query.q ?? '') !== search) update({ q: search || undefined });
+    }, 300);
     return () => clearTimeout(timer);
   });
 
@@ -66,9 +72,27 @@ export function Component() {
         description="Objects and their sourced measurements. Statements use each object's preferred values."
         actions={
           <>
-            <a href="/api/catalogue/exports/measurements.csv" className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">Export CSV</a>
-            {keeper && <Link to={paths.catalogueImport.href()} className="inline-flex items-center gap-2 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"><Icon name="upload" className="size-4" />Import CSV</Link>}
-            {keeper && !adding.open && <Button ref={adding.openerRef} onClick={adding.show}><Icon name="plus" className="size-4" />Add object</Button>}
+            <a
+              href="/api/catalogue/exports/measurements.csv"
+              className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+            >
+              Export CSV
+            </a>
+            {keeper && (
+              <Link
+                to={paths.catalogueImport.href()}
+                className="inline-flex items-center gap-2 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+              >
+                <Icon name="upload" className="size-4" />
+                Import CSV
+              </Link>
+            )}
+            {keeper && !adding.open && (
+              <Button ref={adding.openerRef} onClick={adding.show}>
+                <Icon name="plus" className="size-4" />
+                Add object
+              </Button>
+            )}
           </>
         }
       />
@@ -77,20 +101,42 @@ export function Component() {
         <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Filter the catalogue">
           <label className="text-sm">
             <span className="mb-1 block font-medium">Search</span>
-            <input type="search" value={search} onChange={(e) => setSearch(e.target.value)} placeholder="Name or designation" className="w-64 rounded-md border border-rule bg-panel px-3 py-2" />
+            <input
+              type="search"
+              value={search}
+              onChange={(e) => setSearch(e.target.value)}
+              placeholder="Name or designation"
+              className="w-64 rounded-md border border-rule bg-panel px-3 py-2"
+            />
           </label>
           <label className="text-sm">
             <span className="mb-1 block font-medium">Kind</span>
-            <select value={query.kind ?? ''} onChange={(e) => update({ kind: (e.target.value || undefined) as SkyObjectListQuery['kind'] })} className="rounded-md border border-rule bg-panel px-3 py-2">
+            <select
+              value={query.kind ?? ''}
+              onChange={(e) => update({ kind: (e.target.value || undefined) as SkyObjectListQuery['kind'] })}
+              className="rounded-md border border-rule bg-panel px-3 py-2"
+            >
               <option value="">All kinds</option>
-              {SKY_OBJECT_KINDS.map((k) => <option key={k} value={k}>{KIND_LABELS[k]}</option>)}
+              {SKY_OBJECT_KINDS.map((k) => (
+                <option key={k} value={k}>
+                  {KIND_LABELS[k]}
+                </option>
+              ))}
             </select>
           </label>
           <label className="text-sm">
             <span className="mb-1 block font-medium">Missing data</span>
-            <select value={query.missing ?? ''} onChange={(e) => update({ missing: (e.target.value || undefined) as SkyObjectListQuery['missing'] })} className="rounded-md border border-rule bg-panel px-3 py-2">
+            <select
+              value={query.missing ?? ''}
+              onChange={(e) => update({ missing: (e.target.value || undefined) as SkyObjectListQuery['missing'] })}
+              className="rounded-md border border-rule bg-panel px-3 py-2"
+            >
               <option value="">Any</option>
-              {MISSING_FILTERS.map((m) => <option key={m} value={m}>{MISSING_LABELS[m]}</option>)}
+              {MISSING_FILTERS.map((m) => (
+                <option key={m} value={m}>
+                  {MISSING_LABELS[m]}
+                </option>
+              ))}
             </select>
           </label>
         </div>

@@ -19,10 +19,24 @@ export function Component() {
       <PageHeader
         title="Sources"
         description="Papers, catalogues and pages that measurements come from. A measurement needs a source before it can be preferred."
-        actions={keeper && !editing && <Button onClick={() => setEditing('new')}><Icon name="plus" className="size-4" />Add source</Button>}
+        actions={
+          keeper &&
+          !editing && (
+            <Button onClick={() => setEditing('new')}>
+              <Icon name="plus" className="size-4" />
+              Add source
+            </Button>
+          )
+        }
       />
       <div className="space-y-4">
-        {editing && <SourceForm key={editing === 'new' ? 'new' : editing.id} source={editing === 'new' ? undefined : editing} onDone={() => setEditing(null)} />}
+        {editing && (
+          <SourceForm
+            key={editing === 'new' ? 'new' : editing.id}
+            source={editing === 'new' ? undefined : editing}
+            onDone={() => setEditing(null)}
+          />
+        )}
         {sources.error && <Notice tone="error">{sources.error.message}</Notice>}
         {sources.data && <SourcesTable sources={sources.data} onEdit={setEditing} />}
       </div>

@@ -20,7 +20,10 @@ export function Component() {
   const queryClient = useQueryClient();
   const submit = useSubmitPage(id);
   const workspace = useRef<WorkspaceHandle | null>(null);
-  const onSaved = useCallback((saved: PageDto) => queryClient.setQueryData(pageQueryOptions(id).queryKey, saved), [queryClient, id]);
+  const onSaved = useCallback(
+    (saved: PageDto) => queryClient.setQueryData(pageQueryOptions(id).queryKey, saved),
+    [queryClient, id],
+  );
 
   if (page.isPending || settings.isPending) return <p className="text-sm text-muted">Loading page…</p>;
   // A failed refresh must not unmount the editor and the text in it.
@@ -42,15 +45,50 @@ export function Component() {
         }
         actions={
           <>
-            <Link to={paths.pageRevisions.href(p.id)} className="inline-flex items-center gap-1.5 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"><Icon name="history" className="size-4" />Revisions</Link>
-            {p.status !== 'draft' && <Link to={paths.pageReview.href(p.id)} className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">Review view</Link>}
-            {p.can.submit && <Button busy={submit.isPending} onClick={() => void submitNow()}>Submit for review</Button>}
+            <Link
+              to={paths.pageRevisions.href(p.id)}
+              className="inline-flex items-center gap-1.5 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+            >
+              <Icon name="history" className="size-4" />
+              Revisions
+            </Link>
+            {p.status !== 'draft' && (
+              <Link
+                to={paths.pageReview.href(p.id)}
+                className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+              >
+                Review view
+              </Link>
+            )}
+            {p.can.submit && (
+              <Button busy={submit.isPending} onClick={() => void submitNow()}>
+                Submit for review
+              </Button>
+            )}
           </>
         }
       />
-      {submit.error && <div className="mb-4"><Notice tone="error" title="Not submitted">{submit.error.message}</Notice></div>}
-      {submit.isSuccess && <div className="mb-4"><Notice tone="success" title="Submitted for review">The reviewers have been e-mailed. The page is locked until a reviewer signs it off or sends it back.</Notice></div>}
-      <PageWorkspace key={p.id} page={p} eyeSafetyNotice={settings.data?.eyeSafetyNotice ?? ''} onSaved={onSaved} handleRef={workspace} />
+      {submit.error && (
+        <div className="mb-4">
+          <Notice tone="error" title="Not submitted">
+            {submit.error.message}
+          </Notice>
+        </div>
+      )}
+      {submit.isSuccess && (
+        <div className="mb-4">
+          <Notice tone="success" title="Submitted for review">
+            The reviewers have been e-mailed. The page is locked until a reviewer signs it off or sends it back.
+          </Notice>
+        </div>
+      )}
+      <PageWorkspace
+        key={p.id}
+        page={p}
+        eyeSafetyNotice={settings.data?.eyeSafetyNotice ?? ''}
+        onSaved={onSaved}
+        handleRef={workspace}
+      />
     </>
   );
 }

@@ -26,7 +26,14 @@ export function Component() {
       <PageHeader
         title="Pages"
         description="Object pages, from draft to published. Numbers on them come from checked statements."
-        actions={canCreate && !creating.open ? <Button ref={creating.openerRef} onClick={creating.show}><Icon name="plus" className="size-4" />New page</Button> : undefined}
+        actions={
+          canCreate && !creating.open ? (
+            <Button ref={creating.openerRef} onClick={creating.show}>
+              <Icon name="plus" className="size-4" />
+              New page
+            </Button>
+          ) : undefined
+        }
       />
       {creating.open && (
         <div className="mb-6">
@@ -34,23 +41,62 @@ export function Component() {
         </div>
       )}
       <div className="mb-4 flex flex-wrap items-end gap-3">
-        <SelectField label="Status" className="w-48" value={filters.status ?? ''} onChange={(e) => setFilters({ ...filters, status: (e.target.value || undefined) as PageStatus | undefined, page: 1 })}>
+        <SelectField
+          label="Status"
+          className="w-48"
+          value={filters.status ?? ''}
+          onChange={(e) => setFilters({ ...filters, status: (e.target.value || undefined) as PageStatus | undefined, page: 1 })}
+        >
           <option value="">Any status</option>
-          {PAGE_STATUSES.map((s) => <option key={s} value={s}>{PAGE_STATUS_LABELS[s]}</option>)}
+          {PAGE_STATUSES.map((s) => (
+            <option key={s} value={s}>
+              {PAGE_STATUS_LABELS[s]}
+            </option>
+          ))}
         </SelectField>
-        <SelectField label="Writer" className="w-48" value={filters.writerId ?? ''} onChange={(e) => setFilters({ ...filters, writerId: e.target.value || undefined, page: 1 })}>
+        <SelectField
+          label="Writer"
+          className="w-48"
+          value={filters.writerId ?? ''}
+          onChange={(e) => setFilters({ ...filters, writerId: e.target.value || undefined, page: 1 })}
+        >
           <option value="">Anyone</option>
           <option value={user.id}>Me</option>
         </SelectField>
-        <TextField label="Title contains" className="w-64" type="search" value={filters.q ?? ''} onChange={(e) => setFilters({ ...filters, q: e.target.value || undefined, page: 1 })} />
+        <TextField
+          label="Title contains"
+          className="w-64"
+          type="search"
+          value={filters.q ?? ''}
+          onChange={(e) => setFilters({ ...filters, q: e.target.value || undefined, page: 1 })}
+        />
       </div>
       {pages.error && <Notice tone="error">{pages.error.message}</Notice>}
-      {pages.data && (pages.data.data.length ? <PagesTable rows={pages.data.data} /> : <p className="rounded-lg border border-dashed border-rule p-8 text-center text-sm text-muted">No pages match these filters.</p>)}
+      {pages.data &&
+        (pages.data.data.length ? (
+          <PagesTable rows={pages.data.data} />
+        ) : (
+          <p className="rounded-lg border border-dashed border-rule p-8 text-center text-sm text-muted">
+            No pages match these filters.
+          </p>
+        ))}
       {pages.data && pages.data.meta.total > pages.data.meta.pageSize && (
         <div className="mt-3 flex items-center gap-3 text-sm text-muted">
-          <Button variant="secondary" disabled={(filters.page ?? 1) <= 1} onClick={() => setFilters({ ...filters, page: (filters.page ?? 1) - 1 })}>Previous</Button>
+          <Button
+            variant="secondary"
+            disabled={(filters.page ?? 1) <= 1}
+            onClick={() => setFilters({ ...filters, page: (filters.page ?? 1) - 1 })}
+          >
+            Previous
+          </Button>
           Page {pages.data.meta.page} of {Math.ceil(pages.data.meta.total / pages.data.meta.pageSize)}
-          <Button variant="secondary" disabled={pages.data.meta.page * pages.data.meta.pageSize >= pages.data.meta.total} onClick={() => setFilters({ ...filters, page: (filters.page ?? 1) + 1 })}>Next</Button>
+          <Button
+            variant="secondary"
+            disabled={pages.data.meta.page * pages.data.meta.pageSize >= pages.data.meta.total}
+            onClick={() => setFilters({ ...filters, page: (filters.page ?? 1) + 1 })}
+          >
+            Next
+          </Button>
         </div>
       )}
     </>

@@ -5,7 +5,16 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useApprovalProblems, usePage, usePreview, usePublished, useResolveFlag, useSendBack, useSignOffPage, useSignOffStatement } from '@/features/pages/api/pages.ts';
+import {
+  useApprovalProblems,
+  usePage,
+  usePreview,
+  usePublished,
+  useResolveFlag,
+  useSendBack,
+  useSignOffPage,
+  useSignOffStatement,
+} from '@/features/pages/api/pages.ts';
 import { PageComments } from '@/features/pages/components/page-comments.tsx';
 import { PageHtml } from '@/features/pages/components/page-html.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
@@ -39,59 +48,149 @@ export function Component() {
     <>
       <PageHeader
         title={p.title}
-        description={<span className="flex flex-wrap items-center gap-2"><PageStatusBadge status={p.status} /> About {p.object.name} · revision {p.revision.number} by {p.revision.author ?? p.writer.name}{p.lastReviewer ? ` · last reviewer ${p.lastReviewer}` : ''}</span>}
+        description={
+          <span className="flex flex-wrap items-center gap-2">
+            <PageStatusBadge status={p.status} /> About {p.object.name} · revision {p.revision.number} by{' '}
+            {p.revision.author ?? p.writer.name}
+            {p.lastReviewer ? ` · last reviewer ${p.lastReviewer}` : ''}
+          </span>
+        }
         actions={
           <>
-            <Link to={paths.pageRevisions.href(p.id)} className="inline-flex items-center gap-1.5 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"><Icon name="history" className="size-4" />Revisions</Link>
-            <Link to={paths.pageEdit.href(p.id)} className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">{p.can.edit ? 'Edit' : 'Open in editor'}</Link>
+            <Link
+              to={paths.pageRevisions.href(p.id)}
+              className="inline-flex items-center gap-1.5 rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+            >
+              <Icon name="history" className="size-4" />
+              Revisions
+            </Link>
+            <Link
+              to={paths.pageEdit.href(p.id)}
+              className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+            >
+              {p.can.edit ? 'Edit' : 'Open in editor'}
+            </Link>
           </>
         }
       />
       {p.status === 'needs_recheck' && (
         <div className="mb-6">
           <Notice tone="warning" title="Needs re-check">
-            The data behind {moved.length === 1 ? 'a statement' : `${moved.length} statements`} changed after sign-off and the wording moved (old and new below).
-            {p.published ? ` The public still sees revision ${p.published.revisionNumber} with the signed-off wording until a new version is signed off and published.` : ''}
+            The data behind {moved.length === 1 ? 'a statement' : `${moved.length} statements`} changed after sign-off and the
+            wording moved (old and new below).
+            {p.published
+              ? ` The public still sees revision ${p.published.revisionNumber} with the signed-off wording until a new version is signed off and published.`
+              : ''}
           </Notice>
         </div>
       )}
-      {error && <div className="mb-4"><Notice tone="error">{error.message}</Notice></div>}
+      {error && (
+        <div className="mb-4">
+          <Notice tone="error">{error.message}</Notice>
+        </div>
+      )}
       <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           {p.published && (
-            <div role="group" aria-label="Which version" className="inline-flex rounded-md border border-rule bg-panel p-0.5 text-sm">
-              <button type="button" aria-pressed={!showLive} onClick={() => setShowLive(false)} className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}>This revision ({p.revision.number})</button>
-              <button type="button" aria-pressed={showLive} onClick={() => setShowLive(true)} className={`rounded px-3 py-1 ${showLive ? 'bg-accent text-on-accent' : ''}`}>Live version ({p.published.revisionNumber})</button>
+            <div
+              role="group"
+              aria-label="Which version"
+              className="inline-flex rounded-md border border-rule bg-panel p-0.5 text-sm"
+            >
+              <button
+                type="button"
+                aria-pressed={!showLive}
+                onClick={() => setShowLive(false)}
+                className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}
+              >
+                This revision ({p.revision.number})
+              </button>
+              <button
+                type="button"
+                aria-pressed={showLive}
+                onClick={() => setShowLive(true)}
+                className={`rounded px-3 py-1 ${showLive ? 'bg-accent text-on-accent' : ''}`}
+              >
+                Live version ({p.published.revisionNumber})
+              </button>
             </div>
           )}
           <article className="rounded-lg border border-rule bg-panel px-8 py-6">
             <h1 className="mb-4 font-serif text-3xl font-semibold">{showLive ? published.data?.title : p.title}</h1>
-            {html !== undefined ? <PageHtml html={html} onStatement={setWorking} /> : <p className="text-sm text-muted">Loading…</p>}
+            {html !== undefined ? (
+              <PageHtml html={html} onStatement={setWorking} />
+            ) : (
+              <p className="text-sm text-muted">Loading…</p>
+            )}
           </article>
           <PageComments pageId={p.id} canComment={p.can.comment} />
         </div>
         <div className="space-y-6">
-          <ReviewStatements page={p} busyId={signStatement.isPending ? (signStatement.variables ?? null) : null} onSignOff={(sid) => signStatement.mutate(sid)} onWorking={setWorking} />
-          <ReviewFlags flags={p.flags} canReview={p.can.review} onResolve={(text, reason) => resolveFlag.mutate({ text, reason })} />
-          {p.eyeSafety.required && <Notice tone={p.eyeSafety.present ? 'success' : 'error'} title="Eye safety">{p.eyeSafety.required}. {p.eyeSafety.present ? 'The notice is on the page.' : 'The notice is missing.'}</Notice>}
+          <ReviewStatements
+            page={p}
+            busyId={signStatement.isPending ? (signStatement.variables ?? null) : null}
+            onSignOff={(sid) => signStatement.mutate(sid)}
+            onWorking={setWorking}
+          />
+          <ReviewFlags
+            flags={p.flags}
+            canReview={p.can.review}
+            onResolve={(text, reason) => resolveFlag.mutate({ text, reason })}
+          />
+          {p.eyeSafety.required && (
+            <Notice tone={p.eyeSafety.present ? 'success' : 'error'} title="Eye safety">
+              {p.eyeSafety.required}. {p.eyeSafety.present ? 'The notice is on the page.' : 'The notice is missing.'}
+            </Notice>
+          )}
           {p.can.review && (
             <section aria-labelledby="page-signoff" className="space-y-3 rounded-lg border border-rule bg-panel p-4">
-              <h2 id="page-signoff" className="font-semibold">Sign off the page</h2>
+              <h2 id="page-signoff" className="font-semibold">
+                Sign off the page
+              </h2>
               {problems.data && problems.data.length > 0 ? (
-                <ul className="list-disc space-y-1 pl-5 text-sm text-muted">{problems.data.map((m) => <li key={m}>{m}</li>)}</ul>
+                <ul className="list-disc space-y-1 pl-5 text-sm text-muted">
+                  {problems.data.map((m) => (
+                    <li key={m}>{m}</li>
+                  ))}
+                </ul>
               ) : (
-                <p className="text-sm text-muted">Everything is checked. Signing off approves revision {p.revision.number} for an editor to publish.</p>
+                <p className="text-sm text-muted">
+                  Everything is checked. Signing off approves revision {p.revision.number} for an editor to publish.
+                </p>
               )}
-              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => signPage.mutate()}>Sign off page</Button>
-              <form className="space-y-2 border-t border-rule pt-3" onSubmit={(e) => { e.preventDefault(); sendBack.mutate(backNote); }}>
-                <label htmlFor="send-back" className="block text-sm font-medium">Send back to the writer</label>
-                <textarea id="send-back" rows={2} value={backNote} onChange={(e) => setBackNote(e.target.value)} placeholder="What needs changing" className="w-full rounded-md border border-rule bg-panel px-3 py-2 text-sm" />
-                <Button type="submit" variant="secondary" disabled={!backNote.trim()} busy={sendBack.isPending}>Send back</Button>
+              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => signPage.mutate()}>
+                Sign off page
+              </Button>
+              <form
+                className="space-y-2 border-t border-rule pt-3"
+                onSubmit={(e) => {
+                  e.preventDefault();
+                  sendBack.mutate(backNote);
+                }}
+              >
+                <label htmlFor="send-back" className="block text-sm font-medium">
+                  Send back to the writer
+                </label>
+                <textarea
+                  id="send-back"
+                  rows={2}
+                  value={backNote}
+                  onChange={(e) => setBackNote(e.target.value)}
+                  placeholder="What needs changing"
+                  className="w-full rounded-md border border-rule bg-panel px-3 py-2 text-sm"
+                />
+                <Button type="submit" variant="secondary" disabled={!backNote.trim()} busy={sendBack.isPending}>
+                  Send back
+                </Button>
               </form>
             </section>
           )}
-          {p.status === 'approved' && !p.can.publish && <Notice tone="success" title="Approved">Signed off{p.approved?.by ? ` by ${p.approved.by}` : ''}; an editor publishes it.</Notice>}
+          {p.status === 'approved' && !p.can.publish && (
+            <Notice tone="success" title="Approved">
+              Signed off{p.approved?.by ? ` by ${p.approved.by}` : ''}; an editor publishes it.
+            </Notice>
+          )}
           <PublishPanel page={p} />
         </div>
       </div>

@@ -24,14 +24,43 @@ export function Component() {
   if (page.error) return <Notice tone="error">{page.error.message}</Notice>;
   return (
     <>
-      <PageHeader title={`Revisions of “${page.data?.title ?? '…'}”`} description="Every saved version is kept. Compare any two, or restore an old one as a new revision." actions={<Link to={paths.pageEdit.href(id)} className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent">Back to the page</Link>} />
-      {restore.error && <div className="mb-4"><Notice tone="error">{restore.error.message}</Notice></div>}
-      {restore.isSuccess && <div className="mb-4"><Notice tone="success">Restored as revision {restore.data.revision.number}.</Notice></div>}
+      <PageHeader
+        title={`Revisions of “${page.data?.title ?? '…'}”`}
+        description="Every saved version is kept. Compare any two, or restore an old one as a new revision."
+        actions={
+          <Link
+            to={paths.pageEdit.href(id)}
+            className="inline-flex items-center rounded-md border border-rule bg-panel px-3.5 py-2 text-sm font-medium hover:border-accent"
+          >
+            Back to the page
+          </Link>
+        }
+      />
+      {restore.error && (
+        <div className="mb-4">
+          <Notice tone="error">{restore.error.message}</Notice>
+        </div>
+      )}
+      {restore.isSuccess && (
+        <div className="mb-4">
+          <Notice tone="success">Restored as revision {restore.data.revision.number}.</Notice>
+        </div>
+      )}
       <div className="grid gap-6 lg:grid-cols-[20rem_minmax(0,1fr)]">
         <div className="overflow-hidden rounded-lg border border-rule bg-panel">
           <table className="w-full text-sm">
             <thead className="bg-wash text-left text-xs uppercase tracking-wide text-muted">
-              <tr><th scope="col" className="px-3 py-2">#</th><th scope="col" className="px-3 py-2">Saved</th><th scope="col" className="px-3 py-2">Compare</th></tr>
+              <tr>
+                <th scope="col" className="px-3 py-2">
+                  #
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Saved
+                </th>
+                <th scope="col" className="px-3 py-2">
+                  Compare
+                </th>
+              </tr>
             </thead>
             <tbody>
               {list.map((r) => (
@@ -39,14 +68,28 @@ export function Component() {
                   <td className="px-3 py-2 tabular-nums">{r.number}</td>
                   <td className="px-3 py-2">
                     <span className="block">{when.format(new Date(r.createdAt))}</span>
-                    <span className="block text-xs text-muted">{r.author ?? 'Former staff'}{r.restoredFrom ? ` · restored from ${r.restoredFrom}` : ''}{r.marks.length ? ` · ${r.marks.join(', ')}` : ''}</span>
+                    <span className="block text-xs text-muted">
+                      {r.author ?? 'Former staff'}
+                      {r.restoredFrom ? ` · restored from ${r.restoredFrom}` : ''}
+                      {r.marks.length ? ` · ${r.marks.join(', ')}` : ''}
+                    </span>
                     {page.data?.can.edit && !r.marks.includes('current') && (
-                      <button type="button" className="text-xs font-medium text-accent hover:underline" onClick={() => restore.mutate({ number: r.number, version: page.data!.version })}>Restore as new revision</button>
+                      <button
+                        type="button"
+                        className="text-xs font-medium text-accent hover:underline"
+                        onClick={() => restore.mutate({ number: r.number, version: page.data!.version })}
+                      >
+                        Restore as new revision
+                      </button>
                     )}
                   </td>
                   <td className="space-x-2 px-3 py-2 whitespace-nowrap">
-                    <label className="text-xs"><input type="radio" name="from" checked={a === r.number} onChange={() => setFrom(r.number)} /> from</label>
-                    <label className="text-xs"><input type="radio" name="to" checked={b === r.number} onChange={() => setTo(r.number)} /> to</label>
+                    <label className="text-xs">
+                      <input type="radio" name="from" checked={a === r.number} onChange={() => setFrom(r.number)} /> from
+                    </label>
+                    <label className="text-xs">
+                      <input type="radio" name="to" checked={b === r.number} onChange={() => setTo(r.number)} /> to
+                    </label>
                   </td>
                 </tr>
               ))}

@@ -5,7 +5,16 @@ import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useAddSlide, useAssignScreens, useChannel, useDeleteChannel, useRemoveSlide, useRenameChannel, useReorderSlides, useUpdateSlide } from '@/features/publishing/api/channels.ts';
+import {
+  useAddSlide,
+  useAssignScreens,
+  useChannel,
+  useDeleteChannel,
+  useRemoveSlide,
+  useRenameChannel,
+  useReorderSlides,
+  useUpdateSlide,
+} from '@/features/publishing/api/channels.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
@@ -42,17 +51,38 @@ export function Component() {
         actions={
           c.can.update && renaming === null ? (
             <>
-              <Button variant="secondary" onClick={() => setRenaming(c.name)}>Rename</Button>
-              <Button variant="danger" onClick={() => setConfirmDelete(true)}>Delete channel</Button>
+              <Button variant="secondary" onClick={() => setRenaming(c.name)}>
+                Rename
+              </Button>
+              <Button variant="danger" onClick={() => setConfirmDelete(true)}>
+                Delete channel
+              </Button>
             </>
           ) : undefined
         }
       />
       {renaming !== null && (
-        <form className="mb-6 flex items-end gap-2" aria-label="Rename channel" onSubmit={(e) => { e.preventDefault(); rename.mutate(renaming, { onSuccess: () => setRenaming(null) }); }}>
-          <TextField className="w-80" label="Channel name" value={renaming} onChange={(e) => setRenaming(e.target.value)} error={message(rename.error) ?? undefined} />
-          <Button type="submit" busy={rename.isPending}>Save name</Button>
-          <Button type="button" variant="secondary" onClick={() => setRenaming(null)}>Cancel</Button>
+        <form
+          className="mb-6 flex items-end gap-2"
+          aria-label="Rename channel"
+          onSubmit={(e) => {
+            e.preventDefault();
+            rename.mutate(renaming, { onSuccess: () => setRenaming(null) });
+          }}
+        >
+          <TextField
+            className="w-80"
+            label="Channel name"
+            value={renaming}
+            onChange={(e) => setRenaming(e.target.value)}
+            error={message(rename.error) ?? undefined}
+          />
+          <Button type="submit" busy={rename.isPending}>
+            Save name
+          </Button>
+          <Button type="button" variant="secondary" onClick={() => setRenaming(null)}>
+            Cancel
+          </Button>
         </form>
       )}
       {confirmDelete && (
@@ -60,15 +90,25 @@ export function Component() {
           <Notice tone="warning" title={`Delete “${c.name}”?`}>
             <p>Its slides go with it; its screens show the holding screen until they get another channel.</p>
             <div className="mt-2 flex gap-2">
-              <Button variant="danger" busy={del.isPending} onClick={() => del.mutate(c.id, { onSuccess: () => navigate(paths.publishing.href()) })}>Delete channel</Button>
-              <Button variant="secondary" onClick={() => setConfirmDelete(false)}>Keep it</Button>
+              <Button
+                variant="danger"
+                busy={del.isPending}
+                onClick={() => del.mutate(c.id, { onSuccess: () => navigate(paths.publishing.href()) })}
+              >
+                Delete channel
+              </Button>
+              <Button variant="secondary" onClick={() => setConfirmDelete(false)}>
+                Keep it
+              </Button>
             </div>
           </Notice>
         </div>
       )}
       <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_28rem]">
         <section aria-labelledby="slides-heading" className="space-y-4">
-          <h2 id="slides-heading" className="text-lg font-semibold text-ink">Slides</h2>
+          <h2 id="slides-heading" className="text-lg font-semibold text-ink">
+            Slides
+          </h2>
           {listError && <Notice tone="error">{listError}</Notice>}
           <SlideList
             channel={c}
@@ -76,17 +116,23 @@ export function Component() {
             onReorder={(ids) => reorder.mutate(ids)}
             onRemove={(id) => remove.mutate(id)}
             onUpdate={(slideId, input) => update.mutate({ slideId, ...input })}
-            updateError={update.error && update.variables ? { slideId: update.variables.slideId, message: update.error.message } : null}
+            updateError={
+              update.error && update.variables ? { slideId: update.variables.slideId, message: update.error.message } : null
+            }
           />
           {c.can.update && <AddSlideForm busy={add.isPending} error={message(add.error)} onAdd={(input) => add.mutate(input)} />}
         </section>
         <aside className="space-y-6">
           <section aria-labelledby="preview-heading" className="space-y-2">
-            <h2 id="preview-heading" className="text-lg font-semibold text-ink">Preview</h2>
+            <h2 id="preview-heading" className="text-lg font-semibold text-ink">
+              Preview
+            </h2>
             <PlayerPreview channelId={c.id} version={c.version} />
           </section>
           <section aria-labelledby="screens-heading" className="space-y-2 rounded-lg border border-rule bg-panel p-4">
-            <h2 id="screens-heading" className="text-lg font-semibold text-ink">Screens</h2>
+            <h2 id="screens-heading" className="text-lg font-semibold text-ink">
+              Screens
+            </h2>
             {screens.error && <Notice tone="error">{screens.error.message}</Notice>}
             <ScreensPicker channel={c} busy={screens.isPending} onSave={(ids) => screens.mutate(ids)} />
           </section>

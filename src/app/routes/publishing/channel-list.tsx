@@ -38,7 +38,9 @@ export function Component() {
         {adding.open && <NewChannel onCancel={adding.close} />}
         {channels.isPending && <p className="text-sm text-muted">Loading channels…</p>}
         {channels.error && <Notice tone="error">{channels.error.message}</Notice>}
-        {channels.data && channels.data.length === 0 && <Notice>No channels yet. Create one, add slides, then choose the screens that show it.</Notice>}
+        {channels.data && channels.data.length === 0 && (
+          <Notice>No channels yet. Create one, add slides, then choose the screens that show it.</Notice>
+        )}
         {channels.data && channels.data.length > 0 && <ChannelsTable channels={channels.data} />}
       </div>
     </>

@@ -14,7 +14,9 @@ import { useSettings } from '@/features/settings/api/settings.ts';
 import { StatementInputs } from '@/features/statements/components/statement-inputs.tsx';
 import { StatementTexts } from '@/features/statements/components/statement-texts.tsx';
 
-const DistanceRedshiftChart = lazy(() => import('@/features/charts/distance-redshift-chart.tsx').then((m) => ({ default: m.DistanceRedshiftChart })));
+const DistanceRedshiftChart = lazy(() =>
+  import('@/features/charts/distance-redshift-chart.tsx').then((m) => ({ default: m.DistanceRedshiftChart })),
+);
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
@@ -37,7 +39,12 @@ export function Component() {
   if (statement.error) return <Notice tone="error">{statement.error.message}</Notice>;
   const s = statement.data;
   const z = s.inputs.find((i) => i.quantity === 'redshift');
-  const zInterval = z && z.sigma != null ? { low: z.value - z.sigma, high: z.value + z.sigma } : z && z.minus != null && z.plus != null ? { low: z.value - z.minus, high: z.value + z.plus } : undefined;
+  const zInterval =
+    z && z.sigma != null
+      ? { low: z.value - z.sigma, high: z.value + z.sigma }
+      : z && z.minus != null && z.plus != null
+        ? { low: z.value - z.minus, high: z.value + z.plus }
+        : undefined;
   const model = settings.data?.cosmologyModel;
 
   return (
@@ -46,14 +53,25 @@ export function Component() {
         title={s.template.title}
         description={
           <>
-            About <Link to={paths.catalogueObject.href(s.object.id)} className="text-accent hover:underline">{s.object.name}</Link>
+            About{' '}
+            <Link to={paths.catalogueObject.href(s.object.id)} className="text-accent hover:underline">
+              {s.object.name}
+            </Link>
             {s.venue && <> · for {s.venue.name}</>} · computed {when.format(new Date(s.computedAt))}
           </>
         }
         actions={
           <>
-            {s.can.recompute && <Button variant="secondary" busy={recompute.isPending} onClick={() => recompute.mutate(s.id)}>Recompute now</Button>}
-            {s.can.acknowledge && s.status === 'changed' && <Button busy={accept.isPending} onClick={() => accept.mutate(s.id)}>Accept new wording</Button>}
+            {s.can.recompute && (
+              <Button variant="secondary" busy={recompute.isPending} onClick={() => recompute.mutate(s.id)}>
+                Recompute now
+              </Button>
+            )}
+            {s.can.acknowledge && s.status === 'changed' && (
+              <Button busy={accept.isPending} onClick={() => accept.mutate(s.id)}>
+                Accept new wording
+              </Button>
+            )}
           </>
         }
       />
@@ -62,26 +80,45 @@ export function Component() {
           <StatementStatusBadge status={s.status} />
           {s.interval && s.value != null && (
             <span className="text-sm text-muted tabular-nums">
-              Value {formatSig(s.value)} {s.unit} · 68 % interval {formatSig(s.interval.low, 4)} to {formatSig(s.interval.high, 4)} · worded to {s.significantFigures} significant figure{s.significantFigures === 1 ? '' : 's'}
+              Value {formatSig(s.value)} {s.unit} · 68 % interval {formatSig(s.interval.low, 4)} to{' '}
+              {formatSig(s.interval.high, 4)} · worded to {s.significantFigures} significant figure
+              {s.significantFigures === 1 ? '' : 's'}
             </span>
           )}
         </div>
         {s.venue && s.night && (
           <Notice title={`The night of ${nightDate(s.night.localDate)} at ${s.venue.name}`}>
-            Distances for {venueClock(s.night.observationUtc, s.venue.timeZone)} local time ({s.venue.timeZone}). This statement is worked out again each night from the venue’s sky: a new
-            night’s number follows without a new sign-off, while a change of method (the venue moved, other constants, another sentence) comes back here for review.
+            Distances for {venueClock(s.night.observationUtc, s.venue.timeZone)} local time ({s.venue.timeZone}). This statement
+            is worked out again each night from the venue’s sky: a new night’s number follows without a new sign-off, while a
+            change of method (the venue moved, other constants, another sentence) comes back here for review.
           </Notice>
         )}
-        {s.status === 'changed' && <Notice tone="warning" title="The wording has changed">{s.statusReason}</Notice>}
-        {s.status === 'broken' && <Notice tone="error" title="This statement cannot be worked out">{s.statusReason} Pages keep their last approved text until this is fixed in the catalogue.</Notice>}
+        {s.status === 'changed' && (
+          <Notice tone="warning" title="The wording has changed">
+            {s.statusReason}
+          </Notice>
+        )}
+        {s.status === 'broken' && (
+          <Notice tone="error" title="This statement cannot be worked out">
+            {s.statusReason} Pages keep their last approved text until this is fixed in the catalogue.
+          </Notice>
+        )}
         {(accept.error || recompute.error) && <Notice tone="error">{(accept.error ?? recompute.error)?.message}</Notice>}
         <StatementTexts statement={s} />
         <StatementInputs statement={s} />
         {z && model && (
           <section aria-labelledby="chart-heading" className="space-y-3">
-            <h2 id="chart-heading" className="text-lg font-semibold tracking-tight">Distance and redshift</h2>
+            <h2 id="chart-heading" className="text-lg font-semibold tracking-tight">
+              Distance and redshift
+            </h2>
             <Suspense fallback={<p className="text-sm text-muted">Loading chart…</p>}>
-              <DistanceRedshiftChart z={z.value} zInterval={zInterval} model={model} alternatives={alternativesTo(model, s.model?.H0 ?? 70)} objectName={s.object.name} />
+              <DistanceRedshiftChart
+                z={z.value}
+                zInterval={zInterval}
+                model={model}
+                alternatives={alternativesTo(model, s.model?.H0 ?? 70)}
+                objectName={s.object.name}
+              />
             </Suspense>
           </section>
         )}

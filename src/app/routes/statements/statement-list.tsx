@@ -42,17 +42,28 @@ export function Component() {
         <SelectField label="Status" value={filters.status ?? ''} onChange={(e) => set('status', e.target.value)} className="w-44">
           <option value="">Any status</option>
           {STATEMENT_STATUSES.map((s) => (
-            <option key={s} value={s}>{STATEMENT_STATUS_LABELS[s]}</option>
+            <option key={s} value={s}>
+              {STATEMENT_STATUS_LABELS[s]}
+            </option>
           ))}
         </SelectField>
-        <SelectField label="Template" value={filters.templateId ?? ''} onChange={(e) => set('template', e.target.value)} className="w-80">
+        <SelectField
+          label="Template"
+          value={filters.templateId ?? ''}
+          onChange={(e) => set('template', e.target.value)}
+          className="w-80"
+        >
           <option value="">Any template</option>
           {templates.data?.map((t) => (
-            <option key={t.id} value={t.id}>{t.title}</option>
+            <option key={t.id} value={t.id}>
+              {t.title}
+            </option>
           ))}
         </SelectField>
         {filters.objectId && (
-          <Button variant="secondary" onClick={() => set('object', '')}>Show every object</Button>
+          <Button variant="secondary" onClick={() => set('object', '')}>
+            Show every object
+          </Button>
         )}
       </div>
       {statements.error && <Notice tone="error">{statements.error.message}</Notice>}
@@ -60,12 +71,20 @@ export function Component() {
       {statements.data && statements.data.data.length === 0 && (
         <Notice>No statements match. Writers add statements from an object’s page in the catalogue.</Notice>
       )}
-      {statements.data && statements.data.data.length > 0 && <StatementsTable statements={statements.data.data} locale={locale} />}
+      {statements.data && statements.data.data.length > 0 && (
+        <StatementsTable statements={statements.data.data} locale={locale} />
+      )}
       {meta && pages > 1 && (
         <nav aria-label="Pages" className="mt-4 flex items-center gap-3 text-sm">
-          <Button variant="secondary" disabled={filters.page <= 1} onClick={() => set('page', String(filters.page - 1))}>Previous</Button>
-          <span className="text-muted">Page {filters.page} of {pages} · {meta.total} statements</span>
-          <Button variant="secondary" disabled={filters.page >= pages} onClick={() => set('page', String(filters.page + 1))}>Next</Button>
+          <Button variant="secondary" disabled={filters.page <= 1} onClick={() => set('page', String(filters.page - 1))}>
+            Previous
+          </Button>
+          <span className="text-muted">
+            Page {filters.page} of {pages} · {meta.total} statements
+          </span>
+          <Button variant="secondary" disabled={filters.page >= pages} onClick={() => set('page', String(filters.page + 1))}>
+            Next
+          </Button>
         </nav>
       )}
     </>

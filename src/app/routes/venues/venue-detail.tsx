@@ -21,7 +21,13 @@ export function Component() {
       <PageHeader
         title={v.name}
         description={`${formatPosition(v.latitude, v.longitude)} · ${v.elevationM} m above sea level · ${v.timeZone}`}
-        actions={v.can.update && !editing.open ? <Button ref={editing.openerRef} variant="secondary" onClick={editing.show}>Edit venue</Button> : undefined}
+        actions={
+          v.can.update && !editing.open ? (
+            <Button ref={editing.openerRef} variant="secondary" onClick={editing.show}>
+              Edit venue
+            </Button>
+          ) : undefined
+        }
       />
       <div className="space-y-8">
         {editing.open && <VenueForm venue={v} onDone={editing.close} onCancel={editing.close} />}

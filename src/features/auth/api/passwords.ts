@@ -8,7 +8,9 @@ export const useChangePassword = () =>
   useMutation({ mutationFn: (input: ChangePasswordInput) => api.post<void>('/auth/password', input) });
 
 export const useRequestPasswordReset = () =>
-  useMutation({ mutationFn: (input: RequestPasswordResetInput) => api.post<ApiData<{ message: string }>>('/auth/password-reset', input) });
+  useMutation({
+    mutationFn: (input: RequestPasswordResetInput) => api.post<ApiData<{ message: string }>>('/auth/password-reset', input),
+  });
 
 /** Accepting an invitation and completing a reset both set a password from an e-mailed token and sign in. */
 export function useCompleteWithToken(kind: 'invitation' | 'reset') {

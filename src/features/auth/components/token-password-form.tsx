@@ -16,7 +16,15 @@ const FormSchema = z
 type FormValues = z.infer<typeof FormSchema>;
 
 /** Sets a password from an e-mailed token (invitation or reset), then signs in. */
-export function TokenPasswordForm({ kind, token, submitLabel }: { kind: 'invitation' | 'reset'; token: string; submitLabel: string }) {
+export function TokenPasswordForm({
+  kind,
+  token,
+  submitLabel,
+}: {
+  kind: 'invitation' | 'reset';
+  token: string;
+  submitLabel: string;
+}) {
   const complete = useCompleteWithToken(kind);
   const navigate = useNavigate();
   const [formError, setFormError] = useState<string>();
@@ -36,8 +44,21 @@ export function TokenPasswordForm({ kind, token, submitLabel }: { kind: 'invitat
   return (
     <form onSubmit={onSubmit} noValidate className="space-y-4">
       {formError && <Notice tone="error">{formError}</Notice>}
-      <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters; a short sentence works well." error={formState.errors.newPassword?.message} {...register('newPassword')} />
-      <TextField label="The same password again" type="password" autoComplete="new-password" error={formState.errors.confirm?.message} {...register('confirm')} />
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters; a short sentence works well."
+        error={formState.errors.newPassword?.message}
+        {...register('newPassword')}
+      />
+      <TextField
+        label="The same password again"
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.confirm?.message}
+        {...register('confirm')}
+      />
       <Button type="submit" busy={complete.isPending} className="w-full">
         {submitLabel}
       </Button>

@@ -13,9 +13,22 @@ import { ModelPicker } from './model-picker.tsx';
 
 /** Quantities grouped as a reader looks for them. */
 const QUANTITY_GROUPS: ReadonlyArray<{ label: string; quantities: CalcQuantity[] }> = [
-  { label: 'Distances from a redshift', quantities: ['luminosity_distance', 'light_travel_distance', 'proper_distance', 'comoving_distance', 'transverse_comoving_distance', 'angular_diameter_distance'] },
+  {
+    label: 'Distances from a redshift',
+    quantities: [
+      'luminosity_distance',
+      'light_travel_distance',
+      'proper_distance',
+      'comoving_distance',
+      'transverse_comoving_distance',
+      'angular_diameter_distance',
+    ],
+  },
   { label: 'Times and the expansion', quantities: ['lookback_time', 'age_at_z', 'age_now', 'hubble_parameter'] },
-  { label: 'Magnitudes and brightness', quantities: ['distance_modulus', 'absolute_magnitude', 'luminosity_ratio_sun', 'flux_ratio', 'parallax_distance'] },
+  {
+    label: 'Magnitudes and brightness',
+    quantities: ['distance_modulus', 'absolute_magnitude', 'luminosity_ratio_sun', 'flux_ratio', 'parallax_distance'],
+  },
   { label: 'Redshift from another quantity', quantities: ['z_from_lookback_time', 'z_from_luminosity_distance'] },
 ];
 
@@ -46,7 +59,13 @@ const resolver: Resolver<CalcFormValues> = async (values) => {
  * @param props.onResult called with each successful result and the request that produced it
  * @param props.onRefused called when the server refuses a calculation, so an older result is not left on show
  */
-export function CalcForm({ onResult, onRefused }: { onResult: (result: CalcSuccess, request: CalcRequest) => void; onRefused?: () => void }) {
+export function CalcForm({
+  onResult,
+  onRefused,
+}: {
+  onResult: (result: CalcSuccess, request: CalcRequest) => void;
+  onRefused?: () => void;
+}) {
   const form = useForm<CalcFormValues>({ defaultValues: defaultFormValues(), resolver, reValidateMode: 'onSubmit' });
   const { register, handleSubmit, control, setValue, getValues, setError, formState } = form;
   const [serverError, setServerError] = useState<string>();
@@ -80,7 +99,12 @@ export function CalcForm({ onResult, onRefused }: { onResult: (result: CalcSucce
 
   return (
     <FormProvider {...form}>
-      <form onSubmit={onSubmit} noValidate aria-label="Calculation" className="space-y-6 rounded-lg border border-rule bg-panel p-5">
+      <form
+        onSubmit={onSubmit}
+        noValidate
+        aria-label="Calculation"
+        className="space-y-6 rounded-lg border border-rule bg-panel p-5"
+      >
         <div className="grid gap-4 sm:grid-cols-3">
           <SelectField label="Quantity" className="sm:col-span-2" {...register('quantity', { onChange: onQuantityChange })}>
             {QUANTITY_GROUPS.map((g) => (
@@ -109,7 +133,10 @@ export function CalcForm({ onResult, onRefused }: { onResult: (result: CalcSucce
             <legend className="mb-1.5 text-sm font-medium text-ink">Work from</legend>
             <div className="flex flex-wrap gap-2">
               {fields.groups.map((g, i) => (
-                <label key={g.join()} className={`flex cursor-pointer items-center gap-2 rounded-md border px-3 py-1.5 text-sm ${String(i) === group ? 'border-accent bg-accent/5' : 'border-rule hover:border-accent'}`}>
+                <label
+                  key={g.join()}
+                  className={`flex cursor-pointer items-center gap-2 rounded-md border px-3 py-1.5 text-sm ${String(i) === group ? 'border-accent bg-accent/5' : 'border-rule hover:border-accent'}`}
+                >
                   <input type="radio" value={String(i)} className="accent-accent" {...register('group')} />
                   {GROUP_LABELS[g.join()] ?? g.join(' and ')}
                 </label>
@@ -129,7 +156,9 @@ export function CalcForm({ onResult, onRefused }: { onResult: (result: CalcSucce
           </div>
         )}
         {fields.required.length + fields.optional.length > 0 && (
-          <p className="-mt-3 text-xs text-muted">Uncertainties are 68 % (one standard deviation); leave them empty for an exact value.</p>
+          <p className="-mt-3 text-xs text-muted">
+            Uncertainties are 68 % (one standard deviation); leave them empty for an exact value.
+          </p>
         )}
 
         {fields.usesModel && (
@@ -147,7 +176,11 @@ export function CalcForm({ onResult, onRefused }: { onResult: (result: CalcSucce
           <Button type="submit" busy={calc.isPending}>
             Calculate
           </Button>
-          {calc.isPending && <span className="text-sm text-muted" role="status">Calculating…</span>}
+          {calc.isPending && (
+            <span className="text-sm text-muted" role="status">
+              Calculating…
+            </span>
+          )}
         </div>
       </form>
     </FormProvider>

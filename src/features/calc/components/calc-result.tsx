@@ -48,7 +48,10 @@ export function CalcResult({ result }: { result: CalcSuccess }) {
         )}
       </div>
       {conversions.length > 0 && (
-        <ul className="flex flex-wrap gap-x-6 gap-y-1 border-t border-rule pt-3 text-sm text-ink tabular-nums" aria-label="The same value in other units">
+        <ul
+          className="flex flex-wrap gap-x-6 gap-y-1 border-t border-rule pt-3 text-sm text-ink tabular-nums"
+          aria-label="The same value in other units"
+        >
           {conversions.map((t) => (
             <li key={t}>
               <span className="text-muted">= </span>

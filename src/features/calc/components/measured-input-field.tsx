@@ -26,7 +26,9 @@ export function MeasuredInputField({ name, optional = false }: { name: CalcNumer
   const errors = formState.errors;
   const valueError = fieldError(errors, ['inputs', name, 'value']);
   const uncertaintyError =
-    fieldError(errors, ['inputs', name, 'sigma']) ?? fieldError(errors, ['inputs', name, 'minus']) ?? fieldError(errors, ['inputs', name, 'plus']);
+    fieldError(errors, ['inputs', name, 'sigma']) ??
+    fieldError(errors, ['inputs', name, 'minus']) ??
+    fieldError(errors, ['inputs', name, 'plus']);
   const message = valueError ?? uncertaintyError;
   const unit = meta.unit ? <span className="font-normal text-muted"> ({meta.unit})</span> : null;
   const box = (bad: boolean) => `${BOX} ${bad ? 'border-broken' : 'border-rule'}`;
@@ -52,7 +54,9 @@ export function MeasuredInputField({ name, optional = false }: { name: CalcNumer
         />
         {asymmetric ? (
           <>
-            <span className="text-sm text-muted" aria-hidden="true">−</span>
+            <span className="text-sm text-muted" aria-hidden="true">
+              −
+            </span>
             <input
               aria-label={`${meta.label}: lower uncertainty`}
               placeholder="lower"
@@ -61,7 +65,9 @@ export function MeasuredInputField({ name, optional = false }: { name: CalcNumer
               className={`${box(!!fieldError(errors, ['inputs', name, 'minus']))} max-w-24`}
               {...register(`inputs.${name}.minus`)}
             />
-            <span className="text-sm text-muted" aria-hidden="true">+</span>
+            <span className="text-sm text-muted" aria-hidden="true">
+              +
+            </span>
             <input
               aria-label={`${meta.label}: upper uncertainty`}
               placeholder="upper"
@@ -73,7 +79,9 @@ export function MeasuredInputField({ name, optional = false }: { name: CalcNumer
           </>
         ) : (
           <>
-            <span className="text-sm text-muted" aria-hidden="true">±</span>
+            <span className="text-sm text-muted" aria-hidden="true">
+              ±
+            </span>
             <input
               aria-label={`${meta.label}: uncertainty (±)`}
               placeholder="none"

@@ -12,7 +12,11 @@ const CHOICES: ReadonlyArray<{ value: ModelChoice; title: string; line: string }
   { value: 'planck18', title: 'Planck 2018', line: `${presetLine('planck18')} · Planck Collaboration (2020)` },
   { value: 'wmap9', title: 'WMAP nine-year', line: `${presetLine('wmap9')} · Hinshaw et al. (2013)` },
   { value: 'custom', title: 'Custom FLRW model', line: 'Your own H₀ and densities, with radiation and neutrinos if wanted' },
-  { value: 'hubble', title: 'Simple Hubble law', line: 'd = cz/H₀ · a classroom model that holds only for small redshifts (z < 0.1)' },
+  {
+    value: 'hubble',
+    title: 'Simple Hubble law',
+    line: 'd = cz/H₀ · a classroom model that holds only for small redshifts (z < 0.1)',
+  },
 ];
 
 /**
@@ -51,18 +55,54 @@ export function ModelPicker({ flrwOnly }: { flrwOnly: boolean }) {
 
       {model === 'custom' && (
         <div className="grid gap-3 rounded-md border border-rule bg-wash/60 p-3 sm:grid-cols-4">
-          <TextField label="Name" hint="Optional; shown in the working." autoComplete="off" className="sm:col-span-2" {...register('custom.name')} />
+          <TextField
+            label="Name"
+            hint="Optional; shown in the working."
+            autoComplete="off"
+            className="sm:col-span-2"
+            {...register('custom.name')}
+          />
           <TextField label="H₀ (km/s/Mpc)" inputMode="decimal" error={e.custom?.H0?.message} {...register('custom.H0')} />
           <TextField label="Ω_m, matter" inputMode="decimal" error={e.custom?.Om0?.message} {...register('custom.Om0')} />
-          <TextField label="Ω_Λ, dark energy" inputMode="decimal" hint="Empty: flat model." error={e.custom?.Ode0?.message} {...register('custom.Ode0')} />
-          <TextField label="T_CMB (K)" inputMode="decimal" hint="Empty or 0: no radiation." error={e.custom?.Tcmb0?.message} {...register('custom.Tcmb0')} />
-          <TextField label="N_eff" inputMode="decimal" hint="Empty: 3.04." error={e.custom?.Neff?.message} {...register('custom.Neff')} />
-          <TextField label="m_ν (eV)" hint="One mass per species, e.g. 0, 0, 0.06." autoComplete="off" error={e.custom?.m_nu?.message} {...register('custom.m_nu')} />
+          <TextField
+            label="Ω_Λ, dark energy"
+            inputMode="decimal"
+            hint="Empty: flat model."
+            error={e.custom?.Ode0?.message}
+            {...register('custom.Ode0')}
+          />
+          <TextField
+            label="T_CMB (K)"
+            inputMode="decimal"
+            hint="Empty or 0: no radiation."
+            error={e.custom?.Tcmb0?.message}
+            {...register('custom.Tcmb0')}
+          />
+          <TextField
+            label="N_eff"
+            inputMode="decimal"
+            hint="Empty: 3.04."
+            error={e.custom?.Neff?.message}
+            {...register('custom.Neff')}
+          />
+          <TextField
+            label="m_ν (eV)"
+            hint="One mass per species, e.g. 0, 0, 0.06."
+            autoComplete="off"
+            error={e.custom?.m_nu?.message}
+            {...register('custom.m_nu')}
+          />
         </div>
       )}
       {model === 'hubble' && (
         <div className="grid gap-3 sm:grid-cols-4">
-          <TextField label="H₀ for the Hubble law (km/s/Mpc)" inputMode="decimal" className="sm:col-span-2" error={e.hubbleH0?.message} {...register('hubbleH0')} />
+          <TextField
+            label="H₀ for the Hubble law (km/s/Mpc)"
+            inputMode="decimal"
+            className="sm:col-span-2"
+            error={e.hubbleH0?.message}
+            {...register('hubbleH0')}
+          />
         </div>
       )}
 
@@ -74,7 +114,9 @@ export function ModelPicker({ flrwOnly }: { flrwOnly: boolean }) {
           <TextField label="Lowest H₀" inputMode="decimal" className="w-32" error={e.h0Low?.message} {...register('h0Low')} />
           <TextField label="Highest H₀" inputMode="decimal" className="w-32" error={e.h0High?.message} {...register('h0High')} />
         </div>
-        <p className="mt-1 text-xs text-muted">Widens the interval for the uncertainty in the Hubble constant; the model’s H₀ must lie inside it.</p>
+        <p className="mt-1 text-xs text-muted">
+          Widens the interval for the uncertainty in the Hubble constant; the model’s H₀ must lie inside it.
+        </p>
       </div>
     </fieldset>
   );

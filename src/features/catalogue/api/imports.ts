@@ -13,19 +13,30 @@ async function uploadForDryRun(file: File, mapping?: ImportMapping): Promise<Imp
   if (mapping) form.append('mapping', JSON.stringify(mapping));
   let response: Response;
   try {
-    response = await fetch('/api/catalogue/imports', { method: 'POST', body: form, credentials: 'same-origin', headers: { Accept: 'application/json' } });
+    response = await fetch('/api/catalogue/imports', {
+      method: 'POST',
+      body: form,
+      credentials: 'same-origin',
+      headers: { Accept: 'application/json' },
+    });
   } catch {
     throw new ApiRequestError(0, 'network_error', 'Starproof cannot be reached. Check the connection; nothing was imported.');
   }
   const payload = (await response.json().catch(() => undefined)) as (ApiError & ApiData<ImportDto>) | undefined;
   if (!response.ok || !payload?.data) {
-    throw new ApiRequestError(response.status, payload?.error?.code ?? 'http_error', payload?.error?.message ?? `The server answered ${response.status}.`, payload?.error?.fields);
+    throw new ApiRequestError(
+      response.status,
+      payload?.error?.code ?? 'http_error',
+      payload?.error?.message ?? `The server answered ${response.status}.`,
+      payload?.error?.fields,
+    );
   }
   return payload.data;
 }
 
 /** Checks a CSV file without changing the catalogue. */
-export const useDryRunImport = () => useMutation({ mutationFn: ({ file, mapping }: { file: File; mapping?: ImportMapping }) => uploadForDryRun(file, mapping) });
+export const useDryRunImport = () =>
+  useMutation({ mutationFn: ({ file, mapping }: { file: File; mapping?: ImportMapping }) => uploadForDryRun(file, mapping) });
 
 /** Imports every accepted row of a checked file, in one transaction. */
 export function useCommitImport() {

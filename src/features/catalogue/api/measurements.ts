@@ -1,14 +1,25 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { MeasurementDto, MeasurementHistoryDto, MeasurementInput, MeasurementReviewInput } from '@shared/schemas/measurement.ts';
+import type {
+  MeasurementDto,
+  MeasurementHistoryDto,
+  MeasurementInput,
+  MeasurementReviewInput,
+} from '@shared/schemas/measurement.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 
 export const measurementsQueryOptions = (objectId: string) =>
-  queryOptions({ queryKey: ['catalogue', 'object', objectId, 'measurements'], queryFn: async () => (await api.get<ApiData<MeasurementDto[]>>(`/catalogue/objects/${objectId}/measurements`)).data });
+  queryOptions({
+    queryKey: ['catalogue', 'object', objectId, 'measurements'],
+    queryFn: async () => (await api.get<ApiData<MeasurementDto[]>>(`/catalogue/objects/${objectId}/measurements`)).data,
+  });
 
 export const useMeasurements = (objectId: string) => useQuery(measurementsQueryOptions(objectId));
 
 export const historyQueryOptions = (objectId: string) =>
-  queryOptions({ queryKey: ['catalogue', 'object', objectId, 'history'], queryFn: async () => (await api.get<ApiData<MeasurementHistoryDto[]>>(`/catalogue/objects/${objectId}/history`)).data });
+  queryOptions({
+    queryKey: ['catalogue', 'object', objectId, 'history'],
+    queryFn: async () => (await api.get<ApiData<MeasurementHistoryDto[]>>(`/catalogue/objects/${objectId}/history`)).data,
+  });
 
 export const useMeasurementHistory = (objectId: string) => useQuery(historyQueryOptions(objectId));
 
@@ -25,7 +36,8 @@ function useRefresh(objectId: string) {
 export function useAddMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
-    mutationFn: async (input: MeasurementInput) => (await api.post<ApiData<MeasurementDto>>(`/catalogue/objects/${objectId}/measurements`, input)).data,
+    mutationFn: async (input: MeasurementInput) =>
+      (await api.post<ApiData<MeasurementDto>>(`/catalogue/objects/${objectId}/measurements`, input)).data,
     onSuccess: refresh,
   });
 }
@@ -33,7 +45,8 @@ export function useAddMeasurement(objectId: string) {
 export function useUpdateMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
-    mutationFn: async ({ id, ...input }: MeasurementInput & { id: string; reason?: string }) => (await api.patch<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}`, input)).data,
+    mutationFn: async ({ id, ...input }: MeasurementInput & { id: string; reason?: string }) =>
+      (await api.patch<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}`, input)).data,
     onSuccess: refresh,
   });
 }
@@ -51,7 +64,8 @@ export function useSetPreferred(objectId: string) {
 export function useReviewMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
-    mutationFn: async ({ id, ...input }: MeasurementReviewInput & { id: string }) => (await api.post<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}/review`, input)).data,
+    mutationFn: async ({ id, ...input }: MeasurementReviewInput & { id: string }) =>
+      (await api.post<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}/review`, input)).data,
     onSettled: refresh,
   });
 }
@@ -59,7 +73,8 @@ export function useReviewMeasurement(objectId: string) {
 export function useRetireMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
-    mutationFn: async ({ id, reason }: { id: string; reason: string }) => (await api.delete<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}?reason=${encodeURIComponent(reason)}`)).data,
+    mutationFn: async ({ id, reason }: { id: string; reason: string }) =>
+      (await api.delete<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}?reason=${encodeURIComponent(reason)}`)).data,
     onSettled: refresh,
   });
 }

@@ -3,7 +3,8 @@ import type { SkyObjectDto, SkyObjectInput, SkyObjectListQuery, SkyObjectPageDto
 import { api, type ApiData } from '@/lib/api-client.ts';
 
 /** The table's query as the URL and the API know it (all optional but sort, dir, page, pageSize). */
-export type CatalogueQuery = Partial<Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing'>> & Pick<SkyObjectListQuery, 'sort' | 'dir' | 'page' | 'pageSize'>;
+export type CatalogueQuery = Partial<Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing'>> &
+  Pick<SkyObjectListQuery, 'sort' | 'dir' | 'page' | 'pageSize'>;
 
 const toSearch = (query: CatalogueQuery) => {
   const params = new URLSearchParams();
@@ -22,7 +23,10 @@ export const skyObjectsQueryOptions = (query: CatalogueQuery) =>
 export const useSkyObjects = (query: CatalogueQuery) => useQuery(skyObjectsQueryOptions(query));
 
 export const skyObjectQueryOptions = (id: string) =>
-  queryOptions({ queryKey: ['catalogue', 'object', id], queryFn: async () => (await api.get<ApiData<SkyObjectDto>>(`/catalogue/objects/${id}`)).data });
+  queryOptions({
+    queryKey: ['catalogue', 'object', id],
+    queryFn: async () => (await api.get<ApiData<SkyObjectDto>>(`/catalogue/objects/${id}`)).data,
+  });
 
 export const useSkyObject = (id: string) => useQuery(skyObjectQueryOptions(id));
 

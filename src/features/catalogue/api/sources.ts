@@ -3,7 +3,10 @@ import type { SourceDto, SourceInput } from '@shared/schemas/source.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 
 export const sourcesQueryOptions = () =>
-  queryOptions({ queryKey: ['catalogue', 'sources'], queryFn: async () => (await api.get<ApiData<SourceDto[]>>('/catalogue/sources')).data });
+  queryOptions({
+    queryKey: ['catalogue', 'sources'],
+    queryFn: async () => (await api.get<ApiData<SourceDto[]>>('/catalogue/sources')).data,
+  });
 
 /** Every source (up to 500, by citation): the list page and the measurement form's choices. */
 export const useSources = () => useQuery(sourcesQueryOptions());
@@ -19,7 +22,8 @@ export function useCreateSource() {
 export function useUpdateSource() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ id, ...input }: SourceInput & { id: string }) => (await api.patch<ApiData<SourceDto>>(`/catalogue/sources/${id}`, input)).data,
+    mutationFn: async ({ id, ...input }: SourceInput & { id: string }) =>
+      (await api.patch<ApiData<SourceDto>>(`/catalogue/sources/${id}`, input)).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: ['catalogue'] }),
   });
 }

@@ -17,14 +17,32 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
     accessorFn: (r) => r.name,
     cell: ({ row }) => (
       <div>
-        <Link to={paths.catalogueObject.href(row.original.id)} className="font-medium text-accent hover:underline">{row.original.name}</Link>
-        {row.original.designations.length > 0 && <span className="block truncate text-xs text-muted">{row.original.designations.slice(0, 3).join(' · ')}</span>}
+        <Link to={paths.catalogueObject.href(row.original.id)} className="font-medium text-accent hover:underline">
+          {row.original.name}
+        </Link>
+        {row.original.designations.length > 0 && (
+          <span className="block truncate text-xs text-muted">{row.original.designations.slice(0, 3).join(' · ')}</span>
+        )}
       </div>
     ),
   },
   { id: 'kind', header: 'Kind', accessorFn: (r) => r.kind, cell: ({ row }) => KIND_LABELS[row.original.kind] },
-  { id: 'ra', header: 'Position (J2000)', accessorFn: (r) => r.raDeg, cell: ({ row }) => <span className="whitespace-pre font-mono text-xs tabular-nums">{formatPosition(row.original.raDeg, row.original.decDeg)}</span> },
-  { id: 'constellation', header: 'Constellation', accessorFn: (r) => r.constellation, cell: ({ row }) => constellationName(row.original.constellation) },
+  {
+    id: 'ra',
+    header: 'Position (J2000)',
+    accessorFn: (r) => r.raDeg,
+    cell: ({ row }) => (
+      <span className="whitespace-pre font-mono text-xs tabular-nums">
+        {formatPosition(row.original.raDeg, row.original.decDeg)}
+      </span>
+    ),
+  },
+  {
+    id: 'constellation',
+    header: 'Constellation',
+    accessorFn: (r) => r.constellation,
+    cell: ({ row }) => constellationName(row.original.constellation),
+  },
   {
     id: 'measurements',
     header: 'Measurements',
@@ -79,9 +97,18 @@ export function CatalogueTable({ rows, total, page, pageSize, sort, dir, loading
                 {group.headers.map((header) => {
                   const sorted = header.column.getIsSorted();
                   return (
-                    <th key={header.id} scope="col" className="px-4 py-2.5 font-semibold" aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}>
+                    <th
+                      key={header.id}
+                      scope="col"
+                      className="px-4 py-2.5 font-semibold"
+                      aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
+                    >
                       {header.column.getCanSort() ? (
-                        <button type="button" onClick={header.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase hover:text-ink">
+                        <button
+                          type="button"
+                          onClick={header.column.getToggleSortingHandler()}
+                          className="inline-flex items-center gap-1 uppercase hover:text-ink"
+                        >
                           {flexRender(header.column.columnDef.header, header.getContext())}
                           <span aria-hidden="true">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
                         </button>
@@ -98,13 +125,17 @@ export function CatalogueTable({ rows, total, page, pageSize, sort, dir, loading
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="h-10 border-b border-rule last:border-0">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-4 py-1.5 align-middle">{flexRender(cell.column.columnDef.cell, cell.getContext())}</td>
+                  <td key={cell.id} className="px-4 py-1.5 align-middle">
+                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
+                  </td>
                 ))}
               </tr>
             ))}
             {rows.length === 0 && (
               <tr>
-                <td colSpan={columns.length} className="px-4 py-8 text-center text-muted">No objects match these filters.</td>
+                <td colSpan={columns.length} className="px-4 py-8 text-center text-muted">
+                  No objects match these filters.
+                </td>
               </tr>
             )}
           </tbody>
@@ -115,9 +146,15 @@ export function CatalogueTable({ rows, total, page, pageSize, sort, dir, loading
           {first}–{Math.min(total, page * pageSize)} of {total.toLocaleString()} objects
         </span>
         <div className="flex items-center gap-2">
-          <Button variant="secondary" onClick={() => onPage(page - 1)} disabled={page <= 1}>Previous</Button>
-          <span className="tabular-nums">Page {page} of {pageCount}</span>
-          <Button variant="secondary" onClick={() => onPage(page + 1)} disabled={page >= pageCount}>Next</Button>
+          <Button variant="secondary" onClick={() => onPage(page - 1)} disabled={page <= 1}>
+            Previous
+          </Button>
+          <span className="tabular-nums">
+            Page {page} of {pageCount}
+          </span>
+          <Button variant="secondary" onClick={() => onPage(page + 1)} disabled={page >= pageCount}>
+            Next
+          </Button>
         </div>
       </nav>
     </div>

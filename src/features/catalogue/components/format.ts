@@ -20,13 +20,19 @@ const unitLabel = (quantity: string, unit: string) => {
 /**
  * A measurement in the unit it was entered in, with its uncertainty: "2.5 +0.3 −0.1 kpc", "0.158 ± 0.002".
  */
-export function formatMeasurement(m: Pick<MeasurementDto, 'quantity' | 'value' | 'enteredValue' | 'enteredUnit' | 'uncertainty' | 'uncertaintyMinus' | 'uncertaintyPlus'>): string {
+export function formatMeasurement(
+  m: Pick<
+    MeasurementDto,
+    'quantity' | 'value' | 'enteredValue' | 'enteredUnit' | 'uncertainty' | 'uncertaintyMinus' | 'uncertaintyPlus'
+  >,
+): string {
   const q = findQuantity(m.quantity);
   const factor = q ? (findUnit(q, m.enteredUnit)?.toCanonical ?? 1) : 1;
   const unit = unitLabel(m.quantity, m.enteredUnit);
   let text = formatNumber(m.enteredValue);
   if (m.uncertainty !== null) text += ` ± ${formatNumber(m.uncertainty / factor)}`;
-  else if (m.uncertaintyMinus !== null && m.uncertaintyPlus !== null) text += ` +${formatNumber(m.uncertaintyPlus / factor)} −${formatNumber(m.uncertaintyMinus / factor)}`;
+  else if (m.uncertaintyMinus !== null && m.uncertaintyPlus !== null)
+    text += ` +${formatNumber(m.uncertaintyPlus / factor)} −${formatNumber(m.uncertaintyMinus / factor)}`;
   return unit ? `${text} ${unit}` : text;
 }
 
@@ -43,7 +49,8 @@ export function formatPosition(raDeg: number | null, decDeg: number | null): str
 }
 
 /** "Orion (Ori)". */
-export const constellationName = (abbreviation: string | null) => (abbreviation ? `${CONSTELLATION_NAMES[abbreviation] ?? abbreviation} (${abbreviation})` : '—');
+export const constellationName = (abbreviation: string | null) =>
+  abbreviation ? `${CONSTELLATION_NAMES[abbreviation] ?? abbreviation} (${abbreviation})` : '—';
 
 /** A link for a source: DOI first, then the ADS record for a bibcode, then its URL. */
 export function sourceHref(source: { doi: string | null; bibcode: string | null; url: string | null }): string | null {

@@ -16,11 +16,30 @@ const ACTIONS: Record<string, [string, string]> = {
 };
 
 const FIELD_LABELS: Record<string, string> = {
-  value: 'value', enteredValue: 'value as entered', enteredUnit: 'unit', uncertainty: '±', uncertaintyMinus: '−', uncertaintyPlus: '+',
-  sourceId: 'source', band: 'band', preferred: 'preferred', status: 'status', note: 'note', retired: 'retired',
+  value: 'value',
+  enteredValue: 'value as entered',
+  enteredUnit: 'unit',
+  uncertainty: '±',
+  uncertaintyMinus: '−',
+  uncertaintyPlus: '+',
+  sourceId: 'source',
+  band: 'band',
+  preferred: 'preferred',
+  status: 'status',
+  note: 'note',
+  retired: 'retired',
 };
 
-const show = (v: unknown) => (v === null || v === undefined || v === '' ? '—' : typeof v === 'number' ? formatNumber(v) : typeof v === 'boolean' ? (v ? 'yes' : 'no') : String(v));
+const show = (v: unknown) =>
+  v === null || v === undefined || v === ''
+    ? '—'
+    : typeof v === 'number'
+      ? formatNumber(v)
+      : typeof v === 'boolean'
+        ? v
+          ? 'yes'
+          : 'no'
+        : String(v);
 
 /** Every change to the object's measurements, newest first: who, when, what, old and new. */
 export function HistoryList({ entries, measurements }: { entries: MeasurementHistoryDto[]; measurements: MeasurementDto[] }) {
@@ -30,20 +49,28 @@ export function HistoryList({ entries, measurements }: { entries: MeasurementHis
     <ol className="divide-y divide-rule rounded-lg border border-rule bg-panel" aria-label="Measurement history">
       {entries.map((e) => {
         const m = byId.get(e.measurementId);
-        const what = m ? `${(findQuantity(m.quantity)?.label ?? m.quantity).toLowerCase()}${m.band ? ` (${m.band})` : ''} ${formatMeasurement(m)}` : (findQuantity(e.quantity ?? '')?.label.toLowerCase() ?? 'a measurement');
+        const what = m
+          ? `${(findQuantity(m.quantity)?.label ?? m.quantity).toLowerCase()}${m.band ? ` (${m.band})` : ''} ${formatMeasurement(m)}`
+          : (findQuantity(e.quantity ?? '')?.label.toLowerCase() ?? 'a measurement');
         const [before, after] = ACTIONS[e.action] ?? [e.action, ''];
-        const changes = e.action === 'updated' ? Object.keys(e.newValues ?? {}).filter((k) => k !== 'value' || !('enteredValue' in (e.newValues ?? {}))) : [];
+        const changes =
+          e.action === 'updated'
+            ? Object.keys(e.newValues ?? {}).filter((k) => k !== 'value' || !('enteredValue' in (e.newValues ?? {})))
+            : [];
         return (
           <li key={e.id} className="px-4 py-2.5 text-sm">
             <p>
-              <span className="font-medium">{e.changedBy ?? 'Someone no longer listed'}</span> {before} <span className="font-mono tabular-nums">{what}</span>{after && ` ${after}`}
+              <span className="font-medium">{e.changedBy ?? 'Someone no longer listed'}</span> {before}{' '}
+              <span className="font-mono tabular-nums">{what}</span>
+              {after && ` ${after}`}
               <span className="ml-2 text-xs text-muted">{formatDateTime(e.createdAt)}</span>
             </p>
             {changes.length > 0 && (
               <ul className="mt-1 text-xs text-muted">
                 {changes.map((k) => (
                   <li key={k} className="font-mono tabular-nums">
-                    {FIELD_LABELS[k] ?? k}: <del>{show(e.oldValues?.[k])}</del> → <ins className="text-ink no-underline">{show(e.newValues?.[k])}</ins>
+                    {FIELD_LABELS[k] ?? k}: <del>{show(e.oldValues?.[k])}</del> →{' '}
+                    <ins className="text-ink no-underline">{show(e.newValues?.[k])}</ins>
                   </li>
                 ))}
               </ul>

@@ -19,34 +19,50 @@ export function ImportPanel() {
   const check = (withMapping?: ImportMapping) => {
     if (!file) return;
     commit.reset();
-    dryRun.mutate({ file, mapping: withMapping }, {
-      onSuccess: (result) => {
-        setChecked(result);
-        setMapping(result.report.mapping);
+    dryRun.mutate(
+      { file, mapping: withMapping },
+      {
+        onSuccess: (result) => {
+          setChecked(result);
+          setMapping(result.report.mapping);
+        },
+        onError: () => setChecked(null),
       },
-      onError: () => setChecked(null),
-    });
+    );
   };
 
   return (
     <div className="space-y-5">
       <section className="rounded-lg border border-rule bg-panel p-5">
-        <label htmlFor="import-file" className="mb-1 block text-sm font-medium">CSV file (UTF-8, up to 10 MB)</label>
+        <label htmlFor="import-file" className="mb-1 block text-sm font-medium">
+          CSV file (UTF-8, up to 10 MB)
+        </label>
         <input
           id="import-file"
           type="file"
           accept=".csv,text/csv"
-          onChange={(e) => { setFile(e.target.files?.[0] ?? null); setChecked(null); dryRun.reset(); commit.reset(); }}
+          onChange={(e) => {
+            setFile(e.target.files?.[0] ?? null);
+            setChecked(null);
+            dryRun.reset();
+            commit.reset();
+          }}
           className="block text-sm file:mr-3 file:rounded-md file:border file:border-rule file:bg-wash file:px-3 file:py-1.5 file:text-sm"
         />
         <p className="mt-2 text-xs text-muted">
-          Columns: object (name or designation), quantity, value, unit, band, uncertainty (or uncertainty_minus and uncertainty_plus), source (citation, bibcode or DOI), note.
-          Sources must exist under Sources first.
+          Columns: object (name or designation), quantity, value, unit, band, uncertainty (or uncertainty_minus and
+          uncertainty_plus), source (citation, bibcode or DOI), note. Sources must exist under Sources first.
         </p>
-        <Button className="mt-3" onClick={() => check()} disabled={!file} busy={dryRun.isPending}>Check file</Button>
+        <Button className="mt-3" onClick={() => check()} disabled={!file} busy={dryRun.isPending}>
+          Check file
+        </Button>
       </section>
 
-      {dryRun.error && <Notice tone="error" title="The file was not checked">{dryRun.error.message}</Notice>}
+      {dryRun.error && (
+        <Notice tone="error" title="The file was not checked">
+          {dryRun.error.message}
+        </Notice>
+      )}
 
       {checked && checked.status === 'checked' && !commit.isSuccess && (
         <section className="space-y-4" aria-label="Dry run">
@@ -63,27 +79,44 @@ export function ImportPanel() {
                     className="w-full rounded-md border border-rule bg-panel px-2 py-1.5"
                   >
                     <option value="">(not in the file)</option>
-                    {checked.report.headers.map((h) => <option key={h} value={h}>{h}</option>)}
+                    {checked.report.headers.map((h) => (
+                      <option key={h} value={h}>
+                        {h}
+                      </option>
+                    ))}
                   </select>
                 </label>
               ))}
             </div>
-            <Button variant="secondary" className="mt-3" onClick={() => check(mapping)} busy={dryRun.isPending}>Check again with these columns</Button>
+            <Button variant="secondary" className="mt-3" onClick={() => check(mapping)} busy={dryRun.isPending}>
+              Check again with these columns
+            </Button>
           </fieldset>
           <ImportReport report={checked.report} />
-          {commit.error && <Notice tone="error" title="Nothing was imported">{commit.error.message}</Notice>}
+          {commit.error && (
+            <Notice tone="error" title="Nothing was imported">
+              {commit.error.message}
+            </Notice>
+          )}
           <div className="flex items-center gap-3">
-            <Button onClick={() => commit.mutate(checked.id)} disabled={checked.report.acceptedCount === 0} busy={commit.isPending}>
+            <Button
+              onClick={() => commit.mutate(checked.id)}
+              disabled={checked.report.acceptedCount === 0}
+              busy={commit.isPending}
+            >
               Import {checked.report.acceptedCount.toLocaleString()} rows
             </Button>
-            {checked.report.rejectedCount > 0 && <span className="text-sm text-muted">Rejected rows are left out; fix them in the file and import them later.</span>}
+            {checked.report.rejectedCount > 0 && (
+              <span className="text-sm text-muted">Rejected rows are left out; fix them in the file and import them later.</span>
+            )}
           </div>
         </section>
       )}
 
       {commit.isSuccess && (
         <Notice tone="success" title="Imported">
-          {commit.data.insertedCount?.toLocaleString()} measurements were added, each with its history. None is preferred yet: choose preferred values on each object’s page.
+          {commit.data.insertedCount?.toLocaleString()} measurements were added, each with its history. None is preferred yet:
+          choose preferred values on each object’s page.
         </Notice>
       )}
     </div>

@@ -34,9 +34,15 @@ export function ImportReport({ report }: { report: Report }) {
         ))}
       </dl>
       <p className="text-xs text-muted">
-        Read as UTF-8{report.hadByteOrderMark ? ' (with a byte-order mark)' : ''}, columns separated by {report.delimiter === ';' ? 'semicolons' : report.delimiter === ',' ? 'commas' : 'tabs'}, checked in {report.durationMs.toLocaleString()} ms.
+        Read as UTF-8{report.hadByteOrderMark ? ' (with a byte-order mark)' : ''}, columns separated by{' '}
+        {report.delimiter === ';' ? 'semicolons' : report.delimiter === ',' ? 'commas' : 'tabs'}, checked in{' '}
+        {report.durationMs.toLocaleString()} ms.
       </p>
-      {report.warnings.map((w) => <p key={w} className="text-sm text-changed">{w}</p>)}
+      {report.warnings.map((w) => (
+        <p key={w} className="text-sm text-changed">
+          {w}
+        </p>
+      ))}
       {report.rejectedCount > 0 && (
         <DataTable caption="Rejected rows" columns={[{ label: 'Row' }, { label: 'Reason' }, { label: 'What to fix' }]}>
           {report.rejections.map((r) => (

@@ -11,7 +11,17 @@ import { applyServerErrors } from '@/lib/form-errors.ts';
 import { useAddMeasurement } from '../api/measurements.ts';
 import { useSources } from '../api/sources.ts';
 
-const FIELDS = ['quantity', 'value', 'unit', 'band', 'uncertainty', 'uncertaintyMinus', 'uncertaintyPlus', 'sourceId', 'note'] as const;
+const FIELDS = [
+  'quantity',
+  'value',
+  'unit',
+  'band',
+  'uncertainty',
+  'uncertaintyMinus',
+  'uncertaintyPlus',
+  'sourceId',
+  'note',
+] as const;
 
 /**
  * Adds a measurement (reviewers, admins) or proposes one for review (writers, editors). Focus starts in its first field, since the button that opened it is gone.
@@ -20,11 +30,26 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
   const add = useAddMeasurement(objectId);
   const sources = useSources();
   const [formError, setFormError] = useState<string>();
-  const { register, handleSubmit, setError, watch, getValues, setValue, formState } = useForm<MeasurementFormValues, unknown, MeasurementValues>({
+  const { register, handleSubmit, setError, watch, getValues, setValue, formState } = useForm<
+    MeasurementFormValues,
+    unknown,
+    MeasurementValues
+  >({
     resolver: zodResolver(MeasurementInputSchema) as unknown as Resolver<MeasurementFormValues, unknown, MeasurementValues>,
     // Hidden fields (another uncertainty kind, a band the quantity has not) drop out of validation.
     shouldUnregister: true,
-    defaultValues: { quantity: 'redshift', value: '', unit: '', band: '', uncertaintyKind: 'symmetric', uncertainty: '', uncertaintyMinus: '', uncertaintyPlus: '', sourceId: '', note: '' },
+    defaultValues: {
+      quantity: 'redshift',
+      value: '',
+      unit: '',
+      band: '',
+      uncertaintyKind: 'symmetric',
+      uncertainty: '',
+      uncertaintyMinus: '',
+      uncertaintyPlus: '',
+      sourceId: '',
+      note: '',
+    },
   });
   const quantity = findQuantity(watch('quantity')) ?? QUANTITIES.redshift;
   const kind = watch('uncertaintyKind');
@@ -34,7 +59,12 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
     setFormError(undefined);
     const v = getValues();
     const input = {
-      quantity: v.quantity, value: v.value, unit: v.unit, band: quantity.needsBand ? v.band : '', sourceId: v.sourceId || null, note: v.note,
+      quantity: v.quantity,
+      value: v.value,
+      unit: v.unit,
+      band: quantity.needsBand ? v.band : '',
+      sourceId: v.sourceId || null,
+      note: v.note,
       uncertainty: kind === 'symmetric' ? v.uncertainty : '',
       uncertaintyMinus: kind === 'asymmetric' ? v.uncertaintyMinus : '',
       uncertaintyPlus: kind === 'asymmetric' ? v.uncertaintyPlus : '',
@@ -46,24 +76,70 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={proposal ? 'Propose a measurement' : 'Add a measurement'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-3">
-      {formError && <div className="sm:col-span-3"><Notice tone="error">{formError}</Notice></div>}
-      {proposal && <div className="sm:col-span-3"><Notice>Your measurement is sent to a reviewer, who accepts or declines it. It is not used until accepted.</Notice></div>}
-      <SelectField label="Quantity" autoFocus error={errors.quantity?.message} {...register('quantity', { onChange: (e) => setValue('unit', findQuantity(e.target.value)?.units[0].id ?? '') })}>
-        {QUANTITY_IDS.map((id) => <option key={id} value={id}>{QUANTITIES[id].label}</option>)}
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={proposal ? 'Propose a measurement' : 'Add a measurement'}
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-3"
+    >
+      {formError && (
+        <div className="sm:col-span-3">
+          <Notice tone="error">{formError}</Notice>
+        </div>
+      )}
+      {proposal && (
+        <div className="sm:col-span-3">
+          <Notice>Your measurement is sent to a reviewer, who accepts or declines it. It is not used until accepted.</Notice>
+        </div>
+      )}
+      <SelectField
+        label="Quantity"
+        autoFocus
+        error={errors.quantity?.message}
+        {...register('quantity', { onChange: (e) => setValue('unit', findQuantity(e.target.value)?.units[0].id ?? '') })}
+      >
+        {QUANTITY_IDS.map((id) => (
+          <option key={id} value={id}>
+            {QUANTITIES[id].label}
+          </option>
+        ))}
       </SelectField>
-      <TextField label="Value" inputMode="decimal" autoComplete="off" hint={quantity.hint} error={errors.value?.message} {...register('value')} />
+      <TextField
+        label="Value"
+        inputMode="decimal"
+        autoComplete="off"
+        hint={quantity.hint}
+        error={errors.value?.message}
+        {...register('value')}
+      />
       {quantity.units.length > 1 || quantity.units[0].id !== '' ? (
         <SelectField label="Unit" error={errors.unit?.message} {...register('unit')}>
-          {quantity.units.map((u) => <option key={u.id} value={u.id}>{u.label}</option>)}
+          {quantity.units.map((u) => (
+            <option key={u.id} value={u.id}>
+              {u.label}
+            </option>
+          ))}
         </SelectField>
       ) : (
         <p className="self-end pb-2 text-sm text-muted">No unit (dimensionless)</p>
       )}
       {quantity.needsBand && (
         <>
-          <TextField label="Band" list="known-bands" autoComplete="off" hint="e.g. V, B, g_SDSS" error={errors.band?.message} {...register('band')} />
-          <datalist id="known-bands">{KNOWN_BANDS.map((b) => <option key={b.id} value={b.id}>{b.label}</option>)}</datalist>
+          <TextField
+            label="Band"
+            list="known-bands"
+            autoComplete="off"
+            hint="e.g. V, B, g_SDSS"
+            error={errors.band?.message}
+            {...register('band')}
+          />
+          <datalist id="known-bands">
+            {KNOWN_BANDS.map((b) => (
+              <option key={b.id} value={b.id}>
+                {b.label}
+              </option>
+            ))}
+          </datalist>
         </>
       )}
       <fieldset className="sm:col-span-3">
@@ -77,21 +153,50 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
           ))}
         </div>
       </fieldset>
-      {kind === 'symmetric' && <TextField label="± uncertainty" inputMode="decimal" autoComplete="off" hint="In the same unit as the value" error={errors.uncertainty?.message} {...register('uncertainty')} />}
+      {kind === 'symmetric' && (
+        <TextField
+          label="± uncertainty"
+          inputMode="decimal"
+          autoComplete="off"
+          hint="In the same unit as the value"
+          error={errors.uncertainty?.message}
+          {...register('uncertainty')}
+        />
+      )}
       {kind === 'asymmetric' && (
         <>
-          <TextField label="− uncertainty" inputMode="decimal" autoComplete="off" error={errors.uncertaintyMinus?.message} {...register('uncertaintyMinus')} />
-          <TextField label="+ uncertainty" inputMode="decimal" autoComplete="off" error={errors.uncertaintyPlus?.message} {...register('uncertaintyPlus')} />
+          <TextField
+            label="− uncertainty"
+            inputMode="decimal"
+            autoComplete="off"
+            error={errors.uncertaintyMinus?.message}
+            {...register('uncertaintyMinus')}
+          />
+          <TextField
+            label="+ uncertainty"
+            inputMode="decimal"
+            autoComplete="off"
+            error={errors.uncertaintyPlus?.message}
+            {...register('uncertaintyPlus')}
+          />
         </>
       )}
       <SelectField label="Source" className="sm:col-span-3" error={errors.sourceId?.message} {...register('sourceId')}>
         <option value="">No source yet (cannot be preferred)</option>
-        {sources.data?.map((s) => <option key={s.id} value={s.id}>{s.citation}</option>)}
+        {sources.data?.map((s) => (
+          <option key={s.id} value={s.id}>
+            {s.citation}
+          </option>
+        ))}
       </SelectField>
       <TextField label="Note" autoComplete="off" className="sm:col-span-3" error={errors.note?.message} {...register('note')} />
       <div className="flex gap-2 sm:col-span-3">
-        <Button type="submit" busy={add.isPending}>{proposal ? 'Propose measurement' : 'Add measurement'}</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={add.isPending}>
+          {proposal ? 'Propose measurement' : 'Add measurement'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

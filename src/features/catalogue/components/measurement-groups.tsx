@@ -7,17 +7,47 @@ import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '../
 import { formatDateTime, formatMeasurement, quantityTitle, sourceHref } from './format.ts';
 
 function Status({ m }: { m: MeasurementDto }) {
-  if (m.retired) return <span className="inline-flex items-center gap-1 text-neutral"><Icon name="x" className="size-3.5" />Retired</span>;
-  if (m.preferred) return <span className="inline-flex items-center gap-1 font-semibold text-ok"><Icon name="check" className="size-3.5" />Preferred</span>;
-  if (m.status === 'proposed') return <span className="inline-flex items-center gap-1 text-changed"><Icon name="alert" className="size-3.5" />Proposed</span>;
-  if (m.status === 'declined') return <span className="inline-flex items-center gap-1 text-broken"><Icon name="x" className="size-3.5" />Declined</span>;
+  if (m.retired)
+    return (
+      <span className="inline-flex items-center gap-1 text-neutral">
+        <Icon name="x" className="size-3.5" />
+        Retired
+      </span>
+    );
+  if (m.preferred)
+    return (
+      <span className="inline-flex items-center gap-1 font-semibold text-ok">
+        <Icon name="check" className="size-3.5" />
+        Preferred
+      </span>
+    );
+  if (m.status === 'proposed')
+    return (
+      <span className="inline-flex items-center gap-1 text-changed">
+        <Icon name="alert" className="size-3.5" />
+        Proposed
+      </span>
+    );
+  if (m.status === 'declined')
+    return (
+      <span className="inline-flex items-center gap-1 text-broken">
+        <Icon name="x" className="size-3.5" />
+        Declined
+      </span>
+    );
   return <span className="text-muted">Accepted</span>;
 }
 
 function Source({ m }: { m: MeasurementDto }) {
   if (!m.source) return <span className="text-changed">No source</span>;
   const href = sourceHref(m.source);
-  return href ? <a href={href} target="_blank" rel="noreferrer" className="text-accent hover:underline">{m.source.citation}</a> : <span>{m.source.citation}</span>;
+  return href ? (
+    <a href={href} target="_blank" rel="noreferrer" className="text-accent hover:underline">
+      {m.source.citation}
+    </a>
+  ) : (
+    <span>{m.source.citation}</span>
+  );
 }
 
 /** An object's measurements, one block per quantity and band, the preferred value first. */
@@ -46,7 +76,11 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
 
   return (
     <div className="space-y-4">
-      {error && <Notice tone="error" title="That change was not made">{error.message}</Notice>}
+      {error && (
+        <Notice tone="error" title="That change was not made">
+          {error.message}
+        </Notice>
+      )}
       {groups.size === 0 && <p className="text-sm text-muted">No measurements yet.</p>}
       {[...groups.entries()].map(([title, items]) => {
         const current = items.find((m) => m.preferred)?.id ?? null;
@@ -55,7 +89,10 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
             <h3 className="border-b border-rule bg-wash px-4 py-2 text-sm font-semibold">{title}</h3>
             <ul>
               {items.map((m) => (
-                <li key={m.id} className="grid grid-cols-[minmax(9rem,auto)_1fr_auto] items-center gap-4 border-b border-rule px-4 py-2 text-sm last:border-0">
+                <li
+                  key={m.id}
+                  className="grid grid-cols-[minmax(9rem,auto)_1fr_auto] items-center gap-4 border-b border-rule px-4 py-2 text-sm last:border-0"
+                >
                   <div>
                     <span className="block font-mono tabular-nums text-ink">{formatMeasurement(m)}</span>
                     <Status m={m} />
@@ -72,17 +109,31 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
                   </div>
                   <div className="flex flex-wrap justify-end gap-1">
                     {m.can.prefer && !m.preferred && (
-                      <Button variant="secondary" disabled={!m.source} title={m.source ? undefined : 'Add a source first'} busy={prefer.isPending && prefer.variables?.id === m.id} onClick={() => prefer.mutate({ id: m.id, preferred: true, replaces: current })}>
+                      <Button
+                        variant="secondary"
+                        disabled={!m.source}
+                        title={m.source ? undefined : 'Add a source first'}
+                        busy={prefer.isPending && prefer.variables?.id === m.id}
+                        onClick={() => prefer.mutate({ id: m.id, preferred: true, replaces: current })}
+                      >
                         Make preferred
                       </Button>
                     )}
                     {m.can.review && (
                       <>
-                        <Button variant="secondary" onClick={() => review.mutate({ id: m.id, decision: 'accept' })}>Accept</Button>
-                        <Button variant="danger" onClick={() => askAndDecline(m)}>Decline</Button>
+                        <Button variant="secondary" onClick={() => review.mutate({ id: m.id, decision: 'accept' })}>
+                          Accept
+                        </Button>
+                        <Button variant="danger" onClick={() => askAndDecline(m)}>
+                          Decline
+                        </Button>
                       </>
                     )}
-                    {m.can.retire && <Button variant="quiet" onClick={() => askAndRetire(m)}>Retire</Button>}
+                    {m.can.retire && (
+                      <Button variant="quiet" onClick={() => askAndRetire(m)}>
+                        Retire
+                      </Button>
+                    )}
                   </div>
                 </li>
               ))}
@@ -92,7 +143,9 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
       })}
       {(hidden > 0 || showRetired) && (
         <Button variant="quiet" onClick={() => setShowRetired((v) => !v)}>
-          {showRetired ? 'Hide retired and declined measurements' : `Show ${hidden} retired or declined measurement${hidden === 1 ? '' : 's'}`}
+          {showRetired
+            ? 'Hide retired and declined measurements'
+            : `Show ${hidden} retired or declined measurement${hidden === 1 ? '' : 's'}`}
         </Button>
       )}
     </div>

@@ -2,7 +2,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { KIND_LABELS, MOVING_KINDS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
-import { SkyObjectInputSchema, type SkyObjectDto, type SkyObjectFormValues, type SkyObjectValues } from '@shared/schemas/sky-object.ts';
+import {
+  SkyObjectInputSchema,
+  type SkyObjectDto,
+  type SkyObjectFormValues,
+  type SkyObjectValues,
+} from '@shared/schemas/sky-object.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
@@ -23,12 +28,24 @@ const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
  * constellation is computed by the server from it. Focus starts in its first field, since the
  * button that opened it is gone.
  */
-export function ObjectForm({ object, onDone, onCancel }: { object?: SkyObjectDto; onDone: (saved: SkyObjectDto) => void; onCancel: () => void }) {
+export function ObjectForm({
+  object,
+  onDone,
+  onCancel,
+}: {
+  object?: SkyObjectDto;
+  onDone: (saved: SkyObjectDto) => void;
+  onCancel: () => void;
+}) {
   const create = useCreateSkyObject();
   const update = useUpdateSkyObject(object?.id ?? '');
   const mutation = object ? update : create;
   const [formError, setFormError] = useState<string>();
-  const { register, handleSubmit, setError, watch, getValues, formState } = useForm<SkyObjectFormValues, unknown, SkyObjectValues>({
+  const { register, handleSubmit, setError, watch, getValues, formState } = useForm<
+    SkyObjectFormValues,
+    unknown,
+    SkyObjectValues
+  >({
     resolver: zodResolver(SkyObjectInputSchema) as unknown as Resolver<SkyObjectFormValues, unknown, SkyObjectValues>,
     defaultValues: toForm(object),
   });
@@ -40,32 +57,80 @@ export function ObjectForm({ object, onDone, onCancel }: { object?: SkyObjectDto
     const raw = getValues();
     mutation.mutate(moving ? { ...raw, ra: '', dec: '' } : raw, {
       onSuccess: onDone,
-      onError: (error) => setFormError(applyServerErrors(error, setError, ['name', 'designations', 'kind', 'ra', 'dec', 'notes'])),
+      onError: (error) =>
+        setFormError(applyServerErrors(error, setError, ['name', 'designations', 'kind', 'ra', 'dec', 'notes'])),
     });
   });
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={object ? 'Edit object' : 'Add an object'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2">
-      {formError && <div className="sm:col-span-2"><Notice tone="error">{formError}</Notice></div>}
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={object ? 'Edit object' : 'Add an object'}
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2"
+    >
+      {formError && (
+        <div className="sm:col-span-2">
+          <Notice tone="error">{formError}</Notice>
+        </div>
+      )}
       <TextField label="Name" autoComplete="off" autoFocus error={errors.name?.message} {...register('name')} />
       <SelectField label="Kind" error={errors.kind?.message} {...register('kind')}>
-        {SKY_OBJECT_KINDS.map((kind) => <option key={kind} value={kind}>{KIND_LABELS[kind]}</option>)}
+        {SKY_OBJECT_KINDS.map((kind) => (
+          <option key={kind} value={kind}>
+            {KIND_LABELS[kind]}
+          </option>
+        ))}
       </SelectField>
-      <TextField label="Other designations" hint="Separated by commas, e.g. M31, NGC 224" autoComplete="off" error={errors.designations?.message} className="sm:col-span-2" {...register('designations')} />
+      <TextField
+        label="Other designations"
+        hint="Separated by commas, e.g. M31, NGC 224"
+        autoComplete="off"
+        error={errors.designations?.message}
+        className="sm:col-span-2"
+        {...register('designations')}
+      />
       {moving ? (
-        <p className="text-sm text-muted sm:col-span-2">Planets, moons and the Sun move across the sky, so they have no fixed position here.</p>
+        <p className="text-sm text-muted sm:col-span-2">
+          Planets, moons and the Sun move across the sky, so they have no fixed position here.
+        </p>
       ) : (
         <>
-          <TextField label="Right ascension (J2000)" placeholder="05h 35m 17.3s or 83.822" hint="Hours, minutes, seconds — or degrees" autoComplete="off" error={errors.ra?.message} {...register('ra')} />
-          <TextField label="Declination (J2000)" placeholder="−05° 23′ 28″ or −5.391" hint="Degrees, arcminutes, arcseconds — or degrees" autoComplete="off" error={errors.dec?.message} {...register('dec')} />
+          <TextField
+            label="Right ascension (J2000)"
+            placeholder="05h 35m 17.3s or 83.822"
+            hint="Hours, minutes, seconds — or degrees"
+            autoComplete="off"
+            error={errors.ra?.message}
+            {...register('ra')}
+          />
+          <TextField
+            label="Declination (J2000)"
+            placeholder="−05° 23′ 28″ or −5.391"
+            hint="Degrees, arcminutes, arcseconds — or degrees"
+            autoComplete="off"
+            error={errors.dec?.message}
+            {...register('dec')}
+          />
         </>
       )}
       <div className="sm:col-span-2">
-        <label htmlFor="object-notes" className="mb-1 block text-sm font-medium text-ink">Notes</label>
-        <textarea id="object-notes" rows={2} className="block w-full rounded-md border border-rule bg-panel px-3 py-2 text-sm focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/30" {...register('notes')} />
+        <label htmlFor="object-notes" className="mb-1 block text-sm font-medium text-ink">
+          Notes
+        </label>
+        <textarea
+          id="object-notes"
+          rows={2}
+          className="block w-full rounded-md border border-rule bg-panel px-3 py-2 text-sm focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/30"
+          {...register('notes')}
+        />
       </div>
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" busy={mutation.isPending}>{object ? 'Save object' : 'Add object'}</Button>
-        <Button type="button" variant="secondary" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" busy={mutation.isPending}>
+          {object ? 'Save object' : 'Add object'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

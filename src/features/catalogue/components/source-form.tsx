@@ -32,23 +32,65 @@ export function SourceForm({ source, onDone }: { source?: SourceDto; onDone: () 
   const errors = formState.errors;
   const onSubmit = handleSubmit(() => {
     setFormError(undefined);
-    const options = { onSuccess: onDone, onError: (error: Error) => setFormError(applyServerErrors(error, setError, [...FIELDS])) };
+    const options = {
+      onSuccess: onDone,
+      onError: (error: Error) => setFormError(applyServerErrors(error, setError, [...FIELDS])),
+    };
     if (source) update.mutate({ id: source.id, ...getValues() }, options);
     else create.mutate(getValues(), options);
   });
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={source ? 'Edit source' : 'Add a source'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2">
-      {formError && <div className="sm:col-span-2"><Notice tone="error">{formError}</Notice></div>}
-      <TextField label="Citation" className="sm:col-span-2" placeholder="Willmer, C. N. A. (2018), ApJS 236, 47" autoComplete="off" error={errors.citation?.message} {...register('citation')} />
-      <TextField label="Bibcode" placeholder="2018ApJS..236...47W" autoComplete="off" error={errors.bibcode?.message} {...register('bibcode')} />
-      <TextField label="DOI" placeholder="10.3847/1538-4365/aabfdf" autoComplete="off" error={errors.doi?.message} {...register('doi')} />
-      <TextField label="URL" type="url" placeholder="https://…" autoComplete="off" error={errors.url?.message} {...register('url')} />
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={source ? 'Edit source' : 'Add a source'}
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2"
+    >
+      {formError && (
+        <div className="sm:col-span-2">
+          <Notice tone="error">{formError}</Notice>
+        </div>
+      )}
+      <TextField
+        label="Citation"
+        className="sm:col-span-2"
+        placeholder="Willmer, C. N. A. (2018), ApJS 236, 47"
+        autoComplete="off"
+        error={errors.citation?.message}
+        {...register('citation')}
+      />
+      <TextField
+        label="Bibcode"
+        placeholder="2018ApJS..236...47W"
+        autoComplete="off"
+        error={errors.bibcode?.message}
+        {...register('bibcode')}
+      />
+      <TextField
+        label="DOI"
+        placeholder="10.3847/1538-4365/aabfdf"
+        autoComplete="off"
+        error={errors.doi?.message}
+        {...register('doi')}
+      />
+      <TextField
+        label="URL"
+        type="url"
+        placeholder="https://…"
+        autoComplete="off"
+        error={errors.url?.message}
+        {...register('url')}
+      />
       <TextField label="Catalogue name" autoComplete="off" error={errors.catalogueName?.message} {...register('catalogueName')} />
       <TextField label="Retrieved on" type="date" error={errors.retrievedOn?.message} {...register('retrievedOn')} />
       <TextField label="Notes" autoComplete="off" error={errors.notes?.message} {...register('notes')} />
       <div className="flex gap-2 sm:col-span-2">
-        <Button type="submit" busy={create.isPending || update.isPending}>{source ? 'Save source' : 'Add source'}</Button>
-        <Button type="button" variant="secondary" onClick={onDone}>Cancel</Button>
+        <Button type="submit" busy={create.isPending || update.isPending}>
+          {source ? 'Save source' : 'Add source'}
+        </Button>
+        <Button type="button" variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

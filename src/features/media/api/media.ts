@@ -40,7 +40,8 @@ function useInvalidateMedia() {
 export function useUpdateMedia() {
   const invalidate = useInvalidateMedia();
   return useMutation({
-    mutationFn: async ({ id, ...input }: MediaUpdateInput & { id: string }) => (await api.patch<ApiData<MediaDto>>(`/media/${id}`, input)).data,
+    mutationFn: async ({ id, ...input }: MediaUpdateInput & { id: string }) =>
+      (await api.patch<ApiData<MediaDto>>(`/media/${id}`, input)).data,
     onSuccess: invalidate,
   });
 }
@@ -56,14 +57,19 @@ export function useDeleteMedia() {
 
 export function useRetryRenditions() {
   const invalidate = useInvalidateMedia();
-  return useMutation({ mutationFn: (id: string) => api.post<ApiData<{ status: string }>>(`/media/${id}/renditions`), onSuccess: invalidate });
+  return useMutation({
+    mutationFn: (id: string) => api.post<ApiData<{ status: string }>>(`/media/${id}/renditions`),
+    onSuccess: invalidate,
+  });
 }
 
 /** Catalogue objects matching typed text, for linking an image to what it shows. */
 export const useObjectSuggestions = (text: string) =>
   useQuery({
     queryKey: ['media', 'object-suggestions', text],
-    queryFn: async () => (await api.get<ApiData<Array<{ id: string; name: string }>>>(`/media/object-suggestions?q=${encodeURIComponent(text)}`)).data,
+    queryFn: async () =>
+      (await api.get<ApiData<Array<{ id: string; name: string }>>>(`/media/object-suggestions?q=${encodeURIComponent(text)}`))
+        .data,
     enabled: text.trim().length > 0,
     staleTime: 30_000,
   });

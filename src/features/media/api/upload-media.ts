@@ -26,9 +26,17 @@ export function uploadMedia(file: File, onProgress: (fraction: number) => void, 
         return;
       }
       const error = body?.error;
-      reject(new ApiRequestError(xhr.status, error?.code ?? 'http_error', error?.message ?? `The server answered ${xhr.status}.`, error?.fields));
+      reject(
+        new ApiRequestError(
+          xhr.status,
+          error?.code ?? 'http_error',
+          error?.message ?? `The server answered ${xhr.status}.`,
+          error?.fields,
+        ),
+      );
     };
-    xhr.onerror = () => reject(new ApiRequestError(0, 'network_error', 'The upload was interrupted. Check the connection and try again.'));
+    xhr.onerror = () =>
+      reject(new ApiRequestError(0, 'network_error', 'The upload was interrupted. Check the connection and try again.'));
     xhr.onabort = () => reject(new ApiRequestError(0, 'aborted', 'Upload cancelled.'));
     signal?.addEventListener('abort', () => xhr.abort());
     const form = new FormData();

@@ -7,7 +7,14 @@ const clamp = (v: number) => Math.min(1, Math.max(0, Math.round(v * 100) / 100))
  * Click the image (or use the arrow keys) to mark its subject; kiosk crops keep that point in view.
  * The dashed box shows the 16:9 area a kiosk screen keeps.
  */
-export function FocalPointPicker({ src, alt, width, height, value, onChange }: {
+export function FocalPointPicker({
+  src,
+  alt,
+  width,
+  height,
+  value,
+  onChange,
+}: {
   src: string;
   alt: string;
   width: number;
@@ -21,7 +28,12 @@ export function FocalPointPicker({ src, alt, width, height, value, onChange }: {
   };
   const onKey = (e: KeyboardEvent<HTMLDivElement>) => {
     const step = e.shiftKey ? 0.1 : 0.02;
-    const moves: Record<string, [number, number]> = { ArrowLeft: [-step, 0], ArrowRight: [step, 0], ArrowUp: [0, -step], ArrowDown: [0, step] };
+    const moves: Record<string, [number, number]> = {
+      ArrowLeft: [-step, 0],
+      ArrowRight: [step, 0],
+      ArrowUp: [0, -step],
+      ArrowDown: [0, step],
+    };
     const move = moves[e.key];
     if (!move) return;
     e.preventDefault();
@@ -35,7 +47,9 @@ export function FocalPointPicker({ src, alt, width, height, value, onChange }: {
   const top = Math.min(1 - h, Math.max(0, value.y - h / 2));
   return (
     <div>
-      <p id="focal-help" className="mb-1 text-sm font-medium text-ink">Focal point</p>
+      <p id="focal-help" className="mb-1 text-sm font-medium text-ink">
+        Focal point
+      </p>
       <div
         role="slider"
         tabIndex={0}
@@ -48,7 +62,10 @@ export function FocalPointPicker({ src, alt, width, height, value, onChange }: {
         style={{ aspectRatio: `${width} / ${height}` }}
       >
         <img src={src} alt={alt} className="absolute inset-0 h-full w-full" draggable={false} />
-        <div className="pointer-events-none absolute border-2 border-dashed border-white/80" style={{ left: `${left * 100}%`, top: `${top * 100}%`, width: `${w * 100}%`, height: `${h * 100}%` }} />
+        <div
+          className="pointer-events-none absolute border-2 border-dashed border-white/80"
+          style={{ left: `${left * 100}%`, top: `${top * 100}%`, width: `${w * 100}%`, height: `${h * 100}%` }}
+        />
         <div
           className="pointer-events-none absolute size-5 -translate-x-1/2 -translate-y-1/2 rounded-full border-2 border-white shadow-[0_0_0_2px_rgba(0,0,0,0.6)]"
           style={{ left: `${value.x * 100}%`, top: `${value.y * 100}%` }}

@@ -8,7 +8,8 @@ import { MediaDetailsForm } from './media-details-form.tsx';
 import { MediaStatus } from './media-status.tsx';
 
 const sizeFormat = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
-const bytesText = (b: number) => (b >= 1024 * 1024 ? `${sizeFormat.format(b / (1024 * 1024))} MB` : `${sizeFormat.format(b / 1024)} KB`);
+const bytesText = (b: number) =>
+  b >= 1024 * 1024 ? `${sizeFormat.format(b / (1024 * 1024))} MB` : `${sizeFormat.format(b / 1024)} KB`;
 
 /** One image's details in a panel that slides over the grid, so the library stays in view. */
 export function MediaDetailPanel({ id, onClose }: { id: string; onClose: () => void }) {
@@ -21,12 +22,22 @@ export function MediaDetailPanel({ id, onClose }: { id: string; onClose: () => v
     return () => window.removeEventListener('keydown', onKey);
   }, [onClose]);
   return (
-    <aside role="dialog" aria-modal="false" aria-labelledby="media-panel-title" className="fixed inset-y-0 right-0 z-30 flex w-full max-w-md flex-col border-l border-rule bg-panel shadow-2xl">
+    <aside
+      role="dialog"
+      aria-modal="false"
+      aria-labelledby="media-panel-title"
+      className="fixed inset-y-0 right-0 z-30 flex w-full max-w-md flex-col border-l border-rule bg-panel shadow-2xl"
+    >
       <div className="flex items-center justify-between border-b border-rule px-5 py-3">
         <h2 id="media-panel-title" ref={heading} tabIndex={-1} className="truncate text-base font-semibold focus:outline-none">
           {media.data?.fileName ?? 'Image'}
         </h2>
-        <button type="button" onClick={onClose} aria-label="Close details" className="rounded p-1 text-muted hover:bg-wash hover:text-ink">
+        <button
+          type="button"
+          onClick={onClose}
+          aria-label="Close details"
+          className="rounded p-1 text-muted hover:bg-wash hover:text-ink"
+        >
           <Icon name="x" className="size-5" />
         </button>
       </div>
@@ -46,16 +57,22 @@ function PanelBody({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () 
     <>
       <dl className="grid grid-cols-[7rem_1fr] gap-x-3 gap-y-1 text-sm">
         <dt className="text-muted">Size</dt>
-        <dd className="tabular-nums">{media.width} × {media.height} px · {bytesText(media.bytes)} · {media.format.toUpperCase()}</dd>
+        <dd className="tabular-nums">
+          {media.width} × {media.height} px · {bytesText(media.bytes)} · {media.format.toUpperCase()}
+        </dd>
         <dt className="text-muted">Uploaded by</dt>
         <dd>{media.uploadedBy?.name ?? 'A former member of staff'}</dd>
         <dt className="text-muted">Status</dt>
-        <dd><MediaStatus media={media} /></dd>
+        <dd>
+          <MediaStatus media={media} />
+        </dd>
       </dl>
       {media.renditionsStatus === 'failed' && (
         <Notice tone="error" title="The renditions could not be made">
           <p>{media.renditionsError}</p>
-          <Button variant="secondary" className="mt-2" busy={retry.isPending} onClick={() => retry.mutate(media.id)}>Try again</Button>
+          <Button variant="secondary" className="mt-2" busy={retry.isPending} onClick={() => retry.mutate(media.id)}>
+            Try again
+          </Button>
         </Notice>
       )}
       <MediaDetailsForm key={media.id} media={media} preview={page?.url ?? media.thumbnailUrl} />
@@ -70,15 +87,21 @@ function Renditions({ media }: { media: MediaDetailDto }) {
   if (!names.length) return null;
   return (
     <section aria-labelledby="renditions-title">
-      <h3 id="renditions-title" className="mb-1 text-sm font-semibold">Renditions</h3>
+      <h3 id="renditions-title" className="mb-1 text-sm font-semibold">
+        Renditions
+      </h3>
       <table className="w-full text-left text-xs">
         <tbody>
           {names.map((name) => {
             const set = media.renditions.filter((r) => r.name === name);
             return (
               <tr key={name} className="border-b border-rule last:border-0">
-                <th scope="row" className="py-1.5 pr-2 font-medium">{name}</th>
-                <td className="py-1.5 pr-2 tabular-nums text-muted">{set[0].width} × {set[0].height}</td>
+                <th scope="row" className="py-1.5 pr-2 font-medium">
+                  {name}
+                </th>
+                <td className="py-1.5 pr-2 tabular-nums text-muted">
+                  {set[0].width} × {set[0].height}
+                </td>
                 <td className="py-1.5 text-right">
                   {set.map((r) => (
                     <a key={r.format} href={r.url} target="_blank" rel="noreferrer" className="ml-2 text-accent hover:underline">
@@ -100,27 +123,40 @@ function Usage({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => v
   const [confirming, setConfirming] = useState(false);
   return (
     <section aria-labelledby="usage-title" className="space-y-2 border-t border-rule pt-4">
-      <h3 id="usage-title" className="text-sm font-semibold">Where it is used</h3>
+      <h3 id="usage-title" className="text-sm font-semibold">
+        Where it is used
+      </h3>
       {media.usage.length === 0 ? (
         <p className="text-sm text-muted">Not used on any page or kiosk channel.</p>
       ) : (
         <ul className="list-disc pl-5 text-sm">
           {media.usage.map((u) => (
-            <li key={`${u.kind}-${u.id}`}><span className="text-muted">{u.kind}</span> {u.title}</li>
+            <li key={`${u.kind}-${u.id}`}>
+              <span className="text-muted">{u.kind}</span> {u.title}
+            </li>
           ))}
         </ul>
       )}
       {media.can.delete && media.usage.length === 0 && !confirming && (
-        <Button variant="danger" onClick={() => setConfirming(true)}><Icon name="trash" className="size-4" />Delete image</Button>
+        <Button variant="danger" onClick={() => setConfirming(true)}>
+          <Icon name="trash" className="size-4" />
+          Delete image
+        </Button>
       )}
       {confirming && (
         <div className="flex flex-wrap items-center gap-2 rounded-md border border-broken/40 bg-broken/5 p-3 text-sm">
           <span>Delete this image and all its renditions?</span>
-          <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate(media.id, { onSuccess: onDeleted })}>Delete</Button>
-          <Button variant="secondary" onClick={() => setConfirming(false)}>Keep it</Button>
+          <Button variant="danger" busy={remove.isPending} onClick={() => remove.mutate(media.id, { onSuccess: onDeleted })}>
+            Delete
+          </Button>
+          <Button variant="secondary" onClick={() => setConfirming(false)}>
+            Keep it
+          </Button>
         </div>
       )}
-      {media.usage.length > 0 && <p className="text-xs text-muted">An image in use cannot be deleted. Remove it from these places first.</p>}
+      {media.usage.length > 0 && (
+        <p className="text-xs text-muted">An image in use cannot be deleted. Remove it from these places first.</p>
+      )}
       {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
     </section>
   );

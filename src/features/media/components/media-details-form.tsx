@@ -2,7 +2,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { findLicence, LICENCES } from '@shared/media/licences.ts';
-import { MediaDetailsFormSchema, type FocalPoint, type MediaDetailDto, type MediaDetailsFormInput } from '@shared/media/schemas.ts';
+import {
+  MediaDetailsFormSchema,
+  type FocalPoint,
+  type MediaDetailDto,
+  type MediaDetailsFormInput,
+} from '@shared/media/schemas.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
@@ -20,7 +25,12 @@ export function MediaDetailsForm({ media, preview }: { media: MediaDetailDto; pr
   const [objects, setObjects] = useState(media.objects);
   const { register, handleSubmit, setError, formState, watch } = useForm<MediaDetailsFormInput>({
     resolver: zodResolver(MediaDetailsFormSchema),
-    defaultValues: { altText: media.altText, credit: media.credit, licenceId: media.licence?.id ?? '', sourceUrl: media.sourceUrl },
+    defaultValues: {
+      altText: media.altText,
+      credit: media.credit,
+      licenceId: media.licence?.id ?? '',
+      sourceUrl: media.sourceUrl,
+    },
   });
   const licence = findLicence(watch('licenceId'));
   const onSubmit = handleSubmit((values) => {
@@ -28,14 +38,19 @@ export function MediaDetailsForm({ media, preview }: { media: MediaDetailDto; pr
     setSaved(false);
     update.mutate(
       { id: media.id, ...values, licenceId: values.licenceId || null, focalPoint: focal, objectIds: objects.map((o) => o.id) },
-      { onSuccess: () => setSaved(true), onError: (error) => setFormError(applyServerErrors(error, setError, ['altText', 'credit', 'licenceId', 'sourceUrl'])) },
+      {
+        onSuccess: () => setSaved(true),
+        onError: (error) => setFormError(applyServerErrors(error, setError, ['altText', 'credit', 'licenceId', 'sourceUrl'])),
+      },
     );
   });
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Image details" className="space-y-4">
       {formError && <Notice tone="error">{formError}</Notice>}
       <div>
-        <label htmlFor="alt-text" className="mb-1 block text-sm font-medium text-ink">Alt text</label>
+        <label htmlFor="alt-text" className="mb-1 block text-sm font-medium text-ink">
+          Alt text
+        </label>
         <textarea
           id="alt-text"
           rows={3}
@@ -48,24 +63,48 @@ export function MediaDetailsForm({ media, preview }: { media: MediaDetailDto; pr
           {formState.errors.altText?.message ?? 'What the image shows, for people who cannot see it.'}
         </p>
       </div>
-      <TextField label="Credit line" placeholder="e.g. Corrie Vale Astro Society (demo)" error={formState.errors.credit?.message} {...register('credit')} />
+      <TextField
+        label="Credit line"
+        placeholder="e.g. Corrie Vale Astro Society (demo)"
+        error={formState.errors.credit?.message}
+        {...register('credit')}
+      />
       <SelectField label="Licence" error={formState.errors.licenceId?.message} {...register('licenceId')}>
         <option value="">Choose a licence…</option>
         {LICENCES.map((l) => (
-          <option key={l.id} value={l.id}>{l.label}</option>
+          <option key={l.id} value={l.id}>
+            {l.label}
+          </option>
         ))}
       </SelectField>
       {licence?.url && (
         <p className="-mt-2 text-xs text-muted">
-          Terms: <a className="text-accent hover:underline" href={licence.url} target="_blank" rel="noreferrer">{licence.url}</a>
+          Terms:{' '}
+          <a className="text-accent hover:underline" href={licence.url} target="_blank" rel="noreferrer">
+            {licence.url}
+          </a>
         </p>
       )}
-      <TextField label="Source web address" type="url" placeholder="https://" error={formState.errors.sourceUrl?.message} {...register('sourceUrl')} />
-      {preview && <FocalPointPicker src={preview} alt="" width={media.width} height={media.height} value={focal} onChange={setFocal} />}
+      <TextField
+        label="Source web address"
+        type="url"
+        placeholder="https://"
+        error={formState.errors.sourceUrl?.message}
+        {...register('sourceUrl')}
+      />
+      {preview && (
+        <FocalPointPicker src={preview} alt="" width={media.width} height={media.height} value={focal} onChange={setFocal} />
+      )}
       <ObjectPicker value={objects} onChange={setObjects} />
       <div className="flex items-center gap-3">
-        <Button type="submit" busy={update.isPending}>Save details</Button>
-        {saved && !update.isPending && <span role="status" className="text-sm text-ok">Saved.</span>}
+        <Button type="submit" busy={update.isPending}>
+          Save details
+        </Button>
+        {saved && !update.isPending && (
+          <span role="status" className="text-sm text-ok">
+            Saved.
+          </span>
+        )}
       </div>
     </form>
   );

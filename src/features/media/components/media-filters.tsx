@@ -16,7 +16,13 @@ export function MediaFilters({ onChange }: { onChange: (query: MediaListQuery) =
   }, [text, searchIn, licence, onChange]);
   return (
     <div role="search" className="grid gap-3 sm:grid-cols-[1fr_11rem_16rem]">
-      <TextField label="Search" type="search" placeholder="Object, credit, alt text or file name" value={text} onChange={(e) => setText(e.target.value)} />
+      <TextField
+        label="Search"
+        type="search"
+        placeholder="Object, credit, alt text or file name"
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+      />
       <SelectField label="Search in" value={searchIn} onChange={(e) => setSearchIn(e.target.value as SearchIn)}>
         <option value="q">Everything</option>
         <option value="object">Objects shown</option>

@@ -17,9 +17,17 @@ export function ObjectPicker({ value, onChange }: { value: Obj[]; onChange: (obj
       {value.length > 0 && (
         <ul className="mb-2 flex flex-wrap gap-1.5" aria-label="Linked objects">
           {value.map((o) => (
-            <li key={o.id} className="inline-flex items-center gap-1 rounded-full border border-rule bg-wash py-0.5 pl-2.5 pr-1 text-xs">
+            <li
+              key={o.id}
+              className="inline-flex items-center gap-1 rounded-full border border-rule bg-wash py-0.5 pl-2.5 pr-1 text-xs"
+            >
               {o.name}
-              <button type="button" aria-label={`Remove ${o.name}`} className="rounded-full p-0.5 hover:bg-rule" onClick={() => onChange(value.filter((v) => v.id !== o.id))}>
+              <button
+                type="button"
+                aria-label={`Remove ${o.name}`}
+                className="rounded-full p-0.5 hover:bg-rule"
+                onClick={() => onChange(value.filter((v) => v.id !== o.id))}
+              >
                 <Icon name="x" className="size-3" />
               </button>
             </li>
@@ -38,12 +46,21 @@ export function ObjectPicker({ value, onChange }: { value: Obj[]; onChange: (obj
         <ul className="mt-1 max-h-40 overflow-auto rounded-md border border-rule bg-panel text-sm" aria-label="Matching objects">
           {options.map((o) => (
             <li key={o.id}>
-              <button type="button" className="block w-full px-3 py-1.5 text-left hover:bg-wash" onClick={() => { onChange([...value, o]); setText(''); }}>
+              <button
+                type="button"
+                className="block w-full px-3 py-1.5 text-left hover:bg-wash"
+                onClick={() => {
+                  onChange([...value, o]);
+                  setText('');
+                }}
+              >
                 {o.name}
               </button>
             </li>
           ))}
-          {suggestions.isSuccess && options.length === 0 && <li className="px-3 py-1.5 text-muted">No object in the catalogue matches.</li>}
+          {suggestions.isSuccess && options.length === 0 && (
+            <li className="px-3 py-1.5 text-muted">No object in the catalogue matches.</li>
+          )}
         </ul>
       )}
     </div>

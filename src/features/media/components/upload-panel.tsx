@@ -21,13 +21,17 @@ export function UploadPanel({ maxBytes, onOpen }: { maxBytes: number; onOpen: (i
   const [dragging, setDragging] = useState(false);
   const input = useRef<HTMLInputElement>(null);
   const refresh = useRefreshMedia();
-  const update = (key: string, change: Partial<UploadItem>) => setItems((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i)));
+  const update = (key: string, change: Partial<UploadItem>) =>
+    setItems((all) => all.map((i) => (i.key === key ? { ...i, ...change } : i)));
 
   function start(files: Iterable<File>) {
     for (const file of files) {
       const key = crypto.randomUUID();
       if (file.size > maxBytes) {
-        setItems((all) => [{ key, name: file.name, progress: 0, state: 'failed', message: `Larger than the ${megabytes(maxBytes)} limit.` }, ...all]);
+        setItems((all) => [
+          { key, name: file.name, progress: 0, state: 'failed', message: `Larger than the ${megabytes(maxBytes)} limit.` },
+          ...all,
+        ]);
         continue;
       }
       setItems((all) => [{ key, name: file.name, progress: 0, state: 'uploading' }, ...all]);
@@ -61,12 +65,17 @@ export function UploadPanel({ maxBytes, onOpen }: { maxBytes: number; onOpen: (i
         <Icon name="upload" className="size-6 text-muted" />
         <p className="text-sm text-ink">
           Drop images here, or{' '}
-          <button type="button" className="font-medium text-accent underline-offset-2 hover:underline" onClick={() => input.current?.click()}>
+          <button
+            type="button"
+            className="font-medium text-accent underline-offset-2 hover:underline"
+            onClick={() => input.current?.click()}
+          >
             choose files
           </button>
         </p>
         <p className="text-xs text-muted">
-          {ACCEPTED_IMAGE_TYPES.join(', ')} · up to {megabytes(maxBytes)} each · add credit, licence, source and alt text after uploading
+          {ACCEPTED_IMAGE_TYPES.join(', ')} · up to {megabytes(maxBytes)} each · add credit, licence, source and alt text after
+          uploading
         </p>
         <input
           ref={input}
@@ -107,7 +116,10 @@ function UploadRow({ item, onOpen }: { item: UploadItem; onOpen: (id: string) =>
         aria-valuenow={percent}
         className="h-1.5 flex-1 overflow-hidden rounded-full bg-wash"
       >
-        <div className={`h-full rounded-full ${item.state === 'failed' ? 'bg-broken' : item.state === 'done' ? 'bg-ok' : 'bg-accent'}`} style={{ width: `${item.state === 'failed' ? 100 : percent}%` }} />
+        <div
+          className={`h-full rounded-full ${item.state === 'failed' ? 'bg-broken' : item.state === 'done' ? 'bg-ok' : 'bg-accent'}`}
+          style={{ width: `${item.state === 'failed' ? 100 : percent}%` }}
+        />
       </div>
       <span className="w-72 shrink-0 text-right">
         {item.state === 'uploading' && <span className="text-muted tabular-nums">{percent}%</span>}

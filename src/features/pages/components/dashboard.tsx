@@ -25,8 +25,12 @@ export function Dashboard() {
                 {section.pages.map((p) => (
                   <li key={p.id} className="flex items-center justify-between gap-3 py-2 text-sm">
                     <span className="min-w-0">
-                      <Link to={pageHref(p)} className="font-medium text-accent hover:underline">{p.title}</Link>
-                      <span className="block truncate text-xs text-muted">{p.object.name} · {p.writer.name}</span>
+                      <Link to={pageHref(p)} className="font-medium text-accent hover:underline">
+                        {p.title}
+                      </Link>
+                      <span className="block truncate text-xs text-muted">
+                        {p.object.name} · {p.writer.name}
+                      </span>
                     </span>
                     <PageStatusBadge status={p.status} />
                   </li>
@@ -39,7 +43,13 @@ export function Dashboard() {
         ))}
       </div>
       <label className="flex items-center gap-2 text-sm">
-        <input type="checkbox" className="size-4 accent-accent" checked={dashboard.data.digest} disabled={setDigest.isPending} onChange={(e) => setDigest.mutate(e.target.checked)} />
+        <input
+          type="checkbox"
+          className="size-4 accent-accent"
+          checked={dashboard.data.digest}
+          disabled={setDigest.isPending}
+          onChange={(e) => setDigest.mutate(e.target.checked)}
+        />
         E-mail me a summary of this each morning
       </label>
     </div>

@@ -16,7 +16,10 @@ import { ObjectPicker } from './object-picker.tsx';
 export function NewPageForm({ defaultLocale, onCancel }: { defaultLocale: PageCreateInput['locale']; onCancel: () => void }) {
   const create = useCreatePage();
   const navigate = useNavigate();
-  const form = useForm<PageCreateInput>({ resolver: zodResolver(PageCreateSchema), defaultValues: { title: '', objectId: '', locale: defaultLocale } });
+  const form = useForm<PageCreateInput>({
+    resolver: zodResolver(PageCreateSchema),
+    defaultValues: { title: '', objectId: '', locale: defaultLocale },
+  });
   const submit = form.handleSubmit(async (values) => {
     const page = await create.mutateAsync(values);
     navigate(paths.pageEdit.href(page.id));
@@ -25,14 +28,33 @@ export function NewPageForm({ defaultLocale, onCancel }: { defaultLocale: PageCr
     <form aria-label="New page" onSubmit={submit} className="space-y-4 rounded-lg border border-rule bg-panel p-5">
       <h2 className="text-lg font-semibold">New page</h2>
       <TextField label="Title" autoFocus {...form.register('title')} error={form.formState.errors.title?.message} />
-      <Controller control={form.control} name="objectId" render={({ field, fieldState }) => <ObjectPicker label="About which object" value={field.value} onChange={(id) => field.onChange(id)} error={fieldState.error?.message} />} />
+      <Controller
+        control={form.control}
+        name="objectId"
+        render={({ field, fieldState }) => (
+          <ObjectPicker
+            label="About which object"
+            value={field.value}
+            onChange={(id) => field.onChange(id)}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
       <SelectField label="Language" {...form.register('locale')}>
-        {STATEMENT_LOCALES.map((l) => <option key={l} value={l}>{LOCALE_LABELS[l]}</option>)}
+        {STATEMENT_LOCALES.map((l) => (
+          <option key={l} value={l}>
+            {LOCALE_LABELS[l]}
+          </option>
+        ))}
       </SelectField>
       {create.error && <Notice tone="error">{create.error.message}</Notice>}
       <div className="flex gap-2">
-        <Button type="submit" busy={create.isPending}>Create and start writing</Button>
-        <Button type="button" variant="secondary" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" busy={create.isPending}>
+          Create and start writing
+        </Button>
+        <Button type="button" variant="secondary" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
     </form>
   );

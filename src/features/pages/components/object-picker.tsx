@@ -5,7 +5,19 @@ import { useObjectSearch } from '../api/pages.ts';
  * Picks a catalogue object by name or designation; shows the first twenty matches.
  * @param valueLabel how to name `value` when the current matches do not include it
  */
-export function ObjectPicker({ value, onChange, label = 'Object', error, valueLabel }: { value: string; onChange: (id: string, name: string) => void; label?: string; error?: string; valueLabel?: string }) {
+export function ObjectPicker({
+  value,
+  onChange,
+  label = 'Object',
+  error,
+  valueLabel,
+}: {
+  value: string;
+  onChange: (id: string, name: string) => void;
+  label?: string;
+  error?: string;
+  valueLabel?: string;
+}) {
   const [q, setQ] = useState('');
   const [picked, setPicked] = useState<{ id: string; text: string } | null>(null);
   const objects = useObjectSearch(q);
@@ -16,7 +28,9 @@ export function ObjectPicker({ value, onChange, label = 'Object', error, valueLa
   const keepChosen = value !== '' && !rows.some((o) => o.id === value);
   return (
     <div className="space-y-2">
-      <label htmlFor={`${id}-search`} className="block text-sm font-medium text-ink">{label}</label>
+      <label htmlFor={`${id}-search`} className="block text-sm font-medium text-ink">
+        {label}
+      </label>
       <input
         id={`${id}-search`}
         type="search"
@@ -37,9 +51,14 @@ export function ObjectPicker({ value, onChange, label = 'Object', error, valueLa
         className={`block w-full rounded-md border bg-panel px-2 py-1 text-sm ${error ? 'border-broken' : 'border-rule'}`}
       >
         <option value="" disabled hidden />
-        {keepChosen && <option value={value}>{picked?.id === value ? picked.text : (valueLabel ?? 'The object chosen before')}</option>}
+        {keepChosen && (
+          <option value={value}>{picked?.id === value ? picked.text : (valueLabel ?? 'The object chosen before')}</option>
+        )}
         {rows.map((o) => (
-          <option key={o.id} value={o.id}>{o.name}{o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} · {o.kind}</option>
+          <option key={o.id} value={o.id}>
+            {o.name}
+            {o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} · {o.kind}
+          </option>
         ))}
       </select>
       {objects.data?.length === 0 && <p className="text-xs text-muted">No object matches “{q}”.</p>}

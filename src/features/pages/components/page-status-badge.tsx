@@ -14,7 +14,9 @@ const LOOK: Record<PageStatus, { icon: IconName; className: string }> = {
 export function PageStatusBadge({ status }: { status: PageStatus }) {
   const look = LOOK[status];
   return (
-    <span className={`inline-flex items-center gap-1 whitespace-nowrap rounded-full border px-2 py-0.5 text-xs font-medium ${look.className}`}>
+    <span
+      className={`inline-flex items-center gap-1 whitespace-nowrap rounded-full border px-2 py-0.5 text-xs font-medium ${look.className}`}
+    >
       <Icon name={look.icon} className="size-3.5" />
       {PAGE_STATUS_LABELS[status]}
     </span>

@@ -16,21 +16,57 @@ export function PublishPanel({ page }: { page: PageDto }) {
   if (!page.can.publish && !page.can.unpublish && !page.can.schedule) return null;
   return (
     <section aria-labelledby="publishing" className="space-y-3 rounded-lg border border-rule bg-panel p-4">
-      <h2 id="publishing" className="font-semibold">Publishing</h2>
-      {page.published ? <p className="text-sm">Live: revision {page.published.revisionNumber}{page.published.at ? `, published ${when.format(new Date(page.published.at))}` : ''}.</p> : <p className="text-sm text-muted">Nothing of this page is live.</p>}
-      {page.scheduledPublishAt && <p className="text-sm">Scheduled to go live {when.format(new Date(page.scheduledPublishAt))}.</p>}
+      <h2 id="publishing" className="font-semibold">
+        Publishing
+      </h2>
+      {page.published ? (
+        <p className="text-sm">
+          Live: revision {page.published.revisionNumber}
+          {page.published.at ? `, published ${when.format(new Date(page.published.at))}` : ''}.
+        </p>
+      ) : (
+        <p className="text-sm text-muted">Nothing of this page is live.</p>
+      )}
+      {page.scheduledPublishAt && (
+        <p className="text-sm">Scheduled to go live {when.format(new Date(page.scheduledPublishAt))}.</p>
+      )}
       <div className="flex flex-wrap gap-2">
-        {page.can.publish && <Button busy={publish.isPending} onClick={() => publish.mutate()}>Publish revision {page.approved?.revisionNumber}</Button>}
-        {page.can.unpublish && <Button variant="danger" busy={unpublish.isPending} onClick={() => unpublish.mutate()}>Unpublish</Button>}
+        {page.can.publish && (
+          <Button busy={publish.isPending} onClick={() => publish.mutate()}>
+            Publish revision {page.approved?.revisionNumber}
+          </Button>
+        )}
+        {page.can.unpublish && (
+          <Button variant="danger" busy={unpublish.isPending} onClick={() => unpublish.mutate()}>
+            Unpublish
+          </Button>
+        )}
       </div>
       {page.can.schedule && (
-        <form className="flex flex-wrap items-end gap-2" onSubmit={(e) => { e.preventDefault(); if (at) schedule.mutate(new Date(at).toISOString()); }}>
+        <form
+          className="flex flex-wrap items-end gap-2"
+          onSubmit={(e) => {
+            e.preventDefault();
+            if (at) schedule.mutate(new Date(at).toISOString());
+          }}
+        >
           <label className="text-sm">
             <span className="mb-1 block font-medium">Publish at</span>
-            <input type="datetime-local" value={at} onChange={(e) => setAt(e.target.value)} className="rounded-md border border-rule bg-panel px-2 py-1.5 text-sm" />
+            <input
+              type="datetime-local"
+              value={at}
+              onChange={(e) => setAt(e.target.value)}
+              className="rounded-md border border-rule bg-panel px-2 py-1.5 text-sm"
+            />
           </label>
-          <Button type="submit" variant="secondary" disabled={!at} busy={schedule.isPending}>Schedule</Button>
-          {page.scheduledPublishAt && <Button type="button" variant="quiet" onClick={() => schedule.mutate(null)}>Clear schedule</Button>}
+          <Button type="submit" variant="secondary" disabled={!at} busy={schedule.isPending}>
+            Schedule
+          </Button>
+          {page.scheduledPublishAt && (
+            <Button type="button" variant="quiet" onClick={() => schedule.mutate(null)}>
+              Clear schedule
+            </Button>
+          )}
         </form>
       )}
       {error && <Notice tone="error">{error.message}</Notice>}

@@ -4,7 +4,17 @@ function Parts({ parts }: { parts: DiffPart[] }) {
   return (
     <>
       {parts.map((p, i) =>
-        p.added ? <ins key={i} className="bg-ok/15 text-ok no-underline decoration-0">{p.value}</ins> : p.removed ? <del key={i} className="bg-broken/10 text-broken">{p.value}</del> : <span key={i}>{p.value}</span>,
+        p.added ? (
+          <ins key={i} className="bg-ok/15 text-ok no-underline decoration-0">
+            {p.value}
+          </ins>
+        ) : p.removed ? (
+          <del key={i} className="bg-broken/10 text-broken">
+            {p.value}
+          </del>
+        ) : (
+          <span key={i}>{p.value}</span>
+        ),
       )}
     </>
   );
@@ -13,10 +23,19 @@ function Parts({ parts }: { parts: DiffPart[] }) {
 /** Two revisions compared: inserted words marked "ins", removed words "del" (with colour and strike-through, not colour alone). */
 export function RevisionDiff({ diff }: { diff: RevisionDiffDto }) {
   return (
-    <article aria-label={`Changes from revision ${diff.from} to ${diff.to}`} className="rounded-lg border border-rule bg-panel p-5">
-      <p className="mb-3 text-xs font-semibold uppercase tracking-wide text-muted">Revision {diff.from} → {diff.to}</p>
-      <h2 className="mb-3 font-serif text-xl font-semibold"><Parts parts={diff.title} /></h2>
-      <div className="whitespace-pre-wrap font-serif text-[16px] leading-relaxed"><Parts parts={diff.blocks} /></div>
+    <article
+      aria-label={`Changes from revision ${diff.from} to ${diff.to}`}
+      className="rounded-lg border border-rule bg-panel p-5"
+    >
+      <p className="mb-3 text-xs font-semibold uppercase tracking-wide text-muted">
+        Revision {diff.from} → {diff.to}
+      </p>
+      <h2 className="mb-3 font-serif text-xl font-semibold">
+        <Parts parts={diff.title} />
+      </h2>
+      <div className="whitespace-pre-wrap font-serif text-[16px] leading-relaxed">
+        <Parts parts={diff.blocks} />
+      </div>
     </article>
   );
 }

@@ -9,7 +9,17 @@ import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
 
 /** A statement's wording and every step of its working, in a panel beside the page. */
-export function StatementWorking({ id, locale, onClose, actions }: { id: string; locale: StatementLocale; onClose: () => void; actions?: React.ReactNode }) {
+export function StatementWorking({
+  id,
+  locale,
+  onClose,
+  actions,
+}: {
+  id: string;
+  locale: StatementLocale;
+  onClose: () => void;
+  actions?: React.ReactNode;
+}) {
   const statement = useStatement(id);
   const s = statement.data;
   return (
@@ -17,14 +27,26 @@ export function StatementWorking({ id, locale, onClose, actions }: { id: string;
       <div className="flex items-start justify-between gap-3">
         <div>
           <h2 className="font-semibold">{s ? s.template.title : 'Statement'}</h2>
-          {s && <p className="text-xs text-muted">{s.object.name}{s.venue ? ` · ${venueNightText(s)}` : ''}</p>}
+          {s && (
+            <p className="text-xs text-muted">
+              {s.object.name}
+              {s.venue ? ` · ${venueNightText(s)}` : ''}
+            </p>
+          )}
         </div>
-        <Button variant="quiet" onClick={onClose}>Close</Button>
+        <Button variant="quiet" onClick={onClose}>
+          Close
+        </Button>
       </div>
       {statement.error && <Notice tone="error">{statement.error.message}</Notice>}
       {s && (
         <>
-          <div className="flex items-center gap-2"><StatementStatusBadge status={s.status} /><Link to={paths.statement.href(s.id)} className="text-xs text-accent hover:underline">Open the statement page</Link></div>
+          <div className="flex items-center gap-2">
+            <StatementStatusBadge status={s.status} />
+            <Link to={paths.statement.href(s.id)} className="text-xs text-accent hover:underline">
+              Open the statement page
+            </Link>
+          </div>
           <p className="font-serif text-[17px] leading-relaxed">{s.texts?.[locale] ?? 'This statement cannot be worked out.'}</p>
           {s.statusReason && <Notice tone={s.status === 'broken' ? 'error' : 'warning'}>{s.statusReason}</Notice>}
           {actions}

@@ -8,7 +8,15 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { useSlideSources } from '../api/channels.ts';
 
 /** Adds a slide at the end: a published page with chosen statements, a credited image, or the sky tonight. */
-export function AddSlideForm({ busy, error, onAdd }: { busy: boolean; error: string | null; onAdd: (input: SlideCreateInput) => void }) {
+export function AddSlideForm({
+  busy,
+  error,
+  onAdd,
+}: {
+  busy: boolean;
+  error: string | null;
+  onAdd: (input: SlideCreateInput) => void;
+}) {
   const sources = useSlideSources();
   const [kind, setKind] = useState<SlideKind>('page');
   const [pageId, setPageId] = useState('');
@@ -41,7 +49,14 @@ export function AddSlideForm({ busy, error, onAdd }: { busy: boolean; error: str
         <div className="flex flex-wrap gap-4">
           {SLIDE_KINDS.map((k) => (
             <label key={k} className="inline-flex items-center gap-2 text-sm">
-              <input type="radio" name="slide-kind" value={k} checked={kind === k} onChange={() => setKind(k)} className="accent-accent" />
+              <input
+                type="radio"
+                name="slide-kind"
+                value={k}
+                checked={kind === k}
+                onChange={() => setKind(k)}
+                className="accent-accent"
+              />
               {SLIDE_KIND_LABELS[k]}
             </label>
           ))}
@@ -50,15 +65,26 @@ export function AddSlideForm({ busy, error, onAdd }: { busy: boolean; error: str
       {sources.error && <Notice tone="error">{sources.error.message}</Notice>}
       {kind === 'page' && (
         <>
-          <SelectField label="Published page" value={pageId} onChange={(e) => { setPageId(e.target.value); setStatementIds([]); }}>
+          <SelectField
+            label="Published page"
+            value={pageId}
+            onChange={(e) => {
+              setPageId(e.target.value);
+              setStatementIds([]);
+            }}
+          >
             <option value="">{sources.data?.pages.length === 0 ? 'No page is published yet' : 'Choose a page…'}</option>
             {sources.data?.pages.map((p) => (
-              <option key={p.id} value={p.id}>{p.title} · {p.objectName}</option>
+              <option key={p.id} value={p.id}>
+                {p.title} · {p.objectName}
+              </option>
             ))}
           </SelectField>
           {page && page.statements.length > 0 && (
             <fieldset>
-              <legend className="mb-1 text-sm font-medium text-ink">Statements to show (at most {ChannelLimits.statementsPerSlideMax})</legend>
+              <legend className="mb-1 text-sm font-medium text-ink">
+                Statements to show (at most {ChannelLimits.statementsPerSlideMax})
+              </legend>
               <ul className="space-y-1">
                 {page.statements.map((s) => (
                   <li key={s.id}>
@@ -68,7 +94,9 @@ export function AddSlideForm({ busy, error, onAdd }: { busy: boolean; error: str
                         className="mt-1 accent-accent"
                         checked={statementIds.includes(s.id)}
                         disabled={!statementIds.includes(s.id) && statementIds.length >= ChannelLimits.statementsPerSlideMax}
-                        onChange={(e) => setStatementIds(e.target.checked ? [...statementIds, s.id] : statementIds.filter((x) => x !== s.id))}
+                        onChange={(e) =>
+                          setStatementIds(e.target.checked ? [...statementIds, s.id] : statementIds.filter((x) => x !== s.id))
+                        }
                       />
                       <span>{s.text}</span>
                     </label>
@@ -81,19 +109,43 @@ export function AddSlideForm({ busy, error, onAdd }: { busy: boolean; error: str
       )}
       {kind !== 'sky_tonight' && (
         <div className="flex items-end gap-3">
-          <SelectField className="flex-1" label={kind === 'page' ? 'Image (optional: the page’s first image otherwise)' : 'Image'} value={mediaId} onChange={(e) => setMediaId(e.target.value)}>
+          <SelectField
+            className="flex-1"
+            label={kind === 'page' ? 'Image (optional: the page’s first image otherwise)' : 'Image'}
+            value={mediaId}
+            onChange={(e) => setMediaId(e.target.value)}
+          >
             <option value="">{kind === 'page' ? 'The page’s own image' : 'Choose an image…'}</option>
             {sources.data?.media.map((m) => (
-              <option key={m.id} value={m.id}>{m.altText.slice(0, 80)} · {m.credit}</option>
+              <option key={m.id} value={m.id}>
+                {m.altText.slice(0, 80)} · {m.credit}
+              </option>
             ))}
           </SelectField>
           {image?.thumbnailUrl && <img src={image.thumbnailUrl} alt={image.altText} className="h-16 w-24 rounded object-cover" />}
         </div>
       )}
-      {kind === 'image' && <TextField label="Caption" maxLength={ChannelLimits.captionMax} value={caption} onChange={(e) => setCaption(e.target.value)} />}
+      {kind === 'image' && (
+        <TextField
+          label="Caption"
+          maxLength={ChannelLimits.captionMax}
+          value={caption}
+          onChange={(e) => setCaption(e.target.value)}
+        />
+      )}
       <div className="flex flex-wrap items-end gap-3">
-        <TextField className="w-40" label="Seconds on screen" type="number" min={ChannelLimits.durationMin} max={ChannelLimits.durationMax} value={duration} onChange={(e) => setDuration(e.target.value)} />
-        <Button type="submit" busy={busy} disabled={!ready}>Add slide</Button>
+        <TextField
+          className="w-40"
+          label="Seconds on screen"
+          type="number"
+          min={ChannelLimits.durationMin}
+          max={ChannelLimits.durationMax}
+          value={duration}
+          onChange={(e) => setDuration(e.target.value)}
+        />
+        <Button type="submit" busy={busy} disabled={!ready}>
+          Add slide
+        </Button>
       </div>
       {error && <Notice tone="error">{error}</Notice>}
     </form>

@@ -13,9 +13,20 @@ import { useCreateChannel } from '../api/channels.ts';
  * that opened it is gone.
  * @param venues the venues to choose from (undefined while they load)
  */
-export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueDto[] | undefined; onDone: (channel: ChannelDetailDto) => void; onCancel: () => void }) {
+export function ChannelCreateForm({
+  venues,
+  onDone,
+  onCancel,
+}: {
+  venues: VenueDto[] | undefined;
+  onDone: (channel: ChannelDetailDto) => void;
+  onCancel: () => void;
+}) {
   const create = useCreateChannel();
-  const form = useForm<ChannelCreateInput>({ resolver: zodResolver(ChannelCreateSchema), defaultValues: { name: '', venueId: '' } });
+  const form = useForm<ChannelCreateInput>({
+    resolver: zodResolver(ChannelCreateSchema),
+    defaultValues: { name: '', venueId: '' },
+  });
   const submit = form.handleSubmit(async (values) => {
     try {
       onDone(await create.mutateAsync(values));
@@ -25,8 +36,18 @@ export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueD
     }
   });
   return (
-    <form onSubmit={submit} aria-label="New channel" className="grid gap-4 rounded-lg border border-rule bg-panel p-4 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-      <TextField label="Channel name" autoFocus {...form.register('name')} error={form.formState.errors.name?.message} placeholder="Foyer loop" />
+    <form
+      onSubmit={submit}
+      aria-label="New channel"
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-4 sm:grid-cols-[1fr_1fr_auto] sm:items-end"
+    >
+      <TextField
+        label="Channel name"
+        autoFocus
+        {...form.register('name')}
+        error={form.formState.errors.name?.message}
+        placeholder="Foyer loop"
+      />
       <SelectField label="Venue" {...form.register('venueId')} error={form.formState.errors.venueId?.message}>
         <option value="">Choose a venue…</option>
         {venues?.map((v) => (
@@ -36,10 +57,18 @@ export function ChannelCreateForm({ venues, onDone, onCancel }: { venues: VenueD
         ))}
       </SelectField>
       <div className="flex gap-2">
-        <Button type="submit" busy={form.formState.isSubmitting}>Create channel</Button>
-        <Button type="button" variant="secondary" onClick={onCancel}>Cancel</Button>
+        <Button type="submit" busy={form.formState.isSubmitting}>
+          Create channel
+        </Button>
+        <Button type="button" variant="secondary" onClick={onCancel}>
+          Cancel
+        </Button>
       </div>
-      {form.formState.errors.root && <div className="sm:col-span-3"><Notice tone="error">{form.formState.errors.root.message}</Notice></div>}
+      {form.formState.errors.root && (
+        <div className="sm:col-span-3">
+          <Notice tone="error">{form.formState.errors.root.message}</Notice>
+        </div>
+      )}
     </form>
   );
 }

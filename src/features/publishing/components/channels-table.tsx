@@ -16,7 +16,9 @@ export function ChannelsTable({ channels }: { channels: ChannelRowDto[] }) {
           </td>
           <td className="px-4 py-2">{c.venue.name}</td>
           <td className="px-4 py-2 text-right tabular-nums">{c.slideCount}</td>
-          <td className="px-4 py-2 text-muted">{c.screens.length ? c.screens.map((s) => s.name).join(', ') : 'No screens yet'}</td>
+          <td className="px-4 py-2 text-muted">
+            {c.screens.length ? c.screens.map((s) => s.name).join(', ') : 'No screens yet'}
+          </td>
         </tr>
       ))}
     </DataTable>

@@ -10,9 +10,16 @@ export function PlayerPreview({ channelId, version }: { channelId: string; versi
   return (
     <figure className="space-y-2">
       <div className="relative aspect-video w-full overflow-hidden rounded-lg border border-rule bg-black">
-        <iframe key={key} title="Live preview of the kiosk player" src={`/kiosk?preview=${channelId}`} className="absolute inset-0 h-full w-full border-0" />
+        <iframe
+          key={key}
+          title="Live preview of the kiosk player"
+          src={`/kiosk?preview=${channelId}`}
+          className="absolute inset-0 h-full w-full border-0"
+        />
       </div>
-      <figcaption className="text-xs text-muted">Live preview at 16:9, exactly as the screens play it now (slides outside their dates are left out).</figcaption>
+      <figcaption className="text-xs text-muted">
+        Live preview at 16:9, exactly as the screens play it now (slides outside their dates are left out).
+      </figcaption>
     </figure>
   );
 }

@@ -3,11 +3,20 @@ import type { ChannelDetailDto } from '@shared/schemas/channel.ts';
 import { Button } from '@/components/ui/button.tsx';
 
 /** Which of the venue's screens show this channel; a screen shows one channel, so ticking one moves it here. */
-export function ScreensPicker({ channel, busy, onSave }: { channel: ChannelDetailDto; busy: boolean; onSave: (ids: string[]) => void }) {
+export function ScreensPicker({
+  channel,
+  busy,
+  onSave,
+}: {
+  channel: ChannelDetailDto;
+  busy: boolean;
+  onSave: (ids: string[]) => void;
+}) {
   const mine = channel.venueScreens.filter((s) => s.channelId === channel.id).map((s) => s.id);
   const [chosen, setChosen] = useState<string[]>(mine);
   useEffect(() => setChosen(channel.venueScreens.filter((s) => s.channelId === channel.id).map((s) => s.id)), [channel]);
-  if (!channel.venueScreens.length) return <p className="text-sm text-muted">{channel.venue.name} has no kiosk screens yet. An admin adds them under Venues.</p>;
+  if (!channel.venueScreens.length)
+    return <p className="text-sm text-muted">{channel.venue.name} has no kiosk screens yet. An admin adds them under Venues.</p>;
   const changed = chosen.length !== mine.length || chosen.some((id) => !mine.includes(id));
   return (
     <form
@@ -21,7 +30,12 @@ export function ScreensPicker({ channel, busy, onSave }: { channel: ChannelDetai
         {channel.venueScreens.map((s) => (
           <li key={s.id}>
             <label className="flex items-center gap-2 text-sm">
-              <input type="checkbox" className="accent-accent" checked={chosen.includes(s.id)} onChange={(e) => setChosen(e.target.checked ? [...chosen, s.id] : chosen.filter((x) => x !== s.id))} />
+              <input
+                type="checkbox"
+                className="accent-accent"
+                checked={chosen.includes(s.id)}
+                onChange={(e) => setChosen(e.target.checked ? [...chosen, s.id] : chosen.filter((x) => x !== s.id))}
+              />
               <span className="font-medium text-ink">{s.name}</span>
               <span className="text-xs text-muted">
                 {s.health}
@@ -31,7 +45,9 @@ export function ScreensPicker({ channel, busy, onSave }: { channel: ChannelDetai
           </li>
         ))}
       </ul>
-      <Button type="submit" variant="secondary" className="mt-3" busy={busy} disabled={!changed}>Save screens</Button>
+      <Button type="submit" variant="secondary" className="mt-3" busy={busy} disabled={!changed}>
+        Save screens
+      </Button>
     </form>
   );
 }

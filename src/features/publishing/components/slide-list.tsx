@@ -6,7 +6,12 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { SlideTimingForm } from './slide-timing-form.tsx';
 
 /** The slide's name as the list shows it. */
-export const slideTitle = (s: SlideDto) => (s.kind === 'page' ? (s.page?.title ?? 'A page') : s.kind === 'image' ? s.caption || s.media?.altText || 'Image' : 'The sky tonight');
+export const slideTitle = (s: SlideDto) =>
+  s.kind === 'page'
+    ? (s.page?.title ?? 'A page')
+    : s.kind === 'image'
+      ? s.caption || s.media?.altText || 'Image'
+      : 'The sky tonight';
 
 const moved = (ids: string[], from: number, to: number) => {
   const next = [...ids];
@@ -37,8 +42,13 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
 
   useEffect(() => {
     if (!focusAfterMove) return;
-    const el = document.querySelector<HTMLButtonElement>(`[data-slide-id="${focusAfterMove.id}"] [data-move="${focusAfterMove.dir}"]`);
-    (el && !el.disabled ? el : document.querySelector<HTMLButtonElement>(`[data-slide-id="${focusAfterMove.id}"] [data-move]:not(:disabled)`))?.focus();
+    const el = document.querySelector<HTMLButtonElement>(
+      `[data-slide-id="${focusAfterMove.id}"] [data-move="${focusAfterMove.dir}"]`,
+    );
+    (el && !el.disabled
+      ? el
+      : document.querySelector<HTMLButtonElement>(`[data-slide-id="${focusAfterMove.id}"] [data-move]:not(:disabled)`)
+    )?.focus();
   }, [channel.slides, focusAfterMove]);
 
   const drop = (e: DragEvent, index: number) => {
@@ -50,7 +60,12 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
     onReorder(moved(ids, from, index));
   };
 
-  if (!channel.slides.length) return <p className="rounded-lg border border-dashed border-rule bg-panel p-6 text-sm text-muted">No slides yet: the screens show a calm holding screen. Add a page, an image or the sky tonight below.</p>;
+  if (!channel.slides.length)
+    return (
+      <p className="rounded-lg border border-dashed border-rule bg-panel p-6 text-sm text-muted">
+        No slides yet: the screens show a calm holding screen. Add a page, an image or the sky tonight below.
+      </p>
+    );
 
   return (
     <ol className="space-y-2" aria-label="Slides in playing order">
@@ -76,27 +91,69 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
           className={`rounded-lg border bg-panel p-3 ${over === i && dragging && dragging !== s.id ? 'border-accent ring-2 ring-accent/30' : 'border-rule'} ${dragging === s.id ? 'opacity-50' : ''}`}
         >
           <div className="flex flex-wrap items-center gap-3">
-            <span className="cursor-grab select-none text-muted" aria-hidden="true" title="Drag to move">⠿</span>
+            <span className="cursor-grab select-none text-muted" aria-hidden="true" title="Drag to move">
+              ⠿
+            </span>
             <span className="w-6 text-right text-sm tabular-nums text-muted">{i + 1}</span>
-            {s.media?.thumbnailUrl ? <img src={s.media.thumbnailUrl} alt="" className="h-10 w-16 rounded object-cover" /> : <span className="flex h-10 w-16 items-center justify-center rounded bg-wash text-muted"><Icon name={s.kind === 'sky_tonight' ? 'moon' : 'page'} className="size-4" /></span>}
+            {s.media?.thumbnailUrl ? (
+              <img src={s.media.thumbnailUrl} alt="" className="h-10 w-16 rounded object-cover" />
+            ) : (
+              <span className="flex h-10 w-16 items-center justify-center rounded bg-wash text-muted">
+                <Icon name={s.kind === 'sky_tonight' ? 'moon' : 'page'} className="size-4" />
+              </span>
+            )}
             <div className="min-w-[14rem] flex-1">
               <p className="truncate font-medium text-ink">{slideTitle(s)}</p>
               <p className="text-xs text-muted">
-                {SLIDE_KIND_LABELS[s.kind]} · {s.durationS} s{s.kind === 'page' ? ` · ${s.statementIds.length} statement${s.statementIds.length === 1 ? '' : 's'}` : ''}
+                {SLIDE_KIND_LABELS[s.kind]} · {s.durationS} s
+                {s.kind === 'page' ? ` · ${s.statementIds.length} statement${s.statementIds.length === 1 ? '' : 's'}` : ''}
                 {s.startsAt || s.endsAt ? ' · timed' : ''}
               </p>
             </div>
             <SlideStateBadge slide={s} />
             <div className="ml-auto flex gap-1">
-              <Button variant="secondary" className="px-2" data-move="up" aria-label={`Move “${slideTitle(s)}” up`} disabled={busy || i === 0} onClick={() => { setFocusAfterMove({ id: s.id, dir: 'up' }); onReorder(moved(ids, i, i - 1)); }}>↑</Button>
-              <Button variant="secondary" className="px-2" data-move="down" aria-label={`Move “${slideTitle(s)}” down`} disabled={busy || i === ids.length - 1} onClick={() => { setFocusAfterMove({ id: s.id, dir: 'down' }); onReorder(moved(ids, i, i + 1)); }}>↓</Button>
-              <Button variant="quiet" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>Timing</Button>
+              <Button
+                variant="secondary"
+                className="px-2"
+                data-move="up"
+                aria-label={`Move “${slideTitle(s)}” up`}
+                disabled={busy || i === 0}
+                onClick={() => {
+                  setFocusAfterMove({ id: s.id, dir: 'up' });
+                  onReorder(moved(ids, i, i - 1));
+                }}
+              >
+                ↑
+              </Button>
+              <Button
+                variant="secondary"
+                className="px-2"
+                data-move="down"
+                aria-label={`Move “${slideTitle(s)}” down`}
+                disabled={busy || i === ids.length - 1}
+                onClick={() => {
+                  setFocusAfterMove({ id: s.id, dir: 'down' });
+                  onReorder(moved(ids, i, i + 1));
+                }}
+              >
+                ↓
+              </Button>
+              <Button variant="quiet" aria-expanded={open === s.id} onClick={() => setOpen(open === s.id ? null : s.id)}>
+                Timing
+              </Button>
               <Button variant="danger" aria-label={`Remove “${slideTitle(s)}”`} disabled={busy} onClick={() => onRemove(s.id)}>
                 <Icon name="trash" className="size-4" />
               </Button>
             </div>
           </div>
-          {open === s.id && <SlideTimingForm slide={s} busy={busy} error={updateError?.slideId === s.id ? updateError.message : null} onSave={(input) => onUpdate(s.id, input)} />}
+          {open === s.id && (
+            <SlideTimingForm
+              slide={s}
+              busy={busy}
+              error={updateError?.slideId === s.id ? updateError.message : null}
+              onSave={(input) => onUpdate(s.id, input)}
+            />
+          )}
         </li>
       ))}
     </ol>
@@ -105,10 +162,19 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
 
 /** Whether the slide is on the screens now, in words with an icon (never colour alone). */
 function SlideStateBadge({ slide }: { slide: SlideDto }) {
-  if (slide.state === 'showing') return <span className="inline-flex items-center gap-1 text-xs font-medium text-ok"><Icon name="check" className="size-3.5" />Showing</span>;
+  if (slide.state === 'showing')
+    return (
+      <span className="inline-flex items-center gap-1 text-xs font-medium text-ok">
+        <Icon name="check" className="size-3.5" />
+        Showing
+      </span>
+    );
   const label = slide.state === 'scheduled' ? 'Scheduled' : slide.state === 'ended' ? 'Ended' : 'Not shown';
   return (
-    <span className={`inline-flex items-center gap-1 text-xs font-medium ${slide.state === 'scheduled' ? 'text-neutral' : 'text-changed'}`} title={slide.stateText ?? undefined}>
+    <span
+      className={`inline-flex items-center gap-1 text-xs font-medium ${slide.state === 'scheduled' ? 'text-neutral' : 'text-changed'}`}
+      title={slide.stateText ?? undefined}
+    >
       <Icon name={slide.state === 'scheduled' ? 'history' : 'alert'} className="size-3.5" />
       {label}
       <span className="sr-only">: {slide.stateText}</span>

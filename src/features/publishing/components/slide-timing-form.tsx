@@ -16,12 +16,25 @@ export function toLocalInput(iso: string | null): string {
 const fromLocalInput = (value: string) => (value ? new Date(value).toISOString() : null);
 
 /** Duration and optional start and end of one slide; saved together. */
-export function SlideTimingForm({ slide, busy, error, onSave }: { slide: SlideDto; busy: boolean; error?: string | null; onSave: (input: SlideUpdateInput) => void }) {
+export function SlideTimingForm({
+  slide,
+  busy,
+  error,
+  onSave,
+}: {
+  slide: SlideDto;
+  busy: boolean;
+  error?: string | null;
+  onSave: (input: SlideUpdateInput) => void;
+}) {
   const [duration, setDuration] = useState(String(slide.durationS));
   const [startsAt, setStartsAt] = useState(toLocalInput(slide.startsAt));
   const [endsAt, setEndsAt] = useState(toLocalInput(slide.endsAt));
   const [caption, setCaption] = useState(slide.caption);
-  const clamped = Math.min(ChannelLimits.durationMax, Math.max(ChannelLimits.durationMin, Math.round(Number(duration) || ChannelLimits.durationDefault)));
+  const clamped = Math.min(
+    ChannelLimits.durationMax,
+    Math.max(ChannelLimits.durationMin, Math.round(Number(duration) || ChannelLimits.durationDefault)),
+  );
   return (
     <form
       aria-label={`Timing for slide ${slide.position + 1}`}
@@ -29,7 +42,12 @@ export function SlideTimingForm({ slide, busy, error, onSave }: { slide: SlideDt
       onSubmit={(e) => {
         e.preventDefault();
         setDuration(String(clamped));
-        onSave({ durationS: clamped, startsAt: fromLocalInput(startsAt), endsAt: fromLocalInput(endsAt), ...(slide.kind === 'image' ? { caption } : {}) });
+        onSave({
+          durationS: clamped,
+          startsAt: fromLocalInput(startsAt),
+          endsAt: fromLocalInput(endsAt),
+          ...(slide.kind === 'image' ? { caption } : {}),
+        });
       }}
     >
       <TextField
@@ -41,11 +59,31 @@ export function SlideTimingForm({ slide, busy, error, onSave }: { slide: SlideDt
         onChange={(e) => setDuration(e.target.value)}
         hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
       />
-      <TextField label="Show from (optional)" type="datetime-local" value={startsAt} onChange={(e) => setStartsAt(e.target.value)} hint="Your local time" />
-      <TextField label="Show until (optional)" type="datetime-local" value={endsAt} onChange={(e) => setEndsAt(e.target.value)} error={error ?? undefined} />
-      <Button type="submit" variant="secondary" busy={busy}>Save timing</Button>
+      <TextField
+        label="Show from (optional)"
+        type="datetime-local"
+        value={startsAt}
+        onChange={(e) => setStartsAt(e.target.value)}
+        hint="Your local time"
+      />
+      <TextField
+        label="Show until (optional)"
+        type="datetime-local"
+        value={endsAt}
+        onChange={(e) => setEndsAt(e.target.value)}
+        error={error ?? undefined}
+      />
+      <Button type="submit" variant="secondary" busy={busy}>
+        Save timing
+      </Button>
       {slide.kind === 'image' && (
-        <TextField className="sm:col-span-4" label="Caption" maxLength={ChannelLimits.captionMax} value={caption} onChange={(e) => setCaption(e.target.value)} />
+        <TextField
+          className="sm:col-span-4"
+          label="Caption"
+          maxLength={ChannelLimits.captionMax}
+          value={caption}
+          onChange={(e) => setCaption(e.target.value)}
+        />
       )}
     </form>
   );

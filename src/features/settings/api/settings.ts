@@ -3,7 +3,8 @@ import type { CalcModel } from '@shared/schemas/calc.ts';
 import type { PreviewRow, SettingsDto, SettingsUpdateInput } from '@shared/schemas/settings.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 
-export const settingsQueryOptions = () => queryOptions({ queryKey: ['settings'], queryFn: async () => (await api.get<ApiData<SettingsDto>>('/settings')).data });
+export const settingsQueryOptions = () =>
+  queryOptions({ queryKey: ['settings'], queryFn: async () => (await api.get<ApiData<SettingsDto>>('/settings')).data });
 
 export const useSettings = () => useQuery(settingsQueryOptions());
 
@@ -15,12 +16,16 @@ export interface CosmologyPreview {
 }
 
 export const usePreviewCosmology = () =>
-  useMutation({ mutationFn: async (model: CalcModel) => (await api.post<ApiData<CosmologyPreview>>('/settings/cosmology/preview', { model })).data });
+  useMutation({
+    mutationFn: async (model: CalcModel) =>
+      (await api.post<ApiData<CosmologyPreview>>('/settings/cosmology/preview', { model })).data,
+  });
 
 export function useChangeCosmology() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (input: { model: CalcModel; expectedVersion: number }) => (await api.put<ApiData<SettingsDto>>('/settings/cosmology', input)).data,
+    mutationFn: async (input: { model: CalcModel; expectedVersion: number }) =>
+      (await api.put<ApiData<SettingsDto>>('/settings/cosmology', input)).data,
     onSuccess: (settings) => {
       queryClient.setQueryData(settingsQueryOptions().queryKey, settings);
       void queryClient.invalidateQueries({ queryKey: ['statements'] });

@@ -4,29 +4,48 @@ import { formatSig } from '@/components/working/format-number.ts';
 
 // Stored values come back from unit conversion with float noise (16399999.999999998); the working shows six figures too.
 const uncertainty = (i: StatementDto['inputs'][number]) =>
-  i.sigma != null ? `± ${formatSig(i.sigma)}` : i.minus != null && i.plus != null ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}` : 'not stated';
+  i.sigma != null
+    ? `± ${formatSig(i.sigma)}`
+    : i.minus != null && i.plus != null
+      ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}`
+      : 'not stated';
 
 /** The preferred measurements the statement used, each with its source (or why there are none). */
 export function StatementInputs({ statement }: { statement: StatementDto }) {
   if (statement.inputs.length === 0) {
     return (
       <section aria-labelledby="inputs-heading" className="space-y-2">
-        <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">Measurements used</h2>
+        <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">
+          Measurements used
+        </h2>
         <p className="text-sm text-muted">
-          None from the catalogue{statement.venue ? `: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working)` : ''}.
+          None from the catalogue
+          {statement.venue
+            ? `: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working)`
+            : ''}
+          .
         </p>
       </section>
     );
   }
   return (
     <section aria-labelledby="inputs-heading" className="space-y-3">
-      <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">Measurements used</h2>
+      <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">
+        Measurements used
+      </h2>
       <DataTable columns={[{ label: 'Quantity' }, { label: 'Value' }, { label: 'Uncertainty (68 %)' }, { label: 'Source' }]}>
         {statement.inputs.map((i) => (
           <tr key={i.measurementId} className="h-10 border-b border-rule last:border-0">
-            <td className="px-4 py-2">{i.quantity.replaceAll('_', ' ')}{i.band ? ` (${i.band})` : ''}</td>
-            <td className="px-4 py-2 tabular-nums">{formatSig(i.value)} {i.unit}</td>
-            <td className={`px-4 py-2 tabular-nums ${i.sigma == null && i.minus == null ? 'text-changed' : ''}`}>{uncertainty(i)}</td>
+            <td className="px-4 py-2">
+              {i.quantity.replaceAll('_', ' ')}
+              {i.band ? ` (${i.band})` : ''}
+            </td>
+            <td className="px-4 py-2 tabular-nums">
+              {formatSig(i.value)} {i.unit}
+            </td>
+            <td className={`px-4 py-2 tabular-nums ${i.sigma == null && i.minus == null ? 'text-changed' : ''}`}>
+              {uncertainty(i)}
+            </td>
             <td className="px-4 py-2 text-muted">{i.citation}</td>
           </tr>
         ))}

@@ -9,7 +9,9 @@ export function StatementTexts({ statement }: { statement: StatementDto }) {
   const changed = statement.status === 'changed' && statement.acknowledgedTexts;
   return (
     <section aria-labelledby="wording-heading" className="space-y-3">
-      <h2 id="wording-heading" className="text-lg font-semibold tracking-tight">Public wording</h2>
+      <h2 id="wording-heading" className="text-lg font-semibold tracking-tight">
+        Public wording
+      </h2>
       <div className="divide-y divide-rule rounded-lg border border-rule bg-panel">
         {STATEMENT_LOCALES.map((locale) => (
           <div key={locale} lang={locale} className="px-5 py-4">
@@ -18,7 +20,9 @@ export function StatementTexts({ statement }: { statement: StatementDto }) {
               <div className="grid gap-4 md:grid-cols-2">
                 <div>
                   <p className="mb-1 text-xs text-muted">Accepted wording (on pages now)</p>
-                  <p className="font-serif text-[17px] leading-relaxed text-ink/80 line-through decoration-changed/60">{statement.acknowledgedTexts?.[locale]}</p>
+                  <p className="font-serif text-[17px] leading-relaxed text-ink/80 line-through decoration-changed/60">
+                    {statement.acknowledgedTexts?.[locale]}
+                  </p>
                 </div>
                 <div>
                   <p className="mb-1 text-xs text-changed">New wording (needs acceptance)</p>

@@ -15,13 +15,21 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
       {statements.map((s) => (
         <tr key={s.id} className="border-b border-rule align-top last:border-0 hover:bg-wash/60">
           <td className="max-w-xl px-4 py-2.5">
-            <Link to={paths.statement.href(s.id)} className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline">
+            <Link
+              to={paths.statement.href(s.id)}
+              className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline"
+            >
               {s.texts?.[locale] ?? '—'}
             </Link>
-            <span className="mt-0.5 block text-xs text-muted">{s.template.title}{s.venue ? ` · ${venueNightText(s)}` : ''}</span>
+            <span className="mt-0.5 block text-xs text-muted">
+              {s.template.title}
+              {s.venue ? ` · ${venueNightText(s)}` : ''}
+            </span>
           </td>
           <td className="px-4 py-2.5">{s.object.name}</td>
-          <td className="px-4 py-2.5"><StatementStatusBadge status={s.status} /></td>
+          <td className="px-4 py-2.5">
+            <StatementStatusBadge status={s.status} />
+          </td>
           <td className="whitespace-nowrap px-4 py-2.5 text-muted">{when.format(new Date(s.computedAt))}</td>
         </tr>
       ))}

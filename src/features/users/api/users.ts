@@ -18,7 +18,8 @@ export function useInviteUser() {
 export function useUpdateUser() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async ({ id, ...input }: UserUpdateInput & { id: string }) => (await api.patch<ApiData<UserDto>>(`/users/${id}`, input)).data,
+    mutationFn: async ({ id, ...input }: UserUpdateInput & { id: string }) =>
+      (await api.patch<ApiData<UserDto>>(`/users/${id}`, input)).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: usersQueryOptions().queryKey }),
   });
 }

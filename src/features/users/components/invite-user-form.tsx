@@ -25,14 +25,25 @@ export function InviteUserForm({ onDone }: { onDone: () => void }) {
     });
   });
   return (
-    <form onSubmit={onSubmit} noValidate className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-3" aria-label="Invite someone">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-3"
+      aria-label="Invite someone"
+    >
       {formError && (
         <div className="sm:col-span-3">
           <Notice tone="error">{formError}</Notice>
         </div>
       )}
       <TextField label="Name" autoComplete="off" autoFocus error={formState.errors.name?.message} {...register('name')} />
-      <TextField label="E-mail address" type="email" autoComplete="off" error={formState.errors.email?.message} {...register('email')} />
+      <TextField
+        label="E-mail address"
+        type="email"
+        autoComplete="off"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
       <SelectField label="Role" error={formState.errors.role?.message} {...register('role')}>
         {ROLES.map((role) => (
           <option key={role} value={role}>

@@ -8,9 +8,26 @@ import { useResendInvitation, useUpdateUser } from '../api/users.ts';
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 function Status({ user }: { user: UserDto }) {
-  if (!user.active) return <span className="inline-flex items-center gap-1 text-broken"><Icon name="x" className="size-3.5" />Deactivated</span>;
-  if (user.invitationPending) return <span className="inline-flex items-center gap-1 text-changed"><Icon name="mail" className="size-3.5" />Invited</span>;
-  return <span className="inline-flex items-center gap-1 text-ok"><Icon name="check" className="size-3.5" />Active</span>;
+  if (!user.active)
+    return (
+      <span className="inline-flex items-center gap-1 text-broken">
+        <Icon name="x" className="size-3.5" />
+        Deactivated
+      </span>
+    );
+  if (user.invitationPending)
+    return (
+      <span className="inline-flex items-center gap-1 text-changed">
+        <Icon name="mail" className="size-3.5" />
+        Invited
+      </span>
+    );
+  return (
+    <span className="inline-flex items-center gap-1 text-ok">
+      <Icon name="check" className="size-3.5" />
+      Active
+    </span>
+  );
 }
 
 /** Staff accounts with their role and status; admins change roles and deactivate here. */
@@ -19,8 +36,20 @@ export function UsersTable({ users }: { users: UserDto[] }) {
   const resend = useResendInvitation();
   return (
     <DataTable
-      columns={[{ label: 'Name' }, { label: 'Role' }, { label: 'Status' }, { label: 'Last signed in' }, { label: 'Actions', hidden: true }]}
-      footer={(update.error || resend.error) && <p role="alert" className="border-t border-rule px-4 py-2 text-sm text-broken">{(update.error ?? resend.error)?.message}</p>}
+      columns={[
+        { label: 'Name' },
+        { label: 'Role' },
+        { label: 'Status' },
+        { label: 'Last signed in' },
+        { label: 'Actions', hidden: true },
+      ]}
+      footer={
+        (update.error || resend.error) && (
+          <p role="alert" className="border-t border-rule px-4 py-2 text-sm text-broken">
+            {(update.error ?? resend.error)?.message}
+          </p>
+        )
+      }
     >
       {users.map((user) => (
         <tr key={user.id} className="h-10 border-b border-rule last:border-0">
@@ -37,24 +66,35 @@ export function UsersTable({ users }: { users: UserDto[] }) {
                 className="rounded border border-rule bg-panel px-2 py-1 text-sm"
               >
                 {ROLES.map((role) => (
-                  <option key={role} value={role}>{ROLE_LABELS[role]}</option>
+                  <option key={role} value={role}>
+                    {ROLE_LABELS[role]}
+                  </option>
                 ))}
               </select>
             ) : (
               ROLE_LABELS[user.role]
             )}
           </td>
-          <td className="px-4 py-2"><Status user={user} /></td>
+          <td className="px-4 py-2">
+            <Status user={user} />
+          </td>
           <td className="px-4 py-2 text-muted">{user.lastSignInAt ? dateFormat.format(new Date(user.lastSignInAt)) : '—'}</td>
           <td className="px-4 py-2 text-right">
             <div className="flex justify-end gap-2">
               {user.invitationPending && user.active && (
-                <Button variant="quiet" onClick={() => resend.mutate(user.id)} busy={resend.isPending && resend.variables === user.id}>
+                <Button
+                  variant="quiet"
+                  onClick={() => resend.mutate(user.id)}
+                  busy={resend.isPending && resend.variables === user.id}
+                >
                   Resend invitation
                 </Button>
               )}
               {user.can.deactivate && (
-                <Button variant={user.active ? 'danger' : 'secondary'} onClick={() => update.mutate({ id: user.id, active: !user.active })}>
+                <Button
+                  variant={user.active ? 'danger' : 'secondary'}
+                  onClick={() => update.mutate({ id: user.id, active: !user.active })}
+                >
                   {user.active ? 'Deactivate' : 'Reactivate'}
                 </Button>
               )}

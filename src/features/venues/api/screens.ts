@@ -18,10 +18,19 @@ function useScreenMutation<T, V>(venueId: string, fn: (vars: V) => Promise<T>) {
 }
 
 export const useAddScreen = (venueId: string) =>
-  useScreenMutation(venueId, async (input: ScreenCreateInput) => (await api.post<ApiData<PairingCodeDto>>(`/venues/${venueId}/screens`, input)).data);
+  useScreenMutation(
+    venueId,
+    async (input: ScreenCreateInput) => (await api.post<ApiData<PairingCodeDto>>(`/venues/${venueId}/screens`, input)).data,
+  );
 
 export const useRepairScreen = (venueId: string) =>
-  useScreenMutation(venueId, async (screenId: string) => (await api.post<ApiData<PairingCodeDto>>(`/venues/${venueId}/screens/${screenId}/pairing`)).data);
+  useScreenMutation(
+    venueId,
+    async (screenId: string) => (await api.post<ApiData<PairingCodeDto>>(`/venues/${venueId}/screens/${screenId}/pairing`)).data,
+  );
 
 export const useRevokeScreen = (venueId: string) =>
-  useScreenMutation(venueId, async (screenId: string) => (await api.post<ApiData<KioskScreenDto>>(`/venues/${venueId}/screens/${screenId}/revoke`)).data);
+  useScreenMutation(
+    venueId,
+    async (screenId: string) => (await api.post<ApiData<KioskScreenDto>>(`/venues/${venueId}/screens/${screenId}/revoke`)).data,
+  );

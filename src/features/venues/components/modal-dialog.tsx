@@ -4,7 +4,17 @@ import { useEffect, useRef, type ReactNode } from 'react';
  * A modal built on the native <dialog>: focus moves in and is trapped by the browser, Escape
  * closes it, and the page behind is inert.
  */
-export function ModalDialog({ title, open, onClose, children }: { title: string; open: boolean; onClose: () => void; children: ReactNode }) {
+export function ModalDialog({
+  title,
+  open,
+  onClose,
+  children,
+}: {
+  title: string;
+  open: boolean;
+  onClose: () => void;
+  children: ReactNode;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   useEffect(() => {
     const dialog = ref.current;

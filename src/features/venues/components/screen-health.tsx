@@ -7,7 +7,12 @@ const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle
 export function ScreenHealth({ screen }: { screen: KioskScreenDto }) {
   switch (screen.health) {
     case 'online':
-      return <span className="inline-flex items-center gap-1.5 text-ok"><Icon name="check" className="size-4" />Online</span>;
+      return (
+        <span className="inline-flex items-center gap-1.5 text-ok">
+          <Icon name="check" className="size-4" />
+          Online
+        </span>
+      );
     case 'offline':
       return (
         <span className="inline-flex items-center gap-1.5 text-broken">
@@ -16,14 +21,26 @@ export function ScreenHealth({ screen }: { screen: KioskScreenDto }) {
         </span>
       );
     case 'never-seen':
-      return <span className="inline-flex items-center gap-1.5 text-changed"><Icon name="info" className="size-4" />Paired, not yet seen</span>;
+      return (
+        <span className="inline-flex items-center gap-1.5 text-changed">
+          <Icon name="info" className="size-4" />
+          Paired, not yet seen
+        </span>
+      );
     case 'revoked':
-      return <span className="inline-flex items-center gap-1.5 text-neutral"><Icon name="x" className="size-4" />Revoked</span>;
+      return (
+        <span className="inline-flex items-center gap-1.5 text-neutral">
+          <Icon name="x" className="size-4" />
+          Revoked
+        </span>
+      );
     default:
       return (
         <span className="inline-flex items-center gap-1.5 text-neutral">
           <Icon name="key" className="size-4" />
-          {screen.pairingExpiresAt ? `Waiting for pairing (code valid until ${when.format(new Date(screen.pairingExpiresAt))})` : 'Not paired'}
+          {screen.pairingExpiresAt
+            ? `Waiting for pairing (code valid until ${when.format(new Date(screen.pairingExpiresAt))})`
+            : 'Not paired'}
         </span>
       );
   }

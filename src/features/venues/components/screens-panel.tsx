@@ -16,8 +16,13 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
     <ModalDialog title={pairing ? `Pairing code for ${pairing.screen.name}` : ''} open={!!pairing} onClose={onClose}>
       {pairing && (
         <>
-          <p className="text-sm text-muted">Type this code on the screen’s player page. It works once, until {time.format(new Date(pairing.expiresAt))}.</p>
-          <p className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums" aria-label={`Pairing code ${pairing.pairingCode.split('').join(' ')}`}>
+          <p className="text-sm text-muted">
+            Type this code on the screen’s player page. It works once, until {time.format(new Date(pairing.expiresAt))}.
+          </p>
+          <p
+            className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums"
+            aria-label={`Pairing code ${pairing.pairingCode.split('').join(' ')}`}
+          >
             {pairing.pairingCode}
           </p>
           <Notice tone="warning">It is shown only this once. If it is lost, re-pair the screen for a new one.</Notice>
@@ -30,13 +35,27 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
   );
 }
 
-function ConfirmRevoke({ screen, busy, onConfirm, onClose }: { screen: KioskScreenDto | null; busy: boolean; onConfirm: () => void; onClose: () => void }) {
+function ConfirmRevoke({
+  screen,
+  busy,
+  onConfirm,
+  onClose,
+}: {
+  screen: KioskScreenDto | null;
+  busy: boolean;
+  onConfirm: () => void;
+  onClose: () => void;
+}) {
   return (
     <ModalDialog title={screen ? `Revoke ${screen.name}?` : ''} open={!!screen} onClose={onClose}>
       <p className="text-sm">The screen stops at once and shows its pairing page. To use it again, re-pair it with a new code.</p>
       <div className="mt-5 flex justify-end gap-2">
-        <Button variant="secondary" onClick={onClose}>Cancel</Button>
-        <Button variant="danger" busy={busy} onClick={onConfirm}>Revoke screen</Button>
+        <Button variant="secondary" onClick={onClose}>
+          Cancel
+        </Button>
+        <Button variant="danger" busy={busy} onClick={onConfirm}>
+          Revoke screen
+        </Button>
       </div>
     </ModalDialog>
   );
@@ -63,7 +82,10 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
           setName('');
           setPairing(result);
         },
-        onError: (error) => setNameError(error instanceof ApiRequestError ? (error.fields?.name ?? error.message) : 'Something went wrong. Try again.'),
+        onError: (error) =>
+          setNameError(
+            error instanceof ApiRequestError ? (error.fields?.name ?? error.message) : 'Something went wrong. Try again.',
+          ),
       },
     );
   };
@@ -72,11 +94,17 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
     <section aria-labelledby="screens-heading" className="rounded-lg border border-rule bg-panel">
       <header className="flex items-center gap-2 border-b border-rule px-4 py-3">
         <Icon name="screen" className="size-5 text-muted" />
-        <h2 id="screens-heading" className="font-semibold">Kiosk screens</h2>
+        <h2 id="screens-heading" className="font-semibold">
+          Kiosk screens
+        </h2>
         <span className="text-xs text-muted">Online means seen in the last two minutes.</span>
       </header>
       {screens.isPending && <p className="px-4 py-3 text-sm text-muted">Loading screens…</p>}
-      {screens.error && <div className="p-4"><Notice tone="error">{screens.error.message}</Notice></div>}
+      {screens.error && (
+        <div className="p-4">
+          <Notice tone="error">{screens.error.message}</Notice>
+        </div>
+      )}
       {screens.data && screens.data.length === 0 && <p className="px-4 py-3 text-sm text-muted">No screens yet.</p>}
       {screens.data && screens.data.length > 0 && (
         <ul className="divide-y divide-rule">
@@ -87,11 +115,17 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
               {screen.playerVersion && <span className="text-xs text-muted">player {screen.playerVersion}</span>}
               {canManage && (
                 <span className="ml-auto flex gap-2">
-                  <Button variant="quiet" busy={repair.isPending && repair.variables === screen.id} onClick={() => repair.mutate(screen.id, { onSuccess: setPairing })}>
+                  <Button
+                    variant="quiet"
+                    busy={repair.isPending && repair.variables === screen.id}
+                    onClick={() => repair.mutate(screen.id, { onSuccess: setPairing })}
+                  >
                     Re-pair
                   </Button>
                   {screen.health !== 'revoked' && screen.health !== 'awaiting-pairing' && (
-                    <Button variant="danger" onClick={() => setRevoking(screen)}>Revoke</Button>
+                    <Button variant="danger" onClick={() => setRevoking(screen)}>
+                      Revoke
+                    </Button>
                   )}
                 </span>
               )}
@@ -99,10 +133,24 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
           ))}
         </ul>
       )}
-      {(repair.error || revoke.error) && <p role="alert" className="px-4 py-2 text-sm text-broken">{(repair.error ?? revoke.error)?.message}</p>}
+      {(repair.error || revoke.error) && (
+        <p role="alert" className="px-4 py-2 text-sm text-broken">
+          {(repair.error ?? revoke.error)?.message}
+        </p>
+      )}
       {canManage && (
-        <form onSubmit={onAdd} aria-label="Add a screen" className="flex flex-wrap items-end gap-3 border-t border-rule px-4 py-3">
-          <TextField label="New screen’s name" value={name} onChange={(e) => setName(e.target.value)} error={nameError} className="min-w-64 flex-1" />
+        <form
+          onSubmit={onAdd}
+          aria-label="Add a screen"
+          className="flex flex-wrap items-end gap-3 border-t border-rule px-4 py-3"
+        >
+          <TextField
+            label="New screen’s name"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            error={nameError}
+            className="min-w-64 flex-1"
+          />
           <Button type="submit" busy={add.isPending}>
             <Icon name="plus" className="size-4" />
             Add screen

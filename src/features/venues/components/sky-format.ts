@@ -8,7 +8,8 @@ const whole = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
 export const formatAu = (value: number) => `${au.format(value)} au`;
 
 /** "94.7 million km" or "384,400 km" */
-export const formatKm = (value: number) => (value >= 1e6 ? `${millions.format(value / 1e6)} million km` : `${whole.format(value)} km`);
+export const formatKm = (value: number) =>
+  value >= 1e6 ? `${millions.format(value / 1e6)} million km` : `${whole.format(value)} km`;
 
 /** "5 min 16 s", "1 h 04 min", "1.3 s" */
 export function formatLightTime(seconds: number): string {

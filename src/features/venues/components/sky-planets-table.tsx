@@ -17,9 +17,15 @@ function Visible({ planet }: { planet: PlanetTonight }) {
   return (
     <>
       {planet.upAfterDusk ? (
-        <span className="inline-flex items-center gap-1 font-medium text-ok"><Icon name="check" className="size-4" />Yes</span>
+        <span className="inline-flex items-center gap-1 font-medium text-ok">
+          <Icon name="check" className="size-4" />
+          Yes
+        </span>
       ) : (
-        <span className="inline-flex items-center gap-1 font-medium text-neutral"><Icon name="x" className="size-4" />No</span>
+        <span className="inline-flex items-center gap-1 font-medium text-neutral">
+          <Icon name="x" className="size-4" />
+          No
+        </span>
       )}
       <span className="block text-xs text-muted">{planet.visibility}</span>
     </>
@@ -43,11 +49,24 @@ export function SkyPlanetsTable({ planets, atTime }: { planets: PlanetTonight[];
     <DataTable compact caption="Planets tonight" columns={columns(atTime)}>
       {planets.map((p) => (
         <tr key={p.id} className="border-b border-rule align-top last:border-0">
-          <th scope="row" className="px-3 py-2 font-medium whitespace-nowrap">{p.name}</th>
-          <td className="min-w-44 px-3 py-2"><Visible planet={p} /></td>
+          <th scope="row" className="px-3 py-2 font-medium whitespace-nowrap">
+            {p.name}
+          </th>
+          <td className="min-w-44 px-3 py-2">
+            <Visible planet={p} />
+          </td>
           {p.times.state === 'rises-and-sets' ? (
             <>
-              <EventCell event={p.times.rise} note={p.times.earlierSet ? `Up at noon until ${p.times.earlierSet.text}` : p.times.laterRise ? `Rises again ${p.times.laterRise.text}` : undefined} />
+              <EventCell
+                event={p.times.rise}
+                note={
+                  p.times.earlierSet
+                    ? `Up at noon until ${p.times.earlierSet.text}`
+                    : p.times.laterRise
+                      ? `Rises again ${p.times.laterRise.text}`
+                      : undefined
+                }
+              />
               <EventCell event={p.times.transit} />
               <EventCell event={p.times.set} />
             </>

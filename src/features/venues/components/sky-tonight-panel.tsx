@@ -22,7 +22,9 @@ function SunCard({ sky }: { sky: SkyTonight }) {
   const s = sky.sun;
   return (
     <section aria-labelledby="sun-heading" className="rounded-lg border border-rule bg-panel p-4">
-      <h3 id="sun-heading" className="font-semibold">Sun and twilight</h3>
+      <h3 id="sun-heading" className="font-semibold">
+        Sun and twilight
+      </h3>
       <p className="mt-1 text-xs text-muted">{s.darkness.text}</p>
       <dl className="mt-2 divide-y divide-rule text-sm">
         <Row label="Sunset" value={s.sunset.text} />
@@ -40,7 +42,10 @@ function MoonCard({ sky }: { sky: SkyTonight }) {
   const m = sky.moon;
   return (
     <section aria-labelledby="moon-heading" className="rounded-lg border border-rule bg-panel p-4">
-      <h3 id="moon-heading" className="flex items-center gap-2 font-semibold"><Icon name="moon" className="size-4 text-muted" />Moon: {m.phaseName}</h3>
+      <h3 id="moon-heading" className="flex items-center gap-2 font-semibold">
+        <Icon name="moon" className="size-4 text-muted" />
+        Moon: {m.phaseName}
+      </h3>
       <dl className="mt-2 divide-y divide-rule text-sm">
         <Row label="Illuminated" value={percent.format(m.illuminatedFraction)} />
         <Row label="Phase angle" value={`${m.phaseAngleDeg.toFixed(1)}°`} />
@@ -48,7 +53,10 @@ function MoonCard({ sky }: { sky: SkyTonight }) {
         <Row label={m.times.earlierSet ? 'Rises again' : 'Rises'} value={m.times.rise.text} />
         <Row label="Sets" value={m.times.set.text} />
         {m.times.laterRise && <Row label="Rises again" value={m.times.laterRise.text} />}
-        <Row label={`At ${sky.observation.localTime}`} value={`${formatAltitude(m.altitudeDeg)} ${m.direction}${m.aboveHorizon ? '' : ', below the horizon'}`} />
+        <Row
+          label={`At ${sky.observation.localTime}`}
+          value={`${formatAltitude(m.altitudeDeg)} ${m.direction}${m.aboveHorizon ? '' : ', below the horizon'}`}
+        />
         <Row label="Distance" value={formatKm(m.distanceKm)} />
       </dl>
     </section>
@@ -65,7 +73,9 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
     <section aria-labelledby="sky-heading" className="space-y-4">
       <header className="flex flex-wrap items-end justify-between gap-4">
         <div>
-          <h2 id="sky-heading" className="text-lg font-semibold">Sky tonight</h2>
+          <h2 id="sky-heading" className="text-lg font-semibold">
+            Sky tonight
+          </h2>
           {data && (
             <p className="text-sm text-muted">
               Night of {data.localDate} ({data.timeZone}). Positions at {data.observation.text}.
@@ -75,11 +85,21 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
         <div className="flex items-end gap-3 text-sm">
           <label className="flex flex-col gap-1">
             <span className="font-medium">Night of</span>
-            <input type="date" value={date} onChange={(e) => setDate(e.target.value)} className="rounded-md border border-rule bg-panel px-2 py-1.5" />
+            <input
+              type="date"
+              value={date}
+              onChange={(e) => setDate(e.target.value)}
+              className="rounded-md border border-rule bg-panel px-2 py-1.5"
+            />
           </label>
           <label className="flex flex-col gap-1">
             <span className="font-medium">Positions at</span>
-            <input type="time" value={at} onChange={(e) => setAt(e.target.value)} className="rounded-md border border-rule bg-panel px-2 py-1.5" />
+            <input
+              type="time"
+              value={at}
+              onChange={(e) => setAt(e.target.value)}
+              className="rounded-md border border-rule bg-panel px-2 py-1.5"
+            />
           </label>
         </div>
       </header>
@@ -93,7 +113,9 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
           </div>
           <SkyPlanetsTable planets={data.planets} atTime={data.observation.localTime ?? ''} />
           <p className="text-xs text-muted">
-            {sky.data!.stored ? `Computed ${computedFormat.format(new Date(sky.data!.computedAt))}; recomputed daily and whenever the venue moves.` : 'Computed for the chosen time; not stored.'}{' '}
+            {sky.data!.stored
+              ? `Computed ${computedFormat.format(new Date(sky.data!.computedAt))}; recomputed daily and whenever the venue moves.`
+              : 'Computed for the chosen time; not stored.'}{' '}
             {data.method.notes.join(' ')} Distances along the light’s path, with 1 au = 149,597,870.7 km.
           </p>
         </>

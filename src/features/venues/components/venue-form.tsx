@@ -18,7 +18,15 @@ function useTimeZones(): string[] {
 /**
  * Adds a venue, or changes one when `venue` is given. Moving a venue recomputes its sky. Focus starts in its first field, since the button that opened it is gone.
  */
-export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDone: (saved: VenueDto) => void; onCancel: () => void }) {
+export function VenueForm({
+  venue,
+  onDone,
+  onCancel,
+}: {
+  venue?: VenueDto;
+  onDone: (saved: VenueDto) => void;
+  onCancel: () => void;
+}) {
   const create = useCreateVenue();
   const update = useUpdateVenue(venue?.id ?? '');
   const zones = useTimeZones();
@@ -26,7 +34,13 @@ export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDon
   const { register, handleSubmit, setError, formState } = useForm<VenueCreateInput, unknown, VenueCreateValues>({
     resolver: zodResolver(VenueCreateSchema),
     defaultValues: venue
-      ? { name: venue.name, latitude: String(venue.latitude), longitude: String(venue.longitude), elevationM: String(venue.elevationM), timeZone: venue.timeZone }
+      ? {
+          name: venue.name,
+          latitude: String(venue.latitude),
+          longitude: String(venue.longitude),
+          elevationM: String(venue.elevationM),
+          timeZone: venue.timeZone,
+        }
       : { elevationM: '0', timeZone: Intl.DateTimeFormat().resolvedOptions().timeZone },
   });
   const mutation = venue ? update : create;
@@ -39,13 +53,25 @@ export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDon
   });
   const errors = formState.errors;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={venue ? 'Edit venue' : 'Add a venue'} className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-6">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      aria-label={venue ? 'Edit venue' : 'Add a venue'}
+      className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-6"
+    >
       {formError && (
         <div className="sm:col-span-6">
           <Notice tone="error">{formError}</Notice>
         </div>
       )}
-      <TextField className="sm:col-span-3" label="Name" autoComplete="off" autoFocus error={errors.name?.message} {...register('name')} />
+      <TextField
+        className="sm:col-span-3"
+        label="Name"
+        autoComplete="off"
+        autoFocus
+        error={errors.name?.message}
+        {...register('name')}
+      />
       <TextField
         className="sm:col-span-3"
         label="Time zone"
@@ -60,9 +86,30 @@ export function VenueForm({ venue, onDone, onCancel }: { venue?: VenueDto; onDon
           <option key={z} value={z} />
         ))}
       </datalist>
-      <TextField className="sm:col-span-2" label="Latitude (°)" inputMode="decimal" hint="North positive, −90 to 90" error={errors.latitude?.message} {...register('latitude')} />
-      <TextField className="sm:col-span-2" label="Longitude (°)" inputMode="decimal" hint="East positive, −180 to 180" error={errors.longitude?.message} {...register('longitude')} />
-      <TextField className="sm:col-span-2" label="Elevation (m)" inputMode="decimal" hint="Above sea level" error={errors.elevationM?.message} {...register('elevationM')} />
+      <TextField
+        className="sm:col-span-2"
+        label="Latitude (°)"
+        inputMode="decimal"
+        hint="North positive, −90 to 90"
+        error={errors.latitude?.message}
+        {...register('latitude')}
+      />
+      <TextField
+        className="sm:col-span-2"
+        label="Longitude (°)"
+        inputMode="decimal"
+        hint="East positive, −180 to 180"
+        error={errors.longitude?.message}
+        {...register('longitude')}
+      />
+      <TextField
+        className="sm:col-span-2"
+        label="Elevation (m)"
+        inputMode="decimal"
+        hint="Above sea level"
+        error={errors.elevationM?.message}
+        {...register('elevationM')}
+      />
       <div className="flex gap-2 sm:col-span-6">
         <Button type="submit" busy={mutation.isPending}>
           {venue ? 'Save changes' : 'Add venue'}

@@ -13,7 +13,15 @@ export function formatPosition(latitude: number, longitude: number): string {
 /** Venues with their position, time zone and number of screens. */
 export function VenuesTable({ venues }: { venues: VenueDto[] }) {
   return (
-    <DataTable columns={[{ label: 'Venue' }, { label: 'Position' }, { label: 'Elevation' }, { label: 'Time zone' }, { label: 'Screens', align: 'right' }]}>
+    <DataTable
+      columns={[
+        { label: 'Venue' },
+        { label: 'Position' },
+        { label: 'Elevation' },
+        { label: 'Time zone' },
+        { label: 'Screens', align: 'right' },
+      ]}
+    >
       {venues.map((venue) => (
         <tr key={venue.id} className="h-10 border-b border-rule last:border-0">
           <td className="px-4 py-2">
