@@ -3,7 +3,7 @@ import { fileURLToPath, URL } from 'node:url';
 import { defineConfig } from 'vite';
 import react from '@vitejs/plugin-react';
 import tailwindcss from '@tailwindcss/vite';
-import { bundleBudget } from './tests/bench/bundle-budget.ts';
+import { bundleBudget } from './server/build/bundle-budget.ts';
 
 const alias = {
   '@': fileURLToPath(new URL('./src', import.meta.url)),

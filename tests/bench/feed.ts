@@ -16,7 +16,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import autocannon from 'autocannon';
 import { ensureDatabase, localDatabaseUrl, startLocalPostgres } from '../../server/db/local-postgres.ts';
-import { entrySize } from './bundle-budget.ts';
+import { entrySize } from '../../server/build/bundle-budget.ts';
 
 const dataDir = path.resolve(process.env.BENCH_FEED_PGDATA ?? '.data/bench-feed-pg');
 const port = Number(process.env.BENCH_FEED_PGPORT ?? 54598);

@@ -1,5 +1,5 @@
 /**
- * Fuzz: 10,000 random and hostile requests (seeded, so reproducible). None may
+ * Fuzz: random and hostile requests (2,000 in npm test, 10,000 with npm run test:fuzz) (seeded, so reproducible). None may
  * throw, every number anywhere in the output must be finite, and every output
  * must match the result schema.
  */
@@ -152,11 +152,16 @@ function findNonFinite(x: unknown, path = '$'): string | null {
   return null;
 }
 
+// `npm test` runs a smaller sample to keep the suite quick; `npm run test:fuzz` runs the full 10,000.
+const COUNT = Number(process.env.STARPROOF_FUZZ_COUNT ?? 2_000);
+
 describe('fuzz', () => {
-  it('10,000 random and hostile requests: no throw, no non-finite number, schema-valid', { timeout: 180_000 }, () => {
+  it(`${COUNT.toLocaleString('en-GB')} random and hostile requests: no throw, no non-finite number, schema-valid`, {
+    timeout: 600_000,
+  }, () => {
     let ok = 0;
     const codes = new Map<string, number>();
-    for (let i = 0; i < 10_000; i++) {
+    for (let i = 0; i < COUNT; i++) {
       const req = request();
       let out: unknown;
       expect(() => {
@@ -169,7 +174,7 @@ describe('fuzz', () => {
       else ok++;
     }
     // The generator must reach real calculations as well as errors.
-    expect(ok).toBeGreaterThan(1000);
+    expect(ok).toBeGreaterThan(COUNT / 10);
     expect(codes.get('internal_error') ?? 0).toBe(0);
   });
 });
