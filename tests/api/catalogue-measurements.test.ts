@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { getSequelize } from '../../server/db.ts';
 import { Measurement, MeasurementHistory } from '../../server/models/index.ts';
-import { catalogueEvents } from '../../server/services/catalogue-events.ts';
-import { getPreferredMeasurements } from '../../server/services/preferred-measurements.ts';
+import { catalogueEvents } from '../../server/services/catalogue/events.ts';
+import { getPreferredMeasurements } from '../../server/services/catalogue/preferred-read.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildMeasurement, buildSkyObject, buildSource } from '../support/catalogue.ts';
 

@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { seedCatalogueDemo, DEMO_SOURCE_CITATION } from '../../server/demo/catalogue.ts';
 import { seedDemo } from '../../server/demo/seed.ts';
 import { Measurement, SkyObject, Source } from '../../server/models/index.ts';
-import { catalogueEvents } from '../../server/services/catalogue-events.ts';
+import { catalogueEvents } from '../../server/services/catalogue/events.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildMeasurement, buildSkyObject, buildSource } from '../support/catalogue.ts';
 

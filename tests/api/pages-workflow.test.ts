@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, Measurement, OutboxMessage, Page, PageRevision } from '../../server/models/index.ts';
-import { setPreferred } from '../../server/services/measurement-preferred.ts';
-import { findMediaUsage } from '../../server/services/media-usage.ts';
-import { renderPublishedPage } from '../../server/services/page-render.ts';
+import { setPreferred } from '../../server/services/catalogue/preferred-write.ts';
+import { findMediaUsage } from '../../server/services/media/media-usage.ts';
+import { renderPublishedPage } from '../../server/services/pages/page-render.ts';
 import { sendDailyDigests } from '../../server/services/pages/page-digest.ts';
 import { publishDuePages } from '../../server/services/pages/page-publish.ts';
 import { buildUser, getTestApp, resetDatabase, signedInAgent, waitForMail } from '../support/app.ts';

@@ -2,8 +2,8 @@ import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { calculate } from '../../shared/engine/calculate.ts';
 import { Measurement, Statement } from '../../server/models/index.ts';
-import { setPreferred } from '../../server/services/measurement-preferred.ts';
-import { retireMeasurement } from '../../server/services/measurement-write.ts';
+import { setPreferred } from '../../server/services/catalogue/preferred-write.ts';
+import { retireMeasurement } from '../../server/services/catalogue/measurement-write.ts';
 import {
   currentSettingsSnapshot,
   mergeScopes,

@@ -17,7 +17,7 @@ import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageRevision } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { renderPublishedPage, renderWithLookups } from '../../services/page-render.ts';
+import { renderPublishedPage, renderWithLookups } from '../../services/pages/page-render.ts';
 import { dashboardFor, setDigest } from '../../services/pages/page-dashboard.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { PageConflictError } from '../../services/pages/page-errors.ts';

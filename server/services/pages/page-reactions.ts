@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
-import { registerMediaUsageProvider } from '../media-usage.ts';
+import { registerMediaUsageProvider } from '../media/media-usage.ts';
 import { statementEvents } from '../statements/events.ts';
 import { enqueuePageRecheck } from './page-recheck.ts';
 
