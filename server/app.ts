@@ -14,7 +14,7 @@ import { apiRouter } from './routes/index.ts';
 import { kioskFeedRouter } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
-import { registerStatementTriggers } from './services/statements/triggers.ts';
+import { registerStatementTriggers } from './services/statements/index.ts';
 import { sessionMiddleware } from './session.ts';
 
 /** Options for building the app; tests pass their own database URL. */

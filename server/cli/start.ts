@@ -10,11 +10,11 @@ import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
-import { scheduleSkySnapshots } from '../services/sky/sky-snapshot-jobs.ts';
-import { schedulePageJobs } from '../services/pages/page-digest.ts';
+import { scheduleSkySnapshots } from '../services/sky/index.ts';
+import { schedulePageJobs } from '../services/pages/index.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
-import { sweepOrphanMedia } from '../services/media/media-sweep.ts';
+import { sweepOrphanMedia } from '../services/media/index.ts';
 
 const started = Date.now();
 

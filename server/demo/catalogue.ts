@@ -1,9 +1,9 @@
 import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
 import { SkyObjectInputSchema } from '@shared/schemas/sky-object.ts';
 import { Measurement, SkyObject, Source, User } from '../models/index.ts';
-import { createMeasurement } from '../services/catalogue/measurement-write.ts';
-import { setPreferred } from '../services/catalogue/preferred-write.ts';
-import { createSkyObject } from '../services/catalogue/sky-object-write.ts';
+import { createMeasurement } from '../services/catalogue/index.ts';
+import { setPreferred } from '../services/catalogue/index.ts';
+import { createSkyObject } from '../services/catalogue/index.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
 import { DEMO_OBJECTS } from './catalogue-objects.ts';
 

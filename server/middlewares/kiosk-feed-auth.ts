@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import { ChannelScreen, type KioskScreen } from '../models/index.ts';
-import { publishingEvents } from '../services/publishing/events.ts';
+import { publishingEvents } from '../services/publishing/index.ts';
 import { requireKiosk } from './kiosk-auth.ts';
 
 declare global {

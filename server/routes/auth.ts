@@ -20,10 +20,10 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { recordAudit } from '../services/audit.ts';
-import { consumeToken, issueToken } from '../services/users/auth-tokens.ts';
-import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/users/passwords.ts';
-import { signIn } from '../services/users/sign-in.ts';
-import { endUserSessions } from '../services/users/user-sessions.ts';
+import { consumeToken, issueToken } from '../services/users/index.ts';
+import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/users/index.ts';
+import { signIn } from '../services/users/index.ts';
+import { endUserSessions } from '../services/users/index.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
 function addressLimiter(limit: number) {

@@ -23,12 +23,12 @@ import { validate } from '../middlewares/validate.ts';
 import { Channel } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentChannelDetail, presentChannelRows } from '../presenters/channel.ts';
-import { createChannel, deleteChannel, updateChannel } from '../services/publishing/channel-save.ts';
-import { assignScreens } from '../services/publishing/channel-screens.ts';
-import { addSlide, removeSlide, reorderSlides, updateSlide } from '../services/publishing/channel-slides.ts';
-import { loadSlideSources } from '../services/publishing/channel-sources.ts';
-import { getKioskFeed, listenForFeedChanges } from '../services/publishing/feed-cache.ts';
-import { registerMediaUsageProvider } from '../services/media/media-usage.ts';
+import { createChannel, deleteChannel, updateChannel } from '../services/publishing/index.ts';
+import { assignScreens } from '../services/publishing/index.ts';
+import { addSlide, removeSlide, reorderSlides, updateSlide } from '../services/publishing/index.ts';
+import { loadSlideSources } from '../services/publishing/index.ts';
+import { getKioskFeed, listenForFeedChanges } from '../services/publishing/index.ts';
+import { registerMediaUsageProvider } from '../services/media/index.ts';
 import { FEED_CONTENT_TYPE } from './kiosk-feed.ts';
 
 listenForFeedChanges();

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { currentKiosk } from '../middlewares/kiosk-auth.ts';
 import { requireKioskFeed } from '../middlewares/kiosk-feed-auth.ts';
 import { sendCached } from '../middlewares/http-cache.ts';
-import { getKioskFeed, listenForFeedChanges } from '../services/publishing/feed-cache.ts';
+import { getKioskFeed, listenForFeedChanges } from '../services/publishing/index.ts';
 
 /**
  * `no-cache`: a player (or a cache in between) may keep the feed but must revalidate it every

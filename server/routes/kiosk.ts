@@ -13,8 +13,8 @@ import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kios
 import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
-import { pairScreen } from '../services/publishing/kiosk-pairing.ts';
-import { getSkySnapshot } from '../services/sky/sky-snapshots.ts';
+import { pairScreen } from '../services/publishing/index.ts';
+import { getSkySnapshot } from '../services/sky/index.ts';
 
 /** Guessing codes is slow: a few tries per address per quarter hour. */
 const pairingLimiter = rateLimit({

@@ -5,7 +5,7 @@ import { MediaLimits } from '@shared/media/limits.ts';
 import { MediaListQuerySchema, MediaUpdateSchema, type MediaListQuery, type MediaUpdateInput } from '@shared/media/schemas.ts';
 import { IdSchema } from '@shared/schemas/common.ts';
 import { ConflictError, HttpError } from '../errors.ts';
-import { requestRenditions } from '../services/media/media-renditions-job.ts';
+import { requestRenditions } from '../services/media/index.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
@@ -13,12 +13,12 @@ import { validate } from '../middlewares/validate.ts';
 import { Media, MediaRendition, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
-import { deleteMedia } from '../services/media/media-delete.ts';
-import { objectsForMedia, suggestObjects } from '../services/media/media-objects.ts';
-import { searchMedia } from '../services/media/media-search.ts';
-import { uploadMedia } from '../services/media/media-upload.ts';
-import { updateMedia } from '../services/media/media-update.ts';
-import { findMediaUsage } from '../services/media/media-usage.ts';
+import { deleteMedia } from '../services/media/index.ts';
+import { objectsForMedia, suggestObjects } from '../services/media/index.ts';
+import { searchMedia } from '../services/media/index.ts';
+import { uploadMedia } from '../services/media/index.ts';
+import { updateMedia } from '../services/media/index.ts';
+import { findMediaUsage } from '../services/media/index.ts';
 
 /** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
 async function findMedia(id: string): Promise<Media | null> {

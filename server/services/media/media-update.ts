@@ -4,7 +4,7 @@ import { requestRenditions } from './media-renditions-job.ts';
 import { Media, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { replaceMediaObjects } from './media-objects.ts';
-import { publishingEvents } from '../publishing/events.ts';
+import { publishingEvents } from '../publishing/index.ts';
 
 /**
  * Changes an image's details. Moving the focal point re-makes the renditions (the kiosk crops

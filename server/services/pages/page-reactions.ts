@@ -1,8 +1,8 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
-import { registerMediaUsageProvider } from '../media/media-usage.ts';
-import { statementEvents } from '../statements/events.ts';
+import { registerMediaUsageProvider } from '../media/index.ts';
+import { statementEvents } from '../statements/index.ts';
 import { enqueuePageRecheck } from './page-recheck.ts';
 
 let registered = false;

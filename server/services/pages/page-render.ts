@@ -1,12 +1,12 @@
 import type { JSONContent } from '@tiptap/core';
 import { renderToHTMLString, serializeAttrsToHTMLString } from '@tiptap/static-renderer/pm/html-string';
-import { publicStatements, publicText, type PublicStatement } from '../statements/public-texts.ts';
+import { publicStatements, publicText, type PublicStatement } from '../statements/index.ts';
 import { Op } from 'sequelize';
 import { isSafeHref, pageExtensions } from '@shared/editor/extensions.ts';
 import { findLicence } from '@shared/media/licences.ts';
 import { renditionUrl } from '../../media/keys.ts';
 import { Media, MediaRendition, Page } from '../../models/index.ts';
-import { getSettings } from '../settings/organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 
 /** What the renderer needs to know about one library image. */
 export interface RenderMedia {

@@ -5,7 +5,7 @@ import { HttpError } from '../../errors.ts';
 import { Page, PageNumberFlag, PageRevision, PageSignoff, Statement, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { renderWithLookups } from './page-render.ts';
-import { acceptStatementWording } from '../statements/accept.ts';
+import { acceptStatementWording } from '../statements/index.ts';
 import { approvalProblems, flagsWithResolutions } from './page-checks.ts';
 import { ChecksFailedError, WorkflowError } from './page-errors.ts';
 import { currentText, loadStatements } from './page-statements.ts';

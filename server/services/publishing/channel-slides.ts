@@ -6,7 +6,7 @@ import { ConflictError, HttpError, NotFoundError } from '../../errors.ts';
 import { ChannelSlide, Media, Page, type Channel, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { lockChannel, touchChannel } from './channel-save.ts';
-import { missingForPublishing } from '../media/media-usage.ts';
+import { missingForPublishing } from '../media/index.ts';
 
 const REQUIREMENT_WORDS: Record<string, string> = {
   credit: 'a credit',

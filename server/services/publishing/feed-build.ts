@@ -13,9 +13,9 @@ import type { FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
 import { feedSky, skyHtml } from './feed-sky.ts';
 import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
-import { getSkySnapshot } from '../sky/sky-snapshots.ts';
-import { publicPageTexts } from '../pages/page-render.ts';
-import { publicStatements } from '../statements/public-texts.ts';
+import { getSkySnapshot } from '../sky/index.ts';
+import { publicPageTexts } from '../pages/index.ts';
+import { publicStatements } from '../statements/index.ts';
 
 /** What the feed is for: a channel at its venue, or a screen with no channel (a holding feed). */
 export interface FeedTarget {

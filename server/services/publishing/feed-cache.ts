@@ -3,7 +3,7 @@ import { logger } from '../../logger.ts';
 import { buildKioskFeed, type FeedTarget } from './feed-build.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { publishingEvents } from './events.ts';
-import { statementEvents } from '../statements/events.ts';
+import { statementEvents } from '../statements/index.ts';
 
 /** A built feed, ready to send as it is. */
 export interface CachedFeed {

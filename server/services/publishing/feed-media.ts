@@ -3,7 +3,7 @@ import type { FeedImage } from '@shared/schemas/kiosk-feed.ts';
 import { findLicence } from '@shared/media/licences.ts';
 import { renditionUrl } from '../../media/keys.ts';
 import { Media, MediaRendition } from '../../models/index.ts';
-import { missingForPublishing } from '../media/media-usage.ts';
+import { missingForPublishing } from '../media/index.ts';
 
 /** A library image as a kiosk slide or the public API shows it: always with its credit and licence. */
 export interface PublishedImage {

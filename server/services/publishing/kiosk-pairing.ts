@@ -4,7 +4,7 @@ import { getSequelize } from '../../db.ts';
 import { HttpError } from '../../errors.ts';
 import { KioskScreen, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { hashToken } from '../users/auth-tokens.ts';
+import { hashToken } from '../users/index.ts';
 import { publishingEvents } from './events.ts';
 
 /** Letters and digits that cannot be mistaken for one another on a screen (no 0/O, 1/I/L). */

@@ -6,9 +6,9 @@ import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
 import { publishingEvents } from './events.ts';
-import { statementEvents } from '../statements/events.ts';
-import { publicPageTexts } from '../pages/page-render.ts';
-import { publicStatements } from '../statements/public-texts.ts';
+import { statementEvents } from '../statements/index.ts';
+import { publicPageTexts } from '../pages/index.ts';
+import { publicStatements } from '../statements/index.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {

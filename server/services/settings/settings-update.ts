@@ -6,7 +6,7 @@ import { ConflictError, HttpError } from '../../errors.ts';
 import type { OrganisationSettings, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from './organisation-settings.ts';
-import { enqueueRecompute } from '../statements/recompute.ts';
+import { enqueueRecompute } from '../statements/index.ts';
 
 /** Refuses a model the engine cannot use (no big bang, negative densities…), with the engine's words. */
 function assertUsableModel(model: CalcModel): void {

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { SkyObject, Statement, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { getSettings } from '../settings/organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { applyOutcome } from './apply-outcome.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 import { packForStorage } from './working-pack.ts';

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { defineBatchJob } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
-import { getSettings } from '../settings/organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { batchModelFor, loadBatchJob } from './batch-load.ts';
 import type { SettingsSnapshot } from './context.ts';
 import type { WriteBatchResult } from './evaluate-batch.ts';

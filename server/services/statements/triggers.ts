@@ -1,6 +1,6 @@
 import { logger } from '../../logger.ts';
-import { catalogueEvents } from '../catalogue/events.ts';
-import { skyEvents } from '../sky/events.ts';
+import { catalogueEvents } from '../catalogue/index.ts';
+import { skyEvents } from '../sky/index.ts';
 import { enqueueRecompute, type RecomputeScope } from './recompute.ts';
 
 let registered = false;
