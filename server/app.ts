@@ -14,8 +14,8 @@ import { apiRouter } from './routes/index.ts';
 import { kioskFeedRouter } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
-import { registerStatementTriggers } from './services/statements/index.ts';
 import { sessionMiddleware } from './session.ts';
+import { wireServer } from './wiring.ts';
 
 /** Options for building the app; tests pass their own database URL. */
 export interface AppOptions {
@@ -31,7 +31,7 @@ export function createApp(options: AppOptions = {}) {
   const databaseUrl = options.databaseUrl ?? process.env.DATABASE_URL ?? config.databaseUrl;
   if (!databaseUrl) throw new Error('createApp needs a database URL');
   initModels(getSequelize());
-  registerStatementTriggers();
+  wireServer();
   const https = options.https ?? config.publicUrl?.startsWith('https:') ?? false;
 
   const app = express();

@@ -10,11 +10,10 @@ import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
-import { scheduleSkySnapshots } from '../services/sky/index.ts';
-import { schedulePageJobs } from '../services/pages/index.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media/index.ts';
+import { startSchedules } from '../wiring.ts';
 
 const started = Date.now();
 
@@ -61,8 +60,7 @@ if (config.isProduction) {
 
 const app = createApp({ serveClient: true });
 const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
-await scheduleSkySnapshots(queue);
-await schedulePageJobs(queue);
+await startSchedules(queue);
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);

@@ -22,15 +22,11 @@ import { dashboardFor, setDigest } from '../../services/pages/index.ts';
 import { loadPageDetail } from '../../services/pages/index.ts';
 import { PageConflictError } from '../../services/pages/index.ts';
 import { listPages } from '../../services/pages/index.ts';
-import { registerPageReactions } from '../../services/pages/index.ts';
 import { createPage, savePage } from '../../services/pages/index.ts';
 import { currentText, loadStatements } from '../../services/pages/index.ts';
 import { findPage } from './load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
-import '../../services/pages/page-digest.ts';
-
-registerPageReactions();
 
 const tooLarge = () =>
   new HttpError(

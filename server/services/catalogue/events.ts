@@ -2,9 +2,12 @@ import { EventEmitter } from 'node:events';
 
 /** What each catalogue event carries. */
 export interface CatalogueEventMap {
-  /** The preferred measurement for (object, quantity, band) was chosen, changed, unset or its values changed. */
+  /**
+   * A reviewer chose (or unset) the preferred measurement for (object, quantity, band). Editing or
+   * retiring a measurement is one `measurementChanged` only, preferred or not.
+   */
   preferredChanged: [{ objectId: string; quantity: string; band: string | null }];
-  /** A measurement was created, edited, reviewed or retired. */
+  /** A measurement was created, edited, reviewed or retired (its recompute covers its object's statements). */
   measurementChanged: [{ measurementId: string; objectId: string }];
   /** A source's citation or identifiers changed. */
   sourceChanged: [{ sourceId: string }];
@@ -16,5 +19,5 @@ export interface CatalogueEventMap {
  * must survive a restart should enqueue a job.
  */
 export const catalogueEvents = new EventEmitter<CatalogueEventMap>();
-// Several features listen (statements, pages, kiosk feeds); the default limit of 10 is a leak warning, not a rule.
+// The default limit of 10 is a leak warning, not a rule; the listeners are in server/wiring.ts.
 catalogueEvents.setMaxListeners(50);

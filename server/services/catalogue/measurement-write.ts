@@ -87,10 +87,8 @@ export async function updateMeasurement(
       { measurement: m, action: 'updated', actorId: actor.id, reason, old: diff.old, new: diff.new },
       transaction,
     );
-    transaction.afterCommit(() => {
-      catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId });
-      if (m.preferred) catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band });
-    });
+    // One edit, one event: the recompute of a measurement covers its object's statements too.
+    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
     return m;
   });
 }
@@ -105,7 +103,6 @@ export async function retireMeasurement(measurementId: string, reason: string, a
     const m = await Measurement.findByPk(measurementId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!m || m.retiredAt) throw ConflictError('This measurement is already retired.', 'retired');
     const before = snapshotMeasurement(m);
-    const wasPreferred = m.preferred;
     m.set({ preferred: false, retiredAt: new Date(), retiredById: actor.id, retireReason: reason });
     await m.save({ transaction });
     const diff = changedFields(before, snapshotMeasurement(m));
@@ -113,10 +110,7 @@ export async function retireMeasurement(measurementId: string, reason: string, a
       { measurement: m, action: 'retired', actorId: actor.id, reason, old: diff.old, new: diff.new },
       transaction,
     );
-    transaction.afterCommit(() => {
-      catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId });
-      if (wasPreferred) catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band });
-    });
+    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
     return m;
   });
 }

@@ -1,10 +1,15 @@
 import { logger } from '../../logger.ts';
 import { Media } from '../../models/index.ts';
 import { generateRenditions } from './media-renditions.ts';
-import { defineJob } from '../../jobs/queue.ts';
+import { enqueue } from '../../jobs/queue.ts';
 
-/** Queues the renditions of one image (pg-boss retries a failure with backoff). */
-const enqueueRenditionJob = defineJob<{ mediaId: string }>('media-renditions', ({ mediaId }) => generateRenditions(mediaId));
+/** The job kind that makes an image's renditions (pg-boss retries a failure with backoff). */
+export const RENDITIONS_JOB = 'media-renditions';
+
+/** The renditions job: make one image's renditions. */
+export async function runRenditionsJob({ mediaId }: { mediaId: string }): Promise<void> {
+  await generateRenditions(mediaId);
+}
 
 /**
  * Asks for an image's renditions to be (re)made in the background. Never throws: the image is
@@ -13,7 +18,7 @@ const enqueueRenditionJob = defineJob<{ mediaId: string }>('media-renditions', (
  */
 export async function requestRenditions(mediaId: string): Promise<void> {
   try {
-    await enqueueRenditionJob({ mediaId });
+    await enqueue(RENDITIONS_JOB, { mediaId });
   } catch (err) {
     logger.warn({ err, mediaId }, 'renditions could not be made or queued');
     // Without a running queue the job ran inline and has recorded its own failure.

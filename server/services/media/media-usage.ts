@@ -8,7 +8,7 @@ const providers = new Map<string, MediaUsageProvider>();
 
 /**
  * Lets another feature say where images are used; the library lists these places and refuses to
- * delete an image that has any. Call at module load. Features that reference media rows should
+ * delete an image that has any. Called from the wiring (server/wiring.ts). Features that reference media rows should
  * also use a foreign key with ON DELETE RESTRICT, so a delete racing a new use fails safely.
  * @param name the feature, e.g. `pages`; registering a name again replaces its provider
  * @param fn returns the places that use the image

@@ -5,11 +5,12 @@
 export { dashboardFor, setDigest } from './page-dashboard.ts';
 export { loadPageDetail } from './page-detail.ts';
 export { diffRevisions } from './page-diff.ts';
-export { schedulePageJobs } from './page-digest.ts';
+export { DIGEST_JOB, PUBLISH_DUE_JOB, runDigestJob, runPublishDueJob } from './page-digest.ts';
 export { PageConflictError } from './page-errors.ts';
 export { listPages } from './page-list.ts';
 export { publishPage, schedulePublish, unpublishPage } from './page-publish.ts';
-export { registerPageReactions } from './page-reactions.ts';
+export { pagesUsingMedia, queuePageRecheck } from './page-reactions.ts';
+export { PAGE_RECHECK_JOB, runPageRecheckJob } from './page-recheck.ts';
 export { publicPageTexts, renderPublishedPage, renderWithLookups } from './page-render.ts';
 export { createPage, savePage } from './page-save.ts';
 export { resolveNumberFlag, signOffPage, signOffStatement } from './page-signoff.ts';

@@ -2,8 +2,6 @@ import { createHash } from 'node:crypto';
 import { logger } from '../../logger.ts';
 import { buildKioskFeed, type FeedTarget } from './feed-build.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
-import { publishingEvents } from './events.ts';
-import { statementEvents } from '../statements/index.ts';
 
 /** A built feed, ready to send as it is. */
 export interface CachedFeed {
@@ -118,19 +116,4 @@ export function kioskFeedStats(): { builds: number; checks: number } {
 /** Resets counters (tests). */
 export function resetKioskFeedStats(): void {
   stats = { builds: 0, checks: 0 };
-}
-
-let listening = false;
-
-/** Subscribes the cache to the events that change what a feed shows; safe to call twice. */
-export function listenForFeedChanges(): void {
-  if (listening) return;
-  listening = true;
-  publishingEvents.on('pagePublished', () => invalidateKioskFeeds('page published'));
-  publishingEvents.on('pageUnpublished', () => invalidateKioskFeeds('page unpublished'));
-  publishingEvents.on('mediaChanged', () => invalidateKioskFeeds('media changed'));
-  publishingEvents.on('channelChanged', () => invalidateKioskFeeds('channel changed'));
-  statementEvents.on('accepted', () => invalidateKioskFeeds('statement accepted'));
-  statementEvents.on('textChanged', () => invalidateKioskFeeds('statement changed'));
-  statementEvents.on('broken', () => invalidateKioskFeeds('statement broken'));
 }

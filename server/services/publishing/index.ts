@@ -5,10 +5,11 @@
 export { createChannel, deleteChannel, updateChannel } from './channel-save.ts';
 export { assignScreens } from './channel-screens.ts';
 export { addSlide, removeSlide, reorderSlides, updateSlide } from './channel-slides.ts';
+export { channelsUsingMedia } from './channel-media.ts';
 export { loadSlideSources } from './channel-sources.ts';
 export { publishingEvents } from './events.ts';
 export { inWindow } from './feed-build.ts';
-export { getKioskFeed, listenForFeedChanges } from './feed-cache.ts';
+export { getKioskFeed, invalidateKioskFeeds } from './feed-cache.ts';
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
-export { getPublicPages, prepare } from './public-pages.ts';
+export { getPublicPages, invalidatePublicPages, prepare } from './public-pages.ts';

@@ -5,8 +5,6 @@ import { Page, SkyObject } from '../../models/index.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
-import { publishingEvents } from './events.ts';
-import { statementEvents } from '../statements/index.ts';
 import { publicPageTexts } from '../pages/index.ts';
 import { publicStatements } from '../statements/index.ts';
 
@@ -148,13 +146,15 @@ export async function getPublicPages(): Promise<PublicPages> {
   return pending;
 }
 
-const invalidate = () => {
+/**
+ * Drops what is held in memory, so the next read rebuilds (keeping nothing stale): the wiring calls
+ * it when a page is published or unpublished, an image's details change, or a statement's public
+ * wording moves.
+ */
+export function invalidatePublicPages(): void {
   generation += 1;
-  if (current) current.checkedAt = 0;
-  if (current) current.fingerprint = '';
-};
-publishingEvents.on('pagePublished', invalidate);
-publishingEvents.on('pageUnpublished', invalidate);
-publishingEvents.on('mediaChanged', invalidate);
-statementEvents.on('accepted', invalidate);
-statementEvents.on('textChanged', invalidate);
+  if (current) {
+    current.checkedAt = 0;
+    current.fingerprint = '';
+  }
+}

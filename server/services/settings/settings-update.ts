@@ -6,7 +6,8 @@ import { ConflictError, HttpError } from '../../errors.ts';
 import type { OrganisationSettings, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from './organisation-settings.ts';
-import { enqueueRecompute } from '../statements/index.ts';
+import { emitAndWait } from '../../domain-events.ts';
+import { settingsEvents } from './events.ts';
 
 /** Refuses a model the engine cannot use (no big bang, negative densities…), with the engine's words. */
 function assertUsableModel(model: CalcModel): void {
@@ -16,8 +17,8 @@ function assertUsableModel(model: CalcModel): void {
 
 /**
  * Adopts a new cosmology. Optimistic: the admin confirms against the version they previewed, so
- * two admins cannot switch past each other unseen. Every statement is then recomputed in the
- * background; until each is, its stored settings version shows it predates the change.
+ * two admins cannot switch past each other unseen. `cosmologyAdopted` then has every statement
+ * recomputed in the background; until each is, its stored settings version shows it predates the change.
  * @throws HttpError 409 `settings_moved` when someone else changed the settings since the preview
  */
 export async function changeCosmology(model: CalcModel, expectedVersion: number, actor: User): Promise<OrganisationSettings> {
@@ -45,11 +46,11 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
     );
     return row;
   });
-  await enqueueRecompute({ scope: { all: true } });
+  await emitAndWait(settingsEvents, 'cosmologyAdopted', { version: settings.version });
   return settings;
 }
 
-/** Changes the band, locale or eye-safety notice. A band change moves magnitudes, so statements are recomputed. */
+/** Changes the band, locale or eye-safety notice. A band change moves magnitudes: `defaultBandChanged` has statements recomputed. */
 export async function updateSettings(input: SettingsUpdateInput, actor: User): Promise<OrganisationSettings> {
   const settings = await getSequelize().transaction(async (transaction) => {
     const row = await getSettings(transaction, 'update');
@@ -62,6 +63,6 @@ export async function updateSettings(input: SettingsUpdateInput, actor: User): P
     );
     return { row, bandChanged };
   });
-  if (settings.bandChanged) await enqueueRecompute({ scope: { all: true } });
+  if (settings.bandChanged) await emitAndWait(settingsEvents, 'defaultBandChanged', { version: settings.row.version });
   return settings.row;
 }

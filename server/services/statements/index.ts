@@ -7,6 +7,6 @@ export { findOrCreateStatement } from './create.ts';
 export { statementEvents } from './events.ts';
 export { previewCosmologyChange } from './model-preview.ts';
 export { publicStatements, publicText, type PublicStatement } from './public-texts.ts';
-export { enqueueRecompute, recomputeStatements } from './recompute.ts';
-export { registerStatementTriggers } from './triggers.ts';
+export { enqueueRecompute, RECOMPUTE_BATCH, RECOMPUTE_JOB, recomputeStatements, runRecomputeJobs } from './recompute.ts';
+export { queueRecompute } from './triggers.ts';
 export { readWorking } from './working-store.ts';

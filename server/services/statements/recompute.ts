@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { defineBatchJob } from '../../jobs/queue.ts';
+import { enqueue } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
 import { getSettings } from '../settings/index.ts';
@@ -190,35 +190,42 @@ export async function mergeScopes(scopes: RecomputeScope[]): Promise<RecomputeSc
   return [...nights, { statementIds: [...ids] }];
 }
 
+/** The job kind of a statement recompute. */
+export const RECOMPUTE_JOB = 'statements.recompute';
+/** Queued recomputes handed over at once and merged into one. */
+export const RECOMPUTE_BATCH = 100;
+
+/** Queues a recompute of the statements a scope covers (inline when no queue runs). */
+export async function enqueueRecompute(data: { scope: RecomputeScope }): Promise<void> {
+  await enqueue(RECOMPUTE_JOB, data);
+}
+
 /**
- * The background job: recompute what the queued scopes cover (up to 100 jobs merged at a time, so a
- * burst of catalogue edits costs one recompute, not one per edit); a settings change mid-way ends
- * quietly (its own job follows).
+ * The background job: recompute what the queued scopes cover (up to RECOMPUTE_BATCH jobs merged at
+ * a time, so a burst of catalogue edits costs one recompute, not one per edit); a settings change
+ * mid-way ends quietly (its own job follows).
+ * @param jobs the queued jobs' data, oldest first
  */
-export const enqueueRecompute = defineBatchJob<{ scope: RecomputeScope }>(
-  'statements.recompute',
-  async (jobs) => {
-    for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
-      try {
-        const result = await recomputeStatements(scope);
-        logger.info(
-          {
-            scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope,
-            jobs: jobs.length,
-            written: result.written,
-            changed: result.changed.length,
-            broken: result.broken.length,
-          },
-          'statements recomputed',
-        );
-      } catch (error) {
-        if (error instanceof SettingsMovedError) {
-          logger.info({ scope }, 'recompute superseded by a settings change');
-          continue;
-        }
-        throw error;
+export async function runRecomputeJobs(jobs: { scope: RecomputeScope }[]): Promise<void> {
+  for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
+    try {
+      const result = await recomputeStatements(scope);
+      logger.info(
+        {
+          scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope,
+          jobs: jobs.length,
+          written: result.written,
+          changed: result.changed.length,
+          broken: result.broken.length,
+        },
+        'statements recomputed',
+      );
+    } catch (error) {
+      if (error instanceof SettingsMovedError) {
+        logger.info({ scope }, 'recompute superseded by a settings change');
+        continue;
       }
+      throw error;
     }
-  },
-  { batchSize: 100 },
-);
+  }
+}

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { HttpError } from '../../errors.ts';
 import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
+import { logger } from '../../logger.ts';
 
 /** SHA-256 of the token: a leaked table row cannot be turned back into a working link. */
 export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw).digest('hex');
@@ -48,7 +49,16 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   return user;
 }
 
-/** Removes long-expired tokens; housekeeping only. */
+/** Removes tokens that expired over 30 days ago (a used or refused link needs no row after that); run daily by TOKEN_PURGE_JOB. */
 export async function purgeOldTokens(): Promise<number> {
   return AuthToken.destroy({ where: { expiresAt: { [Op.lt]: new Date(Date.now() - 30 * 86_400_000) } } });
+}
+
+/** The job kind of the daily token clean-up. */
+export const TOKEN_PURGE_JOB = 'users.purge-old-tokens';
+
+/** The daily clean-up job: sign-in links (invitations, resets) that expired over 30 days ago go. */
+export async function runTokenPurgeJob(): Promise<void> {
+  const removed = await purgeOldTokens();
+  if (removed) logger.info({ removed }, 'expired sign-in links removed');
 }

@@ -6,7 +6,7 @@ const COST = process.env.NODE_ENV === 'test' ? 4 : 11;
 
 const commonPasswords = new Set(
   fs
-    .readFileSync(new URL('../data/common-passwords.txt', import.meta.url), 'utf8')
+    .readFileSync(new URL('../../data/common-passwords.txt', import.meta.url), 'utf8')
     .split('\n')
     .map((line) => line.trim().toLowerCase())
     .filter((line) => line && !line.startsWith('#')),
