@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express from 'express';
 import { pinoHttp } from 'pino-http';
-import { config } from './config.ts';
+import { checkConfig, config } from './config.ts';
 import { getSequelize } from './db.ts';
 import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
@@ -28,7 +28,8 @@ export interface AppOptions {
 
 /** Builds the Express app without listening, so tests can drive it directly. */
 export function createApp(options: AppOptions = {}) {
-  const databaseUrl = options.databaseUrl ?? process.env.DATABASE_URL ?? config.databaseUrl;
+  checkConfig();
+  const databaseUrl = options.databaseUrl ?? config.databaseUrl;
   if (!databaseUrl) throw new Error('createApp needs a database URL');
   initModels(getSequelize());
   wireServer();

@@ -1,6 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { config } from '../config.ts';
+import { checkConfig, config, useDatabaseUrl } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
@@ -17,6 +17,13 @@ import { startSchedules } from '../wiring.ts';
 
 const started = Date.now();
 
+try {
+  checkConfig();
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+}
+
 // pg-boss 10 does not await its own complete/fail calls (timgit/pg-boss#577), so during a database
 // outage they reject with nobody listening and Node would exit. Such a job stays active, expires and
 // runs again. Any other unhandled rejection is a bug and still stops the process.
@@ -31,7 +38,7 @@ process.on('unhandledRejection', (reason) => {
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {
-  process.env.DATABASE_URL = await startLocalPostgres(config.localPostgres);
+  useDatabaseUrl(await startLocalPostgres(config.localPostgres));
   console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
 }
 const sequelize = initModels(getSequelize());
@@ -59,7 +66,7 @@ if (config.isProduction) {
 }
 
 const app = createApp({ serveClient: true });
-const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
+const queue = await startJobQueue(config.databaseUrl ?? '');
 await startSchedules(queue);
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;

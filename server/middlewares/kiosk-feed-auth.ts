@@ -1,4 +1,5 @@
 import type { RequestHandler } from 'express';
+import { config } from '../config.ts';
 import { ChannelScreen, type KioskScreen } from '../models/index.ts';
 import { requireKiosk } from './kiosk-auth.ts';
 
@@ -16,7 +17,7 @@ declare global {
  * How long (ms) a checked token is trusted before the database is asked again. A revocation on
  * this instance ends it at once (event); on another instance, within this time.
  */
-const TRUST_MS = Number(process.env.STARPROOF_KIOSK_AUTH_CACHE_MS ?? 1000);
+const TRUST_MS = config.kioskAuthCacheMs;
 const MAX_ENTRIES = 5000;
 
 interface Trusted {

@@ -24,12 +24,13 @@ import { consumeToken, issueToken } from '../services/users/index.ts';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/users/index.ts';
 import { signIn } from '../services/users/index.ts';
 import { endUserSessions } from '../services/users/index.ts';
+import { config } from '../config.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
 function addressLimiter(limit: number) {
   return rateLimit({
     windowMs: 15 * 60_000,
-    limit: Number(process.env.STARPROOF_SIGNIN_LIMIT ?? limit),
+    limit: config.limits.signIn ?? limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, _res, next) =>

@@ -11,11 +11,11 @@ import { getPublicPages, prepare } from '../../services/publishing/index.ts';
  * taken down leaves the venue's website within that minute; kiosks revalidate every time.
  */
 export const PUBLIC_CACHE_CONTROL = 'public, max-age=60, must-revalidate';
-const PUBLISHER = process.env.STARPROOF_PUBLISHER_NAME ?? 'Starproof';
+const PUBLISHER = config.publisherName;
 
 const limiter = rateLimit({
   windowMs: 60_000,
-  limit: Number(process.env.STARPROOF_PUBLIC_LIMIT ?? 300),
+  limit: config.limits.publicApi,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { logger } from '../../logger.ts';
 import { buildKioskFeed, type FeedTarget } from './feed-build.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
+import { config } from '../../config.ts';
 
 /** A built feed, ready to send as it is. */
 export interface CachedFeed {
@@ -18,7 +19,7 @@ export interface CachedFeed {
 }
 
 /** How often (ms) a cached feed's fingerprint is compared with the database; other instances' changes show within this. */
-const CHECK_MS = Number(process.env.STARPROOF_FEED_CHECK_MS ?? 1000);
+const CHECK_MS = config.feedCheckMs;
 
 const entries = new Map<string, CachedFeed>();
 const pending = new Map<string, Promise<CachedFeed>>();

@@ -7,6 +7,7 @@ import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
 import { publicPageTexts } from '../pages/index.ts';
 import { publicStatements } from '../statements/index.ts';
+import { config } from '../../config.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {
@@ -26,7 +27,7 @@ export interface PublicPages {
   checkedAt: number;
 }
 
-const CHECK_MS = Number(process.env.STARPROOF_FEED_CHECK_MS ?? 1000);
+const CHECK_MS = config.feedCheckMs;
 
 /** Serialises JSON once and names it by the SHA-256 of its bytes. */
 export function prepare(value: unknown): Prepared {

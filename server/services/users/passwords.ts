@@ -1,8 +1,9 @@
 import fs from 'node:fs';
 import bcrypt from 'bcryptjs';
 import { ValidationError } from '../../errors.ts';
+import { config } from '../../config.ts';
 
-const COST = process.env.NODE_ENV === 'test' ? 4 : 11;
+const COST = config.env === 'test' ? 4 : 11;
 
 const commonPasswords = new Set(
   fs
