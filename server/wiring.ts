@@ -54,7 +54,7 @@ export function wireServer(): void {
   // a measurement changes (created, edited, reviewed, retired) → its statements, and its object's, recompute
   catalogueEvents.on('measurementChanged', ({ measurementId }) => queueRecompute({ measurementId }));
   // a reviewer chooses another preferred measurement → the object's statements recompute
-  catalogueEvents.on('preferredChanged', ({ objectId }) => queueRecompute({ objectId }));
+  catalogueEvents.on('preferredChanged', ({ skyObjectId }) => queueRecompute({ skyObjectId }));
   // a source's citation or identifiers change → the statements citing it recompute
   catalogueEvents.on('sourceChanged', ({ sourceId }) => queueRecompute({ sourceId }));
 

@@ -13,8 +13,8 @@ export function initCatalogueModels(sequelize: Sequelize): void {
   for (const model of [SkyObject, Source, Measurement, MeasurementHistory, CatalogueImport]) model.initModel(sequelize);
 
   // associations
-  SkyObject.hasMany(Measurement, { foreignKey: 'objectId', as: 'measurements' });
-  Measurement.belongsTo(SkyObject, { foreignKey: 'objectId', as: 'object' });
+  SkyObject.hasMany(Measurement, { foreignKey: 'skyObjectId', as: 'measurements' });
+  Measurement.belongsTo(SkyObject, { foreignKey: 'skyObjectId', as: 'object' });
   Measurement.belongsTo(Source, { foreignKey: 'sourceId', as: 'source' });
   Measurement.belongsTo(User, { foreignKey: 'createdById', as: 'createdBy' });
   Measurement.belongsTo(User, { foreignKey: 'reviewedById', as: 'reviewedBy' });

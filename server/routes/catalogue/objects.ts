@@ -65,7 +65,7 @@ objectsRouter.get('/:id/measurements', async (req, res) => {
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
   const measurements = await Measurement.findAll({
-    where: { objectId: object.id },
+    where: { skyObjectId: object.id },
     include: measurementIncludes(),
     order: [
       ['quantity', 'ASC'],
@@ -95,7 +95,7 @@ objectsRouter.get('/:id/history', async (req, res) => {
   if (!object) throw notFound();
   const [history, measurements] = await Promise.all([
     MeasurementHistory.findAll({
-      where: { objectId: object.id },
+      where: { skyObjectId: object.id },
       include: [{ model: User, as: 'changedBy', attributes: ['id', 'name'] }],
       order: [
         ['createdAt', 'DESC'],
@@ -103,7 +103,7 @@ objectsRouter.get('/:id/history', async (req, res) => {
       ],
       limit: 500,
     }),
-    Measurement.findAll({ where: { objectId: object.id }, attributes: ['id', 'quantity'] }),
+    Measurement.findAll({ where: { skyObjectId: object.id }, attributes: ['id', 'quantity'] }),
   ]);
   const quantityOf = new Map(measurements.map((m) => [m.id, m.quantity]));
   res.json({ data: history.map((h) => presentHistory(h, quantityOf)) });

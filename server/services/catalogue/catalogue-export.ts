@@ -69,9 +69,9 @@ export async function exportObjectsCsv(out: Writable): Promise<void> {
  * Current measurements (accepted or proposed, not retired) as CSV, in canonical units, with their
  * sources. The columns are the ones the import reads, so an export can be imported elsewhere.
  * @param out the response (or any writable stream)
- * @param objectId only this object's measurements, when given
+ * @param skyObjectId only this object's measurements, when given
  */
-export async function exportMeasurementsCsv(out: Writable, objectId?: string): Promise<void> {
+export async function exportMeasurementsCsv(out: Writable, skyObjectId?: string): Promise<void> {
   type Row = {
     id: string;
     object: string;
@@ -115,7 +115,7 @@ export async function exportMeasurementsCsv(out: Writable, objectId?: string): P
          FROM measurements m JOIN sky_objects o ON o.id = m.object_id LEFT JOIN sources s ON s.id = m.source_id
          WHERE m.id > $1 AND m.retired_at IS NULL AND m.status <> 'declined' AND ($3::uuid IS NULL OR m.object_id = $3)
          ORDER BY m.id LIMIT $2`,
-        { type: QueryTypes.SELECT, bind: [after, BATCH, objectId ?? null] },
+        { type: QueryTypes.SELECT, bind: [after, BATCH, skyObjectId ?? null] },
       ),
     (r) => [
       r.object,

@@ -6,9 +6,9 @@ export interface CatalogueEventMap {
    * A reviewer chose (or unset) the preferred measurement for (object, quantity, band). Editing or
    * retiring a measurement is one `measurementChanged` only, preferred or not.
    */
-  preferredChanged: [{ objectId: string; quantity: string; band: string | null }];
+  preferredChanged: [{ skyObjectId: string; quantity: string; band: string | null }];
   /** A measurement was created, edited, reviewed or retired (its recompute covers its object's statements). */
-  measurementChanged: [{ measurementId: string; objectId: string }];
+  measurementChanged: [{ measurementId: string; skyObjectId: string }];
   /** A source's citation or identifiers changed. */
   sourceChanged: [{ sourceId: string }];
 }

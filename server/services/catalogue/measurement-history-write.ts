@@ -56,7 +56,7 @@ export async function recordMeasurementHistory(
   await MeasurementHistory.create(
     {
       measurementId: props.measurement.id,
-      objectId: props.measurement.objectId,
+      skyObjectId: props.measurement.skyObjectId,
       action: props.action,
       changedById: props.actorId,
       reason: props.reason ?? null,

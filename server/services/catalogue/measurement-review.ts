@@ -23,7 +23,9 @@ export async function reviewMeasurement(measurementId: string, input: Measuremen
       { measurement: m, action: status, actorId: actor.id, reason: input.reason || null, old: diff.old, new: diff.new },
       transaction,
     );
-    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
+    transaction.afterCommit(
+      () => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, skyObjectId: m.skyObjectId }),
+    );
     return m;
   });
 }

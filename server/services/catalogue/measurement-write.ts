@@ -29,14 +29,16 @@ export async function createMeasurement(
   await checkSource(values.sourceId);
   const measurement = await getSequelize().transaction(async (transaction) => {
     const m = await Measurement.create(
-      { ...values, objectId: object.id, createdById: actor.id, status: asProposal ? 'proposed' : 'accepted' },
+      { ...values, skyObjectId: object.id, createdById: actor.id, status: asProposal ? 'proposed' : 'accepted' },
       { transaction },
     );
     await recordMeasurementHistory(
       { measurement: m, action: asProposal ? 'proposed' : 'created', actorId: actor.id, old: null, new: snapshotMeasurement(m) },
       transaction,
     );
-    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
+    transaction.afterCommit(
+      () => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, skyObjectId: m.skyObjectId }),
+    );
     return m;
   });
   return measurement;
@@ -88,7 +90,9 @@ export async function updateMeasurement(
       transaction,
     );
     // One edit, one event: the recompute of a measurement covers its object's statements too.
-    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
+    transaction.afterCommit(
+      () => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, skyObjectId: m.skyObjectId }),
+    );
     return m;
   });
 }
@@ -110,7 +114,9 @@ export async function retireMeasurement(measurementId: string, reason: string, a
       { measurement: m, action: 'retired', actorId: actor.id, reason, old: diff.old, new: diff.new },
       transaction,
     );
-    transaction.afterCommit(() => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, objectId: m.objectId }));
+    transaction.afterCommit(
+      () => void catalogueEvents.emit('measurementChanged', { measurementId: m.id, skyObjectId: m.skyObjectId }),
+    );
     return m;
   });
 }

@@ -4,7 +4,7 @@ import { findQuantity } from '@shared/catalogue/quantities.ts';
 /** A preferred measurement with its source, as statements use it. */
 export interface PreferredMeasurement {
   measurementId: string;
-  objectId: string;
+  skyObjectId: string;
   quantity: string;
   band: string | null;
   /** In the quantity's canonical unit (see shared/catalogue/quantities.ts). */
@@ -18,12 +18,12 @@ export interface PreferredMeasurement {
 /**
  * Every preferred measurement of an object (one per quantity and band), each with its source.
  * Preferred measurements always have a source: the database refuses one without.
- * @param objectId the sky object's id
+ * @param skyObjectId the sky object's id
  * @returns the preferred measurements, ordered by quantity then band
  */
-export async function getPreferredMeasurements(objectId: string): Promise<PreferredMeasurement[]> {
+export async function getPreferredMeasurements(skyObjectId: string): Promise<PreferredMeasurement[]> {
   const rows = await Measurement.findAll({
-    where: { objectId, preferred: true },
+    where: { skyObjectId, preferred: true },
     include: [{ model: Source, as: 'source', required: true }],
     order: [
       ['quantity', 'ASC'],
@@ -38,7 +38,7 @@ export async function getPreferredMeasurements(objectId: string): Promise<Prefer
       uncertainty = { kind: 'asymmetric', minus: m.uncertaintyMinus, plus: m.uncertaintyPlus };
     return {
       measurementId: m.id,
-      objectId: m.objectId,
+      skyObjectId: m.skyObjectId,
       quantity: m.quantity,
       band: m.band,
       value: m.value,

@@ -54,7 +54,7 @@ export async function setPreferred(measurementId: string, input: MeasurementPref
         throw ConflictError('A measurement without a source cannot be preferred. Add its source first.', 'needs_source');
 
       const current = await Measurement.findOne({
-        where: { objectId: m.objectId, quantity: m.quantity, band: m.band ?? { [Op.is]: null }, preferred: true },
+        where: { skyObjectId: m.skyObjectId, quantity: m.quantity, band: m.band ?? { [Op.is]: null }, preferred: true },
         transaction,
         lock: transaction.LOCK.UPDATE,
       });
@@ -64,7 +64,7 @@ export async function setPreferred(measurementId: string, input: MeasurementPref
       if (input.preferred && current && current.id !== m.id) await setFlag(current, false, actor, transaction);
       await setFlag(m, input.preferred, actor, transaction);
       transaction.afterCommit(
-        () => void catalogueEvents.emit('preferredChanged', { objectId: m.objectId, quantity: m.quantity, band: m.band }),
+        () => void catalogueEvents.emit('preferredChanged', { skyObjectId: m.skyObjectId, quantity: m.quantity, band: m.band }),
       );
       return m;
     });

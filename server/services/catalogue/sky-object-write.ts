@@ -78,7 +78,7 @@ export async function updateSkyObject(object: SkyObject, values: SkyObjectValues
  */
 export async function deleteSkyObject(object: SkyObject, actor: User, ip?: string): Promise<void> {
   await getSequelize().transaction(async (transaction) => {
-    const count = await Measurement.count({ where: { objectId: object.id }, transaction });
+    const count = await Measurement.count({ where: { skyObjectId: object.id }, transaction });
     if (count > 0)
       throw ConflictError(
         `${object.name} has ${count} measurement${count === 1 ? '' : 's'} with history, so it is kept. Only an object without measurements can be deleted.`,

@@ -14,7 +14,7 @@ import { saveSkeletons } from './working-store.ts';
 /** Which statements to recompute. */
 export type RecomputeScope =
   | { all: true }
-  | { objectId: string }
+  | { skyObjectId: string }
   | { statementIds: string[] }
   | { measurementId: string }
   | { sourceId: string }
@@ -45,8 +45,10 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
         raw: true,
       })
     ).map((s) => s.id);
-  if ('objectId' in scope)
-    return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
+  if ('skyObjectId' in scope)
+    return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.skyObjectId }, raw: true })).map(
+      (s) => s.id,
+    );
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
   if ('all' in scope)
     return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
@@ -190,6 +192,11 @@ export async function mergeScopes(scopes: RecomputeScope[]): Promise<RecomputeSc
   return [...nights, { statementIds: [...ids] }];
 }
 
+/** A scope queued under the object's earlier name (`objectId`): jobs may wait in the queue across an upgrade. */
+function upgradeScope(scope: RecomputeScope | { objectId: string }): RecomputeScope {
+  return 'objectId' in scope ? { skyObjectId: scope.objectId } : scope;
+}
+
 /** The job kind of a statement recompute. */
 export const RECOMPUTE_JOB = 'statements.recompute';
 /** Queued recomputes handed over at once and merged into one. */
@@ -206,8 +213,8 @@ export async function enqueueRecompute(data: { scope: RecomputeScope }): Promise
  * mid-way ends quietly (its own job follows).
  * @param jobs the queued jobs' data, oldest first
  */
-export async function runRecomputeJobs(jobs: { scope: RecomputeScope }[]): Promise<void> {
-  for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
+export async function runRecomputeJobs(jobs: { scope: RecomputeScope | { objectId: string } }[]): Promise<void> {
+  for (const scope of await mergeScopes(jobs.map((j) => upgradeScope(j.scope)))) {
     try {
       const result = await recomputeStatements(scope);
       logger.info(
