@@ -1,9 +1,6 @@
 import type { JSONContent } from '@tiptap/core';
 import { Page, SkyObject, User } from '../models/index.ts';
-import { savePage, createPage } from '../services/pages/index.ts';
-import { publishPage } from '../services/pages/index.ts';
-import { signOffPage, signOffStatement } from '../services/pages/index.ts';
-import { submitPage } from '../services/pages/index.ts';
+import { savePage, createPage, publishPage, signOffPage, signOffStatement, submitPage } from '../services/pages/index.ts';
 import { findOrCreateStatement } from '../services/statements/index.ts';
 import { logger } from '../logger.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';

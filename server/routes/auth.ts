@@ -20,10 +20,15 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { recordAudit } from '../services/audit.ts';
-import { consumeToken, issueToken } from '../services/users/index.ts';
-import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/users/index.ts';
-import { signIn } from '../services/users/index.ts';
-import { endUserSessions } from '../services/users/index.ts';
+import {
+  consumeToken,
+  issueToken,
+  assertAcceptablePassword,
+  hashPassword,
+  verifyPassword,
+  signIn,
+  endUserSessions,
+} from '../services/users/index.ts';
 import { config } from '../config.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */

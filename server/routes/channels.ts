@@ -21,11 +21,18 @@ import { validate } from '../middlewares/validate.ts';
 import { Channel } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentChannelDetail, presentChannelRows } from '../presenters/channel.ts';
-import { createChannel, deleteChannel, updateChannel } from '../services/publishing/index.ts';
-import { assignScreens } from '../services/publishing/index.ts';
-import { addSlide, removeSlide, reorderSlides, updateSlide } from '../services/publishing/index.ts';
-import { loadSlideSources } from '../services/publishing/index.ts';
-import { getKioskFeed } from '../services/publishing/index.ts';
+import {
+  createChannel,
+  deleteChannel,
+  updateChannel,
+  assignScreens,
+  addSlide,
+  removeSlide,
+  reorderSlides,
+  updateSlide,
+  loadSlideSources,
+  getKioskFeed,
+} from '../services/publishing/index.ts';
 import { FEED_CONTENT_TYPE } from './kiosk-feed.ts';
 
 async function findChannel(id: string): Promise<Channel | null> {

@@ -10,10 +10,18 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageComment, PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail } from '../../services/pages/index.ts';
-import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/index.ts';
-import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/index.ts';
-import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/index.ts';
+import {
+  loadPageDetail,
+  publishPage,
+  schedulePublish,
+  unpublishPage,
+  resolveNumberFlag,
+  signOffPage,
+  signOffStatement,
+  currentApprovalProblems,
+  sendBackPage,
+  submitPage,
+} from '../../services/pages/index.ts';
 import { recordAudit } from '../../services/audit.ts';
 import { findPage } from './load.ts';
 

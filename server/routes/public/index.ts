@@ -3,8 +3,7 @@ import { rateLimit } from 'express-rate-limit';
 import { config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { sendCached } from '../../middlewares/http-cache.ts';
-import { atomDocument } from '../../services/publishing/index.ts';
-import { getPublicPages, prepare } from '../../services/publishing/index.ts';
+import { atomDocument, getPublicPages, prepare } from '../../services/publishing/index.ts';
 
 /**
  * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
