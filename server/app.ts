@@ -2,7 +2,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express from 'express';
 import { pinoHttp } from 'pino-http';
-import { config } from './config.ts';
+import { checkConfig, config } from './config.ts';
 import { getSequelize } from './db.ts';
 import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
@@ -14,8 +14,8 @@ import { apiRouter } from './routes/index.ts';
 import { kioskFeedRouter } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
-import { registerStatementTriggers } from './services/statements/triggers.ts';
 import { sessionMiddleware } from './session.ts';
+import { wireServer } from './wiring.ts';
 
 /** Options for building the app; tests pass their own database URL. */
 export interface AppOptions {
@@ -28,10 +28,11 @@ export interface AppOptions {
 
 /** Builds the Express app without listening, so tests can drive it directly. */
 export function createApp(options: AppOptions = {}) {
-  const databaseUrl = options.databaseUrl ?? process.env.DATABASE_URL ?? config.databaseUrl;
+  checkConfig();
+  const databaseUrl = options.databaseUrl ?? config.databaseUrl;
   if (!databaseUrl) throw new Error('createApp needs a database URL');
   initModels(getSequelize());
-  registerStatementTriggers();
+  wireServer();
   const https = options.https ?? config.publicUrl?.startsWith('https:') ?? false;
 
   const app = express();

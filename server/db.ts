@@ -6,7 +6,7 @@ let instance: Sequelize | undefined;
 /** The one Sequelize instance; created on first use so the URL can be decided at start-up. */
 export function getSequelize(): Sequelize {
   if (!instance) {
-    const url = process.env.DATABASE_URL ?? config.databaseUrl;
+    const url = config.databaseUrl;
     if (!url) throw new Error('DATABASE_URL is not set and no local PostgreSQL was started.');
     instance = new Sequelize(url, {
       dialect: 'postgres',

@@ -1,6 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { config } from '../config.ts';
+import { checkConfig, config, useDatabaseUrl } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
@@ -10,13 +10,19 @@ import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
-import { scheduleSkySnapshots } from '../jobs/sky-snapshots.ts';
-import { schedulePageJobs } from '../services/pages/page-digest.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
-import { sweepOrphanMedia } from '../services/media-sweep.ts';
+import { sweepOrphanMedia } from '../services/media/index.ts';
+import { startSchedules } from '../wiring.ts';
 
 const started = Date.now();
+
+try {
+  checkConfig();
+} catch (error) {
+  console.error(error instanceof Error ? error.message : error);
+  process.exit(1);
+}
 
 // pg-boss 10 does not await its own complete/fail calls (timgit/pg-boss#577), so during a database
 // outage they reject with nobody listening and Node would exit. Such a job stays active, expires and
@@ -32,7 +38,7 @@ process.on('unhandledRejection', (reason) => {
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {
-  process.env.DATABASE_URL = await startLocalPostgres(config.localPostgres);
+  useDatabaseUrl(await startLocalPostgres(config.localPostgres));
   console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
 }
 const sequelize = initModels(getSequelize());
@@ -60,9 +66,8 @@ if (config.isProduction) {
 }
 
 const app = createApp({ serveClient: true });
-const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
-await scheduleSkySnapshots(queue);
-await schedulePageJobs(queue);
+const queue = await startJobQueue(config.databaseUrl ?? '');
+await startSchedules(queue);
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);

@@ -1,9 +1,7 @@
 import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
 import { SkyObjectInputSchema } from '@shared/schemas/sky-object.ts';
 import { Measurement, SkyObject, Source, User } from '../models/index.ts';
-import { createMeasurement } from '../services/measurement-write.ts';
-import { setPreferred } from '../services/measurement-preferred.ts';
-import { createSkyObject } from '../services/sky-object-write.ts';
+import { createMeasurement, setPreferred, createSkyObject } from '../services/catalogue/index.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
 import { DEMO_OBJECTS } from './catalogue-objects.ts';
 

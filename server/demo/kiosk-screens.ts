@@ -1,6 +1,6 @@
 import crypto from 'node:crypto';
 import { KioskScreen, Venue } from '../models/index.ts';
-import { hashToken } from '../services/auth-tokens.ts';
+import { hashToken } from '../services/users/index.ts';
 import { DEMO_VENUE } from './accounts.ts';
 
 /**

@@ -1,10 +1,7 @@
 import type { JSONContent } from '@tiptap/core';
 import { Page, SkyObject, User } from '../models/index.ts';
-import { savePage, createPage } from '../services/pages/page-save.ts';
-import { publishPage } from '../services/pages/page-publish.ts';
-import { signOffPage, signOffStatement } from '../services/pages/page-signoff.ts';
-import { submitPage } from '../services/pages/page-workflow.ts';
-import { findOrCreateStatement } from '../services/statements/create.ts';
+import { savePage, createPage, publishPage, signOffPage, signOffStatement, submitPage } from '../services/pages/index.ts';
+import { findOrCreateStatement } from '../services/statements/index.ts';
 import { logger } from '../logger.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
 

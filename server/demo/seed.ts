@@ -1,5 +1,5 @@
 import { User, Venue } from '../models/index.ts';
-import { hashPassword, verifyPassword } from '../services/passwords.ts';
+import { hashPassword, verifyPassword } from '../services/users/index.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 import { seedCatalogueDemo } from './catalogue.ts';
 import { seedDemoChannels } from './channels.ts';

@@ -1,6 +1,6 @@
 import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
 import { SkyObject, Statement, User, Venue } from '../models/index.ts';
-import { findOrCreateStatement } from '../services/statements/create.ts';
+import { findOrCreateStatement } from '../services/statements/index.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 
 /** Demo objects that get checked statements, so the Statements screen has something to show. */

@@ -11,11 +11,14 @@ const handlers = new Map<string, { run: BatchHandler<object>; batchSize: number 
 let boss: PgBoss | undefined;
 
 /**
- * Declares a job kind. Call at module load from the feature that owns the job; the worker starts
- * when the queue starts (server start-up, or tests that call startJobQueue).
+ * Registers the worker of a job kind, one job at a time. Called from the server's wiring
+ * (`server/wiring.ts`), never at module load; registering a name again replaces its worker, so
+ * building several apps in one process (tests) is harmless.
+ * @param name the job kind
+ * @param handler handles one job's data
  */
-export function defineJob<T extends object>(name: string, handler: JobHandler<T>): (data: T) => Promise<void> {
-  return defineBatchJob<T>(
+export function registerJob<T extends object>(name: string, handler: JobHandler<T>): void {
+  registerBatchJob<T>(
     name,
     async (items) => {
       for (const item of items) await handler(item);
@@ -25,23 +28,19 @@ export function defineJob<T extends object>(name: string, handler: JobHandler<T>
 }
 
 /**
- * Declares a job kind whose worker takes up to `batchSize` waiting jobs at a time and handles them
- * together (the queue is polled every half second, so one job per poll would drain a burst of a
+ * Registers the worker of a job kind that takes up to `batchSize` waiting jobs at a time and handles
+ * them together (the queue is polled every half second, so one job per poll would drain a burst of a
  * thousand catalogue edits in eight minutes). Throwing fails, and retries, the whole batch.
  * @param name the job kind
  * @param handler handles the jobs' data, oldest first
  * @param options.batchSize most jobs handled at once
- * @returns a function that queues one job
  */
-export function defineBatchJob<T extends object>(
+export function registerBatchJob<T extends object>(
   name: string,
   handler: BatchHandler<T>,
   { batchSize }: { batchSize: number },
-): (data: T) => Promise<void> {
+): void {
   handlers.set(name, { run: handler as BatchHandler<object>, batchSize });
-  return async (data: T) => {
-    await enqueue(name, data);
-  };
 }
 
 /** Starts pg-boss on the app's database (its tables live in their own `pgboss` schema) and the workers. */
@@ -67,7 +66,7 @@ export async function enqueue(name: string, data: object, options: PgBoss.SendOp
     return;
   }
   const handler = handlers.get(name);
-  if (!handler) throw new Error(`Unknown job ${name}`);
+  if (!handler) throw new Error(`Unknown job ${name}: the server's wiring (server/wiring.ts) registers every job`);
   await handler.run([data]);
 }
 

@@ -17,27 +17,17 @@ export interface MediaSettings {
   publicBaseUrl: string | null;
 }
 
-function positive(value: string | undefined, fallback: number, name: string): number {
-  if (value === undefined || value === '') return fallback;
-  const n = Number(value);
-  if (!Number.isFinite(n) || n <= 0) throw new Error(`${name} must be a positive number, not "${value}".`);
-  return n;
-}
-
 let cached: MediaSettings | undefined;
 
 /** The current imagery settings. */
 export function mediaSettings(): MediaSettings {
-  cached ??= {
-    uploadMaxBytes: Math.round(
-      positive(process.env.STARPROOF_UPLOAD_MAX_MB, MediaLimits.defaultUploadMaxMb, 'STARPROOF_UPLOAD_MAX_MB') * 1024 * 1024,
-    ),
-    maxPixels: Math.round(
-      positive(process.env.STARPROOF_UPLOAD_MAX_MEGAPIXELS, MediaLimits.defaultMaxMegapixels, 'STARPROOF_UPLOAD_MAX_MEGAPIXELS') *
-        1_000_000,
-    ),
+  if (cached) return cached;
+  const { media } = config;
+  cached = {
+    uploadMaxBytes: Math.round((media.uploadMaxMb ?? MediaLimits.defaultUploadMaxMb) * 1024 * 1024),
+    maxPixels: Math.round((media.maxMegapixels ?? MediaLimits.defaultMaxMegapixels) * 1_000_000),
     tmpDir: path.join(config.uploadsDir, 'tmp'),
-    publicBaseUrl: process.env.STARPROOF_MEDIA_PUBLIC_URL?.replace(/\/+$/, '') || null,
+    publicBaseUrl: media.publicUrl,
   };
   return cached;
 }

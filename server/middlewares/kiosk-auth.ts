@@ -1,7 +1,7 @@
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import { HttpError } from '../errors.ts';
 import { KioskScreen } from '../models/index.ts';
-import { hashToken } from '../services/auth-tokens.ts';
+import { hashToken } from '../services/users/index.ts';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace

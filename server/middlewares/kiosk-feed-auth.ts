@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
+import { config } from '../config.ts';
 import { ChannelScreen, type KioskScreen } from '../models/index.ts';
-import { publishingEvents } from '../services/publishing-events.ts';
 import { requireKiosk } from './kiosk-auth.ts';
 
 declare global {
@@ -17,7 +17,7 @@ declare global {
  * How long (ms) a checked token is trusted before the database is asked again. A revocation on
  * this instance ends it at once (event); on another instance, within this time.
  */
-const TRUST_MS = Number(process.env.STARPROOF_KIOSK_AUTH_CACHE_MS ?? 1000);
+const TRUST_MS = config.kioskAuthCacheMs;
 const MAX_ENTRIES = 5000;
 
 interface Trusted {
@@ -28,11 +28,18 @@ interface Trusted {
 
 const trusted = new Map<string, Trusted>();
 
-publishingEvents.on('screenRevoked', ({ screenId }) => {
+/**
+ * Ends the remembered sign-in of a revoked screen at once (the wiring calls it on `screenRevoked`).
+ * @param screenId the revoked screen
+ */
+export function forgetKioskScreen(screenId: string): void {
   for (const [key, t] of trusted) if (t.screen.id === screenId) trusted.delete(key);
-});
-// A screen moved to another channel (or its channel removed): look the assignment up again.
-publishingEvents.on('channelChanged', () => trusted.clear());
+}
+
+/** Forgets every remembered channel assignment: a screen moved, or its channel was removed (`channelChanged`). */
+export function forgetKioskAssignments(): void {
+  trusted.clear();
+}
 
 /**
  * requireKiosk for the feed, which players poll every half minute and which must answer a 304

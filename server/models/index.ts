@@ -2,7 +2,7 @@ import type { Sequelize } from 'sequelize';
 import { getSequelize } from '../db.ts';
 import { AuditEvent } from './audit-event.ts';
 import { AuthToken } from './auth-token.ts';
-import { initCatalogueModels } from './catalogue.ts';
+import { initCatalogueModels } from './catalogue-models.ts';
 import { Media } from './media.ts';
 import { MediaRendition } from './media-rendition.ts';
 import { OrganisationSettings } from './organisation-settings.ts';
@@ -13,18 +13,18 @@ import { User } from './user.ts';
 import { Venue } from './venue.ts';
 import { KioskScreen } from './kiosk-screen.ts';
 import { SkySnapshot } from './sky-snapshot.ts';
-import { initPageModels } from './pages.ts';
-import { initChannelModels } from './channels.ts';
+import { initPageModels } from './page-models.ts';
+import { initChannelModels } from './channel-models.ts';
 
 export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
 export type { TokenPurpose } from './auth-token.ts';
-export { CatalogueImport, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue.ts';
+export { CatalogueImport, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue-models.ts';
 export { Media, MediaRendition };
 export { CosmologyDescription, OrganisationSettings, Statement };
 export type { StatementStatus } from './statement.ts';
 export { KioskScreen, SkySnapshot };
-export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff } from './pages.ts';
-export { Channel, ChannelScreen, ChannelSlide } from './channels.ts';
+export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff } from './page-models.ts';
+export { Channel, ChannelScreen, ChannelSlide } from './channel-models.ts';
 
 let initialised: Sequelize | undefined;
 

@@ -28,7 +28,8 @@ export type MeasurementSnapshot = Record<string, string | number | boolean | nul
 export class MeasurementHistory extends Model<InferAttributes<MeasurementHistory>, InferCreationAttributes<MeasurementHistory>> {
   declare id: CreationOptional<string>;
   declare measurementId: string;
-  declare objectId: string;
+  /** The sky object measured (column `object_id`). */
+  declare skyObjectId: string;
   declare action: MeasurementHistoryAction;
   declare changedById: string | null;
   declare reason: string | null;
@@ -44,7 +45,7 @@ export class MeasurementHistory extends Model<InferAttributes<MeasurementHistory
       {
         id: { type: DataTypes.BIGINT, primaryKey: true, autoIncrement: true },
         measurementId: { type: DataTypes.UUID, allowNull: false },
-        objectId: { type: DataTypes.UUID, allowNull: false },
+        skyObjectId: { type: DataTypes.UUID, allowNull: false, field: 'object_id' },
         action: { type: DataTypes.STRING(24), allowNull: false },
         changedById: { type: DataTypes.UUID },
         reason: { type: DataTypes.TEXT },

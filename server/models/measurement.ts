@@ -18,7 +18,8 @@ export type MeasurementStatus = 'proposed' | 'accepted' | 'declined';
  */
 export class Measurement extends Model<InferAttributes<Measurement>, InferCreationAttributes<Measurement>> {
   declare id: CreationOptional<string>;
-  declare objectId: string;
+  /** The sky object measured (column `object_id`). */
+  declare skyObjectId: string;
   declare quantity: string;
   declare band: string | null;
   declare value: number;
@@ -51,7 +52,7 @@ export class Measurement extends Model<InferAttributes<Measurement>, InferCreati
     Measurement.init(
       {
         id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
-        objectId: { type: DataTypes.UUID, allowNull: false },
+        skyObjectId: { type: DataTypes.UUID, allowNull: false, field: 'object_id' },
         quantity: { type: DataTypes.STRING(32), allowNull: false },
         band: { type: DataTypes.STRING(16) },
         value: { type: DataTypes.DOUBLE, allowNull: false },

@@ -13,8 +13,8 @@ import {
   type User,
 } from '../models/index.ts';
 import { can } from '../policies/index.ts';
-import { inWindow } from '../services/feed-build.ts';
-import { missingForPublishing } from '../services/media-usage.ts';
+import { inWindow } from '../services/publishing/index.ts';
+import { missingForPublishing } from '../services/media/index.ts';
 import { screenHealth } from './kiosk-screen.ts';
 
 const screenRef = (s: KioskScreen): ChannelScreenRef => ({ id: s.id, name: s.name, health: screenHealth(s) });

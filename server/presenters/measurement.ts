@@ -8,7 +8,7 @@ import { presentSourceRef } from './source.ts';
 export function presentMeasurement(m: Measurement, viewer: User): MeasurementDto {
   return {
     id: m.id,
-    objectId: m.objectId,
+    objectId: m.skyObjectId,
     quantity: m.quantity,
     band: m.band,
     value: m.value,

@@ -4,8 +4,8 @@ import type { MediaDto, RenditionDto } from '@shared/media/schemas.ts';
 import { renditionUrl } from '../media/keys.ts';
 import type { Media, MediaRendition, User } from '../models/index.ts';
 import { can } from '../policies/index.ts';
-import type { LinkedObject } from '../services/media-objects.ts';
-import { missingForPublishing } from '../services/media-usage.ts';
+import type { LinkedObject } from '../services/media/index.ts';
+import { missingForPublishing } from '../services/media/index.ts';
 
 /** A rendition with its public URL; the original never gets one. */
 export function presentRendition(rendition: MediaRendition): RenditionDto {

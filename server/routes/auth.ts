@@ -20,16 +20,22 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { recordAudit } from '../services/audit.ts';
-import { consumeToken, issueToken } from '../services/auth-tokens.ts';
-import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/passwords.ts';
-import { signIn } from '../services/sign-in.ts';
-import { endUserSessions } from '../services/user-sessions.ts';
+import {
+  consumeToken,
+  issueToken,
+  assertAcceptablePassword,
+  hashPassword,
+  verifyPassword,
+  signIn,
+  endUserSessions,
+} from '../services/users/index.ts';
+import { config } from '../config.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
 function addressLimiter(limit: number) {
   return rateLimit({
     windowMs: 15 * 60_000,
-    limit: Number(process.env.STARPROOF_SIGNIN_LIMIT ?? limit),
+    limit: config.limits.signIn ?? limit,
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, _res, next) =>

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { QueryTypes } from 'sequelize';
 import {
   ChannelCreateSchema,
   ChannelListQuerySchema,
@@ -16,32 +15,25 @@ import {
   type SlideUpdateInput,
 } from '@shared/schemas/channel.ts';
 import { IdSchema } from '@shared/schemas/common.ts';
-import { getSequelize } from '../db.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { sendCached } from '../middlewares/http-cache.ts';
 import { validate } from '../middlewares/validate.ts';
 import { Channel } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentChannelDetail, presentChannelRows } from '../presenters/channel.ts';
-import { createChannel, deleteChannel, updateChannel } from '../services/channel-save.ts';
-import { assignScreens } from '../services/channel-screens.ts';
-import { addSlide, removeSlide, reorderSlides, updateSlide } from '../services/channel-slides.ts';
-import { loadSlideSources } from '../services/channel-sources.ts';
-import { getKioskFeed, listenForFeedChanges } from '../services/feed-cache.ts';
-import { registerMediaUsageProvider } from '../services/media-usage.ts';
+import {
+  createChannel,
+  deleteChannel,
+  updateChannel,
+  assignScreens,
+  addSlide,
+  removeSlide,
+  reorderSlides,
+  updateSlide,
+  loadSlideSources,
+  getKioskFeed,
+} from '../services/publishing/index.ts';
 import { FEED_CONTENT_TYPE } from './kiosk-feed.ts';
-
-listenForFeedChanges();
-
-/** The library lists the channels that show an image, and refuses to delete it while they do. */
-registerMediaUsageProvider('channels', async (mediaId) => {
-  if (!IdSchema.safeParse(mediaId).success) return [];
-  const rows = await getSequelize().query<{ id: string; name: string }>(
-    'SELECT DISTINCT c.id, c.name FROM channels c JOIN channel_slides s ON s.channel_id = c.id WHERE s.media_id = :mediaId ORDER BY c.name',
-    { replacements: { mediaId }, type: QueryTypes.SELECT },
-  );
-  return rows.map((r) => ({ kind: 'channel', id: r.id, title: `Kiosk channel: ${r.name}` }));
-});
 
 async function findChannel(id: string): Promise<Channel | null> {
   return IdSchema.safeParse(id).success ? Channel.findByPk(id) : null;

@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { currentKiosk } from '../middlewares/kiosk-auth.ts';
 import { requireKioskFeed } from '../middlewares/kiosk-feed-auth.ts';
 import { sendCached } from '../middlewares/http-cache.ts';
-import { getKioskFeed, listenForFeedChanges } from '../services/feed-cache.ts';
+import { getKioskFeed } from '../services/publishing/index.ts';
 
 /**
  * `no-cache`: a player (or a cache in between) may keep the feed but must revalidate it every
@@ -11,8 +11,6 @@ import { getKioskFeed, listenForFeedChanges } from '../services/feed-cache.ts';
  */
 export const FEED_CACHE_CONTROL = 'private, no-cache';
 export const FEED_CONTENT_TYPE = 'application/feed+json; charset=utf-8';
-
-listenForFeedChanges();
 
 /** GET /api/kiosk/feed: the screen's channel as JSON Feed 1.1, with a strong ETag. */
 export const kioskFeedRouter = Router();

@@ -13,13 +13,14 @@ import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kios
 import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
-import { pairScreen } from '../services/kiosk-pairing.ts';
-import { getSkySnapshot } from '../services/sky-snapshots.ts';
+import { pairScreen } from '../services/publishing/index.ts';
+import { getSkySnapshot } from '../services/sky/index.ts';
+import { config } from '../config.ts';
 
 /** Guessing codes is slow: a few tries per address per quarter hour. */
 const pairingLimiter = rateLimit({
   windowMs: 15 * 60_000,
-  limit: Number(process.env.STARPROOF_PAIRING_LIMIT ?? 30),
+  limit: config.limits.pairing,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

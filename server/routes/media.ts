@@ -5,7 +5,16 @@ import { MediaLimits } from '@shared/media/limits.ts';
 import { MediaListQuerySchema, MediaUpdateSchema, type MediaListQuery, type MediaUpdateInput } from '@shared/media/schemas.ts';
 import { IdSchema } from '@shared/schemas/common.ts';
 import { ConflictError, HttpError } from '../errors.ts';
-import { requestRenditions } from '../jobs/media-renditions.ts';
+import {
+  requestRenditions,
+  deleteMedia,
+  objectsForMedia,
+  suggestObjects,
+  searchMedia,
+  uploadMedia,
+  updateMedia,
+  findMediaUsage,
+} from '../services/media/index.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
@@ -13,12 +22,6 @@ import { validate } from '../middlewares/validate.ts';
 import { Media, MediaRendition, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
-import { deleteMedia } from '../services/media-delete.ts';
-import { objectsForMedia, suggestObjects } from '../services/media-objects.ts';
-import { searchMedia } from '../services/media-search.ts';
-import { uploadMedia } from '../services/media-upload.ts';
-import { updateMedia } from '../services/media-update.ts';
-import { findMediaUsage } from '../services/media-usage.ts';
 
 /** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
 async function findMedia(id: string): Promise<Media | null> {

@@ -15,9 +15,8 @@ import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import type { OrganisationSettings } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
-import { getSettings } from '../services/organisation-settings.ts';
-import { changeCosmology, updateSettings } from '../services/settings-update.ts';
-import { previewCosmologyChange } from '../services/statements/model-preview.ts';
+import { getSettings, changeCosmology, updateSettings } from '../services/settings/index.ts';
+import { previewCosmologyChange } from '../services/statements/index.ts';
 
 /** The adopted model's name as the engine labels it. */
 function modelLabel(settings: OrganisationSettings): string {

@@ -14,10 +14,7 @@ import { validate } from '../middlewares/validate.ts';
 import { CosmologyDescription, SkyObject, Statement, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentStatement } from '../presenters/statement.ts';
-import { acceptStatementWording } from '../services/statements/accept.ts';
-import { findOrCreateStatement } from '../services/statements/create.ts';
-import { recomputeStatements } from '../services/statements/recompute.ts';
-import { readWorking } from '../services/statements/working-store.ts';
+import { acceptStatementWording, findOrCreateStatement, recomputeStatements, readWorking } from '../services/statements/index.ts';
 
 /** What presenting a statement needs loaded with it: its cosmology and its venue. */
 const INCLUDE = [

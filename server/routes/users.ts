@@ -7,8 +7,7 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentUser } from '../presenters/user.ts';
-import { resendInvitation, inviteUser } from '../services/user-invite.ts';
-import { updateUser } from '../services/user-update.ts';
+import { resendInvitation, inviteUser, updateUser } from '../services/users/index.ts';
 
 /** Loads a user by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
 async function findUser(id: string): Promise<User | null> {

@@ -9,7 +9,7 @@ import { KioskScreen, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
 import { recordAudit } from '../services/audit.ts';
-import { issuePairingCode, revokeScreen } from '../services/kiosk-pairing.ts';
+import { issuePairingCode, revokeScreen } from '../services/publishing/index.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });

@@ -19,8 +19,7 @@ import { KioskScreen, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
-import { getSkySnapshot } from '../services/sky-snapshots.ts';
-import { createVenue, deleteVenue, updateVenue } from '../services/venue-save.ts';
+import { getSkySnapshot, createVenue, deleteVenue, updateVenue } from '../services/sky/index.ts';
 import { venueScreensRouter } from './venue-screens.ts';
 
 /** Loads a venue by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */

@@ -37,26 +37,16 @@ export function assertKey(key: string): void {
   if (!KEY_PATTERN.test(key)) throw new Error(`Not a media storage key: ${JSON.stringify(key)}`);
 }
 
-/** The storage settings in the environment: STARPROOF_STORAGE=local (default) or s3. */
-export function storageSettingsFromEnv(
-  env: NodeJS.ProcessEnv = process.env,
-): { driver: 'local'; root: string } | ({ driver: 's3' } & S3Settings) {
-  const driver = env.STARPROOF_STORAGE ?? 'local';
+/** The storage settings from the configuration: STARPROOF_STORAGE=local (default) or s3. */
+export function storageSettingsFromConfig(): { driver: 'local'; root: string } | ({ driver: 's3' } & S3Settings) {
+  const { driver, bucket, ...s3 } = config.storage;
   if (driver === 'local') return { driver, root: config.uploadsDir };
-  if (driver !== 's3') throw new Error(`STARPROOF_STORAGE must be "local" or "s3", not "${driver}".`);
-  if (!env.STARPROOF_S3_BUCKET) throw new Error('STARPROOF_STORAGE=s3 needs STARPROOF_S3_BUCKET.');
-  return {
-    driver,
-    bucket: env.STARPROOF_S3_BUCKET,
-    region: env.STARPROOF_S3_REGION ?? env.AWS_REGION ?? 'us-east-1',
-    endpoint: env.STARPROOF_S3_ENDPOINT,
-    forcePathStyle: env.STARPROOF_S3_FORCE_PATH_STYLE === 'true',
-    prefix: env.STARPROOF_S3_PREFIX ?? '',
-  };
+  if (!bucket) throw new Error('STARPROOF_STORAGE=s3 needs STARPROOF_S3_BUCKET.');
+  return { driver, bucket, ...s3 };
 }
 
 /** Builds a driver from settings. */
-export function createStorage(settings: ReturnType<typeof storageSettingsFromEnv>): MediaStorage {
+export function createStorage(settings: ReturnType<typeof storageSettingsFromConfig>): MediaStorage {
   return settings.driver === 'local' ? new LocalStorage(settings.root) : new S3Storage(settings);
 }
 
@@ -64,6 +54,6 @@ let current: MediaStorage | undefined;
 
 /** The configured storage, created on first use so the environment can be set before it. */
 export function getStorage(): MediaStorage {
-  current ??= createStorage(storageSettingsFromEnv());
+  current ??= createStorage(storageSettingsFromConfig());
   return current;
 }

@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { getSequelize } from '../../server/db.ts';
 import { Measurement, MeasurementHistory } from '../../server/models/index.ts';
-import { catalogueEvents } from '../../server/services/catalogue-events.ts';
-import { getPreferredMeasurements } from '../../server/services/preferred-measurements.ts';
+import { catalogueEvents } from '../../server/services/catalogue/events.ts';
+import { getPreferredMeasurements } from '../../server/services/catalogue/preferred-read.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildMeasurement, buildSkyObject, buildSource } from '../support/catalogue.ts';
 
@@ -18,16 +18,14 @@ describe('measurements', () => {
     const { agent } = await signedInAgent('reviewer');
     const object = await buildSkyObject({ kind: 'star' });
     const source = await buildSource();
-    const res = await agent
-      .post(url(object.id))
-      .send({
-        quantity: 'distance',
-        value: '2.5',
-        unit: 'kpc',
-        uncertaintyMinus: '0.1',
-        uncertaintyPlus: '0.3',
-        sourceId: source.id,
-      });
+    const res = await agent.post(url(object.id)).send({
+      quantity: 'distance',
+      value: '2.5',
+      unit: 'kpc',
+      uncertaintyMinus: '0.1',
+      uncertaintyPlus: '0.3',
+      sourceId: source.id,
+    });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({
       value: 2500,
@@ -69,7 +67,7 @@ describe('measurements', () => {
     expect(negative.body.error.fields.value).toMatch(/greater than 0/);
     const quantity = await agent.post(url(object.id)).send({ quantity: 'brightness', value: 1 });
     expect(quantity.body.error.fields.quantity).toMatch(/Unknown quantity "brightness"/);
-    expect(await Measurement.count({ where: { objectId: object.id } })).toBe(0);
+    expect(await Measurement.count({ where: { skyObjectId: object.id } })).toBe(0);
   });
 
   it('writers propose; a reviewer accepts or declines with a reason; both are in the history', async () => {
@@ -146,12 +144,12 @@ describe('measurements', () => {
       .send({ preferred: true, replaces: a.body.data.id });
     catalogueEvents.off('preferredChanged', listener);
     expect(swap.status).toBe(200);
-    expect(await Measurement.count({ where: { objectId: object.id, preferred: true } })).toBe(2);
+    expect(await Measurement.count({ where: { skyObjectId: object.id, preferred: true } })).toBe(2);
     expect((await Measurement.findByPk(a.body.data.id))!.preferred).toBe(false);
     expect(events).toEqual([
-      { objectId: object.id, quantity: 'apparent_magnitude', band: 'V' },
-      { objectId: object.id, quantity: 'apparent_magnitude', band: 'B' },
-      { objectId: object.id, quantity: 'apparent_magnitude', band: 'V' },
+      { skyObjectId: object.id, quantity: 'apparent_magnitude', band: 'V' },
+      { skyObjectId: object.id, quantity: 'apparent_magnitude', band: 'B' },
+      { skyObjectId: object.id, quantity: 'apparent_magnitude', band: 'V' },
     ]);
     const actions = await MeasurementHistory.findAll({ where: { measurementId: a.body.data.id }, order: [['id', 'ASC']] });
     expect(actions.map((h) => h.action)).toEqual(['created', 'preferred', 'unpreferred']);
@@ -179,7 +177,7 @@ describe('measurements', () => {
       code: 'preferred_changed',
       message: expect.stringMatching(/Another reviewer has just chosen the preferred redshift/),
     });
-    expect(await Measurement.count({ where: { objectId: object.id, preferred: true } })).toBe(1);
+    expect(await Measurement.count({ where: { skyObjectId: object.id, preferred: true } })).toBe(1);
   });
 
   it('the database itself refuses a second preferred value, even without the app', async () => {
@@ -205,15 +203,13 @@ describe('measurements', () => {
       .send({ quantity: 'redshift', value: 0.158, sourceId: null });
     expect(noSource.status).toBe(409);
     expect(noSource.body.error.message).toMatch(/preferred measurement needs a source/);
-    const changed = await agent
-      .patch(`/api/catalogue/measurements/${id}`)
-      .send({
-        quantity: 'redshift',
-        value: 0.1583,
-        uncertainty: 0.0002,
-        sourceId: source.id,
-        reason: 'Corrected a typing error.',
-      });
+    const changed = await agent.patch(`/api/catalogue/measurements/${id}`).send({
+      quantity: 'redshift',
+      value: 0.1583,
+      uncertainty: 0.0002,
+      sourceId: source.id,
+      reason: 'Corrected a typing error.',
+    });
     expect(changed.status).toBe(200);
     const quantity = await agent
       .patch(`/api/catalogue/measurements/${id}`)

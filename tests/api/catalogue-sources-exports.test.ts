@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { seedCatalogueDemo, DEMO_SOURCE_CITATION } from '../../server/demo/catalogue.ts';
 import { seedDemo } from '../../server/demo/seed.ts';
 import { Measurement, SkyObject, Source } from '../../server/models/index.ts';
-import { catalogueEvents } from '../../server/services/catalogue-events.ts';
+import { catalogueEvents } from '../../server/services/catalogue/events.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildMeasurement, buildSkyObject, buildSource } from '../support/catalogue.ts';
 
@@ -15,14 +15,12 @@ describe('sources', () => {
   it('a reviewer adds a source; identifiers are checked and normalised; duplicates are refused', async () => {
     const { agent } = await signedInAgent('reviewer');
     // Willmer (2018), ApJS 236, 47: bibcode and DOI as published.
-    const res = await agent
-      .post('/api/catalogue/sources')
-      .send({
-        citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
-        bibcode: '2018ApJS..236...47W',
-        doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
-        retrievedOn: '2026-11-30',
-      });
+    const res = await agent.post('/api/catalogue/sources').send({
+      citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
+      bibcode: '2018ApJS..236...47W',
+      doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
+      retrievedOn: '2026-11-30',
+    });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({
       doi: '10.3847/1538-4365/aabfdf',
@@ -97,11 +95,11 @@ describe('demo data', () => {
     const objects = (await SkyObject.findAll()).filter((o) => o.notes.includes('Demo object.'));
     expect(objects.length).toBeGreaterThanOrEqual(24);
     expect(new Set(objects.map((o) => o.kind)).size).toBeGreaterThanOrEqual(7);
-    const demo = await Measurement.findAll({ where: { objectId: objects.map((o) => o.id) } });
+    const demo = await Measurement.findAll({ where: { skyObjectId: objects.map((o) => o.id) } });
     expect(demo.length).toBeGreaterThan(40);
     expect(demo.every((m) => m.sourceId === source!.id)).toBe(true);
     // Seeding again adds nothing.
     await seedCatalogueDemo();
-    expect(await Measurement.count({ where: { objectId: objects.map((o) => o.id) } })).toBe(demo.length);
+    expect(await Measurement.count({ where: { skyObjectId: objects.map((o) => o.id) } })).toBe(demo.length);
   });
 });

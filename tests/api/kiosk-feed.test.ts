@@ -1,7 +1,7 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { Page } from '../../server/models/index.ts';
-import { kioskFeedStats } from '../../server/services/feed-cache.ts';
+import { kioskFeedStats } from '../../server/services/publishing/feed-cache.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { buildKioskMedia, getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
 

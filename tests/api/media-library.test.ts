@@ -11,13 +11,13 @@ import path from 'node:path';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { AuditEvent, Media } from '../../server/models/index.ts';
-import { noteFiles } from '../../server/services/media-file-journal.ts';
-import { sweepOrphanMedia } from '../../server/services/media-sweep.ts';
+import { noteFiles } from '../../server/services/media/media-file-journal.ts';
+import { sweepOrphanMedia } from '../../server/services/media/media-sweep.ts';
 import {
   isMediaReadyForPublishing,
   registerMediaUsageProvider,
   unregisterMediaUsageProvider,
-} from '../../server/services/media-usage.ts';
+} from '../../server/services/media/media-usage.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { clearUploads, solidImage, storedFiles, upload } from '../support/media.ts';
 

@@ -11,7 +11,7 @@ import path from 'node:path';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { INSTANCE_TAG, instanceGone } from '../../server/media/instance.ts';
-import { sweepOrphanMedia } from '../../server/services/media-sweep.ts';
+import { sweepOrphanMedia } from '../../server/services/media/media-sweep.ts';
 import { getTestApp } from '../support/app.ts';
 
 const host = INSTANCE_TAG.replace(/_\d+_\d+$/, '');

@@ -1,8 +1,8 @@
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, Measurement, OutboxMessage, Page, PageRevision } from '../../server/models/index.ts';
-import { setPreferred } from '../../server/services/measurement-preferred.ts';
-import { findMediaUsage } from '../../server/services/media-usage.ts';
-import { renderPublishedPage } from '../../server/services/page-render.ts';
+import { setPreferred } from '../../server/services/catalogue/preferred-write.ts';
+import { findMediaUsage } from '../../server/services/media/media-usage.ts';
+import { renderPublishedPage } from '../../server/services/pages/page-render.ts';
 import { sendDailyDigests } from '../../server/services/pages/page-digest.ts';
 import { publishDuePages } from '../../server/services/pages/page-publish.ts';
 import { buildUser, getTestApp, resetDatabase, signedInAgent, waitForMail } from '../support/app.ts';
@@ -135,13 +135,11 @@ describe('from draft to published', () => {
     const eclipse = await agent.post(`/api/pages/${moonPage.id}/submit`).send({});
     expect(eclipse.status).toBe(422);
     expect(eclipse.body.error.message).toMatch(/mentions “eclipse”/);
-    const withNotice = await agent
-      .put(`/api/pages/${moonPage.id}`)
-      .send({
-        version: moonPage.version,
-        title: 'Moon',
-        doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
-      });
+    const withNotice = await agent.put(`/api/pages/${moonPage.id}`).send({
+      version: moonPage.version,
+      title: 'Moon',
+      doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
+    });
     expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(
       200,
     );
@@ -258,7 +256,7 @@ describe('when a statement’s data changes after publication', () => {
     const before = await renderPublishedPage(page.id);
 
     const better = await Measurement.create({
-      objectId: q.object.id,
+      skyObjectId: q.object.id,
       quantity: 'redshift',
       band: null,
       value: 0.3,
@@ -310,7 +308,7 @@ describe('when a statement’s data changes after publication', () => {
   it('a draft or in-review page is not sent to re-check; an unrelated page is untouched', async () => {
     const { reviewer, q, page } = await submittedPage();
     const better = await Measurement.create({
-      objectId: q.object.id,
+      skyObjectId: q.object.id,
       quantity: 'redshift',
       band: null,
       value: 0.25,
@@ -334,13 +332,11 @@ describe('revisions, scheduling and the digest', () => {
     const { agent, user } = await signedInAgent('writer');
     const q = await quasarWithStatements(agent, user);
     const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('The first words.'))), 'Diff me');
-    const second = await agent
-      .put(`/api/pages/${page.id}`)
-      .send({
-        version: page.version,
-        title: 'Diff me again',
-        doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
-      });
+    const second = await agent.put(`/api/pages/${page.id}`).send({
+      version: page.version,
+      title: 'Diff me again',
+      doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
+    });
     const list = (await agent.get(`/api/pages/${page.id}/revisions`)).body.data;
     expect(list.map((r: { number: number }) => r.number)).toEqual([3, 2, 1]);
     expect(list[0].marks).toEqual(['current']);

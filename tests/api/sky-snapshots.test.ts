@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { nightDateAt } from '../../shared/sky/time-zone.ts';
 import { SKY_VERSION } from '../../shared/sky/types.ts';
 import { SkySnapshot, Venue } from '../../server/models/index.ts';
-import { getSkySnapshot, refreshAllVenueSkies } from '../../server/services/sky-snapshots.ts';
+import { getSkySnapshot, refreshAllVenueSkies } from '../../server/services/sky/sky-snapshots.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 
 beforeAll(async () => {

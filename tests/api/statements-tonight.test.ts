@@ -7,7 +7,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { ASTRONOMICAL_UNIT, SPEED_OF_LIGHT } from '../../shared/engine/constants.ts';
 import { localToMs, nextDate, nightDateAt } from '../../shared/sky/time-zone.ts';
 import { Page, SkyObject, SkySnapshot, Statement, Venue, type User } from '../../server/models/index.ts';
-import { refreshVenueSky } from '../../server/services/sky-snapshots.ts';
+import { refreshVenueSky } from '../../server/services/sky/sky-snapshots.ts';
 import { statementEvents } from '../../server/services/statements/events.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { doc, pageWithBody, paragraph, statement, text } from '../support/pages.ts';

@@ -2,8 +2,8 @@ import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { calculate } from '../../shared/engine/calculate.ts';
 import { Measurement, Statement } from '../../server/models/index.ts';
-import { setPreferred } from '../../server/services/measurement-preferred.ts';
-import { retireMeasurement } from '../../server/services/measurement-write.ts';
+import { setPreferred } from '../../server/services/catalogue/preferred-write.ts';
+import { retireMeasurement } from '../../server/services/catalogue/measurement-write.ts';
 import {
   currentSettingsSnapshot,
   mergeScopes,
@@ -117,7 +117,7 @@ describe('staying correct when data changes', () => {
     const oldText = created.body.data.texts['en-GB'];
 
     const better = await Measurement.create({
-      objectId: object.id,
+      skyObjectId: object.id,
       quantity: 'redshift',
       band: null,
       value: 0.3,
@@ -236,14 +236,14 @@ describe('a burst of queued recomputes', () => {
     const night = { venueId: '00000000-0000-4000-8000-00000000abcd', localDate: '2026-12-24' };
     const merged = await mergeScopes([
       { measurementId: measurements[0].id },
-      { objectId: other.object.id },
+      { skyObjectId: other.object.id },
       night,
       { statementIds: [a] },
     ]);
     expect(merged).toHaveLength(2);
     expect(merged[0]).toEqual(night);
     expect(new Set((merged[1] as { statementIds: string[] }).statementIds)).toEqual(new Set([a, b]));
-    expect(await mergeScopes([{ objectId: object.id }, { all: true }, night])).toEqual([{ all: true }]);
-    expect(await mergeScopes([{ objectId: object.id }])).toEqual([{ objectId: object.id }]);
+    expect(await mergeScopes([{ skyObjectId: object.id }, { all: true }, night])).toEqual([{ all: true }]);
+    expect(await mergeScopes([{ skyObjectId: object.id }])).toEqual([{ skyObjectId: object.id }]);
   });
 });

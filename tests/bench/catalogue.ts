@@ -23,9 +23,9 @@ process.env.DATABASE_URL = url;
 const { getSequelize, closeSequelize } = await import('../../server/db.ts');
 const { migrate } = await import('../../server/migrations/runner.ts');
 const { initModels, Source, User } = await import('../../server/models/index.ts');
-const { checkCatalogueImport } = await import('../../server/services/catalogue-import-check.ts');
-const { commitCatalogueImport } = await import('../../server/services/catalogue-import-commit.ts');
-const { skyObjectPageQueries } = await import('../../server/services/sky-object-list.ts');
+const { checkCatalogueImport } = await import('../../server/services/catalogue/catalogue-import-check.ts');
+const { commitCatalogueImport } = await import('../../server/services/catalogue/catalogue-import-commit.ts');
+const { skyObjectPageQueries } = await import('../../server/services/catalogue/sky-object-list.ts');
 const { stopTestCluster } = await import('../setup/test-postgres.ts');
 
 const sql = getSequelize();

@@ -31,7 +31,7 @@ process.env.DATABASE_URL = url;
 const { getSequelize, closeSequelize } = await import('../../server/db.ts');
 const { migrate } = await import('../../server/migrations/runner.ts');
 const models = await import('../../server/models/index.ts');
-const { hashToken } = await import('../../server/services/auth-tokens.ts');
+const { hashToken } = await import('../../server/services/users/auth-tokens.ts');
 const sql = getSequelize();
 await migrate(sql);
 models.initModels(sql);

@@ -61,7 +61,7 @@ process.env.DATABASE_URL = databaseUrl;
 const { initModels, KioskScreen, User } = await import('../../server/models/index.ts');
 const { getSequelize, closeSequelize } = await import('../../server/db.ts');
 initModels(getSequelize());
-const { issuePairingCode, pairScreen } = await import('../../server/services/kiosk-pairing.ts');
+const { issuePairingCode, pairScreen } = await import('../../server/services/publishing/kiosk-pairing.ts');
 const admin = (await User.findOne({ where: { email: DEMO_ACCOUNTS[0].email } }))!;
 const screen = (await KioskScreen.findOne({ order: [['name', 'ASC']] }))!;
 const { code } = await issuePairingCode(screen, admin);

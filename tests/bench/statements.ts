@@ -122,9 +122,9 @@ async function main(): Promise<void> {
   const { applyOutcome, previousOf } = await import('../../server/services/statements/apply-outcome.ts');
   const { batchModelFor } = await import('../../server/services/statements/batch-load.ts');
   const { stopEvaluationPool } = await import('../../server/services/statements/evaluation-pool.ts');
-  const { changeCosmology } = await import('../../server/services/settings-update.ts');
+  const { changeCosmology } = await import('../../server/services/settings/settings-update.ts');
   const { statementEvents } = await import('../../server/services/statements/events.ts');
-  const { getSettings } = await import('../../server/services/organisation-settings.ts');
+  const { getSettings } = await import('../../server/services/settings/organisation-settings.ts');
   const { evaluateStatement } = await import('../../shared/statements/index.ts');
   try {
     const sequelize = getSequelize();

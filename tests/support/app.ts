@@ -8,7 +8,7 @@ import { closeSequelize, getSequelize } from '../../server/db.ts';
 import { startMailCatcher } from '../../server/mail/catcher.ts';
 import { useMailCatcher } from '../../server/mail/mailer.ts';
 import { OutboxMessage, User } from '../../server/models/index.ts';
-import { hashPassword } from '../../server/services/passwords.ts';
+import { hashPassword } from '../../server/services/users/passwords.ts';
 
 let app: Express | undefined;
 let catcher: Awaited<ReturnType<typeof startMailCatcher>> | undefined;

@@ -40,11 +40,11 @@ export async function buildSource(overrides: Partial<{ citation: string; bibcode
 
 /** Creates an accepted measurement directly (history is the services' job; tests of history go through the API). */
 export async function buildMeasurement(
-  objectId: string,
+  skyObjectId: string,
   overrides: Partial<{ quantity: string; band: string | null; value: number; sourceId: string | null; preferred: boolean }> = {},
 ) {
   return Measurement.create({
-    objectId,
+    skyObjectId,
     quantity: overrides.quantity ?? 'redshift',
     band: overrides.band ?? null,
     value: overrides.value ?? 0.1,

@@ -35,7 +35,7 @@ export async function buildObjectWithMeasurements(
   for (const m of measurements) {
     rows.push(
       await Measurement.create({
-        objectId: object.id,
+        skyObjectId: object.id,
         quantity: m.quantity,
         band: m.band ?? null,
         value: m.value,

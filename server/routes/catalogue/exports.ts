@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
-import { exportMeasurementsCsv, exportObjectsCsv } from '../../services/catalogue-export.ts';
+import { exportMeasurementsCsv, exportObjectsCsv } from '../../services/catalogue/index.ts';
 
 const stamp = () => new Date().toISOString().slice(0, 10);
 

@@ -7,8 +7,7 @@ import { HttpError, NotFoundError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { commitCatalogueImport } from '../../services/catalogue-import-commit.ts';
-import { checkCatalogueImport } from '../../services/catalogue-import-check.ts';
+import { commitCatalogueImport, checkCatalogueImport } from '../../services/catalogue/index.ts';
 
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 

@@ -14,9 +14,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentMeasurement } from '../../presenters/measurement.ts';
-import { setPreferred } from '../../services/measurement-preferred.ts';
-import { reviewMeasurement } from '../../services/measurement-review.ts';
-import { retireMeasurement, updateMeasurement } from '../../services/measurement-write.ts';
+import { setPreferred, reviewMeasurement, retireMeasurement, updateMeasurement } from '../../services/catalogue/index.ts';
 import { findMeasurement } from './load.ts';
 
 const notFound = () => NotFoundError('There is no measurement with that id.');

@@ -13,9 +13,13 @@ import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
 import { authorize, can } from '../../policies/index.ts';
 import { presentHistory, presentMeasurement } from '../../presenters/measurement.ts';
 import { presentSkyObject } from '../../presenters/sky-object.ts';
-import { createMeasurement } from '../../services/measurement-write.ts';
-import { createSkyObject, deleteSkyObject, updateSkyObject } from '../../services/sky-object-write.ts';
-import { listSkyObjects } from '../../services/sky-object-list.ts';
+import {
+  createMeasurement,
+  createSkyObject,
+  deleteSkyObject,
+  updateSkyObject,
+  listSkyObjects,
+} from '../../services/catalogue/index.ts';
 import { findSkyObject, measurementIncludes } from './load.ts';
 
 const notFound = () => NotFoundError('There is no object with that id in the catalogue.');
@@ -65,7 +69,7 @@ objectsRouter.get('/:id/measurements', async (req, res) => {
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
   const measurements = await Measurement.findAll({
-    where: { objectId: object.id },
+    where: { skyObjectId: object.id },
     include: measurementIncludes(),
     order: [
       ['quantity', 'ASC'],
@@ -95,7 +99,7 @@ objectsRouter.get('/:id/history', async (req, res) => {
   if (!object) throw notFound();
   const [history, measurements] = await Promise.all([
     MeasurementHistory.findAll({
-      where: { objectId: object.id },
+      where: { skyObjectId: object.id },
       include: [{ model: User, as: 'changedBy', attributes: ['id', 'name'] }],
       order: [
         ['createdAt', 'DESC'],
@@ -103,7 +107,7 @@ objectsRouter.get('/:id/history', async (req, res) => {
       ],
       limit: 500,
     }),
-    Measurement.findAll({ where: { objectId: object.id }, attributes: ['id', 'quantity'] }),
+    Measurement.findAll({ where: { skyObjectId: object.id }, attributes: ['id', 'quantity'] }),
   ]);
   const quantityOf = new Map(measurements.map((m) => [m.id, m.quantity]));
   res.json({ data: history.map((h) => presentHistory(h, quantityOf)) });

@@ -9,7 +9,7 @@ import { validate } from '../../middlewares/validate.ts';
 import { Measurement, Source } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentSource } from '../../presenters/source.ts';
-import { createSource, updateSource } from '../../services/source-write.ts';
+import { createSource, updateSource } from '../../services/catalogue/index.ts';
 import { findSource } from './load.ts';
 
 const notFound = () => NotFoundError('There is no source with that id.');

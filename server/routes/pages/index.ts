@@ -17,20 +17,22 @@ import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageRevision } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { renderPublishedPage, renderWithLookups } from '../../services/page-render.ts';
-import { dashboardFor, setDigest } from '../../services/pages/page-dashboard.ts';
-import { loadPageDetail } from '../../services/pages/page-detail.ts';
-import { PageConflictError } from '../../services/pages/page-errors.ts';
-import { listPages } from '../../services/pages/page-list.ts';
-import { registerPageReactions } from '../../services/pages/page-reactions.ts';
-import { createPage, savePage } from '../../services/pages/page-save.ts';
-import { currentText, loadStatements } from '../../services/pages/page-statements.ts';
+import {
+  renderPublishedPage,
+  renderWithLookups,
+  dashboardFor,
+  setDigest,
+  loadPageDetail,
+  PageConflictError,
+  listPages,
+  createPage,
+  savePage,
+  currentText,
+  loadStatements,
+} from '../../services/pages/index.ts';
 import { findPage } from './load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
-import '../../services/pages/page-digest.ts';
-
-registerPageReactions();
 
 const tooLarge = () =>
   new HttpError(

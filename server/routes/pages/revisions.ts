@@ -5,11 +5,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageRevision, User, type Page } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail } from '../../services/pages/page-detail.ts';
-import { diffRevisions } from '../../services/pages/page-diff.ts';
-import { PageConflictError } from '../../services/pages/page-errors.ts';
-import { savePage } from '../../services/pages/page-save.ts';
-import { loadStatements } from '../../services/pages/page-statements.ts';
+import { loadPageDetail, diffRevisions, PageConflictError, savePage, loadStatements } from '../../services/pages/index.ts';
 import { findPage } from './load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */

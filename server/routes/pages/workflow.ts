@@ -10,10 +10,18 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageComment, PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail } from '../../services/pages/page-detail.ts';
-import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/page-publish.ts';
-import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/page-signoff.ts';
-import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/page-workflow.ts';
+import {
+  loadPageDetail,
+  publishPage,
+  schedulePublish,
+  unpublishPage,
+  resolveNumberFlag,
+  signOffPage,
+  signOffStatement,
+  currentApprovalProblems,
+  sendBackPage,
+  submitPage,
+} from '../../services/pages/index.ts';
 import { recordAudit } from '../../services/audit.ts';
 import { findPage } from './load.ts';
 
@@ -139,15 +147,13 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
     subjectId: page.id,
     data: { commentId: comment.id },
   });
-  res
-    .status(201)
-    .json({
-      data: {
-        id: comment.id,
-        body: comment.body,
-        author: viewer.name,
-        revisionNumber: comment.revisionNumber,
-        createdAt: comment.createdAt.toISOString(),
-      },
-    });
+  res.status(201).json({
+    data: {
+      id: comment.id,
+      body: comment.body,
+      author: viewer.name,
+      revisionNumber: comment.revisionNumber,
+      createdAt: comment.createdAt.toISOString(),
+    },
+  });
 });

@@ -3,19 +3,18 @@ import { rateLimit } from 'express-rate-limit';
 import { config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { sendCached } from '../../middlewares/http-cache.ts';
-import { atomDocument } from '../../services/public-atom.ts';
-import { getPublicPages, prepare } from '../../services/public-pages.ts';
+import { atomDocument, getPublicPages, prepare } from '../../services/publishing/index.ts';
 
 /**
  * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
  * taken down leaves the venue's website within that minute; kiosks revalidate every time.
  */
 export const PUBLIC_CACHE_CONTROL = 'public, max-age=60, must-revalidate';
-const PUBLISHER = process.env.STARPROOF_PUBLISHER_NAME ?? 'Starproof';
+const PUBLISHER = config.publisherName;
 
 const limiter = rateLimit({
   windowMs: 60_000,
-  limit: Number(process.env.STARPROOF_PUBLIC_LIMIT ?? 300),
+  limit: config.limits.publicApi,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

@@ -4,7 +4,7 @@ import { checkNumbers, type NumberFlag } from '@shared/editor/number-check.ts';
 import { REQUIREMENT_LABELS } from '@shared/media/schemas.ts';
 import { findTemplate } from '@shared/statements/index.ts';
 import { PageNumberFlag, PageSignoff, SkyObject, type Page, type PageRevision } from '../../models/index.ts';
-import { isMediaReadyForPublishing } from '../media-usage.ts';
+import { isMediaReadyForPublishing } from '../media/index.ts';
 import { currentText, type LoadedStatement } from './page-statements.ts';
 
 /** The page's plain text, statements left out: what the caution and number checks read. */

@@ -6,7 +6,7 @@ import { findLicence } from '@shared/media/licences.ts';
 import { renditionUrl } from '../../media/keys.ts';
 import { Media, MediaRendition, PageRevision, PageSignoff, SkyObject, User, type Page } from '../../models/index.ts';
 import { pageAbilities, presentPageRow } from '../../presenters/page.ts';
-import { missingForPublishing } from '../media-usage.ts';
+import { missingForPublishing } from '../media/index.ts';
 import { eyeSafetyRequirement, flagsWithResolutions, validStatementSignoffs } from './page-checks.ts';
 import { currentText, loadStatements } from './page-statements.ts';
 

@@ -1,7 +1,5 @@
 import { QueryTypes } from 'sequelize';
-import type PgBoss from 'pg-boss';
 import { getSequelize } from '../../db.ts';
-import { defineJob } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { pageDigestMail } from '../../mail/page-templates.ts';
 import { Page, User } from '../../models/index.ts';
@@ -9,8 +7,10 @@ import { sectionsFor } from './page-dashboard.ts';
 import { deliver } from './page-mail.ts';
 import { publishDuePages } from './page-publish.ts';
 
-const DIGEST = 'pages.daily-digest';
-const PUBLISH_DUE = 'pages.publish-due';
+/** The job kind of the morning digest e-mail. */
+export const DIGEST_JOB = 'pages.daily-digest';
+/** The job kind of the check for pages whose scheduled publication is due. */
+export const PUBLISH_DUE_JOB = 'pages.publish-due';
 
 /**
  * Sends the morning e-mail to everyone who asked for it and has something waiting; nobody gets an
@@ -42,22 +42,14 @@ export async function sendDailyDigests(): Promise<number> {
   return sent;
 }
 
-defineJob<Record<string, never>>(DIGEST, async () => {
+/** The digest job: mails everyone who asked for it and has something waiting. */
+export async function runDigestJob(): Promise<void> {
   const sent = await sendDailyDigests();
   logger.info({ sent }, 'page digests sent');
-});
+}
 
-defineJob<Record<string, never>>(PUBLISH_DUE, async () => {
+/** The publish-due job: publishes the approved pages whose scheduled time has come. */
+export async function runPublishDueJob(): Promise<void> {
   const published = await publishDuePages();
   if (published.length) logger.info({ published: published.length }, 'scheduled pages published');
-});
-
-/**
- * Schedules the page jobs on the running queue: the digest at 07:00 UTC each day, and a check for
- * scheduled publications every minute.
- * @param boss the running queue (from startJobQueue)
- */
-export async function schedulePageJobs(boss: PgBoss): Promise<void> {
-  await boss.schedule(DIGEST, '0 7 * * *', {}, { tz: 'UTC' });
-  await boss.schedule(PUBLISH_DUE, '* * * * *', {}, { tz: 'UTC' });
 }

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
 import { Page, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { publishingEvents } from '../publishing-events.ts';
+import { publishingEvents } from '../publishing/index.ts';
 import { WorkflowError } from './page-errors.ts';
 import { lockPage } from './page-workflow.ts';
 

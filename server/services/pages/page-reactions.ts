@@ -1,17 +1,16 @@
 import { QueryTypes } from 'sequelize';
+import type { MediaUsage } from '@shared/media/schemas.ts';
 import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
-import { registerMediaUsageProvider } from '../media-usage.ts';
-import { statementEvents } from '../statements/events.ts';
 import { enqueuePageRecheck } from './page-recheck.ts';
 
-let registered = false;
-
 /**
- * Where a library image appears: pages whose working copy, approved or published version shows it.
- * @param mediaId the image
+ * Where a library image appears: pages whose working copy, approved or published version shows it
+ * (the media library's usage provider for pages).
+ * @param mediaId the image; anything but a uuid uses nothing
  */
-export async function pagesUsingMedia(mediaId: string) {
+export async function pagesUsingMedia(mediaId: string): Promise<MediaUsage[]> {
+  if (!/^[0-9a-f-]{36}$/i.test(mediaId)) return [];
   const rows = await getSequelize().query<{ id: string; title: string }>(
     `SELECT DISTINCT p.id, p.title FROM pages p JOIN page_revisions r
         ON r.id IN (p.current_revision_id, p.approved_revision_id, p.published_revision_id)
@@ -22,20 +21,12 @@ export async function pagesUsingMedia(mediaId: string) {
 }
 
 /**
- * Wires object pages to the rest of the product: a statement whose wording changed or broke queues
- * a look for pages to re-check; the media library learns which pages use an image. Idempotent.
+ * Queues a look for pages that use statements whose wording changed or broke, from an event
+ * listener (which cannot wait): a failure to queue is logged, not thrown.
+ * @param event the statements concerned
  */
-export function registerPageReactions(): void {
-  if (registered) return;
-  registered = true;
-  const queue = ({ statementIds }: { statementIds: string[] }) => {
-    enqueuePageRecheck({ statementIds }).catch((err: unknown) =>
-      logger.error({ err, statementIds }, 'could not queue a page re-check'),
-    );
-  };
-  statementEvents.on('textChanged', queue);
-  statementEvents.on('broken', queue);
-  registerMediaUsageProvider('pages', (mediaId) =>
-    /^[0-9a-f-]{36}$/i.test(mediaId) ? pagesUsingMedia(mediaId) : Promise.resolve([]),
+export function queuePageRecheck({ statementIds }: { statementIds: string[] }): void {
+  enqueuePageRecheck({ statementIds }).catch((err: unknown) =>
+    logger.error({ err, statementIds }, 'could not queue a page re-check'),
   );
 }

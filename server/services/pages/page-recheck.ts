@@ -1,6 +1,6 @@
 import { Op, QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { defineJob } from '../../jobs/queue.ts';
+import { enqueue } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { pageRecheckMail } from '../../mail/page-templates.ts';
 import { Page, Statement } from '../../models/index.ts';
@@ -58,8 +58,16 @@ export async function markPagesForRecheck(statementIds: string[]): Promise<strin
   return marked;
 }
 
+/** The job kind of a look for pages to re-check. */
+export const PAGE_RECHECK_JOB = 'pages.recheck';
+
+/** Queues a look for the pages that use these statements (inline when no queue runs). */
+export async function enqueuePageRecheck(data: { statementIds: string[] }): Promise<void> {
+  await enqueue(PAGE_RECHECK_JOB, data);
+}
+
 /** The background job behind statement events: look for pages that need a re-check. */
-export const enqueuePageRecheck = defineJob<{ statementIds: string[] }>('pages.recheck', async ({ statementIds }) => {
+export async function runPageRecheckJob({ statementIds }: { statementIds: string[] }): Promise<void> {
   const marked = await markPagesForRecheck(statementIds);
   if (marked.length) logger.info({ pages: marked.length }, 'pages sent to re-check');
-});
+}

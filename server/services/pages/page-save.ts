@@ -4,7 +4,7 @@ import { getSequelize } from '../../db.ts';
 import { NotFoundError } from '../../errors.ts';
 import { Page, PageRevision, SkyObject, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { getSettings } from '../organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { PageConflictError, WorkflowError } from './page-errors.ts';
 import { appendRevision, EMPTY_DOC } from './page-revisions.ts';
 

@@ -12,8 +12,8 @@ import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { getSequelize } from '../../db.ts';
 import { Venue } from '../../models/index.ts';
-import { getPreferredMeasurements, type PreferredMeasurement } from '../preferred-measurements.ts';
-import { getSkySnapshot } from '../sky-snapshots.ts';
+import { getPreferredMeasurements, type PreferredMeasurement } from '../catalogue/index.ts';
+import { getSkySnapshot } from '../sky/index.ts';
 
 /** The organisation's choices a statement depends on. */
 export interface SettingsSnapshot {

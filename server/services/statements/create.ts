@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { SkyObject, Statement, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { getSettings } from '../organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { applyOutcome } from './apply-outcome.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 import { packForStorage } from './working-pack.ts';
@@ -20,7 +20,7 @@ import { buildTemplateContext, buildVenueNights, withVenue } from './context.ts'
  * @throws HttpError 400 `venue_required` / `venue_not_used`, 404 unknown object, template or venue, 422 `statement_not_computable`
  */
 export async function findOrCreateStatement(
-  objectId: string,
+  skyObjectId: string,
   templateId: string,
   actor: User,
   venueId: string | null = null,
@@ -37,9 +37,9 @@ export async function findOrCreateStatement(
   }
   const venue = venueId ? await Venue.findByPk(venueId) : null;
   if (venueId && !venue) throw NotFoundError('There is no such venue.');
-  const existing = await Statement.findOne({ where: { skyObjectId: objectId, templateId, venueId } });
+  const existing = await Statement.findOne({ where: { skyObjectId, templateId, venueId } });
   if (existing) return { statement: existing, created: false };
-  const object = await SkyObject.findByPk(objectId);
+  const object = await SkyObject.findByPk(skyObjectId);
   if (!object) throw NotFoundError('That object is not in the catalogue.');
   const settings = await getSettings();
   const base = await buildTemplateContext(object, {
@@ -70,14 +70,14 @@ export async function findOrCreateStatement(
     const modelId = model ? await cosmologyDescriptionId(model, transaction) : null;
     await saveSkeletons(packed.skeletons, transaction);
     const [statement, created] = await Statement.findOrCreate({
-      where: { skyObjectId: objectId, templateId, venueId },
+      where: { skyObjectId, templateId, venueId },
       defaults: {
         ...fields,
         working: packed.stored,
         modelId,
         settingsVersion: settings.version,
         computedAt: new Date(),
-        skyObjectId: objectId,
+        skyObjectId,
         templateId,
         venueId,
         createdById: actor.id,
@@ -92,7 +92,7 @@ export async function findOrCreateStatement(
           action: 'statement.created',
           subjectType: 'statement',
           subjectId: statement.id,
-          data: { objectId, templateId, venueId },
+          data: { objectId: skyObjectId, templateId, venueId },
         },
         transaction,
       );

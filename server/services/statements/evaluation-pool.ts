@@ -4,6 +4,7 @@ import type { StatementLocale } from '@shared/statements/index.ts';
 import { logger } from '../../logger.ts';
 import { evaluateBatch, type BatchJob, type PreviewChange, type WriteBatchResult } from './evaluate-batch.ts';
 import type { WorkerReply } from './evaluation-worker.ts';
+import { config } from '../../config.ts';
 
 /**
  * Worker threads that compute statement batches, so a recompute of the whole catalogue uses every
@@ -35,8 +36,8 @@ let nextId = 1;
 
 /** How many workers the pool runs (0: compute inline). */
 export function poolSize(): number {
-  const configured = process.env.STARPROOF_STATEMENT_WORKERS;
-  if (configured !== undefined && configured !== '') return Math.max(0, Math.floor(Number(configured)) || 0);
+  const configured = config.statementWorkers;
+  if (configured !== undefined) return configured;
   return Math.min(availableParallelism(), 4);
 }
 

@@ -4,7 +4,7 @@ import type { PreviewRow } from '@shared/schemas/settings.ts';
 import { STATEMENT_TEMPLATES, findTemplate, type StatementLocale } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import { SkyObject, Statement } from '../../models/index.ts';
-import { getSettings } from '../organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { loadBatchJob } from './batch-load.ts';
 import type { PreviewChange } from './evaluate-batch.ts';
 import { poolSize, runBatch } from './evaluation-pool.ts';

@@ -1,9 +1,9 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { defineBatchJob } from '../../jobs/queue.ts';
+import { enqueue } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
-import { getSettings } from '../organisation-settings.ts';
+import { getSettings } from '../settings/index.ts';
 import { batchModelFor, loadBatchJob } from './batch-load.ts';
 import type { SettingsSnapshot } from './context.ts';
 import type { WriteBatchResult } from './evaluate-batch.ts';
@@ -14,7 +14,7 @@ import { saveSkeletons } from './working-store.ts';
 /** Which statements to recompute. */
 export type RecomputeScope =
   | { all: true }
-  | { objectId: string }
+  | { skyObjectId: string }
   | { statementIds: string[] }
   | { measurementId: string }
   | { sourceId: string }
@@ -45,8 +45,10 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
         raw: true,
       })
     ).map((s) => s.id);
-  if ('objectId' in scope)
-    return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.objectId }, raw: true })).map((s) => s.id);
+  if ('skyObjectId' in scope)
+    return (await Statement.findAll({ attributes: ['id'], where: { skyObjectId: scope.skyObjectId }, raw: true })).map(
+      (s) => s.id,
+    );
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
   if ('all' in scope)
     return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
@@ -190,35 +192,47 @@ export async function mergeScopes(scopes: RecomputeScope[]): Promise<RecomputeSc
   return [...nights, { statementIds: [...ids] }];
 }
 
+/** A scope queued under the object's earlier name (`objectId`): jobs may wait in the queue across an upgrade. */
+function upgradeScope(scope: RecomputeScope | { objectId: string }): RecomputeScope {
+  return 'objectId' in scope ? { skyObjectId: scope.objectId } : scope;
+}
+
+/** The job kind of a statement recompute. */
+export const RECOMPUTE_JOB = 'statements.recompute';
+/** Queued recomputes handed over at once and merged into one. */
+export const RECOMPUTE_BATCH = 100;
+
+/** Queues a recompute of the statements a scope covers (inline when no queue runs). */
+export async function enqueueRecompute(data: { scope: RecomputeScope }): Promise<void> {
+  await enqueue(RECOMPUTE_JOB, data);
+}
+
 /**
- * The background job: recompute what the queued scopes cover (up to 100 jobs merged at a time, so a
- * burst of catalogue edits costs one recompute, not one per edit); a settings change mid-way ends
- * quietly (its own job follows).
+ * The background job: recompute what the queued scopes cover (up to RECOMPUTE_BATCH jobs merged at
+ * a time, so a burst of catalogue edits costs one recompute, not one per edit); a settings change
+ * mid-way ends quietly (its own job follows).
+ * @param jobs the queued jobs' data, oldest first
  */
-export const enqueueRecompute = defineBatchJob<{ scope: RecomputeScope }>(
-  'statements.recompute',
-  async (jobs) => {
-    for (const scope of await mergeScopes(jobs.map((j) => j.scope))) {
-      try {
-        const result = await recomputeStatements(scope);
-        logger.info(
-          {
-            scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope,
-            jobs: jobs.length,
-            written: result.written,
-            changed: result.changed.length,
-            broken: result.broken.length,
-          },
-          'statements recomputed',
-        );
-      } catch (error) {
-        if (error instanceof SettingsMovedError) {
-          logger.info({ scope }, 'recompute superseded by a settings change');
-          continue;
-        }
-        throw error;
+export async function runRecomputeJobs(jobs: { scope: RecomputeScope | { objectId: string } }[]): Promise<void> {
+  for (const scope of await mergeScopes(jobs.map((j) => upgradeScope(j.scope)))) {
+    try {
+      const result = await recomputeStatements(scope);
+      logger.info(
+        {
+          scope: 'statementIds' in scope ? { statements: scope.statementIds.length } : scope,
+          jobs: jobs.length,
+          written: result.written,
+          changed: result.changed.length,
+          broken: result.broken.length,
+        },
+        'statements recomputed',
+      );
+    } catch (error) {
+      if (error instanceof SettingsMovedError) {
+        logger.info({ scope }, 'recompute superseded by a settings change');
+        continue;
       }
+      throw error;
     }
-  },
-  { batchSize: 100 },
-);
+  }
+}

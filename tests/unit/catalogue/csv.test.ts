@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
-import { decodeCsv, detectDelimiter } from '../../../server/services/csv-decode.ts';
-import { readCsvRows } from '../../../server/services/csv-rows.ts';
-import { safeCell } from '../../../server/services/csv-safe.ts';
+import { decodeCsv, detectDelimiter } from '../../../server/services/catalogue/csv-decode.ts';
+import { readCsvRows } from '../../../server/services/catalogue/csv-rows.ts';
+import { safeCell } from '../../../server/services/catalogue/csv-safe.ts';
 
 describe('reading CSV files', () => {
   it('finds the delimiter from the header, ignoring quoted text', () => {

@@ -1,0 +1,18 @@
+/**
+ * Object pages: drafts, revisions, review and sign-off, publication, re-checks, rendering.
+ * The public face of the domain: other domains and routes import from here, never a file inside.
+ */
+export { dashboardFor, setDigest } from './page-dashboard.ts';
+export { loadPageDetail } from './page-detail.ts';
+export { diffRevisions } from './page-diff.ts';
+export { DIGEST_JOB, PUBLISH_DUE_JOB, runDigestJob, runPublishDueJob } from './page-digest.ts';
+export { PageConflictError } from './page-errors.ts';
+export { listPages } from './page-list.ts';
+export { publishPage, schedulePublish, unpublishPage } from './page-publish.ts';
+export { pagesUsingMedia, queuePageRecheck } from './page-reactions.ts';
+export { PAGE_RECHECK_JOB, runPageRecheckJob } from './page-recheck.ts';
+export { publicPageTexts, renderPublishedPage, renderWithLookups } from './page-render.ts';
+export { createPage, savePage } from './page-save.ts';
+export { resolveNumberFlag, signOffPage, signOffStatement } from './page-signoff.ts';
+export { currentText, loadStatements } from './page-statements.ts';
+export { currentApprovalProblems, sendBackPage, submitPage } from './page-workflow.ts';

@@ -1,0 +1,172 @@
+import { Op } from 'sequelize';
+import {
+  FEED_EXTENSION_VERSION,
+  JSON_FEED_VERSION,
+  type FeedItem,
+  type FeedSlide,
+  type KioskFeed,
+} from '@shared/schemas/kiosk-feed.ts';
+import { localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
+import { NotFoundError } from '../../errors.ts';
+import { Channel, ChannelSlide, Page, Venue } from '../../models/index.ts';
+import type { FeedDeps } from './feed-fingerprint.ts';
+import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
+import { feedSky, skyHtml } from './feed-sky.ts';
+import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
+import { getSkySnapshot } from '../sky/index.ts';
+import { publicPageTexts } from '../pages/index.ts';
+import { publicStatements } from '../statements/index.ts';
+
+/** What the feed is for: a channel at its venue, or a screen with no channel (a holding feed). */
+export interface FeedTarget {
+  channelId: string | null;
+  venueId: string;
+}
+
+export interface BuiltFeed {
+  feed: KioskFeed;
+  deps: FeedDeps;
+  /** Epoch ms by which the feed must be rebuilt (a window opens or closes, the night changes). */
+  validUntil: number | null;
+}
+
+/** Whether a slide's window includes the instant. */
+export const inWindow = (slide: Pick<ChannelSlide, 'startsAt' | 'endsAt'>, now: number) =>
+  (!slide.startsAt || slide.startsAt.getTime() <= now) && (!slide.endsAt || slide.endsAt.getTime() > now);
+
+const imageParts = (img: PublishedImage | undefined) =>
+  img
+    ? { credit: img.credit, licence: img.licence, licence_url: img.licenceUrl, image: img.image }
+    : { credit: null, licence: null, licence_url: null, image: null };
+
+const figureHtml = (img: PublishedImage) =>
+  `<figure><img src="${e(img.image.hd)}" alt="${e(img.image.alt)}"><figcaption>${e(img.credit)} · ${e(img.licence)}</figcaption></figure>`;
+
+/**
+ * Builds a channel's kiosk feed as JSON Feed 1.1 with the `_starproof` extension: slides in order,
+ * those outside their window left out, page slides only while the page is published (with the
+ * signed-off wording of the chosen statements and their "as of" dates, tonight's for those that
+ * follow tonight), images only when they may
+ * be shown with credit and licence, and the venue's stored sky tonight.
+ * @param target the channel (or none) and the venue whose screens read it
+ * @param now the server clock, epoch ms
+ * @throws HttpError 404 when the venue no longer exists
+ */
+export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Promise<BuiltFeed> {
+  const venue = await Venue.findByPk(target.venueId);
+  if (!venue) throw NotFoundError('This screen’s venue no longer exists.');
+  const channel = target.channelId ? await Channel.findOne({ where: { id: target.channelId, venueId: venue.id } }) : null;
+  const slides = channel ? await ChannelSlide.findAll({ where: { channelId: channel.id }, order: [['position', 'ASC']] }) : [];
+
+  const pageIds = [...new Set(slides.flatMap((s) => (s.pageId ? [s.pageId] : [])))];
+  const statementIds = [...new Set(slides.flatMap((s) => s.statementIds ?? []))];
+  const [pages, statements] = await Promise.all([
+    pageIds.length
+      ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'locale', 'publishedSnapshot'] })
+      : [],
+    publicStatements(statementIds),
+  ]);
+  const live = new Map(pages.filter((p) => p.publishedSnapshot).map((p) => [p.id, p.publishedSnapshot!]));
+  const pageLocales = new Map(pages.map((p) => [p.id, p.locale]));
+  const imageOf = (s: ChannelSlide) =>
+    (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
+  const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
+  const images = await loadPublishedImages(mediaIds);
+
+  let validUntil: number | null = null;
+  const until = (t: number) => (validUntil = validUntil === null ? t : Math.min(validUntil, t));
+  for (const s of slides) for (const t of [s.startsAt, s.endsAt]) if (t && t.getTime() > now) until(t.getTime());
+
+  const active = slides.filter((s) => inWindow(s, now));
+  let skyDate: string | null = null;
+  let sky: Awaited<ReturnType<typeof getSkySnapshot>> = null;
+  if (active.some((s) => s.kind === 'sky_tonight')) {
+    skyDate = nightDateAt(now, venue.timeZone);
+    sky = await getSkySnapshot(venue.id, skyDate);
+    until(localToMs(nextDate(skyDate), 6 * 60, venue.timeZone));
+  }
+
+  const items: FeedItem[] = [];
+  for (const s of active) {
+    const base = {
+      kind: s.kind,
+      position: s.position,
+      duration_s: s.durationS,
+      starts_at: s.startsAt?.toISOString() ?? null,
+      ends_at: s.endsAt?.toISOString() ?? null,
+    };
+    const img = images.get(imageOf(s) ?? '');
+    if (s.kind === 'page') {
+      const snapshot = live.get(s.pageId!);
+      if (!snapshot) continue; // unpublished: gone from the screens at once
+      const shown = publicPageTexts(snapshot, statements, pageLocales.get(s.pageId!) ?? 'en-GB');
+      const chosen = (s.statementIds ?? [])
+        .filter((id) => shown.statementTexts[id])
+        .map((id) => ({ id, text: shown.statementTexts[id], as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt }));
+      const text = firstParagraphText(shown.html);
+      const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
+      const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
+      items.push({
+        id: s.id,
+        title: snapshot.title,
+        content_html: html,
+        ...(img ? { image: img.image.hd } : {}),
+        date_published: snapshot.publishedAt ?? snapshot.signedOffAt,
+        _starproof: { slide },
+      });
+    } else if (s.kind === 'image') {
+      if (!img) continue; // no picture goes up without its credit and licence
+      const slide: FeedSlide = { ...base, layout: 'image', text: s.caption, statements: [], ...imageParts(img) };
+      items.push({
+        id: s.id,
+        title: s.caption,
+        content_html: `${figureHtml(img)}${s.caption ? `<p>${e(s.caption)}</p>` : ''}`,
+        image: img.image.hd,
+        date_published: s.createdAt.toISOString(),
+        date_modified: img.updatedAt.toISOString(),
+        _starproof: { slide },
+      });
+    } else if (sky) {
+      const table = feedSky(sky.data, sky.computedAt, venue.name);
+      const slide: FeedSlide = {
+        ...base,
+        layout: 'sky-table',
+        text: `Tonight from ${venue.name}`,
+        statements: [],
+        credit: null,
+        licence: null,
+        licence_url: null,
+        image: null,
+      };
+      items.push({
+        id: s.id,
+        title: 'The sky tonight',
+        content_html: skyHtml(table),
+        date_published: sky.computedAt.toISOString(),
+        _starproof: { slide, sky: table },
+      });
+    }
+  }
+
+  const feed: KioskFeed = {
+    version: JSON_FEED_VERSION,
+    title: channel ? `${channel.name} · ${venue.name}` : venue.name,
+    description: channel
+      ? `Kiosk channel "${channel.name}" at ${venue.name}`
+      : `No channel is assigned to this screen at ${venue.name} yet`,
+    items,
+    _starproof: {
+      version: FEED_EXTENSION_VERSION,
+      server_time: new Date(now).toISOString(),
+      valid_until: validUntil === null ? null : new Date(validUntil).toISOString(),
+      channel: channel ? { id: channel.id, name: channel.name } : null,
+      venue: { id: venue.id, name: venue.name, time_zone: venue.timeZone },
+      holding: items.length === 0,
+    },
+  };
+  return {
+    feed,
+    deps: { channelId: channel?.id ?? null, venueId: venue.id, pageIds, statementIds, mediaIds, skyDate },
+    validUntil,
+  };
+}

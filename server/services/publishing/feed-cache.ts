@@ -1,0 +1,120 @@
+import { createHash } from 'node:crypto';
+import { logger } from '../../logger.ts';
+import { buildKioskFeed, type FeedTarget } from './feed-build.ts';
+import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
+import { config } from '../../config.ts';
+
+/** A built feed, ready to send as it is. */
+export interface CachedFeed {
+  body: Buffer;
+  /** Strong validator: the SHA-256 of the exact bytes. */
+  etag: string;
+  deps: FeedDeps;
+  fingerprint: string;
+  /** Hash of the content without the build time, so a rebuild that changes nothing keeps its ETag. */
+  contentHash: string;
+  validUntil: number | null;
+  checkedAt: number;
+  builtAt: number;
+}
+
+/** How often (ms) a cached feed's fingerprint is compared with the database; other instances' changes show within this. */
+const CHECK_MS = config.feedCheckMs;
+
+const entries = new Map<string, CachedFeed>();
+const pending = new Map<string, Promise<CachedFeed>>();
+let generation = 0;
+let stats = { builds: 0, checks: 0 };
+
+const keyOf = (t: FeedTarget) => t.channelId ?? `venue:${t.venueId}`;
+const sha = (data: string | Buffer) => createHash('sha256').update(data).digest('base64url');
+
+async function build(target: FeedTarget, previous: CachedFeed | undefined): Promise<CachedFeed> {
+  const startedGeneration = generation;
+  let guess = previous?.deps;
+  for (let attempt = 0; ; attempt += 1) {
+    // Fingerprint before and after reading: equal means nothing moved while the feed was built.
+    const before = guess ? await feedFingerprint(guess) : '';
+    const now = Date.now();
+    const built = await buildKioskFeed(target, now);
+    const after = await feedFingerprint(built.deps);
+    stats.builds += 1;
+    const settled = before === after;
+    if (!settled && attempt < 2) {
+      guess = built.deps;
+      continue;
+    }
+    const { server_time: _time, ...stable } = built.feed._starproof;
+    const contentHash = sha(JSON.stringify({ ...built.feed, _starproof: stable }));
+    const reuse = previous && previous.contentHash === contentHash;
+    const body = reuse ? previous.body : Buffer.from(JSON.stringify(built.feed));
+    const fingerprint = settled && generation === startedGeneration ? after : '';
+    return {
+      body,
+      etag: reuse ? previous.etag : `"${sha(body)}"`,
+      deps: built.deps,
+      // Unsettled, or an event arrived meanwhile: keep the result but rebuild on the next request.
+      fingerprint,
+      contentHash,
+      validUntil: built.validUntil,
+      checkedAt: fingerprint ? now : 0,
+      builtAt: now,
+    };
+  }
+}
+
+async function refresh(
+  key: string,
+  target: FeedTarget,
+  previous: CachedFeed | undefined,
+  checkOnly: boolean,
+): Promise<CachedFeed> {
+  if (checkOnly && previous) {
+    stats.checks += 1;
+    const now = Date.now();
+    if ((await feedFingerprint(previous.deps)) === previous.fingerprint && previous.fingerprint) {
+      previous.checkedAt = now;
+      return previous;
+    }
+  }
+  const fresh = await build(target, previous);
+  entries.set(key, fresh);
+  return fresh;
+}
+
+/**
+ * The kiosk feed for a channel (or a screen without one), built once per change: from memory when
+ * nothing it depends on has changed, rebuilt after a local domain event, when a slide window opens
+ * or closes or the night changes, or when the fingerprint shows a change made by another instance.
+ * Concurrent requests share one build or check.
+ * @param target the channel and venue
+ */
+export async function getKioskFeed(target: FeedTarget): Promise<CachedFeed> {
+  const key = keyOf(target);
+  const entry = entries.get(key);
+  const now = Date.now();
+  const expired = !entry || (entry.validUntil !== null && now >= entry.validUntil);
+  if (!expired && now - entry.checkedAt < CHECK_MS) return entry;
+  const inFlight = pending.get(key);
+  if (inFlight) return inFlight;
+  const job = refresh(key, target, entry, !expired).finally(() => pending.delete(key));
+  pending.set(key, job);
+  return job;
+}
+
+/** Drops every cached feed (a domain event: the next request rebuilds, keeping the ETag when nothing changed). */
+export function invalidateKioskFeeds(reason: string): void {
+  generation += 1;
+  for (const [key, entry] of entries) entries.set(key, { ...entry, validUntil: 0 });
+  logger.debug({ reason }, 'kiosk feeds invalidated');
+}
+
+/** Counters for the benchmark and tests: how many builds and fingerprint checks ran. */
+export function kioskFeedStats(): { builds: number; checks: number } {
+  return { ...stats };
+}
+
+/** Resets counters (tests). */
+export function resetKioskFeedStats(): void {
+  stats = { builds: 0, checks: 0 };
+}

@@ -1,0 +1,16 @@
+import { EventEmitter } from 'node:events';
+
+/** What each settings event carries: the settings version after the change. */
+export interface SettingsEventMap {
+  /** An admin adopted another cosmology: every statement's numbers may move. */
+  cosmologyAdopted: [{ version: number }];
+  /** The default band changed: magnitudes in it may move. */
+  defaultBandChanged: [{ version: number }];
+}
+
+/**
+ * Domain events of the organisation's settings, emitted after the change has committed. The
+ * settings service waits for its listeners (`emitAndWait`), so the request answers once the
+ * recompute they start is queued.
+ */
+export const settingsEvents = new EventEmitter<SettingsEventMap>();

@@ -1,0 +1,64 @@
+import crypto from 'node:crypto';
+import { Op, type Transaction } from 'sequelize';
+import { HttpError } from '../../errors.ts';
+import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
+import { logger } from '../../logger.ts';
+
+/** SHA-256 of the token: a leaked table row cannot be turned back into a working link. */
+export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw).digest('hex');
+
+/**
+ * Issues a single-use token and returns it in the clear (for the e-mail only). Earlier unused
+ * tokens of the same purpose for this user stop working.
+ */
+export async function issueToken(
+  userId: string,
+  purpose: TokenPurpose,
+  lifetimeMs: number,
+  transaction?: Transaction,
+): Promise<string> {
+  const raw = crypto.randomBytes(32).toString('base64url');
+  await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
+  await AuthToken.create(
+    { userId, purpose, tokenHash: hashToken(raw), expiresAt: new Date(Date.now() + lifetimeMs) },
+    { transaction },
+  );
+  return raw;
+}
+
+/**
+ * Marks a token used and returns its user. The row is locked so the same link cannot be used twice
+ * by two requests at once.
+ * @throws HttpError 400 `invalid_token` when unknown, used, expired or the account is deactivated
+ */
+export async function consumeToken(raw: string, purpose: TokenPurpose, transaction: Transaction): Promise<User> {
+  const token = await AuthToken.findOne({
+    where: { tokenHash: hashToken(raw), purpose },
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
+  const what = purpose === 'invitation' ? 'invitation link' : 'password reset link';
+  if (!token) throw new HttpError(400, 'invalid_token', `This ${what} is not valid. Ask for a new one.`);
+  if (token.usedAt) throw new HttpError(400, 'invalid_token', `This ${what} has already been used. Ask for a new one.`);
+  if (token.expiresAt.getTime() < Date.now())
+    throw new HttpError(400, 'invalid_token', `This ${what} has expired. Ask for a new one.`);
+  const user = await User.findByPk(token.userId, { transaction });
+  if (!user || !user.active) throw new HttpError(400, 'invalid_token', 'This account has been deactivated.');
+  token.usedAt = new Date();
+  await token.save({ transaction });
+  return user;
+}
+
+/** Removes tokens that expired over 30 days ago (a used or refused link needs no row after that); run daily by TOKEN_PURGE_JOB. */
+export async function purgeOldTokens(): Promise<number> {
+  return AuthToken.destroy({ where: { expiresAt: { [Op.lt]: new Date(Date.now() - 30 * 86_400_000) } } });
+}
+
+/** The job kind of the daily token clean-up. */
+export const TOKEN_PURGE_JOB = 'users.purge-old-tokens';
+
+/** The daily clean-up job: sign-in links (invitations, resets) that expired over 30 days ago go. */
+export async function runTokenPurgeJob(): Promise<void> {
+  const removed = await purgeOldTokens();
+  if (removed) logger.info({ removed }, 'expired sign-in links removed');
+}

@@ -1,0 +1,10 @@
+/**
+ * People: sign-in, passwords, invitations, one-time tokens, accounts and their sessions.
+ * The public face of the domain: other domains and routes import from here, never a file inside.
+ */
+export { consumeToken, hashToken, issueToken, purgeOldTokens, runTokenPurgeJob, TOKEN_PURGE_JOB } from './auth-tokens.ts';
+export { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords.ts';
+export { signIn } from './sign-in.ts';
+export { inviteUser, resendInvitation } from './user-invite.ts';
+export { endUserSessions } from './user-sessions.ts';
+export { updateUser } from './user-update.ts';
