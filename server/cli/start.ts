@@ -15,6 +15,7 @@ import { schedulePageJobs } from '../services/pages/page-digest.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media-sweep.ts';
+import { recomputeAfterRulesRelease } from '../services/statements/rules-release.ts';
 
 const started = Date.now();
 
@@ -63,6 +64,7 @@ const app = createApp({ serveClient: true });
 const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
 await scheduleSkySnapshots(queue);
 await schedulePageJobs(queue);
+if (await recomputeAfterRulesRelease()) console.log('Statement rules changed with this release: every statement is being recomputed.');
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);

@@ -6,6 +6,8 @@ export interface CatalogueEventMap {
   preferredChanged: [{ objectId: string; quantity: string; band: string | null }];
   /** A measurement was created, edited, reviewed or retired. */
   measurementChanged: [{ measurementId: string; objectId: string }];
+  /** An object's name, kind or sentence names changed: its statements' wording or validity may move. */
+  objectChanged: [{ objectId: string }];
   /** A source's citation or identifiers changed. */
   sourceChanged: [{ sourceId: string }];
 }

@@ -49,11 +49,18 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
   return settings;
 }
 
-/** Changes the band, locale or eye-safety notice. A band change moves magnitudes, so statements are recomputed. */
+/**
+ * Changes the band, locale, eye-safety notice or default spectral indices. A band change moves
+ * magnitudes and a default spectral index can stand in for a missing measurement, so either
+ * recomputes every statement.
+ */
 export async function updateSettings(input: SettingsUpdateInput, actor: User): Promise<OrganisationSettings> {
   const settings = await getSequelize().transaction(async (transaction) => {
     const row = await getSettings(transaction, 'update');
-    const bandChanged = input.defaultBand !== undefined && input.defaultBand !== row.defaultBand;
+    const bandChanged =
+      (input.defaultBand !== undefined && input.defaultBand !== row.defaultBand) ||
+      (input.spectralIndexDefaults !== undefined &&
+        JSON.stringify(input.spectralIndexDefaults) !== JSON.stringify(row.spectralIndexDefaults ?? {}));
     row.set({ ...input, updatedById: actor.id, ...(bandChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
     await recordAudit(

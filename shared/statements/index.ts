@@ -20,6 +20,15 @@ export { formatApproximate } from './number-words.ts';
 export { nightFromSky, planetOf } from './tonight.ts';
 export { SentenceNamesSchema, type SentenceName, type SentenceNames } from './names.ts';
 
+/**
+ * The release of the statement rules: raise it whenever a release changes templates' wording, the
+ * kinds they are valid for or the inputs they require. The server recomputes every stored statement
+ * once when it starts under a newer release (server/services/statements/rules-release.ts).
+ * 2: band light in the sentence, names with article and number, ratio house style, template kinds,
+ *    K-correction and extinction rules.
+ */
+export const STATEMENT_RULES_VERSION = 2;
+
 /** Every template, in the order the picker lists them. */
 export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [
   luminositySun,

@@ -11,7 +11,7 @@ function queue(scope: RecomputeScope) {
 
 /**
  * Keeps statements current: any change to a preferred measurement, a measurement a statement used,
- * or a source queues a background recompute of the statements it can affect; a venue's sky for a
+ * a source, or an object's name, kind or sentence names queues a background recompute of the statements it can affect; a venue's sky for a
  * new night (or after the venue moved) recomputes the statements about that venue for that night.
  */
 export function registerStatementTriggers(): void {
@@ -20,5 +20,8 @@ export function registerStatementTriggers(): void {
   catalogueEvents.on('preferredChanged', ({ objectId }) => queue({ objectId }));
   catalogueEvents.on('measurementChanged', ({ measurementId }) => queue({ measurementId }));
   catalogueEvents.on('sourceChanged', ({ sourceId }) => queue({ sourceId }));
+  // A new kind can put a statement outside its template's kinds (→ needs review); a new name or
+  // sentence name moves the wording.
+  catalogueEvents.on('objectChanged', ({ objectId }) => queue({ objectId }));
   skyEvents.on('nightComputed', ({ venueId, localDate }) => queue({ venueId, localDate }));
 }

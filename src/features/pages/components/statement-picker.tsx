@@ -20,13 +20,14 @@ export function StatementPicker({
   onPick,
   onClose,
 }: {
-  defaultObject: { id: string; name: string };
+  defaultObject: { id: string; name: string; kind?: string };
   replacing?: string;
   onPick: (statementId: string) => void;
   onClose: () => void;
 }) {
   const [objectId, setObjectId] = useState(defaultObject.id);
   const [objectName, setObjectName] = useState(defaultObject.name);
+  const [objectKind, setObjectKind] = useState(defaultObject.kind);
   const [changingObject, setChangingObject] = useState(false);
   // The template waiting for its venue, and the venue chosen for it.
   const [venueFor, setVenueFor] = useState<StatementTemplateDto | null>(null);
@@ -62,16 +63,18 @@ export function StatementPicker({
         <ObjectPicker
           value={objectId}
           valueLabel={objectName}
-          onChange={(id, name) => {
+          onChange={(id, name, kind) => {
             setObjectId(id);
             setObjectName(name.split(' · ')[0]);
+            setObjectKind(kind);
             create.reset();
           }}
         />
       )}
       <fieldset className="space-y-1.5">
         <legend className="mb-1 text-sm font-medium">Statement</legend>
-        {(templates.data ?? []).map((t) =>
+        {/* Only the templates valid for this kind of object (the server refuses the others, saying why). */}
+        {(templates.data ?? []).filter((t) => !objectKind || t.kinds.includes(objectKind)).map((t) =>
           venueFor?.id === t.id ? (
             <form
               key={t.id}
