@@ -154,7 +154,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Triangulum Galaxy',
-    sentenceNames: { en: { text: 'the Triangulum Galaxy', plural: false }, fr: { text: 'la galaxie du Triangle', plural: false } },
+    sentenceNames: {
+      en: { text: 'the Triangulum Galaxy', plural: false },
+      fr: { text: 'la galaxie du Triangle', plural: false },
+    },
     designations: ['M33', 'NGC 598'],
     kind: 'galaxy',
     ra: '01 33 50.0',
@@ -163,7 +166,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Large Magellanic Cloud',
-    sentenceNames: { en: { text: 'the Large Magellanic Cloud', plural: false }, fr: { text: 'le Grand Nuage de Magellan', plural: false } },
+    sentenceNames: {
+      en: { text: 'the Large Magellanic Cloud', plural: false },
+      fr: { text: 'le Grand Nuage de Magellan', plural: false },
+    },
     designations: ['LMC'],
     kind: 'galaxy',
     ra: '05 23 34.5',
@@ -172,7 +178,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Whirlpool Galaxy',
-    sentenceNames: { en: { text: 'the Whirlpool Galaxy', plural: false }, fr: { text: 'la galaxie du Tourbillon', plural: false } },
+    sentenceNames: {
+      en: { text: 'the Whirlpool Galaxy', plural: false },
+      fr: { text: 'la galaxie du Tourbillon', plural: false },
+    },
     designations: ['M51', 'NGC 5194'],
     kind: 'galaxy',
     ra: '13 29 52.7',
@@ -261,7 +270,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Ring Nebula',
-    sentenceNames: { en: { text: 'the Ring Nebula', plural: false }, fr: { text: 'la nébuleuse annulaire de la Lyre', plural: false } },
+    sentenceNames: {
+      en: { text: 'the Ring Nebula', plural: false },
+      fr: { text: 'la nébuleuse annulaire de la Lyre', plural: false },
+    },
     designations: ['M57', 'NGC 6720'],
     kind: 'nebula',
     ra: '18 53 35.1',
@@ -295,7 +307,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Hercules Globular Cluster',
-    sentenceNames: { en: { text: 'the Hercules Globular Cluster', plural: false }, fr: { text: 'l’amas globulaire d’Hercule', plural: false } },
+    sentenceNames: {
+      en: { text: 'the Hercules Globular Cluster', plural: false },
+      fr: { text: 'l’amas globulaire d’Hercule', plural: false },
+    },
     designations: ['M13', 'NGC 6205'],
     kind: 'cluster',
     ra: '16 41 41.2',

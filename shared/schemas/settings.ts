@@ -5,7 +5,10 @@ import { SKY_OBJECT_KINDS } from '../catalogue/kinds.ts';
 
 /** One kind's default spectral index (f_ν ∝ ν^α), always with the source it comes from. */
 export const SpectralIndexDefaultSchema = z.object({
-  value: z.number({ message: 'The spectral index must be a number' }).min(-5, 'A spectral index below −5 is not plausible').max(5, 'A spectral index above 5 is not plausible'),
+  value: z
+    .number({ message: 'The spectral index must be a number' })
+    .min(-5, 'A spectral index below −5 is not plausible')
+    .max(5, 'A spectral index above 5 is not plausible'),
   sigma: z.number().positive('The spread must be above 0').max(5).nullable().default(null),
   source: z
     .string({ message: 'Name the source of the default' })

@@ -141,10 +141,10 @@ export function Component() {
             Default spectral indices (K-correction)
           </h2>
           <p className="text-sm text-muted">
-            Far away, the light we measure in a band left the object at shorter wavelengths; the K-correction for that
-            needs the object’s spectral index. Without a measured one, a brightness or light-output statement beyond the
-            redshift where this matters asks for it — unless you name a default here, with its source. Statements that use a
-            default say so in their working. Leave a kind empty to always ask.
+            Far away, the light we measure in a band left the object at shorter wavelengths; the K-correction for that needs the
+            object’s spectral index. Without a measured one, a brightness or light-output statement beyond the redshift where this
+            matters asks for it — unless you name a default here, with its source. Statements that use a default say so in their
+            working. Leave a kind empty to always ask.
           </p>
           <SpectralIndexDefaultsForm settings={s} />
         </section>

@@ -90,7 +90,10 @@ export function ObjectForm({
     setFormError(undefined);
     // The server parses the same text again (one schema, two uses), so send what was typed.
     const { sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields } = getValues();
-    const raw = { ...fields, sentenceNames: sentenceNamesOf({ sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields }) };
+    const raw = {
+      ...fields,
+      sentenceNames: sentenceNamesOf({ sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields }),
+    };
     mutation.mutate(moving ? { ...raw, ra: '', dec: '' } : raw, {
       onSuccess: onDone,
       onError: (error) =>
@@ -152,8 +155,8 @@ export function ObjectForm({
       <fieldset className="grid gap-4 sm:col-span-2 sm:grid-cols-2">
         <legend className="mb-1 text-sm font-medium text-ink">Name in a sentence</legend>
         <p className="text-xs text-muted sm:col-span-2">
-          How statements name it, with its article: “the Andromeda Galaxy”, “the Pleiades” (plural). Leave empty when the
-          name stands alone (“Sirius”, “3C 279”).
+          How statements name it, with its article: “the Andromeda Galaxy”, “the Pleiades” (plural). Leave empty when the name
+          stands alone (“Sirius”, “3C 279”).
         </p>
         <SentenceNameField
           label="English"

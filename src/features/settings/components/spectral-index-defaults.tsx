@@ -34,11 +34,14 @@ export function SpectralIndexDefaultsForm({ settings }: { settings: SettingsDto 
         const data = new FormData(e.currentTarget);
         const defaults: SpectralIndexDefaults = {};
         for (const { kind, label } of KINDS) {
-          const value = String(data.get(`${kind}-value`) ?? '').trim().replace('−', '-');
+          const value = String(data.get(`${kind}-value`) ?? '')
+            .trim()
+            .replace('−', '-');
           const sigma = String(data.get(`${kind}-sigma`) ?? '').trim();
           const source = String(data.get(`${kind}-source`) ?? '').trim();
           if (value === '' && source === '') continue;
-          if (value === '' || Number.isNaN(Number(value))) return setProblem(`${label}: enter the spectral index as a number, e.g. −0.44.`);
+          if (value === '' || Number.isNaN(Number(value)))
+            return setProblem(`${label}: enter the spectral index as a number, e.g. −0.44.`);
           if (source.length < 5) return setProblem(`${label}: name the source of the default (a paper or handbook).`);
           defaults[kind] = { value: Number(value), sigma: sigma === '' ? null : Number(sigma), source };
         }

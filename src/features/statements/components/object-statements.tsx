@@ -22,9 +22,7 @@ export function ObjectStatements({ objectId, objectKind }: { objectId: string; o
   const existing = new Set(statements.data?.data.filter((s) => !s.venue).map((s) => s.template.id));
   // Only the templates valid for this kind of object; the server refuses the others with the reason.
   const available =
-    templates.data?.filter(
-      (t) => (t.needsVenue || !existing.has(t.id)) && (!objectKind || t.kinds.includes(objectKind)),
-    ) ?? [];
+    templates.data?.filter((t) => (t.needsVenue || !existing.has(t.id)) && (!objectKind || t.kinds.includes(objectKind))) ?? [];
   const chosen = available.find((t) => t.id === templateId);
 
   return (
