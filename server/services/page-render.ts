@@ -164,7 +164,7 @@ export function withStatementNotes(html: string, notes: Map<string, string>): st
  * @returns the wording and notes by statement id; `html` with the notes, `textHtml` without (for summaries)
  */
 export function publicPageTexts(
-  live: { html: string; statementTexts: Record<string, string> },
+  live: { html: string; statementTexts: Record<string, string>; statementNotes?: Record<string, string> },
   shown: Map<string, PublicStatement>,
   locale: string,
 ): { statementTexts: Record<string, string>; notes: Record<string, string | null>; html: string; textHtml: string } {
@@ -175,7 +175,12 @@ export function publicPageTexts(
   for (const [id, signed] of Object.entries(live.statementTexts)) {
     statementTexts[id] = publicText(signed, shown.get(id), locale);
     if (statementTexts[id] !== signed) moved.set(id, statementTexts[id]);
-    notes[id] = publicNote(statementTexts[id], shown.get(id), locale);
+    // Signed wording keeps the small print signed with it; tonight's wording (or a snapshot made
+    // before notes were kept) takes the note computed with that wording.
+    notes[id] =
+      statementTexts[id] === signed && live.statementNotes
+        ? (live.statementNotes[id] ?? null)
+        : publicNote(statementTexts[id], shown.get(id), locale);
     if (notes[id]) noted.set(id, notes[id]!);
   }
   const textHtml = withStatementTexts(live.html, moved);
