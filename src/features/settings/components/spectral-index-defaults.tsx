@@ -51,7 +51,7 @@ export function SpectralIndexDefaultsForm({ settings }: { settings: SettingsDto 
       {KINDS.map(({ kind, label }) => {
         const d = settings.spectralIndexDefaults[kind];
         return (
-          <fieldset key={kind} className="grid gap-3 sm:grid-cols-[8rem_8rem_1fr]">
+          <fieldset key={kind} className="grid gap-3 sm:grid-cols-[9rem_11rem_1fr] sm:items-end">
             <legend className="mb-1 text-sm font-medium">{label}</legend>
             <TextField label="α (f_ν ∝ ν^α)" name={`${kind}-value`} inputMode="decimal" defaultValue={text(d?.value)} />
             <TextField label="Spread (1σ, optional)" name={`${kind}-sigma`} inputMode="decimal" defaultValue={text(d?.sigma)} />
