@@ -64,7 +64,8 @@ const app = createApp({ serveClient: true });
 const queue = await startJobQueue(process.env.DATABASE_URL ?? config.databaseUrl!);
 await scheduleSkySnapshots(queue);
 await schedulePageJobs(queue);
-if (await recomputeAfterRulesRelease()) console.log('Statement rules changed with this release: every statement is being recomputed.');
+if (await recomputeAfterRulesRelease())
+  console.log('Statement rules changed with this release: every statement is being recomputed.');
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
