@@ -25,9 +25,8 @@ import type { CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
 import { KIND_LABELS, type SkyObjectKind } from '../catalogue/kinds.ts';
 import { derivedStep } from './compose.ts';
-import { asInput, distanceInputs, find, missing, requireDistance, run, type DistanceBasis } from './inputs.ts';
+import { asInput, distanceInputs, find, missing, requireDistance, run, type DistanceBasis, used } from './inputs.ts';
 import type { StatementMeasurement, TemplateContext, UsedInput } from './types.ts';
-import { used } from './inputs.ts';
 
 /** How far a spectral index plausibly differs from the K = 0 assumption (α = −1). */
 export const SPECTRAL_INDEX_SPREAD = 0.5;
@@ -176,11 +175,12 @@ export function photometryRun(
     });
     steps.push(rule);
     if (matters && fallback) {
-      const source = `ASSUMPTION — the organisation’s default spectral index for ${kindLabel}s (no measured one): ${fallback.source}`;
-      r = request({
-        alpha:
-          fallback.sigma != null ? { value: fallback.value, sigma: fallback.sigma, source } : { value: fallback.value, source },
-      });
+      // A default is a typical value, not this object's: without a stated spread it carries the
+      // rule's own (±0.5), so the interval, and the figures shown, admit how much it may be off.
+      const sigma = fallback.sigma ?? SPECTRAL_INDEX_SPREAD;
+      const spreadNote = fallback.sigma == null ? `; spread ±${SPECTRAL_INDEX_SPREAD} assumed (none given)` : '';
+      const source = `ASSUMPTION — the organisation’s default spectral index for ${kindLabel}s (no measured one): ${fallback.source}${spreadNote}`;
+      r = request({ alpha: { value: fallback.value, sigma, source } });
       warnings.push(
         `Assumed spectral index α = ${fallback.value} for ${kindLabel}s (organisation setting; ${fallback.source}): ${ctx.object.name} has no measured one.`,
       );

@@ -192,6 +192,23 @@ describe('2. the K-correction and extinction rules', () => {
     ).toBe(false);
   });
 
+  it('a default without a stated spread carries the rule’s ±0.5, so the rounding admits it', () => {
+    const source = 'Vanden Berk et al. (2001), AJ 122, 549 (recalled from memory)';
+    const bare = ok(
+      'luminosity-sun',
+      farQuasar([], { assumptions: { spectralIndex: { quasar: { value: -0.44, sigma: null, source } } } }),
+    );
+    const spread = ok(
+      'luminosity-sun',
+      farQuasar([], { assumptions: { spectralIndex: { quasar: { value: -0.44, sigma: 0.05, source } } } }),
+    );
+    const alpha = bare.working.find((s) => /K-correction for a power-law/.test(s.title))?.inputs.find((i) => i.symbol === 'α');
+    expect(alpha?.source).toMatch(/spread ±0\.5 assumed \(none given\)$/);
+    // ±0.5 in α at z = 2.22 is ±0.63 mag (above): more than 30 %, so one significant figure.
+    expect(bare.significantFigures).toBe(1);
+    expect(spread.significantFigures).toBeGreaterThan(1);
+  });
+
   it('below the limit K = 0 is kept, and the working says why', () => {
     const near = ctx({ name: 'Near quasar', kind: 'quasar' }, [mag(14, 'V', 0.05), m('z', 'redshift', 0.05, { sigma: 0.0001 })]);
     const r = ok('luminosity-sun', near);
