@@ -57,6 +57,9 @@ export function wireServer(): void {
   catalogueEvents.on('preferredChanged', ({ skyObjectId }) => queueRecompute({ skyObjectId }));
   // a source's citation or identifiers change → the statements citing it recompute
   catalogueEvents.on('sourceChanged', ({ sourceId }) => queueRecompute({ sourceId }));
+  // an object's name, kind or sentence names change → its statements recompute (a new kind may put one
+  // outside its template's kinds, which sends it to review)
+  catalogueEvents.on('objectChanged', ({ skyObjectId }) => queueRecompute({ skyObjectId }));
 
   // ── Sky → statements ──────────────────────────────────────────────────────────────────────
   // a venue's new night is computed (or the venue moved) → that venue's statements for that night recompute
@@ -65,8 +68,8 @@ export function wireServer(): void {
   // ── Settings → statements (the settings service waits for these: see emitAndWait) ─────────
   // an admin adopts another cosmology → every statement recomputes
   settingsEvents.on('cosmologyAdopted', () => enqueueRecompute({ scope: { all: true } }));
-  // the default band changes → every statement recomputes
-  settingsEvents.on('defaultBandChanged', () => enqueueRecompute({ scope: { all: true } }));
+  // the default band or the default spectral indices change → every statement recomputes
+  settingsEvents.on('statementDefaultsChanged', () => enqueueRecompute({ scope: { all: true } }));
 
   // ── Statements → pages ────────────────────────────────────────────────────────────────────
   // statement text changes → pages using it go to re-check

@@ -13,6 +13,7 @@ import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media/index.ts';
+import { recomputeAfterRulesRelease } from '../services/statements/index.ts';
 import { startSchedules } from '../wiring.ts';
 
 const started = Date.now();
@@ -68,6 +69,8 @@ if (config.isProduction) {
 const app = createApp({ serveClient: true });
 const queue = await startJobQueue(config.databaseUrl ?? '');
 await startSchedules(queue);
+if (await recomputeAfterRulesRelease())
+  console.log('Statement rules changed with this release: every statement is being recomputed.');
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);

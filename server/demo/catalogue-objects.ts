@@ -23,6 +23,8 @@ interface DemoObject {
   ra?: string;
   dec?: string;
   notes?: string;
+  /** The name as sentences use it (article, number), where it differs from the name as listed. */
+  sentenceNames?: { en?: { text: string; plural: boolean }; fr?: { text: string; plural: boolean } };
   measurements: DemoMeasurement[];
 }
 
@@ -37,6 +39,7 @@ const V = (value: number, uncertainty?: number): DemoMeasurement => ({
 export const DEMO_OBJECTS: DemoObject[] = [
   {
     name: 'Sirius',
+    sentenceNames: { fr: { text: 'Sirius', plural: false } },
     designations: ['α CMa', 'HD 48915'],
     kind: 'star',
     ra: '06 45 08.9',
@@ -50,6 +53,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Betelgeuse',
+    sentenceNames: { fr: { text: 'Bételgeuse', plural: false } },
     designations: ['α Ori', 'HD 39801'],
     kind: 'star',
     ra: '05 55 10.3',
@@ -64,6 +68,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Vega',
+    sentenceNames: { fr: { text: 'Véga', plural: false } },
     designations: ['α Lyr', 'HD 172167'],
     kind: 'star',
     ra: '18 36 56.3',
@@ -82,6 +87,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Polaris',
+    sentenceNames: { fr: { text: 'l’étoile Polaire', plural: false } },
     designations: ['α UMi', 'North Star'],
     kind: 'star',
     ra: '02 31 49.1',
@@ -90,6 +96,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Proxima Centauri',
+    sentenceNames: { fr: { text: 'Proxima du Centaure', plural: false } },
     designations: ['α Cen C', 'GJ 551'],
     kind: 'star',
     ra: '14 29 43.0',
@@ -102,6 +109,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Rigel',
+    sentenceNames: { fr: { text: 'Rigel', plural: false } },
     designations: ['β Ori', 'HD 34085'],
     kind: 'star',
     ra: '05 14 32.3',
@@ -110,6 +118,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Deneb',
+    sentenceNames: { fr: { text: 'Deneb', plural: false } },
     designations: ['α Cyg'],
     kind: 'star',
     ra: '20 41 25.9',
@@ -118,6 +127,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Sun',
+    sentenceNames: { en: { text: 'the Sun', plural: false }, fr: { text: 'le Soleil', plural: false } },
     designations: ['Sol'],
     kind: 'sun',
     notes: 'Never look at the Sun directly or through optics without a certified solar filter.',
@@ -130,6 +140,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Andromeda Galaxy',
+    sentenceNames: { en: { text: 'the Andromeda Galaxy', plural: false }, fr: { text: 'la galaxie d’Andromède', plural: false } },
     designations: ['M31', 'NGC 224'],
     kind: 'galaxy',
     ra: '00 42 44.3',
@@ -143,6 +154,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Triangulum Galaxy',
+    sentenceNames: {
+      en: { text: 'the Triangulum Galaxy', plural: false },
+      fr: { text: 'la galaxie du Triangle', plural: false },
+    },
     designations: ['M33', 'NGC 598'],
     kind: 'galaxy',
     ra: '01 33 50.0',
@@ -151,6 +166,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Large Magellanic Cloud',
+    sentenceNames: {
+      en: { text: 'the Large Magellanic Cloud', plural: false },
+      fr: { text: 'le Grand Nuage de Magellan', plural: false },
+    },
     designations: ['LMC'],
     kind: 'galaxy',
     ra: '05 23 34.5',
@@ -159,6 +178,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Whirlpool Galaxy',
+    sentenceNames: {
+      en: { text: 'the Whirlpool Galaxy', plural: false },
+      fr: { text: 'la galaxie du Tourbillon', plural: false },
+    },
     designations: ['M51', 'NGC 5194'],
     kind: 'galaxy',
     ra: '13 29 52.7',
@@ -179,6 +202,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Sombrero Galaxy',
+    sentenceNames: { en: { text: 'the Sombrero Galaxy', plural: false }, fr: { text: 'la galaxie du Sombrero', plural: false } },
     designations: ['M104', 'NGC 4594'],
     kind: 'galaxy',
     ra: '12 39 59.4',
@@ -224,6 +248,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Orion Nebula',
+    sentenceNames: { en: { text: 'the Orion Nebula', plural: false }, fr: { text: 'la nébuleuse d’Orion', plural: false } },
     designations: ['M42', 'NGC 1976'],
     kind: 'nebula',
     ra: '05 35 17.3',
@@ -236,6 +261,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Crab Nebula',
+    sentenceNames: { en: { text: 'the Crab Nebula', plural: false }, fr: { text: 'la nébuleuse du Crabe', plural: false } },
     designations: ['M1', 'NGC 1952'],
     kind: 'nebula',
     ra: '05 34 31.9',
@@ -244,6 +270,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Ring Nebula',
+    sentenceNames: {
+      en: { text: 'the Ring Nebula', plural: false },
+      fr: { text: 'la nébuleuse annulaire de la Lyre', plural: false },
+    },
     designations: ['M57', 'NGC 6720'],
     kind: 'nebula',
     ra: '18 53 35.1',
@@ -252,6 +282,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Pleiades',
+    sentenceNames: { en: { text: 'the Pleiades', plural: true }, fr: { text: 'les Pléiades', plural: true } },
     designations: ['M45', 'Seven Sisters'],
     kind: 'cluster',
     ra: '03 47 00',
@@ -259,11 +290,15 @@ export const DEMO_OBJECTS: DemoObject[] = [
     measurements: [
       V(1.6),
       { quantity: 'distance', value: 136, unit: 'pc', uncertainty: 1 },
+      // E(B−V) ≈ 0.04 towards the cluster, so A_V ≈ 3.1 × 0.04 (recalled from memory): beyond 100 pc a
+      // light-output statement needs the extinction.
+      { quantity: 'extinction', value: 0.12, unit: 'mag', band: 'V', uncertainty: 0.03 },
       { quantity: 'angular_size', value: 110, unit: 'arcmin' },
     ],
   },
   {
     name: 'Omega Centauri',
+    sentenceNames: { fr: { text: 'Oméga du Centaure', plural: false } },
     designations: ['NGC 5139'],
     kind: 'cluster',
     ra: '13 26 47.3',
@@ -272,6 +307,10 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Hercules Globular Cluster',
+    sentenceNames: {
+      en: { text: 'the Hercules Globular Cluster', plural: false },
+      fr: { text: 'l’amas globulaire d’Hercule', plural: false },
+    },
     designations: ['M13', 'NGC 6205'],
     kind: 'cluster',
     ra: '16 41 41.2',
@@ -289,6 +328,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Saturn',
+    sentenceNames: { fr: { text: 'Saturne', plural: false } },
     designations: [],
     kind: 'planet',
     measurements: [
@@ -307,6 +347,7 @@ export const DEMO_OBJECTS: DemoObject[] = [
   },
   {
     name: 'Moon',
+    sentenceNames: { en: { text: 'the Moon', plural: false }, fr: { text: 'la Lune', plural: false } },
     designations: ['Luna'],
     kind: 'moon',
     measurements: [

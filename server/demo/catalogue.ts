@@ -2,6 +2,7 @@ import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
 import { SkyObjectInputSchema } from '@shared/schemas/sky-object.ts';
 import { Measurement, SkyObject, Source, User } from '../models/index.ts';
 import { createMeasurement, setPreferred, createSkyObject } from '../services/catalogue/index.ts';
+import { getSettings } from '../services/settings/index.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
 import { DEMO_OBJECTS } from './catalogue-objects.ts';
 
@@ -30,6 +31,20 @@ export async function seedCatalogueDemo(): Promise<void> {
     createdById: reviewer.id,
   });
 
+  // The demo organisation names a default spectral index for quasars, so its quasar statements show
+  // how an assumption reads in the working (an organisation without one is asked for the measurement).
+  const settings = await getSettings();
+  if (Object.keys(settings.spectralIndexDefaults ?? {}).length === 0) {
+    settings.spectralIndexDefaults = {
+      quasar: {
+        value: -0.44,
+        sigma: null,
+        source:
+          'Vanden Berk et al. (2001), AJ 122, 549: continuum of the composite quasar spectrum, α_ν = −0.44 (demo setting; value recalled from memory)',
+      },
+    };
+    await settings.save();
+  }
   for (const demo of DEMO_OBJECTS) {
     const existing = await SkyObject.findOne({ where: { name: demo.name } });
     if (existing) continue;
@@ -55,4 +70,20 @@ export async function seedCatalogueDemo(): Promise<void> {
 export async function hasCatalogueDemo(): Promise<boolean> {
   const source = await Source.findOne({ where: { citation: DEMO_SOURCE_CITATION } });
   return !!source && (await Measurement.count({ where: { sourceId: source.id } })) > 0;
+}
+
+/**
+ * Gives the demo objects their names as sentences use them where a catalogue seeded before they
+ * existed has none. Never overwrites a sentence name someone has entered.
+ */
+export async function fillDemoSentenceNames(): Promise<void> {
+  if (!(await Source.findOne({ where: { citation: DEMO_SOURCE_CITATION } }))) return;
+  for (const demo of DEMO_OBJECTS) {
+    if (!demo.sentenceNames) continue;
+    const object = await SkyObject.findOne({ where: { name: demo.name } });
+    if (object && Object.keys(object.sentenceNames ?? {}).length === 0) {
+      object.sentenceNames = demo.sentenceNames;
+      await object.save();
+    }
+  }
 }

@@ -47,7 +47,8 @@ export async function seedDemoPages(): Promise<void> {
   const andromedaTitle = 'How far away is the Andromeda Galaxy? (demo)';
   await once(andromedaTitle, async () => {
     const distance = await statementFor('Andromeda Galaxy', 'distance-today', writer);
-    const nakedEye = await statementFor('Andromeda Galaxy', 'naked-eye', writer);
+    // Not the naked-eye comparison: that is for points of light, and a galaxy's light is spread out.
+    const travel = await statementFor('Andromeda Galaxy', 'light-travel', writer);
     const andromeda = await draft(andromedaTitle, 'Andromeda Galaxy', writer, {
       type: 'doc',
       content: [
@@ -57,13 +58,17 @@ export async function seedDemoPages(): Promise<void> {
           ),
         ),
         h('A long way off'),
-        p(s(distance), t(' The light reaching your eye tonight set out long before there were people to see it.')),
+        p(s(distance), t(' '), s(travel), t(' It set out long before there were people to see it.')),
         h('Can I see it?'),
-        p(s(nakedEye), t(' Let your eyes adjust to the dark for twenty minutes first, away from the car park lights.')),
+        p(
+          t(
+            'Yes, on a dark night: not as a star but as a faint, oval glow, because its light is spread over a patch of sky several times the width of the full Moon. Let your eyes adjust to the dark for twenty minutes first, away from the car park lights.',
+          ),
+        ),
       ],
     });
     await submitPage(andromeda.id, undefined, writer);
-    for (const id of [distance, nakedEye]) await signOffStatement(andromeda.id, id, reviewer);
+    for (const id of [distance, travel]) await signOffStatement(andromeda.id, id, reviewer);
     await signOffPage(andromeda.id, reviewer);
     await publishPage(andromeda.id, editor);
   });

@@ -1,7 +1,7 @@
 import { User, Venue } from '../models/index.ts';
 import { hashPassword, verifyPassword } from '../services/users/index.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
-import { seedCatalogueDemo } from './catalogue.ts';
+import { fillDemoSentenceNames, seedCatalogueDemo } from './catalogue.ts';
 import { seedDemoChannels } from './channels.ts';
 import { seedDemoKioskScreens } from './kiosk-screens.ts';
 import { seedDemoPages } from './pages.ts';
@@ -24,6 +24,7 @@ export async function seedDemo(): Promise<void> {
     });
   }
   await seedCatalogueDemo();
+  await fillDemoSentenceNames();
   await seedDemoStatements();
   await seedDemoKioskScreens();
   await seedDemoPages();

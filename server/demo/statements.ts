@@ -1,4 +1,4 @@
-import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
+import { templatesForKind } from '@shared/statements/index.ts';
 import { SkyObject, Statement, User, Venue } from '../models/index.ts';
 import { findOrCreateStatement } from '../services/statements/index.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
@@ -18,7 +18,7 @@ const DEMO_STATEMENT_OBJECTS = [
 const DEMO_TONIGHT_PLANETS = ['Jupiter', 'Saturn'];
 
 /**
- * Works out every template that applies to a handful of demo objects, and tonight's light-travel
+ * Works out every template valid for the kind of each of a handful of demo objects, and tonight's light-travel
  * time of two planets for the demo venue. Idempotent: statements that exist are left alone;
  * templates an object lacks the data for are skipped.
  */
@@ -28,7 +28,7 @@ export async function seedDemoStatements(): Promise<void> {
   for (const name of DEMO_STATEMENT_OBJECTS) {
     const object = await SkyObject.findOne({ where: { name } });
     if (!object || (await Statement.count({ where: { skyObjectId: object.id } })) > 0) continue;
-    for (const template of STATEMENT_TEMPLATES.filter((t) => !t.needsVenue)) {
+    for (const template of templatesForKind(object.kind).filter((t) => !t.needsVenue)) {
       await findOrCreateStatement(object.id, template.id, writer).catch(() => undefined);
     }
   }

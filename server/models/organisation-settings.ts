@@ -7,6 +7,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import type { SpectralIndexDefaults } from '@shared/schemas/settings.ts';
 
 /** The organisation's defaults: the adopted cosmology, band, locale and eye-safety wording. */
 export class OrganisationSettings extends Model<
@@ -18,7 +19,11 @@ export class OrganisationSettings extends Model<
   declare defaultBand: string;
   declare defaultLocale: string;
   declare eyeSafetyNotice: string;
+  /** Default spectral index per object kind, each with its source: a stated assumption for the K-correction. */
+  declare spectralIndexDefaults: CreationOptional<SpectralIndexDefaults>;
   declare version: CreationOptional<number>;
+  /** The release of the statement rules the stored statements were last computed by (STATEMENT_RULES_VERSION). */
+  declare statementRulesVersion: CreationOptional<number>;
   declare updatedById: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -31,7 +36,9 @@ export class OrganisationSettings extends Model<
         defaultBand: { type: DataTypes.STRING(20), allowNull: false },
         defaultLocale: { type: DataTypes.STRING(10), allowNull: false },
         eyeSafetyNotice: { type: DataTypes.TEXT, allowNull: false },
+        spectralIndexDefaults: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        statementRulesVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         updatedById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

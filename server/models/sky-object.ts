@@ -7,6 +7,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { SkyObjectKind } from '@shared/catalogue/kinds.ts';
+import type { SentenceNames } from '@shared/statements/names.ts';
 
 /** An object in the sky: a star, galaxy, planet… with its J2000 position (none for solar-system bodies). */
 export class SkyObject extends Model<InferAttributes<SkyObject>, InferCreationAttributes<SkyObject>> {
@@ -19,6 +20,8 @@ export class SkyObject extends Model<InferAttributes<SkyObject>, InferCreationAt
   /** IAU abbreviation computed from the position (Roman 1987); never typed in. */
   declare constellation: string | null;
   declare notes: CreationOptional<string>;
+  /** The name as sentences use it, per language (article, singular or plural); {} → the name as listed. */
+  declare sentenceNames: CreationOptional<SentenceNames>;
   declare createdById: string | null;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -34,6 +37,7 @@ export class SkyObject extends Model<InferAttributes<SkyObject>, InferCreationAt
         decDeg: { type: DataTypes.DOUBLE },
         constellation: { type: DataTypes.STRING(3) },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        sentenceNames: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
         createdById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

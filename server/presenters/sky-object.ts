@@ -13,6 +13,7 @@ export function presentSkyObject(object: SkyObject, viewer: User): SkyObjectDto 
     decDeg: object.decDeg,
     constellation: object.constellation,
     notes: object.notes,
+    sentenceNames: object.sentenceNames ?? {},
     createdAt: object.createdAt.toISOString(),
     updatedAt: object.updatedAt.toISOString(),
     can: {

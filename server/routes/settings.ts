@@ -31,6 +31,7 @@ function presentSettings(settings: OrganisationSettings): SettingsDto {
     defaultBand: settings.defaultBand,
     defaultLocale: settings.defaultLocale as StatementLocale,
     eyeSafetyNotice: settings.eyeSafetyNotice,
+    spectralIndexDefaults: settings.spectralIndexDefaults ?? {},
     version: settings.version,
     updatedAt: settings.updatedAt.toISOString(),
   };

@@ -35,10 +35,12 @@ statementTemplatesRouter.use(requireUser);
 statementTemplatesRouter.get('/', (req, res) => {
   authorize(currentUser(req), 'statement', 'read');
   res.json({
-    data: STATEMENT_TEMPLATES.map(({ id, title, needs, usesCosmology, needsVenue, followsTonight }) => ({
+    data: STATEMENT_TEMPLATES.map(({ id, title, needs, kinds, kindsReason, usesCosmology, needsVenue, followsTonight }) => ({
       id,
       title,
       needs,
+      kinds: [...kinds],
+      kindsReason,
       usesCosmology,
       needsVenue: !!needsVenue,
       followsTonight: !!followsTonight,

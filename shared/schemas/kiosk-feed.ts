@@ -25,6 +25,8 @@ export interface FeedStatement {
   id: string;
   /** The wording as signed off for publication. */
   text: string;
+  /** Small print that qualifies it (which band, which cosmology, which night); the player shows it where space allows. */
+  note?: string;
   /** When the statement's figure was last accepted (or computed), ISO 8601. */
   as_of: string;
 }

@@ -93,6 +93,8 @@ export interface PageSnapshot {
   html: string;
   /** Statement id → wording in the page's locale, as signed off. */
   statementTexts: Record<string, string>;
+  /** Statement id → the small print (band, cosmology, night) of the signed wording; absent in snapshots made before it was kept. */
+  statementNotes?: Record<string, string>;
   signedOffAt: string;
   signedOffBy: { id: string; name: string } | null;
   publishedAt?: string;

@@ -4,6 +4,8 @@ export interface PublicStatementDto {
   id: string;
   /** The wording as signed off for publication. */
   text: string;
+  /** Small print that qualifies it (which band, which cosmology, which night), or null. */
+  note: string | null;
   /** When the figure was last accepted (or computed), ISO 8601. */
   asOf: string;
 }

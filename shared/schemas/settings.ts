@@ -1,6 +1,27 @@
 import { z } from 'zod';
 import { CalcModelSchema } from './calc.ts';
 import { STATEMENT_LOCALES } from '../statements/locales.ts';
+import { SKY_OBJECT_KINDS } from '../catalogue/kinds.ts';
+
+/** One kind's default spectral index (f_ν ∝ ν^α), always with the source it comes from. */
+export const SpectralIndexDefaultSchema = z.object({
+  value: z
+    .number({ message: 'The spectral index must be a number' })
+    .min(-5, 'A spectral index below −5 is not plausible')
+    .max(5, 'A spectral index above 5 is not plausible'),
+  sigma: z.number().positive('The spread must be above 0').max(5).nullable().default(null),
+  source: z
+    .string({ message: 'Name the source of the default' })
+    .trim()
+    .min(5, 'Name the source of the default (a paper or handbook)')
+    .max(300, 'The source is at most 300 characters'),
+});
+/**
+ * Default spectral indices by object kind: used, as a stated assumption, for the K-correction of an
+ * object without a measured one at a redshift where the K-correction matters.
+ */
+export const SpectralIndexDefaultsSchema = z.partialRecord(z.enum(SKY_OBJECT_KINDS), SpectralIndexDefaultSchema);
+export type SpectralIndexDefaults = z.infer<typeof SpectralIndexDefaultsSchema>;
 
 export const SettingsDtoSchema = z.object({
   cosmologyModel: CalcModelSchema,
@@ -8,6 +29,7 @@ export const SettingsDtoSchema = z.object({
   defaultBand: z.string(),
   defaultLocale: z.enum(STATEMENT_LOCALES),
   eyeSafetyNotice: z.string(),
+  spectralIndexDefaults: SpectralIndexDefaultsSchema,
   version: z.number(),
   updatedAt: z.string(),
 });
@@ -23,6 +45,7 @@ export const SettingsUpdateSchema = z
       .min(40, 'The eye-safety notice must say enough to be useful (40 characters or more)')
       .max(2000)
       .optional(),
+    spectralIndexDefaults: SpectralIndexDefaultsSchema.optional(),
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type SettingsUpdateInput = z.infer<typeof SettingsUpdateSchema>;

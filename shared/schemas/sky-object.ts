@@ -3,6 +3,7 @@ import { parseDeclination, parseRightAscension } from '../catalogue/coordinates.
 import { MOVING_KINDS, SKY_OBJECT_KINDS } from '../catalogue/kinds.ts';
 import { QUANTITY_IDS } from '../catalogue/quantities.ts';
 import { CatalogueLimits } from '../validations.ts';
+import { SentenceNamesSchema, type SentenceNames } from '../statements/names.ts';
 
 export const SkyObjectKindSchema = z.enum(SKY_OBJECT_KINDS, { message: `Kind must be one of ${SKY_OBJECT_KINDS.join(', ')}` });
 
@@ -49,11 +50,20 @@ export const SkyObjectInputSchema = z
       .trim()
       .max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`)
       .default(''),
+    /** The name as sentences use it, per language; left out → none (the name as listed). */
+    sentenceNames: SentenceNamesSchema.optional(),
   })
   .transform((input, ctx) => {
     const blank = (v: unknown) => v === undefined || v === null || (typeof v === 'string' && v.trim() === '');
     const designations = [...new Set(input.designations)].filter((d) => d.toLowerCase() !== input.name.toLowerCase());
-    const base = { name: input.name, designations, kind: input.kind, notes: input.notes };
+    // Left out → kept as stored (an edit from a form or import that does not carry them changes nothing).
+    const base = {
+      name: input.name,
+      designations,
+      kind: input.kind,
+      notes: input.notes,
+      ...(input.sentenceNames ? { sentenceNames: input.sentenceNames } : {}),
+    };
     if (MOVING_KINDS.includes(input.kind)) {
       if (!blank(input.ra) || !blank(input.dec)) {
         ctx.addIssue({
@@ -87,6 +97,11 @@ export interface SkyObjectFormValues {
   ra: string;
   dec: string;
   notes: string;
+  /** Sentence names: English and French text with their "plural" boxes. */
+  sentenceEn: string;
+  sentenceEnPlural: boolean;
+  sentenceFr: string;
+  sentenceFrPlural: boolean;
 }
 
 export const SKY_OBJECT_SORTS = ['name', 'kind', 'constellation', 'ra', 'dec', 'updated'] as const;
@@ -139,6 +154,8 @@ export interface SkyObjectPageDto {
 /** An object with what the viewer may do to it. */
 export interface SkyObjectDto extends Omit<SkyObjectRowDto, 'measurementCount' | 'preferredCount' | 'proposedCount'> {
   notes: string;
+  /** The name as sentences use it, per language ({} → the name as listed). */
+  sentenceNames: SentenceNames;
   createdAt: string;
   can: { update: boolean; addMeasurement: boolean; proposeMeasurement: boolean; delete: boolean };
 }

@@ -77,6 +77,10 @@ export const StatementTemplateDtoSchema = z.object({
   id: z.string(),
   title: z.string(),
   needs: z.string(),
+  /** The object kinds it is valid for (the picker offers it only for these). */
+  kinds: z.array(z.string()),
+  /** Why other kinds are refused. */
+  kindsReason: z.string(),
   usesCosmology: z.boolean(),
   /** Creating it needs a venue. */
   needsVenue: z.boolean(),

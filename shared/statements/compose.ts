@@ -11,8 +11,11 @@ export interface ComposeArgs {
   value: number;
   unit: string;
   interval: { low: number; high: number } | null;
-  /** Builds the sentence around the rounded number's words. */
-  sentence: (locale: StatementLocale, number: string) => string;
+  /**
+   * Builds the sentence around the rounded number's words; `shown` is the value as rounded, so a
+   * ratio that rounds to one can read "about as bright as" (house style, DEVELOPERS.md).
+   */
+  sentence: (locale: StatementLocale, number: string, shown: number) => string;
   footnote?: (locale: StatementLocale) => string | null;
   working: Step[];
   warnings?: string[];
@@ -39,7 +42,7 @@ export function compose(args: ComposeArgs): TemplateSuccess {
   }
   const n = precision.significantFigures;
   const shown = formatApproximate(args.value, n, 'en-GB').shown;
-  const texts = perLocale((locale) => args.sentence(locale, formatApproximate(args.value, n, locale).text));
+  const texts = perLocale((locale) => args.sentence(locale, formatApproximate(args.value, n, locale).text, shown));
   const footnotes = args.footnote ? perLocale((locale) => args.footnote!(locale) ?? '') : null;
   const wording: Step = {
     title: 'Public wording: round to what the data supports',

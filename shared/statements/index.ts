@@ -10,6 +10,7 @@ import { luminositySun } from './templates/luminosity-sun.ts';
 import { nakedEye } from './templates/naked-eye.ts';
 import { planetLightTonight } from './templates/planet-light-tonight.ts';
 import { scaleModel } from './templates/scale-model.ts';
+import { KIND_LABELS, type SkyObjectKind } from '../catalogue/kinds.ts';
 import type { StatementTemplate, TemplateContext, TemplateOutcome } from './types.ts';
 
 export * from './types.ts';
@@ -17,6 +18,16 @@ export * from './locales.ts';
 export { choosePrecision, roundToSignificant } from './precision.ts';
 export { formatApproximate } from './number-words.ts';
 export { nightFromSky, planetOf } from './tonight.ts';
+export { SentenceNamesSchema, type SentenceName, type SentenceNames } from './names.ts';
+
+/**
+ * The release of the statement rules: raise it whenever a release changes templates' wording, the
+ * kinds they are valid for or the inputs they require. The server recomputes every stored statement
+ * once when it starts under a newer release (server/services/statements/rules-release.ts).
+ * 2: band light in the sentence, names with article and number, ratio house style, template kinds,
+ *    K-correction and extinction rules.
+ */
+export const STATEMENT_RULES_VERSION = 2;
 
 /** Every template, in the order the picker lists them. */
 export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [
@@ -36,12 +47,32 @@ export function findTemplate(id: string): StatementTemplate | undefined {
 }
 
 /**
- * Evaluates a template; never throws. A missing input or a failed calculation comes back as a
+ * Why a template cannot be used for an object of this kind, or null when it can.
+ * @param template the template
+ * @param kind the object's kind
+ * @returns a sentence for the writer (and the reviewer, when a stored statement breaks the rule)
+ */
+export function kindRefusal(template: StatementTemplate, kind: string): string | null {
+  if ((template.kinds as readonly string[]).includes(kind)) return null;
+  const label = KIND_LABELS[kind as SkyObjectKind]?.toLowerCase() ?? kind;
+  return `“${template.title}” is not for an object of kind “${label}”: ${template.kindsReason}`;
+}
+
+/** The templates valid for an object of this kind, in picker order. */
+export function templatesForKind(kind: string): StatementTemplate[] {
+  return STATEMENT_TEMPLATES.filter((t) => kindRefusal(t, kind) === null);
+}
+
+/**
+ * Evaluates a template; never throws. An object of a kind the template is not valid for is
+ * refused first (code `not_applicable`), whatever its measurements. A missing input or a failed calculation comes back as a
  * failure that says why, in words.
  */
 export function evaluateStatement(templateId: string, ctx: TemplateContext): TemplateOutcome {
   const template = findTemplate(templateId);
   if (!template) return { ok: false, code: 'not_applicable', reason: `There is no statement template “${templateId}”.` };
+  const refusal = kindRefusal(template, ctx.object.kind);
+  if (refusal) return { ok: false, code: 'not_applicable', reason: `Needs review: ${refusal}` };
   try {
     return template.evaluate(ctx);
   } catch (error) {

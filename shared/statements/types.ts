@@ -1,6 +1,24 @@
 import type { CalcModel, ResolvedModel } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
+import type { SkyObjectKind } from '../catalogue/kinds.ts';
 import type { LocalisedText } from './locales.ts';
+import type { SentenceNames } from './names.ts';
+
+/** An organisation's default spectral index for one kind of object, used only as a stated assumption. */
+export interface SpectralIndexDefault {
+  /** α in f_ν ∝ ν^α. */
+  value: number;
+  /** Its 1σ spread, if the source gives one (it then widens the statement's interval). */
+  sigma: number | null;
+  /** Where the value comes from (paper, handbook), shown in the working. */
+  source: string;
+}
+
+/** Defaults the organisation has chosen to stand in for missing measurements, each with its source. */
+export interface StatementAssumptions {
+  /** A spectral index per object kind, for the K-correction when the object has no measured one. */
+  spectralIndex?: Partial<Record<SkyObjectKind, SpectralIndexDefault>>;
+}
 
 /** A preferred measurement as a statement uses it (values in the catalogue's canonical units). */
 export interface StatementMeasurement {
@@ -44,7 +62,14 @@ export interface StatementNight {
 
 /** Everything a template may read. */
 export interface TemplateContext {
-  object: { id: string; name: string; kind: string; designations?: string[] };
+  object: {
+    id: string;
+    name: string;
+    kind: string;
+    designations?: string[];
+    /** The name as a sentence uses it, per language (article, number); absent → the catalogue name. */
+    sentenceNames?: SentenceNames | null;
+  };
   measurements: StatementMeasurement[];
   model: CalcModel;
   /** The organisation's preferred band for magnitudes (e.g. V). */
@@ -52,6 +77,8 @@ export interface TemplateContext {
   /** For statements tied to a venue: the venue and its night (absent or null otherwise). */
   venue?: StatementVenue | null;
   night?: StatementNight | null;
+  /** The organisation's stated defaults for missing measurements (absent: none). */
+  assumptions?: StatementAssumptions | null;
 }
 
 /**
@@ -132,6 +159,10 @@ export interface StatementTemplate {
   title: string;
   /** What it needs, in words, for the picker. */
   needs: string;
+  /** The object kinds it is valid for; the picker offers it only for these, the server refuses the rest. */
+  kinds: readonly SkyObjectKind[];
+  /** Why the other kinds are refused, in words for a writer (follows "not for <kind>: "). */
+  kindsReason: string;
   /** True when the template uses the organisation's cosmology (so a model change can move it). */
   usesCosmology: boolean;
   /** True when the statement is about one venue's sky: creating it needs a venue. */

@@ -12,8 +12,15 @@ function asOfText(iso: string, timeZone: string): string {
   }
 }
 
-function statementList(statements: FeedStatement[], timeZone: string): HTMLElement | null {
+/**
+ * Most statements a slide shows with their small print: beyond this (or beside a long body text)
+ * the notes would push the statements off a 1080-line screen, so they are left to the page.
+ */
+const NOTES_UP_TO = 3;
+
+function statementList(statements: FeedStatement[], timeZone: string, roomForNotes: boolean): HTMLElement | null {
   if (!statements.length) return null;
+  const withNotes = roomForNotes && statements.length <= NOTES_UP_TO;
   return h(
     'ul',
     { class: 'statements' },
@@ -24,6 +31,7 @@ function statementList(statements: FeedStatement[], timeZone: string): HTMLEleme
         h('span', { class: 'statement-text' }, s.text),
         ' ',
         h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone)),
+        withNotes && s.note ? h('small', { class: 'statement-note' }, s.note) : null,
       ),
     ),
   );
@@ -114,7 +122,7 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
         { class: 'panel' },
         h('h1', { class: 'title' }, item.title),
         slide.text ? h('p', { class: 'body' }, slide.text) : null,
-        statementList(slide.statements, timeZoneOr(timeZone)),
+        statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280),
       ),
     );
   }

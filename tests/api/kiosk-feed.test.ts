@@ -91,6 +91,8 @@ describe('the kiosk feed', () => {
     expect(p._starproof.slide.statements).toHaveLength(1);
     expect(p._starproof.slide.statements[0]).toMatchObject({ id: page.statementIds[0], text: page.distanceText });
     expect(Date.parse(p._starproof.slide.statements[0].as_of)).not.toBeNaN();
+    // The distance's small print travels with it, for the player to show where space allows.
+    expect(p._starproof.slide.statements[0].note).toMatch(/^Worked out with the Planck 2018 .* cosmology\.$/);
     expect(p._starproof.slide.image).toMatchObject({ focal: { x: 0.4, y: 0.6 } });
     expect(p._starproof.slide.image.hd).not.toBe(p._starproof.slide.image.uhd);
     // Durations are clamped to 5–120 s rather than refused.

@@ -43,6 +43,12 @@ describe('the public API', () => {
     expect(page.statements).toHaveLength(2);
     expect(page.statements[0]).toMatchObject({ id: expect.any(String), text: expect.any(String) });
     expect(Date.parse(page.statements[0].asOf)).not.toBeNaN();
+    // The small print reaches the public: the distance names its cosmology, the naked-eye one has none.
+    const [distance, nakedEye] = hostile.statementIds.map((id) => page.statements.find((s: { id: string }) => s.id === id));
+    expect(distance.note).toMatch(/^Worked out with the Planck 2018 .* cosmology\.$/);
+    expect(nakedEye.note).toBeNull();
+    expect(page.html).toMatch(/<sup class="statement-note-ref">1<\/sup>/);
+    expect(page.html).toMatch(/<ol class="statement-notes" role="note"><li value="1">Worked out with the Planck 2018 /);
     expect(page.images[0]).toMatchObject({
       credit: 'Ama & Co <Imaging>',
       licence: 'CC BY 4.0',

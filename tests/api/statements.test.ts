@@ -25,6 +25,8 @@ const quasar = (creator: Awaited<ReturnType<typeof buildUser>>) =>
     [
       { quantity: 'redshift', value: 0.241, sigma: 0.0005, unit: '' },
       { quantity: 'apparent_magnitude', value: 14.6, sigma: 0.1, band: 'V', unit: 'mag' },
+      // At z = 0.241 with ±0.1 mag the K-correction matters (z_K ≈ 0.20): a measured spectral index.
+      { quantity: 'spectral_index', value: -0.5, sigma: 0.2, unit: '' },
     ],
     creator,
   );
@@ -42,15 +44,22 @@ describe('creating statements', () => {
     expect(res.status).toBe(201);
     const engine = calculate({
       quantity: 'luminosity_ratio_sun',
-      inputs: { m: { value: 14.6, sigma: 0.1 }, z: { value: 0.241, sigma: 0.0005 }, band: 'V' },
+      inputs: {
+        m: { value: 14.6, sigma: 0.1 },
+        z: { value: 0.241, sigma: 0.0005 },
+        band: 'V',
+        alpha: { value: -0.5, sigma: 0.2 },
+      },
       model: { preset: 'planck18' },
     });
     if ('error' in engine) throw new Error(engine.error.message);
     expect(res.body.data.value).toBeCloseTo(engine.value, 6);
     // ±0.1 mag is about ±10 %: two significant figures (our precision rule).
     const shown = Number(engine.value.toPrecision(2)) / 1e12;
-    expect(res.body.data.texts['en-GB']).toBe(`${object.name} gives out about ${shown} trillion times as much light as the Sun.`);
-    expect(res.body.data.texts['fr-FR']).toMatch(/billions? de fois plus de lumière/);
+    expect(res.body.data.texts['en-GB']).toBe(
+      `${object.name} gives out about ${shown} trillion times as much visible light as the Sun.`,
+    );
+    expect(res.body.data.texts['fr-FR']).toMatch(/billions? de fois plus de lumière visible/);
     expect(res.body.data.status).toBe('current');
     expect(res.body.data.working.at(-1).title).toMatch(/Public wording/);
     expect(res.body.data.footnotes['en-GB']).toMatch(/Planck 2018/);
@@ -62,8 +71,8 @@ describe('creating statements', () => {
   it('refuses a template whose inputs are missing, says which, and stores nothing', async () => {
     const { agent, user } = await signedInAgent('writer');
     const { object } = await buildObjectWithMeasurements(
-      'Bare galaxy',
-      'galaxy',
+      'Bare quasar',
+      'quasar',
       [{ quantity: 'redshift', value: 0.05, unit: '' }],
       user,
     );

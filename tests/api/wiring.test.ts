@@ -68,7 +68,7 @@ describe('the server wiring', () => {
     const other = band === 'V' ? 'B' : 'V';
     const seen: number[] = [];
     const listener = ({ version }: { version: number }) => void seen.push(version);
-    settingsEvents.on('defaultBandChanged', listener);
+    settingsEvents.on('statementDefaultsChanged', listener);
     try {
       const changed = await agent.patch('/api/settings').send({ defaultBand: other });
       expect(changed.status).toBe(200);
@@ -76,7 +76,7 @@ describe('the server wiring', () => {
       expect((await agent.patch('/api/settings').send({ defaultBand: other })).status).toBe(200);
       expect(seen).toHaveLength(1);
     } finally {
-      settingsEvents.off('defaultBandChanged', listener);
+      settingsEvents.off('statementDefaultsChanged', listener);
       await agent.patch('/api/settings').send({ defaultBand: band });
     }
   });

@@ -9,6 +9,8 @@ export interface CatalogueEventMap {
   preferredChanged: [{ skyObjectId: string; quantity: string; band: string | null }];
   /** A measurement was created, edited, reviewed or retired (its recompute covers its object's statements). */
   measurementChanged: [{ measurementId: string; skyObjectId: string }];
+  /** An object's name, kind or sentence names changed: its statements' wording or validity may move. */
+  objectChanged: [{ skyObjectId: string }];
   /** A source's citation or identifiers changed. */
   sourceChanged: [{ sourceId: string }];
 }

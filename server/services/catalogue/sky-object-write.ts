@@ -5,6 +5,7 @@ import { getSequelize } from '../../db.ts';
 import { ConflictError } from '../../errors.ts';
 import { Measurement, SkyObject, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
+import { catalogueEvents } from './events.ts';
 
 const withConstellation = (values: SkyObjectValues) => ({
   ...values,
@@ -47,14 +48,18 @@ export async function createSkyObject(values: SkyObjectValues, actor: User, ip?:
 }
 
 /**
- * Changes an object's name, designations, kind, position or notes; the constellation follows the position.
+ * Changes an object's name, designations, kind, position, notes or sentence names; the constellation
+ * follows the position. A new name, kind or sentence name recomputes the object's statements.
  * @throws HttpError 409 when the new name is taken
  */
 export async function updateSkyObject(object: SkyObject, values: SkyObjectValues, actor: User, ip?: string): Promise<SkyObject> {
   await assertNameFree(values.name, object.id);
   return getSequelize().transaction(async (transaction) => {
     const before = { name: object.name, kind: object.kind, raDeg: object.raDeg, decDeg: object.decDeg };
+    const wordingBefore = JSON.stringify([object.name, object.kind, object.sentenceNames ?? {}]);
     object.set(withConstellation(values));
+    if (JSON.stringify([object.name, object.kind, object.sentenceNames ?? {}]) !== wordingBefore)
+      transaction.afterCommit(() => void catalogueEvents.emit('objectChanged', { skyObjectId: object.id }));
     await object.save({ transaction });
     await recordAudit(
       {

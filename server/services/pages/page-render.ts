@@ -1,6 +1,6 @@
 import type { JSONContent } from '@tiptap/core';
 import { renderToHTMLString, serializeAttrsToHTMLString } from '@tiptap/static-renderer/pm/html-string';
-import { publicStatements, publicText, type PublicStatement } from '../statements/index.ts';
+import { publicNote, publicStatements, publicText, type PublicStatement } from '../statements/index.ts';
 import { Op } from 'sequelize';
 import { isSafeHref, pageExtensions } from '@shared/editor/extensions.ts';
 import { findLicence } from '@shared/media/licences.ts';
@@ -130,24 +130,61 @@ export function withStatementTexts(html: string, texts: Map<string, string>): st
 }
 
 /**
+ * Numbers the small print of the statements in a page's HTML: a reference after each statement
+ * that has a note, and the notes in a list at the end (one number per distinct note, so "Compared in
+ * the Johnson V band." appears once however many statements it qualifies).
+ * @param html the page's rendered HTML (statements as renderPageHtml writes them)
+ * @param notes the note per statement id (statements without one are left as they are)
+ * @returns the HTML with references and the list of notes
+ */
+export function withStatementNotes(html: string, notes: Map<string, string>): string {
+  if (notes.size === 0) return html;
+  const numbers = new Map<string, number>();
+  const withRefs = html.replace(
+    /(<span class="statement" data-statement-id="([0-9a-f-]{36})">[^<]*<\/span>)/g,
+    (whole, _span: string, id: string) => {
+      const note = notes.get(id);
+      if (!note) return whole;
+      if (!numbers.has(note)) numbers.set(note, numbers.size + 1);
+      return `${whole}<sup class="statement-note-ref">${numbers.get(note)}</sup>`;
+    },
+  );
+  if (numbers.size === 0) return html;
+  const items = [...numbers].map(([note, n]) => `<li value="${n}">${escapeText(note)}</li>`).join('');
+  return `${withRefs}<ol class="statement-notes" role="note">${items}</ol>`;
+}
+
+/**
  * A published page's statement wording and HTML as the public is shown them now: the signed
- * wording, with tonight's in place of it for statements that follow tonight.
+ * wording, with tonight's in place of it for statements that follow tonight, and the small print
+ * that qualifies each (band, cosmology, night) where it belongs to the wording shown.
  * @param live the page's published snapshot (its HTML and the wording signed with it)
  * @param shown publicStatements for its statements
  * @param locale the page's locale
+ * @returns the wording and notes by statement id; `html` with the notes, `textHtml` without (for summaries)
  */
 export function publicPageTexts(
-  live: { html: string; statementTexts: Record<string, string> },
+  live: { html: string; statementTexts: Record<string, string>; statementNotes?: Record<string, string> },
   shown: Map<string, PublicStatement>,
   locale: string,
-): { statementTexts: Record<string, string>; html: string } {
+): { statementTexts: Record<string, string>; notes: Record<string, string | null>; html: string; textHtml: string } {
   const moved = new Map<string, string>();
   const statementTexts: Record<string, string> = {};
+  const notes: Record<string, string | null> = {};
+  const noted = new Map<string, string>();
   for (const [id, signed] of Object.entries(live.statementTexts)) {
     statementTexts[id] = publicText(signed, shown.get(id), locale);
     if (statementTexts[id] !== signed) moved.set(id, statementTexts[id]);
+    // Signed wording keeps the small print signed with it; tonight's wording (or a snapshot made
+    // before notes were kept) takes the note computed with that wording.
+    notes[id] =
+      statementTexts[id] === signed && live.statementNotes
+        ? (live.statementNotes[id] ?? null)
+        : publicNote(statementTexts[id], shown.get(id), locale);
+    if (notes[id]) noted.set(id, notes[id]!);
   }
-  return { statementTexts, html: withStatementTexts(live.html, moved) };
+  const textHtml = withStatementTexts(live.html, moved);
+  return { statementTexts, notes, html: withStatementNotes(textHtml, noted), textHtml };
 }
 
 /** A page as the public (kiosk feed, public API) sees it. */

@@ -101,7 +101,14 @@ export async function signOffPage(pageId: string, reviewer: User): Promise<Page>
     const problems = await approvalProblems(page, revision, statements);
     if (problems.length) throw ChecksFailedError('This page cannot be signed off yet', problems);
     const statementTexts: Record<string, string> = {};
-    for (const id of revision.statementIds) statementTexts[id] = currentText(statements.get(id)!.statement, page.locale)!;
+    const statementNotes: Record<string, string> = {};
+    for (const id of revision.statementIds) {
+      const statement = statements.get(id)!.statement;
+      statementTexts[id] = currentText(statement, page.locale)!;
+      // The small print signed with the wording, so the public keeps seeing the pair that was signed.
+      const note = statement.footnotes?.[page.locale];
+      if (note) statementNotes[id] = note;
+    }
     const html = await renderWithLookups(revision.doc, revision.mediaIds, (id) => statementTexts[id] ?? null);
     if (Buffer.byteLength(html) > 20 * 1024 * 1024)
       throw new HttpError(422, 'page_too_large', 'The rendered page is too large to publish.');
@@ -111,6 +118,7 @@ export async function signOffPage(pageId: string, reviewer: User): Promise<Page>
       title: revision.title,
       html,
       statementTexts,
+      statementNotes,
       signedOffAt: new Date().toISOString(),
       signedOffBy: { id: reviewer.id, name: reviewer.name },
     };

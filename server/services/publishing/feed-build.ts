@@ -102,7 +102,12 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       const shown = publicPageTexts(snapshot, statements, pageLocales.get(s.pageId!) ?? 'en-GB');
       const chosen = (s.statementIds ?? [])
         .filter((id) => shown.statementTexts[id])
-        .map((id) => ({ id, text: shown.statementTexts[id], as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt }));
+        .map((id) => ({
+          id,
+          text: shown.statementTexts[id],
+          ...(shown.notes[id] ? { note: shown.notes[id]! } : {}),
+          as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt,
+        }));
       const text = firstParagraphText(shown.html);
       const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;

@@ -72,12 +72,13 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
       title: live.title,
       locale: p.locale,
       object: { id: p.skyObjectId, name: object?.name ?? '', kind: object?.kind ?? '' },
-      summary: firstParagraphText(shown.html, 300),
+      summary: firstParagraphText(shown.textHtml, 300),
       publishedAt: live.publishedAt ?? null,
       html: shown.html,
       statements: Object.entries(shown.statementTexts).map(([id, text]) => ({
         id,
         text,
+        note: shown.notes[id] ?? null,
         asOf: statements.get(id)?.asOf ?? live.signedOffAt,
       })),
       images: mediaIdsInHtml(live.html).flatMap((id) => {

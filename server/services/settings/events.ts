@@ -4,8 +4,8 @@ import { EventEmitter } from 'node:events';
 export interface SettingsEventMap {
   /** An admin adopted another cosmology: every statement's numbers may move. */
   cosmologyAdopted: [{ version: number }];
-  /** The default band changed: magnitudes in it may move. */
-  defaultBandChanged: [{ version: number }];
+  /** The default band or the default spectral indices changed: magnitudes and luminosities may move. */
+  statementDefaultsChanged: [{ version: number }];
 }
 
 /**

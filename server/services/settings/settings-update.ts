@@ -50,19 +50,26 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
   return settings;
 }
 
-/** Changes the band, locale or eye-safety notice. A band change moves magnitudes: `defaultBandChanged` has statements recomputed. */
+/**
+ * Changes the band, locale, eye-safety notice or default spectral indices. A band change moves
+ * magnitudes and a default spectral index can stand in for a missing measurement, so either
+ * recomputes every statement.
+ */
 export async function updateSettings(input: SettingsUpdateInput, actor: User): Promise<OrganisationSettings> {
   const settings = await getSequelize().transaction(async (transaction) => {
     const row = await getSettings(transaction, 'update');
-    const bandChanged = input.defaultBand !== undefined && input.defaultBand !== row.defaultBand;
-    row.set({ ...input, updatedById: actor.id, ...(bandChanged ? { version: row.version + 1 } : {}) });
+    const defaultsChanged =
+      (input.defaultBand !== undefined && input.defaultBand !== row.defaultBand) ||
+      (input.spectralIndexDefaults !== undefined &&
+        JSON.stringify(input.spectralIndexDefaults) !== JSON.stringify(row.spectralIndexDefaults ?? {}));
+    row.set({ ...input, updatedById: actor.id, ...(defaultsChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
     await recordAudit(
       { actorId: actor.id, action: 'settings.updated', subjectType: 'organisation_settings', subjectId: '1', data: { ...input } },
       transaction,
     );
-    return { row, bandChanged };
+    return { row, defaultsChanged };
   });
-  if (settings.bandChanged) await emitAndWait(settingsEvents, 'defaultBandChanged', { version: settings.row.version });
+  if (settings.defaultsChanged) await emitAndWait(settingsEvents, 'statementDefaultsChanged', { version: settings.row.version });
   return settings.row;
 }

@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { resolveModel } from '@shared/engine/model-resolve.ts';
-import type { StatementLocale } from '@shared/statements/index.ts';
+import type { SentenceNames, StatementLocale } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import type { StatementStatus } from '../../models/index.ts';
 import { contextKey, type BatchJob, type BatchModel, type BatchStatement } from './evaluate-batch.ts';
@@ -67,8 +67,8 @@ export async function loadBatchJob(
   );
   const objectIds = [...new Set(rows.map((r) => r.sky_object_id))];
   const objects = objectIds.length
-    ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[] }>(
-        'SELECT id, name, kind, designations FROM sky_objects WHERE id = ANY($1::uuid[])',
+    ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[]; sentenceNames: SentenceNames }>(
+        'SELECT id, name, kind, designations, sentence_names AS "sentenceNames" FROM sky_objects WHERE id = ANY($1::uuid[])',
         {
           bind: [objectIds],
           type: QueryTypes.SELECT,

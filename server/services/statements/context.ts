@@ -1,6 +1,8 @@
 import { Op, QueryTypes } from 'sequelize';
 import {
   nightFromSky,
+  type SentenceNames,
+  type StatementAssumptions,
   type StatementMeasurement,
   type StatementNight,
   type StatementVenue,
@@ -20,9 +22,11 @@ export interface SettingsSnapshot {
   model: CalcModel;
   band: string;
   version: number;
+  /** Stated defaults for missing measurements (absent: none). */
+  assumptions?: StatementAssumptions;
 }
 
-type ObjectRef = { id: string; name: string; kind: string; designations?: string[] };
+type ObjectRef = { id: string; name: string; kind: string; designations?: string[]; sentenceNames?: SentenceNames | null };
 
 function asStatementMeasurement(
   m: Pick<PreferredMeasurement, 'measurementId' | 'quantity' | 'value' | 'unit' | 'band' | 'uncertainty' | 'source'>,
@@ -42,10 +46,17 @@ function asStatementMeasurement(
 
 function contextFor(object: ObjectRef, measurements: StatementMeasurement[], settings: SettingsSnapshot): TemplateContext {
   return {
-    object: { id: object.id, name: object.name, kind: object.kind, designations: object.designations ?? [] },
+    object: {
+      id: object.id,
+      name: object.name,
+      kind: object.kind,
+      designations: object.designations ?? [],
+      sentenceNames: object.sentenceNames ?? null,
+    },
     measurements,
     model: settings.model,
     band: settings.band,
+    assumptions: settings.assumptions ?? null,
   };
 }
 

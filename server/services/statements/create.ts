@@ -1,4 +1,4 @@
-import { evaluateStatement, findTemplate } from '@shared/statements/index.ts';
+import { evaluateStatement, findTemplate, kindRefusal } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { SkyObject, Statement, Venue, type User } from '../../models/index.ts';
@@ -17,7 +17,7 @@ import { buildTemplateContext, buildVenueNights, withVenue } from './context.ts'
  * object, template and venue: every page that uses it shows the same number. A template whose
  * inputs are missing is refused with the reason (nothing is stored).
  * @param venueId the venue, required by templates that need one and refused by the others
- * @throws HttpError 400 `venue_required` / `venue_not_used`, 404 unknown object, template or venue, 422 `statement_not_computable`
+ * @throws HttpError 400 `template_not_for_kind` (the template is not valid for the object's kind), `venue_required` / `venue_not_used`, 404 unknown object, template or venue, 422 `statement_not_computable`
  */
 export async function findOrCreateStatement(
   skyObjectId: string,
@@ -37,15 +37,18 @@ export async function findOrCreateStatement(
   }
   const venue = venueId ? await Venue.findByPk(venueId) : null;
   if (venueId && !venue) throw NotFoundError('There is no such venue.');
-  const existing = await Statement.findOne({ where: { skyObjectId, templateId, venueId } });
-  if (existing) return { statement: existing, created: false };
   const object = await SkyObject.findByPk(skyObjectId);
   if (!object) throw NotFoundError('That object is not in the catalogue.');
+  const refusal = kindRefusal(template, object.kind);
+  if (refusal) throw new HttpError(400, 'template_not_for_kind', refusal, { templateId: refusal });
+  const existing = await Statement.findOne({ where: { skyObjectId, templateId, venueId } });
+  if (existing) return { statement: existing, created: false };
   const settings = await getSettings();
   const base = await buildTemplateContext(object, {
     model: settings.cosmologyModel,
     band: settings.defaultBand,
     version: settings.version,
+    assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
   });
   const night = venue ? (await buildVenueNights([venue.id], new Date())).get(venue.id) : undefined;
   const ctx = night ? withVenue(base, night) : base;

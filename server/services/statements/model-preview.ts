@@ -31,7 +31,12 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
       },
     )
   ).map((r) => r.id);
-  const proposed = { model, band: settings.defaultBand, version: settings.version };
+  const proposed = {
+    model,
+    band: settings.defaultBand,
+    version: settings.version,
+    assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
+  };
   const computedAt = new Date();
   const batches: Array<Promise<PreviewChange[]>> = [];
   const changes: PreviewChange[] = [];

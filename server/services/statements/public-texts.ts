@@ -8,6 +8,9 @@ export interface PublicStatement {
   tonightTexts: Record<StatementLocale, string> | null;
   /** The date its shown wording counts from. */
   asOf: string;
+  /** Its wording and small print as last computed: the small print is shown with wording it belongs to. */
+  texts: Record<StatementLocale, string> | null;
+  footnotes: Record<StatementLocale, string> | null;
 }
 
 /**
@@ -23,7 +26,7 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
   if (statementIds.length === 0) return new Map();
   const rows = await Statement.findAll({
     where: { id: { [Op.in]: statementIds } },
-    attributes: ['id', 'templateId', 'status', 'acknowledgedTexts', 'computedAt', 'acknowledgedAt'],
+    attributes: ['id', 'templateId', 'status', 'acknowledgedTexts', 'computedAt', 'acknowledgedAt', 'texts', 'footnotes'],
   });
   return new Map(
     rows.map((s) => {
@@ -33,6 +36,8 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
         {
           tonightTexts: follows ? s.acknowledgedTexts : null,
           asOf: (follows ? s.computedAt : (s.acknowledgedAt ?? s.computedAt)).toISOString(),
+          texts: s.texts ?? null,
+          footnotes: s.footnotes ?? null,
         },
       ];
     }),
@@ -42,4 +47,18 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
 /** The text to show for a statement on a published page: tonight's for one that follows tonight, else as signed. */
 export function publicText(signed: string, shown: PublicStatement | undefined, locale: string): string {
   return shown?.tonightTexts?.[locale as StatementLocale] ?? signed;
+}
+
+/**
+ * The small print that qualifies a statement's shown wording (which band, which cosmology, which
+ * night), or null. Shown only when the wording shown is the one it was written with: a page still
+ * showing older signed wording must not carry small print about a newer computation.
+ * @param shownText the wording the public is shown
+ * @param shown publicStatements' entry for the statement
+ * @param locale the page's locale
+ */
+export function publicNote(shownText: string, shown: PublicStatement | undefined, locale: string): string | null {
+  const l = locale as StatementLocale;
+  if (!shown?.footnotes?.[l] || shown.texts?.[l] !== shownText) return null;
+  return shown.footnotes[l];
 }

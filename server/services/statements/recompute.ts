@@ -31,7 +31,12 @@ export class SettingsMovedError extends Error {}
 /** The adopted settings as a statement computation reads them. */
 export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
   const row = await getSettings();
-  return { model: row.cosmologyModel, band: row.defaultBand, version: row.version };
+  return {
+    model: row.cosmologyModel,
+    band: row.defaultBand,
+    version: row.version,
+    assumptions: { spectralIndex: row.spectralIndexDefaults ?? {} },
+  };
 }
 
 async function idsFor(scope: RecomputeScope): Promise<string[]> {

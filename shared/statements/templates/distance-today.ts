@@ -2,6 +2,7 @@ import { LY_PER_PC } from '../../engine/units.ts';
 import { compose, cosmologyFootnote, derivedStep, mapInterval } from '../compose.ts';
 import { distanceToday as computeDistance } from '../distance.ts';
 import type { StatementTemplate } from '../types.ts';
+import { nameAtStart, verb } from '../names.ts';
 import { frenchCount, isFrench, unitWord } from './words.ts';
 
 /** "It is now about D light-years away", naming the distance measure in the working. */
@@ -9,6 +10,8 @@ export const distanceTodayTemplate: StatementTemplate = {
   id: 'distance-today',
   title: 'Distance today in light-years',
   needs: 'a redshift (0.01 or more), a distance or a parallax',
+  kinds: ['star', 'galaxy', 'quasar', 'nebula', 'cluster', 'other'],
+  kindsReason: 'a solar-system body’s distance changes through the year; a single figure would be wrong most of the time.',
   usesCosmology: true,
   evaluate(ctx) {
     const d = computeDistance(ctx);
@@ -47,8 +50,8 @@ export const distanceTodayTemplate: StatementTemplate = {
       interval: mapInterval(d.interval ?? undefined, toLy),
       sentence: (locale, n) =>
         isFrench(locale)
-          ? `${ctx.object.name} se trouve ${now ? 'aujourd’hui ' : ''}à environ ${frenchCount(n, unitWord(locale, 'light-year'))}.`
-          : `${ctx.object.name} is ${now ? 'now ' : ''}about ${n} ${unitWord(locale, 'light-year')} away.`,
+          ? `${nameAtStart(ctx.object, locale)} ${verb(ctx.object, locale, 'se trouve', 'se trouvent')} ${now ? 'aujourd’hui ' : ''}à environ ${frenchCount(n, unitWord(locale, 'light-year'))}.`
+          : `${nameAtStart(ctx.object, locale)} ${verb(ctx.object, locale, 'is', 'are')} ${now ? 'now ' : ''}about ${n} ${unitWord(locale, 'light-year')} away.`,
       footnote: now ? cosmologyFootnote(d.model) : undefined,
       working: [...d.working, step],
       warnings: d.warnings,

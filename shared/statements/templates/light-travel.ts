@@ -3,6 +3,7 @@ import { compose, cosmologyFootnote, derivedStep, mapInterval } from '../compose
 import { distanceToday } from '../distance.ts';
 import { asInput, distanceBasis, run, used } from '../inputs.ts';
 import { formatApproximate } from '../number-words.ts';
+import { frenchOf, nameIn } from '../names.ts';
 import { choosePrecision } from '../precision.ts';
 import type { StatementTemplate } from '../types.ts';
 import { isFrench, yearsPhrase } from './words.ts';
@@ -12,6 +13,9 @@ export const lightTravel: StatementTemplate = {
   id: 'light-travel',
   title: 'When its light set out, and the age of the universe then',
   needs: 'a redshift (0.01 or more) for the age of the universe then; otherwise a distance or parallax',
+  kinds: ['star', 'galaxy', 'quasar', 'nebula', 'cluster', 'other'],
+  kindsReason:
+    'a solar-system body’s distance changes through the year, so its light-travel time is given for one night (the planet-light template) or not at all.',
   usesCosmology: true,
   evaluate(ctx) {
     const basis = distanceBasis(ctx);
@@ -40,8 +44,8 @@ export const lightTravel: StatementTemplate = {
         interval: mapInterval(d.interval ?? undefined, toYears),
         sentence: (locale, n) =>
           isFrench(locale)
-            ? `La lumière que nous recevons de ${ctx.object.name} est partie il y a environ ${yearsPhrase(locale, n, toYears(d.mpc))}.`
-            : `The light we see from ${ctx.object.name} set out about ${yearsPhrase(locale, n, toYears(d.mpc))} ago.`,
+            ? `La lumière que nous recevons ${frenchOf(ctx.object)} est partie il y a environ ${yearsPhrase(locale, n, toYears(d.mpc))}.`
+            : `The light we see from ${nameIn(ctx.object, locale)} set out about ${yearsPhrase(locale, n, toYears(d.mpc))} ago.`,
         working: [...d.working, step],
         warnings: d.warnings,
         inputs: d.inputs,
@@ -92,8 +96,8 @@ export const lightTravel: StatementTemplate = {
       sentence: (locale, n) => {
         const t = yearsPhrase(locale, n, years);
         if (isFrench(locale))
-          return `La lumière que nous recevons de ${ctx.object.name} est partie il y a environ ${t}${age ? `, quand l’univers avait environ ${ageWords(locale)}` : ''}.`;
-        return `The light we see from ${ctx.object.name} set out about ${t} ago${age ? `, when the universe was about ${ageWords(locale)} old` : ''}.`;
+          return `La lumière que nous recevons ${frenchOf(ctx.object)} est partie il y a environ ${t}${age ? `, quand l’univers avait environ ${ageWords(locale)}` : ''}.`;
+        return `The light we see from ${nameIn(ctx.object, locale)} set out about ${t} ago${age ? `, when the universe was about ${ageWords(locale)} old` : ''}.`;
       },
       footnote: cosmologyFootnote(lookback.model),
       working: [...lookback.working, ...(age?.working ?? []), ...ageStep],

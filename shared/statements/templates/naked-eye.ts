@@ -1,5 +1,6 @@
 import { compose } from '../compose.ts';
 import { asInput, find, missing, run, used } from '../inputs.ts';
+import { nameAtStart, verb } from '../names.ts';
 import type { StatementTemplate } from '../types.ts';
 import { frenchCount, isFrench } from './words.ts';
 
@@ -11,6 +12,9 @@ export const nakedEye: StatementTemplate = {
   id: 'naked-eye',
   title: 'Brightness compared with the faintest stars the unaided eye sees',
   needs: 'an apparent magnitude in the V band',
+  kinds: ['star', 'quasar', 'planet', 'moon'],
+  kindsReason:
+    'the unaided-eye limit is for points of light; a galaxy’s, nebula’s or cluster’s total magnitude is spread over its area, so comparing it with the faintest stars misleads (and the Sun is never to be looked at).',
   usesCosmology: false,
   evaluate(ctx) {
     const mag = find(ctx, 'apparent_magnitude', 'V');
@@ -30,15 +34,22 @@ export const nakedEye: StatementTemplate = {
       value: r.value,
       unit: '',
       interval: r.interval ?? null,
-      sentence: (locale, n) => {
+      sentence: (locale, n, shown) => {
+        const o = ctx.object;
+        const subject = nameAtStart(o, locale);
+        // A ratio that rounds to one is "at the limit", never "1 times" (house style, DEVELOPERS.md).
         if (isFrench(locale)) {
+          if (shown === 1)
+            return `${subject} ${verb(o, locale, 'est', 'sont')} à peu près à la limite de ce que l’œil nu peut voir par nuit noire.`;
           return fainter
-            ? `${ctx.object.name} est environ ${frenchCount(n, 'fois')} trop faible pour être visible à l’œil nu, même par nuit noire.`
-            : `${ctx.object.name} a un éclat environ ${frenchCount(n, 'fois')} supérieur à celui des étoiles les plus faibles visibles à l’œil nu par nuit noire.`;
+            ? `${subject} ${verb(o, locale, 'est', 'sont')} environ ${frenchCount(n, 'fois')} trop ${verb(o, locale, 'faible', 'faibles')} pour être ${verb(o, locale, 'visible', 'visibles')} à l’œil nu, même par nuit noire.`
+            : `${subject} ${verb(o, locale, 'a', 'ont')} un éclat environ ${frenchCount(n, 'fois')} supérieur à celui des étoiles les plus faibles visibles à l’œil nu par nuit noire.`;
         }
+        if (shown === 1)
+          return `${subject} ${verb(o, locale, 'is', 'are')} about at the limit of what the unaided eye can see on a dark night.`;
         return fainter
-          ? `${ctx.object.name} is about ${n} times too faint to see with the unaided eye, even on a dark night.`
-          : `${ctx.object.name} is about ${n} times brighter than the faintest stars the unaided eye can see on a dark night.`;
+          ? `${subject} ${verb(o, locale, 'is', 'are')} about ${n} times too faint to see with the unaided eye, even on a dark night.`
+          : `${subject} ${verb(o, locale, 'is', 'are')} about ${n} times as bright as the faintest stars the unaided eye can see on a dark night.`;
       },
       working: r.working,
       warnings: r.warnings,

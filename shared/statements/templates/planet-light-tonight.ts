@@ -3,6 +3,7 @@ import { fromConstant } from '../../engine/working.ts';
 import { PLANET_NAMES, type PlanetId } from '../../sky/bodies.ts';
 import { compose, derivedStep } from '../compose.ts';
 import { perLocale, type StatementLocale } from '../locales.ts';
+import { nameIn } from '../names.ts';
 import { formatApproximate } from '../number-words.ts';
 import { choosePrecision, roundToSignificant } from '../precision.ts';
 import {
@@ -90,6 +91,8 @@ export const planetLightTonight: StatementTemplate = {
   id: 'planet-light-tonight',
   title: 'How long a planet’s light takes to reach us tonight',
   needs: 'a planet the sky engine computes (Mercury to Neptune) and the venue whose night it is',
+  kinds: ['planet'],
+  kindsReason: 'it follows a planet the sky engine computes (Mercury to Neptune) through one venue’s night.',
   usesCosmology: false,
   needsVenue: true,
   followsTonight: true,
@@ -153,7 +156,7 @@ export const planetLightTonight: StatementTemplate = {
     const interval = { low: minutes * (1 - k), high: minutes * (1 + k) };
     // compose applies the same rule; the hours-and-minutes words need the figure count first.
     const figures = choosePrecision(minutes, interval).significantFigures;
-    const english = ctx.object.name;
+    const english = nameIn(ctx.object, 'en-GB');
     const basis: NightBasis = {
       venueId: venue.id,
       localDate: night.localDate,

@@ -3,6 +3,7 @@ import { KM_PER_MPC } from '../../engine/units.ts';
 import { compose, cosmologyFootnote, derivedStep, mapInterval } from '../compose.ts';
 import { distanceToday } from '../distance.ts';
 import type { StatementTemplate } from '../types.ts';
+import { nameIn, verb } from '../names.ts';
 import { frenchCount, isFrench, unitWord } from './words.ts';
 
 /** The bead the Sun shrinks to, in metres. */
@@ -13,6 +14,8 @@ export const scaleModel: StatementTemplate = {
   id: 'scale-model',
   title: 'Distance in a scale model where the Sun is a 1 cm bead',
   needs: 'a redshift (0.01 or more), a distance or a parallax',
+  kinds: ['star', 'galaxy', 'quasar', 'nebula', 'cluster', 'other'],
+  kindsReason: 'a solar-system body’s distance changes through the year; a single figure would be wrong most of the time.',
   usesCosmology: true,
   evaluate(ctx) {
     const d = distanceToday(ctx);
@@ -45,8 +48,8 @@ export const scaleModel: StatementTemplate = {
       sentence: (locale, n) => {
         const unit = unitWord(locale, inMetres ? 'metre' : 'kilometre');
         return isFrench(locale)
-          ? `Si le Soleil était une perle d’un ${unitWord(locale, 'centimetre')} de diamètre, ${ctx.object.name} serait à environ ${frenchCount(n, unit)}.`
-          : `If the Sun were a bead 1 ${unitWord(locale, 'centimetre')} across, ${ctx.object.name} would be about ${n} ${unit} away.`;
+          ? `Si le Soleil était une perle d’un ${unitWord(locale, 'centimetre')} de diamètre, ${nameIn(ctx.object, locale)} ${verb(ctx.object, locale, 'serait', 'seraient')} à environ ${frenchCount(n, unit)}.`
+          : `If the Sun were a bead 1 ${unitWord(locale, 'centimetre')} across, ${nameIn(ctx.object, locale)} would be about ${n} ${unit} away.`;
       },
       footnote: d.basis === 'z' ? cosmologyFootnote(d.model) : undefined,
       working: [...d.working, step],

@@ -173,6 +173,21 @@ export function statementCases(): Array<{ templateId: string; ctx: TemplateConte
     ctx('Tiny z', [m('z', 'redshift', -0.001), m('d', 'distance', 7.6e5, { minus: 2e4, plus: 3e4, unit: 'pc' })]),
     ctx('Nothing', []),
     ctx('Wide', [m('z', 'redshift', 0.05, { sigma: 0.5 }), vmag(13)]),
+    // Since the K-correction rule (statement rules release 2) the contexts above without a spectral
+    // index freeze the "needs input" refusal of the light and brightness templates; these keep their
+    // Monte Carlo covered, with a measured spectral index.
+    ctx('Q1 alpha', [m('z', 'redshift', 0.158, { sigma: 0.0003 }), vmag(12.9), m('a', 'spectral_index', -0.5, { sigma: 0.2 })]),
+    ctx('Closed alpha', [m('z', 'redshift', 2.4, { sigma: 0.03 }), vmag(18.3), m('a', 'spectral_index', -0.44)], {
+      name: 'closed',
+      H0: 72,
+      Om0: 0.45,
+      Ode0: 0.75,
+    }),
+    ctx(
+      'Neutrinos alpha',
+      [m('z', 'redshift', 0.7, { sigma: 0.002 }), vmag(16.0, { sigma: 0.3 }), m('a', 'spectral_index', -0.6, { sigma: 0.1 })],
+      { H0: 67.7, Om0: 0.31, Tcmb0: 2.7255, Neff: 3.046, m_nu: [0, 0.02, 0.06] },
+    ),
   ];
   // Templates about a venue's night draw no Monte Carlo (planet-light-tonight.test.ts covers them).
   return contexts.flatMap((c) => STATEMENT_TEMPLATES.filter((t) => !t.needsVenue).map((t) => ({ templateId: t.id, ctx: c })));

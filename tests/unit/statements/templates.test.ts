@@ -29,9 +29,11 @@ const ctx = (
   band: 'V',
 });
 
+// At z = 0.241 with ±0.1 mag the K-correction matters (z_K ≈ 0.20), so Q1 carries a measured spectral index.
 const quasar = ctx('Q1', [
   m('z', 'redshift', 0.241, { sigma: 0.0005 }),
   m('v', 'apparent_magnitude', 14.6, { sigma: 0.1, band: 'V', unit: 'mag' }),
+  m('a', 'spectral_index', -0.5, { sigma: 0.2 }),
 ]);
 
 function ok(templateId: string, c: TemplateContext) {

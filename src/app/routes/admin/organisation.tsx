@@ -9,6 +9,7 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { useChangeCosmology, usePreviewCosmology, useSettings, useUpdateSettings } from '@/features/settings/api/settings.ts';
 import { CosmologyPreviewTable } from '@/features/settings/components/cosmology-preview-table.tsx';
 import { ModelChooser } from '@/features/settings/components/model-chooser.tsx';
+import { SpectralIndexDefaultsForm } from '@/features/settings/components/spectral-index-defaults.tsx';
 
 /** Organisation defaults: the adopted cosmology (previewed before switching), band, locale, eye-safety notice. */
 export function Component() {
@@ -133,6 +134,19 @@ export function Component() {
               Save defaults
             </Button>
           </form>
+        </section>
+
+        <section aria-labelledby="spectral-heading" className="space-y-4 rounded-lg border border-rule bg-panel p-6">
+          <h2 id="spectral-heading" className="text-lg font-semibold">
+            Default spectral indices (K-correction)
+          </h2>
+          <p className="text-sm text-muted">
+            Far away, the light we measure in a band left the object at shorter wavelengths; the K-correction for that needs the
+            object’s spectral index. Without a measured one, a brightness or light-output statement beyond the redshift where this
+            matters asks for it — unless you name a default here, with its source. Statements that use a default say so in their
+            working. Leave a kind empty to always ask.
+          </p>
+          <SpectralIndexDefaultsForm settings={s} />
         </section>
       </div>
     </>

@@ -99,7 +99,7 @@ export function Component() {
       </section>
 
       <div className="mb-8">
-        <ObjectStatements objectId={id} />
+        <ObjectStatements objectId={id} objectKind={o.kind} />
       </div>
       <section aria-labelledby="history-heading" className="space-y-3">
         <h2 id="history-heading" className="flex items-center gap-2 text-lg font-semibold">

@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { useForm, type Resolver } from 'react-hook-form';
+import { useForm, type Resolver, type UseFormRegisterReturn } from 'react-hook-form';
 import { KIND_LABELS, MOVING_KINDS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
 import {
   SkyObjectInputSchema,
@@ -21,7 +21,42 @@ const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
   ra: object?.raDeg === null || object?.raDeg === undefined ? '' : String(object.raDeg),
   dec: object?.decDeg === null || object?.decDeg === undefined ? '' : String(object.decDeg),
   notes: object?.notes ?? '',
+  sentenceEn: object?.sentenceNames.en?.text ?? '',
+  sentenceEnPlural: object?.sentenceNames.en?.plural ?? false,
+  sentenceFr: object?.sentenceNames.fr?.text ?? '',
+  sentenceFrPlural: object?.sentenceNames.fr?.plural ?? false,
 });
+
+/** The form's flat sentence-name fields as the API takes them (a blank text → the name as listed). */
+const sentenceNamesOf = (v: SkyObjectFormValues) => ({
+  en: { text: v.sentenceEn.trim(), plural: v.sentenceEnPlural },
+  fr: { text: v.sentenceFr.trim(), plural: v.sentenceFrPlural },
+});
+
+/** One language's sentence name: the text, and whether it takes a plural verb. */
+function SentenceNameField({
+  label,
+  hint,
+  text,
+  plural,
+  pluralLabel,
+}: {
+  label: string;
+  hint: string;
+  text: UseFormRegisterReturn;
+  plural: UseFormRegisterReturn;
+  pluralLabel: string;
+}) {
+  return (
+    <div className="space-y-1">
+      <TextField label={label} hint={hint} autoComplete="off" {...text} />
+      <label className="flex items-center gap-2 text-sm">
+        <input type="checkbox" className="size-4 accent-accent" {...plural} />
+        {pluralLabel}
+      </label>
+    </div>
+  );
+}
 
 /**
  * Adds an object, or edits one when `object` is given. Position in degrees or sexagesimal; the
@@ -54,7 +89,11 @@ export function ObjectForm({
   const onSubmit = handleSubmit(() => {
     setFormError(undefined);
     // The server parses the same text again (one schema, two uses), so send what was typed.
-    const raw = getValues();
+    const { sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields } = getValues();
+    const raw = {
+      ...fields,
+      sentenceNames: sentenceNamesOf({ sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields }),
+    };
     mutation.mutate(moving ? { ...raw, ra: '', dec: '' } : raw, {
       onSuccess: onDone,
       onError: (error) =>
@@ -113,6 +152,27 @@ export function ObjectForm({
           />
         </>
       )}
+      <fieldset className="grid gap-4 sm:col-span-2 sm:grid-cols-2">
+        <legend className="mb-1 text-sm font-medium text-ink">Name in a sentence</legend>
+        <p className="text-xs text-muted sm:col-span-2">
+          How statements name it, with its article: “the Andromeda Galaxy”, “the Pleiades” (plural). Leave empty when the name
+          stands alone (“Sirius”, “3C 279”).
+        </p>
+        <SentenceNameField
+          label="English"
+          hint="e.g. the Pleiades"
+          text={register('sentenceEn')}
+          plural={register('sentenceEnPlural')}
+          pluralLabel="Takes a plural verb (“are”)"
+        />
+        <SentenceNameField
+          label="French"
+          hint="e.g. les Pléiades"
+          text={register('sentenceFr')}
+          plural={register('sentenceFrPlural')}
+          pluralLabel="Pluriel (« sont »)"
+        />
+      </fieldset>
       <div className="sm:col-span-2">
         <label htmlFor="object-notes" className="mb-1 block text-sm font-medium text-ink">
           Notes

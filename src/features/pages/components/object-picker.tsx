@@ -13,7 +13,8 @@ export function ObjectPicker({
   valueLabel,
 }: {
   value: string;
-  onChange: (id: string, name: string) => void;
+  /** `kind` is the object's kind when it is among the current matches. */
+  onChange: (id: string, name: string, kind?: string) => void;
   label?: string;
   error?: string;
   valueLabel?: string;
@@ -46,7 +47,7 @@ export function ObjectPicker({
         onChange={(e) => {
           const text = e.target.selectedOptions[0]?.text ?? '';
           setPicked({ id: e.target.value, text });
-          onChange(e.target.value, text);
+          onChange(e.target.value, text, rows.find((o) => o.id === e.target.value)?.kind);
         }}
         className={`block w-full rounded-md border bg-panel px-2 py-1 text-sm ${error ? 'border-broken' : 'border-rule'}`}
       >

@@ -20,13 +20,14 @@ export function StatementPicker({
   onPick,
   onClose,
 }: {
-  defaultObject: { id: string; name: string };
+  defaultObject: { id: string; name: string; kind?: string };
   replacing?: string;
   onPick: (statementId: string) => void;
   onClose: () => void;
 }) {
   const [objectId, setObjectId] = useState(defaultObject.id);
   const [objectName, setObjectName] = useState(defaultObject.name);
+  const [objectKind, setObjectKind] = useState(defaultObject.kind);
   const [changingObject, setChangingObject] = useState(false);
   // The template waiting for its venue, and the venue chosen for it.
   const [venueFor, setVenueFor] = useState<StatementTemplateDto | null>(null);
@@ -62,64 +63,68 @@ export function StatementPicker({
         <ObjectPicker
           value={objectId}
           valueLabel={objectName}
-          onChange={(id, name) => {
+          onChange={(id, name, kind) => {
             setObjectId(id);
             setObjectName(name.split(' · ')[0]);
+            setObjectKind(kind);
             create.reset();
           }}
         />
       )}
       <fieldset className="space-y-1.5">
         <legend className="mb-1 text-sm font-medium">Statement</legend>
-        {(templates.data ?? []).map((t) =>
-          venueFor?.id === t.id ? (
-            <form
-              key={t.id}
-              className="space-y-2 rounded-md border border-accent px-3 py-2"
-              onSubmit={(e) => {
-                e.preventDefault();
-                if (venueId) work(t.id, venueId);
-              }}
-            >
-              <span className="block text-sm font-medium">{t.title}</span>
-              <span className="block text-xs text-muted">{needsLine(t)}</span>
-              <div className="flex flex-wrap items-end gap-2">
-                <VenueChoiceField
-                  value={venueId}
-                  onChange={(id) => {
-                    setVenueId(id);
-                    create.reset();
-                  }}
-                  className="min-w-64"
-                />
-                <Button type="submit" disabled={!venueId} busy={create.isPending}>
-                  Work it out
-                </Button>
-                <Button type="button" variant="quiet" onClick={() => setVenueFor(null)}>
-                  Back
-                </Button>
-              </div>
-            </form>
-          ) : (
-            <button
-              key={t.id}
-              type="button"
-              disabled={create.isPending}
-              onClick={() => {
-                create.reset();
-                if (t.needsVenue) setVenueFor(t);
-                else work(t.id);
-              }}
-              className="block w-full rounded-md border border-rule px-3 py-2 text-left text-sm hover:border-accent disabled:opacity-60"
-            >
-              <span className="font-medium">{t.title}</span>
-              <span className="block text-xs text-muted">
-                {needsLine(t)}
-                {t.needsVenue ? ' · choose the venue next' : ''}
-              </span>
-            </button>
-          ),
-        )}
+        {/* Only the templates valid for this kind of object (the server refuses the others, saying why). */}
+        {(templates.data ?? [])
+          .filter((t) => !objectKind || t.kinds.includes(objectKind))
+          .map((t) =>
+            venueFor?.id === t.id ? (
+              <form
+                key={t.id}
+                className="space-y-2 rounded-md border border-accent px-3 py-2"
+                onSubmit={(e) => {
+                  e.preventDefault();
+                  if (venueId) work(t.id, venueId);
+                }}
+              >
+                <span className="block text-sm font-medium">{t.title}</span>
+                <span className="block text-xs text-muted">{needsLine(t)}</span>
+                <div className="flex flex-wrap items-end gap-2">
+                  <VenueChoiceField
+                    value={venueId}
+                    onChange={(id) => {
+                      setVenueId(id);
+                      create.reset();
+                    }}
+                    className="min-w-64"
+                  />
+                  <Button type="submit" disabled={!venueId} busy={create.isPending}>
+                    Work it out
+                  </Button>
+                  <Button type="button" variant="quiet" onClick={() => setVenueFor(null)}>
+                    Back
+                  </Button>
+                </div>
+              </form>
+            ) : (
+              <button
+                key={t.id}
+                type="button"
+                disabled={create.isPending}
+                onClick={() => {
+                  create.reset();
+                  if (t.needsVenue) setVenueFor(t);
+                  else work(t.id);
+                }}
+                className="block w-full rounded-md border border-rule px-3 py-2 text-left text-sm hover:border-accent disabled:opacity-60"
+              >
+                <span className="font-medium">{t.title}</span>
+                <span className="block text-xs text-muted">
+                  {needsLine(t)}
+                  {t.needsVenue ? ' · choose the venue next' : ''}
+                </span>
+              </button>
+            ),
+          )}
       </fieldset>
       {create.error && (
         <Notice tone="warning" title="This statement cannot be worked out">

@@ -13,14 +13,16 @@ import { paths } from '@/config/paths.ts';
  * An object's checked statements, and a picker to add one from a template (with the venue, for a
  * template about tonight's sky: one statement per venue).
  */
-export function ObjectStatements({ objectId }: { objectId: string }) {
+export function ObjectStatements({ objectId, objectKind }: { objectId: string; objectKind?: string }) {
   const statements = useStatements({ objectId });
   const templates = useStatementTemplates();
   const create = useCreateStatement();
   const [templateId, setTemplateId] = useState('');
   const [venueId, setVenueId] = useState('');
   const existing = new Set(statements.data?.data.filter((s) => !s.venue).map((s) => s.template.id));
-  const available = templates.data?.filter((t) => t.needsVenue || !existing.has(t.id)) ?? [];
+  // Only the templates valid for this kind of object; the server refuses the others with the reason.
+  const available =
+    templates.data?.filter((t) => (t.needsVenue || !existing.has(t.id)) && (!objectKind || t.kinds.includes(objectKind))) ?? [];
   const chosen = available.find((t) => t.id === templateId);
 
   return (
