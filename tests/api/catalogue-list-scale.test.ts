@@ -73,6 +73,11 @@ describe('the catalogue table at scale', () => {
     expect(await missing('any_preferred')).toBe(true);
   });
 
+  it('asks PostgreSQL to cost random reads as solid-state storage does, so the partial indexes are chosen', async () => {
+    const [row] = await getSequelize().query<{ random_page_cost: string }>('SHOW random_page_cost', { type: QueryTypes.SELECT });
+    expect(row.random_page_cost).toBe('1.1');
+  });
+
   it(`counts exactly up to ${EXACT_COUNT_CAP.toLocaleString('en-GB')} and says "about" beyond`, async () => {
     const { agent } = await signedInAgent('writer');
     const small = await agent.get('/api/catalogue/objects').query({ q: 'keyset' });
