@@ -13,7 +13,15 @@ export function getSequelize(): Sequelize {
       logging: false,
       pool: { max: 10, min: 0, acquire: 10_000, idle: 10_000 },
       // A dead database must fail requests quickly rather than hang them.
-      dialectOptions: { connectionTimeoutMillis: 5_000, statement_timeout: 15_000, query_timeout: 20_000 },
+      // random_page_cost 1.1 (common practice for solid-state storage, instead of the default 4 that
+      // assumes spinning disks): with 4, PostgreSQL prefers a name index whose heap happens to be in
+      // name order over the catalogue's exact partial index, and filters through 500,000 rows.
+      dialectOptions: {
+        connectionTimeoutMillis: 5_000,
+        statement_timeout: 15_000,
+        query_timeout: 20_000,
+        options: '-c random_page_cost=1.1',
+      },
     });
   }
   return instance;

@@ -125,6 +125,12 @@ export const SkyObjectListQuerySchema = z.object({
     .min(1)
     .max(CatalogueLimits.pageSizeMax, `At most ${CatalogueLimits.pageSizeMax} rows a page`)
     .default(50),
+  /** Keyset cursor from the previous page's `nextAfter` (name and kind sorts): deep pages without OFFSET. */
+  after: z
+    .string()
+    .max(600, 'after: not a page cursor')
+    .regex(/^[A-Za-z0-9_-]+$/, 'after: not a page cursor')
+    .optional(),
 });
 export type SkyObjectListQuery = z.output<typeof SkyObjectListQuerySchema>;
 
@@ -146,9 +152,13 @@ export interface SkyObjectRowDto {
 /** A page of the catalogue table. */
 export interface SkyObjectPageDto {
   rows: SkyObjectRowDto[];
+  /** Exact when `totalExact`; otherwise the planner's estimate ("about N"), never below the exact-count cap. */
   total: number;
+  totalExact: boolean;
   page: number;
   pageSize: number;
+  /** Pass as `after` (with page + 1) to fetch the next page by keyset; null when the sort has no keyset or this is the last page. */
+  nextAfter: string | null;
 }
 
 /** An object with what the viewer may do to it. */

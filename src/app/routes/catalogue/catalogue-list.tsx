@@ -38,9 +38,11 @@ function useCatalogueQuery(): [CatalogueQuery, (patch: Partial<CatalogueQuery>) 
     dir: params.get('dir') === 'desc' ? 'desc' : 'asc',
     page: Math.max(1, Number(params.get('page')) || 1),
     pageSize: 50,
+    after: params.get('after') ?? undefined,
   };
+  // Any change but "next page" drops the keyset cursor (it belongs to one filter, sort and page).
   const update = (patch: Partial<CatalogueQuery>) => {
-    const next = { ...query, page: 1, ...patch };
+    const next = { ...query, page: 1, after: undefined, ...patch };
     const search = new URLSearchParams();
     for (const [k, v] of Object.entries(next)) if (v !== undefined && v !== '' && k !== 'pageSize') search.set(k, String(v));
     setParams(search, { replace: true });
@@ -149,7 +151,9 @@ export function Component() {
             dir={query.dir}
             loading={objects.isFetching}
             onSort={(sort, dir) => update({ sort, dir })}
-            onPage={(page) => update({ page })}
+            onPage={(page) =>
+              update({ page, after: page === query.page + 1 ? (objects.data?.nextAfter ?? undefined) : undefined })
+            }
           />
         )}
       </div>

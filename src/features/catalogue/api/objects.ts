@@ -3,7 +3,7 @@ import type { SkyObjectDto, SkyObjectInput, SkyObjectListQuery, SkyObjectPageDto
 import { api, type ApiData } from '@/lib/api-client.ts';
 
 /** The table's query as the URL and the API know it (all optional but sort, dir, page, pageSize). */
-export type CatalogueQuery = Partial<Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing'>> &
+export type CatalogueQuery = Partial<Pick<SkyObjectListQuery, 'q' | 'kind' | 'missing' | 'after'>> &
   Pick<SkyObjectListQuery, 'sort' | 'dir' | 'page' | 'pageSize'>;
 
 const toSearch = (query: CatalogueQuery) => {

@@ -59,6 +59,8 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
 interface Props {
   rows: SkyObjectRowDto[];
   total: number;
+  /** False when the total is the database's estimate (large catalogues): shown as "about N". */
+  totalExact: boolean;
   page: number;
   pageSize: number;
   sort: SortKey;
@@ -69,7 +71,7 @@ interface Props {
 }
 
 /** The catalogue as a dense table; sorting and paging happen on the server. */
-export function CatalogueTable({ rows, total, page, pageSize, sort, dir, loading, onSort, onPage }: Props) {
+export function CatalogueTable({ rows, total, totalExact, page, pageSize, sort, dir, loading, onSort, onPage }: Props) {
   const sorting = useMemo<SortingState>(() => [{ id: sort, desc: dir === 'desc' }], [sort, dir]);
   const pageCount = Math.max(1, Math.ceil(total / pageSize));
   const table = useReactTable({
@@ -143,16 +145,23 @@ export function CatalogueTable({ rows, total, page, pageSize, sort, dir, loading
       </div>
       <nav aria-label="Pages" className="flex items-center justify-between gap-3 border-t border-rule px-4 py-2 text-sm">
         <span className="tabular-nums text-muted">
-          {first}–{Math.min(total, page * pageSize)} of {total.toLocaleString()} objects
+          {first}–{totalExact ? Math.min(total, page * pageSize) : (page - 1) * pageSize + rows.length} of{' '}
+          {totalExact ? '' : 'about '}
+          {total.toLocaleString()} objects
         </span>
         <div className="flex items-center gap-2">
           <Button variant="secondary" onClick={() => onPage(page - 1)} disabled={page <= 1}>
             Previous
           </Button>
           <span className="tabular-nums">
-            Page {page} of {pageCount}
+            Page {page} of {totalExact ? '' : 'about '}
+            {pageCount.toLocaleString()}
           </span>
-          <Button variant="secondary" onClick={() => onPage(page + 1)} disabled={page >= pageCount}>
+          <Button
+            variant="secondary"
+            onClick={() => onPage(page + 1)}
+            disabled={totalExact ? page >= pageCount : rows.length < pageSize}
+          >
             Next
           </Button>
         </div>
