@@ -135,13 +135,11 @@ describe('from draft to published', () => {
     const eclipse = await agent.post(`/api/pages/${moonPage.id}/submit`).send({});
     expect(eclipse.status).toBe(422);
     expect(eclipse.body.error.message).toMatch(/mentions “eclipse”/);
-    const withNotice = await agent
-      .put(`/api/pages/${moonPage.id}`)
-      .send({
-        version: moonPage.version,
-        title: 'Moon',
-        doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
-      });
+    const withNotice = await agent.put(`/api/pages/${moonPage.id}`).send({
+      version: moonPage.version,
+      title: 'Moon',
+      doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
+    });
     expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(
       200,
     );
@@ -334,13 +332,11 @@ describe('revisions, scheduling and the digest', () => {
     const { agent, user } = await signedInAgent('writer');
     const q = await quasarWithStatements(agent, user);
     const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('The first words.'))), 'Diff me');
-    const second = await agent
-      .put(`/api/pages/${page.id}`)
-      .send({
-        version: page.version,
-        title: 'Diff me again',
-        doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
-      });
+    const second = await agent.put(`/api/pages/${page.id}`).send({
+      version: page.version,
+      title: 'Diff me again',
+      doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
+    });
     const list = (await agent.get(`/api/pages/${page.id}/revisions`)).body.data;
     expect(list.map((r: { number: number }) => r.number)).toEqual([3, 2, 1]);
     expect(list[0].marks).toEqual(['current']);
@@ -364,6 +360,12 @@ describe('revisions, scheduling and the digest', () => {
 
     const stale = await agent.post(`/api/pages/${page.id}/revisions/2/restore`).send({ version: page.version });
     expect(stale.status).toBe(409);
+    // The server's version travels inside the error shape, nothing beside it.
+    expect(stale.body.error).toMatchObject({
+      code: 'page_changed',
+      current: { version: second.body.data.version, revisionNumber: 3 },
+    });
+    expect(Object.keys(stale.body)).toEqual(['error']);
     const restored = await agent.post(`/api/pages/${page.id}/revisions/2/restore`).send({ version: second.body.data.version });
     expect(restored.status).toBe(200);
     expect(restored.body.data.revision.number).toBe(4);

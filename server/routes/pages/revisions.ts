@@ -7,7 +7,6 @@ import { PageRevision, User, type Page } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { diffRevisions } from '../../services/pages/page-diff.ts';
-import { PageConflictError } from '../../services/pages/page-errors.ts';
 import { savePage } from '../../services/pages/page-save.ts';
 import { loadStatements } from '../../services/pages/page-statements.ts';
 import { findPage } from './load.ts';
@@ -81,15 +80,11 @@ revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, re
   const page = await findPage(pageParam(req));
   authorize(viewer, 'page', 'edit', page);
   const r = await revisionOf(page, req.params.number);
-  try {
-    const { page: saved } = await savePage(
-      page.id,
-      { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
-      viewer,
-    );
-    res.json({ data: await loadPageDetail(saved, viewer) });
-  } catch (error) {
-    if (!(error instanceof PageConflictError)) throw error;
-    res.status(409).json({ error: { code: error.code, message: error.message }, current: error.current });
-  }
+  // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
+  const { page: saved } = await savePage(
+    page.id,
+    { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
+    viewer,
+  );
+  res.json({ data: await loadPageDetail(saved, viewer) });
 });

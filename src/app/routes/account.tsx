@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useChangePassword } from '@/features/auth/api/passwords.ts';
+import { useChangePassword } from '@/api/auth.ts';
 import { useCurrentUser } from '@/lib/auth.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 

@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useRequestPasswordReset } from '@/features/auth/api/passwords.ts';
+import { useRequestPasswordReset } from '@/api/auth.ts';
 import { TokenPasswordForm } from '@/features/auth/components/token-password-form.tsx';
 
 function RequestForm() {

@@ -8,8 +8,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useMe } from '@/features/auth/api/get-me.ts';
-import { useSignIn } from '@/features/auth/api/sign-in.ts';
+import { useMe, useSignIn } from '@/api/auth.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 
 /** Only same-site paths are followed after sign-in. */

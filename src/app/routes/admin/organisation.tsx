@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useChangeCosmology, usePreviewCosmology, useSettings, useUpdateSettings } from '@/features/settings/api/settings.ts';
+import { useChangeCosmology, usePreviewCosmology, useSettings, useUpdateSettings } from '@/api/settings.ts';
 import { CosmologyPreviewTable } from '@/features/settings/components/cosmology-preview-table.tsx';
 import { ModelChooser } from '@/features/settings/components/model-chooser.tsx';
 

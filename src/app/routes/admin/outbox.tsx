@@ -1,7 +1,7 @@
 import { useState } from 'react';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useOutbox } from '@/features/outbox/api/outbox.ts';
+import { useOutbox } from '@/api/outbox.ts';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'medium' });
 

@@ -9,7 +9,7 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useSkyObjects, type CatalogueQuery } from '@/features/catalogue/api/objects.ts';
+import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';

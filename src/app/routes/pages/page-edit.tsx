@@ -8,9 +8,10 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
-import { pageQueryOptions, usePage, useSubmitPage } from '@/features/pages/api/pages.ts';
+import { useSubmitPage } from '@/api/page-workflow.ts';
+import { pageQueryOptions, usePage } from '@/api/pages.ts';
+import { useSettings } from '@/api/settings.ts';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
-import { useSettings } from '@/features/settings/api/settings.ts';
 
 /** The editor screen (the only route that loads the editor). */
 export function Component() {

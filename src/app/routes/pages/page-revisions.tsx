@@ -4,7 +4,8 @@ import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { usePage, useRestoreRevision, useRevisionDiff, useRevisions } from '@/features/pages/api/pages.ts';
+import { useRestoreRevision, useRevisionDiff, useRevisions } from '@/api/page-revisions.ts';
+import { usePage } from '@/api/pages.ts';
 import { RevisionDiff } from '@/features/pages/components/revision-diff.tsx';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });

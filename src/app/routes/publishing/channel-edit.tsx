@@ -14,7 +14,7 @@ import {
   useRenameChannel,
   useReorderSlides,
   useUpdateSlide,
-} from '@/features/publishing/api/channels.ts';
+} from '@/api/channels.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';

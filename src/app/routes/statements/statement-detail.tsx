@@ -1,6 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import { useSettings } from '@/api/settings.ts';
 import { useAcceptStatement, useRecomputeStatement, useStatement } from '@/api/statements.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { nightDate, venueClock } from '@/components/statements/venue-night.ts';
@@ -10,7 +11,6 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { formatSig } from '@/components/working/format-number.ts';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
-import { useSettings } from '@/features/settings/api/settings.ts';
 import { StatementInputs } from '@/features/statements/components/statement-inputs.tsx';
 import { StatementTexts } from '@/features/statements/components/statement-texts.tsx';
 

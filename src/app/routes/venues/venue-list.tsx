@@ -5,7 +5,7 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useVenues } from '@/features/venues/api/venues.ts';
+import { useVenues } from '@/api/venues.ts';
 import { VenueForm } from '@/features/venues/components/venue-form.tsx';
 import { VenuesTable } from '@/features/venues/components/venues-table.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';

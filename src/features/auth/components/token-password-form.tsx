@@ -8,7 +8,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCompleteWithToken } from '../api/passwords.ts';
+import { useCompleteWithToken } from '@/api/auth.ts';
 
 const FormSchema = z
   .object({ newPassword: NewPasswordSchema, confirm: z.string() })

@@ -5,7 +5,7 @@ import type { CalcQuantity, CalcRequest, CalcSuccess } from '@shared/schemas/cal
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useCalculate } from '../api/calculate.ts';
+import { useCalculate } from '@/api/calc.ts';
 import { buildRequest, defaultFormValues, fieldForMessage, fieldsFor, inWords, type CalcFormValues } from '../form-request.ts';
 import { GROUP_LABELS, QUANTITY_LABELS, bandLabel } from '../labels.ts';
 import { MeasuredInputField } from './measured-input-field.tsx';

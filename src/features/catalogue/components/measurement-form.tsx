@@ -8,8 +8,8 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useAddMeasurement } from '../api/measurements.ts';
-import { useSources } from '../api/sources.ts';
+import { useAddMeasurement } from '@/api/measurements.ts';
+import { useSources } from '@/api/sources.ts';
 
 const FIELDS = [
   'quantity',

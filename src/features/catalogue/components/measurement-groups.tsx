@@ -3,7 +3,7 @@ import type { MeasurementDto } from '@shared/schemas/measurement.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '../api/measurements.ts';
+import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '@/api/measurements.ts';
 import { formatDateTime, formatMeasurement, quantityTitle, sourceHref } from './format.ts';
 
 function Status({ m }: { m: MeasurementDto }) {

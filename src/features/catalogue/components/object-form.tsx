@@ -12,7 +12,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateSkyObject, useUpdateSkyObject } from '../api/objects.ts';
+import { useCreateSkyObject, useUpdateSkyObject } from '@/api/catalogue-objects.ts';
 
 const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
   name: object?.name ?? '',

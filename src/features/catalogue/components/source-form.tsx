@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateSource, useUpdateSource } from '../api/sources.ts';
+import { useCreateSource, useUpdateSource } from '@/api/sources.ts';
 
 interface FormValues {
   citation: string;

@@ -12,7 +12,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useUpdateMedia } from '../api/media.ts';
+import { useUpdateMedia } from '@/api/media.ts';
 import { FocalPointPicker } from './focal-point-picker.tsx';
 import { ObjectPicker } from './object-picker.tsx';
 

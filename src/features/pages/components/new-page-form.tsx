@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useCreatePage } from '../api/pages.ts';
+import { useCreatePage } from '@/api/pages.ts';
 import { ObjectPicker } from './object-picker.tsx';
 
 /**

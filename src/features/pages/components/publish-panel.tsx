@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { PageDto } from '@shared/schemas/page.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { usePublishPage, useSchedulePage, useUnpublishPage } from '../api/pages.ts';
+import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-workflow.ts';
 
 const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 

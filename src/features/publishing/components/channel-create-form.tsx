@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateChannel } from '../api/channels.ts';
+import { useCreateChannel } from '@/api/channels.ts';
 
 /**
  * A new, empty channel at one of the venues. Focus starts in its first field, since the button

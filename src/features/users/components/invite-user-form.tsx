@@ -7,7 +7,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useInviteUser } from '../api/users.ts';
+import { useInviteUser } from '@/api/users.ts';
 
 /** Invites a member of staff by e-mail with a role. Focus starts in its first field, since the button that opened it is gone. */
 export function InviteUserForm({ onDone }: { onDone: () => void }) {

@@ -3,7 +3,7 @@ import type { UserDto } from '@shared/schemas/user.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { DataTable } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useResendInvitation, useUpdateUser } from '../api/users.ts';
+import { useResendInvitation, useUpdateUser } from '@/api/users.ts';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 

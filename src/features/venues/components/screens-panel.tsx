@@ -5,7 +5,7 @@ import { TextField } from '@/components/ui/field.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { ApiRequestError } from '@/lib/api-client.ts';
-import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '../api/screens.ts';
+import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
 import { ModalDialog } from './modal-dialog.tsx';
 import { ScreenHealth } from './screen-health.tsx';
 

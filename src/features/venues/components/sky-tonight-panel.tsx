@@ -2,7 +2,7 @@ import { useState } from 'react';
 import type { SkyTonight } from '@shared/sky/types.ts';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useSky } from '../api/sky.ts';
+import { useSky } from '@/api/sky.ts';
 import { formatAltitude, formatKm } from './sky-format.ts';
 import { SkyPlanetsTable } from './sky-planets-table.tsx';
 

@@ -6,7 +6,7 @@ import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateVenue, useUpdateVenue } from '../api/venues.ts';
+import { useCreateVenue, useUpdateVenue } from '@/api/venues.ts';
 
 const FIELDS = ['name', 'latitude', 'longitude', 'elevationM', 'timeZone'] as const;
 
