@@ -13,6 +13,7 @@ import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';
+import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
 
 const MISSING_LABELS: Record<(typeof MISSING_FILTERS)[number], string> = {
   any_preferred: 'No preferred value at all',
@@ -58,12 +59,10 @@ export function Component() {
   const keeper = user.role === 'reviewer' || user.role === 'admin';
 
   // Searching waits for a pause in typing rather than asking the server at every key.
+  const settledSearch = useDebouncedValue(search, 300);
   useEffect(() => {
-    const timer = setTimeout(() => {
-      if ((query.q ?? '') !== search) update({ q: search || undefined });
-    }, 300);
-    return () => clearTimeout(timer);
-  });
+    if ((query.q ?? '') !== settledSearch) update({ q: settledSearch || undefined });
+  }, [query.q, settledSearch, update]);
 
   return (
     <>
