@@ -13,6 +13,7 @@ import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';
+import { searchParams } from '@/lib/query-string.ts';
 import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
 
 const MISSING_LABELS: Record<(typeof MISSING_FILTERS)[number], string> = {
@@ -41,10 +42,8 @@ function useCatalogueQuery(): [CatalogueQuery, (patch: Partial<CatalogueQuery>) 
     pageSize: 50,
   };
   const update = (patch: Partial<CatalogueQuery>) => {
-    const next = { ...query, page: 1, ...patch };
-    const search = new URLSearchParams();
-    for (const [k, v] of Object.entries(next)) if (v !== undefined && v !== '' && k !== 'pageSize') search.set(k, String(v));
-    setParams(search, { replace: true });
+    // The page size is fixed, so the URL leaves it out.
+    setParams(searchParams({ ...query, page: 1, ...patch, pageSize: undefined }), { replace: true });
   };
   return [query, update];
 }
