@@ -2,11 +2,11 @@ import { useState } from 'react';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import { SOLAR_MAGNITUDES } from '@shared/engine/solar-magnitudes.ts';
 import { LOCALE_LABELS, STATEMENT_LOCALES, type StatementLocale } from '@shared/statements/locales.ts';
+import { useChangeCosmology, usePreviewCosmology, useSettings, useUpdateSettings } from '@/api/settings.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useChangeCosmology, usePreviewCosmology, useSettings, useUpdateSettings } from '@/api/settings.ts';
 import { CosmologyPreviewTable } from '@/features/settings/components/cosmology-preview-table.tsx';
 import { ModelChooser } from '@/features/settings/components/model-chooser.tsx';
 

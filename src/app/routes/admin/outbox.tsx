@@ -1,7 +1,7 @@
 import { useState } from 'react';
+import { useOutbox } from '@/api/outbox.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useOutbox } from '@/api/outbox.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Mail caught by the local SMTP catcher, newest first. */

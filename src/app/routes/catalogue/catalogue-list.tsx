@@ -1,4 +1,5 @@
 import { useEffect, useState } from 'react';
+import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { KIND_LABELS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
@@ -9,7 +10,6 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';

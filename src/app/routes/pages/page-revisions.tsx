@@ -1,11 +1,11 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { useRestoreRevision, useRevisionDiff, useRevisions } from '@/api/page-revisions.ts';
+import { usePage } from '@/api/pages.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useRestoreRevision, useRevisionDiff, useRevisions } from '@/api/page-revisions.ts';
-import { usePage } from '@/api/pages.ts';
 import { RevisionDiff } from '@/features/pages/components/revision-diff.tsx';
 import { formatDateTime } from '@/lib/format-date.ts';
 

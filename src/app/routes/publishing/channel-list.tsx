@@ -1,3 +1,5 @@
+import { useChannels } from '@/api/channels.ts';
+import { useVenues } from '@/api/venues.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
@@ -5,8 +7,6 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useChannels } from '@/api/channels.ts';
-import { useVenues } from '@/api/venues.ts';
 import { ChannelCreateForm } from '@/features/publishing/components/channel-create-form.tsx';
 import { ChannelsTable } from '@/features/publishing/components/channels-table.tsx';
 

@@ -1,9 +1,9 @@
 import { useEffect, useRef, useState } from 'react';
 import type { MediaDetailDto } from '@shared/media/schemas.ts';
+import { useDeleteMedia, useMedia, useRetryRenditions } from '@/api/media.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useDeleteMedia, useMedia, useRetryRenditions } from '@/api/media.ts';
 import { MediaDetailsForm } from './media-details-form.tsx';
 import { MediaStatus } from './media-status.tsx';
 import { pickRendition } from '@/lib/renditions.ts';

@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import { Icon } from '@/components/ui/icon.tsx';
 import { useObjectSuggestions } from '@/api/media.ts';
+import { Icon } from '@/components/ui/icon.tsx';
 
 type Obj = { id: string; name: string };
 

@@ -1,7 +1,7 @@
 import { useState } from 'react';
+import { useAddComment, useComments } from '@/api/page-comments.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useAddComment, useComments } from '@/api/page-comments.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
 
 /** The conversation on a page, oldest first, each comment with the revision it was about. */

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import type { PageDto } from '@shared/schemas/page.ts';
+import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-workflow.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-workflow.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
 
 /** For editors: publish the approved version now or at a time, or take the live version down. */

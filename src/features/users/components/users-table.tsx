@@ -1,9 +1,9 @@
 import { ROLE_LABELS, ROLES, type Role } from '@shared/roles.ts';
 import type { UserDto } from '@shared/schemas/user.ts';
+import { useResendInvitation, useUpdateUser } from '@/api/users.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { DataTable } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useResendInvitation, useUpdateUser } from '@/api/users.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
 
 function Status({ user }: { user: UserDto }) {

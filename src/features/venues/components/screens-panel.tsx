@@ -1,11 +1,11 @@
 import { useState, type FormEvent } from 'react';
 import type { KioskScreenDto, PairingCodeDto } from '@shared/schemas/kiosk.ts';
+import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { ApiRequestError } from '@/lib/api-client.ts';
-import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
 import { ModalDialog } from './modal-dialog.tsx';
 import { ScreenHealth } from './screen-health.tsx';
 import { formatTime } from '@/lib/format-date.ts';

@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import type { SkyTonight } from '@shared/sky/types.ts';
+import { useSky } from '@/api/sky.ts';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useSky } from '@/api/sky.ts';
 import { formatAltitude, formatKm } from './sky-format.ts';
 import { SkyPlanetsTable } from './sky-planets-table.tsx';
 import { formatDateTime } from '@/lib/format-date.ts';
