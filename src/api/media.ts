@@ -80,12 +80,14 @@ export function useRetryRenditions() {
   });
 }
 
-/** Catalogue objects matching typed text, for linking an image to what it shows. */
-export const useObjectSuggestions = (text: string) =>
-  useQuery({
+export const objectSuggestionsQueryOptions = (text: string) =>
+  queryOptions({
     queryKey: mediaKeys.objectSuggestions(text),
     queryFn: async () =>
       (await api.get<ApiData<Array<{ id: string; name: string }>>>(`/media/object-suggestions${queryString({ q: text })}`)).data,
-    enabled: text.trim().length > 0,
     staleTime: 30_000,
   });
+
+/** Catalogue objects matching typed text, for linking an image to what it shows (nothing asked for blank text). */
+export const useObjectSuggestions = (text: string) =>
+  useQuery({ ...objectSuggestionsQueryOptions(text), enabled: text.trim().length > 0 });
