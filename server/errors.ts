@@ -1,10 +1,15 @@
-/** An error with an HTTP status, a stable snake_case code and a message a person understands. */
+/**
+ * An error with an HTTP status, a stable snake_case code and a message a person understands.
+ * `fields` names the inputs at fault; `current` carries what the server holds now (a 409's other
+ * version), and both travel inside `{ error: { code, message, fields?, current? } }`.
+ */
 export class HttpError extends Error {
   constructor(
     readonly status: number,
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    readonly current?: unknown,
   ) {
     super(message);
   }

@@ -8,6 +8,7 @@ import {
   TimeoutError,
 } from 'sequelize';
 import { ZodError } from 'zod';
+import type { ApiError } from '@shared/schemas/common.ts';
 import { HttpError, NotFoundError } from '../errors.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { logger } from '../logger.ts';
@@ -51,9 +52,8 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const httpError = toHttpError(err);
   if (httpError.status >= 500) (req.log ?? logger).error({ err, url: req.originalUrl }, 'request failed');
   if (res.headersSent) return;
-  const body: { error: { code: string; message: string; fields?: Record<string, string> } } = {
-    error: { code: httpError.code, message: httpError.message },
-  };
+  const body: ApiError = { error: { code: httpError.code, message: httpError.message } };
   if (httpError.fields) body.error.fields = httpError.fields;
+  if (httpError.current !== undefined) body.error.current = httpError.current;
   res.status(httpError.status).json(body);
 };

@@ -6,6 +6,8 @@ export const ApiErrorSchema = z.object({
     code: z.string(),
     message: z.string(),
     fields: z.record(z.string(), z.string()).optional(),
+    /** What the server holds now, when the answer is a conflict with it (a page saved by someone else). */
+    current: z.unknown().optional(),
   }),
 });
 export type ApiError = z.infer<typeof ApiErrorSchema>;

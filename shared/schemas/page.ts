@@ -160,6 +160,20 @@ export interface PageCan {
   comment: boolean;
 }
 
+/**
+ * The version the server holds, sent inside a 409's error (`error.current`) when a save started from a
+ * stale version, so the writer can compare it with their own without asking again.
+ */
+export const PageServerVersionSchema = z.object({
+  version: z.number().int(),
+  title: z.string(),
+  doc: z.record(z.string(), z.unknown()),
+  revisionNumber: z.number().int(),
+  savedBy: z.string().nullable(),
+  savedAt: z.string(),
+});
+export type PageServerVersion = z.infer<typeof PageServerVersionSchema>;
+
 export interface PageDto extends PageRow {
   version: number;
   doc: unknown;

@@ -10,6 +10,7 @@ import type {
   StatementTemplateDto,
 } from '@shared/schemas/statement.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
+import { queryString } from '@/lib/query-string.ts';
 
 /** What the statement list can be narrowed by. */
 export interface StatementFilters {
@@ -21,17 +22,19 @@ export interface StatementFilters {
 
 type StatementPage = { data: StatementDto[]; meta: { total: number; page: number; pageSize: number } };
 
-const toQuery = (f: StatementFilters) => {
-  const params = new URLSearchParams();
-  for (const [k, v] of Object.entries(f)) if (v !== undefined && v !== '') params.set(k, String(v));
-  const s = params.toString();
-  return s ? `?${s}` : '';
+/** Every query key for statements, written once (the templates change only with a release, so they sit apart). */
+export const statementKeys = {
+  all: ['statements'] as const,
+  lists: () => [...statementKeys.all, 'list'] as const,
+  list: (filters: StatementFilters) => [...statementKeys.lists(), filters] as const,
+  detail: (id: string) => [...statementKeys.all, 'detail', id] as const,
+  templates: () => ['statement-templates'] as const,
 };
 
 export const statementsQueryOptions = (filters: StatementFilters) =>
   queryOptions({
-    queryKey: ['statements', 'list', filters],
-    queryFn: () => api.get<StatementPage>(`/statements${toQuery(filters)}`),
+    queryKey: statementKeys.list(filters),
+    queryFn: () => api.get<StatementPage>(`/statements${queryString(filters)}`),
     placeholderData: keepPreviousData,
   });
 
@@ -40,7 +43,7 @@ export const useStatements = (filters: StatementFilters) => useQuery(statementsQ
 
 export const statementQueryOptions = (id: string) =>
   queryOptions({
-    queryKey: ['statements', 'one', id],
+    queryKey: statementKeys.detail(id),
     queryFn: async () => (await api.get<ApiData<StatementDto>>(`/statements/${id}`)).data,
   });
 
@@ -49,7 +52,7 @@ export const useStatement = (id: string) => useQuery(statementQueryOptions(id));
 
 export const statementTemplatesQueryOptions = () =>
   queryOptions({
-    queryKey: ['statement-templates'],
+    queryKey: statementKeys.templates(),
     queryFn: async () => (await api.get<ApiData<StatementTemplateDto[]>>('/statement-templates')).data,
     staleTime: Infinity,
   });
@@ -62,8 +65,8 @@ function useStatementMutation<T>(fn: (arg: T) => Promise<StatementDto>) {
   return useMutation({
     mutationFn: fn,
     onSuccess: (statement) => {
-      queryClient.setQueryData(statementQueryOptions(statement.id).queryKey, statement);
-      void queryClient.invalidateQueries({ queryKey: ['statements', 'list'] });
+      queryClient.setQueryData(statementKeys.detail(statement.id), statement);
+      void queryClient.invalidateQueries({ queryKey: statementKeys.lists() });
     },
   });
 }

@@ -136,7 +136,7 @@ export function PageWorkspace({
             theirs={{
               title: autosave.conflict.theirs.title,
               doc: autosave.conflict.theirs.doc as JSONContent,
-              by: autosave.conflict.theirs.revision.author,
+              by: autosave.conflict.theirs.savedBy,
             }}
             onKeepMine={() => autosave.resolve('mine', apply)}
             onTakeTheirs={() => autosave.resolve('theirs', apply)}

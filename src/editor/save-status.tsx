@@ -1,7 +1,6 @@
 import { Icon } from '@/components/ui/icon.tsx';
 import type { SaveState } from './use-autosave.ts';
-
-const when = new Intl.DateTimeFormat(undefined, { timeStyle: 'short' });
+import { formatTime } from '@/lib/format-date.ts';
 
 const WORDS: Record<SaveState, string> = {
   saved: 'All changes saved',
@@ -39,7 +38,7 @@ export function SaveStatus({
         />
         {WORDS[state]}
       </p>
-      {savedAt && state === 'saved' && <p className="text-xs text-muted">Last saved {when.format(savedAt)}</p>}
+      {savedAt && state === 'saved' && <p className="text-xs text-muted">Last saved {formatTime(savedAt)}</p>}
       {message && <p className="mt-1 text-xs">{message}</p>}
     </div>
   );

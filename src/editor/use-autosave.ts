@@ -1,17 +1,18 @@
 import type { JSONContent } from '@tiptap/core';
+import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useEffect, useRef, useState } from 'react';
-import type { PageDto } from '@shared/schemas/page.ts';
+import type { PageDto, PageServerVersion } from '@shared/schemas/page.ts';
 import { PageLimits } from '@shared/validations.ts';
-import { fetchPage, savePage } from '@/features/pages/api/pages.ts';
+import { pageConflictOf, pageKeys, savePage } from '@/api/pages.ts';
 import { ApiRequestError } from '@/lib/api-client.ts';
 import { dropLocalDraft, keepLocalDraft } from './local-draft.ts';
 
 export type SaveState = 'saved' | 'unsaved' | 'saving' | 'offline' | 'conflict' | 'refused';
 
-/** Both versions after a 409: the writer's and the one on the server. */
+/** Both versions after a 409: the writer's and the one on the server (sent with the 409). */
 export interface Conflict {
   mine: { title: string; doc: JSONContent };
-  theirs: PageDto;
+  theirs: PageServerVersion;
 }
 
 interface Options {
@@ -27,6 +28,7 @@ interface Options {
  * and hands back both versions; a lost connection retries with growing pauses.
  */
 export function useAutosave({ pageId, version, read, onSaved }: Options) {
+  const queryClient = useQueryClient();
   const [state, setState] = useState<SaveState>('saved');
   const [message, setMessage] = useState<string | null>(null);
   const [savedAt, setSavedAt] = useState<Date | null>(null);
@@ -67,9 +69,10 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
       const e =
         error instanceof ApiRequestError ? error : new ApiRequestError(0, 'network_error', 'Starproof cannot be reached.');
       retrying.current = false;
-      if (e.status === 409 && e.code === 'page_changed') {
+      const theirs = pageConflictOf(e);
+      if (theirs) {
         blocked.current = true;
-        setConflict({ mine: content, theirs: await fetchPage(pageId) });
+        setConflict({ mine: content, theirs });
         setState('conflict');
         setMessage(e.message);
       } else if (e.status === 0 || e.status >= 500) {
@@ -119,7 +122,8 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
       if (choice === 'theirs') {
         apply(conflict.theirs.title, conflict.theirs.doc as JSONContent);
         dropLocalDraft(pageId);
-        onSaved(conflict.theirs);
+        // The 409 carried the text; the rest of the page (flags, statements, revision) comes with the next read.
+        void queryClient.invalidateQueries({ queryKey: pageKeys.detail(pageId) });
         setState('saved');
         setMessage(null);
       } else {
@@ -127,7 +131,7 @@ export function useAutosave({ pageId, version, read, onSaved }: Options) {
         void save();
       }
     },
-    [conflict, pageId, onSaved, save],
+    [conflict, pageId, queryClient, save],
   );
 
   /** Saves now (before submitting). */

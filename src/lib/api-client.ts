@@ -1,15 +1,36 @@
 import type { ApiError } from '@shared/schemas/common.ts';
 
-/** A failed API call, carrying the server's error shape. */
+/**
+ * A failed API call, carrying the server's error shape: `fields` names the inputs at fault, and
+ * `current` is what the server holds now when the answer is a conflict (read it through the
+ * resource's own parser, e.g. `pageConflictOf`, which checks its shape).
+ */
 export class ApiRequestError extends Error {
   constructor(
     readonly status: number,
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    readonly current?: unknown,
   ) {
     super(message);
   }
+}
+
+/**
+ * The error for a failed answer, from its JSON body when it has the standard shape.
+ * @param status the HTTP status
+ * @param body the parsed body, if any
+ */
+export function errorFromAnswer(status: number, body: Partial<ApiError> | null | undefined): ApiRequestError {
+  const error = body?.error;
+  return new ApiRequestError(
+    status,
+    error?.code ?? 'http_error',
+    error?.message ?? `The server answered ${status}.`,
+    error?.fields,
+    error?.current,
+  );
 }
 
 type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -42,15 +63,7 @@ async function request<T>(method: Method, url: string, body?: unknown, { timeout
   }
   if (response.status === 204) return undefined as T;
   const payload = (await response.json().catch(() => undefined)) as (ApiError & { data?: unknown }) | undefined;
-  if (!response.ok) {
-    const error = payload?.error;
-    throw new ApiRequestError(
-      response.status,
-      error?.code ?? 'http_error',
-      error?.message ?? `The server answered ${response.status}.`,
-      error?.fields,
-    );
-  }
+  if (!response.ok) throw errorFromAnswer(response.status, payload);
   return payload as T;
 }
 

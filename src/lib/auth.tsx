@@ -2,7 +2,7 @@ import { createContext, useContext, type ReactNode } from 'react';
 import { Navigate, useLocation } from 'react-router-dom';
 import type { Role } from '@shared/roles.ts';
 import type { SessionUser } from '@shared/schemas/user.ts';
-import { useMe } from '@/features/auth/api/get-me.ts';
+import { useMe } from '@/api/auth.ts';
 import { paths } from '@/config/paths.ts';
 
 const CurrentUserContext = createContext<SessionUser | null>(null);

@@ -360,6 +360,12 @@ describe('revisions, scheduling and the digest', () => {
 
     const stale = await agent.post(`/api/pages/${page.id}/revisions/2/restore`).send({ version: page.version });
     expect(stale.status).toBe(409);
+    // The server's version travels inside the error shape, nothing beside it.
+    expect(stale.body.error).toMatchObject({
+      code: 'page_changed',
+      current: { version: second.body.data.version, revisionNumber: 3 },
+    });
+    expect(Object.keys(stale.body)).toEqual(['error']);
     const restored = await agent.post(`/api/pages/${page.id}/revisions/2/restore`).send({ version: second.body.data.version });
     expect(restored.status).toBe(200);
     expect(restored.body.data.revision.number).toBe(4);

@@ -150,6 +150,55 @@ describe('object pages, from writing to re-check', () => {
     expect(errors).toEqual([]);
   }, 240_000);
 
+  it('someone else saves while the writer types: both versions from the 409 alone, the saved one taken, saving goes on', async () => {
+    const { page, errors, baseUrl } = await openBrowser();
+    await signInAs(page, baseUrl, 'writer');
+    const pageId = await newPage(page, 'Two hands on one page', 'Vega');
+    const body = page.getByRole('textbox', { name: 'Page text' });
+    const saved = () => page.getByRole('status').filter({ hasText: 'All changes saved' }).count();
+    await body.click();
+    await page.keyboard.type('First words.');
+    await expect.poll(saved, { timeout: 15_000 }).toBe(1);
+
+    // Another tab saves first, from the same version.
+    const before = await apiCall<{ data: { version: number } }>(page, 'GET', `/pages/${pageId}`);
+    const elsewhere = {
+      type: 'doc',
+      content: [{ type: 'paragraph', content: [{ type: 'text', text: 'Words saved elsewhere.' }] }],
+    };
+    await apiCall(page, 'PUT', `/pages/${pageId}`, { version: before.data.version, title: 'Saved elsewhere', doc: elsewhere });
+
+    // From here the editor must not read the page again to show the conflict: the 409 carries the server's version.
+    const pageReads: string[] = [];
+    page.on('request', (r) => {
+      if (r.method() === 'GET' && new URL(r.url()).pathname === `/api/pages/${pageId}`) pageReads.push(r.url());
+    });
+    await body.click();
+    await page.keyboard.press('End');
+    await page.keyboard.type(' More of mine.');
+    const conflict = page.getByRole('region', { name: 'Two versions of this page' });
+    await expect.poll(() => conflict.count(), { timeout: 15_000 }).toBe(1);
+    await expect.poll(() => conflict.textContent()).toContain('Words saved elsewhere.');
+    expect(await conflict.textContent()).toContain('First words. More of mine.');
+    expect(await conflict.textContent()).toContain('Saved elsewhere');
+    expect(pageReads).toEqual([]);
+    await screenshot(page, 'pages-conflict');
+
+    await conflict.getByRole('button', { name: 'Use the saved version' }).click();
+    await expect.poll(() => body.textContent()).toBe('Words saved elsewhere.');
+    expect(await page.getByLabel('Title').inputValue()).toBe('Saved elsewhere');
+    // Saving goes on from the version the 409 named.
+    await body.click();
+    await page.keyboard.press('End');
+    await page.keyboard.type(' Then more.');
+    await expect.poll(saved, { timeout: 15_000 }).toBe(1);
+    const after = await apiCall<{ data: { title: string; doc: unknown } }>(page, 'GET', `/pages/${pageId}`);
+    expect(after.data.title).toBe('Saved elsewhere');
+    expect(JSON.stringify(after.data.doc)).toContain('Words saved elsewhere. Then more.');
+    // The refused save is the one console line allowed: the browser reports every 409 answer.
+    expect(errors.filter((e) => !/status of 409/.test(e))).toEqual([]);
+  }, 120_000);
+
   it('pasting from a word processor and a web page keeps clean structure only', async () => {
     const { page, errors, baseUrl } = await openBrowser();
     await signInAs(page, baseUrl, 'writer');

@@ -23,7 +23,6 @@ import {
   dashboardFor,
   setDigest,
   loadPageDetail,
-  PageConflictError,
   listPages,
   createPage,
   savePage,
@@ -89,21 +88,16 @@ pagesRouter.get('/:id', async (req, res) => {
   res.json({ data: await loadPageDetail(page, viewer) });
 });
 
-/** Autosave: the version the writer started from must still be the server's, else 409 with the server's version. */
+/** Autosave: the version the writer started from must still be the server's, else 409 with the server's version in the error. */
 pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(req.params.id);
   authorize(viewer, 'page', 'edit', page);
   const input = req.body as PageSaveInput;
   const doc = checkedDoc(input.doc);
-  try {
-    const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);
-    res.json({ data: await loadPageDetail(saved, viewer), meta: { saved: changed } });
-  } catch (error) {
-    if (!(error instanceof PageConflictError)) throw error;
-    // The error shape, plus the server's version so the client can show both side by side.
-    res.status(409).json({ error: { code: error.code, message: error.message }, current: error.current });
-  }
+  // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
+  const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);
+  res.json({ data: await loadPageDetail(saved, viewer), meta: { saved: changed } });
 });
 
 /** The working copy rendered as the public would see it, with each statement's current wording. */

@@ -5,7 +5,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { PageRevision, User, type Page } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail, diffRevisions, PageConflictError, savePage, loadStatements } from '../../services/pages/index.ts';
+import { loadPageDetail, diffRevisions, savePage, loadStatements } from '../../services/pages/index.ts';
 import { findPage } from './load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */
@@ -77,15 +77,11 @@ revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, re
   const page = await findPage(pageParam(req));
   authorize(viewer, 'page', 'edit', page);
   const r = await revisionOf(page, req.params.number);
-  try {
-    const { page: saved } = await savePage(
-      page.id,
-      { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
-      viewer,
-    );
-    res.json({ data: await loadPageDetail(saved, viewer) });
-  } catch (error) {
-    if (!(error instanceof PageConflictError)) throw error;
-    res.status(409).json({ error: { code: error.code, message: error.message }, current: error.current });
-  }
+  // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
+  const { page: saved } = await savePage(
+    page.id,
+    { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
+    viewer,
+  );
+  res.json({ data: await loadPageDetail(saved, viewer) });
 });

@@ -1,23 +1,18 @@
-import type { JSONContent } from '@tiptap/core';
+import type { PageServerVersion } from '@shared/schemas/page.ts';
 import { HttpError } from '../../errors.ts';
 
-/** What the server holds now, sent with a 409 so the writer can compare it with their own. */
-export interface ServerVersion {
-  version: number;
-  title: string;
-  doc: JSONContent;
-  revisionNumber: number;
-  savedBy: string | null;
-  savedAt: string;
-}
+/** What the server holds now, sent inside the 409's error so the writer can compare it with their own. */
+export type ServerVersion = PageServerVersion;
 
 /** A save against a stale version: someone else saved first. Nothing is overwritten. */
 export class PageConflictError extends HttpError {
-  constructor(readonly current: ServerVersion) {
+  constructor(override readonly current: ServerVersion) {
     super(
       409,
       'page_changed',
       `${current.savedBy ?? 'Someone'} saved this page while you were editing (now revision ${current.revisionNumber}). Your text is kept: compare both versions and choose what to keep.`,
+      undefined,
+      current,
     );
   }
 }

@@ -3,11 +3,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ChangePasswordSchema, type ChangePasswordInput } from '@shared/schemas/auth.ts';
 import { ROLE_LABELS } from '@shared/roles.ts';
+import { useChangePassword } from '@/api/auth.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useChangePassword } from '@/features/auth/api/passwords.ts';
 import { useCurrentUser } from '@/lib/auth.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 

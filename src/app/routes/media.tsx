@@ -1,10 +1,10 @@
 import { useCallback, useState } from 'react';
 import { useSearchParams } from 'react-router-dom';
 import type { MediaListQuery } from '@shared/media/schemas.ts';
+import { useMediaList } from '@/api/media.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useMediaList } from '@/features/media/api/media.ts';
 import { MediaDetailPanel } from '@/features/media/components/media-detail-panel.tsx';
 import { MediaFilters } from '@/features/media/components/media-filters.tsx';
 import { MediaGrid } from '@/features/media/components/media-grid.tsx';

@@ -2,12 +2,12 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { Link, useSearchParams } from 'react-router-dom';
 import { RequestPasswordResetSchema, type RequestPasswordResetInput } from '@shared/schemas/auth.ts';
+import { useRequestPasswordReset } from '@/api/auth.ts';
 import { AuthLayout } from '@/components/layouts/auth-layout.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useRequestPasswordReset } from '@/features/auth/api/passwords.ts';
 import { TokenPasswordForm } from '@/features/auth/components/token-password-form.tsx';
 
 function RequestForm() {

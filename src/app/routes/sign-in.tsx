@@ -3,13 +3,12 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link, Navigate, useNavigate, useSearchParams } from 'react-router-dom';
 import { SignInSchema, type SignInInput } from '@shared/schemas/auth.ts';
+import { useMe, useSignIn } from '@/api/auth.ts';
 import { AuthLayout } from '@/components/layouts/auth-layout.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useMe } from '@/features/auth/api/get-me.ts';
-import { useSignIn } from '@/features/auth/api/sign-in.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 
 /** Only same-site paths are followed after sign-in. */

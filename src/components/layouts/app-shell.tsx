@@ -1,8 +1,8 @@
 import { NavLink, Outlet, useNavigate } from 'react-router-dom';
 import { ROLE_LABELS } from '@shared/roles.ts';
+import { useSignOut } from '@/api/auth.ts';
 import { ADMIN_NAV, MAIN_NAV, visibleTo, type NavItem } from '@/config/nav.ts';
 import { paths } from '@/config/paths.ts';
-import { useSignOut } from '@/features/auth/api/sign-out.ts';
 import { useCurrentUser } from '@/lib/auth.tsx';
 import { Icon } from '../ui/icon.tsx';
 import { ThemeSwitch } from './theme-switch.tsx';

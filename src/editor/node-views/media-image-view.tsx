@@ -1,13 +1,13 @@
 import { NodeViewWrapper, type ReactNodeViewProps } from '@tiptap/react';
 import { REQUIREMENT_LABELS } from '@shared/media/schemas.ts';
-import { useMediaItem } from '@/features/pages/api/pages.ts';
+import { useMedia } from '@/api/media.ts';
+import { pickRendition } from '@/lib/renditions.ts';
 
 /** An image from the library with its caption (editable here), credit and licence. */
 export function MediaImageView({ node, updateAttributes, selected }: ReactNodeViewProps) {
-  const media = useMediaItem(String(node.attrs.mediaId));
+  const media = useMedia(String(node.attrs.mediaId));
   const m = media.data;
-  const page =
-    m?.renditions.find((r) => r.name === 'page' && r.format === 'webp') ?? m?.renditions.find((r) => r.name === 'page');
+  const page = pickRendition(m?.renditions, 'page');
   return (
     <NodeViewWrapper as="figure" className={`media-block ${selected ? 'is-selected' : ''}`} data-drag-handle="">
       {page ? (

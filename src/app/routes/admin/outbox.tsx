@@ -1,9 +1,8 @@
 import { useState } from 'react';
+import { useOutbox } from '@/api/outbox.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useOutbox } from '@/features/outbox/api/outbox.ts';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'medium' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Mail caught by the local SMTP catcher, newest first. */
 export function Component() {
@@ -33,7 +32,7 @@ export function Component() {
                 <span className="block text-xs text-muted">To {m.to}</span>
               </span>
               <time className="shrink-0 text-xs text-muted" dateTime={m.receivedAt}>
-                {dateFormat.format(new Date(m.receivedAt))}
+                {formatDateTime(m.receivedAt)}
               </time>
             </button>
             {openId === m.id && (

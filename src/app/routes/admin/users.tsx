@@ -1,10 +1,10 @@
 import { useState } from 'react';
+import { useUsers } from '@/api/users.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useUsers } from '@/features/users/api/users.ts';
 import { InviteUserForm } from '@/features/users/components/invite-user-form.tsx';
 import { UsersTable } from '@/features/users/components/users-table.tsx';
 

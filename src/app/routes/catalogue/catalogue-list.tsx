@@ -1,4 +1,5 @@
 import { useEffect, useState } from 'react';
+import { type CatalogueQuery, useSkyObjects } from '@/api/catalogue-objects.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Link, useNavigate, useSearchParams } from 'react-router-dom';
 import { KIND_LABELS, SKY_OBJECT_KINDS } from '@shared/catalogue/kinds.ts';
@@ -9,10 +10,11 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useSkyObjects, type CatalogueQuery } from '@/features/catalogue/api/objects.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';
+import { searchParams } from '@/lib/query-string.ts';
+import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
 
 const MISSING_LABELS: Record<(typeof MISSING_FILTERS)[number], string> = {
   any_preferred: 'No preferred value at all',
@@ -42,10 +44,8 @@ function useCatalogueQuery(): [CatalogueQuery, (patch: Partial<CatalogueQuery>) 
   };
   // Any change but "next page" drops the keyset cursor (it belongs to one filter, sort and page).
   const update = (patch: Partial<CatalogueQuery>) => {
-    const next = { ...query, page: 1, after: undefined, ...patch };
-    const search = new URLSearchParams();
-    for (const [k, v] of Object.entries(next)) if (v !== undefined && v !== '' && k !== 'pageSize') search.set(k, String(v));
-    setParams(search, { replace: true });
+    // The page size is fixed, so the URL leaves it out.
+    setParams(searchParams({ ...query, page: 1, after: undefined, ...patch, pageSize: undefined }), { replace: true });
   };
   return [query, update];
 }
@@ -60,12 +60,10 @@ export function Component() {
   const keeper = user.role === 'reviewer' || user.role === 'admin';
 
   // Searching waits for a pause in typing rather than asking the server at every key.
+  const settledSearch = useDebouncedValue(search, 300);
   useEffect(() => {
-    const timer = setTimeout(() => {
-      if ((query.q ?? '') !== search) update({ q: search || undefined });
-    }, 300);
-    return () => clearTimeout(timer);
-  });
+    if ((query.q ?? '') !== settledSearch) update({ q: settledSearch || undefined });
+  }, [query.q, settledSearch, update]);
 
   return (
     <>

@@ -1,3 +1,5 @@
+import { useSkyObject } from '@/api/catalogue-objects.ts';
+import { useMeasurementHistory, useMeasurements } from '@/api/measurements.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { Link, useParams } from 'react-router-dom';
 import { KIND_LABELS } from '@shared/catalogue/kinds.ts';
@@ -6,8 +8,6 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useMeasurementHistory, useMeasurements } from '@/features/catalogue/api/measurements.ts';
-import { useSkyObject } from '@/features/catalogue/api/objects.ts';
 import { constellationName, formatPosition } from '@/features/catalogue/components/format.ts';
 import { HistoryList } from '@/features/catalogue/components/history-list.tsx';
 import { ObjectStatements } from '@/features/statements/components/object-statements.tsx';

@@ -1,10 +1,10 @@
 import { useState } from 'react';
 import type { SourceDto } from '@shared/schemas/source.ts';
+import { useSources } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useSources } from '@/features/catalogue/api/sources.ts';
 import { SourceForm } from '@/features/catalogue/components/source-form.tsx';
 import { SourcesTable } from '@/features/catalogue/components/sources-table.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';

@@ -2,15 +2,16 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useRef } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { PageDto } from '@shared/schemas/page.ts';
+import { useSubmitPage } from '@/api/page-workflow.ts';
+import { pageKeys, usePage } from '@/api/pages.ts';
+import { useSettings } from '@/api/settings.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
-import { pageQueryOptions, usePage, useSubmitPage } from '@/features/pages/api/pages.ts';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
-import { useSettings } from '@/features/settings/api/settings.ts';
 
 /** The editor screen (the only route that loads the editor). */
 export function Component() {
@@ -20,10 +21,7 @@ export function Component() {
   const queryClient = useQueryClient();
   const submit = useSubmitPage(id);
   const workspace = useRef<WorkspaceHandle | null>(null);
-  const onSaved = useCallback(
-    (saved: PageDto) => queryClient.setQueryData(pageQueryOptions(id).queryKey, saved),
-    [queryClient, id],
-  );
+  const onSaved = useCallback((saved: PageDto) => queryClient.setQueryData(pageKeys.detail(id), saved), [queryClient, id]);
 
   if (page.isPending || settings.isPending) return <p className="text-sm text-muted">Loading page…</p>;
   // A failed refresh must not unmount the editor and the text in it.

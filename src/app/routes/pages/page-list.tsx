@@ -1,4 +1,6 @@
 import { useState } from 'react';
+import { type PageFilters, usePages } from '@/api/pages.ts';
+import { useSettings } from '@/api/settings.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { PAGE_STATUSES, PAGE_STATUS_LABELS, type PageStatus } from '@shared/schemas/page.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
@@ -7,10 +9,8 @@ import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { usePages, type PageFilters } from '@/features/pages/api/pages.ts';
 import { NewPageForm } from '@/features/pages/components/new-page-form.tsx';
 import { PagesTable } from '@/features/pages/components/pages-table.tsx';
-import { useSettings } from '@/features/settings/api/settings.ts';
 import { useCurrentUser } from '@/lib/auth.tsx';
 
 /** Every page the viewer may see, filtered by status, writer and title; and "New page". */

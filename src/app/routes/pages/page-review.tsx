@@ -1,20 +1,12 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { useResolveFlag, useSendBack, useSignOffPage, useSignOffStatement } from '@/api/page-workflow.ts';
+import { useApprovalProblems, usePage, usePreview, usePublished } from '@/api/pages.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import {
-  useApprovalProblems,
-  usePage,
-  usePreview,
-  usePublished,
-  useResolveFlag,
-  useSendBack,
-  useSignOffPage,
-  useSignOffStatement,
-} from '@/features/pages/api/pages.ts';
 import { PageComments } from '@/features/pages/components/page-comments.tsx';
 import { PageHtml } from '@/features/pages/components/page-html.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';

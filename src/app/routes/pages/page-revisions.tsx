@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { useRestoreRevision, useRevisionDiff, useRevisions } from '@/api/page-revisions.ts';
+import { usePage } from '@/api/pages.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { usePage, useRestoreRevision, useRevisionDiff, useRevisions } from '@/features/pages/api/pages.ts';
 import { RevisionDiff } from '@/features/pages/components/revision-diff.tsx';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Every saved version, a readable diff between any two, and restoring one as a new revision. */
 export function Component() {
@@ -67,7 +67,7 @@ export function Component() {
                 <tr key={r.id} className="border-t border-rule align-top">
                   <td className="px-3 py-2 tabular-nums">{r.number}</td>
                   <td className="px-3 py-2">
-                    <span className="block">{when.format(new Date(r.createdAt))}</span>
+                    <span className="block">{formatDateTime(r.createdAt)}</span>
                     <span className="block text-xs text-muted">
                       {r.author ?? 'Former staff'}
                       {r.restoredFrom ? ` · restored from ${r.restoredFrom}` : ''}

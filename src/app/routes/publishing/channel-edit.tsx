@@ -1,10 +1,5 @@
 import { useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
-import { Button } from '@/components/ui/button.tsx';
-import { TextField } from '@/components/ui/field.tsx';
-import { Notice } from '@/components/ui/notice.tsx';
-import { PageHeader } from '@/components/ui/page-header.tsx';
-import { paths } from '@/config/paths.ts';
 import {
   useAddSlide,
   useAssignScreens,
@@ -14,7 +9,12 @@ import {
   useRenameChannel,
   useReorderSlides,
   useUpdateSlide,
-} from '@/features/publishing/api/channels.ts';
+} from '@/api/channels.ts';
+import { Button } from '@/components/ui/button.tsx';
+import { TextField } from '@/components/ui/field.tsx';
+import { Notice } from '@/components/ui/notice.tsx';
+import { PageHeader } from '@/components/ui/page-header.tsx';
+import { paths } from '@/config/paths.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';

@@ -1,3 +1,5 @@
+import { useChannels } from '@/api/channels.ts';
+import { useVenues } from '@/api/venues.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
@@ -5,10 +7,8 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useChannels } from '@/features/publishing/api/channels.ts';
 import { ChannelCreateForm } from '@/features/publishing/components/channel-create-form.tsx';
 import { ChannelsTable } from '@/features/publishing/components/channels-table.tsx';
-import { useVenues } from '@/features/venues/api/venues.ts';
 
 /** The new-channel form with the venues to choose from; mounted only while adding, so they load then. */
 function NewChannel({ onCancel }: { onCancel: () => void }) {

@@ -1,6 +1,7 @@
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import { useSettings } from '@/api/settings.ts';
 import { useAcceptStatement, useRecomputeStatement, useStatement } from '@/api/statements.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { nightDate, venueClock } from '@/components/statements/venue-night.ts';
@@ -10,15 +11,13 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { formatSig } from '@/components/working/format-number.ts';
 import { WorkingSteps } from '@/components/working/working-steps.tsx';
 import { paths } from '@/config/paths.ts';
-import { useSettings } from '@/features/settings/api/settings.ts';
 import { StatementInputs } from '@/features/statements/components/statement-inputs.tsx';
 import { StatementTexts } from '@/features/statements/components/statement-texts.tsx';
+import { formatDateTime } from '@/lib/format-date.ts';
 
 const DistanceRedshiftChart = lazy(() =>
   import('@/features/charts/distance-redshift-chart.tsx').then((m) => ({ default: m.DistanceRedshiftChart })),
 );
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 /** The other models a reviewer compares against: the simple Hubble law and the other preset. */
 function alternativesTo(model: CalcModel, H0: number): CalcModel[] {
@@ -57,7 +56,7 @@ export function Component() {
             <Link to={paths.catalogueObject.href(s.object.id)} className="text-accent hover:underline">
               {s.object.name}
             </Link>
-            {s.venue && <> · for {s.venue.name}</>} · computed {when.format(new Date(s.computedAt))}
+            {s.venue && <> · for {s.venue.name}</>} · computed {formatDateTime(s.computedAt)}
           </>
         }
         actions={

@@ -1,12 +1,12 @@
 import { useSearchParams } from 'react-router-dom';
 import { STATEMENT_STATUS_LABELS, STATEMENT_STATUSES, type StatementStatusValue } from '@shared/schemas/statement.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
+import { useSettings } from '@/api/settings.ts';
 import { useStatements, useStatementTemplates } from '@/api/statements.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useSettings } from '@/features/settings/api/settings.ts';
 import { StatementsTable } from '@/features/statements/components/statements-table.tsx';
 
 /** Every checked statement, those needing attention first; filter by status, template and object. */

@@ -1,9 +1,9 @@
+import { useVenue } from '@/api/venues.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useParams } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
-import { useVenue } from '@/features/venues/api/venues.ts';
 import { ScreensPanel } from '@/features/venues/components/screens-panel.tsx';
 import { SkyTonightPanel } from '@/features/venues/components/sky-tonight-panel.tsx';
 import { VenueForm } from '@/features/venues/components/venue-form.tsx';

@@ -1,3 +1,4 @@
+import { useVenues } from '@/api/venues.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
 import { useNavigate } from 'react-router-dom';
 import { Button } from '@/components/ui/button.tsx';
@@ -5,7 +6,6 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
-import { useVenues } from '@/features/venues/api/venues.ts';
 import { VenueForm } from '@/features/venues/components/venue-form.tsx';
 import { VenuesTable } from '@/features/venues/components/venues-table.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';

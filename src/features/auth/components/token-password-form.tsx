@@ -4,11 +4,11 @@ import { useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { z } from 'zod';
 import { NewPasswordSchema } from '@shared/schemas/auth.ts';
+import { useCompleteWithToken } from '@/api/auth.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCompleteWithToken } from '../api/passwords.ts';
 
 const FormSchema = z
   .object({ newPassword: NewPasswordSchema, confirm: z.string() })

@@ -58,6 +58,3 @@ export function sourceHref(source: { doi: string | null; bibcode: string | null;
   if (source.bibcode) return `https://ui.adsabs.harvard.edu/abs/${encodeURIComponent(source.bibcode)}`;
   return source.url;
 }
-
-const dateTime = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
-export const formatDateTime = (iso: string) => dateTime.format(new Date(iso));

@@ -1,6 +1,7 @@
 import { findQuantity } from '@shared/catalogue/quantities.ts';
 import type { MeasurementDto, MeasurementHistoryDto } from '@shared/schemas/measurement.ts';
-import { formatDateTime, formatMeasurement, formatNumber } from './format.ts';
+import { formatMeasurement, formatNumber } from './format.ts';
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** How each action reads: before and after the measurement it is about. */
 const ACTIONS: Record<string, [string, string]> = {

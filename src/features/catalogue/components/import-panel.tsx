@@ -1,8 +1,8 @@
 import { useState } from 'react';
 import { IMPORT_FIELD_LABELS, IMPORT_FIELDS, type ImportDto, type ImportMapping } from '@shared/schemas/catalogue-import.ts';
+import { useCommitImport, useDryRunImport } from '@/api/imports.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useCommitImport, useDryRunImport } from '../api/imports.ts';
 import { ImportReport } from './import-report.tsx';
 
 /**

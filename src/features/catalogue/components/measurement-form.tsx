@@ -4,12 +4,12 @@ import { useForm, type Resolver } from 'react-hook-form';
 import { KNOWN_BANDS } from '@shared/catalogue/bands.ts';
 import { findQuantity, QUANTITIES, QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
 import { MeasurementInputSchema, type MeasurementFormValues, type MeasurementValues } from '@shared/schemas/measurement.ts';
+import { useAddMeasurement } from '@/api/measurements.ts';
+import { useSources } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useAddMeasurement } from '../api/measurements.ts';
-import { useSources } from '../api/sources.ts';
 
 const FIELDS = [
   'quantity',

@@ -1,10 +1,11 @@
 import { useState } from 'react';
 import type { MeasurementDto } from '@shared/schemas/measurement.ts';
+import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '@/api/measurements.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '../api/measurements.ts';
-import { formatDateTime, formatMeasurement, quantityTitle, sourceHref } from './format.ts';
+import { formatMeasurement, quantityTitle, sourceHref } from './format.ts';
+import { formatDateTime } from '@/lib/format-date.ts';
 
 function Status({ m }: { m: MeasurementDto }) {
   if (m.retired)

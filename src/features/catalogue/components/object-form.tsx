@@ -8,11 +8,11 @@ import {
   type SkyObjectFormValues,
   type SkyObjectValues,
 } from '@shared/schemas/sky-object.ts';
+import { useCreateSkyObject, useUpdateSkyObject } from '@/api/catalogue-objects.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateSkyObject, useUpdateSkyObject } from '../api/objects.ts';
 
 const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
   name: object?.name ?? '',

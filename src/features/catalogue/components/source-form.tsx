@@ -2,11 +2,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { SourceInputSchema, type SourceDto, type SourceValues } from '@shared/schemas/source.ts';
+import { useCreateSource, useUpdateSource } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateSource, useUpdateSource } from '../api/sources.ts';
 
 interface FormValues {
   citation: string;

@@ -1,11 +1,12 @@
 import { useEffect, useRef, useState } from 'react';
 import type { MediaDetailDto } from '@shared/media/schemas.ts';
+import { useDeleteMedia, useMedia, useRetryRenditions } from '@/api/media.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useDeleteMedia, useMedia, useRetryRenditions } from '../api/media.ts';
 import { MediaDetailsForm } from './media-details-form.tsx';
 import { MediaStatus } from './media-status.tsx';
+import { pickRendition } from '@/lib/renditions.ts';
 
 const sizeFormat = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
 const bytesText = (b: number) =>
@@ -51,7 +52,7 @@ export function MediaDetailPanel({ id, onClose }: { id: string; onClose: () => v
 }
 
 function PanelBody({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => void }) {
-  const page = media.renditions.find((r) => r.name === 'page' && r.format === 'webp') ?? null;
+  const page = pickRendition(media.renditions, 'page');
   const retry = useRetryRenditions();
   return (
     <>

@@ -8,11 +8,11 @@ import {
   type MediaDetailDto,
   type MediaDetailsFormInput,
 } from '@shared/media/schemas.ts';
+import { useUpdateMedia } from '@/api/media.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useUpdateMedia } from '../api/media.ts';
 import { FocalPointPicker } from './focal-point-picker.tsx';
 import { ObjectPicker } from './object-picker.tsx';
 

@@ -1,7 +1,8 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useMemo, useState } from 'react';
 import { LICENCES } from '@shared/media/licences.ts';
 import type { MediaListQuery } from '@shared/media/schemas.ts';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
+import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
 
 type SearchIn = 'q' | 'object' | 'credit';
 
@@ -10,10 +11,12 @@ export function MediaFilters({ onChange }: { onChange: (query: MediaListQuery) =
   const [text, setText] = useState('');
   const [searchIn, setSearchIn] = useState<SearchIn>('q');
   const [licence, setLicence] = useState<MediaListQuery['licence'] | ''>('');
-  useEffect(() => {
-    const timer = setTimeout(() => onChange({ [searchIn]: text.trim() || undefined, licence: licence || undefined }), 250);
-    return () => clearTimeout(timer);
-  }, [text, searchIn, licence, onChange]);
+  const query = useMemo(
+    (): MediaListQuery => ({ [searchIn]: text.trim() || undefined, licence: licence || undefined }),
+    [text, searchIn, licence],
+  );
+  const settledQuery = useDebouncedValue(query, 250);
+  useEffect(() => onChange(settledQuery), [settledQuery, onChange]);
   return (
     <div role="search" className="grid gap-3 sm:grid-cols-[1fr_11rem_16rem]">
       <TextField

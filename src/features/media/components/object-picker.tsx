@@ -1,6 +1,6 @@
 import { useState } from 'react';
+import { useObjectSuggestions } from '@/api/media.ts';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useObjectSuggestions } from '../api/media.ts';
 
 type Obj = { id: string; name: string };
 

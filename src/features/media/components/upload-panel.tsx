@@ -1,8 +1,8 @@
 import { useRef, useState, type DragEvent } from 'react';
 import { ACCEPT_ATTRIBUTE, ACCEPTED_IMAGE_TYPES } from '@shared/media/limits.ts';
+import { uploadMedia } from '@/api/media-upload.ts';
+import { useRefreshMedia } from '@/api/media.ts';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useRefreshMedia } from '../api/media.ts';
-import { uploadMedia } from '../api/upload-media.ts';
 
 interface UploadItem {
   key: string;

@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
+import { useDashboard, useSetDigest } from '@/api/pages.ts';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useDashboard, useSetDigest } from '../api/pages.ts';
 import { PageStatusBadge } from './page-status-badge.tsx';
 import { pageHref } from './pages-table.tsx';
 

@@ -1,6 +1,6 @@
 import { useState } from 'react';
+import { useMediaSearch } from '@/api/media.ts';
 import { Button } from '@/components/ui/button.tsx';
-import { useMediaSearch } from '../api/pages.ts';
 
 /** Chooses an image from the media library (images are uploaded there, with their credits). */
 export function MediaPicker({ onPick, onClose }: { onPick: (mediaId: string) => void; onClose: () => void }) {

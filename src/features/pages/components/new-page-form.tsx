@@ -3,11 +3,11 @@ import { Controller, useForm } from 'react-hook-form';
 import { useNavigate } from 'react-router-dom';
 import { PageCreateSchema, type PageCreateInput } from '@shared/schemas/page.ts';
 import { LOCALE_LABELS, STATEMENT_LOCALES } from '@shared/statements/locales.ts';
+import { useCreatePage } from '@/api/pages.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
-import { useCreatePage } from '../api/pages.ts';
 import { ObjectPicker } from './object-picker.tsx';
 
 /**

@@ -1,5 +1,5 @@
 import { useId, useState } from 'react';
-import { useObjectSearch } from '../api/pages.ts';
+import { useObjectSearch } from '@/api/catalogue-objects.ts';
 
 /**
  * Picks a catalogue object by name or designation; shows the first twenty matches.

@@ -1,9 +1,8 @@
 import { useState } from 'react';
+import { useAddComment, useComments } from '@/api/page-comments.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useAddComment, useComments } from '../api/pages.ts';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** The conversation on a page, oldest first, each comment with the revision it was about. */
 export function PageComments({ pageId, canComment }: { pageId: string; canComment: boolean }) {
@@ -20,7 +19,7 @@ export function PageComments({ pageId, canComment }: { pageId: string; canCommen
           <li key={c.id} className="rounded-md border border-rule bg-panel px-3 py-2 text-sm">
             <p className="whitespace-pre-wrap">{c.body}</p>
             <p className="mt-1 text-xs text-muted">
-              {c.author ?? 'Former staff'} · {when.format(new Date(c.createdAt))}
+              {c.author ?? 'Former staff'} · {formatDateTime(c.createdAt)}
               {c.revisionNumber ? ` · on revision ${c.revisionNumber}` : ''}
             </p>
           </li>

@@ -3,8 +3,7 @@ import type { PageRow } from '@shared/schemas/page.ts';
 import { paths } from '@/config/paths.ts';
 import { PageStatusBadge } from './page-status-badge.tsx';
 import { DataTable } from '@/components/ui/data-table.tsx';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Where a row's title leads: reviewers and editors usually want the review view. */
 export const pageHref = (row: PageRow) =>
@@ -39,7 +38,7 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
             <PageStatusBadge status={row.status} />
           </td>
           <td className="px-4 py-2 text-muted">{row.writer.name}</td>
-          <td className="px-4 py-2 text-right tabular-nums text-muted">{when.format(new Date(row.updatedAt))}</td>
+          <td className="px-4 py-2 text-right tabular-nums text-muted">{formatDateTime(row.updatedAt)}</td>
         </tr>
       ))}
     </DataTable>

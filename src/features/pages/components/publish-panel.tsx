@@ -1,10 +1,9 @@
 import { useState } from 'react';
 import type { PageDto } from '@shared/schemas/page.ts';
+import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-workflow.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { usePublishPage, useSchedulePage, useUnpublishPage } from '../api/pages.ts';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** For editors: publish the approved version now or at a time, or take the live version down. */
 export function PublishPanel({ page }: { page: PageDto }) {
@@ -22,14 +21,12 @@ export function PublishPanel({ page }: { page: PageDto }) {
       {page.published ? (
         <p className="text-sm">
           Live: revision {page.published.revisionNumber}
-          {page.published.at ? `, published ${when.format(new Date(page.published.at))}` : ''}.
+          {page.published.at ? `, published ${formatDateTime(page.published.at)}` : ''}.
         </p>
       ) : (
         <p className="text-sm text-muted">Nothing of this page is live.</p>
       )}
-      {page.scheduledPublishAt && (
-        <p className="text-sm">Scheduled to go live {when.format(new Date(page.scheduledPublishAt))}.</p>
-      )}
+      {page.scheduledPublishAt && <p className="text-sm">Scheduled to go live {formatDateTime(page.scheduledPublishAt)}.</p>}
       <div className="flex flex-wrap gap-2">
         {page.can.publish && (
           <Button busy={publish.isPending} onClick={() => publish.mutate()}>

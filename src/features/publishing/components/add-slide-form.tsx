@@ -2,10 +2,10 @@ import { useState } from 'react';
 import type { SlideCreateInput, SlideKind } from '@shared/schemas/channel.ts';
 import { SLIDE_KIND_LABELS, SLIDE_KINDS } from '@shared/schemas/channel.ts';
 import { ChannelLimits } from '@shared/validations.ts';
+import { useSlideSources } from '@/api/channels.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useSlideSources } from '../api/channels.ts';
 
 /** Adds a slide at the end: a published page with chosen statements, a credited image, or the sky tonight. */
 export function AddSlideForm({

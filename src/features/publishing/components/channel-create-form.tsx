@@ -2,11 +2,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { ChannelCreateSchema, type ChannelCreateInput, type ChannelDetailDto } from '@shared/schemas/channel.ts';
 import type { VenueDto } from '@shared/schemas/venue.ts';
+import { useCreateChannel } from '@/api/channels.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateChannel } from '../api/channels.ts';
 
 /**
  * A new, empty channel at one of the venues. Focus starts in its first field, since the button

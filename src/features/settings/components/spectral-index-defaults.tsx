@@ -3,7 +3,7 @@ import type { SettingsDto, SpectralIndexDefaults } from '@shared/schemas/setting
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useUpdateSettings } from '../api/settings.ts';
+import { useUpdateSettings } from '@/api/settings.ts';
 
 /** The kinds met at redshifts where the K-correction matters (stars and nebulae are never that far). */
 const KINDS = [

@@ -5,8 +5,7 @@ import { StatementStatusBadge } from '@/components/statements/statement-status-b
 import { venueNightText } from '@/components/statements/venue-night.ts';
 import { DataTable } from '@/components/ui/data-table.tsx';
 import { paths } from '@/config/paths.ts';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Statements with their public text, dense but calm; each row opens the statement. */
 export function StatementsTable({ statements, locale }: { statements: StatementDto[]; locale: StatementLocale }) {
@@ -30,7 +29,7 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
           <td className="px-4 py-2.5">
             <StatementStatusBadge status={s.status} />
           </td>
-          <td className="whitespace-nowrap px-4 py-2.5 text-muted">{when.format(new Date(s.computedAt))}</td>
+          <td className="whitespace-nowrap px-4 py-2.5 text-muted">{formatDateTime(s.computedAt)}</td>
         </tr>
       ))}
     </DataTable>

@@ -3,11 +3,11 @@ import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { ROLE_DESCRIPTIONS, ROLE_LABELS, ROLES } from '@shared/roles.ts';
 import { UserInviteSchema, type UserInviteInput } from '@shared/schemas/user.ts';
+import { useInviteUser } from '@/api/users.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useInviteUser } from '../api/users.ts';
 
 /** Invites a member of staff by e-mail with a role. Focus starts in its first field, since the button that opened it is gone. */
 export function InviteUserForm({ onDone }: { onDone: () => void }) {

@@ -1,11 +1,10 @@
 import { ROLE_LABELS, ROLES, type Role } from '@shared/roles.ts';
 import type { UserDto } from '@shared/schemas/user.ts';
+import { useResendInvitation, useUpdateUser } from '@/api/users.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { DataTable } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
-import { useResendInvitation, useUpdateUser } from '../api/users.ts';
-
-const dateFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 function Status({ user }: { user: UserDto }) {
   if (!user.active)
@@ -78,7 +77,7 @@ export function UsersTable({ users }: { users: UserDto[] }) {
           <td className="px-4 py-2">
             <Status user={user} />
           </td>
-          <td className="px-4 py-2 text-muted">{user.lastSignInAt ? dateFormat.format(new Date(user.lastSignInAt)) : '—'}</td>
+          <td className="px-4 py-2 text-muted">{user.lastSignInAt ? formatDateTime(user.lastSignInAt) : '—'}</td>
           <td className="px-4 py-2 text-right">
             <div className="flex justify-end gap-2">
               {user.invitationPending && user.active && (

@@ -1,7 +1,6 @@
 import type { KioskScreenDto } from '@shared/schemas/kiosk.ts';
 import { Icon } from '@/components/ui/icon.tsx';
-
-const when = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
+import { formatDateTime } from '@/lib/format-date.ts';
 
 /** A screen's health in words with an icon (never colour alone). */
 export function ScreenHealth({ screen }: { screen: KioskScreenDto }) {
@@ -17,7 +16,7 @@ export function ScreenHealth({ screen }: { screen: KioskScreenDto }) {
       return (
         <span className="inline-flex items-center gap-1.5 text-broken">
           <Icon name="alert" className="size-4" />
-          Offline since {when.format(new Date(screen.lastSeenAt!))}
+          Offline since {formatDateTime(screen.lastSeenAt!)}
         </span>
       );
     case 'never-seen':
@@ -39,7 +38,7 @@ export function ScreenHealth({ screen }: { screen: KioskScreenDto }) {
         <span className="inline-flex items-center gap-1.5 text-neutral">
           <Icon name="key" className="size-4" />
           {screen.pairingExpiresAt
-            ? `Waiting for pairing (code valid until ${when.format(new Date(screen.pairingExpiresAt))})`
+            ? `Waiting for pairing (code valid until ${formatDateTime(screen.pairingExpiresAt)})`
             : 'Not paired'}
         </span>
       );

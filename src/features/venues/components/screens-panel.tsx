@@ -1,15 +1,14 @@
 import { useState, type FormEvent } from 'react';
 import type { KioskScreenDto, PairingCodeDto } from '@shared/schemas/kiosk.ts';
+import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { ApiRequestError } from '@/lib/api-client.ts';
-import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '../api/screens.ts';
 import { ModalDialog } from './modal-dialog.tsx';
 import { ScreenHealth } from './screen-health.tsx';
-
-const time = new Intl.DateTimeFormat(undefined, { timeStyle: 'short' });
+import { formatTime } from '@/lib/format-date.ts';
 
 function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onClose: () => void }) {
   return (
@@ -17,7 +16,7 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
       {pairing && (
         <>
           <p className="text-sm text-muted">
-            Type this code on the screen’s player page. It works once, until {time.format(new Date(pairing.expiresAt))}.
+            Type this code on the screen’s player page. It works once, until {formatTime(pairing.expiresAt)}.
           </p>
           <p
             className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums"

@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import type { SkyTonight } from '@shared/sky/types.ts';
+import { useSky } from '@/api/sky.ts';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { useSky } from '../api/sky.ts';
 import { formatAltitude, formatKm } from './sky-format.ts';
 import { SkyPlanetsTable } from './sky-planets-table.tsx';
+import { formatDateTime } from '@/lib/format-date.ts';
 
 const percent = new Intl.NumberFormat(undefined, { style: 'percent', maximumFractionDigits: 0 });
-const computedFormat = new Intl.DateTimeFormat(undefined, { dateStyle: 'medium', timeStyle: 'short' });
 
 function Row({ label, value }: { label: string; value: string }) {
   return (
@@ -114,7 +114,7 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
           <SkyPlanetsTable planets={data.planets} atTime={data.observation.localTime ?? ''} />
           <p className="text-xs text-muted">
             {sky.data!.stored
-              ? `Computed ${computedFormat.format(new Date(sky.data!.computedAt))}; recomputed daily and whenever the venue moves.`
+              ? `Computed ${formatDateTime(sky.data!.computedAt)}; recomputed daily and whenever the venue moves.`
               : 'Computed for the chosen time; not stored.'}{' '}
             {data.method.notes.join(' ')} Distances along the light’s path, with 1 au = 149,597,870.7 km.
           </p>

@@ -2,11 +2,11 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useMemo, useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { VenueCreateSchema, type VenueCreateInput, type VenueCreateValues, type VenueDto } from '@shared/schemas/venue.ts';
+import { useCreateVenue, useUpdateVenue } from '@/api/venues.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-import { useCreateVenue, useUpdateVenue } from '../api/venues.ts';
 
 const FIELDS = ['name', 'latitude', 'longitude', 'elevationM', 'timeZone'] as const;
 

@@ -1,7 +1,9 @@
+/** Catalogue imports from CSV: a dry run of a file, then committing it. */
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ImportDto, ImportMapping } from '@shared/schemas/catalogue-import.ts';
 import type { ApiError } from '@shared/schemas/common.ts';
-import { api, ApiRequestError, type ApiData } from '@/lib/api-client.ts';
+import { api, ApiRequestError, errorFromAnswer, type ApiData } from '@/lib/api-client.ts';
+import { catalogueKeys } from './catalogue-objects.ts';
 
 /**
  * Sends a file for a dry run. The shared client speaks JSON only, so this one call builds its own
@@ -23,14 +25,7 @@ async function uploadForDryRun(file: File, mapping?: ImportMapping): Promise<Imp
     throw new ApiRequestError(0, 'network_error', 'Starproof cannot be reached. Check the connection; nothing was imported.');
   }
   const payload = (await response.json().catch(() => undefined)) as (ApiError & ApiData<ImportDto>) | undefined;
-  if (!response.ok || !payload?.data) {
-    throw new ApiRequestError(
-      response.status,
-      payload?.error?.code ?? 'http_error',
-      payload?.error?.message ?? `The server answered ${response.status}.`,
-      payload?.error?.fields,
-    );
-  }
+  if (!response.ok || !payload?.data) throw errorFromAnswer(response.status, payload);
   return payload.data;
 }
 
@@ -43,6 +38,6 @@ export function useCommitImport() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: async (id: string) => (await api.post<ApiData<ImportDto>>(`/catalogue/imports/${id}/commit`)).data,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ['catalogue'] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogueKeys.all }),
   });
 }

@@ -1,3 +1,4 @@
+/** The calculator: one quantity computed on the server, with its working. */
 import { useMutation, type UseMutationOptions } from '@tanstack/react-query';
 import type { CalcRequest, CalcSuccess } from '@shared/schemas/calc.ts';
 import { api, type ApiData, type ApiRequestError } from '@/lib/api-client.ts';

@@ -1,6 +1,7 @@
+/** Uploading an image to the library, with progress. */
 import type { MediaDto } from '@shared/media/schemas.ts';
 import type { ApiError } from '@shared/schemas/common.ts';
-import { ApiRequestError } from '@/lib/api-client.ts';
+import { ApiRequestError, errorFromAnswer } from '@/lib/api-client.ts';
 
 /**
  * Uploads one image as multipart form data with XMLHttpRequest, because fetch cannot report
@@ -25,15 +26,7 @@ export function uploadMedia(file: File, onProgress: (fraction: number) => void, 
         resolve(body.data);
         return;
       }
-      const error = body?.error;
-      reject(
-        new ApiRequestError(
-          xhr.status,
-          error?.code ?? 'http_error',
-          error?.message ?? `The server answered ${xhr.status}.`,
-          error?.fields,
-        ),
-      );
+      reject(errorFromAnswer(xhr.status, body));
     };
     xhr.onerror = () =>
       reject(new ApiRequestError(0, 'network_error', 'The upload was interrupted. Check the connection and try again.'));

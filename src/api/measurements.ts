@@ -1,3 +1,4 @@
+/** An object's measurements and their history: adding, editing, choosing the preferred one, review, retiring. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
   MeasurementDto,
@@ -6,21 +7,25 @@ import type {
   MeasurementReviewInput,
 } from '@shared/schemas/measurement.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
+import { queryString } from '@/lib/query-string.ts';
+import { catalogueKeys } from './catalogue-objects.ts';
 
 export const measurementsQueryOptions = (objectId: string) =>
   queryOptions({
-    queryKey: ['catalogue', 'object', objectId, 'measurements'],
+    queryKey: catalogueKeys.measurements(objectId),
     queryFn: async () => (await api.get<ApiData<MeasurementDto[]>>(`/catalogue/objects/${objectId}/measurements`)).data,
   });
 
+/** The object's measurements. */
 export const useMeasurements = (objectId: string) => useQuery(measurementsQueryOptions(objectId));
 
 export const historyQueryOptions = (objectId: string) =>
   queryOptions({
-    queryKey: ['catalogue', 'object', objectId, 'history'],
+    queryKey: catalogueKeys.history(objectId),
     queryFn: async () => (await api.get<ApiData<MeasurementHistoryDto[]>>(`/catalogue/objects/${objectId}/history`)).data,
   });
 
+/** What happened to the object's measurements, newest first. */
 export const useMeasurementHistory = (objectId: string) => useQuery(historyQueryOptions(objectId));
 
 /** After any change, the object's measurements, its history and the table's counts are stale. */
@@ -28,11 +33,12 @@ function useRefresh(objectId: string) {
   const queryClient = useQueryClient();
   return () =>
     Promise.all([
-      queryClient.invalidateQueries({ queryKey: ['catalogue', 'object', objectId] }),
-      queryClient.invalidateQueries({ queryKey: ['catalogue', 'objects'] }),
+      queryClient.invalidateQueries({ queryKey: catalogueKeys.object(objectId) }),
+      queryClient.invalidateQueries({ queryKey: catalogueKeys.objectLists() }),
     ]);
 }
 
+/** Adds a measurement to the object. */
 export function useAddMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
@@ -42,15 +48,7 @@ export function useAddMeasurement(objectId: string) {
   });
 }
 
-export function useUpdateMeasurement(objectId: string) {
-  const refresh = useRefresh(objectId);
-  return useMutation({
-    mutationFn: async ({ id, ...input }: MeasurementInput & { id: string; reason?: string }) =>
-      (await api.patch<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}`, input)).data,
-    onSuccess: refresh,
-  });
-}
-
+/** Chooses (or stops choosing) a measurement as the one statements use. */
 export function useSetPreferred(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
@@ -61,6 +59,7 @@ export function useSetPreferred(objectId: string) {
   });
 }
 
+/** Accepts or declines a measurement waiting for review. */
 export function useReviewMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
@@ -70,11 +69,12 @@ export function useReviewMeasurement(objectId: string) {
   });
 }
 
+/** Retires a measurement with a reason; it stays in the history. */
 export function useRetireMeasurement(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
     mutationFn: async ({ id, reason }: { id: string; reason: string }) =>
-      (await api.delete<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}?reason=${encodeURIComponent(reason)}`)).data,
+      (await api.delete<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}${queryString({ reason })}`)).data,
     onSettled: refresh,
   });
 }
