@@ -22,9 +22,11 @@ export function moonTonight(ephemeris: Ephemeris, observer: Observer, night: Nig
   const track: Trackable = {
     placeAt: (jde) => {
       const p = ephemeris.moon(jde);
-      return { raDeg: p.ra / DEG, decDeg: p.dec / DEG };
+      return { raDeg: p.ra / DEG, decDeg: p.dec / DEG, parallaxDeg: parallaxDegAt(ephemeris, jde) };
     },
-    h0Deg: (jd0) => moonStandardAltitude(parallaxDegAt(ephemeris, jd0)),
+    h0Deg: (place) => moonStandardAltitude(place.parallaxDeg!),
+    // The Moon moves about 13° a day: places every six hours keep the interpolation under 0.001°.
+    gridDays: 0.25,
   };
   const events = eventsInWindow(observer, night.startMs, night.endMs, track);
   const midH0 = moonStandardAltitude(parallaxDegAt(ephemeris, night.obsJde));
