@@ -177,7 +177,7 @@ function maximise(g: (ms: number) => number, lo: number, hi: number): { ms: numb
 }
 
 /** Which altitude is crossed: the body's own standard altitude, or a fixed one (twilight). */
-type Threshold = number | 'own';
+export type Threshold = number | 'own';
 
 /**
  * A body's altitude over a window (plus a margin either side), sampled once; the crossings of any
@@ -212,7 +212,8 @@ export class BodyPath {
     return s.altitudeDeg - (threshold === 'own' ? s.ownH0Deg : threshold);
   }
 
-  private offsetAt(ms: number, threshold: Threshold): number {
+  /** Altitude less the altitude crossed at any instant (degrees), e.g. for a rate of change. */
+  offsetAt(ms: number, threshold: Threshold = 'own'): number {
     return this.offset(sampleAt(this.observer, this.body, ms), threshold);
   }
 
@@ -309,10 +310,9 @@ export class BodyPath {
 
   /** Lowest and highest altitude inside the window (sampled ends and refined extremes). */
   range(): { lowest: { ms: number; altitudeDeg: number }; highest: { ms: number; altitudeDeg: number } } {
-    const candidates = [
-      ...this.samples.filter((s) => s.ms >= this.startMs && s.ms < this.endMs),
-      ...this.events(0).extremes,
-    ].map((s) => ({ ms: s.ms, altitudeDeg: s.altitudeDeg }));
+    const candidates = [...this.samples.filter((s) => s.ms >= this.startMs && s.ms < this.endMs), ...this.events(0).extremes].map(
+      (s) => ({ ms: s.ms, altitudeDeg: s.altitudeDeg }),
+    );
     const lowest = candidates.reduce((a, b) => (b.altitudeDeg < a.altitudeDeg ? b : a));
     const highest = candidates.reduce((a, b) => (b.altitudeDeg > a.altitudeDeg ? b : a));
     return { lowest, highest };

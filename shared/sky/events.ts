@@ -112,7 +112,9 @@ export function riseTransitSetTimes(
   };
   const missNote = (kind: Graze['kind']) => {
     const graze = visit.misses?.find((g) => g.kind === kind);
-    return graze ? ` It ${lowerFirst(missWords(graze, timeZone, localDate)).replace(/^does not (rise|set): /, '')} without ${kind === 'highest' ? 'rising' : 'setting'}.` : '';
+    return graze
+      ? ` It ${lowerFirst(missWords(graze, timeZone, localDate)).replace(/^does not (rise|set): /, '')} without ${kind === 'highest' ? 'rising' : 'setting'}.`
+      : '';
   };
   if (state === 'always-up') {
     const words = 'Does not set: above the horizon all day and night (circumpolar)';

@@ -97,7 +97,11 @@ function darkness(
       ...base,
     };
   if (low < STANDARD_ALTITUDE.sun)
-    return { kind: 'twilight-all-night', text: `Twilight all night: the Sun stays less than 6° below the horizon.${onlyJust}`, ...base };
+    return {
+      kind: 'twilight-all-night',
+      text: `Twilight all night: the Sun stays less than 6° below the horizon.${onlyJust}`,
+      ...base,
+    };
   return { kind: 'no-night', text: 'The Sun does not set tonight (midnight sun).', ...base };
 }
 
@@ -145,7 +149,8 @@ export function sunNight(
     if (ms !== null) {
       const graze = c.grazing.get(ms);
       const side = graze?.kind === 'lowest' ? 'lower' : 'higher';
-      const words = graze && `only just: the Sun gets at most ${grazeDegrees(graze)} ${side} than ${where(h0)}, at ${clock(graze.ms)}`;
+      const words =
+        graze && `only just: the Sun gets at most ${grazeDegrees(graze)} ${side} than ${where(h0)}, at ${clock(graze.ms)}`;
       return skyEvent(ms, timeZone, localDate, '', graze && words ? { graze, words } : null);
     }
     // A near miss on the side this event would cross: lowest for an evening or morning twilight

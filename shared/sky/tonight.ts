@@ -141,15 +141,20 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   };
 }
 
-function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, night: NightContext): PlanetTonight {
-  const h0 = STANDARD_ALTITUDE.planet;
-  const track: Trackable = {
+/** A planet as a trackable body, with the standard altitude −0°34′. */
+export function planetTrack(id: PlanetId, ephemeris: Ephemeris): Trackable {
+  return {
     placeAt: (jde) => {
       const p = ephemeris.planet(id, jde);
       return { raDeg: p.ra / DEG, decDeg: p.dec / DEG };
     },
-    h0Deg: () => h0,
+    h0Deg: () => STANDARD_ALTITUDE.planet,
   };
+}
+
+function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, night: NightContext): PlanetTonight {
+  const h0 = STANDARD_ALTITUDE.planet;
+  const track = planetTrack(id, ephemeris);
   const events = eventsInWindow(observer, night.startMs, night.endMs, track);
   const state = horizonState(events, altitudeAt(observer, night.midMs, track).altitudeDeg, h0);
   const now = ephemeris.planet(id, night.obsJde);
