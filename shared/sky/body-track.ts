@@ -5,8 +5,9 @@
  * side of the altitude crossed is refined by bisection until the bracket is under a second. Whether
  * a body crosses is never decided from one declination.
  */
+import { apparent as apparentSidereal, mean as meanSidereal } from 'astronomia/sidereal';
 import { DEG, wrap180 } from './angles.ts';
-import { greenwichSiderealDeg, toHorizontal, type Observer } from './horizon.ts';
+import { toHorizontal, type Observer } from './horizon.ts';
 import { deltaTSeconds, jdFromMs } from './time.ts';
 
 /** Apparent right ascension and declination in degrees, and the horizontal parallax where it matters (the Moon). */
@@ -122,10 +123,28 @@ interface Sample {
   hourAngleDeg: number;
 }
 
+const equationOfEquinoxes = new Map<number, number>();
+
+/**
+ * Apparent sidereal time at Greenwich in degrees: the mean time (IAU 1982) plus the nutation in
+ * right ascension taken once per day (it changes by under 0.01 s of time in a day), so the many
+ * altitude samples of a night do not each evaluate the nutation series.
+ */
+function siderealDeg(jd: number): number {
+  const day = Math.floor(jd);
+  let eq = equationOfEquinoxes.get(day);
+  if (eq === undefined) {
+    eq = wrap180((apparentSidereal(day) - meanSidereal(day)) / 240);
+    if (equationOfEquinoxes.size > 10_000) equationOfEquinoxes.clear();
+    equationOfEquinoxes.set(day, eq);
+  }
+  return meanSidereal(jd) / 240 + eq;
+}
+
 function sampleAt(observer: Observer, body: Trackable, ms: number): Sample {
   const jd = jdFromMs(ms);
   const place = placeAtInstant(body, jd);
-  const hourAngleDeg = wrap180(greenwichSiderealDeg(jd) + observer.longitude - place.raDeg);
+  const hourAngleDeg = wrap180(siderealDeg(jd) + observer.longitude - place.raDeg);
   const lat = observer.latitude * DEG;
   const dec = place.decDeg * DEG;
   const sinAlt = Math.sin(lat) * Math.sin(dec) + Math.cos(lat) * Math.cos(dec) * Math.cos(hourAngleDeg * DEG);

@@ -144,20 +144,23 @@ export function sunNight(
     }
     return `No ${name} ${evening ? 'this evening' : 'before noon tomorrow'}`;
   };
-  const where = (h0: number) => (h0 === STANDARD_ALTITUDE.sun ? 'the horizon' : below(h0));
+  const sunAltitude = (g: Graze) => `${Math.abs(g.altitudeDeg).toFixed(2)}° ${g.altitudeDeg < 0 ? 'below' : 'above'} the horizon`;
   const ev = (c: Crossing, ms: number | null, h0: number, evening: boolean, name: string): SkyEvent => {
+    const isSun = h0 === STANDARD_ALTITUDE.sun;
     if (ms !== null) {
       const graze = c.grazing.get(ms);
-      const side = graze?.kind === 'lowest' ? 'lower' : 'higher';
-      const words =
-        graze && `only just: the Sun gets at most ${grazeDegrees(graze)} ${side} than ${where(h0)}, at ${clock(graze.ms)}`;
-      return skyEvent(ms, timeZone, localDate, '', graze && words ? { graze, words } : null);
+      if (!graze) return skyEvent(ms, timeZone, localDate, '');
+      const words = isSun
+        ? `only just: the Sun’s upper edge ${graze.kind === 'lowest' ? 'dips' : 'rises'} at most ${grazeDegrees(graze)} ${graze.kind === 'lowest' ? 'below' : 'above'} the horizon, at ${clock(graze.ms)}`
+        : `only just: the Sun is ${graze.kind} ${sunAltitude(graze)}, at ${clock(graze.ms)}`;
+      return skyEvent(ms, timeZone, localDate, '', { graze, words });
     }
-    // A near miss on the side this event would cross: lowest for an evening or morning twilight
-    // that never comes (the Sun stays just above), highest where the Sun stays just below.
+    // A near miss: the Sun comes within the margin of the altitude (from either side) and turns back.
     const miss = c.miss;
     if (miss) {
-      const words = `No ${name}: the Sun comes within ${grazeDegrees(miss)} of ${where(h0)} at ${clock(miss.ms)} but does not get ${miss.kind === 'lowest' ? 'lower' : 'higher'}`;
+      const words = isSun
+        ? `No ${name}: the Sun’s upper edge comes within ${grazeDegrees(miss)} of the horizon at ${clock(miss.ms)} but does not ${miss.kind === 'lowest' ? 'set' : 'rise'}`
+        : `No ${name}: the Sun is ${miss.kind} ${sunAltitude(miss)} at ${clock(miss.ms)}, within ${grazeDegrees(miss)} of ${-h0}°`;
       return skyEvent(null, timeZone, localDate, words, { graze: miss, words: '' });
     }
     return skyEvent(null, timeZone, localDate, missing(h0, evening, name));
