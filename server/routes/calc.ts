@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
-import { calculate } from '@shared/engine/index.ts';
+import { answer } from '@shared/contract/calculate.ts';
 import { HttpError } from '../errors.ts';
 import { requireUser } from '../middlewares/authenticate.ts';
 
@@ -20,7 +20,7 @@ calcRouter.post(
       next(new HttpError(429, 'too_many_requests', 'Too many calculations in a minute. Wait a moment and try again.')),
   }),
   (req, res) => {
-    const result = calculate(req.body);
+    const result = answer(req.body);
     if ('error' in result) {
       res.status(400).json({ error: result.error, ...(result.id !== undefined ? { id: result.id } : {}) });
       return;

@@ -5,6 +5,7 @@
 import type { core } from 'zod';
 import {
   CALC_QUANTITIES,
+  CONTRACT_QUANTITIES,
   CalcRequestSchema,
   CustomModelSchema,
   HubbleLawModelSchema,
@@ -65,10 +66,10 @@ function describe(issue: core.$ZodIssue, raw: unknown, prefix: PropertyKey[] = [
 export function parseRequest(raw: unknown): CalcRequest {
   if (!isRecord(raw)) throw new CalcError('invalid_request', `the request must be a JSON object (got ${shown(raw)})`);
   if (raw.quantity === undefined) {
-    throw new CalcError('missing_input', `quantity is required: one of ${CALC_QUANTITIES.join(', ')}`);
+    throw new CalcError('missing_input', `quantity is required: one of ${CONTRACT_QUANTITIES.join(', ')}`);
   }
   if (typeof raw.quantity !== 'string' || !(CALC_QUANTITIES as readonly string[]).includes(raw.quantity)) {
-    throw new CalcError('unknown_quantity', `quantity ${shown(raw.quantity)} is not one of ${CALC_QUANTITIES.join(', ')}`);
+    throw new CalcError('unknown_quantity', `quantity ${shown(raw.quantity)} is not one of ${CONTRACT_QUANTITIES.join(', ')}`);
   }
   if (raw.model !== undefined) {
     const m = raw.model;

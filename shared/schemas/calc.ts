@@ -4,6 +4,7 @@
  * (zod's number rejects NaN and ±Infinity); the engine adds the domain checks.
  */
 import { z } from 'zod';
+import { SkyTonightSchema } from './sky-tonight.ts';
 
 /** Every quantity the engine computes, in the order a user interface may list them. */
 export const CALC_QUANTITIES = [
@@ -170,3 +171,43 @@ export const CalcResultSchema = z.union([CalcSuccessSchema, CalcFailureSchema]);
 export type CalcResult = z.infer<typeof CalcResultSchema>;
 export type CalcSuccess = z.infer<typeof CalcSuccessSchema>;
 export type CalcFailure = z.infer<typeof CalcFailureSchema>;
+
+/** The sky tonight: a quantity of its own, whose inputs are a place and a night rather than measurements. */
+export const SKY_TONIGHT = 'sky_tonight' as const;
+
+/** Every quantity the contract answers: the engine's and the sky tonight. */
+export const CONTRACT_QUANTITIES = [...CALC_QUANTITIES, SKY_TONIGHT] as const;
+
+/**
+ * Inputs of `sky_tonight`: where (degrees, east longitude positive; metres above sea level, 0 when
+ * omitted), the IANA time zone, and the evening's local date. Ranges are checked by the sky code,
+ * which says what is wrong in words.
+ */
+export const SkyTonightInputsSchema = z.strictObject({
+  latitude: finite,
+  longitude: finite,
+  elevation_m: finite.optional(),
+  time_zone: z.string().max(64),
+  night: z.string().max(10),
+});
+export type SkyTonightInputs = z.infer<typeof SkyTonightInputsSchema>;
+
+/** A `sky_tonight` request (no model: the sky does not depend on a cosmology). */
+export const SkyTonightRequestSchema = z.strictObject({
+  id: z.union([z.string().max(200), z.number()]).optional(),
+  quantity: z.literal(SKY_TONIGHT),
+  inputs: SkyTonightInputsSchema,
+});
+export type SkyTonightRequest = z.infer<typeof SkyTonightRequestSchema>;
+
+/** A `sky_tonight` result: the same data as a venue's sky for that night. */
+export const SkyTonightSuccessSchema = z.object({
+  id: z.union([z.string(), z.number()]).optional(),
+  quantity: z.literal(SKY_TONIGHT),
+  sky: SkyTonightSchema,
+});
+export type SkyTonightSuccess = z.infer<typeof SkyTonightSuccessSchema>;
+
+/** Any answer of the contract: an engine result, the sky tonight, or a failure. */
+export const ContractResultSchema = z.union([CalcSuccessSchema, SkyTonightSuccessSchema, CalcFailureSchema]);
+export type ContractResult = z.infer<typeof ContractResultSchema>;

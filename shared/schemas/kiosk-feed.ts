@@ -37,7 +37,7 @@ export interface FeedSky {
   time_zone: string;
   venue_name: string;
   sunset: string;
-  /** End of astronomical twilight, or why there is none tonight. */
+  /** When it is fully dark, as a phrase: "fully dark from 18:05", "fully dark only just, from …", "no full darkness tonight". */
   dark_from: string;
   darkness: string;
   moon: { phase: string; illuminated_percent: number; rise: string; set: string };

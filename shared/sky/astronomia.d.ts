@@ -73,6 +73,8 @@ declare module 'astronomia/sidereal' {
   export function apparent(jd: number): number;
   /** Apparent sidereal time at Greenwich at 0h UT of the given day, in seconds of time. */
   export function apparent0UT(jd: number): number;
+  /** Mean sidereal time at Greenwich (IAU 1982), in seconds of time [0, 86400). */
+  export function mean(jd: number): number;
 }
 
 declare module 'astronomia/solar' {

@@ -14,18 +14,25 @@ import type { MoonTonight } from './types.ts';
 /** The Moon's equatorial horizontal parallax in degrees at a Julian Ephemeris Day. */
 const parallaxDegAt = (ephemeris: Ephemeris, jde: number) => parallax(ephemeris.moon(jde).distanceAu * KM_PER_AU) / DEG;
 
+/** The Moon as a trackable body: h0 = 0.7275π − 0°34′ with the parallax at each instant. */
+export function moonTrack(ephemeris: Ephemeris): Trackable {
+  return {
+    placeAt: (jde) => {
+      const p = ephemeris.moon(jde);
+      return { raDeg: p.ra / DEG, decDeg: p.dec / DEG, parallaxDeg: parallaxDegAt(ephemeris, jde) };
+    },
+    h0Deg: (place) => moonStandardAltitude(place.parallaxDeg!),
+    // The Moon moves about 13° a day: places every six hours keep the interpolation under 0.001°.
+    gridDays: 0.25,
+  };
+}
+
 /**
  * The Moon's night. Rise and set use h0 = 0.7275π − 0°34′ with the day's parallax; the altitude
  * shown is topocentric (the Moon's parallax lowers it by up to a degree).
  */
 export function moonTonight(ephemeris: Ephemeris, observer: Observer, night: NightContext): MoonTonight {
-  const track: Trackable = {
-    placeAt: (jde) => {
-      const p = ephemeris.moon(jde);
-      return { raDeg: p.ra / DEG, decDeg: p.dec / DEG };
-    },
-    h0Deg: (jd0) => moonStandardAltitude(parallaxDegAt(ephemeris, jd0)),
-  };
+  const track = moonTrack(ephemeris);
   const events = eventsInWindow(observer, night.startMs, night.endMs, track);
   const midH0 = moonStandardAltitude(parallaxDegAt(ephemeris, night.obsJde));
   const state = horizonState(events, altitudeAt(observer, night.midMs, track).altitudeDeg, midH0);

@@ -3,7 +3,7 @@
  * times from two different stays are never shown side by side (a planet up at noon sets in the
  * afternoon, before the rise that matters tonight).
  */
-import { eventsInWindow, type Trackable, type WindowEvents } from './body-track.ts';
+import { eventsInWindow, type Graze, type Trackable, type WindowEvents } from './body-track.ts';
 import type { Observer } from './horizon.ts';
 
 /** One stay above the horizon, as instants (ms), plus the end of a stay that was already under way. */
@@ -22,6 +22,10 @@ export interface NightVisit {
   transitsKnown: boolean;
   /** How far the set was looked for (local noon the day after the window ends). */
   searchedToMs: number;
+  /** Crossings (ms) that only just happen, and the graze that makes them so. */
+  grazing?: Map<number, Graze>;
+  /** Near misses inside the window: comes within the margin of rising (highest) or setting (lowest) without doing so. */
+  misses?: Graze[];
 }
 
 /** The stretch searched: the night's noon-to-noon window, and how far beyond it a stay is followed. */
@@ -45,7 +49,12 @@ export interface VisitSearch {
  * @param events what eventsInWindow found in the window
  */
 export function nightVisit(observer: Observer, search: VisitSearch, body: Trackable, events: WindowEvents): NightVisit {
-  const known = { transitsKnown: events.transits.length > 0, searchedToMs: search.followingEndMs };
+  const known = {
+    transitsKnown: events.transits.length > 0,
+    searchedToMs: search.followingEndMs,
+    grazing: new Map(events.grazingCrossings),
+    misses: events.grazes.filter((g) => !g.crosses && g.ms >= search.startMs && g.ms < search.endMs),
+  };
   const rise = events.rises[0] ?? null;
   const firstSet = events.sets[0] ?? null;
   const upAtNoonTillDark =
@@ -58,6 +67,7 @@ export function nightVisit(observer: Observer, search: VisitSearch, body: Tracka
   // Only a stay that outlasts the window needs the next day's events.
   if (!sets.some((t) => t > rise)) {
     const later = eventsInWindow(observer, search.endMs, search.followingEndMs, body);
+    for (const [ms, graze] of later.grazingCrossings) known.grazing.set(ms, graze);
     sets = [...sets, ...later.sets];
     transits = [...transits, ...later.transits];
   }

@@ -2,8 +2,12 @@
  * Rising, transit and setting for one Universal Time day (Meeus, Astronomical Algorithms, 2nd ed.,
  * ch. 15), from the body's apparent right ascension and declination at 0h TD on the day before,
  * the day itself and the day after. Unlike the book's single correction, the corrections are
- * repeated until they settle, which the Moon needs; right ascension is unwrapped across 0h/24h
- * before interpolating.
+ * repeated until they settle (a correction that has not settled after MAX_PASSES is an error, never
+ * a result); right ascension is unwrapped across 0h/24h before interpolating.
+ *
+ * The book's method decides from the declination at 0h whether the body crosses at all, which is
+ * wrong for a body that only just crosses or misses: the sky tonight finds its crossings from the
+ * altitude itself (body-track.ts). This function stays as the book gives it, for its worked example.
  */
 import { DEG, wrap180 } from './angles.ts';
 
@@ -88,7 +92,8 @@ export function riseTransitSet(input: DayInput): DayEvents {
   };
 
   let transit = m0;
-  for (let pass = 0; pass < MAX_PASSES; pass += 1) {
+  for (let pass = 0; ; pass += 1) {
+    if (pass === MAX_PASSES) throw new Error('Meeus ch. 15: the transit correction did not settle');
     const dm = -at(transit).hourAngle / 360;
     transit += dm;
     if (Math.abs(dm) < SETTLED) break;
@@ -102,7 +107,8 @@ export function riseTransitSet(input: DayInput): DayEvents {
 
   const refine = (start: number) => {
     let m = start;
-    for (let pass = 0; pass < MAX_PASSES; pass += 1) {
+    for (let pass = 0; ; pass += 1) {
+      if (pass === MAX_PASSES) throw new Error('Meeus ch. 15: the rising or setting correction did not settle');
       const { delta, hourAngle } = at(m);
       const H = hourAngle * DEG;
       const h = Math.asin(Math.sin(lat) * Math.sin(delta) + Math.cos(lat) * Math.cos(delta) * Math.cos(H));

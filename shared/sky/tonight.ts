@@ -126,7 +126,9 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
         'VSOP87 (Bretagnon & Francou 1988) for the planets and the Sun; Meeus ch. 47 (ELP-2000/82 terms) for the Moon; via astronomia 4.2.0',
       algorithms: [
         'Apparent places: light time, aberration, FK5 correction and nutation (Meeus ch. 22, 23, 32, 33)',
-        'Rising, transit and setting: Meeus ch. 15 with standard altitudes −0°34′ (planets), −0°50′ (Sun), 0.7275π − 0°34′ (Moon)',
+        'Rising, setting and twilight: the altitude itself, sampled every 10 minutes, highest and lowest points placed between samples, each crossing refined by bisection to under 1 s; standard altitudes (Meeus ch. 15) −0°34′ (planets), −0°50′ (Sun), 0.7275π − 0°34′ (Moon), and −6°, −12°, −18° for the twilights',
+        'Grazing: a body whose highest or lowest point comes within 0.1° of the altitude crosses or misses it only just, and is marked "grazes" with how close it comes',
+        'Transit: the hour angle passing through zero, refined the same way',
         'Moon illumination and phase angle: Meeus ch. 48',
         'Distances in kilometres with the IAU 2012 astronomical unit; light time with the defined speed of light',
       ],
@@ -139,15 +141,20 @@ export function computeSkyTonight(request: SkyRequest, options: SkyOptions = {})
   };
 }
 
-function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, night: NightContext): PlanetTonight {
-  const h0 = STANDARD_ALTITUDE.planet;
-  const track: Trackable = {
+/** A planet as a trackable body, with the standard altitude −0°34′. */
+export function planetTrack(id: PlanetId, ephemeris: Ephemeris): Trackable {
+  return {
     placeAt: (jde) => {
       const p = ephemeris.planet(id, jde);
       return { raDeg: p.ra / DEG, decDeg: p.dec / DEG };
     },
-    h0Deg: () => h0,
+    h0Deg: () => STANDARD_ALTITUDE.planet,
   };
+}
+
+function planetTonight(id: PlanetId, ephemeris: Ephemeris, observer: Observer, night: NightContext): PlanetTonight {
+  const h0 = STANDARD_ALTITUDE.planet;
+  const track = planetTrack(id, ephemeris);
   const events = eventsInWindow(observer, night.startMs, night.endMs, track);
   const state = horizonState(events, altitudeAt(observer, night.midMs, track).altitudeDeg, h0);
   const now = ephemeris.planet(id, night.obsJde);

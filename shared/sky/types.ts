@@ -6,16 +6,43 @@
 import type { CompassPoint } from './angles.ts';
 import type { PlanetId } from './bodies.ts';
 
+/**
+ * Whether an event happens: "occurs" (a clear crossing), "none", or "grazes": the body's highest or
+ * lowest point comes within GRAZE_MARGIN_DEG (0.1°) of the altitude, so it crosses only just (the
+ * time is given) or misses only just (no time). Refraction at the horizon changes by more than that
+ * from night to night, so a grazing event is never promised as a plain time.
+ */
+export type EventState = 'occurs' | 'grazes' | 'none';
+
+/** How close a grazing body comes: its highest or lowest point near the altitude. */
+export interface GrazeNote {
+  /** Whether it gets past the altitude at all (then by less than the margin). */
+  crosses: boolean;
+  /** The body's highest or lowest point near the altitude: when (UTC and venue clock). */
+  closestUtc: string;
+  closestLocalTime: string;
+  /** Degrees past the altitude there (positive) or short of it (negative), to 0.01°. */
+  pastDeg: number;
+  /** The margin that counts as grazing, degrees. */
+  marginDeg: number;
+}
+
 /** A moment in the night, or the words for why there is none. */
 export interface SkyEvent {
+  /** "occurs", "grazes" (within 0.1°: crossed or missed only just) or "none". */
+  state: EventState;
   /** ISO 8601 instant in UTC, or null when it does not happen in the window. */
   utc: string | null;
+  /** The same instant on the venue's clock as ISO 8601 with its UTC offset, to the second, or null. */
+  local: string | null;
   /** Local date "YYYY-MM-DD" at the venue, or null. */
   localDate: string | null;
   /** Local clock time "HH:MM" at the venue, or null. */
   localTime: string | null;
   /** For a person: "21:14", "04:52 tomorrow", or why there is no time. */
   text: string;
+  /** For a grazing event: how close the body comes; otherwise null. */
+  graze: GrazeNote | null;
 }
 
 /** Which side of the horizon a body keeps during the window. */
@@ -102,7 +129,8 @@ export interface SunTonight {
   astronomicalDawn: SkyEvent;
   nauticalDawn: SkyEvent;
   civilDawn: SkyEvent;
-  darkness: { kind: DarknessKind; text: string };
+  /** How dark the night gets; `grazes` when the Sun's lowest point is within 0.1° of a twilight's altitude. */
+  darkness: { kind: DarknessKind; text: string; grazes: boolean; lowestSunAltitudeDeg: number };
 }
 
 /** The moment the positions are given for. */
@@ -115,8 +143,10 @@ export interface Observation extends SkyEvent {
 /**
  * Version 2: rise, transit and set come from one stay above the horizon (earlierSet added); visibility
  * names a set before dawn. Version 3: a body up at noon and still up at sunset keeps tonight's stay.
+ * Version 4: crossings found from the altitude itself; events carry a state ("occurs", "grazes",
+ * "none"), a local ISO time and how close a grazing body comes.
  */
-export const SKY_VERSION = 3;
+export const SKY_VERSION = 4;
 
 /** Everything the sky-tonight panel and slide show. */
 export interface SkyTonight {

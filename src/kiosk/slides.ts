@@ -77,7 +77,7 @@ function skyTable(sky: FeedSky): HTMLElement {
     h(
       'p',
       { class: 'sky-summary' },
-      `Sunset ${sky.sunset} · Dark from ${sky.dark_from} · Moon ${sky.moon.phase.toLowerCase()}, ${sky.moon.illuminated_percent}% lit`,
+      `Sunset ${sky.sunset} · ${sky.dark_from.charAt(0).toUpperCase()}${sky.dark_from.slice(1)} · Moon ${sky.moon.phase.toLowerCase()}, ${sky.moon.illuminated_percent}% lit`,
     ),
     up.length
       ? h('table', {}, h('thead', {}, head), h('tbody', {}, ...rows))

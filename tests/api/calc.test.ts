@@ -1,6 +1,6 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { CalcSuccessSchema } from '../../shared/schemas/calc.ts';
+import { CalcSuccessSchema, SkyTonightSuccessSchema } from '../../shared/schemas/calc.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 
 let agent: Awaited<ReturnType<typeof signedInAgent>>['agent'];
@@ -22,14 +22,12 @@ describe('POST /api/calc', () => {
   });
 
   it('computes a preset quantity with its working, model and interval, and echoes the id', async () => {
-    const res = await agent
-      .post('/api/calc')
-      .send({
-        id: 'quasar-7',
-        quantity: 'lookback_time',
-        inputs: { z: { value: 1.5, sigma: 0.01 } },
-        model: { preset: 'planck18' },
-      });
+    const res = await agent.post('/api/calc').send({
+      id: 'quasar-7',
+      quantity: 'lookback_time',
+      inputs: { z: { value: 1.5, sigma: 0.01 } },
+      model: { preset: 'planck18' },
+    });
     expect(res.status).toBe(200);
     const data = CalcSuccessSchema.parse(res.body.data);
     expect(data.id).toBe('quasar-7');
@@ -115,5 +113,34 @@ describe('POST /api/calc', () => {
     expect(res.status).toBe(400);
     expect(res.body.error).toEqual({ code: 'malformed_json', message: expect.stringMatching(/not valid JSON/) as string });
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts:\d+/);
+  });
+});
+
+describe('POST /api/calc with sky_tonight', () => {
+  const inputs = { latitude: 54.62, longitude: -2.95, elevation_m: 160, time_zone: 'Europe/London', night: '2026-11-20' };
+
+  it('returns the sky for the place and night, with events in UTC and local time', async () => {
+    const res = await agent.post('/api/calc').send({ id: 'corrie', quantity: 'sky_tonight', inputs });
+    expect(res.status).toBe(200);
+    const data = SkyTonightSuccessSchema.parse(res.body.data);
+    expect(data.id).toBe('corrie');
+    expect(data.sky.localDate).toBe('2026-11-20');
+    expect(data.sky.sun.sunset).toMatchObject({
+      state: 'occurs',
+      local: expect.stringMatching(/^2026-11-20T1\d:\d\d:\d\d\+00:00$/),
+    });
+    expect(data.sky.planets).toHaveLength(7);
+  });
+
+  it.each([
+    [{ ...inputs, time_zone: 'Europe/Atlantis' }, 'invalid_input', /^time_zone: "Europe\/Atlantis" is not a time zone/],
+    [{ ...inputs, latitude: 91 }, 'out_of_range', /^latitude: Latitude must be .* \(got 91\)$/],
+    [{ ...inputs, night: '2026-13-01' }, 'invalid_input', /^night: The date must be a real calendar date/],
+  ])('refuses %j with a 400 naming the input', async (bad, code, message) => {
+    const res = await agent.post('/api/calc').send({ id: 'x', quantity: 'sky_tonight', inputs: bad });
+    expect(res.status).toBe(400);
+    expect(res.body.id).toBe('x');
+    expect(res.body.error.code).toBe(code);
+    expect(res.body.error.message).toMatch(message);
   });
 });

@@ -1,4 +1,5 @@
 import type { FeedSky } from '@shared/schemas/kiosk-feed.ts';
+import { clockText } from '@shared/sky/events.ts';
 import type { SkyTonight } from '@shared/sky/types.ts';
 import { escapeMarkup } from './feed-text.ts';
 
@@ -21,6 +22,18 @@ export function lightTimeText(seconds: number): string {
 }
 
 /**
+ * When the sky is fully dark (astronomical twilight ends), as a phrase that stands on its own:
+ * "fully dark from 18:05", "fully dark only just, from 00:41 tomorrow" (the Sun's lowest point within
+ * 0.1° of −18°), or "no full darkness tonight".
+ */
+export function darkFrom(sky: SkyTonight): string {
+  const dusk = sky.sun.astronomicalDusk;
+  if (dusk.utc === null) return sky.sun.darkness.kind === 'dark-all-day' ? 'dark all day' : 'no full darkness tonight';
+  const when = clockText(Date.parse(dusk.utc), sky.timeZone, sky.localDate);
+  return dusk.state === 'grazes' ? `fully dark only just, from ${when}` : `fully dark from ${when}`;
+}
+
+/**
  * The sky tonight as a kiosk slide shows it: words and local times only, planets that are up after
  * dusk first (then the rest, marked), figures as the sky snapshot computed them.
  * @param sky the stored snapshot's data
@@ -33,7 +46,7 @@ export function feedSky(sky: SkyTonight, computedAt: Date, venueName: string): F
     time_zone: sky.timeZone,
     venue_name: venueName,
     sunset: sky.sun.sunset.text,
-    dark_from: sky.sun.astronomicalDusk.text,
+    dark_from: darkFrom(sky),
     darkness: sky.sun.darkness.text,
     moon: {
       phase: sky.moon.phaseName,
@@ -67,7 +80,7 @@ export function skyHtml(sky: FeedSky): string {
     )
     .join('');
   return (
-    `<p>Sunset ${e(sky.sunset)}. Dark from ${e(sky.dark_from)}. Moon: ${e(sky.moon.phase)}, ${sky.moon.illuminated_percent}% lit.</p>` +
+    `<p>Sunset ${e(sky.sunset)}. ${e(sky.dark_from.charAt(0).toUpperCase() + sky.dark_from.slice(1))}. Moon: ${e(sky.moon.phase)}, ${sky.moon.illuminated_percent}% lit.</p>` +
     `<table><thead><tr><th scope="col">Planet</th><th scope="col">Up between dusk and dawn</th><th scope="col">Rises</th><th scope="col">Highest</th><th scope="col">Sets</th><th scope="col">Distance</th><th scope="col">Light takes</th></tr></thead><tbody>${rows}</tbody></table>`
   );
 }

@@ -46,10 +46,13 @@ describe('polar cases are said in words', () => {
     const sky = computeSkyTonight({ ...base, latitude: 90, timeZone: 'UTC', localDate: '2026-06-21' });
     assertFinite(sky);
     expect(sky.sun.sunset).toEqual({
+      state: 'none',
       utc: null,
+      local: null,
       localDate: null,
       localTime: null,
       text: 'The Sun does not set tonight (midnight sun)',
+      graze: null,
     });
     expect(sky.sun.darkness.kind).toBe('no-night');
     expect(sky.observation.basis).toBe('sun-lowest');

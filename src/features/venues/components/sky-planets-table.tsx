@@ -3,11 +3,18 @@ import { DataTable, type DataColumn } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { formatAltitude, formatAu, formatKm, formatLightTime } from './sky-format.ts';
 
-/** A time, or the words for why there is none; `note` adds a line of context beneath. */
+/**
+ * A time, or the words for why there is none; `note` adds a line of context beneath. A time that
+ * only just happens (state "grazes") shows the time, with the "only just" words beneath it.
+ */
 function EventCell({ event, note }: { event: SkyEvent; note?: string }) {
+  const split = event.state === 'grazes' && event.utc ? event.text.indexOf(' (only just') : -1;
+  const main = split > 0 ? event.text.slice(0, split) : event.text;
+  const grazing = split > 0 ? event.text.slice(split + 2, -1) : null;
   return (
     <td className={`px-3 py-2 ${event.utc ? 'tabular-nums' : 'text-xs text-muted'}`}>
-      {event.text}
+      {main}
+      {grazing && <span className="block text-xs text-muted">{grazing}</span>}
       {note && <span className="block text-xs text-muted">{note}</span>}
     </td>
   );
