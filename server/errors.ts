@@ -1,3 +1,5 @@
+import type { z } from 'zod';
+
 /** An error with an HTTP status, a stable snake_case code and a message a person understands. */
 export class HttpError extends Error {
   constructor(
@@ -17,3 +19,15 @@ export const AuthorizationError = (message = 'Your role does not allow this.') =
 export const NotFoundError = (message = 'Not found.') => new HttpError(404, 'not_found', message);
 export const ConflictError = (message: string, code = 'conflict') => new HttpError(409, code, message);
 export const TooManyRequestsError = (message: string) => new HttpError(429, 'too_many_requests', message);
+
+/** Turns zod issues into the error shape: the first message, and one message per field. */
+export function zodToValidationError(error: z.ZodError): HttpError {
+  const fields: Record<string, string> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.join('.') || '_';
+    fields[key] ??= issue.message;
+  }
+  const [first] = error.issues;
+  const where = first?.path.length ? `${first.path.join('.')}: ` : '';
+  return ValidationError(`${where}${first?.message ?? 'Invalid input'}`, fields);
+}

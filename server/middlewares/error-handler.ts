@@ -8,10 +8,9 @@ import {
   TimeoutError,
 } from 'sequelize';
 import { ZodError } from 'zod';
-import { HttpError, NotFoundError } from '../errors.ts';
+import { HttpError, NotFoundError, zodToValidationError } from '../errors.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { logger } from '../logger.ts';
-import { zodToValidationError } from './validate.ts';
 
 /** Unknown paths under /api answer in JSON, never with the client's HTML. */
 export const apiNotFound: RequestHandler = (req, _res, next) => {

@@ -1,15 +1,6 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import {
-  ChangePasswordSchema,
-  RequestPasswordResetSchema,
-  SignInSchema,
-  TokenPasswordSchema,
-  type ChangePasswordInput,
-  type RequestPasswordResetInput,
-  type SignInInput,
-  type TokenPasswordInput,
-} from '@shared/schemas/auth.ts';
+import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPasswordSchema } from '@shared/schemas/auth.ts';
 import { TokenLifetimes } from '@shared/validations.ts';
 import { getSequelize } from '../db.ts';
 import { HttpError } from '../errors.ts';
@@ -55,7 +46,7 @@ authRouter.get('/me', requireUser, (req, res) => {
 });
 
 authRouter.post('/sign-in', addressLimiter(30), validate(SignInSchema), async (req, res) => {
-  const { email, password } = req.body as SignInInput;
+  const { email, password } = req.body;
   const user = await signIn(email, password, req.ip);
   await startSession(req, user);
   res.json({ data: presentSessionUser(user) });
@@ -72,7 +63,7 @@ authRouter.post('/sign-out', async (req, res) => {
 
 authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async (req, res) => {
   const user = currentUser(req);
-  const { currentPassword, newPassword } = req.body as ChangePasswordInput;
+  const { currentPassword, newPassword } = req.body;
   if (!(await verifyPassword(currentPassword, user.passwordHash))) {
     throw new HttpError(400, 'wrong_password', 'currentPassword: Your current password is not right.', {
       currentPassword: 'Your current password is not right.',
@@ -93,7 +84,7 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
 });
 
 authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordResetSchema), async (req, res) => {
-  const { email } = req.body as RequestPasswordResetInput;
+  const { email } = req.body;
   const user = await User.findOne({ where: { email, active: true } });
   if (user?.passwordHash) {
     const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000);
@@ -113,7 +104,7 @@ authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordR
 /** Shared by invitation acceptance and password reset: consume the token, set the password, sign in. */
 function completeWithToken(purpose: 'invitation' | 'password_reset') {
   return async (req: Request, res: import('express').Response) => {
-    const { token, newPassword } = req.body as TokenPasswordInput;
+    const { token, newPassword } = req.body;
     const user = await getSequelize().transaction(async (transaction) => {
       const found = await consumeToken(token, purpose, transaction);
       assertAcceptablePassword(newPassword, found.email);

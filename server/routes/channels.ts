@@ -8,18 +8,12 @@ import {
   SlideCreateSchema,
   SlideOrderSchema,
   SlideUpdateSchema,
-  type ChannelCreateInput,
-  type ChannelScreensInput,
-  type ChannelUpdateInput,
-  type SlideCreateInput,
-  type SlideOrderInput,
-  type SlideUpdateInput,
 } from '@shared/schemas/channel.ts';
 import { IdSchema } from '@shared/schemas/common.ts';
 import { getSequelize } from '../db.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { sendCached } from '../middlewares/http-cache.ts';
-import { validate } from '../middlewares/validate.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
 import { Channel } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentChannelDetail, presentChannelRows } from '../presenters/channel.ts';
@@ -53,10 +47,10 @@ const params = (p: unknown) => p as { id: string; slideId: string };
 export const channelsRouter = Router();
 channelsRouter.use(requireUser);
 
-channelsRouter.get('/', validate(ChannelListQuerySchema, 'query'), async (req, res) => {
+channelsRouter.get('/', validateQuery(ChannelListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'channel', 'list');
-  const { venueId } = req.query as { venueId?: string };
+  const { venueId } = req.query;
   const channels = await Channel.findAll({ where: venueId ? { venueId } : {}, order: [['name', 'ASC']] });
   res.json({ data: await presentChannelRows(channels) });
 });
@@ -64,7 +58,7 @@ channelsRouter.get('/', validate(ChannelListQuerySchema, 'query'), async (req, r
 channelsRouter.post('/', validate(ChannelCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'channel', 'create');
-  const channel = await createChannel(req.body as ChannelCreateInput, viewer, req.ip);
+  const channel = await createChannel(req.body, viewer, req.ip);
   res.status(201).json({ data: await presentChannelDetail(channel, viewer) });
 });
 
@@ -85,7 +79,7 @@ channelsRouter.patch('/:id', validate(ChannelUpdateSchema), async (req, res) => 
   const viewer = currentUser(req);
   const channel = await findChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
-  const updated = await updateChannel(channel, req.body as ChannelUpdateInput, viewer, req.ip);
+  const updated = await updateChannel(channel, req.body, viewer, req.ip);
   res.json({ data: await presentChannelDetail(updated, viewer) });
 });
 
@@ -101,7 +95,7 @@ channelsRouter.post('/:id/slides', validate(SlideCreateSchema), async (req, res)
   const viewer = currentUser(req);
   const channel = await findChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
-  await addSlide(channel, req.body as SlideCreateInput, viewer, req.ip);
+  await addSlide(channel, req.body, viewer, req.ip);
   res.status(201).json({ data: await presentChannelDetail(await channel.reload(), viewer) });
 });
 
@@ -109,7 +103,7 @@ channelsRouter.patch('/:id/slides/:slideId', validate(SlideUpdateSchema), async 
   const viewer = currentUser(req);
   const channel = await findChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
-  await updateSlide(channel, params(req.params).slideId, req.body as SlideUpdateInput, viewer, req.ip);
+  await updateSlide(channel, params(req.params).slideId, req.body, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
 });
 
@@ -125,7 +119,7 @@ channelsRouter.put('/:id/slide-order', validate(SlideOrderSchema), async (req, r
   const viewer = currentUser(req);
   const channel = await findChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
-  await reorderSlides(channel, (req.body as SlideOrderInput).slideIds, viewer, req.ip);
+  await reorderSlides(channel, req.body.slideIds, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
 });
 
@@ -133,7 +127,7 @@ channelsRouter.put('/:id/screens', validate(ChannelScreensSchema), async (req, r
   const viewer = currentUser(req);
   const channel = await findChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
-  await assignScreens(channel, (req.body as ChannelScreensInput).screenIds, viewer, req.ip);
+  await assignScreens(channel, req.body.screenIds, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
 });
 

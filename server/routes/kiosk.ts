@@ -1,12 +1,6 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import {
-  KioskHeartbeatSchema,
-  KioskPairSchema,
-  type KioskHeartbeatInput,
-  type KioskPairedDto,
-  type KioskPairInput,
-} from '@shared/schemas/kiosk.ts';
+import { KioskHeartbeatSchema, KioskPairSchema, type KioskPairedDto } from '@shared/schemas/kiosk.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { HttpError, NotFoundError } from '../errors.ts';
 import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kiosk-auth.ts';
@@ -32,14 +26,14 @@ const pairingLimiter = rateLimit({
 export const kioskRouter = Router();
 
 kioskRouter.post('/pair', pairingLimiter, validate(KioskPairSchema), async (req, res) => {
-  const { token, screen, venue } = await pairScreen((req.body as KioskPairInput).code, req.ip);
+  const { token, screen, venue } = await pairScreen(req.body.code, req.ip);
   const body: KioskPairedDto = { token, screen: { id: screen.id, name: screen.name, venueId: venue.id, venueName: venue.name } };
   res.status(201).json({ data: body });
 });
 
 kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), async (req, res) => {
   const screen = currentKiosk(req);
-  const input = req.body as KioskHeartbeatInput;
+  const input = req.body;
   assertOwnScreen(screen, { screenId: input.screenId });
   screen.set({ lastSeenAt: new Date() });
   if (input.playerVersion !== undefined) screen.set({ playerVersion: input.playerVersion });

@@ -2,14 +2,14 @@ import fsp from 'node:fs/promises';
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { MediaLimits } from '@shared/media/limits.ts';
-import { MediaListQuerySchema, MediaUpdateSchema, type MediaListQuery, type MediaUpdateInput } from '@shared/media/schemas.ts';
+import { MediaListQuerySchema, MediaUpdateSchema } from '@shared/media/schemas.ts';
 import { IdSchema } from '@shared/schemas/common.ts';
 import { ConflictError, HttpError } from '../errors.ts';
 import { requestRenditions } from '../jobs/media-renditions.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
-import { validate } from '../middlewares/validate.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
 import { Media, MediaRendition, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
@@ -49,10 +49,10 @@ const mayUpload: RequestHandler = (req, _res, next) => {
 export const mediaRouter = Router();
 mediaRouter.use(requireUser);
 
-mediaRouter.get('/', validate(MediaListQuerySchema, 'query'), async (req, res) => {
+mediaRouter.get('/', validateQuery(MediaListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'media', 'list');
-  const { rows, total, page } = await searchMedia(req.query as MediaListQuery);
+  const { rows, total, page } = await searchMedia(req.query);
   const objects = await objectsForMedia(rows.map((m) => m.id));
   const { uploadMaxBytes, maxPixels } = mediaSettings();
   res.json({
@@ -61,9 +61,9 @@ mediaRouter.get('/', validate(MediaListQuerySchema, 'query'), async (req, res) =
   });
 });
 
-mediaRouter.get('/object-suggestions', validate(SuggestQuerySchema, 'query'), async (req, res) => {
+mediaRouter.get('/object-suggestions', validateQuery(SuggestQuerySchema), async (req, res) => {
   authorize(currentUser(req), 'media', 'list');
-  res.json({ data: await suggestObjects((req.query as { q: string }).q) });
+  res.json({ data: await suggestObjects(req.query.q) });
 });
 
 mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
@@ -91,7 +91,7 @@ mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
   const media = await findMedia(req.params.id as string);
   authorize(viewer, 'media', 'update', media);
-  await updateMedia(media, req.body as MediaUpdateInput, viewer, req.ip);
+  await updateMedia(media, req.body, viewer, req.ip);
   res.json({ data: await present((await findMedia(media.id))!, viewer) });
 });
 

@@ -1,16 +1,11 @@
 import { Router } from 'express';
 import { Op, type WhereOptions } from 'sequelize';
 import { IdSchema } from '@shared/schemas/common.ts';
-import {
-  StatementCreateSchema,
-  StatementListQuerySchema,
-  type StatementCreateInput,
-  type StatementListQuery,
-} from '@shared/schemas/statement.ts';
+import { StatementCreateSchema, StatementListQuerySchema } from '@shared/schemas/statement.ts';
 import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
 import { NotFoundError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
-import { validate } from '../middlewares/validate.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
 import { CosmologyDescription, SkyObject, Statement, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentStatement } from '../presenters/statement.ts';
@@ -52,10 +47,10 @@ statementTemplatesRouter.get('/', (req, res) => {
 export const statementsRouter = Router();
 statementsRouter.use(requireUser);
 
-statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (req, res) => {
+statementsRouter.get('/', validateQuery(StatementListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'read');
-  const q = req.query as unknown as StatementListQuery;
+  const q = req.query;
   const where: WhereOptions<Statement> = {
     ...(q.status ? { status: q.status } : {}),
     ...(q.objectId ? { skyObjectId: q.objectId } : {}),
@@ -91,7 +86,7 @@ statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (re
 statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'create');
-  const { objectId, templateId, venueId } = req.body as StatementCreateInput;
+  const { objectId, templateId, venueId } = req.body;
   const { statement: made, created } = await findOrCreateStatement(objectId, templateId, viewer, venueId ?? null);
   const { statement, object, working } = await loadStatement(made.id);
   res.status(created ? 201 : 200).json({ data: presentStatement(statement, object, viewer, { working }) });

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { IdSchema } from '@shared/schemas/common.ts';
-import { UserInviteSchema, UserUpdateSchema, type UserInviteInput, type UserUpdateInput } from '@shared/schemas/user.ts';
+import { UserInviteSchema, UserUpdateSchema } from '@shared/schemas/user.ts';
 import { ConflictError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
@@ -28,7 +28,7 @@ usersRouter.get('/', async (req, res) => {
 usersRouter.post('/', validate(UserInviteSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'user', 'invite');
-  const user = await inviteUser(req.body as UserInviteInput, viewer, req.ip);
+  const user = await inviteUser(req.body, viewer, req.ip);
   res.status(201).json({ data: presentUser(user, viewer) });
 });
 
@@ -36,7 +36,7 @@ usersRouter.patch('/:id', validate(UserUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
   const target = await findUser(req.params.id as string);
   authorize(viewer, 'user', 'update', target);
-  const updated = await updateUser(target, req.body as UserUpdateInput, viewer, req.ip);
+  const updated = await updateUser(target, req.body, viewer, req.ip);
   res.json({ data: presentUser(updated, viewer) });
 });
 

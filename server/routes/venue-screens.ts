@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { IdSchema } from '@shared/schemas/common.ts';
-import { ScreenCreateSchema, type PairingCodeDto, type ScreenCreateInput } from '@shared/schemas/kiosk.ts';
+import { ScreenCreateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { getSequelize } from '../db.ts';
 import { ConflictError, NotFoundError } from '../errors.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
@@ -41,7 +41,7 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   const venue = await loadVenue(params(req.params).venueId);
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const { name } = req.body as ScreenCreateInput;
+  const { name } = req.body;
   const sequelize = getSequelize();
   const clash = await KioskScreen.findOne({
     where: sequelize.and(

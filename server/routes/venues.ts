@@ -1,20 +1,13 @@
 import { Router } from 'express';
 import { IdSchema } from '@shared/schemas/common.ts';
-import {
-  SkyQuerySchema,
-  VenueCreateSchema,
-  VenueUpdateSchema,
-  type SkyQuery,
-  type VenueCreateValues,
-  type VenueUpdateValues,
-} from '@shared/schemas/venue.ts';
+import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema } from '@shared/schemas/venue.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { computeSkyTonight } from '@shared/sky/tonight.ts';
 import { getSequelize } from '../db.ts';
 import { ValidationError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
-import { validate } from '../middlewares/validate.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
 import { KioskScreen, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
@@ -58,7 +51,7 @@ venuesRouter.get('/choices', async (req, res) => {
 venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'venue', 'create');
-  const venue = await createVenue(req.body as VenueCreateValues, viewer, req.ip);
+  const venue = await createVenue(req.body, viewer, req.ip);
   res.status(201).json({ data: presentVenue(venue, viewer, 0) });
 });
 
@@ -73,7 +66,7 @@ venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
   const venue = await findVenue(String(req.params.id));
   authorize(viewer, 'venue', 'update', venue);
-  const updated = await updateVenue(venue, req.body as VenueUpdateValues, viewer, req.ip);
+  const updated = await updateVenue(venue, req.body, viewer, req.ip);
   res.json({ data: presentVenue(updated, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
 });
 
@@ -86,11 +79,11 @@ venuesRouter.delete('/:id', async (req, res) => {
 });
 
 /** The sky for a night: the stored snapshot, or for a chosen clock time a fresh one that is not kept. */
-venuesRouter.get('/:id/sky', validate(SkyQuerySchema, 'query'), async (req, res) => {
+venuesRouter.get('/:id/sky', validateQuery(SkyQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   const venue = await findVenue(String(req.params.id));
   authorize(viewer, 'venue', 'readSky', venue);
-  const query = req.query as SkyQuery;
+  const query = req.query;
   const localDate = query.date ?? nightDateAt(Date.now(), venue.timeZone);
   if (query.at) {
     try {

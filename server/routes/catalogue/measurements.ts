@@ -5,13 +5,11 @@ import {
   MeasurementPreferredSchema,
   MeasurementRetireSchema,
   MeasurementReviewSchema,
-  type MeasurementPreferredInput,
-  type MeasurementReviewInput,
 } from '@shared/schemas/measurement.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
 import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentMeasurement } from '../../presenters/measurement.ts';
 import { setPreferred } from '../../services/measurement-preferred.ts';
@@ -46,12 +44,12 @@ measurementsRouter.patch('/:id', async (req, res) => {
 });
 
 // Measurements are never deleted: DELETE retires one, keeping it and its history.
-measurementsRouter.delete('/:id', validate(MeasurementRetireSchema, 'query'), async (req, res) => {
+measurementsRouter.delete('/:id', validateQuery(MeasurementRetireSchema), async (req, res) => {
   const viewer = currentUser(req);
   const m = await findMeasurement(req.params.id);
   if (!m) throw notFound();
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await retireMeasurement(m.id, (req.query as unknown as { reason: string }).reason, viewer);
+  await retireMeasurement(m.id, req.query.reason, viewer);
   res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
 });
 
@@ -60,7 +58,7 @@ measurementsRouter.put('/:id/preferred', validate(MeasurementPreferredSchema), a
   const m = await findMeasurement(req.params.id);
   if (!m) throw notFound();
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await setPreferred(m.id, req.body as MeasurementPreferredInput, viewer);
+  await setPreferred(m.id, req.body, viewer);
   res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
 });
 
@@ -69,6 +67,6 @@ measurementsRouter.post('/:id/review', validate(MeasurementReviewSchema), async 
   const m = await findMeasurement(req.params.id);
   if (!m) throw notFound();
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await reviewMeasurement(m.id, req.body as MeasurementReviewInput, viewer);
+  await reviewMeasurement(m.id, req.body, viewer);
   res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
 });

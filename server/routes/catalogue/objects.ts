@@ -1,14 +1,9 @@
 import { Router } from 'express';
-import { MeasurementInputSchema, type MeasurementValues } from '@shared/schemas/measurement.ts';
-import {
-  SkyObjectInputSchema,
-  SkyObjectListQuerySchema,
-  type SkyObjectListQuery,
-  type SkyObjectValues,
-} from '@shared/schemas/sky-object.ts';
+import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
+import { SkyObjectInputSchema, SkyObjectListQuerySchema } from '@shared/schemas/sky-object.ts';
 import { AuthorizationError, NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
 import { authorize, can } from '../../policies/index.ts';
 import { presentHistory, presentMeasurement } from '../../presenters/measurement.ts';
@@ -22,15 +17,15 @@ const notFound = () => NotFoundError('There is no object with that id in the cat
 
 export const objectsRouter = Router();
 
-objectsRouter.get('/', validate(SkyObjectListQuerySchema, 'query'), async (req, res) => {
+objectsRouter.get('/', validateQuery(SkyObjectListQuerySchema), async (req, res) => {
   authorize(currentUser(req), 'catalogue', 'read');
-  res.json({ data: await listSkyObjects(req.query as unknown as SkyObjectListQuery) });
+  res.json({ data: await listSkyObjects(req.query) });
 });
 
 objectsRouter.post('/', validate(SkyObjectInputSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await createSkyObject(req.body as SkyObjectValues, viewer, req.ip);
+  const object = await createSkyObject(req.body, viewer, req.ip);
   res.status(201).json({ data: presentSkyObject(object, viewer) });
 });
 
@@ -47,7 +42,7 @@ objectsRouter.patch('/:id', validate(SkyObjectInputSchema), async (req, res) => 
   authorize(viewer, 'catalogue', 'editObject');
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
-  res.json({ data: presentSkyObject(await updateSkyObject(object, req.body as SkyObjectValues, viewer, req.ip), viewer) });
+  res.json({ data: presentSkyObject(await updateSkyObject(object, req.body, viewer, req.ip), viewer) });
 });
 
 objectsRouter.delete('/:id', async (req, res) => {
@@ -83,7 +78,7 @@ objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async 
   if (!direct && !can(viewer, 'catalogue', 'proposeMeasurement')) throw AuthorizationError();
   const object = await findSkyObject(req.params.id);
   if (!object) throw notFound();
-  const created = await createMeasurement(object, req.body as MeasurementValues, viewer, !direct);
+  const created = await createMeasurement(object, req.body, viewer, !direct);
   const loaded = await Measurement.findByPk(created.id, { include: measurementIncludes() });
   res.status(201).json({ data: presentMeasurement(loaded!, viewer) });
 });

@@ -1,11 +1,11 @@
 import { Router } from 'express';
 import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
-import { SourceInputSchema, type SourceValues } from '@shared/schemas/source.ts';
+import { SourceInputSchema } from '@shared/schemas/source.ts';
 import { getSequelize } from '../../db.ts';
 import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { Measurement, Source } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentSource } from '../../presenters/source.ts';
@@ -17,10 +17,10 @@ const SourceListQuerySchema = z.object({ q: z.string().trim().max(200).optional(
 
 export const sourcesRouter = Router();
 
-sourcesRouter.get('/', validate(SourceListQuerySchema, 'query'), async (req, res) => {
+sourcesRouter.get('/', validateQuery(SourceListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'catalogue', 'read');
-  const { q } = req.query as { q?: string };
+  const { q } = req.query;
   const pattern = q ? `%${q.toLowerCase()}%` : null;
   const rows = await getSequelize().query<{ id: string; count: string }>(
     `SELECT s.id, (SELECT count(*) FROM measurements m WHERE m.source_id = s.id AND m.retired_at IS NULL) AS count
@@ -36,7 +36,7 @@ sourcesRouter.get('/', validate(SourceListQuerySchema, 'query'), async (req, res
 sourcesRouter.post('/', validate(SourceInputSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'catalogue', 'editSource');
-  const source = await createSource(req.body as SourceValues, viewer, req.ip);
+  const source = await createSource(req.body, viewer, req.ip);
   res.status(201).json({ data: presentSource(source, viewer, 0) });
 });
 
@@ -53,7 +53,7 @@ sourcesRouter.patch('/:id', validate(SourceInputSchema), async (req, res) => {
   authorize(viewer, 'catalogue', 'editSource');
   const source = await findSource(req.params.id);
   if (!source) throw notFound();
-  const updated = await updateSource(source, req.body as SourceValues, viewer, req.ip);
+  const updated = await updateSource(source, req.body, viewer, req.ip);
   res.json({
     data: presentSource(updated, viewer, await Measurement.count({ where: { sourceId: source.id, retiredAt: null } })),
   });

@@ -1,20 +1,11 @@
 import { Router } from 'express';
 import type { JSONContent } from '@tiptap/core';
 import { validateDoc } from '@shared/editor/schema.ts';
-import {
-  DigestSchema,
-  docBytes,
-  PageCreateSchema,
-  PageListQuerySchema,
-  PageSaveSchema,
-  type PageCreateInput,
-  type PageListQuery,
-  type PageSaveInput,
-} from '@shared/schemas/page.ts';
+import { DigestSchema, docBytes, PageCreateSchema, PageListQuerySchema, PageSaveSchema } from '@shared/schemas/page.ts';
 import { PageLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { PageRevision } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { renderPublishedPage, renderWithLookups } from '../../services/page-render.ts';
@@ -53,10 +44,10 @@ export function checkedDoc(doc: unknown): JSONContent {
 export const pagesRouter = Router();
 pagesRouter.use(requireUser);
 
-pagesRouter.get('/', validate(PageListQuerySchema, 'query'), async (req, res) => {
+pagesRouter.get('/', validateQuery(PageListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'page', 'list');
-  const q = req.query as unknown as PageListQuery;
+  const q = req.query;
   const { rows, total } = await listPages(q, viewer);
   res.json({ data: rows, meta: { total, page: q.page, pageSize: q.pageSize } });
 });
@@ -64,7 +55,7 @@ pagesRouter.get('/', validate(PageListQuerySchema, 'query'), async (req, res) =>
 pagesRouter.post('/', validate(PageCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'page', 'create');
-  const page = await createPage(req.body as PageCreateInput, viewer);
+  const page = await createPage(req.body, viewer);
   res.status(201).json({ data: await loadPageDetail(page, viewer) });
 });
 
@@ -76,8 +67,8 @@ pagesRouter.get('/dashboard', async (req, res) => {
 
 pagesRouter.put('/digest', validate(DigestSchema), async (req, res) => {
   const viewer = currentUser(req);
-  await setDigest(viewer.id, (req.body as { enabled: boolean }).enabled);
-  res.json({ data: { digest: (req.body as { enabled: boolean }).enabled } });
+  await setDigest(viewer.id, req.body.enabled);
+  res.json({ data: { digest: req.body.enabled } });
 });
 
 pagesRouter.get('/:id', async (req, res) => {
@@ -92,7 +83,7 @@ pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(req.params.id);
   authorize(viewer, 'page', 'edit', page);
-  const input = req.body as PageSaveInput;
+  const input = req.body;
   const doc = checkedDoc(input.doc);
   try {
     const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);

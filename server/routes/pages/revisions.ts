@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { DiffQuerySchema, RestoreSchema, type PageRevisionDto } from '@shared/schemas/page.ts';
 import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { PageRevision, User, type Page } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
@@ -57,11 +57,11 @@ revisionsRouter.get('/', async (req, res) => {
   res.json({ data });
 });
 
-revisionsRouter.get('/diff', validate(DiffQuerySchema, 'query'), async (req, res) => {
+revisionsRouter.get('/diff', validateQuery(DiffQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageParam(req));
   authorize(viewer, 'page', 'read', page);
-  const { from, to } = req.query as unknown as { from: number; to: number };
+  const { from, to } = req.query;
   const [a, b] = await Promise.all([revisionOf(page, from), revisionOf(page, to)]);
   const statements = await loadStatements([...new Set([...a.statementIds, ...b.statementIds])]);
   res.json({ data: diffRevisions(a, b, (id) => statements.get(id)?.templateTitle ?? 'statement') });
@@ -84,7 +84,7 @@ revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, re
   try {
     const { page: saved } = await savePage(
       page.id,
-      { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
+      { version: req.body.version, title: r.title, doc: r.doc, restoredFrom: r.number },
       viewer,
     );
     res.json({ data: await loadPageDetail(saved, viewer) });

@@ -40,7 +40,7 @@ workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => 
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
-  await sendBackPage(page.id, (req.body as { comment: string }).comment, viewer);
+  await sendBackPage(page.id, req.body.comment, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
@@ -55,7 +55,7 @@ workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), as
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
-  await signOffStatement(page.id, (req.body as { statementId: string }).statementId, viewer);
+  await signOffStatement(page.id, req.body.statementId, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
@@ -71,7 +71,7 @@ workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
-  const { text, reason } = req.body as { text: string; reason: string };
+  const { text, reason } = req.body;
   await resolveNumberFlag(page.id, text, reason, viewer);
   res.json({ data: await detail(req, page.id) });
 });
@@ -96,7 +96,7 @@ workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'publish', page);
-  const at = (req.body as { at: string | null }).at;
+  const at = req.body.at;
   await schedulePublish(page.id, at ? new Date(at) : null, viewer);
   res.json({ data: await detail(req, page.id) });
 });
@@ -130,7 +130,7 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
     pageId: page.id,
     revisionNumber: revision?.number ?? null,
     authorId: viewer.id,
-    body: (req.body as { body: string }).body,
+    body: req.body.body,
   });
   await recordAudit({
     actorId: viewer.id,
@@ -139,15 +139,13 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
     subjectId: page.id,
     data: { commentId: comment.id },
   });
-  res
-    .status(201)
-    .json({
-      data: {
-        id: comment.id,
-        body: comment.body,
-        author: viewer.name,
-        revisionNumber: comment.revisionNumber,
-        createdAt: comment.createdAt.toISOString(),
-      },
-    });
+  res.status(201).json({
+    data: {
+      id: comment.id,
+      body: comment.body,
+      author: viewer.name,
+      revisionNumber: comment.revisionNumber,
+      createdAt: comment.createdAt.toISOString(),
+    },
+  });
 });
