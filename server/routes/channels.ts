@@ -24,6 +24,7 @@ import { loadSlideSources } from '../services/channel-sources.ts';
 import { getKioskFeed, listenForFeedChanges } from '../services/feed-cache.ts';
 import { registerMediaUsageProvider } from '../services/media-usage.ts';
 import { FEED_CONTENT_TYPE } from './kiosk-feed.ts';
+import { loadChannel } from './load.ts';
 
 listenForFeedChanges();
 
@@ -36,10 +37,6 @@ registerMediaUsageProvider('channels', async (mediaId) => {
   );
   return rows.map((r) => ({ kind: 'channel', id: r.id, title: `Kiosk channel: ${r.name}` }));
 });
-
-async function findChannel(id: string): Promise<Channel | null> {
-  return IdSchema.safeParse(id).success ? Channel.findByPk(id) : null;
-}
 
 const params = (p: unknown) => p as { id: string; slideId: string };
 
@@ -70,14 +67,14 @@ channelsRouter.get('/slide-sources', async (req, res) => {
 
 channelsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'read', channel);
   res.json({ data: await presentChannelDetail(channel, viewer) });
 });
 
 channelsRouter.patch('/:id', validate(ChannelUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   const updated = await updateChannel(channel, req.body, viewer, req.ip);
   res.json({ data: await presentChannelDetail(updated, viewer) });
@@ -85,7 +82,7 @@ channelsRouter.patch('/:id', validate(ChannelUpdateSchema), async (req, res) => 
 
 channelsRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'delete', channel);
   await deleteChannel(channel, viewer, req.ip);
   res.status(204).end();
@@ -93,7 +90,7 @@ channelsRouter.delete('/:id', async (req, res) => {
 
 channelsRouter.post('/:id/slides', validate(SlideCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   await addSlide(channel, req.body, viewer, req.ip);
   res.status(201).json({ data: await presentChannelDetail(await channel.reload(), viewer) });
@@ -101,7 +98,7 @@ channelsRouter.post('/:id/slides', validate(SlideCreateSchema), async (req, res)
 
 channelsRouter.patch('/:id/slides/:slideId', validate(SlideUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   await updateSlide(channel, params(req.params).slideId, req.body, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
@@ -109,7 +106,7 @@ channelsRouter.patch('/:id/slides/:slideId', validate(SlideUpdateSchema), async 
 
 channelsRouter.delete('/:id/slides/:slideId', async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   await removeSlide(channel, params(req.params).slideId, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
@@ -117,7 +114,7 @@ channelsRouter.delete('/:id/slides/:slideId', async (req, res) => {
 
 channelsRouter.put('/:id/slide-order', validate(SlideOrderSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   await reorderSlides(channel, req.body.slideIds, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
@@ -125,7 +122,7 @@ channelsRouter.put('/:id/slide-order', validate(SlideOrderSchema), async (req, r
 
 channelsRouter.put('/:id/screens', validate(ChannelScreensSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'update', channel);
   await assignScreens(channel, req.body.screenIds, viewer, req.ip);
   res.json({ data: await presentChannelDetail(await channel.reload(), viewer) });
@@ -134,7 +131,7 @@ channelsRouter.put('/:id/screens', validate(ChannelScreensSchema), async (req, r
 /** The feed exactly as the channel's screens get it, for the staff preview (signed-in session, no kiosk token). */
 channelsRouter.get('/:id/preview-feed', async (req, res) => {
   const viewer = currentUser(req);
-  const channel = await findChannel(params(req.params).id);
+  const channel = await loadChannel(params(req.params).id);
   authorize(viewer, 'channel', 'read', channel);
   const feed = await getKioskFeed({ channelId: channel.id, venueId: channel.venueId });
   sendCached(req, res, feed.body, feed.etag, FEED_CONTENT_TYPE, 'private, no-cache');

@@ -3,14 +3,13 @@ import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { MediaLimits } from '@shared/media/limits.ts';
 import { MediaListQuerySchema, MediaUpdateSchema } from '@shared/media/schemas.ts';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { ConflictError, HttpError } from '../errors.ts';
 import { requestRenditions } from '../jobs/media-renditions.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
 import { validate, validateQuery } from '../middlewares/validate.ts';
-import { Media, MediaRendition, User } from '../models/index.ts';
+import { Media, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
 import { deleteMedia } from '../services/media-delete.ts';
@@ -19,17 +18,7 @@ import { searchMedia } from '../services/media-search.ts';
 import { uploadMedia } from '../services/media-upload.ts';
 import { updateMedia } from '../services/media-update.ts';
 import { findMediaUsage } from '../services/media-usage.ts';
-
-/** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
-async function findMedia(id: string): Promise<Media | null> {
-  if (!IdSchema.safeParse(id).success) return null;
-  return Media.findByPk(id, {
-    include: [
-      { model: MediaRendition, as: 'renditions' },
-      { model: User, as: 'uploadedBy', attributes: ['id', 'name'] },
-    ],
-  });
-}
+import { loadMedia } from './load.ts';
 
 async function present(media: Media, viewer: User) {
   const objects = await objectsForMedia([media.id]);
@@ -73,7 +62,7 @@ mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
   }
   try {
     const media = await uploadMedia({ file: req.file, fields: req.body, uploader: viewer, ip: req.ip });
-    const loaded = (await findMedia(media.id))!;
+    const loaded = await loadMedia(media.id);
     res.status(201).json({ data: await present(loaded, viewer) });
   } finally {
     await fsp.rm(req.file.path, { force: true });
@@ -82,22 +71,22 @@ mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
 
 mediaRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'read', media);
   res.json({ data: { ...(await present(media, viewer)), usage: await findMediaUsage(media.id) } });
 });
 
 mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'update', media);
   await updateMedia(media, req.body, viewer, req.ip);
-  res.json({ data: await present((await findMedia(media.id))!, viewer) });
+  res.json({ data: await present(await loadMedia(media.id), viewer) });
 });
 
 mediaRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'delete', media);
   await deleteMedia(media, viewer, req.ip);
   res.status(204).end();
@@ -105,7 +94,7 @@ mediaRouter.delete('/:id', async (req, res) => {
 
 mediaRouter.get('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'read', media);
   res.json({
     data: {
@@ -119,7 +108,7 @@ mediaRouter.get('/:id/renditions', async (req, res) => {
 /** Makes the renditions again, e.g. after a failure. */
 mediaRouter.post('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'update', media);
   if (media.renditionsStatus === 'processing')
     throw ConflictError('The renditions are being made right now.', 'already_processing');

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { UserInviteSchema, UserUpdateSchema } from '@shared/schemas/user.ts';
 import { ConflictError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
@@ -9,11 +8,7 @@ import { authorize } from '../policies/index.ts';
 import { presentUser } from '../presenters/user.ts';
 import { resendInvitation, inviteUser } from '../services/user-invite.ts';
 import { updateUser } from '../services/user-update.ts';
-
-/** Loads a user by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
-async function findUser(id: string): Promise<User | null> {
-  return IdSchema.safeParse(id).success ? User.findByPk(id) : null;
-}
+import { loadUser } from './load.ts';
 
 export const usersRouter = Router();
 usersRouter.use(requireUser);
@@ -34,7 +29,7 @@ usersRouter.post('/', validate(UserInviteSchema), async (req, res) => {
 
 usersRouter.patch('/:id', validate(UserUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const target = await findUser(req.params.id as string);
+  const target = await loadUser(req.params.id);
   authorize(viewer, 'user', 'update', target);
   const updated = await updateUser(target, req.body, viewer, req.ip);
   res.json({ data: presentUser(updated, viewer) });
@@ -42,7 +37,7 @@ usersRouter.patch('/:id', validate(UserUpdateSchema), async (req, res) => {
 
 usersRouter.post('/:id/invitation', async (req, res) => {
   const viewer = currentUser(req);
-  const target = await findUser(req.params.id as string);
+  const target = await loadUser(req.params.id);
   authorize(viewer, 'user', 'update', target);
   if (target.passwordHash) throw ConflictError('This person has already accepted their invitation.', 'already_accepted');
   await resendInvitation(target, viewer);

@@ -1,31 +1,18 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { ScreenCreateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { getSequelize } from '../db.ts';
-import { ConflictError, NotFoundError } from '../errors.ts';
+import { ConflictError } from '../errors.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
-import { KioskScreen, Venue } from '../models/index.ts';
+import { KioskScreen } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
 import { recordAudit } from '../services/audit.ts';
 import { issuePairingCode, revokeScreen } from '../services/kiosk-pairing.ts';
+import { loadScreen, loadVenue } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });
-
-async function loadVenue(id: string): Promise<Venue | null> {
-  return IdSchema.safeParse(id).success ? Venue.findByPk(id) : null;
-}
-
-/** A screen of this venue; another venue's screen is "not found" here, never touched. */
-async function loadScreen(venue: Venue, screenId: string): Promise<KioskScreen> {
-  const screen = IdSchema.safeParse(screenId).success
-    ? await KioskScreen.findOne({ where: { id: screenId, venueId: venue.id } })
-    : null;
-  if (!screen) throw NotFoundError('There is no such screen at this venue.');
-  return screen;
-}
 
 const params = (p: unknown) => p as { venueId: string; screenId: string };
 

@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema } from '@shared/schemas/venue.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
@@ -14,12 +13,8 @@ import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
 import { getSkySnapshot } from '../services/sky-snapshots.ts';
 import { createVenue, deleteVenue, updateVenue } from '../services/venue-save.ts';
+import { loadVenue } from './load.ts';
 import { venueScreensRouter } from './venue-screens.ts';
-
-/** Loads a venue by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
-export async function findVenue(id: string): Promise<Venue | null> {
-  return IdSchema.safeParse(id).success ? Venue.findByPk(id) : null;
-}
 
 async function screenCounts(): Promise<Map<string, number>> {
   const rows = (await KioskScreen.findAll({
@@ -57,14 +52,14 @@ venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {
 
 venuesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'read', venue);
   res.json({ data: presentVenue(venue, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
 });
 
 venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'update', venue);
   const updated = await updateVenue(venue, req.body, viewer, req.ip);
   res.json({ data: presentVenue(updated, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
@@ -72,7 +67,7 @@ venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
 
 venuesRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'delete', venue);
   await deleteVenue(venue, viewer, req.ip);
   res.status(204).end();
@@ -81,7 +76,7 @@ venuesRouter.delete('/:id', async (req, res) => {
 /** The sky for a night: the stored snapshot, or for a chosen clock time a fresh one that is not kept. */
 venuesRouter.get('/:id/sky', validateQuery(SkyQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'readSky', venue);
   const query = req.query;
   const localDate = query.date ?? nightDateAt(Date.now(), venue.timeZone);

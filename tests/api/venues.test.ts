@@ -107,8 +107,8 @@ describe('venues (admin manages, editor reads)', () => {
     expect((await supertest(await getTestApp()).get('/api/venues')).status).toBe(401);
   });
 
-  it('a malformed venue id is refused like a missing one (403, not 500)', async () => {
+  it('a malformed venue id is not found, like a missing one (404, not 500)', async () => {
     const { agent } = await signedInAgent('admin');
-    expect((await agent.get('/api/venues/not-a-uuid')).status).toBe(403);
+    expect((await agent.get('/api/venues/not-a-uuid')).status).toBe(404);
   });
 });

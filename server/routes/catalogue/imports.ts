@@ -1,14 +1,14 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-import.ts';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
-import { HttpError, NotFoundError, ValidationError } from '../../errors.ts';
+import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { commitCatalogueImport } from '../../services/catalogue-import-commit.ts';
 import { checkCatalogueImport } from '../../services/catalogue-import-check.ts';
+import { loadImport } from '../load.ts';
 
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 
@@ -74,18 +74,15 @@ importsRouter.post(
 );
 
 importsRouter.get('/:id', async (req, res) => {
+  const record = await loadImport(req.params.id);
   authorize(currentUser(req), 'catalogue', 'import');
-  const record = IdSchema.safeParse(req.params.id).success
-    ? await CatalogueImport.findByPk(req.params.id, { attributes: { exclude: ['acceptedRows'] } })
-    : null;
-  if (!record) throw NotFoundError('There is no import with that id.');
   res.json({ data: present(record) });
 });
 
 importsRouter.post('/:id/commit', async (req, res) => {
   const viewer = currentUser(req);
+  const { id } = await loadImport(req.params.id);
   authorize(viewer, 'catalogue', 'import');
-  if (!IdSchema.safeParse(req.params.id).success) throw NotFoundError('There is no import with that id.');
-  const { record, inserted } = await commitCatalogueImport(req.params.id as string, viewer, req.ip);
+  const { record, inserted } = await commitCatalogueImport(id, viewer, req.ip);
   res.json({ data: present(record, inserted) });
 });

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
 import { SkyObjectInputSchema, SkyObjectListQuerySchema } from '@shared/schemas/sky-object.ts';
-import { AuthorizationError, NotFoundError } from '../../errors.ts';
+import { AuthorizationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
@@ -11,9 +11,7 @@ import { presentSkyObject } from '../../presenters/sky-object.ts';
 import { createMeasurement } from '../../services/measurement-write.ts';
 import { createSkyObject, deleteSkyObject, updateSkyObject } from '../../services/sky-object-write.ts';
 import { listSkyObjects } from '../../services/sky-object-list.ts';
-import { findSkyObject, measurementIncludes } from './load.ts';
-
-const notFound = () => NotFoundError('There is no object with that id in the catalogue.');
+import { loadSkyObject, measurementIncludes } from '../load.ts';
 
 export const objectsRouter = Router();
 
@@ -31,34 +29,30 @@ objectsRouter.post('/', validate(SkyObjectInputSchema), async (req, res) => {
 
 objectsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   res.json({ data: presentSkyObject(object, viewer) });
 });
 
 objectsRouter.patch('/:id', validate(SkyObjectInputSchema), async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   res.json({ data: presentSkyObject(await updateSkyObject(object, req.body, viewer, req.ip), viewer) });
 });
 
 objectsRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   await deleteSkyObject(object, viewer, req.ip);
   res.status(204).end();
 });
 
 objectsRouter.get('/:id/measurements', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   const measurements = await Measurement.findAll({
     where: { objectId: object.id },
     include: measurementIncludes(),
@@ -74,10 +68,9 @@ objectsRouter.get('/:id/measurements', async (req, res) => {
 
 objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   const direct = can(viewer, 'catalogue', 'addMeasurement');
   if (!direct && !can(viewer, 'catalogue', 'proposeMeasurement')) throw AuthorizationError();
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   const created = await createMeasurement(object, req.body, viewer, !direct);
   const loaded = await Measurement.findByPk(created.id, { include: measurementIncludes() });
   res.status(201).json({ data: presentMeasurement(loaded!, viewer) });
@@ -85,9 +78,8 @@ objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async 
 
 objectsRouter.get('/:id/history', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   const [history, measurements] = await Promise.all([
     MeasurementHistory.findAll({
       where: { objectId: object.id },

@@ -3,16 +3,14 @@ import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { SourceInputSchema } from '@shared/schemas/source.ts';
 import { getSequelize } from '../../db.ts';
-import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { Measurement, Source } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentSource } from '../../presenters/source.ts';
 import { createSource, updateSource } from '../../services/source-write.ts';
-import { findSource } from './load.ts';
+import { loadSource } from '../load.ts';
 
-const notFound = () => NotFoundError('There is no source with that id.');
 const SourceListQuerySchema = z.object({ q: z.string().trim().max(200).optional() });
 
 export const sourcesRouter = Router();
@@ -42,17 +40,15 @@ sourcesRouter.post('/', validate(SourceInputSchema), async (req, res) => {
 
 sourcesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const source = await loadSource(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const source = await findSource(req.params.id);
-  if (!source) throw notFound();
   res.json({ data: presentSource(source, viewer, await Measurement.count({ where: { sourceId: source.id, retiredAt: null } })) });
 });
 
 sourcesRouter.patch('/:id', validate(SourceInputSchema), async (req, res) => {
   const viewer = currentUser(req);
+  const source = await loadSource(req.params.id);
   authorize(viewer, 'catalogue', 'editSource');
-  const source = await findSource(req.params.id);
-  if (!source) throw notFound();
   const updated = await updateSource(source, req.body, viewer, req.ip);
   res.json({
     data: presentSource(updated, viewer, await Measurement.count({ where: { sourceId: source.id, retiredAt: null } })),

@@ -16,7 +16,7 @@ import { listPages } from '../../services/pages/page-list.ts';
 import { registerPageReactions } from '../../services/pages/page-reactions.ts';
 import { createPage, savePage } from '../../services/pages/page-save.ts';
 import { currentText, loadStatements } from '../../services/pages/page-statements.ts';
-import { findPage } from './load.ts';
+import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
 import '../../services/pages/page-digest.ts';
@@ -73,7 +73,7 @@ pagesRouter.put('/digest', validate(DigestSchema), async (req, res) => {
 
 pagesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   res.json({ data: await loadPageDetail(page, viewer) });
 });
@@ -81,7 +81,7 @@ pagesRouter.get('/:id', async (req, res) => {
 /** Autosave: the version the writer started from must still be the server's, else 409 with the server's version. */
 pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'edit', page);
   const input = req.body;
   const doc = checkedDoc(input.doc);
@@ -98,7 +98,7 @@ pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
 /** The working copy rendered as the public would see it, with each statement's current wording. */
 pagesRouter.get('/:id/preview', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   const revision = (await PageRevision.findByPk(page.currentRevisionId!))!;
   const statements = await loadStatements(revision.statementIds);
@@ -112,7 +112,7 @@ pagesRouter.get('/:id/preview', async (req, res) => {
 /** What the public sees now: the published version, unchanged by later edits or recomputes. */
 pagesRouter.get('/:id/published', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   res.json({ data: await renderPublishedPage(page.id) });
 });

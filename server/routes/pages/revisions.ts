@@ -1,32 +1,24 @@
 import { Router } from 'express';
 import { DiffQuerySchema, RestoreSchema, type PageRevisionDto } from '@shared/schemas/page.ts';
-import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
-import { PageRevision, User, type Page } from '../../models/index.ts';
+import { PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { diffRevisions } from '../../services/pages/page-diff.ts';
 import { PageConflictError } from '../../services/pages/page-errors.ts';
 import { savePage } from '../../services/pages/page-save.ts';
 import { loadStatements } from '../../services/pages/page-statements.ts';
-import { findPage } from './load.ts';
+import { loadPage, loadRevision } from '../load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */
 export const revisionsRouter = Router({ mergeParams: true });
 
 const pageParam = (req: { params: object }) => (req.params as Record<string, string>).id;
 
-async function revisionOf(page: Page, number: unknown): Promise<PageRevision> {
-  const n = Number(number);
-  const revision = Number.isInteger(n) && n > 0 ? await PageRevision.findOne({ where: { pageId: page.id, number: n } }) : null;
-  if (!revision) throw NotFoundError(`This page has no revision ${String(number)}.`);
-  return revision;
-}
-
 revisionsRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(pageParam(req));
   authorize(viewer, 'page', 'read', page);
   const revisions = await PageRevision.findAll({
     where: { pageId: page.id },
@@ -59,28 +51,28 @@ revisionsRouter.get('/', async (req, res) => {
 
 revisionsRouter.get('/diff', validateQuery(DiffQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(pageParam(req));
   authorize(viewer, 'page', 'read', page);
   const { from, to } = req.query;
-  const [a, b] = await Promise.all([revisionOf(page, from), revisionOf(page, to)]);
+  const [a, b] = await Promise.all([loadRevision(page, from), loadRevision(page, to)]);
   const statements = await loadStatements([...new Set([...a.statementIds, ...b.statementIds])]);
   res.json({ data: diffRevisions(a, b, (id) => statements.get(id)?.templateTitle ?? 'statement') });
 });
 
 revisionsRouter.get('/:number', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(pageParam(req));
   authorize(viewer, 'page', 'read', page);
-  const r = await revisionOf(page, req.params.number);
+  const r = await loadRevision(page, req.params.number);
   res.json({ data: { id: r.id, number: r.number, title: r.title, doc: r.doc, createdAt: r.createdAt.toISOString() } });
 });
 
 /** Restores an old revision as a new one; history is never rewritten. */
 revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(pageParam(req));
   authorize(viewer, 'page', 'edit', page);
-  const r = await revisionOf(page, req.params.number);
+  const r = await loadRevision(page, req.params.number);
   try {
     const { page: saved } = await savePage(
       page.id,

@@ -15,7 +15,7 @@ import { publishPage, schedulePublish, unpublishPage } from '../../services/page
 import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/page-signoff.ts';
 import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/page-workflow.ts';
 import { recordAudit } from '../../services/audit.ts';
-import { findPage } from './load.ts';
+import { loadPage } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
 export const workflowRouter = Router({ mergeParams: true });
@@ -23,13 +23,12 @@ export const workflowRouter = Router({ mergeParams: true });
 const pageId = (req: { params: Record<string, string | string[]> }) => req.params.id;
 
 async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[0], id: string) {
-  const page = (await findPage(id))!;
-  return loadPageDetail(page, currentUser(req));
+  return loadPageDetail(await loadPage(id), currentUser(req));
 }
 
 workflowRouter.post('/submit', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'submit', page);
   const version = typeof req.body?.version === 'number' ? (req.body.version as number) : undefined;
   await submitPage(page.id, version, viewer);
@@ -38,7 +37,7 @@ workflowRouter.post('/submit', async (req, res) => {
 
 workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
   await sendBackPage(page.id, req.body.comment, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -46,14 +45,14 @@ workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => 
 
 workflowRouter.get('/approval-problems', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'read', page);
   res.json({ data: { problems: await currentApprovalProblems(page) } });
 });
 
 workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
   await signOffStatement(page.id, req.body.statementId, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -61,7 +60,7 @@ workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), as
 
 workflowRouter.post('/signoffs/page', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
   await signOffPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -69,7 +68,7 @@ workflowRouter.post('/signoffs/page', async (req, res) => {
 
 workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'review', page);
   const { text, reason } = req.body;
   await resolveNumberFlag(page.id, text, reason, viewer);
@@ -78,7 +77,7 @@ workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
 
 workflowRouter.post('/publish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'publish', page);
   await publishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -86,7 +85,7 @@ workflowRouter.post('/publish', async (req, res) => {
 
 workflowRouter.post('/unpublish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'publish', page);
   await unpublishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -94,7 +93,7 @@ workflowRouter.post('/unpublish', async (req, res) => {
 
 workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'publish', page);
   const at = req.body.at;
   await schedulePublish(page.id, at ? new Date(at) : null, viewer);
@@ -103,7 +102,7 @@ workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
 
 workflowRouter.get('/comments', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'read', page);
   const comments = await PageComment.findAll({
     where: { pageId: page.id },
@@ -123,7 +122,7 @@ workflowRouter.get('/comments', async (req, res) => {
 
 workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'comment', page);
   const revision = await PageRevision.findByPk(page.currentRevisionId!, { attributes: ['number'] });
   const comment = await PageComment.create({
