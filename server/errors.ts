@@ -14,6 +14,9 @@ export class HttpError extends Error {
 
 export const ValidationError = (message: string, fields?: Record<string, string>) =>
   new HttpError(400, 'invalid_input', message, fields);
+/** A refused request with its own code (e.g. `wrong_password`, `no_file`), for a person to act on. */
+export const BadRequestError = (message: string, code: string, fields?: Record<string, string>) =>
+  new HttpError(400, code, message, fields);
 export const AuthenticationError = (message = 'Sign in to continue.') => new HttpError(401, 'not_signed_in', message);
 export const AuthorizationError = (message = 'Your role does not allow this.') => new HttpError(403, 'forbidden', message);
 export const NotFoundError = (message = 'Not found.') => new HttpError(404, 'not_found', message);

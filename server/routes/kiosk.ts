@@ -8,6 +8,7 @@ import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { pairScreen } from '../services/kiosk-pairing.ts';
+import { recordHeartbeat } from '../services/publishing/kiosk-screens.ts';
 import { getSkySnapshot } from '../services/sky-snapshots.ts';
 
 /** Guessing codes is slow: a few tries per address per quarter hour. */
@@ -35,10 +36,7 @@ kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), asy
   const screen = currentKiosk(req);
   const input = req.body;
   assertOwnScreen(screen, { screenId: input.screenId });
-  screen.set({ lastSeenAt: new Date() });
-  if (input.playerVersion !== undefined) screen.set({ playerVersion: input.playerVersion });
-  if (input.showing !== undefined) screen.set({ showing: input.showing });
-  await screen.save();
+  await recordHeartbeat(screen, input);
   // The player trusts the server's clock over its own.
   res.json({ data: { screenId: screen.id, venueId: screen.venueId, serverTime: new Date().toISOString() } });
 });

@@ -3,8 +3,7 @@ import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { MediaLimits } from '@shared/media/limits.ts';
 import { MediaListQuerySchema, MediaUpdateSchema } from '@shared/media/schemas.ts';
-import { ConflictError, HttpError } from '../errors.ts';
-import { requestRenditions } from '../jobs/media-renditions.ts';
+import { HttpError } from '../errors.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
@@ -17,6 +16,7 @@ import { objectsForMedia, suggestObjects } from '../services/media-objects.ts';
 import { searchMedia } from '../services/media-search.ts';
 import { uploadMedia } from '../services/media-upload.ts';
 import { updateMedia } from '../services/media-update.ts';
+import { retryRenditions } from '../services/media/rendition-retry.ts';
 import { findMediaUsage } from '../services/media-usage.ts';
 import { loadMedia } from './load.ts';
 
@@ -110,10 +110,6 @@ mediaRouter.post('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
   const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'update', media);
-  if (media.renditionsStatus === 'processing')
-    throw ConflictError('The renditions are being made right now.', 'already_processing');
-  await media.update({ renditionsStatus: 'pending', renditionsError: null });
-  await requestRenditions(media.id);
-  await media.reload();
-  res.status(202).json({ data: { status: media.renditionsStatus, error: media.renditionsError } });
+  const queued = await retryRenditions(media);
+  res.status(202).json({ data: { status: queued.renditionsStatus, error: queued.renditionsError } });
 });

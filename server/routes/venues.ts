@@ -3,27 +3,18 @@ import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema } from '@shared/sc
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { computeSkyTonight } from '@shared/sky/tonight.ts';
-import { getSequelize } from '../db.ts';
 import { ValidationError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../middlewares/validate.ts';
-import { KioskScreen, Venue } from '../models/index.ts';
+import { Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
+import { countScreens, countScreensByVenue } from '../services/publishing/kiosk-screens.ts';
 import { getSkySnapshot } from '../services/sky-snapshots.ts';
 import { createVenue, deleteVenue, updateVenue } from '../services/venue-save.ts';
 import { loadVenue } from './load.ts';
 import { venueScreensRouter } from './venue-screens.ts';
-
-async function screenCounts(): Promise<Map<string, number>> {
-  const rows = (await KioskScreen.findAll({
-    attributes: ['venueId', [getSequelize().fn('count', getSequelize().col('id')), 'count']],
-    group: ['venueId'],
-    raw: true,
-  })) as unknown as Array<{ venueId: string; count: string }>;
-  return new Map(rows.map((r) => [r.venueId, Number(r.count)]));
-}
 
 export const venuesRouter = Router();
 venuesRouter.use(requireUser);
@@ -31,7 +22,7 @@ venuesRouter.use(requireUser);
 venuesRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'venue', 'list');
-  const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), screenCounts()]);
+  const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), countScreensByVenue()]);
   res.json({ data: venues.map((v) => presentVenue(v, viewer, counts.get(v.id) ?? 0)) });
 });
 
@@ -54,7 +45,7 @@ venuesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
   const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'read', venue);
-  res.json({ data: presentVenue(venue, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+  res.json({ data: presentVenue(venue, viewer, await countScreens(venue)) });
 });
 
 venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
@@ -62,7 +53,7 @@ venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
   const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'update', venue);
   const updated = await updateVenue(venue, req.body, viewer, req.ip);
-  res.json({ data: presentVenue(updated, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+  res.json({ data: presentVenue(updated, viewer, await countScreens(venue)) });
 });
 
 venuesRouter.delete('/:id', async (req, res) => {

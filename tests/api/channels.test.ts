@@ -159,7 +159,7 @@ describe('channels', () => {
 
     expect((await crew.editor.agent.delete(`/api/channels/${b.id}`)).status).toBe(204);
     expect(await ChannelSlide.count({ where: { channelId: b.id } })).toBe(0);
-    expect((await crew.editor.agent.get(`/api/channels/${b.id}`)).status).toBe(403);
+    expect((await crew.editor.agent.get(`/api/channels/${b.id}`)).status).toBe(404);
   });
 
   it('gives staff the preview feed and the sources a slide can be made from', async () => {

@@ -1,5 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
+import { z } from 'zod';
 import { ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-import.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
@@ -9,6 +10,9 @@ import { authorize } from '../../policies/index.ts';
 import { commitCatalogueImport } from '../../services/catalogue-import-commit.ts';
 import { checkCatalogueImport } from '../../services/catalogue-import-check.ts';
 import { loadImport } from '../load.ts';
+
+/** The form fields beside the file: the column mapping, as JSON text (multer gives every field as text). */
+const ImportFieldsSchema = z.object({ mapping: z.string().optional() });
 
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 
@@ -61,9 +65,10 @@ importsRouter.post(
   async (req, res) => {
     const viewer = currentUser(req);
     if (!req.file) throw ValidationError('Choose a CSV file to check.', { file: 'Choose a CSV file' });
+    const { mapping: mappingText } = ImportFieldsSchema.parse(req.body ?? {});
     let mapping: unknown;
     try {
-      mapping = req.body?.mapping ? JSON.parse(req.body.mapping as string) : undefined;
+      mapping = mappingText ? JSON.parse(mappingText) : undefined;
     } catch {
       throw ValidationError('The column mapping is not valid JSON.', { mapping: 'Not valid JSON' });
     }

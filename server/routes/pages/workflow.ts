@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { z } from 'zod';
 import {
   FlagResolveSchema,
   PageCommentSchema,
@@ -8,17 +9,20 @@ import {
 } from '@shared/schemas/page.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
-import { PageComment, PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
+import { presentPageComment } from '../../presenters/page-comment.ts';
+import { addPageComment, listPageComments } from '../../services/pages/page-comments.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/page-publish.ts';
 import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/page-signoff.ts';
 import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/page-workflow.ts';
-import { recordAudit } from '../../services/audit.ts';
 import { loadPage } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
 export const workflowRouter = Router({ mergeParams: true });
+
+/** Submitting may name the version the writer saw; anything else in the body is ignored, as it always was. */
+const SubmitSchema = z.object({ version: z.number().optional().catch(undefined) }).catch({});
 
 const pageId = (req: { params: Record<string, string | string[]> }) => req.params.id;
 
@@ -26,12 +30,11 @@ async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[
   return loadPageDetail(await loadPage(id), currentUser(req));
 }
 
-workflowRouter.post('/submit', async (req, res) => {
+workflowRouter.post('/submit', validate(SubmitSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'submit', page);
-  const version = typeof req.body?.version === 'number' ? (req.body.version as number) : undefined;
-  await submitPage(page.id, version, viewer);
+  await submitPage(page.id, req.body.version, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
@@ -104,47 +107,12 @@ workflowRouter.get('/comments', async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'read', page);
-  const comments = await PageComment.findAll({
-    where: { pageId: page.id },
-    include: [{ model: User, as: 'author', attributes: ['name'] }],
-    order: [['createdAt', 'ASC']],
-  });
-  res.json({
-    data: comments.map((c) => ({
-      id: c.id,
-      body: c.body,
-      author: c.author?.name ?? null,
-      revisionNumber: c.revisionNumber,
-      createdAt: c.createdAt.toISOString(),
-    })),
-  });
+  res.json({ data: (await listPageComments(page)).map(presentPageComment) });
 });
 
 workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(pageId(req));
   authorize(viewer, 'page', 'comment', page);
-  const revision = await PageRevision.findByPk(page.currentRevisionId!, { attributes: ['number'] });
-  const comment = await PageComment.create({
-    pageId: page.id,
-    revisionNumber: revision?.number ?? null,
-    authorId: viewer.id,
-    body: req.body.body,
-  });
-  await recordAudit({
-    actorId: viewer.id,
-    action: 'page.commented',
-    subjectType: 'page',
-    subjectId: page.id,
-    data: { commentId: comment.id },
-  });
-  res.status(201).json({
-    data: {
-      id: comment.id,
-      body: comment.body,
-      author: viewer.name,
-      revisionNumber: comment.revisionNumber,
-      createdAt: comment.createdAt.toISOString(),
-    },
-  });
+  res.status(201).json({ data: presentPageComment(await addPageComment(page, req.body.body, viewer)) });
 });
