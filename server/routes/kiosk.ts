@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { KioskHeartbeatSchema, KioskPairSchema, type KioskPairedDto } from '@shared/schemas/kiosk.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
-import { HttpError, NotFoundError } from '../errors.ts';
+import { NotFoundError, TooManyRequestsError } from '../errors.ts';
 import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kiosk-auth.ts';
 import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
@@ -19,7 +19,7 @@ const pairingLimiter = rateLimit({
   legacyHeaders: false,
   handler: (_req, _res, next) =>
     next(
-      new HttpError(429, 'too_many_requests', 'Too many pairing attempts from this address. Wait a few minutes and try again.'),
+      TooManyRequestsError('Too many pairing attempts from this address. Wait a few minutes and try again.', 'too_many_requests'),
     ),
 });
 

@@ -7,7 +7,7 @@ import {
 } from '@shared/schemas/settings.ts';
 import type { StatementLocale } from '@shared/statements/index.ts';
 import { calculate } from '@shared/engine/calculate.ts';
-import { HttpError } from '../errors.ts';
+import { BadRequestError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import type { OrganisationSettings } from '../models/index.ts';
@@ -52,7 +52,7 @@ settingsRouter.post('/cosmology/preview', validate(CosmologyPreviewSchema), asyn
   authorize(currentUser(req), 'settings', 'update');
   const { model } = req.body;
   const probe = calculate({ quantity: 'lookback_time', inputs: { z: 1 }, model });
-  if ('error' in probe) throw new HttpError(400, 'invalid_model', `This cosmology cannot be used: ${probe.error.message}.`);
+  if ('error' in probe) throw BadRequestError(`This cosmology cannot be used: ${probe.error.message}.`, 'invalid_model');
   const settings = await getSettings();
   const preview = await previewCosmologyChange(model);
   res.json({ data: { ...preview, version: settings.version, proposedLabel: probe.model?.label ?? '' } });
