@@ -22,12 +22,14 @@ describe('POST /api/calc', () => {
   });
 
   it('computes a preset quantity with its working, model and interval, and echoes the id', async () => {
-    const res = await agent.post('/api/calc').send({
-      id: 'quasar-7',
-      quantity: 'lookback_time',
-      inputs: { z: { value: 1.5, sigma: 0.01 } },
-      model: { preset: 'planck18' },
-    });
+    const res = await agent
+      .post('/api/calc')
+      .send({
+        id: 'quasar-7',
+        quantity: 'lookback_time',
+        inputs: { z: { value: 1.5, sigma: 0.01 } },
+        model: { preset: 'planck18' },
+      });
     expect(res.status).toBe(200);
     const data = CalcSuccessSchema.parse(res.body.data);
     expect(data.id).toBe('quasar-7');

@@ -18,14 +18,16 @@ describe('measurements', () => {
     const { agent } = await signedInAgent('reviewer');
     const object = await buildSkyObject({ kind: 'star' });
     const source = await buildSource();
-    const res = await agent.post(url(object.id)).send({
-      quantity: 'distance',
-      value: '2.5',
-      unit: 'kpc',
-      uncertaintyMinus: '0.1',
-      uncertaintyPlus: '0.3',
-      sourceId: source.id,
-    });
+    const res = await agent
+      .post(url(object.id))
+      .send({
+        quantity: 'distance',
+        value: '2.5',
+        unit: 'kpc',
+        uncertaintyMinus: '0.1',
+        uncertaintyPlus: '0.3',
+        sourceId: source.id,
+      });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({
       value: 2500,
@@ -203,13 +205,15 @@ describe('measurements', () => {
       .send({ quantity: 'redshift', value: 0.158, sourceId: null });
     expect(noSource.status).toBe(409);
     expect(noSource.body.error.message).toMatch(/preferred measurement needs a source/);
-    const changed = await agent.patch(`/api/catalogue/measurements/${id}`).send({
-      quantity: 'redshift',
-      value: 0.1583,
-      uncertainty: 0.0002,
-      sourceId: source.id,
-      reason: 'Corrected a typing error.',
-    });
+    const changed = await agent
+      .patch(`/api/catalogue/measurements/${id}`)
+      .send({
+        quantity: 'redshift',
+        value: 0.1583,
+        uncertainty: 0.0002,
+        sourceId: source.id,
+        reason: 'Corrected a typing error.',
+      });
     expect(changed.status).toBe(200);
     const quantity = await agent
       .patch(`/api/catalogue/measurements/${id}`)

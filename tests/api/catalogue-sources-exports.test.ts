@@ -15,12 +15,14 @@ describe('sources', () => {
   it('a reviewer adds a source; identifiers are checked and normalised; duplicates are refused', async () => {
     const { agent } = await signedInAgent('reviewer');
     // Willmer (2018), ApJS 236, 47: bibcode and DOI as published.
-    const res = await agent.post('/api/catalogue/sources').send({
-      citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
-      bibcode: '2018ApJS..236...47W',
-      doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
-      retrievedOn: '2026-11-30',
-    });
+    const res = await agent
+      .post('/api/catalogue/sources')
+      .send({
+        citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
+        bibcode: '2018ApJS..236...47W',
+        doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
+        retrievedOn: '2026-11-30',
+      });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({
       doi: '10.3847/1538-4365/aabfdf',

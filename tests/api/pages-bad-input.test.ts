@@ -33,11 +33,13 @@ describe('page documents sent straight to the API', () => {
 
   it('keeps markup typed as text as text: escaped when rendered, never run', async () => {
     const { agent, page } = await setup();
-    const res = await agent.put(`/api/pages/${page.id}`).send({
-      version: page.version,
-      title: 'Markup as text',
-      doc: doc(paragraph(text('<script>alert(1)</script><img src=x onerror=alert(2)>'))),
-    });
+    const res = await agent
+      .put(`/api/pages/${page.id}`)
+      .send({
+        version: page.version,
+        title: 'Markup as text',
+        doc: doc(paragraph(text('<script>alert(1)</script><img src=x onerror=alert(2)>'))),
+      });
     expect(res.status).toBe(200);
     const preview = await agent.get(`/api/pages/${page.id}/preview`);
     expect(preview.body.data.html).toBe('<p>&lt;script&gt;alert(1)&lt;/script&gt;&lt;img src=x onerror=alert(2)&gt;</p>');
@@ -196,11 +198,13 @@ describe('two people in the same page', () => {
       doc: doc(paragraph(text('Words from the writer.'))),
     });
     // The editor merges and saves against the version the 409 named: both texts are kept in history.
-    const merged = await editor.put(`/api/pages/${page.id}`).send({
-      version: b.body.current.version,
-      title: 'Version A+B',
-      doc: doc(paragraph(text('Words from the writer.')), paragraph(text('Words from the editor.'))),
-    });
+    const merged = await editor
+      .put(`/api/pages/${page.id}`)
+      .send({
+        version: b.body.current.version,
+        title: 'Version A+B',
+        doc: doc(paragraph(text('Words from the writer.')), paragraph(text('Words from the editor.'))),
+      });
     expect(merged.status).toBe(200);
     const history = (await first.get(`/api/pages/${page.id}/revisions`)).body.data.map((r: { title: string }) => r.title);
     expect(history.slice(0, 2)).toEqual(['Version A+B', 'Version A']);
