@@ -11,7 +11,7 @@ import { presentSkyObject } from '../../presenters/sky-object.ts';
 import { createMeasurement } from '../../services/measurement-write.ts';
 import { createSkyObject, deleteSkyObject, updateSkyObject } from '../../services/sky-object-write.ts';
 import { listSkyObjects } from '../../services/sky-object-list.ts';
-import { loadSkyObject, measurementIncludes } from '../load.ts';
+import { loadMeasurement, loadSkyObject, measurementIncludes } from '../load.ts';
 
 export const objectsRouter = Router();
 
@@ -72,8 +72,7 @@ objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async 
   const direct = can(viewer, 'catalogue', 'addMeasurement');
   if (!direct && !can(viewer, 'catalogue', 'proposeMeasurement')) throw AuthorizationError();
   const created = await createMeasurement(object, req.body, viewer, !direct);
-  const loaded = await Measurement.findByPk(created.id, { include: measurementIncludes() });
-  res.status(201).json({ data: presentMeasurement(loaded!, viewer) });
+  res.status(201).json({ data: presentMeasurement(await loadMeasurement(created.id), viewer) });
 });
 
 objectsRouter.get('/:id/history', async (req, res) => {
