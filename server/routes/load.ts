@@ -28,6 +28,12 @@ import { statementIncludes } from '../services/statements/statement-read.ts';
 const isId = (id: unknown): id is string => IdSchema.safeParse(id).success;
 
 /**
+ * A path parameter named by a parent router (mounted with mergeParams), whose own route type does not
+ * list it; unknown until a loader checks it.
+ */
+export const parentParam = (req: { params: object }, name: string): unknown => Reflect.get(req.params, name);
+
+/**
  * Loads the record whose id is in the URL, or throws 404.
  * @param id the raw path parameter (anything a client sent)
  * @param find the query for a well-formed id

@@ -6,16 +6,14 @@ import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
 import { issuePairingCode, revokeScreen } from '../services/kiosk-pairing.ts';
 import { addScreen, listScreens, removeScreen } from '../services/publishing/kiosk-screens.ts';
-import { loadScreen, loadVenue } from './load.ts';
+import { loadScreen, loadVenue, parentParam } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });
 
-const params = (p: unknown) => p as { venueId: string; screenId: string };
-
 venueScreensRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'read', venue);
   const screens = await listScreens(venue);
   res.json({ data: screens.map((s) => presentKioskScreen(s)) });
@@ -23,7 +21,7 @@ venueScreensRouter.get('/', async (req, res) => {
 
 venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await addScreen(venue, req.body.name, viewer, req.ip);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
@@ -34,9 +32,9 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
 /** Re-pair: a new one-time code; the screen's current token keeps working until the code is used. */
 venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await loadScreen(venue, params(req.params).screenId);
+  const screen = await loadScreen(venue, req.params.screenId);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
   const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
   res.status(201).json({ data: body });
@@ -44,17 +42,17 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
 
 venueScreensRouter.post('/:screenId/revoke', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await revokeScreen(await loadScreen(venue, params(req.params).screenId), viewer, req.ip);
+  const screen = await revokeScreen(await loadScreen(venue, req.params.screenId), viewer, req.ip);
   res.json({ data: presentKioskScreen(screen) });
 });
 
 venueScreensRouter.delete('/:screenId', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await loadScreen(venue, params(req.params).screenId);
+  const screen = await loadScreen(venue, req.params.screenId);
   await removeScreen(screen, viewer, req.ip);
   res.status(204).end();
 });

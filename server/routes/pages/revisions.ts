@@ -9,16 +9,14 @@ import { diffRevisions } from '../../services/pages/page-diff.ts';
 import { PageConflictError } from '../../services/pages/page-errors.ts';
 import { savePage } from '../../services/pages/page-save.ts';
 import { loadStatements } from '../../services/pages/page-statements.ts';
-import { loadPage, loadRevision } from '../load.ts';
+import { loadPage, loadRevision, parentParam } from '../load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */
 export const revisionsRouter = Router({ mergeParams: true });
 
-const pageParam = (req: { params: object }) => (req.params as Record<string, string>).id;
-
 revisionsRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   const revisions = await PageRevision.findAll({
     where: { pageId: page.id },
@@ -51,7 +49,7 @@ revisionsRouter.get('/', async (req, res) => {
 
 revisionsRouter.get('/diff', validateQuery(DiffQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   const { from, to } = req.query;
   const [a, b] = await Promise.all([loadRevision(page, from), loadRevision(page, to)]);
@@ -61,7 +59,7 @@ revisionsRouter.get('/diff', validateQuery(DiffQuerySchema), async (req, res) =>
 
 revisionsRouter.get('/:number', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   const r = await loadRevision(page, req.params.number);
   res.json({ data: { id: r.id, number: r.number, title: r.title, doc: r.doc, createdAt: r.createdAt.toISOString() } });
@@ -70,7 +68,7 @@ revisionsRouter.get('/:number', async (req, res) => {
 /** Restores an old revision as a new one; history is never rewritten. */
 revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'edit', page);
   const r = await loadRevision(page, req.params.number);
   try {

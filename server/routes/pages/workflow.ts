@@ -16,7 +16,7 @@ import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/page-publish.ts';
 import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/page-signoff.ts';
 import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/page-workflow.ts';
-import { loadPage } from '../load.ts';
+import { loadPage, parentParam } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
 export const workflowRouter = Router({ mergeParams: true });
@@ -24,15 +24,13 @@ export const workflowRouter = Router({ mergeParams: true });
 /** Submitting may name the version the writer saw; anything else in the body is ignored, as it always was. */
 const SubmitSchema = z.object({ version: z.number().optional().catch(undefined) }).catch({});
 
-const pageId = (req: { params: Record<string, string | string[]> }) => req.params.id;
-
 async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[0], id: string) {
   return loadPageDetail(await loadPage(id), currentUser(req));
 }
 
 workflowRouter.post('/submit', validate(SubmitSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'submit', page);
   await submitPage(page.id, req.body.version, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -40,7 +38,7 @@ workflowRouter.post('/submit', validate(SubmitSchema), async (req, res) => {
 
 workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
   await sendBackPage(page.id, req.body.comment, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -48,14 +46,14 @@ workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => 
 
 workflowRouter.get('/approval-problems', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   res.json({ data: { problems: await currentApprovalProblems(page) } });
 });
 
 workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
   await signOffStatement(page.id, req.body.statementId, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -63,7 +61,7 @@ workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), as
 
 workflowRouter.post('/signoffs/page', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
   await signOffPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -71,7 +69,7 @@ workflowRouter.post('/signoffs/page', async (req, res) => {
 
 workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
   const { text, reason } = req.body;
   await resolveNumberFlag(page.id, text, reason, viewer);
@@ -80,7 +78,7 @@ workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
 
 workflowRouter.post('/publish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
   await publishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -88,7 +86,7 @@ workflowRouter.post('/publish', async (req, res) => {
 
 workflowRouter.post('/unpublish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
   await unpublishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -96,7 +94,7 @@ workflowRouter.post('/unpublish', async (req, res) => {
 
 workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
   const at = req.body.at;
   await schedulePublish(page.id, at ? new Date(at) : null, viewer);
@@ -105,14 +103,14 @@ workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
 
 workflowRouter.get('/comments', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   res.json({ data: (await listPageComments(page)).map(presentPageComment) });
 });
 
 workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await loadPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'comment', page);
   res.status(201).json({ data: presentPageComment(await addPageComment(page, req.body.body, viewer)) });
 });
