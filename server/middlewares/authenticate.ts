@@ -37,8 +37,8 @@ export function requireUser(req: Request, _res: Response, next: NextFunction) {
   next();
 }
 
-/** The signed-in user; for handlers behind requireUser. */
-export function currentUser(req: Request): User {
+/** The signed-in user; for handlers behind requireUser (any request, whatever its validated body or query). */
+export function currentUser(req: Pick<Request, 'user'>): User {
   if (!req.user) throw AuthenticationError();
   return req.user;
 }

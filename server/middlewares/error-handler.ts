@@ -9,10 +9,9 @@ import {
 } from 'sequelize';
 import { ZodError } from 'zod';
 import type { ApiError } from '@shared/schemas/common.ts';
-import { HttpError, NotFoundError } from '../errors.ts';
+import { HttpError, NotFoundError, zodToValidationError } from '../errors.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { logger } from '../logger.ts';
-import { zodToValidationError } from './validate.ts';
 
 /** Unknown paths under /api answer in JSON, never with the client's HTML. */
 export const apiNotFound: RequestHandler = (req, _res, next) => {

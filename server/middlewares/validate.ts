@@ -1,35 +1,36 @@
-import type { RequestHandler } from 'express';
+import type { Request, RequestHandler } from 'express';
 import type { z } from 'zod';
-import { ValidationError } from '../errors.ts';
+import { zodToValidationError } from '../errors.ts';
 
-/** Turns zod issues into the error shape: the first message, and one message per field. */
-export function zodToValidationError(error: z.ZodError) {
-  const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.join('.') || '_';
-    fields[key] ??= issue.message;
-  }
-  const [first] = error.issues;
-  const where = first?.path.length ? `${first.path.join('.')}: ` : '';
-  return ValidationError(`${where}${first?.message ?? 'Invalid input'}`, fields);
-}
+// Express's defaults: the route's own params stay as they are; only the validated part is typed.
+type Params = Request['params'];
+type Query = Request['query'];
 
 /**
- * Parses req.body (or req.query) with a shared schema and replaces it with the parsed value.
+ * Parses req.body with a shared schema and replaces it with the parsed value. The handler after it
+ * gets `req.body` typed as the schema's output, so routes read the body with no cast.
  * @param schema the zod schema from shared/schemas
- * @param part which part of the request to check
  */
-export function validate(schema: z.ZodType, part: 'body' | 'query' = 'body'): RequestHandler {
+export function validate<S extends z.ZodType>(schema: S): RequestHandler<Params, unknown, z.output<S>, Query> {
   return (req, _res, next) => {
-    const result = schema.safeParse(part === 'body' ? (req.body ?? {}) : req.query);
+    const result = schema.safeParse(req.body ?? {});
     if (!result.success) return next(zodToValidationError(result.error));
-    if (part === 'body') req.body = result.data;
-    else replaceQuery(req, result.data);
+    req.body = result.data;
     next();
   };
 }
 
-// Express 5 makes req.query a getter; keep the parsed query beside it.
-function replaceQuery(req: Parameters<RequestHandler>[0], data: unknown) {
-  Object.defineProperty(req, 'query', { value: data, writable: true, configurable: true });
+/**
+ * Parses req.query with a schema and puts the parsed value in its place: the handler after it gets
+ * `req.query` typed as the schema's output (numbers as numbers, defaults filled in).
+ * @param schema the zod schema of the query string
+ */
+export function validateQuery<S extends z.ZodType>(schema: S): RequestHandler<Params, unknown, unknown, z.output<S>> {
+  return (req, _res, next) => {
+    const result = schema.safeParse(req.query);
+    if (!result.success) return next(zodToValidationError(result.error));
+    // Express 5 makes req.query a getter; keep the parsed query in its place.
+    Object.defineProperty(req, 'query', { value: result.data, writable: true, configurable: true });
+    next();
+  };
 }

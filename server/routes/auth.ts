@@ -1,35 +1,13 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import {
-  ChangePasswordSchema,
-  RequestPasswordResetSchema,
-  SignInSchema,
-  TokenPasswordSchema,
-  type ChangePasswordInput,
-  type RequestPasswordResetInput,
-  type SignInInput,
-  type TokenPasswordInput,
-} from '@shared/schemas/auth.ts';
-import { TokenLifetimes } from '@shared/validations.ts';
-import { getSequelize } from '../db.ts';
+import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPasswordSchema } from '@shared/schemas/auth.ts';
 import { HttpError } from '../errors.ts';
-import { sendMail } from '../mail/mailer.ts';
-import { passwordResetMail } from '../mail/templates.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
-import { recordAudit } from '../services/audit.ts';
-import {
-  consumeToken,
-  issueToken,
-  assertAcceptablePassword,
-  hashPassword,
-  verifyPassword,
-  signIn,
-  endUserSessions,
-} from '../services/users/index.ts';
 import { config } from '../config.ts';
+import { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken, signIn } from '../services/users/index.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
 function addressLimiter(limit: number) {
@@ -61,7 +39,7 @@ authRouter.get('/me', requireUser, (req, res) => {
 });
 
 authRouter.post('/sign-in', addressLimiter(30), validate(SignInSchema), async (req, res) => {
-  const { email, password } = req.body as SignInInput;
+  const { email, password } = req.body;
   const user = await signIn(email, password, req.ip);
   await startSession(req, user);
   res.json({ data: presentSessionUser(user) });
@@ -70,83 +48,30 @@ authRouter.post('/sign-in', addressLimiter(30), validate(SignInSchema), async (r
 authRouter.post('/sign-out', async (req, res) => {
   const userId = req.session.userId;
   await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
-  if (userId)
-    await recordAudit({ actorId: userId, action: 'auth.signed_out', subjectType: 'user', subjectId: userId, ip: req.ip });
+  if (userId) await recordSignOut(userId, req.ip);
   res.clearCookie('starproof.sid');
   res.status(204).end();
 });
 
 authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async (req, res) => {
-  const user = currentUser(req);
-  const { currentPassword, newPassword } = req.body as ChangePasswordInput;
-  if (!(await verifyPassword(currentPassword, user.passwordHash))) {
-    throw new HttpError(400, 'wrong_password', 'currentPassword: Your current password is not right.', {
-      currentPassword: 'Your current password is not right.',
-    });
-  }
-  assertAcceptablePassword(newPassword, user.email);
-  user.passwordHash = await hashPassword(newPassword);
-  await getSequelize().transaction(async (transaction) => {
-    await user.save({ transaction });
-    // Other devices signed in with the old password are signed out.
-    await endUserSessions(user.id, req.sessionID, transaction);
-    await recordAudit(
-      { actorId: user.id, action: 'auth.password_changed', subjectType: 'user', subjectId: user.id, ip: req.ip },
-      transaction,
-    );
-  });
+  await changePassword(currentUser(req), req.body, req.sessionID, req.ip);
   res.status(204).end();
 });
 
 authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordResetSchema), async (req, res) => {
-  const { email } = req.body as RequestPasswordResetInput;
-  const user = await User.findOne({ where: { email, active: true } });
-  if (user?.passwordHash) {
-    const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000);
-    await sendMail(passwordResetMail(user.email, user.name, token));
-    await recordAudit({
-      actorId: null,
-      action: 'auth.password_reset_requested',
-      subjectType: 'user',
-      subjectId: user.id,
-      ip: req.ip,
-    });
-  }
+  await requestPasswordReset(req.body.email, req.ip);
   // The same answer whether or not the address has an account.
   res.status(202).json({ data: { message: 'If that address has an account, a reset link is on its way.' } });
 });
 
-/** Shared by invitation acceptance and password reset: consume the token, set the password, sign in. */
-function completeWithToken(purpose: 'invitation' | 'password_reset') {
-  return async (req: Request, res: import('express').Response) => {
-    const { token, newPassword } = req.body as TokenPasswordInput;
-    const user = await getSequelize().transaction(async (transaction) => {
-      const found = await consumeToken(token, purpose, transaction);
-      assertAcceptablePassword(newPassword, found.email);
-      found.set({ passwordHash: await hashPassword(newPassword), failedSignIns: 0, throttledUntil: null });
-      await found.save({ transaction });
-      await endUserSessions(found.id, undefined, transaction);
-      await recordAudit(
-        {
-          actorId: found.id,
-          action: purpose === 'invitation' ? 'user.invitation_accepted' : 'auth.password_reset',
-          subjectType: 'user',
-          subjectId: found.id,
-          ip: req.ip,
-        },
-        transaction,
-      );
-      return found;
-    });
+/** Invitation acceptance and password reset: consume the token, set the password, sign in. */
+for (const [path, purpose] of [
+  ['/invitation/accept', 'invitation'],
+  ['/password-reset/complete', 'password_reset'],
+] as const) {
+  authRouter.post(path, addressLimiter(30), validate(TokenPasswordSchema), async (req, res) => {
+    const user = await setPasswordWithToken(req.body.token, req.body.newPassword, purpose, req.ip);
     await startSession(req, user);
     res.json({ data: presentSessionUser(user) });
-  };
+  });
 }
-
-authRouter.post('/invitation/accept', addressLimiter(30), validate(TokenPasswordSchema), completeWithToken('invitation'));
-authRouter.post(
-  '/password-reset/complete',
-  addressLimiter(30),
-  validate(TokenPasswordSchema),
-  completeWithToken('password_reset'),
-);

@@ -1,21 +1,16 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import {
-  KioskHeartbeatSchema,
-  KioskPairSchema,
-  type KioskHeartbeatInput,
-  type KioskPairedDto,
-  type KioskPairInput,
-} from '@shared/schemas/kiosk.ts';
+import { KioskHeartbeatSchema, KioskPairSchema, type KioskPairedDto } from '@shared/schemas/kiosk.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
-import { HttpError, NotFoundError } from '../errors.ts';
+import { NotFoundError, TooManyRequestsError } from '../errors.ts';
 import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kiosk-auth.ts';
 import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { pairScreen } from '../services/publishing/index.ts';
-import { getSkySnapshot } from '../services/sky/index.ts';
 import { config } from '../config.ts';
+import { recordHeartbeat } from '../services/publishing/index.ts';
+import { getSkySnapshot } from '../services/sky/index.ts';
 
 /** Guessing codes is slow: a few tries per address per quarter hour. */
 const pairingLimiter = rateLimit({
@@ -25,7 +20,7 @@ const pairingLimiter = rateLimit({
   legacyHeaders: false,
   handler: (_req, _res, next) =>
     next(
-      new HttpError(429, 'too_many_requests', 'Too many pairing attempts from this address. Wait a few minutes and try again.'),
+      TooManyRequestsError('Too many pairing attempts from this address. Wait a few minutes and try again.', 'too_many_requests'),
     ),
 });
 
@@ -33,19 +28,16 @@ const pairingLimiter = rateLimit({
 export const kioskRouter = Router();
 
 kioskRouter.post('/pair', pairingLimiter, validate(KioskPairSchema), async (req, res) => {
-  const { token, screen, venue } = await pairScreen((req.body as KioskPairInput).code, req.ip);
+  const { token, screen, venue } = await pairScreen(req.body.code, req.ip);
   const body: KioskPairedDto = { token, screen: { id: screen.id, name: screen.name, venueId: venue.id, venueName: venue.name } };
   res.status(201).json({ data: body });
 });
 
 kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), async (req, res) => {
   const screen = currentKiosk(req);
-  const input = req.body as KioskHeartbeatInput;
+  const input = req.body;
   assertOwnScreen(screen, { screenId: input.screenId });
-  screen.set({ lastSeenAt: new Date() });
-  if (input.playerVersion !== undefined) screen.set({ playerVersion: input.playerVersion });
-  if (input.showing !== undefined) screen.set({ showing: input.showing });
-  await screen.save();
+  await recordHeartbeat(screen, input);
   // The player trusts the server's clock over its own.
   res.json({ data: { screenId: screen.id, venueId: screen.venueId, serverTime: new Date().toISOString() } });
 });

@@ -2,37 +2,23 @@ import fsp from 'node:fs/promises';
 import { Router, type RequestHandler } from 'express';
 import { z } from 'zod';
 import { MediaLimits } from '@shared/media/limits.ts';
-import { MediaListQuerySchema, MediaUpdateSchema, type MediaListQuery, type MediaUpdateInput } from '@shared/media/schemas.ts';
-import { IdSchema } from '@shared/schemas/common.ts';
-import { ConflictError, HttpError } from '../errors.ts';
-import {
-  requestRenditions,
-  deleteMedia,
-  objectsForMedia,
-  suggestObjects,
-  searchMedia,
-  uploadMedia,
-  updateMedia,
-  findMediaUsage,
-} from '../services/media/index.ts';
+import { MediaListQuerySchema, MediaUpdateSchema } from '@shared/media/schemas.ts';
+import { HttpError } from '../errors.ts';
 import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
-import { validate } from '../middlewares/validate.ts';
-import { Media, MediaRendition, User } from '../models/index.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
+import { Media, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
-
-/** Loads an image with its renditions and uploader; a malformed or unknown id loads nothing (authorize then refuses). */
-async function findMedia(id: string): Promise<Media | null> {
-  if (!IdSchema.safeParse(id).success) return null;
-  return Media.findByPk(id, {
-    include: [
-      { model: MediaRendition, as: 'renditions' },
-      { model: User, as: 'uploadedBy', attributes: ['id', 'name'] },
-    ],
-  });
-}
+import { deleteMedia } from '../services/media/index.ts';
+import { objectsForMedia, suggestObjects } from '../services/media/index.ts';
+import { searchMedia } from '../services/media/index.ts';
+import { uploadMedia } from '../services/media/index.ts';
+import { updateMedia } from '../services/media/index.ts';
+import { retryRenditions } from '../services/media/index.ts';
+import { findMediaUsage } from '../services/media/index.ts';
+import { loadMedia } from './load.ts';
 
 async function present(media: Media, viewer: User) {
   const objects = await objectsForMedia([media.id]);
@@ -52,10 +38,10 @@ const mayUpload: RequestHandler = (req, _res, next) => {
 export const mediaRouter = Router();
 mediaRouter.use(requireUser);
 
-mediaRouter.get('/', validate(MediaListQuerySchema, 'query'), async (req, res) => {
+mediaRouter.get('/', validateQuery(MediaListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'media', 'list');
-  const { rows, total, page } = await searchMedia(req.query as MediaListQuery);
+  const { rows, total, page } = await searchMedia(req.query);
   const objects = await objectsForMedia(rows.map((m) => m.id));
   const { uploadMaxBytes, maxPixels } = mediaSettings();
   res.json({
@@ -64,9 +50,9 @@ mediaRouter.get('/', validate(MediaListQuerySchema, 'query'), async (req, res) =
   });
 });
 
-mediaRouter.get('/object-suggestions', validate(SuggestQuerySchema, 'query'), async (req, res) => {
+mediaRouter.get('/object-suggestions', validateQuery(SuggestQuerySchema), async (req, res) => {
   authorize(currentUser(req), 'media', 'list');
-  res.json({ data: await suggestObjects((req.query as { q: string }).q) });
+  res.json({ data: await suggestObjects(req.query.q) });
 });
 
 mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
@@ -76,7 +62,7 @@ mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
   }
   try {
     const media = await uploadMedia({ file: req.file, fields: req.body, uploader: viewer, ip: req.ip });
-    const loaded = (await findMedia(media.id))!;
+    const loaded = await loadMedia(media.id);
     res.status(201).json({ data: await present(loaded, viewer) });
   } finally {
     await fsp.rm(req.file.path, { force: true });
@@ -85,22 +71,22 @@ mediaRouter.post('/', mayUpload, singleImageUpload, async (req, res) => {
 
 mediaRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'read', media);
   res.json({ data: { ...(await present(media, viewer)), usage: await findMediaUsage(media.id) } });
 });
 
 mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'update', media);
-  await updateMedia(media, req.body as MediaUpdateInput, viewer, req.ip);
-  res.json({ data: await present((await findMedia(media.id))!, viewer) });
+  await updateMedia(media, req.body, viewer, req.ip);
+  res.json({ data: await present(await loadMedia(media.id), viewer) });
 });
 
 mediaRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'delete', media);
   await deleteMedia(media, viewer, req.ip);
   res.status(204).end();
@@ -108,7 +94,7 @@ mediaRouter.delete('/:id', async (req, res) => {
 
 mediaRouter.get('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'read', media);
   res.json({
     data: {
@@ -122,12 +108,8 @@ mediaRouter.get('/:id/renditions', async (req, res) => {
 /** Makes the renditions again, e.g. after a failure. */
 mediaRouter.post('/:id/renditions', async (req, res) => {
   const viewer = currentUser(req);
-  const media = await findMedia(req.params.id as string);
+  const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'update', media);
-  if (media.renditionsStatus === 'processing')
-    throw ConflictError('The renditions are being made right now.', 'already_processing');
-  await media.update({ renditionsStatus: 'pending', renditionsError: null });
-  await requestRenditions(media.id);
-  await media.reload();
-  res.status(202).json({ data: { status: media.renditionsStatus, error: media.renditionsError } });
+  const queued = await retryRenditions(media);
+  res.status(202).json({ data: { status: queued.renditionsStatus, error: queued.renditionsError } });
 });

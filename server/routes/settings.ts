@@ -3,14 +3,11 @@ import {
   CosmologyChangeSchema,
   CosmologyPreviewSchema,
   SettingsUpdateSchema,
-  type CosmologyChangeInput,
-  type CosmologyPreviewInput,
   type SettingsDto,
-  type SettingsUpdateInput,
 } from '@shared/schemas/settings.ts';
 import type { StatementLocale } from '@shared/statements/index.ts';
 import { calculate } from '@shared/engine/calculate.ts';
-import { HttpError } from '../errors.ts';
+import { BadRequestError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import type { OrganisationSettings } from '../models/index.ts';
@@ -48,14 +45,14 @@ settingsRouter.get('/', async (req, res) => {
 settingsRouter.patch('/', validate(SettingsUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'settings', 'update');
-  res.json({ data: presentSettings(await updateSettings(req.body as SettingsUpdateInput, viewer)) });
+  res.json({ data: presentSettings(await updateSettings(req.body, viewer)) });
 });
 
 settingsRouter.post('/cosmology/preview', validate(CosmologyPreviewSchema), async (req, res) => {
   authorize(currentUser(req), 'settings', 'update');
-  const { model } = req.body as CosmologyPreviewInput;
+  const { model } = req.body;
   const probe = calculate({ quantity: 'lookback_time', inputs: { z: 1 }, model });
-  if ('error' in probe) throw new HttpError(400, 'invalid_model', `This cosmology cannot be used: ${probe.error.message}.`);
+  if ('error' in probe) throw BadRequestError(`This cosmology cannot be used: ${probe.error.message}.`, 'invalid_model');
   const settings = await getSettings();
   const preview = await previewCosmologyChange(model);
   res.json({ data: { ...preview, version: settings.version, proposedLabel: probe.model?.label ?? '' } });
@@ -64,6 +61,6 @@ settingsRouter.post('/cosmology/preview', validate(CosmologyPreviewSchema), asyn
 settingsRouter.put('/cosmology', validate(CosmologyChangeSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'settings', 'update');
-  const { model, expectedVersion } = req.body as CosmologyChangeInput;
+  const { model, expectedVersion } = req.body;
   res.json({ data: presentSettings(await changeCosmology(model, expectedVersion, viewer)) });
 });

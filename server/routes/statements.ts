@@ -1,34 +1,19 @@
 import { Router } from 'express';
-import { Op, type WhereOptions } from 'sequelize';
-import { IdSchema } from '@shared/schemas/common.ts';
-import {
-  StatementCreateSchema,
-  StatementListQuerySchema,
-  type StatementCreateInput,
-  type StatementListQuery,
-} from '@shared/schemas/statement.ts';
+import { StatementCreateSchema, StatementListQuerySchema } from '@shared/schemas/statement.ts';
 import { STATEMENT_TEMPLATES } from '@shared/statements/index.ts';
-import { NotFoundError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
-import { validate } from '../middlewares/validate.ts';
-import { CosmologyDescription, SkyObject, Statement, Venue } from '../models/index.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
+import type { Statement, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentStatement } from '../presenters/statement.ts';
-import { acceptStatementWording, findOrCreateStatement, recomputeStatements, readWorking } from '../services/statements/index.ts';
-
-/** What presenting a statement needs loaded with it: its cosmology and its venue. */
-const INCLUDE = [
-  { model: CosmologyDescription, as: 'modelDescription' },
-  { model: Venue, as: 'venue', attributes: ['id', 'name', 'timeZone'] },
-];
-
-async function loadStatement(id: string) {
-  if (!IdSchema.safeParse(id).success) throw NotFoundError('There is no such statement.');
-  const statement = await Statement.findByPk(id, { include: INCLUDE });
-  if (!statement) throw NotFoundError('There is no such statement.');
-  const object = await SkyObject.findByPk(statement.skyObjectId, { attributes: ['id', 'name', 'kind'] });
-  return { statement, object: object!, working: await readWorking(statement.working) };
-}
+import {
+  acceptStatementWording,
+  findOrCreateStatement,
+  listStatements,
+  loadStatementView,
+  recomputeStatements,
+} from '../services/statements/index.ts';
+import { loadStatement } from './load.ts';
 
 export const statementTemplatesRouter = Router();
 statementTemplatesRouter.use(requireUser);
@@ -51,71 +36,50 @@ statementTemplatesRouter.get('/', (req, res) => {
 export const statementsRouter = Router();
 statementsRouter.use(requireUser);
 
-statementsRouter.get('/', validate(StatementListQuerySchema, 'query'), async (req, res) => {
+statementsRouter.get('/', validateQuery(StatementListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'read');
-  const q = req.query as unknown as StatementListQuery;
-  const where: WhereOptions<Statement> = {
-    ...(q.status ? { status: q.status } : {}),
-    ...(q.objectId ? { skyObjectId: q.objectId } : {}),
-    ...(q.templateId ? { templateId: q.templateId } : {}),
-  };
-  const { rows, count } = await Statement.findAndCountAll({
-    where,
-    // The list shows no working: leave it in the database.
-    attributes: { exclude: ['working'] },
-    include: INCLUDE,
-    // Statements that need attention first, then the newest computations.
-    order: [
-      [Statement.sequelize!.literal("CASE status WHEN 'broken' THEN 0 WHEN 'changed' THEN 1 ELSE 2 END"), 'ASC'],
-      ['computedAt', 'DESC'],
-    ],
-    limit: q.pageSize,
-    offset: (q.page - 1) * q.pageSize,
-  });
-  const objects = new Map(
-    (
-      await SkyObject.findAll({
-        where: { id: { [Op.in]: [...new Set(rows.map((s) => s.skyObjectId))] } },
-        attributes: ['id', 'name', 'kind'],
-      })
-    ).map((o) => [o.id, o]),
-  );
+  const q = req.query;
+  const { rows, total } = await listStatements(q);
   res.json({
-    data: rows.map((s) => presentStatement(s, objects.get(s.skyObjectId)!, viewer)),
-    meta: { total: count, page: q.page, pageSize: q.pageSize },
+    data: rows.map(({ statement, object }) => presentStatement(statement, object, viewer)),
+    meta: { total, page: q.page, pageSize: q.pageSize },
   });
 });
+
+/** The statement with its object and working, presented (what every answer about one statement sends). */
+async function present(statement: Statement, viewer: User) {
+  const { object, working } = await loadStatementView(statement);
+  return presentStatement(statement, object, viewer, { working });
+}
 
 statementsRouter.post('/', validate(StatementCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'statement', 'create');
-  const { objectId, templateId, venueId } = req.body as StatementCreateInput;
+  const { objectId, templateId, venueId } = req.body;
   const { statement: made, created } = await findOrCreateStatement(objectId, templateId, viewer, venueId ?? null);
-  const { statement, object, working } = await loadStatement(made.id);
-  res.status(created ? 201 : 200).json({ data: presentStatement(statement, object, viewer, { working }) });
+  res.status(created ? 201 : 200).json({ data: await present(await loadStatement(made.id), viewer) });
 });
 
 statementsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const statement = await loadStatement(req.params.id);
   authorize(viewer, 'statement', 'read');
-  const { statement, object, working } = await loadStatement(req.params.id as string);
-  res.json({ data: presentStatement(statement, object, viewer, { working }) });
+  res.json({ data: await present(statement, viewer) });
 });
 
 statementsRouter.post('/:id/recompute', async (req, res) => {
   const viewer = currentUser(req);
+  const statement = await loadStatement(req.params.id);
   authorize(viewer, 'statement', 'recompute');
-  const { statement } = await loadStatement(req.params.id as string);
   await recomputeStatements({ statementIds: [statement.id] });
-  const reloaded = await loadStatement(statement.id);
-  res.json({ data: presentStatement(reloaded.statement, reloaded.object, viewer, { working: reloaded.working }) });
+  res.json({ data: await present(await loadStatement(statement.id), viewer) });
 });
 
 statementsRouter.post('/:id/accept', async (req, res) => {
   const viewer = currentUser(req);
-  const { statement, object, working } = await loadStatement(req.params.id as string);
+  const statement = await loadStatement(req.params.id);
   authorize(viewer, 'statement', 'accept', statement);
   await acceptStatementWording(statement, viewer);
-  res.json({ data: presentStatement(statement, object, viewer, { working }) });
+  res.json({ data: await present(statement, viewer) });
 });

@@ -1,18 +1,14 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
-import { UserInviteSchema, UserUpdateSchema, type UserInviteInput, type UserUpdateInput } from '@shared/schemas/user.ts';
+import { UserInviteSchema, UserUpdateSchema } from '@shared/schemas/user.ts';
 import { ConflictError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentUser } from '../presenters/user.ts';
-import { resendInvitation, inviteUser, updateUser } from '../services/users/index.ts';
-
-/** Loads a user by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
-async function findUser(id: string): Promise<User | null> {
-  return IdSchema.safeParse(id).success ? User.findByPk(id) : null;
-}
+import { resendInvitation, inviteUser } from '../services/users/index.ts';
+import { updateUser } from '../services/users/index.ts';
+import { loadUser } from './load.ts';
 
 export const usersRouter = Router();
 usersRouter.use(requireUser);
@@ -27,21 +23,21 @@ usersRouter.get('/', async (req, res) => {
 usersRouter.post('/', validate(UserInviteSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'user', 'invite');
-  const user = await inviteUser(req.body as UserInviteInput, viewer, req.ip);
+  const user = await inviteUser(req.body, viewer, req.ip);
   res.status(201).json({ data: presentUser(user, viewer) });
 });
 
 usersRouter.patch('/:id', validate(UserUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const target = await findUser(req.params.id as string);
+  const target = await loadUser(req.params.id);
   authorize(viewer, 'user', 'update', target);
-  const updated = await updateUser(target, req.body as UserUpdateInput, viewer, req.ip);
+  const updated = await updateUser(target, req.body, viewer, req.ip);
   res.json({ data: presentUser(updated, viewer) });
 });
 
 usersRouter.post('/:id/invitation', async (req, res) => {
   const viewer = currentUser(req);
-  const target = await findUser(req.params.id as string);
+  const target = await loadUser(req.params.id);
   authorize(viewer, 'user', 'update', target);
   if (target.passwordHash) throw ConflictError('This person has already accepted their invitation.', 'already_accepted');
   await resendInvitation(target, viewer);

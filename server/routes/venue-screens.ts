@@ -1,70 +1,29 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
-import { ScreenCreateSchema, type PairingCodeDto, type ScreenCreateInput } from '@shared/schemas/kiosk.ts';
-import { getSequelize } from '../db.ts';
-import { ConflictError, NotFoundError } from '../errors.ts';
+import { ScreenCreateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
-import { KioskScreen, Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
-import { recordAudit } from '../services/audit.ts';
 import { issuePairingCode, revokeScreen } from '../services/publishing/index.ts';
+import { addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
+import { loadScreen, loadVenue, parentParam } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });
 
-async function loadVenue(id: string): Promise<Venue | null> {
-  return IdSchema.safeParse(id).success ? Venue.findByPk(id) : null;
-}
-
-/** A screen of this venue; another venue's screen is "not found" here, never touched. */
-async function loadScreen(venue: Venue, screenId: string): Promise<KioskScreen> {
-  const screen = IdSchema.safeParse(screenId).success
-    ? await KioskScreen.findOne({ where: { id: screenId, venueId: venue.id } })
-    : null;
-  if (!screen) throw NotFoundError('There is no such screen at this venue.');
-  return screen;
-}
-
-const params = (p: unknown) => p as { venueId: string; screenId: string };
-
 venueScreensRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'read', venue);
-  const screens = await KioskScreen.findAll({ where: { venueId: venue.id }, order: [['name', 'ASC']] });
+  const screens = await listScreens(venue);
   res.json({ data: screens.map((s) => presentKioskScreen(s)) });
 });
 
 venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const { name } = req.body as ScreenCreateInput;
-  const sequelize = getSequelize();
-  const clash = await KioskScreen.findOne({
-    where: sequelize.and(
-      { venueId: venue.id },
-      sequelize.where(sequelize.fn('lower', sequelize.col('name')), name.toLowerCase()),
-    ),
-  });
-  if (clash) throw ConflictError(`This venue already has a screen called "${clash.name}".`, 'screen_name_taken');
-  const screen = await getSequelize().transaction(async (transaction) => {
-    const created = await KioskScreen.create({ venueId: venue.id, name }, { transaction });
-    await recordAudit(
-      {
-        actorId: viewer.id,
-        action: 'kiosk.screen_added',
-        subjectType: 'kiosk_screen',
-        subjectId: created.id,
-        data: { venueId: venue.id, name },
-        ip: req.ip,
-      },
-      transaction,
-    );
-    return created;
-  });
+  const screen = await addScreen(venue, req.body.name, viewer, req.ip);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
   const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
   res.status(201).json({ data: body });
@@ -73,9 +32,9 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
 /** Re-pair: a new one-time code; the screen's current token keeps working until the code is used. */
 venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await loadScreen(venue, params(req.params).screenId);
+  const screen = await loadScreen(venue, req.params.screenId);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
   const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
   res.status(201).json({ data: body });
@@ -83,30 +42,17 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
 
 venueScreensRouter.post('/:screenId/revoke', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await revokeScreen(await loadScreen(venue, params(req.params).screenId), viewer, req.ip);
+  const screen = await revokeScreen(await loadScreen(venue, req.params.screenId), viewer, req.ip);
   res.json({ data: presentKioskScreen(screen) });
 });
 
 venueScreensRouter.delete('/:screenId', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await loadVenue(params(req.params).venueId);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await loadScreen(venue, params(req.params).screenId);
-  await getSequelize().transaction(async (transaction) => {
-    await recordAudit(
-      {
-        actorId: viewer.id,
-        action: 'kiosk.screen_removed',
-        subjectType: 'kiosk_screen',
-        subjectId: screen.id,
-        data: { venueId: venue.id, name: screen.name },
-        ip: req.ip,
-      },
-      transaction,
-    );
-    await screen.destroy({ transaction });
-  });
+  const screen = await loadScreen(venue, req.params.screenId);
+  await removeScreen(screen, viewer, req.ip);
   res.status(204).end();
 });

@@ -1,40 +1,20 @@
 import { Router } from 'express';
-import { IdSchema } from '@shared/schemas/common.ts';
-import {
-  SkyQuerySchema,
-  VenueCreateSchema,
-  VenueUpdateSchema,
-  type SkyQuery,
-  type VenueCreateValues,
-  type VenueUpdateValues,
-} from '@shared/schemas/venue.ts';
+import { SkyQuerySchema, VenueCreateSchema, VenueUpdateSchema } from '@shared/schemas/venue.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { computeSkyTonight } from '@shared/sky/tonight.ts';
-import { getSequelize } from '../db.ts';
 import { ValidationError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
-import { validate } from '../middlewares/validate.ts';
-import { KioskScreen, Venue } from '../models/index.ts';
+import { validate, validateQuery } from '../middlewares/validate.ts';
+import { Venue } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
-import { getSkySnapshot, createVenue, deleteVenue, updateVenue } from '../services/sky/index.ts';
+import { countScreens, countScreensByVenue } from '../services/publishing/index.ts';
+import { getSkySnapshot } from '../services/sky/index.ts';
+import { createVenue, deleteVenue, updateVenue } from '../services/sky/index.ts';
+import { loadVenue } from './load.ts';
 import { venueScreensRouter } from './venue-screens.ts';
-
-/** Loads a venue by the id in the URL; a malformed or unknown id loads nothing (authorize then refuses). */
-export async function findVenue(id: string): Promise<Venue | null> {
-  return IdSchema.safeParse(id).success ? Venue.findByPk(id) : null;
-}
-
-async function screenCounts(): Promise<Map<string, number>> {
-  const rows = (await KioskScreen.findAll({
-    attributes: ['venueId', [getSequelize().fn('count', getSequelize().col('id')), 'count']],
-    group: ['venueId'],
-    raw: true,
-  })) as unknown as Array<{ venueId: string; count: string }>;
-  return new Map(rows.map((r) => [r.venueId, Number(r.count)]));
-}
 
 export const venuesRouter = Router();
 venuesRouter.use(requireUser);
@@ -42,7 +22,7 @@ venuesRouter.use(requireUser);
 venuesRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'venue', 'list');
-  const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), screenCounts()]);
+  const [venues, counts] = await Promise.all([Venue.findAll({ order: [['name', 'ASC']] }), countScreensByVenue()]);
   res.json({ data: venues.map((v) => presentVenue(v, viewer, counts.get(v.id) ?? 0)) });
 });
 
@@ -57,39 +37,39 @@ venuesRouter.get('/choices', async (req, res) => {
 venuesRouter.post('/', validate(VenueCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'venue', 'create');
-  const venue = await createVenue(req.body as VenueCreateValues, viewer, req.ip);
+  const venue = await createVenue(req.body, viewer, req.ip);
   res.status(201).json({ data: presentVenue(venue, viewer, 0) });
 });
 
 venuesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'read', venue);
-  res.json({ data: presentVenue(venue, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+  res.json({ data: presentVenue(venue, viewer, await countScreens(venue)) });
 });
 
 venuesRouter.patch('/:id', validate(VenueUpdateSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'update', venue);
-  const updated = await updateVenue(venue, req.body as VenueUpdateValues, viewer, req.ip);
-  res.json({ data: presentVenue(updated, viewer, await KioskScreen.count({ where: { venueId: venue.id } })) });
+  const updated = await updateVenue(venue, req.body, viewer, req.ip);
+  res.json({ data: presentVenue(updated, viewer, await countScreens(venue)) });
 });
 
 venuesRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'delete', venue);
   await deleteVenue(venue, viewer, req.ip);
   res.status(204).end();
 });
 
 /** The sky for a night: the stored snapshot, or for a chosen clock time a fresh one that is not kept. */
-venuesRouter.get('/:id/sky', validate(SkyQuerySchema, 'query'), async (req, res) => {
+venuesRouter.get('/:id/sky', validateQuery(SkyQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
-  const venue = await findVenue(String(req.params.id));
+  const venue = await loadVenue(req.params.id);
   authorize(viewer, 'venue', 'readSky', venue);
-  const query = req.query as SkyQuery;
+  const query = req.query;
   const localDate = query.date ?? nightDateAt(Date.now(), venue.timeZone);
   if (query.at) {
     try {

@@ -50,7 +50,7 @@ describe('channels', () => {
       .send({ venueId: '00000000-0000-4000-8000-000000000000', name: 'Ghost' });
     expect(noVenue.status).toBe(400);
     expect(noVenue.body.error.fields.venueId).toBe('There is no such venue');
-    expect((await crew.editor.agent.get('/api/channels/not-an-id')).status).toBe(403);
+    expect((await crew.editor.agent.get('/api/channels/not-an-id')).status).toBe(404);
   });
 
   it('adds slides with clamped durations; refuses unpublished pages, foreign statements, uncredited images and bad windows', async () => {
@@ -159,7 +159,7 @@ describe('channels', () => {
 
     expect((await crew.editor.agent.delete(`/api/channels/${b.id}`)).status).toBe(204);
     expect(await ChannelSlide.count({ where: { channelId: b.id } })).toBe(0);
-    expect((await crew.editor.agent.get(`/api/channels/${b.id}`)).status).toBe(403);
+    expect((await crew.editor.agent.get(`/api/channels/${b.id}`)).status).toBe(404);
   });
 
   it('gives staff the preview feed and the sources a slide can be made from', async () => {

@@ -12,15 +12,13 @@ let venueCounter = 0;
 async function venueWithScreen(agent: Awaited<ReturnType<typeof signedInAgent>>['agent'], screenName = 'Foyer') {
   venueCounter += 1;
   const venue = (
-    await agent
-      .post('/api/venues')
-      .send({
-        name: `Kiosk Test Dome ${venueCounter}`,
-        latitude: 51.5,
-        longitude: -0.1,
-        elevationM: 10,
-        timeZone: 'Europe/London',
-      })
+    await agent.post('/api/venues').send({
+      name: `Kiosk Test Dome ${venueCounter}`,
+      latitude: 51.5,
+      longitude: -0.1,
+      elevationM: 10,
+      timeZone: 'Europe/London',
+    })
   ).body.data;
   const added = await agent.post(`/api/venues/${venue.id}/screens`).send({ name: screenName });
   expect(added.status).toBe(201);

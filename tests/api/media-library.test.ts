@@ -182,7 +182,7 @@ describe('where used, and deleting', () => {
     expect((await reviewer.delete(`/api/media/${ids.galaxy}`)).status).toBe(403);
     const { agent: editor } = await signedInAgent('editor');
     expect((await editor.delete(`/api/media/${ids.galaxy}`)).status).toBe(204);
-    expect((await editor.get(`/api/media/${ids.galaxy}`)).status).toBe(403);
+    expect((await editor.get(`/api/media/${ids.galaxy}`)).status).toBe(404);
   });
 
   it('anonymous visitors get 401 from every media endpoint', async () => {

@@ -196,7 +196,7 @@ describe('who may do what', () => {
     expect((await reviewer.agent.get(`/api/pages/${page.id}`)).status).toBe(403);
     const listed = (await other.agent.get('/api/pages?pageSize=200')).body.data.map((p: { id: string }) => p.id);
     expect(listed).not.toContain(page.id);
-    expect((await other.agent.get('/api/pages/not-an-id')).status).toBe(403);
+    expect((await other.agent.get('/api/pages/not-an-id')).status).toBe(404);
 
     await owner.agent.post(`/api/pages/${page.id}/submit`).send({});
     expect((await other.agent.get(`/api/pages/${page.id}`)).status).toBe(200);

@@ -90,10 +90,10 @@ describe('users (admin)', () => {
     expect(res.status).toBe(401);
   });
 
-  it('a malformed or unknown id is refused, not a crash', async () => {
+  it('a malformed or unknown id is not found, not a crash', async () => {
     const { agent } = await signedInAgent('admin');
-    expect((await agent.patch('/api/users/not-a-uuid').send({ name: 'X' })).status).toBe(403);
-    expect((await agent.patch('/api/users/00000000-0000-4000-8000-000000000000').send({ name: 'X' })).status).toBe(403);
+    expect((await agent.patch('/api/users/not-a-uuid').send({ name: 'X' })).status).toBe(404);
+    expect((await agent.patch('/api/users/00000000-0000-4000-8000-000000000000').send({ name: 'X' })).status).toBe(404);
   });
 
   it('admins read caught mail in the outbox', async () => {

@@ -72,7 +72,7 @@ describe('venues (admin manages, editor reads)', () => {
     expect((await agent.post(`/api/venues/${created.id}/screens`).send({ name: 'Foyer' })).status).toBe(201);
     expect((await agent.delete(`/api/venues/${created.id}`)).status).toBe(204);
     expect(await KioskScreen.count({ where: { venueId: created.id } })).toBe(0);
-    expect((await agent.get(`/api/venues/${created.id}`)).status).toBe(403);
+    expect((await agent.get(`/api/venues/${created.id}`)).status).toBe(404);
   });
 
   it('an editor lists and reads venues but cannot change them', async () => {
@@ -107,8 +107,8 @@ describe('venues (admin manages, editor reads)', () => {
     expect((await supertest(await getTestApp()).get('/api/venues')).status).toBe(401);
   });
 
-  it('a malformed venue id is refused like a missing one (403, not 500)', async () => {
+  it('a malformed venue id is not found, like a missing one (404, not 500)', async () => {
     const { agent } = await signedInAgent('admin');
-    expect((await agent.get('/api/venues/not-a-uuid')).status).toBe(403);
+    expect((await agent.get('/api/venues/not-a-uuid')).status).toBe(404);
   });
 });

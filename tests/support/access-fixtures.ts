@@ -53,7 +53,13 @@ export async function buildAccessWorld() {
   if (channel.status !== 201) throw new Error(`channel: ${JSON.stringify(channel.body)}`);
   const slide = await signed.admin.agent.post(`/api/channels/${channel.body.data.id}/slides`).send({ kind: 'sky_tonight' });
   if (slide.status !== 201) throw new Error(`slide: ${JSON.stringify(slide.body)}`);
+  // A checked CSV import whose one row is rejected, so the import routes meet a real row and committing it changes nothing.
+  const checked = await signed.admin.agent
+    .post('/api/catalogue/imports')
+    .attach('file', Buffer.from('object,quantity,value\nNo Such Object (demo),redshift,0.2\n', 'utf8'), 'access-matrix.csv');
+  if (checked.status !== 201) throw new Error(`import: ${JSON.stringify(checked.body)}`);
   const ids: Record<string, string> = {
+    import: checked.body.data.id,
     page: page.id,
     reviewPage: inReview.id,
     slide: slide.body.data.slides[0].id,
@@ -83,6 +89,7 @@ export function fillPath(template: string, ids: Record<string, string>): string 
     [/^\/api\/catalogue\/sources\/:id/, ids.source],
     [/^\/api\/venues\/:id/, ids.venue],
     [/^\/api\/channels\/:id/, ids.channel],
+    [/^\/api\/catalogue\/imports\/:id/, ids.import],
   ];
   let path = template;
   for (const [re, id] of byPrefix) if (re.test(path)) path = path.replace(':id', id);

@@ -1,13 +1,18 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
+import { z } from 'zod';
 import { ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-import.ts';
-import { IdSchema } from '@shared/schemas/common.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
-import { HttpError, NotFoundError, ValidationError } from '../../errors.ts';
+import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { commitCatalogueImport, checkCatalogueImport } from '../../services/catalogue/index.ts';
+import { commitCatalogueImport } from '../../services/catalogue/index.ts';
+import { checkCatalogueImport } from '../../services/catalogue/index.ts';
+import { loadImport } from '../load.ts';
+
+/** The form fields beside the file: the column mapping, as JSON text (multer gives every field as text). */
+const ImportFieldsSchema = z.object({ mapping: z.string().optional() });
 
 const megabytes = (bytes: number) => `${Math.round(bytes / (1024 * 1024))} MB`;
 
@@ -60,9 +65,10 @@ importsRouter.post(
   async (req, res) => {
     const viewer = currentUser(req);
     if (!req.file) throw ValidationError('Choose a CSV file to check.', { file: 'Choose a CSV file' });
+    const { mapping: mappingText } = ImportFieldsSchema.parse(req.body ?? {});
     let mapping: unknown;
     try {
-      mapping = req.body?.mapping ? JSON.parse(req.body.mapping as string) : undefined;
+      mapping = mappingText ? JSON.parse(mappingText) : undefined;
     } catch {
       throw ValidationError('The column mapping is not valid JSON.', { mapping: 'Not valid JSON' });
     }
@@ -73,18 +79,15 @@ importsRouter.post(
 );
 
 importsRouter.get('/:id', async (req, res) => {
+  const record = await loadImport(req.params.id);
   authorize(currentUser(req), 'catalogue', 'import');
-  const record = IdSchema.safeParse(req.params.id).success
-    ? await CatalogueImport.findByPk(req.params.id, { attributes: { exclude: ['acceptedRows'] } })
-    : null;
-  if (!record) throw NotFoundError('There is no import with that id.');
   res.json({ data: present(record) });
 });
 
 importsRouter.post('/:id/commit', async (req, res) => {
   const viewer = currentUser(req);
+  const { id } = await loadImport(req.params.id);
   authorize(viewer, 'catalogue', 'import');
-  if (!IdSchema.safeParse(req.params.id).success) throw NotFoundError('There is no import with that id.');
-  const { record, inserted } = await commitCatalogueImport(req.params.id as string, viewer, req.ip);
+  const { record, inserted } = await commitCatalogueImport(id, viewer, req.ip);
   res.json({ data: present(record, inserted) });
 });

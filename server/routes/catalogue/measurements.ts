@@ -5,19 +5,17 @@ import {
   MeasurementPreferredSchema,
   MeasurementRetireSchema,
   MeasurementReviewSchema,
-  type MeasurementPreferredInput,
-  type MeasurementReviewInput,
 } from '@shared/schemas/measurement.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
-import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentMeasurement } from '../../presenters/measurement.ts';
-import { setPreferred, reviewMeasurement, retireMeasurement, updateMeasurement } from '../../services/catalogue/index.ts';
-import { findMeasurement } from './load.ts';
+import { setPreferred } from '../../services/catalogue/index.ts';
+import { reviewMeasurement } from '../../services/catalogue/index.ts';
+import { retireMeasurement, updateMeasurement } from '../../services/catalogue/index.ts';
+import { loadMeasurement } from '../load.ts';
 
-const notFound = () => NotFoundError('There is no measurement with that id.');
 const ChangeReasonSchema = z.object({
   reason: z.string().trim().max(CatalogueLimits.reasonMax, `At most ${CatalogueLimits.reasonMax} characters`).optional(),
 });
@@ -26,47 +24,43 @@ export const measurementsRouter = Router();
 
 measurementsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const m = await loadMeasurement(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const m = await findMeasurement(req.params.id);
-  if (!m) throw notFound();
   res.json({ data: presentMeasurement(m, viewer) });
 });
 
 measurementsRouter.patch('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const m = await loadMeasurement(req.params.id);
+  // Refused before the body is read, as the other catalogue writes are.
   authorize(viewer, 'catalogue', 'keepMeasurements');
   const values = MeasurementInputSchema.parse(req.body ?? {});
   const { reason } = ChangeReasonSchema.parse(req.body ?? {});
-  const m = await findMeasurement(req.params.id);
-  if (!m) throw notFound();
   await updateMeasurement(m.id, values, viewer, reason || null);
-  res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
+  res.json({ data: presentMeasurement(await loadMeasurement(m.id), viewer) });
 });
 
 // Measurements are never deleted: DELETE retires one, keeping it and its history.
-measurementsRouter.delete('/:id', validate(MeasurementRetireSchema, 'query'), async (req, res) => {
+measurementsRouter.delete('/:id', validateQuery(MeasurementRetireSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const m = await findMeasurement(req.params.id);
-  if (!m) throw notFound();
+  const m = await loadMeasurement(req.params.id);
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await retireMeasurement(m.id, (req.query as unknown as { reason: string }).reason, viewer);
-  res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
+  await retireMeasurement(m.id, req.query.reason, viewer);
+  res.json({ data: presentMeasurement(await loadMeasurement(m.id), viewer) });
 });
 
 measurementsRouter.put('/:id/preferred', validate(MeasurementPreferredSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const m = await findMeasurement(req.params.id);
-  if (!m) throw notFound();
+  const m = await loadMeasurement(req.params.id);
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await setPreferred(m.id, req.body as MeasurementPreferredInput, viewer);
-  res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
+  await setPreferred(m.id, req.body, viewer);
+  res.json({ data: presentMeasurement(await loadMeasurement(m.id), viewer) });
 });
 
 measurementsRouter.post('/:id/review', validate(MeasurementReviewSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const m = await findMeasurement(req.params.id);
-  if (!m) throw notFound();
+  const m = await loadMeasurement(req.params.id);
   authorize(viewer, 'catalogue', 'keepMeasurements');
-  await reviewMeasurement(m.id, req.body as MeasurementReviewInput, viewer);
-  res.json({ data: presentMeasurement((await findMeasurement(m.id))!, viewer) });
+  await reviewMeasurement(m.id, req.body, viewer);
+  res.json({ data: presentMeasurement(await loadMeasurement(m.id), viewer) });
 });

@@ -1,73 +1,58 @@
 import { Router } from 'express';
-import { MeasurementInputSchema, type MeasurementValues } from '@shared/schemas/measurement.ts';
-import {
-  SkyObjectInputSchema,
-  SkyObjectListQuerySchema,
-  type SkyObjectListQuery,
-  type SkyObjectValues,
-} from '@shared/schemas/sky-object.ts';
-import { AuthorizationError, NotFoundError } from '../../errors.ts';
+import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
+import { SkyObjectInputSchema, SkyObjectListQuerySchema } from '@shared/schemas/sky-object.ts';
+import { AuthorizationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
 import { authorize, can } from '../../policies/index.ts';
 import { presentHistory, presentMeasurement } from '../../presenters/measurement.ts';
 import { presentSkyObject } from '../../presenters/sky-object.ts';
-import {
-  createMeasurement,
-  createSkyObject,
-  deleteSkyObject,
-  updateSkyObject,
-  listSkyObjects,
-} from '../../services/catalogue/index.ts';
-import { findSkyObject, measurementIncludes } from './load.ts';
-
-const notFound = () => NotFoundError('There is no object with that id in the catalogue.');
+import { createMeasurement } from '../../services/catalogue/index.ts';
+import { createSkyObject, deleteSkyObject, updateSkyObject } from '../../services/catalogue/index.ts';
+import { listSkyObjects } from '../../services/catalogue/index.ts';
+import { loadMeasurement, loadSkyObject, measurementIncludes } from '../load.ts';
 
 export const objectsRouter = Router();
 
-objectsRouter.get('/', validate(SkyObjectListQuerySchema, 'query'), async (req, res) => {
+objectsRouter.get('/', validateQuery(SkyObjectListQuerySchema), async (req, res) => {
   authorize(currentUser(req), 'catalogue', 'read');
-  res.json({ data: await listSkyObjects(req.query as unknown as SkyObjectListQuery) });
+  res.json({ data: await listSkyObjects(req.query) });
 });
 
 objectsRouter.post('/', validate(SkyObjectInputSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await createSkyObject(req.body as SkyObjectValues, viewer, req.ip);
+  const object = await createSkyObject(req.body, viewer, req.ip);
   res.status(201).json({ data: presentSkyObject(object, viewer) });
 });
 
 objectsRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   res.json({ data: presentSkyObject(object, viewer) });
 });
 
 objectsRouter.patch('/:id', validate(SkyObjectInputSchema), async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
-  res.json({ data: presentSkyObject(await updateSkyObject(object, req.body as SkyObjectValues, viewer, req.ip), viewer) });
+  res.json({ data: presentSkyObject(await updateSkyObject(object, req.body, viewer, req.ip), viewer) });
 });
 
 objectsRouter.delete('/:id', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'editObject');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   await deleteSkyObject(object, viewer, req.ip);
   res.status(204).end();
 });
 
 objectsRouter.get('/:id/measurements', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   const measurements = await Measurement.findAll({
     where: { skyObjectId: object.id },
     include: measurementIncludes(),
@@ -83,20 +68,17 @@ objectsRouter.get('/:id/measurements', async (req, res) => {
 
 objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   const direct = can(viewer, 'catalogue', 'addMeasurement');
   if (!direct && !can(viewer, 'catalogue', 'proposeMeasurement')) throw AuthorizationError();
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
-  const created = await createMeasurement(object, req.body as MeasurementValues, viewer, !direct);
-  const loaded = await Measurement.findByPk(created.id, { include: measurementIncludes() });
-  res.status(201).json({ data: presentMeasurement(loaded!, viewer) });
+  const created = await createMeasurement(object, req.body, viewer, !direct);
+  res.status(201).json({ data: presentMeasurement(await loadMeasurement(created.id), viewer) });
 });
 
 objectsRouter.get('/:id/history', async (req, res) => {
   const viewer = currentUser(req);
+  const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const object = await findSkyObject(req.params.id);
-  if (!object) throw notFound();
   const [history, measurements] = await Promise.all([
     MeasurementHistory.findAll({
       where: { skyObjectId: object.id },

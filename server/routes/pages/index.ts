@@ -1,37 +1,23 @@
 import { Router } from 'express';
 import type { JSONContent } from '@tiptap/core';
 import { validateDoc } from '@shared/editor/schema.ts';
-import {
-  DigestSchema,
-  docBytes,
-  PageCreateSchema,
-  PageListQuerySchema,
-  PageSaveSchema,
-  type PageCreateInput,
-  type PageListQuery,
-  type PageSaveInput,
-} from '@shared/schemas/page.ts';
+import { DigestSchema, docBytes, PageCreateSchema, PageListQuerySchema, PageSaveSchema } from '@shared/schemas/page.ts';
 import { PageLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { PageRevision } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import {
-  renderPublishedPage,
-  renderWithLookups,
-  dashboardFor,
-  setDigest,
-  loadPageDetail,
-  listPages,
-  createPage,
-  savePage,
-  currentText,
-  loadStatements,
-} from '../../services/pages/index.ts';
-import { findPage } from './load.ts';
+import { renderPublishedPage, renderWithLookups } from '../../services/pages/index.ts';
+import { dashboardFor, setDigest } from '../../services/pages/index.ts';
+import { loadPageDetail } from '../../services/pages/index.ts';
+import { listPages } from '../../services/pages/index.ts';
+import { createPage, savePage } from '../../services/pages/index.ts';
+import { currentText, loadStatements } from '../../services/pages/index.ts';
+import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
+import '../../services/pages/page-digest.ts';
 
 const tooLarge = () =>
   new HttpError(
@@ -54,10 +40,10 @@ export function checkedDoc(doc: unknown): JSONContent {
 export const pagesRouter = Router();
 pagesRouter.use(requireUser);
 
-pagesRouter.get('/', validate(PageListQuerySchema, 'query'), async (req, res) => {
+pagesRouter.get('/', validateQuery(PageListQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'page', 'list');
-  const q = req.query as unknown as PageListQuery;
+  const q = req.query;
   const { rows, total } = await listPages(q, viewer);
   res.json({ data: rows, meta: { total, page: q.page, pageSize: q.pageSize } });
 });
@@ -65,7 +51,7 @@ pagesRouter.get('/', validate(PageListQuerySchema, 'query'), async (req, res) =>
 pagesRouter.post('/', validate(PageCreateSchema), async (req, res) => {
   const viewer = currentUser(req);
   authorize(viewer, 'page', 'create');
-  const page = await createPage(req.body as PageCreateInput, viewer);
+  const page = await createPage(req.body, viewer);
   res.status(201).json({ data: await loadPageDetail(page, viewer) });
 });
 
@@ -77,13 +63,13 @@ pagesRouter.get('/dashboard', async (req, res) => {
 
 pagesRouter.put('/digest', validate(DigestSchema), async (req, res) => {
   const viewer = currentUser(req);
-  await setDigest(viewer.id, (req.body as { enabled: boolean }).enabled);
-  res.json({ data: { digest: (req.body as { enabled: boolean }).enabled } });
+  await setDigest(viewer.id, req.body.enabled);
+  res.json({ data: { digest: req.body.enabled } });
 });
 
 pagesRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   res.json({ data: await loadPageDetail(page, viewer) });
 });
@@ -91,9 +77,9 @@ pagesRouter.get('/:id', async (req, res) => {
 /** Autosave: the version the writer started from must still be the server's, else 409 with the server's version in the error. */
 pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'edit', page);
-  const input = req.body as PageSaveInput;
+  const input = req.body;
   const doc = checkedDoc(input.doc);
   // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
   const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);
@@ -103,7 +89,7 @@ pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
 /** The working copy rendered as the public would see it, with each statement's current wording. */
 pagesRouter.get('/:id/preview', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   const revision = (await PageRevision.findByPk(page.currentRevisionId!))!;
   const statements = await loadStatements(revision.statementIds);
@@ -117,7 +103,7 @@ pagesRouter.get('/:id/preview', async (req, res) => {
 /** What the public sees now: the published version, unchanged by later edits or recomputes. */
 pagesRouter.get('/:id/published', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(req.params.id);
+  const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
   res.json({ data: await renderPublishedPage(page.id) });
 });

@@ -1,28 +1,21 @@
 import { Router } from 'express';
 import { DiffQuerySchema, RestoreSchema, type PageRevisionDto } from '@shared/schemas/page.ts';
-import { NotFoundError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { validate } from '../../middlewares/validate.ts';
-import { PageRevision, User, type Page } from '../../models/index.ts';
+import { validate, validateQuery } from '../../middlewares/validate.ts';
+import { PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail, diffRevisions, savePage, loadStatements } from '../../services/pages/index.ts';
-import { findPage } from './load.ts';
+import { loadPageDetail } from '../../services/pages/index.ts';
+import { diffRevisions } from '../../services/pages/index.ts';
+import { savePage } from '../../services/pages/index.ts';
+import { loadStatements } from '../../services/pages/index.ts';
+import { loadPage, loadRevision, parentParam } from '../load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */
 export const revisionsRouter = Router({ mergeParams: true });
 
-const pageParam = (req: { params: object }) => (req.params as Record<string, string>).id;
-
-async function revisionOf(page: Page, number: unknown): Promise<PageRevision> {
-  const n = Number(number);
-  const revision = Number.isInteger(n) && n > 0 ? await PageRevision.findOne({ where: { pageId: page.id, number: n } }) : null;
-  if (!revision) throw NotFoundError(`This page has no revision ${String(number)}.`);
-  return revision;
-}
-
 revisionsRouter.get('/', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   const revisions = await PageRevision.findAll({
     where: { pageId: page.id },
@@ -53,34 +46,34 @@ revisionsRouter.get('/', async (req, res) => {
   res.json({ data });
 });
 
-revisionsRouter.get('/diff', validate(DiffQuerySchema, 'query'), async (req, res) => {
+revisionsRouter.get('/diff', validateQuery(DiffQuerySchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
-  const { from, to } = req.query as unknown as { from: number; to: number };
-  const [a, b] = await Promise.all([revisionOf(page, from), revisionOf(page, to)]);
+  const { from, to } = req.query;
+  const [a, b] = await Promise.all([loadRevision(page, from), loadRevision(page, to)]);
   const statements = await loadStatements([...new Set([...a.statementIds, ...b.statementIds])]);
   res.json({ data: diffRevisions(a, b, (id) => statements.get(id)?.templateTitle ?? 'statement') });
 });
 
 revisionsRouter.get('/:number', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
-  const r = await revisionOf(page, req.params.number);
+  const r = await loadRevision(page, req.params.number);
   res.json({ data: { id: r.id, number: r.number, title: r.title, doc: r.doc, createdAt: r.createdAt.toISOString() } });
 });
 
 /** Restores an old revision as a new one; history is never rewritten. */
 revisionsRouter.post('/:number/restore', validate(RestoreSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageParam(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'edit', page);
-  const r = await revisionOf(page, req.params.number);
+  const r = await loadRevision(page, req.params.number);
   // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
   const { page: saved } = await savePage(
     page.id,
-    { version: (req.body as { version: number }).version, title: r.title, doc: r.doc, restoredFrom: r.number },
+    { version: req.body.version, title: r.title, doc: r.doc, restoredFrom: r.number },
     viewer,
   );
   res.json({ data: await loadPageDetail(saved, viewer) });

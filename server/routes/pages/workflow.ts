@@ -1,4 +1,5 @@
 import { Router } from 'express';
+import { z } from 'zod';
 import {
   FlagResolveSchema,
   PageCommentSchema,
@@ -8,68 +9,59 @@ import {
 } from '@shared/schemas/page.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
-import { PageComment, PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import {
-  loadPageDetail,
-  publishPage,
-  schedulePublish,
-  unpublishPage,
-  resolveNumberFlag,
-  signOffPage,
-  signOffStatement,
-  currentApprovalProblems,
-  sendBackPage,
-  submitPage,
-} from '../../services/pages/index.ts';
-import { recordAudit } from '../../services/audit.ts';
-import { findPage } from './load.ts';
+import { presentPageComment } from '../../presenters/page-comment.ts';
+import { addPageComment, listPageComments } from '../../services/pages/index.ts';
+import { loadPageDetail } from '../../services/pages/index.ts';
+import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/index.ts';
+import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/index.ts';
+import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/index.ts';
+import { loadPage, parentParam } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
 export const workflowRouter = Router({ mergeParams: true });
 
-const pageId = (req: { params: Record<string, string | string[]> }) => req.params.id;
+/** Submitting may name the version the writer saw; anything else in the body is ignored, as it always was. */
+const SubmitSchema = z.object({ version: z.number().optional().catch(undefined) }).catch({});
 
 async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[0], id: string) {
-  const page = (await findPage(id))!;
-  return loadPageDetail(page, currentUser(req));
+  return loadPageDetail(await loadPage(id), currentUser(req));
 }
 
-workflowRouter.post('/submit', async (req, res) => {
+workflowRouter.post('/submit', validate(SubmitSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'submit', page);
-  const version = typeof req.body?.version === 'number' ? (req.body.version as number) : undefined;
-  await submitPage(page.id, version, viewer);
+  await submitPage(page.id, req.body.version, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
 workflowRouter.post('/send-back', validate(SendBackSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
-  await sendBackPage(page.id, (req.body as { comment: string }).comment, viewer);
+  await sendBackPage(page.id, req.body.comment, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
 workflowRouter.get('/approval-problems', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
   res.json({ data: { problems: await currentApprovalProblems(page) } });
 });
 
 workflowRouter.post('/signoffs/statements', validate(StatementSignoffSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
-  await signOffStatement(page.id, (req.body as { statementId: string }).statementId, viewer);
+  await signOffStatement(page.id, req.body.statementId, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
 workflowRouter.post('/signoffs/page', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
   await signOffPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -77,16 +69,16 @@ workflowRouter.post('/signoffs/page', async (req, res) => {
 
 workflowRouter.post('/flags', validate(FlagResolveSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'review', page);
-  const { text, reason } = req.body as { text: string; reason: string };
+  const { text, reason } = req.body;
   await resolveNumberFlag(page.id, text, reason, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
 workflowRouter.post('/publish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
   await publishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -94,7 +86,7 @@ workflowRouter.post('/publish', async (req, res) => {
 
 workflowRouter.post('/unpublish', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
   await unpublishPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
@@ -102,58 +94,23 @@ workflowRouter.post('/unpublish', async (req, res) => {
 
 workflowRouter.put('/schedule', validate(ScheduleSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'publish', page);
-  const at = (req.body as { at: string | null }).at;
+  const at = req.body.at;
   await schedulePublish(page.id, at ? new Date(at) : null, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
 workflowRouter.get('/comments', async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'read', page);
-  const comments = await PageComment.findAll({
-    where: { pageId: page.id },
-    include: [{ model: User, as: 'author', attributes: ['name'] }],
-    order: [['createdAt', 'ASC']],
-  });
-  res.json({
-    data: comments.map((c) => ({
-      id: c.id,
-      body: c.body,
-      author: c.author?.name ?? null,
-      revisionNumber: c.revisionNumber,
-      createdAt: c.createdAt.toISOString(),
-    })),
-  });
+  res.json({ data: (await listPageComments(page)).map(presentPageComment) });
 });
 
 workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) => {
   const viewer = currentUser(req);
-  const page = await findPage(pageId(req));
+  const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'comment', page);
-  const revision = await PageRevision.findByPk(page.currentRevisionId!, { attributes: ['number'] });
-  const comment = await PageComment.create({
-    pageId: page.id,
-    revisionNumber: revision?.number ?? null,
-    authorId: viewer.id,
-    body: (req.body as { body: string }).body,
-  });
-  await recordAudit({
-    actorId: viewer.id,
-    action: 'page.commented',
-    subjectType: 'page',
-    subjectId: page.id,
-    data: { commentId: comment.id },
-  });
-  res.status(201).json({
-    data: {
-      id: comment.id,
-      body: comment.body,
-      author: viewer.name,
-      revisionNumber: comment.revisionNumber,
-      createdAt: comment.createdAt.toISOString(),
-    },
-  });
+  res.status(201).json({ data: presentPageComment(await addPageComment(page, req.body.body, viewer)) });
 });

@@ -1,4 +1,4 @@
-import { HttpError } from '../../errors.ts';
+import { UnprocessableError } from '../../errors.ts';
 
 /** A CSV file's text, ready for the parser. */
 export interface DecodedCsv {
@@ -7,7 +7,7 @@ export interface DecodedCsv {
   delimiter: ',' | ';' | '\t';
 }
 
-const refuse = (code: string, message: string) => new HttpError(422, code, message);
+const refuse = (code: string, message: string) => UnprocessableError(message, code);
 
 /** Formats people upload by mistake, recognised by their first bytes. */
 const SIGNATURES: Array<{ bytes: number[]; what: string }> = [

@@ -1,7 +1,7 @@
 import { parse } from 'csv-parse/sync';
 import { IMPORT_FIELDS, type ImportField, type ImportMapping } from '@shared/schemas/catalogue-import.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
-import { HttpError } from '../../errors.ts';
+import { BadRequestError, UnprocessableError } from '../../errors.ts';
 import type { DecodedCsv } from './csv-decode.ts';
 
 /** A data row: its number as a spreadsheet shows it (header = 1) and its cells by field. */
@@ -10,7 +10,7 @@ export interface CsvRow {
   cells: Partial<Record<ImportField, string>>;
 }
 
-const refuse = (code: string, message: string) => new HttpError(422, code, message);
+const refuse = (code: string, message: string) => UnprocessableError(message, code);
 
 /** Header spellings recognised without a mapping, compared without case, spaces, _ or -. */
 const HEADER_GUESSES: Record<ImportField, string[]> = {
@@ -33,10 +33,9 @@ export function resolveMapping(headers: string[], given: ImportMapping | undefin
   if (given && Object.keys(given).length > 0) {
     for (const [field, header] of Object.entries(given)) {
       if (header && !headers.includes(header)) {
-        throw new HttpError(
-          400,
-          'invalid_mapping',
+        throw BadRequestError(
           `The column "${header}" chosen for ${field} is not in the file. Its columns are: ${headers.join(', ')}.`,
+          'invalid_mapping',
         );
       }
     }

@@ -13,3 +13,5 @@ export { setPreferred } from './preferred-write.ts';
 export { listSkyObjects } from './sky-object-list.ts';
 export { createSkyObject, deleteSkyObject, updateSkyObject } from './sky-object-write.ts';
 export { createSource, updateSource } from './source-write.ts';
+export { listSources } from './source-list.ts';
+export { measurementsCiting } from './source-list.ts';

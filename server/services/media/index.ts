@@ -10,3 +10,4 @@ export { sweepOrphanMedia } from './media-sweep.ts';
 export { updateMedia } from './media-update.ts';
 export { uploadMedia } from './media-upload.ts';
 export { findMediaUsage, isMediaReadyForPublishing, missingForPublishing, registerMediaUsageProvider } from './media-usage.ts';
+export { retryRenditions } from './rendition-retry.ts';

@@ -2,12 +2,11 @@ import { UniqueConstraintError } from 'sequelize';
 import { MediaLimits } from '@shared/media/limits.ts';
 import { MediaUploadFieldsSchema } from '@shared/media/schemas.ts';
 import { getSequelize } from '../../db.ts';
-import { ConflictError, HttpError } from '../../errors.ts';
+import { BadRequestError, ConflictError, zodToValidationError } from '../../errors.ts';
 import { requestRenditions } from './media-renditions-job.ts';
 import { inspectUpload } from '../../media/inspect.ts';
 import { originalKey, originalMime } from '../../media/keys.ts';
 import { mediaSettings } from '../../media/settings.ts';
-import { zodToValidationError } from '../../middlewares/validate.ts';
 import { Media, type User } from '../../models/index.ts';
 import { getStorage } from '../../storage/storage.ts';
 import { recordAudit } from '../audit.ts';
@@ -33,10 +32,10 @@ const UNSAFE_NAME = /[\u0000-\u001f\u007f-\u009f/\\]/;
 export function checkFileName(name: string): string {
   const message = 'The file name contains path separators or control characters. Rename the file and upload it again.';
   if (!name || UNSAFE_NAME.test(name) || name === '.' || name === '..')
-    throw new HttpError(400, 'unsafe_file_name', message, { file: message });
+    throw BadRequestError(message, 'unsafe_file_name', { file: message });
   if (name.length > MediaLimits.fileNameMax) {
     const tooLong = `The file name is longer than ${MediaLimits.fileNameMax} characters. Rename the file and upload it again.`;
-    throw new HttpError(400, 'unsafe_file_name', tooLong, { file: tooLong });
+    throw BadRequestError(tooLong, 'unsafe_file_name', { file: tooLong });
   }
   return name.normalize('NFC');
 }

@@ -16,3 +16,5 @@ export { createPage, savePage } from './page-save.ts';
 export { resolveNumberFlag, signOffPage, signOffStatement } from './page-signoff.ts';
 export { currentText, loadStatements } from './page-statements.ts';
 export { currentApprovalProblems, sendBackPage, submitPage } from './page-workflow.ts';
+export { addPageComment } from './page-comments.ts';
+export { listPageComments } from './page-comments.ts';

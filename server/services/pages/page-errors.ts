@@ -1,5 +1,5 @@
 import type { PageServerVersion } from '@shared/schemas/page.ts';
-import { HttpError } from '../../errors.ts';
+import { ConflictError, HttpError, UnprocessableError } from '../../errors.ts';
 
 /** What the server holds now, sent inside the 409's error so the writer can compare it with their own. */
 export type ServerVersion = PageServerVersion;
@@ -18,9 +18,9 @@ export class PageConflictError extends HttpError {
 }
 
 /** The page's state does not allow the step; the message says why and what to do. */
-export const WorkflowError = (message: string, code = 'page_state') => new HttpError(409, code, message);
+export const WorkflowError = (message: string, code = 'page_state') => ConflictError(message, code);
 
 /** Refused at submission or approval, with every problem listed. */
 export function ChecksFailedError(what: string, problems: string[]): HttpError {
-  return new HttpError(422, 'page_checks_failed', `${what}: ${problems.join(' ')}`);
+  return UnprocessableError(`${what}: ${problems.join(' ')}`, 'page_checks_failed');
 }

@@ -1,7 +1,7 @@
 import { normaliseFlagText } from '@shared/editor/number-check.ts';
 import type { PageSnapshot } from '@shared/schemas/page.ts';
 import { getSequelize } from '../../db.ts';
-import { HttpError } from '../../errors.ts';
+import { UnprocessableError } from '../../errors.ts';
 import { Page, PageNumberFlag, PageRevision, PageSignoff, Statement, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { renderWithLookups } from './page-render.ts';
@@ -111,7 +111,7 @@ export async function signOffPage(pageId: string, reviewer: User): Promise<Page>
     }
     const html = await renderWithLookups(revision.doc, revision.mediaIds, (id) => statementTexts[id] ?? null);
     if (Buffer.byteLength(html) > 20 * 1024 * 1024)
-      throw new HttpError(422, 'page_too_large', 'The rendered page is too large to publish.');
+      throw UnprocessableError('The rendered page is too large to publish.', 'page_too_large');
     const snapshot: PageSnapshot = {
       revisionId: revision.id,
       revisionNumber: revision.number,

@@ -1,6 +1,6 @@
 import { Op, QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { HttpError } from '../../errors.ts';
+import { BadRequestError } from '../../errors.ts';
 import { ChannelScreen, KioskScreen, type Channel, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { lockChannel, touchChannel } from './channel-save.ts';
@@ -19,10 +19,9 @@ export async function assignScreens(channel: Channel, screenIds: string[], actor
       ? await KioskScreen.findAll({ where: { id: { [Op.in]: screenIds }, venueId: channel.venueId }, transaction })
       : [];
     if (screens.length !== screenIds.length) {
-      throw new HttpError(
-        400,
-        'screen_other_venue',
+      throw BadRequestError(
         'A chosen screen is not at this channel’s venue. A channel plays only on its own venue’s screens.',
+        'screen_other_venue',
         { screenIds: 'Not a screen at this venue' },
       );
     }

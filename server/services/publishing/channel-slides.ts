@@ -2,7 +2,7 @@ import { Op, type Transaction } from 'sequelize';
 import type { SlideCreateInput, SlideUpdateInput } from '@shared/schemas/channel.ts';
 import { ChannelLimits } from '@shared/validations.ts';
 import { getSequelize } from '../../db.ts';
-import { ConflictError, HttpError, NotFoundError } from '../../errors.ts';
+import { BadRequestError, ConflictError, NotFoundError, ValidationError } from '../../errors.ts';
 import { ChannelSlide, Media, Page, type Channel, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { lockChannel, touchChannel } from './channel-save.ts';
@@ -18,21 +18,17 @@ const REQUIREMENT_WORDS: Record<string, string> = {
 
 async function checkPage(pageId: string, statementIds: string[], transaction: Transaction): Promise<Page> {
   const page = await Page.findByPk(pageId, { transaction });
-  if (!page) throw new HttpError(400, 'invalid_input', 'There is no such page.', { pageId: 'There is no such page' });
+  if (!page) throw ValidationError('There is no such page.', { pageId: 'There is no such page' });
   const live = page.publishedSnapshot;
   if (!live)
-    throw new HttpError(
-      400,
-      'page_not_published',
-      `“${page.title}” is not published. Only published pages go on kiosk screens.`,
-      { pageId: 'This page is not published' },
-    );
+    throw BadRequestError(`“${page.title}” is not published. Only published pages go on kiosk screens.`, 'page_not_published', {
+      pageId: 'This page is not published',
+    });
   const missing = statementIds.filter((id) => !live.statementTexts[id]);
   if (missing.length)
-    throw new HttpError(
-      400,
-      'statement_not_on_page',
+    throw BadRequestError(
       'A chosen statement is not on the published page. Choose from the statements the page shows.',
+      'statement_not_on_page',
       { statementIds: 'Not on the published page' },
     );
   return page;
@@ -40,12 +36,11 @@ async function checkPage(pageId: string, statementIds: string[], transaction: Tr
 
 async function checkMedia(mediaId: string, transaction: Transaction): Promise<Media> {
   const media = await Media.findByPk(mediaId, { transaction });
-  if (!media)
-    throw new HttpError(400, 'invalid_input', 'There is no such image in the library.', { mediaId: 'There is no such image' });
+  if (!media) throw ValidationError('There is no such image in the library.', { mediaId: 'There is no such image' });
   const missing = missingForPublishing(media);
   if (missing.length) {
     const words = missing.map((m) => REQUIREMENT_WORDS[m] ?? m).join(', ');
-    throw new HttpError(400, 'media_not_ready', `This image cannot go on a screen yet: it still needs ${words}.`, {
+    throw BadRequestError(`This image cannot go on a screen yet: it still needs ${words}.`, 'media_not_ready', {
       mediaId: `Still needs ${words}`,
     });
   }
@@ -128,23 +123,23 @@ export async function updateSlide(
     const startsAt = input.startsAt === undefined ? slide.startsAt : dateOrNull(input.startsAt);
     const endsAt = input.endsAt === undefined ? slide.endsAt : dateOrNull(input.endsAt);
     if (startsAt && endsAt && endsAt <= startsAt)
-      throw new HttpError(400, 'invalid_input', 'endsAt: The end must be after the start', {
+      throw ValidationError('endsAt: The end must be after the start', {
         endsAt: 'The end must be after the start',
       });
     if (input.statementIds !== undefined) {
       if (slide.kind !== 'page')
-        throw new HttpError(400, 'invalid_input', 'Only a page slide shows statements.', {
+        throw ValidationError('Only a page slide shows statements.', {
           statementIds: 'Only a page slide shows statements',
         });
       await checkPage(slide.pageId!, input.statementIds, transaction);
     }
     if (input.mediaId !== undefined) {
       if (slide.kind === 'sky_tonight' || (slide.kind === 'image' && input.mediaId === null))
-        throw new HttpError(400, 'invalid_input', 'This slide cannot take that image.', { mediaId: 'Not for this slide' });
+        throw ValidationError('This slide cannot take that image.', { mediaId: 'Not for this slide' });
       if (input.mediaId) await checkMedia(input.mediaId, transaction);
     }
     if (input.caption !== undefined && slide.kind !== 'image')
-      throw new HttpError(400, 'invalid_input', 'Only an image slide has a caption.', {
+      throw ValidationError('Only an image slide has a caption.', {
         caption: 'Only an image slide has a caption',
       });
     await slide.update(

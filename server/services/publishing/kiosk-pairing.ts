@@ -1,7 +1,7 @@
 import crypto from 'node:crypto';
 import { KioskLimits } from '@shared/validations.ts';
 import { getSequelize } from '../../db.ts';
-import { HttpError } from '../../errors.ts';
+import { BadRequestError } from '../../errors.ts';
 import { KioskScreen, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { hashToken } from '../users/index.ts';
@@ -64,22 +64,19 @@ export async function pairScreen(code: string, ip?: string): Promise<{ token: st
       transaction,
     });
     if (!screen)
-      throw new HttpError(
-        400,
-        'pairing_code_unknown',
+      throw BadRequestError(
         'No screen is waiting for this pairing code. Check the code, or ask an admin for a new one.',
+        'pairing_code_unknown',
       );
     if (!screen.pairingExpiresAt)
-      throw new HttpError(
-        400,
-        'pairing_code_used',
+      throw BadRequestError(
         'This pairing code has already been used. Ask an admin to re-pair the screen for a new code.',
+        'pairing_code_used',
       );
     if (screen.pairingExpiresAt.getTime() < Date.now()) {
-      throw new HttpError(
-        400,
-        'pairing_code_expired',
+      throw BadRequestError(
         `This pairing code has expired (codes last ${KioskLimits.pairingCodeMinutes} minutes). Ask an admin for a new one.`,
+        'pairing_code_expired',
       );
     }
     const token = `spk_${crypto.randomBytes(32).toString('base64url')}`;

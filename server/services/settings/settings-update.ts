@@ -2,7 +2,7 @@ import type { CalcModel } from '@shared/schemas/calc.ts';
 import type { SettingsUpdateInput } from '@shared/schemas/settings.ts';
 import { calculate } from '@shared/engine/calculate.ts';
 import { getSequelize } from '../../db.ts';
-import { ConflictError, HttpError } from '../../errors.ts';
+import { BadRequestError, ConflictError } from '../../errors.ts';
 import type { OrganisationSettings, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from './organisation-settings.ts';
@@ -12,7 +12,7 @@ import { settingsEvents } from './events.ts';
 /** Refuses a model the engine cannot use (no big bang, negative densities…), with the engine's words. */
 function assertUsableModel(model: CalcModel): void {
   const probe = calculate({ quantity: 'lookback_time', inputs: { z: 1 }, model });
-  if ('error' in probe) throw new HttpError(400, 'invalid_model', `This cosmology cannot be used: ${probe.error.message}.`);
+  if ('error' in probe) throw BadRequestError(`This cosmology cannot be used: ${probe.error.message}.`, 'invalid_model');
 }
 
 /**

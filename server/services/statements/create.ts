@@ -1,6 +1,6 @@
 import { evaluateStatement, findTemplate, kindRefusal } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
-import { HttpError, NotFoundError } from '../../errors.ts';
+import { BadRequestError, NotFoundError, UnprocessableError } from '../../errors.ts';
 import { SkyObject, Statement, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from '../settings/index.ts';
@@ -29,18 +29,18 @@ export async function findOrCreateStatement(
   if (!template) throw NotFoundError(`There is no statement template “${templateId}”.`);
   if (template.needsVenue && !venueId) {
     const message = `“${template.title}” is about one venue’s night: choose the venue it is for.`;
-    throw new HttpError(400, 'venue_required', message, { venueId: message });
+    throw BadRequestError(message, 'venue_required', { venueId: message });
   }
   if (!template.needsVenue && venueId) {
     const message = `“${template.title}” is the same for every venue: leave the venue out.`;
-    throw new HttpError(400, 'venue_not_used', message, { venueId: message });
+    throw BadRequestError(message, 'venue_not_used', { venueId: message });
   }
   const venue = venueId ? await Venue.findByPk(venueId) : null;
   if (venueId && !venue) throw NotFoundError('There is no such venue.');
   const object = await SkyObject.findByPk(skyObjectId);
   if (!object) throw NotFoundError('That object is not in the catalogue.');
   const refusal = kindRefusal(template, object.kind);
-  if (refusal) throw new HttpError(400, 'template_not_for_kind', refusal, { templateId: refusal });
+  if (refusal) throw BadRequestError(refusal, 'template_not_for_kind', { templateId: refusal });
   const existing = await Statement.findOne({ where: { skyObjectId, templateId, venueId } });
   if (existing) return { statement: existing, created: false };
   const settings = await getSettings();
@@ -54,18 +54,16 @@ export async function findOrCreateStatement(
   const ctx = night ? withVenue(base, night) : base;
   const outcome = evaluateStatement(templateId, ctx);
   if (!outcome.ok) {
-    throw new HttpError(
-      422,
-      'statement_not_computable',
+    throw UnprocessableError(
       `“${template.title}” cannot be worked out for ${object.name}: ${outcome.reason}`,
+      'statement_not_computable',
     );
   }
   const computed = applyOutcome(null, outcome);
   if (computed.status === 'broken')
-    throw new HttpError(
-      422,
-      'statement_not_computable',
+    throw UnprocessableError(
       `“${template.title}” cannot be worked out for ${object.name}: ${computed.statusReason}`,
+      'statement_not_computable',
     );
   const { model, working, followedNight: _first, ...fields } = computed;
   const packed = packForStorage(working);

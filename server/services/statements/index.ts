@@ -10,4 +10,6 @@ export { publicNote, publicStatements, publicText, type PublicStatement } from '
 export { enqueueRecompute, RECOMPUTE_BATCH, RECOMPUTE_JOB, recomputeStatements, runRecomputeJobs } from './recompute.ts';
 export { queueRecompute } from './triggers.ts';
 export { recomputeAfterRulesRelease } from './rules-release.ts';
+export { listStatements, loadStatementView } from './statement-read.ts';
 export { readWorking } from './working-store.ts';
+export { statementIncludes } from './statement-read.ts';

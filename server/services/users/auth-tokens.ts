@@ -1,8 +1,8 @@
 import crypto from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
-import { HttpError } from '../../errors.ts';
-import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
+import { BadRequestError } from '../../errors.ts';
 import { logger } from '../../logger.ts';
+import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
 
 /** SHA-256 of the token: a leaked table row cannot be turned back into a working link. */
 export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw).digest('hex');
@@ -38,12 +38,12 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
     transaction,
   });
   const what = purpose === 'invitation' ? 'invitation link' : 'password reset link';
-  if (!token) throw new HttpError(400, 'invalid_token', `This ${what} is not valid. Ask for a new one.`);
-  if (token.usedAt) throw new HttpError(400, 'invalid_token', `This ${what} has already been used. Ask for a new one.`);
+  if (!token) throw BadRequestError(`This ${what} is not valid. Ask for a new one.`, 'invalid_token');
+  if (token.usedAt) throw BadRequestError(`This ${what} has already been used. Ask for a new one.`, 'invalid_token');
   if (token.expiresAt.getTime() < Date.now())
-    throw new HttpError(400, 'invalid_token', `This ${what} has expired. Ask for a new one.`);
+    throw BadRequestError(`This ${what} has expired. Ask for a new one.`, 'invalid_token');
   const user = await User.findByPk(token.userId, { transaction });
-  if (!user || !user.active) throw new HttpError(400, 'invalid_token', 'This account has been deactivated.');
+  if (!user || !user.active) throw BadRequestError('This account has been deactivated.', 'invalid_token');
   token.usedAt = new Date();
   await token.save({ transaction });
   return user;

@@ -8,3 +8,4 @@ export { signIn } from './sign-in.ts';
 export { inviteUser, resendInvitation } from './user-invite.ts';
 export { endUserSessions } from './user-sessions.ts';
 export { updateUser } from './user-update.ts';
+export { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken } from './account-passwords.ts';

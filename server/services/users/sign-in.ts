@@ -1,5 +1,5 @@
 import { getSequelize } from '../../db.ts';
-import { HttpError } from '../../errors.ts';
+import { AuthenticationError, TooManyRequestsError } from '../../errors.ts';
 import { User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { verifyPassword } from './passwords.ts';
@@ -15,7 +15,7 @@ export function throttleDelayMs(failedAttempts: number): number {
 }
 
 const wrongDetails = () =>
-  new HttpError(401, 'wrong_credentials', 'That e-mail address and password do not match an active account.');
+  AuthenticationError('That e-mail address and password do not match an active account.', 'wrong_credentials');
 
 /**
  * Checks the credentials, with per-account throttling kept in the database (so it holds across
@@ -26,10 +26,9 @@ export async function signIn(email: string, password: string, ip: string | undef
   const user = await User.findOne({ where: { email } });
   if (user?.throttledUntil && user.throttledUntil.getTime() > Date.now()) {
     const seconds = Math.ceil((user.throttledUntil.getTime() - Date.now()) / 1000);
-    throw new HttpError(
-      429,
-      'too_many_attempts',
+    throw TooManyRequestsError(
       `Too many failed attempts for this account. Try again in ${seconds} seconds, or reset your password.`,
+      'too_many_attempts',
     );
   }
   const ok = await verifyPassword(password, user?.passwordHash);

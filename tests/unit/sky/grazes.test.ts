@@ -4,7 +4,7 @@
  * fixture (tests/reference/sky/edges-fixture.json, astropy 5.2.1 built-in ephemeris).
  */
 import { describe, expect, it } from 'vitest';
-import { darkFrom } from '../../../server/services/feed-sky.ts';
+import { darkFrom } from '../../../server/services/publishing/feed-sky.ts';
 import { computeSkyTonight } from '../../../shared/sky/tonight.ts';
 
 const at50 = { latitude: 50, longitude: 14.4, elevationM: 0, timeZone: 'Europe/Prague', now: 0 };
