@@ -14,12 +14,21 @@ import { validate, validateQuery } from '../middlewares/validate.ts';
 import type { Channel, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentChannelDetail, presentChannelRow } from '../presenters/channel.ts';
-import { createChannel, deleteChannel, updateChannel } from '../services/publishing/index.ts';
-import { assignScreens } from '../services/publishing/index.ts';
-import { addSlide, removeSlide, reorderSlides, updateSlide } from '../services/publishing/index.ts';
-import { loadSlideSources } from '../services/publishing/index.ts';
-import { getKioskFeed } from '../services/publishing/index.ts';
-import { listChannels, loadChannelDetail, loadChannelRows } from '../services/publishing/index.ts';
+import {
+  createChannel,
+  deleteChannel,
+  updateChannel,
+  assignScreens,
+  addSlide,
+  removeSlide,
+  reorderSlides,
+  updateSlide,
+  loadSlideSources,
+  getKioskFeed,
+  listChannels,
+  loadChannelDetail,
+  loadChannelRows,
+} from '../services/publishing/index.ts';
 import { FEED_CONTENT_TYPE } from './kiosk-feed.ts';
 import { loadChannel } from './load.ts';
 

@@ -7,9 +7,8 @@ import { assertOwnScreen, currentKiosk, requireKiosk } from '../middlewares/kios
 import { validate } from '../middlewares/validate.ts';
 import { Venue } from '../models/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
-import { pairScreen } from '../services/publishing/index.ts';
+import { pairScreen, recordHeartbeat } from '../services/publishing/index.ts';
 import { config } from '../config.ts';
-import { recordHeartbeat } from '../services/publishing/index.ts';
 import { getSkySnapshot } from '../services/sky/index.ts';
 
 /** Guessing codes is slow: a few tries per address per quarter hour. */

@@ -11,13 +11,16 @@ import { validate, validateQuery } from '../middlewares/validate.ts';
 import { Media, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
-import { deleteMedia } from '../services/media/index.ts';
-import { objectsForMedia, suggestObjects } from '../services/media/index.ts';
-import { searchMedia } from '../services/media/index.ts';
-import { uploadMedia } from '../services/media/index.ts';
-import { updateMedia } from '../services/media/index.ts';
-import { retryRenditions } from '../services/media/index.ts';
-import { findMediaUsage } from '../services/media/index.ts';
+import {
+  deleteMedia,
+  objectsForMedia,
+  suggestObjects,
+  searchMedia,
+  uploadMedia,
+  updateMedia,
+  retryRenditions,
+  findMediaUsage,
+} from '../services/media/index.ts';
 import { loadMedia } from './load.ts';
 
 async function present(media: Media, viewer: User) {

@@ -6,8 +6,7 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentUser } from '../presenters/user.ts';
-import { resendInvitation, inviteUser } from '../services/users/index.ts';
-import { updateUser } from '../services/users/index.ts';
+import { resendInvitation, inviteUser, updateUser } from '../services/users/index.ts';
 import { loadUser } from './load.ts';
 
 export const usersRouter = Router();

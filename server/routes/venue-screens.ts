@@ -4,8 +4,7 @@ import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
-import { issuePairingCode, revokeScreen } from '../services/publishing/index.ts';
-import { addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
+import { issuePairingCode, revokeScreen, addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */

@@ -11,8 +11,7 @@ import { authorize } from '../policies/index.ts';
 import { presentSkySnapshot } from '../presenters/kiosk-screen.ts';
 import { presentVenue, presentVenueChoice } from '../presenters/venue.ts';
 import { countScreens, countScreensByVenue } from '../services/publishing/index.ts';
-import { getSkySnapshot } from '../services/sky/index.ts';
-import { createVenue, deleteVenue, updateVenue } from '../services/sky/index.ts';
+import { getSkySnapshot, createVenue, deleteVenue, updateVenue } from '../services/sky/index.ts';
 import { loadVenue } from './load.ts';
 import { venueScreensRouter } from './venue-screens.ts';
 

@@ -7,8 +7,7 @@ import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { commitCatalogueImport } from '../../services/catalogue/index.ts';
-import { checkCatalogueImport } from '../../services/catalogue/index.ts';
+import { commitCatalogueImport, checkCatalogueImport } from '../../services/catalogue/index.ts';
 import { loadImport } from '../load.ts';
 
 /** The form fields beside the file: the column mapping, as JSON text (multer gives every field as text). */

@@ -11,9 +11,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentMeasurement } from '../../presenters/measurement.ts';
-import { setPreferred } from '../../services/catalogue/index.ts';
-import { reviewMeasurement } from '../../services/catalogue/index.ts';
-import { retireMeasurement, updateMeasurement } from '../../services/catalogue/index.ts';
+import { setPreferred, reviewMeasurement, retireMeasurement, updateMeasurement } from '../../services/catalogue/index.ts';
 import { loadMeasurement } from '../load.ts';
 
 const ChangeReasonSchema = z.object({

@@ -8,9 +8,13 @@ import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
 import { authorize, can } from '../../policies/index.ts';
 import { presentHistory, presentMeasurement } from '../../presenters/measurement.ts';
 import { presentSkyObject } from '../../presenters/sky-object.ts';
-import { createMeasurement } from '../../services/catalogue/index.ts';
-import { createSkyObject, deleteSkyObject, updateSkyObject } from '../../services/catalogue/index.ts';
-import { listSkyObjects } from '../../services/catalogue/index.ts';
+import {
+  createMeasurement,
+  createSkyObject,
+  deleteSkyObject,
+  updateSkyObject,
+  listSkyObjects,
+} from '../../services/catalogue/index.ts';
 import { loadMeasurement, loadSkyObject, measurementIncludes } from '../load.ts';
 
 export const objectsRouter = Router();

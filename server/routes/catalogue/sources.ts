@@ -5,8 +5,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentSource } from '../../presenters/source.ts';
-import { listSources, measurementsCiting } from '../../services/catalogue/index.ts';
-import { createSource, updateSource } from '../../services/catalogue/index.ts';
+import { listSources, measurementsCiting, createSource, updateSource } from '../../services/catalogue/index.ts';
 import { loadSource } from '../load.ts';
 
 const SourceListQuerySchema = z.object({ q: z.string().trim().max(200).optional() });

@@ -8,16 +8,21 @@ import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { PageRevision } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { renderPublishedPage, renderWithLookups } from '../../services/pages/index.ts';
-import { dashboardFor, setDigest } from '../../services/pages/index.ts';
-import { loadPageDetail } from '../../services/pages/index.ts';
-import { listPages } from '../../services/pages/index.ts';
-import { createPage, savePage } from '../../services/pages/index.ts';
-import { currentText, loadStatements } from '../../services/pages/index.ts';
+import {
+  renderPublishedPage,
+  renderWithLookups,
+  dashboardFor,
+  setDigest,
+  loadPageDetail,
+  listPages,
+  createPage,
+  savePage,
+  currentText,
+  loadStatements,
+} from '../../services/pages/index.ts';
 import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
-import '../../services/pages/page-digest.ts';
 
 const tooLarge = () =>
   new HttpError(

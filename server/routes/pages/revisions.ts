@@ -4,10 +4,7 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
 import { PageRevision, User } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
-import { loadPageDetail } from '../../services/pages/index.ts';
-import { diffRevisions } from '../../services/pages/index.ts';
-import { savePage } from '../../services/pages/index.ts';
-import { loadStatements } from '../../services/pages/index.ts';
+import { loadPageDetail, diffRevisions, savePage, loadStatements } from '../../services/pages/index.ts';
 import { loadPage, loadRevision, parentParam } from '../load.ts';
 
 /** A page's saved versions (mounted under /api/pages/:id/revisions). */

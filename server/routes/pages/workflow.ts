@@ -11,11 +11,20 @@ import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate } from '../../middlewares/validate.ts';
 import { authorize } from '../../policies/index.ts';
 import { presentPageComment } from '../../presenters/page-comment.ts';
-import { addPageComment, listPageComments } from '../../services/pages/index.ts';
-import { loadPageDetail } from '../../services/pages/index.ts';
-import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/index.ts';
-import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/index.ts';
-import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/index.ts';
+import {
+  addPageComment,
+  listPageComments,
+  loadPageDetail,
+  publishPage,
+  schedulePublish,
+  unpublishPage,
+  resolveNumberFlag,
+  signOffPage,
+  signOffStatement,
+  currentApprovalProblems,
+  sendBackPage,
+  submitPage,
+} from '../../services/pages/index.ts';
 import { loadPage, parentParam } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
