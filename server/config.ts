@@ -24,6 +24,17 @@ export const config = {
   publicUrl: process.env.PUBLIC_URL,
   uploadsDir: path.resolve(process.env.UPLOADS_DIR ?? 'uploads'),
   distDir: path.resolve(process.env.STARPROOF_DIST_DIR ?? 'dist'),
+  /** Worker threads that hash and compare passwords (fewer if the machine has fewer cores). */
+  passwordHashThreads: Number(process.env.PASSWORD_HASH_THREADS ?? 2),
+  /** Hash jobs that may wait for a thread; more sign-ins at once are refused with 429 `busy`. */
+  passwordHashQueue: Number(process.env.PASSWORD_HASH_QUEUE ?? 64),
+  /**
+   * Which peers' X-Forwarded-For / X-Forwarded-Proto / X-Forwarded-Host are believed (Express
+   * `trust proxy` syntax: `loopback`, a list of addresses or subnets, a hop count). Loopback only by default.
+   */
+  trustProxy: process.env.TRUST_PROXY ?? 'loopback',
+  /** Longest a single database query may take before the request answers 503 (ms). */
+  dbQueryTimeoutMs: Number(process.env.DB_QUERY_TIMEOUT_MS ?? 8_000),
   logLevel: process.env.LOG_LEVEL ?? (process.env.NODE_ENV === 'test' ? 'silent' : 'info'),
 };
 

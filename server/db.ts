@@ -3,6 +3,24 @@ import { config } from './config.ts';
 
 let instance: Sequelize | undefined;
 
+/** Longest wait for a free pooled connection (ms). */
+export const ACQUIRE_TIMEOUT_MS = 5_000;
+
+/**
+ * Timeouts for every pg pool (Sequelize, sessions, pg-boss): connecting gives up after 5 s; a query
+ * is cancelled by the server after `dbQueryTimeoutMs` (statement_timeout) and, when the server is
+ * frozen and cannot cancel anything, abandoned by the client just after (query_timeout). A request
+ * therefore answers within acquire + one query timeout, however long the database stays frozen.
+ * @param queryTimeoutMs the pool's own bound, when shorter than the setting (sessions)
+ */
+export function poolTimeouts(queryTimeoutMs = config.dbQueryTimeoutMs) {
+  return {
+    connectionTimeoutMillis: 5_000,
+    statement_timeout: queryTimeoutMs,
+    query_timeout: queryTimeoutMs + 500,
+  };
+}
+
 /** The one Sequelize instance; created on first use so the URL can be decided at start-up. */
 export function getSequelize(): Sequelize {
   if (!instance) {
@@ -11,9 +29,10 @@ export function getSequelize(): Sequelize {
     instance = new Sequelize(url, {
       dialect: 'postgres',
       logging: false,
-      pool: { max: 10, min: 0, acquire: 10_000, idle: 10_000 },
-      // A dead database must fail requests quickly rather than hang them.
-      dialectOptions: { connectionTimeoutMillis: 5_000, statement_timeout: 15_000, query_timeout: 20_000 },
+      // Waiting for a free connection ends after ACQUIRE_TIMEOUT_MS with 503 `busy` (see error-handler.ts).
+      pool: { max: 10, min: 0, acquire: ACQUIRE_TIMEOUT_MS, idle: 10_000 },
+      // A dead or frozen database must fail requests quickly rather than hang them.
+      dialectOptions: poolTimeouts(),
     });
   }
   return instance;

@@ -5,6 +5,8 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
+    /** Sent as `Retry-After` (seconds) with 429 and 503 answers that will clear by themselves. */
+    readonly options: { retryAfterSeconds?: number } = {},
   ) {
     super(message);
   }
@@ -17,3 +19,9 @@ export const AuthorizationError = (message = 'Your role does not allow this.') =
 export const NotFoundError = (message = 'Not found.') => new HttpError(404, 'not_found', message);
 export const ConflictError = (message: string, code = 'conflict') => new HttpError(409, code, message);
 export const TooManyRequestsError = (message: string) => new HttpError(429, 'too_many_requests', message);
+
+/** The server is overloaded for a moment (pool or queue full): 503 `busy`, never "database down". */
+export const BusyError = (retryAfterSeconds = 5) =>
+  new HttpError(503, 'busy', 'The server is busy at this moment. Nothing was saved; try again in a few seconds.', undefined, {
+    retryAfterSeconds,
+  });

@@ -1,6 +1,7 @@
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import {
   BaseError,
+  ConnectionAcquireTimeoutError,
   ConnectionError,
   ForeignKeyConstraintError,
   UniqueConstraintError,
@@ -8,7 +9,7 @@ import {
   TimeoutError,
 } from 'sequelize';
 import { ZodError } from 'zod';
-import { HttpError, NotFoundError } from '../errors.ts';
+import { BusyError, HttpError, NotFoundError } from '../errors.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { logger } from '../logger.ts';
 import { zodToValidationError } from './validate.ts';
@@ -17,6 +18,17 @@ import { zodToValidationError } from './validate.ts';
 export const apiNotFound: RequestHandler = (req, _res, next) => {
   next(NotFoundError(`There is no API endpoint ${req.method} ${req.originalUrl.split('?')[0]}.`));
 };
+
+const databaseUnavailable = () =>
+  new HttpError(
+    503,
+    'database_unavailable',
+    'The database is not answering. Nothing was saved; try again in a moment.',
+    undefined,
+    {
+      retryAfterSeconds: 5,
+    },
+  );
 
 function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
@@ -31,15 +43,13 @@ function toHttpError(err: unknown): HttpError {
     return new HttpError(409, 'in_use', 'That record is referenced by another and cannot be changed this way.');
   if (err instanceof SequelizeValidationError)
     return new HttpError(400, 'invalid_input', err.errors[0]?.message ?? 'Invalid input.');
+  // Every pooled connection is in use: the database is fine, the server is overloaded for a moment.
+  if (err instanceof ConnectionAcquireTimeoutError) return BusyError();
   if (err instanceof ConnectionError || err instanceof TimeoutError) {
-    return new HttpError(
-      503,
-      'database_unavailable',
-      'The database is not answering. Your work has not been saved; try again in a moment.',
-    );
+    return databaseUnavailable();
   }
   if ((err instanceof BaseError && /timeout|terminat|ECONNREFUSED/i.test(err.message)) || isDatabaseDown(err)) {
-    return new HttpError(503, 'database_unavailable', 'The database is not answering. Nothing was saved; try again in a moment.');
+    return databaseUnavailable();
   }
   if (e?.status && e.status >= 400 && e.status < 500 && e.expose)
     return new HttpError(e.status, 'bad_request', e.message ?? 'Bad request.');
@@ -51,6 +61,7 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const httpError = toHttpError(err);
   if (httpError.status >= 500) (req.log ?? logger).error({ err, url: req.originalUrl }, 'request failed');
   if (res.headersSent) return;
+  if (httpError.options.retryAfterSeconds) res.set('Retry-After', String(httpError.options.retryAfterSeconds));
   const body: { error: { code: string; message: string; fields?: Record<string, string> } } = {
     error: { code: httpError.code, message: httpError.message },
   };

@@ -20,9 +20,9 @@ import { validate } from '../middlewares/validate.ts';
 import { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { recordAudit } from '../services/audit.ts';
-import { consumeToken, issueToken } from '../services/auth-tokens.ts';
+import { consumeToken, countRecentTokens, issueToken, revokeTokens } from '../services/auth-tokens.ts';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from '../services/passwords.ts';
-import { signIn } from '../services/sign-in.ts';
+import { releaseAttempts, signIn } from '../services/sign-in.ts';
 import { endUserSessions } from '../services/user-sessions.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
@@ -47,6 +47,9 @@ function startSession(req: Request, user: User): Promise<void> {
     }),
   );
 }
+
+/** Reset e-mails per account per hour. */
+export const RESETS_PER_HOUR = 3;
 
 export const authRouter = Router();
 
@@ -82,8 +85,9 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
   user.passwordHash = await hashPassword(newPassword);
   await getSequelize().transaction(async (transaction) => {
     await user.save({ transaction });
-    // Other devices signed in with the old password are signed out.
+    // Other devices signed in with the old password are signed out, and reset links mailed earlier die.
     await endUserSessions(user.id, req.sessionID, transaction);
+    await revokeTokens(user.id, 'password_reset', transaction);
     await recordAudit(
       { actorId: user.id, action: 'auth.password_changed', subjectType: 'user', subjectId: user.id, ip: req.ip },
       transaction,
@@ -95,8 +99,11 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
 authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordResetSchema), async (req, res) => {
   const { email } = req.body as RequestPasswordResetInput;
   const user = await User.findOne({ where: { email, active: true } });
-  if (user?.passwordHash) {
-    const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000);
+  // At most RESETS_PER_HOUR mails per account, however many addresses ask: the answer is the same either way.
+  if (user?.passwordHash && (await countRecentTokens(user.id, 'password_reset', 3_600_000)) < RESETS_PER_HOUR) {
+    const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000, undefined, {
+      keepEarlier: true,
+    });
     await sendMail(passwordResetMail(user.email, user.name, token));
     await recordAudit({
       actorId: null,
@@ -114,12 +121,16 @@ authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordR
 function completeWithToken(purpose: 'invitation' | 'password_reset') {
   return async (req: Request, res: import('express').Response) => {
     const { token, newPassword } = req.body as TokenPasswordInput;
+    // Hashed before the transaction: no database connection is held while a worker hashes.
+    const passwordHash = await hashPassword(newPassword);
     const user = await getSequelize().transaction(async (transaction) => {
       const found = await consumeToken(token, purpose, transaction);
       assertAcceptablePassword(newPassword, found.email);
-      found.set({ passwordHash: await hashPassword(newPassword), failedSignIns: 0, throttledUntil: null });
+      found.set({ passwordHash });
       await found.save({ transaction });
       await endUserSessions(found.id, undefined, transaction);
+      // The new password replaces every other reset link still in a mailbox.
+      await revokeTokens(found.id, 'password_reset', transaction);
       await recordAudit(
         {
           actorId: found.id,
@@ -132,6 +143,7 @@ function completeWithToken(purpose: 'invitation' | 'password_reset') {
       );
       return found;
     });
+    await releaseAttempts(user.email);
     await startSession(req, user);
     res.json({ data: presentSessionUser(user) });
   };

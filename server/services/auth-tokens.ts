@@ -8,16 +8,18 @@ export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw
 
 /**
  * Issues a single-use token and returns it in the clear (for the e-mail only). Earlier unused
- * tokens of the same purpose for this user stop working.
+ * tokens of the same purpose for this user stop working, unless `keepEarlier` (password resets: a
+ * second request must not silently kill a link that is still fresh in someone's inbox).
  */
 export async function issueToken(
   userId: string,
   purpose: TokenPurpose,
   lifetimeMs: number,
   transaction?: Transaction,
+  { keepEarlier = false } = {},
 ): Promise<string> {
   const raw = crypto.randomBytes(32).toString('base64url');
-  await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
+  if (!keepEarlier) await revokeTokens(userId, purpose, transaction);
   await AuthToken.create(
     { userId, purpose, tokenHash: hashToken(raw), expiresAt: new Date(Date.now() + lifetimeMs) },
     { transaction },
@@ -46,6 +48,16 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   token.usedAt = new Date();
   await token.save({ transaction });
   return user;
+}
+
+/** Every outstanding token of the purpose for this user stops working (a password change revokes reset links). */
+export async function revokeTokens(userId: string, purpose: TokenPurpose, transaction?: Transaction): Promise<void> {
+  await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
+}
+
+/** How many tokens of the purpose were issued to this user within the last `windowMs`. */
+export function countRecentTokens(userId: string, purpose: TokenPurpose, windowMs: number): Promise<number> {
+  return AuthToken.count({ where: { userId, purpose, createdAt: { [Op.gte]: new Date(Date.now() - windowMs) } } });
 }
 
 /** Removes long-expired tokens; housekeeping only. */
