@@ -26,8 +26,10 @@ export const config = {
   distDir: path.resolve(process.env.STARPROOF_DIST_DIR ?? 'dist'),
   /** Worker threads that hash and compare passwords (fewer if the machine has fewer cores). */
   passwordHashThreads: Number(process.env.PASSWORD_HASH_THREADS ?? 2),
-  /** Hash jobs that may wait for a thread; more sign-ins at once are refused with 429 `busy`. */
+  /** Hash jobs that may wait for a thread at most; more sign-ins at once are refused with 429 `busy`. */
   passwordHashQueue: Number(process.env.PASSWORD_HASH_QUEUE ?? 64),
+  /** Longest a sign-in may wait for a hashing thread (ms, judged from recent hash times) before 429 `busy`. */
+  passwordHashMaxWaitMs: Number(process.env.PASSWORD_HASH_MAX_WAIT_MS ?? 5_000),
   /**
    * Which peers' X-Forwarded-For / X-Forwarded-Proto / X-Forwarded-Host are believed (Express
    * `trust proxy` syntax: `loopback`, a list of addresses or subnets, a hop count). Loopback only by default.

@@ -23,24 +23,60 @@ function getPool(): Piscina {
   return pool;
 }
 
-/** Seconds a refused caller is told to wait: about the time the queue ahead takes to drain. */
+/** Seconds a refused caller is told to wait. */
 export const BUSY_RETRY_SECONDS = 5;
 
+/** Recent time one hash job takes (ms), smoothed; starts pessimistic for cost 11 on a slow machine. */
+let typicalJobMs = 500;
+
+const busy = () =>
+  new HttpError(429, 'busy', 'Too many people are signing in at this moment. Try again in a few seconds.', undefined, {
+    retryAfterSeconds: BUSY_RETRY_SECONDS,
+  });
+
+/** Sign-ins admitted and not yet answered (each needs one hash job). */
+let signInsInFlight = 0;
+
+function expectedWaitMs(jobsAhead: number, threads: number): number {
+  return (Math.max(0, jobsAhead - threads + 1) * typicalJobMs) / threads;
+}
+
 /**
- * Runs one bcrypt job in the worker pool, off the thread that answers requests. When the queue is
- * full the job is refused at once (429 `busy` with Retry-After) instead of waiting for many seconds.
+ * Admits one sign-in before it does any database work, or refuses it at once (429 `busy`) when its
+ * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
+ * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time.
+ * @returns release, to call once the sign-in has its answer
+ * @throws HttpError 429 `busy`
+ */
+export function admitSignIn(): () => void {
+  const threads = Math.max(1, getPool().options.maxThreads);
+  if (expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs) throw busy();
+  signInsInFlight += 1;
+  let released = false;
+  return () => {
+    if (!released) signInsInFlight -= 1;
+    released = true;
+  };
+}
+
+/**
+ * Runs one bcrypt job in the worker pool, off the thread that answers requests. A job that would
+ * wait longer than `passwordHashMaxWaitMs` for a thread (judged from how long recent jobs took), or
+ * find the queue full, is refused at once (429 `busy` with Retry-After) instead of waiting.
  * @throws HttpError 429 `busy`
  */
 export async function runHashJob<R>(
   task: { op: 'hash'; password: string; cost: number } | { op: 'compare'; password: string; hash: string },
 ): Promise<R> {
+  const p = getPool();
+  const threads = Math.max(1, p.options.maxThreads);
+  if (p.queueSize > 0 && expectedWaitMs(p.queueSize + threads, threads) > config.passwordHashMaxWaitMs) throw busy();
   try {
-    return (await getPool().run(task)) as R;
+    const { result, ms } = (await p.run(task)) as { result: R; ms: number };
+    typicalJobMs = 0.8 * typicalJobMs + 0.2 * ms;
+    return result;
   } catch (err) {
-    if (err instanceof Error && /queue is at limit|No task queue available/i.test(err.message))
-      throw new HttpError(429, 'busy', 'Too many people are signing in at this moment. Try again in a few seconds.', undefined, {
-        retryAfterSeconds: BUSY_RETRY_SECONDS,
-      });
+    if (err instanceof Error && /queue is at limit|No task queue available/i.test(err.message)) throw busy();
     throw err;
   }
 }
