@@ -36,9 +36,25 @@ export const config = {
    */
   trustProxy: process.env.TRUST_PROXY ?? 'loopback',
   /** Longest a single database query may take before the request answers 503 (ms). */
-  dbQueryTimeoutMs: Number(process.env.DB_QUERY_TIMEOUT_MS ?? 8_000),
+  dbQueryTimeoutMs: Number(process.env.DB_QUERY_TIMEOUT_MS ?? 15_000),
   logLevel: process.env.LOG_LEVEL ?? (process.env.NODE_ENV === 'test' ? 'silent' : 'info'),
 };
+
+/**
+ * Settings production cannot run without; `npm start` calls it before anything else.
+ * @returns what is wrong, one line per problem (empty when all is well)
+ */
+export function productionSettingProblems(): string[] {
+  if (!config.isProduction) return [];
+  const problems: string[] = [];
+  if (!config.publicUrl)
+    problems.push(
+      'PUBLIC_URL is not set: links in e-mail and the Atom feed, and the same-origin check, need the address people use.',
+    );
+  else if (!/^https?:\/\/[^/]+/.test(config.publicUrl))
+    problems.push(`PUBLIC_URL (${config.publicUrl}) is not an http(s) address.`);
+  return problems;
+}
 
 /** The base URL for links in e-mail. */
 export function appBaseUrl(): string {

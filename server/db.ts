@@ -1,4 +1,4 @@
-import { Sequelize } from 'sequelize';
+import { Sequelize, type Transaction } from 'sequelize';
 import { config } from './config.ts';
 
 let instance: Sequelize | undefined;
@@ -44,4 +44,25 @@ export async function closeSequelize(): Promise<void> {
     await instance.close();
     instance = undefined;
   }
+}
+
+/**
+ * Lets one transaction's statements run for up to `seconds` (a bulk import), on the server
+ * (statement_timeout) and in the client (pg's query_timeout, which would otherwise abandon the
+ * query at the pool's bound); the connection gets the pool's bound back when the transaction ends.
+ */
+export async function allowLongStatements(transaction: Transaction, seconds: number): Promise<void> {
+  await getSequelize().query(`SET LOCAL statement_timeout = '${Math.round(seconds)}s'`, { transaction });
+  const connection = (transaction as unknown as { connection?: { connectionParameters?: { query_timeout?: number } } })
+    .connection;
+  const params = connection?.connectionParameters;
+  if (!params) return;
+  const normal = params.query_timeout;
+  params.query_timeout = seconds * 1000 + 5_000;
+  // Sequelize calls cleanup() on commit and on rollback alike, just before the connection goes back to the pool.
+  const cleanup = (transaction as unknown as { cleanup?: () => unknown }).cleanup?.bind(transaction);
+  (transaction as unknown as { cleanup: () => unknown }).cleanup = () => {
+    params.query_timeout = normal;
+    return cleanup?.();
+  };
 }

@@ -1,6 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { config } from '../config.ts';
+import { config, productionSettingProblems } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
@@ -17,6 +17,12 @@ import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media-sweep.ts';
 
 const started = Date.now();
+
+const problems = productionSettingProblems();
+if (problems.length) {
+  console.error(`Refusing to start in production:\n  ${problems.join('\n  ')}`);
+  process.exit(1);
+}
 
 // pg-boss 10 does not await its own complete/fail calls (timgit/pg-boss#577), so during a database
 // outage they reject with nobody listening and Node would exit. Such a job stays active, expires and

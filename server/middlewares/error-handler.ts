@@ -34,6 +34,9 @@ function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   if (err instanceof ZodError) return zodToValidationError(err);
   const e = err as { type?: string; status?: number; expose?: boolean; message?: string };
+  // Broken percent-encoding in the path (`/%ff`): Express's router and static files throw URIError.
+  if (err instanceof URIError || /Failed to decode param/.test(e?.message ?? ''))
+    return new HttpError(400, 'malformed_url', 'The address is not valid: it has broken percent-encoding.');
   if (e?.type === 'entity.parse.failed') return new HttpError(400, 'malformed_json', 'The request body is not valid JSON.');
   if (e?.type === 'entity.too.large') return new HttpError(413, 'too_large', 'The request body is too large.');
   if (e?.type === 'charset.unsupported' || e?.type === 'encoding.unsupported')
@@ -60,6 +63,8 @@ function toHttpError(err: unknown): HttpError {
 export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   const httpError = toHttpError(err);
   if (httpError.status >= 500) (req.log ?? logger).error({ err, url: req.originalUrl }, 'request failed');
+  // A client's mistake, worth a line for whoever watches the log, not an alarm.
+  else if (httpError.code === 'malformed_url') (req.log ?? logger).info({ url: req.originalUrl }, 'malformed URL refused');
   if (res.headersSent) return;
   if (httpError.options.retryAfterSeconds) res.set('Retry-After', String(httpError.options.retryAfterSeconds));
   const body: { error: { code: string; message: string; fields?: Record<string, string> } } = {

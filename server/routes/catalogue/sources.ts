@@ -11,6 +11,7 @@ import { authorize } from '../../policies/index.ts';
 import { presentSource } from '../../presenters/source.ts';
 import { createSource, updateSource } from '../../services/source-write.ts';
 import { findSource } from './load.ts';
+import { containsPattern } from '../../db/like-pattern.ts';
 
 const notFound = () => NotFoundError('There is no source with that id.');
 const SourceListQuerySchema = z.object({ q: z.string().trim().max(200).optional() });
@@ -21,7 +22,7 @@ sourcesRouter.get('/', validate(SourceListQuerySchema, 'query'), async (req, res
   const viewer = currentUser(req);
   authorize(viewer, 'catalogue', 'read');
   const { q } = req.query as { q?: string };
-  const pattern = q ? `%${q.toLowerCase()}%` : null;
+  const pattern = q ? containsPattern(q, { lower: true }) : null;
   const rows = await getSequelize().query<{ id: string; count: string }>(
     `SELECT s.id, (SELECT count(*) FROM measurements m WHERE m.source_id = s.id AND m.retired_at IS NULL) AS count
      FROM sources s WHERE $1::text IS NULL OR lower(s.citation) LIKE $1 OR lower(coalesce(s.bibcode, '')) LIKE $1 OR lower(coalesce(s.doi, '')) LIKE $1

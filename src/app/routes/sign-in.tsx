@@ -11,9 +11,7 @@ import { paths } from '@/config/paths.ts';
 import { useMe } from '@/features/auth/api/get-me.ts';
 import { useSignIn } from '@/features/auth/api/sign-in.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-
-/** Only same-site paths are followed after sign-in. */
-const safeNext = (next: string | null) => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/');
+import { safeNext } from '@/lib/safe-next.ts';
 
 export function Component() {
   const [params] = useSearchParams();
