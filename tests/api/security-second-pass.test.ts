@@ -110,7 +110,7 @@ describe('proxies, origins and the Atom base (point 13)', () => {
   });
 
   it('production refuses to start without PUBLIC_URL, and says why', () => {
-    const env = { ...process.env, NODE_ENV: 'production', DATABASE_URL: 'postgres://nobody@127.0.0.1:1/none' };
+    const env: NodeJS.ProcessEnv = { ...process.env, NODE_ENV: 'production', DATABASE_URL: 'postgres://nobody@127.0.0.1:1/none' };
     delete env.PUBLIC_URL;
     const run = spawnSync(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {
       env,
