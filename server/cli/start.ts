@@ -6,7 +6,7 @@ import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
 import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
-import { logger } from '../logger.ts';
+import { logger, routeConsoleToLogger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
@@ -35,6 +35,9 @@ process.on('unhandledRejection', (reason) => {
   logger.fatal({ err: reason }, 'unhandled promise rejection');
   process.exit(1);
 });
+// From here on, library output goes through the JSON log like everything else.
+routeConsoleToLogger();
+
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {

@@ -133,6 +133,30 @@ describe('odds and ends (point 14)', () => {
     expect(underscore.body.data).toEqual([]);
   });
 
+  it("a PostgreSQL error is logged as one short JSON line, without the driver's connection objects", async () => {
+    const { getSequelize } = await import('../../server/db.ts');
+    const { serializeError } = await import('../../server/logger.ts');
+    const pg = await import('pg');
+    const raw = new pg.default.Client({ connectionString: process.env.DATABASE_URL });
+    await raw.connect();
+    const errors = [
+      await getSequelize()
+        .query('SELECT * FROM no_such_table')
+        .catch((e: unknown) => e),
+      await raw.query('SELECT * FROM no_such_table').catch((e: unknown) => e),
+    ];
+    // pg-pool hands idle-connection errors over with the client attached (`err.client = client`):
+    // that is what filled the log during an outage.
+    Object.assign(errors[1] as object, { client: raw });
+    await raw.end();
+    for (const err of errors) {
+      const line = JSON.stringify(serializeError(err));
+      expect(line).not.toMatch(/connectionParameters|_queryQueue|"client"/);
+      expect(line.length).toBeLessThan(4_000);
+      expect(line).toMatch(/no_such_table/);
+    }
+  });
+
   it('committing an import that does not exist answers 404', async () => {
     const { agent } = await signedInAgent('admin');
     const res = await agent.post('/api/catalogue/imports/00000000-0000-4000-8000-000000000000/commit').send({});
