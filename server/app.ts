@@ -7,6 +7,7 @@ import { getSequelize } from './db.ts';
 import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
 import { errorHandler } from './middlewares/error-handler.ts';
+import { guardJsonBody } from './middlewares/json-guard.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
@@ -51,6 +52,7 @@ export function createApp(options: AppOptions = {}) {
 
   const api = express.Router();
   api.use(express.json({ limit: '6mb' }));
+  api.use(guardJsonBody);
   api.use(sameOrigin);
   api.use(sessions.middleware);
   api.use(loadUser);
