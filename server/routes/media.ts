@@ -84,7 +84,8 @@ mediaRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
   const media = await findMedia(req.params.id as string);
   authorize(viewer, 'media', 'read', media);
-  res.json({ data: { ...(await present(media, viewer)), usage: await findMediaUsage(media.id) } });
+  const { usage, hiddenCount } = await findMediaUsage(media.id, viewer);
+  res.json({ data: { ...(await present(media, viewer)), usage, hiddenUsageCount: hiddenCount } });
 });
 
 mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {
