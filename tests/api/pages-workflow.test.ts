@@ -135,11 +135,13 @@ describe('from draft to published', () => {
     const eclipse = await agent.post(`/api/pages/${moonPage.id}/submit`).send({});
     expect(eclipse.status).toBe(422);
     expect(eclipse.body.error.message).toMatch(/mentions “eclipse”/);
-    const withNotice = await agent.put(`/api/pages/${moonPage.id}`).send({
-      version: moonPage.version,
-      title: 'Moon',
-      doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
-    });
+    const withNotice = await agent
+      .put(`/api/pages/${moonPage.id}`)
+      .send({
+        version: moonPage.version,
+        title: 'Moon',
+        doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
+      });
     expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(
       200,
     );
@@ -332,11 +334,13 @@ describe('revisions, scheduling and the digest', () => {
     const { agent, user } = await signedInAgent('writer');
     const q = await quasarWithStatements(agent, user);
     const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('The first words.'))), 'Diff me');
-    const second = await agent.put(`/api/pages/${page.id}`).send({
-      version: page.version,
-      title: 'Diff me again',
-      doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
-    });
+    const second = await agent
+      .put(`/api/pages/${page.id}`)
+      .send({
+        version: page.version,
+        title: 'Diff me again',
+        doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
+      });
     const list = (await agent.get(`/api/pages/${page.id}/revisions`)).body.data;
     expect(list.map((r: { number: number }) => r.number)).toEqual([3, 2, 1]);
     expect(list[0].marks).toEqual(['current']);
