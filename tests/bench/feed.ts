@@ -135,14 +135,7 @@ await closeSequelize();
 // ---- servers in their own processes
 function startServer(args: string[]): Promise<{ child: ChildProcess; port: number }> {
   const child = spawn(process.execPath, ['--import', 'tsx', 'tests/bench/feed-server.ts', ...args], {
-    env: {
-      ...process.env,
-      DATABASE_URL: url,
-      NODE_ENV: 'production',
-      PUBLIC_URL: 'http://127.0.0.1',
-      LOG_LEVEL: 'warn',
-      MALLOC_ARENA_MAX: '2',
-    },
+    env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
     stdio: ['ignore', 'pipe', 'inherit'],
   });
   return new Promise((resolve, reject) => {
