@@ -90,3 +90,16 @@ async function checkCredentials(email: string, password: string, ip: string | un
   await recordAudit({ actorId: user.id, action: 'auth.signed_in', subjectType: 'user', subjectId: user.id, ip });
   return user;
 }
+
+/**
+ * Forgets attempt counts that have not moved for a day and hold no running lock (guesses at
+ * addresses without accounts would otherwise stay forever). Housekeeping, next to purgeOldTokens.
+ * @returns how many were removed
+ */
+export async function purgeOldSignInAttempts(): Promise<number> {
+  const [, result] = await getSequelize().query(
+    `DELETE FROM sign_in_attempts
+     WHERE updated_at < now() - interval '1 day' AND (throttled_until IS NULL OR throttled_until < now())`,
+  );
+  return (result as { rowCount?: number }).rowCount ?? 0;
+}

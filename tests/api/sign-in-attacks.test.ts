@@ -3,7 +3,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
-import { FREE_ATTEMPTS } from '../../server/services/sign-in.ts';
+import { FREE_ATTEMPTS, purgeOldSignInAttempts } from '../../server/services/sign-in.ts';
 import { OutboxMessage } from '../../server/models/index.ts';
 import { buildUser, getTestApp, resetDatabase, TEST_PASSWORD, tokenFromMail, waitForMail } from '../support/app.ts';
 
@@ -81,6 +81,20 @@ describe('unknown addresses look like known ones (point 6)', () => {
     const unknownAnswers = await answersFor('nobody-here@example.test');
     expect(unknownAnswers).toEqual(knownAnswers);
     expect(knownAnswers.at(-1)).toEqual({ status: 429, code: 'too_many_attempts' });
+  });
+});
+
+describe('housekeeping', () => {
+  it('attempt counts idle for a day and without a running lock are forgotten; fresh ones stay', async () => {
+    const app = await api();
+    await app.post('/api/auth/sign-in').send({ email: 'stale-guess@example.test', password: 'a-guess' });
+    await app.post('/api/auth/sign-in').send({ email: 'fresh-guess@example.test', password: 'a-guess' });
+    await getSequelize().query(
+      "UPDATE sign_in_attempts SET updated_at = now() - interval '2 days' WHERE email = 'stale-guess@example.test'",
+    );
+    expect(await purgeOldSignInAttempts()).toBeGreaterThanOrEqual(1);
+    const [rows] = await getSequelize().query("SELECT email FROM sign_in_attempts WHERE email LIKE '%-guess@example.test'");
+    expect((rows as Array<{ email: string }>).map((r) => r.email)).toEqual(['fresh-guess@example.test']);
   });
 });
 
