@@ -7,6 +7,7 @@ import { getSequelize } from './db.ts';
 import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
 import { errorHandler } from './middlewares/error-handler.ts';
+import { guardJsonBody } from './middlewares/json-guard.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
@@ -37,8 +38,10 @@ export function createApp(options: AppOptions = {}) {
 
   const app = express();
   app.disable('x-powered-by');
-  // One proxy hop (a load balancer) is trusted for the client address and protocol.
-  app.set('trust proxy', 'loopback, uniquelocal');
+  // Only the configured proxies may name the client's address, protocol and host (TRUST_PROXY,
+  // loopback by default): anyone else on the network could rotate X-Forwarded-For past the
+  // per-address limits, or name another host to the same-origin check.
+  app.set('trust proxy', trustProxySetting(config.trustProxy));
   app.use(securityHeaders(https));
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
   // user loading, none of which it needs (its own errors still reach the error handler and the log).
@@ -50,9 +53,11 @@ export function createApp(options: AppOptions = {}) {
 
   const api = express.Router();
   api.use(express.json({ limit: '6mb' }));
+  api.use(guardJsonBody);
   api.use(sameOrigin);
   api.use(sessions.middleware);
   api.use(loadUser);
+  api.use(noStoreWhenSignedIn);
   api.use(apiRouter());
   app.use('/api', api);
 
@@ -61,6 +66,21 @@ export function createApp(options: AppOptions = {}) {
   app.use(errorHandler);
   return app;
 }
+
+/** Express's `trust proxy` from the setting: a hop count, true/false, or a list of addresses and subnets. */
+export function trustProxySetting(value: string): boolean | number | string {
+  const v = value.trim();
+  if (v === 'true') return true;
+  if (v === 'false' || v === '') return false;
+  if (/^\d+$/.test(v)) return Number(v);
+  return v;
+}
+
+/** Answers to a signed-in person (and every sign-in answer) are never stored by a browser or proxy. */
+const noStoreWhenSignedIn: express.RequestHandler = (req, res, next) => {
+  if (req.user || req.path.startsWith('/auth/')) res.set('Cache-Control', 'no-store');
+  next();
+};
 
 /** The built client: hashed assets cached for a year, HTML never cached, SPA fallback. */
 function serveClient(app: express.Express) {

@@ -54,6 +54,11 @@ export const EnvSchema = z.object({
   STARPROOF_PAIRING_LIMIT: variable(limit().default(30)),
   STARPROOF_PUBLIC_LIMIT: variable(limit().default(300)),
   STARPROOF_PUBLISHER_NAME: text('Starproof'),
+  PASSWORD_HASH_THREADS: variable(wholeNumber(1, 64).default(2)),
+  PASSWORD_HASH_QUEUE: variable(wholeNumber(1, 100_000).default(64)),
+  PASSWORD_HASH_MAX_WAIT_MS: ms(5_000),
+  TRUST_PROXY: text('loopback'),
+  DB_QUERY_TIMEOUT_MS: ms(15_000),
 });
 
 /** The checked environment. */
@@ -179,6 +184,29 @@ export const config = {
       publicApi: read('STARPROOF_PUBLIC_LIMIT'),
     };
   },
+  /** Worker threads that hash and compare passwords (fewer if the machine has fewer cores). */
+  get passwordHashThreads() {
+    return read('PASSWORD_HASH_THREADS');
+  },
+  /** Hash jobs that may wait for a thread at most; more sign-ins at once are refused with 429 `busy`. */
+  get passwordHashQueue() {
+    return read('PASSWORD_HASH_QUEUE');
+  },
+  /** Longest a sign-in may wait for a hashing thread (ms, judged from recent hash times) before 429 `busy`. */
+  get passwordHashMaxWaitMs() {
+    return read('PASSWORD_HASH_MAX_WAIT_MS');
+  },
+  /**
+   * Which peers' X-Forwarded-For / X-Forwarded-Proto / X-Forwarded-Host are believed (Express
+   * `trust proxy` syntax: `loopback`, a list of addresses or subnets, a hop count). Loopback only by default.
+   */
+  get trustProxy() {
+    return read('TRUST_PROXY');
+  },
+  /** Longest a single database query may take before the request answers 503 (ms). */
+  get dbQueryTimeoutMs() {
+    return read('DB_QUERY_TIMEOUT_MS');
+  },
   /** The publisher named in the public API's Atom feed. */
   get publisherName() {
     return read('STARPROOF_PUBLISHER_NAME');
@@ -192,6 +220,22 @@ export const config = {
  */
 export function useDatabaseUrl(url: string): void {
   process.env.DATABASE_URL = url;
+}
+
+/**
+ * Settings production cannot run without; `npm start` calls it before anything else.
+ * @returns what is wrong, one line per problem (empty when all is well)
+ */
+export function productionSettingProblems(): string[] {
+  if (!config.isProduction) return [];
+  const problems: string[] = [];
+  if (!config.publicUrl)
+    problems.push(
+      'PUBLIC_URL is not set: links in e-mail and the Atom feed, and the same-origin check, need the address people use.',
+    );
+  else if (!/^https?:\/\/[^/]+/.test(config.publicUrl))
+    problems.push(`PUBLIC_URL (${config.publicUrl}) is not an http(s) address.`);
+  return problems;
 }
 
 /** The base URL for links in e-mail. */

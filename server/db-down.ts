@@ -11,6 +11,8 @@ const DOWN_CODES = new Set([
   '08001',
   '08003',
   '08006',
+  // query_canceled: our statement_timeout fired.
+  '57014',
 ]);
 
 /**
@@ -22,5 +24,7 @@ export function isDatabaseDown(err: unknown): boolean {
   const e = err as { code?: string; parent?: { code?: string }; message?: string } | undefined;
   if (!e) return false;
   if (DOWN_CODES.has(e.code ?? '') || DOWN_CODES.has(e.parent?.code ?? '')) return true;
-  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect/i.test(e.message ?? '');
+  return /Connection terminated|connect ECONNREFUSED|timeout exceeded when trying to connect|Query read timeout|statement timeout/i.test(
+    e.message ?? '',
+  );
 }

@@ -11,10 +11,17 @@ export class HttpError extends Error {
     readonly code: string,
     message: string,
     readonly fields?: Record<string, string>,
-    readonly current?: unknown,
+    /**
+     * `current`: what the server holds now (a 409's other version); `retryAfterSeconds`: sent as
+     * `Retry-After` with 429 and 503 answers that will clear by themselves.
+     */
+    readonly options: { current?: unknown; retryAfterSeconds?: number } = {},
   ) {
     super(message);
+    this.current = options.current;
   }
+
+  readonly current?: unknown;
 }
 
 export const ValidationError = (message: string, fields?: Record<string, string>) =>
@@ -33,6 +40,12 @@ export const TooLargeError = (message: string, code: string) => new HttpError(41
 /** Well-formed but unusable content (e.g. a file that is not text), with its own code. */
 export const UnprocessableError = (message: string, code: string) => new HttpError(422, code, message);
 export const TooManyRequestsError = (message: string, code = 'too_many_requests') => new HttpError(429, code, message);
+
+/** The server is overloaded for a moment (pool or queue full): 503 `busy`, never "database down". */
+export const BusyError = (retryAfterSeconds = 5) =>
+  new HttpError(503, 'busy', 'The server is busy at this moment. Nothing was saved; try again in a few seconds.', undefined, {
+    retryAfterSeconds,
+  });
 
 /** Turns zod issues into the error shape: the first message, and one message per field. */
 export function zodToValidationError(error: z.ZodError): HttpError {

@@ -2,13 +2,18 @@ import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import pg from 'pg';
 import { config } from './config.ts';
+import { poolTimeouts } from './db.ts';
 import { logger } from './logger.ts';
 
 const PgStore = connectPgSimple(session);
 
+/** Longest a session read or write may take (ms). */
+export const SESSION_QUERY_TIMEOUT_MS = 4_000;
+
 /** Sessions in PostgreSQL (so any server instance can serve any request), 12 h rolling. */
 export function sessionMiddleware(databaseUrl: string, https: boolean) {
-  const pool = new pg.Pool({ connectionString: databaseUrl, max: 5, connectionTimeoutMillis: 5_000 });
+  // Every request with a cookie reads its session first: a short bound, so a frozen database answers 503 in seconds.
+  const pool = new pg.Pool({ connectionString: databaseUrl, max: 5, ...poolTimeouts(SESSION_QUERY_TIMEOUT_MS) });
   // A dropped connection during a database outage must not crash the process.
   pool.on('error', () => undefined);
   return {

@@ -1,12 +1,12 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { checkConfig, config, useDatabaseUrl } from '../config.ts';
+import { checkConfig, config, productionSettingProblems, useDatabaseUrl } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
 import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
-import { logger } from '../logger.ts';
+import { logger, routeConsoleToLogger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
 import { useMailCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
@@ -24,6 +24,11 @@ try {
   console.error(error instanceof Error ? error.message : error);
   process.exit(1);
 }
+const problems = productionSettingProblems();
+if (problems.length) {
+  console.error(`Refusing to start in production:\n  ${problems.join('\n  ')}`);
+  process.exit(1);
+}
 
 // pg-boss 10 does not await its own complete/fail calls (timgit/pg-boss#577), so during a database
 // outage they reject with nobody listening and Node would exit. Such a job stays active, expires and
@@ -36,6 +41,9 @@ process.on('unhandledRejection', (reason) => {
   logger.fatal({ err: reason }, 'unhandled promise rejection');
   process.exit(1);
 });
+// From here on, library output goes through the JSON log like everything else.
+routeConsoleToLogger();
+
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {

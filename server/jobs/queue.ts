@@ -1,4 +1,5 @@
 import PgBoss from 'pg-boss';
+import { poolTimeouts } from '../db.ts';
 import { logger } from '../logger.ts';
 
 /** A background job's handler; throwing makes pg-boss retry it with backoff. */
@@ -46,7 +47,8 @@ export function registerBatchJob<T extends object>(
 /** Starts pg-boss on the app's database (its tables live in their own `pgboss` schema) and the workers. */
 export async function startJobQueue(databaseUrl: string, { pollingIntervalSeconds = 0.5 } = {}): Promise<PgBoss> {
   if (boss) return boss;
-  const instance = new PgBoss({ connectionString: databaseUrl, max: 4 });
+  // The same timeouts as the app's other pools: enqueuing from a request never hangs on a frozen database.
+  const instance = new PgBoss({ connectionString: databaseUrl, max: 4, ...(poolTimeouts() as object) });
   instance.on('error', (err) => logger.warn({ err }, 'job queue error'));
   await instance.start();
   for (const [name, { run, batchSize }] of handlers) {

@@ -24,7 +24,8 @@ export function sendCached(
   contentType: string,
   cacheControl: string,
 ): void {
-  res.set({ ETag: etag, 'Cache-Control': cacheControl });
+  // A signed-in person's answers are never stored (see app.ts), public ones included.
+  res.set({ ETag: etag, 'Cache-Control': req.user ? 'no-store' : cacheControl });
   if (etagMatches(req.get('if-none-match'), etag)) {
     res.status(304).end();
     return;

@@ -32,6 +32,8 @@ function startSession(req: Request, user: User): Promise<void> {
   );
 }
 
+/** Reset e-mails per account per hour. */
+
 export const authRouter = Router();
 
 authRouter.get('/me', requireUser, (req, res) => {

@@ -76,7 +76,8 @@ mediaRouter.get('/:id', async (req, res) => {
   const viewer = currentUser(req);
   const media = await loadMedia(req.params.id);
   authorize(viewer, 'media', 'read', media);
-  res.json({ data: { ...(await present(media, viewer)), usage: await findMediaUsage(media.id) } });
+  const { usage, hiddenCount } = await findMediaUsage(media.id, viewer);
+  res.json({ data: { ...(await present(media, viewer)), usage, hiddenUsageCount: hiddenCount } });
 });
 
 mediaRouter.patch('/:id', validate(MediaUpdateSchema), async (req, res) => {

@@ -133,7 +133,12 @@ export const MediaDtoSchema = z.object({
 export type MediaDto = z.infer<typeof MediaDtoSchema>;
 
 /** GET /api/media/:id adds where the image is used. */
-export const MediaDetailDtoSchema = MediaDtoSchema.extend({ usage: z.array(MediaUsageSchema) });
+export const MediaDetailDtoSchema = MediaDtoSchema.extend({
+  /** The places the viewer may see. */
+  usage: z.array(MediaUsageSchema),
+  /** Places the viewer may not see (other writers' private drafts), only counted. */
+  hiddenUsageCount: z.number(),
+});
 export type MediaDetailDto = z.infer<typeof MediaDetailDtoSchema>;
 
 /** The list's paging and the limits the upload screen shows. */

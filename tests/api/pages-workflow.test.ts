@@ -159,7 +159,7 @@ describe('from draft to published', () => {
       q.object.id,
       doc(paragraph(text('A quasar shines.')), { type: 'mediaImage', attrs: { mediaId: bare.id, caption: 'The field' } }),
     );
-    expect(await findMediaUsage(bare.id)).toContainEqual({ kind: 'page', id: page.id, title: 'A page for checks' });
+    expect((await findMediaUsage(bare.id, user)).usage).toContainEqual({ kind: 'page', id: page.id, title: 'A page for checks' });
     await agent.post(`/api/pages/${page.id}/submit`).send({});
     const refused = await reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`);
     expect(refused.status).toBe(422);

@@ -2,6 +2,7 @@
 import xml from 'fast-xml-parser';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { appBaseUrl } from '../../server/config.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { buildKioskMedia, publishedPage, publishingCrew } from '../support/publishing.ts';
 
@@ -87,7 +88,8 @@ describe('the public API', () => {
     });
     // RFC 4287: feed needs id, title, updated, author (or per-entry authors); entries need id, title, updated.
     expect(doc.feed['@_xmlns']).toBe('http://www.w3.org/2005/Atom');
-    expect(doc.feed.id).toBe('http://starproof.example/api/public/pages.atom');
+    // The configured base, never the Host header (issue 15, point 13).
+    expect(doc.feed.id).toBe(`${appBaseUrl()}/api/public/pages.atom`);
     expect(doc.feed.author.name).toBeTruthy();
     const entries = Array.isArray(doc.feed.entry) ? doc.feed.entry : [doc.feed.entry];
     expect(entries).toHaveLength(2);

@@ -1,6 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { config } from '../../config.ts';
+import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { sendCached } from '../../middlewares/http-cache.ts';
 import { atomDocument, getPublicPages, prepare } from '../../services/publishing/index.ts';
@@ -49,9 +49,12 @@ const cors: RequestHandler = (req, res, next) => {
   next();
 };
 
-/** Links in Atom must be absolute: PUBLIC_URL when set, else the address the request came to. */
-const baseUrlOf = (req: Parameters<RequestHandler>[0]) =>
-  (config.publicUrl ?? `${req.protocol}://${req.get('host') ?? `${config.host}:${config.port}`}`).replace(/\/+$/, '');
+/**
+ * Links in Atom must be absolute: always the configured base (PUBLIC_URL, else the address the
+ * server listens on), never the request's Host header, which anyone can set and which would then
+ * sit in a publicly cached document. Production refuses to start without PUBLIC_URL.
+ */
+const atomBaseUrl = () => appBaseUrl().replace(/\/+$/, '');
 
 /** GET /api/public/…: published pages for the venue's website, read-only and without sign-in. */
 export const publicRouter = Router();
@@ -64,10 +67,10 @@ publicRouter.get('/pages', async (req, res) => {
 
 publicRouter.get('/pages.atom', async (req, res) => {
   const published = await getPublicPages();
-  const base = baseUrlOf(req);
+  const base = atomBaseUrl();
   let doc = published.atom.get(base);
   if (!doc) {
-    // A few hosts at most (the site's names); a flood of made-up Host headers cannot grow this without bound.
+    // One base in use; the map only outlives a change of setting in tests.
     if (published.atom.size >= 8) published.atom.clear();
     doc = prepare(atomDocument(published.pages, base, PUBLISHER));
     published.atom.set(base, doc);

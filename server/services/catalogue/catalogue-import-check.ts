@@ -5,7 +5,7 @@ import { getSequelize } from '../../db.ts';
 import { CatalogueImport, type User } from '../../models/index.ts';
 import type { AcceptedImportRow } from '../../models/catalogue-import.ts';
 import { decodeCsv } from './csv-decode.ts';
-import { readCsvRows, type CsvRow } from './csv-rows.ts';
+import { ROWS_PER_SLICE, readCsvRows, yieldToEventLoop, type CsvRow } from './csv-rows.ts';
 import { findExistingDuplicates, lookUpObjects, lookUpSources } from './catalogue-import-lookup.ts';
 
 // In semicolon files the comma is the decimal mark (the convention of the locales that use them).
@@ -30,7 +30,7 @@ export async function checkCatalogueImport(
 ): Promise<CatalogueImport> {
   const started = performance.now();
   const decoded = decodeCsv(file.buffer);
-  const parsed = readCsvRows(decoded, mapping);
+  const parsed = await readCsvRows(decoded, mapping);
   const [objects, sources] = await Promise.all([
     lookUpObjects(distinct(parsed.rows, 'object')),
     lookUpSources(distinct(parsed.rows, 'source')),
@@ -45,7 +45,9 @@ export async function checkCatalogueImport(
   const candidates: AcceptedImportRow[] = [];
   const seen = new Map<string, number>();
 
-  for (const { row, cells } of parsed.rows) {
+  for (const [index, { row, cells }] of parsed.rows.entries()) {
+    // Checked in slices: other requests are answered while a large file is checked.
+    if (index > 0 && index % ROWS_PER_SLICE === 0) await yieldToEventLoop();
     const objectText = (cells.object ?? '').trim();
     const sourceText = (cells.source ?? '').trim();
     const semicolon = decoded.delimiter === ';';

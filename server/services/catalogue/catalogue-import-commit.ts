@@ -1,6 +1,6 @@
 import { ForeignKeyConstraintError, QueryTypes } from 'sequelize';
-import { getSequelize } from '../../db.ts';
-import { ConflictError } from '../../errors.ts';
+import { allowLongStatements, getSequelize } from '../../db.ts';
+import { ConflictError, NotFoundError } from '../../errors.ts';
 import { CatalogueImport, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 
@@ -13,7 +13,7 @@ const RECORDSET = `jsonb_to_recordset(ci.accepted_rows) AS r(
  * one transaction, or nothing does. Refused if the catalogue changed since the dry run so that a
  * row would now duplicate a measurement, or an object or source has been deleted.
  * @returns the import and how many measurements were inserted
- * @throws HttpError 409 (already_committed, catalogue_changed)
+ * @throws HttpError 404 when there is no such import, 409 (already_committed, catalogue_changed)
  */
 export async function commitCatalogueImport(
   importId: string,
@@ -24,15 +24,15 @@ export async function commitCatalogueImport(
   let inserted = 0;
   try {
     const record = await sequelize.transaction(async (transaction) => {
-      // A bulk commit of up to 100,000 rows may outlast the 15 s limit meant for ordinary requests.
-      await sequelize.query("SET LOCAL statement_timeout = '120s'", { transaction });
+      // A bulk commit of up to 100,000 rows may outlast the limit meant for ordinary requests.
+      await allowLongStatements(transaction, 120);
       // The rows stay in the database: they are read by the INSERT below, never into Node.
       const record = await CatalogueImport.findByPk(importId, {
         attributes: { exclude: ['acceptedRows'] },
         transaction,
         lock: transaction.LOCK.UPDATE,
       });
-      if (!record) throw ConflictError('This import no longer exists; upload the file again.', 'import_missing');
+      if (!record) throw NotFoundError('There is no import with that id; upload the file again.');
       if (record.status === 'committed')
         throw ConflictError('This file has already been imported; nothing was added twice.', 'already_committed');
 

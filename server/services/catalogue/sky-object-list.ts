@@ -2,6 +2,7 @@ import { QueryTypes } from 'sequelize';
 import { QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
 import type { SkyObjectListQuery, SkyObjectPageDto, SkyObjectRowDto } from '@shared/schemas/sky-object.ts';
 import { getSequelize } from '../../db.ts';
+import { containsPattern } from '../../db/like-pattern.ts';
 import { ValidationError } from '../../errors.ts';
 
 // Every sort ends on id so pages never repeat or skip rows that tie.
@@ -22,7 +23,7 @@ export function skyObjectFilter(query: Pick<SkyObjectListQuery, 'q' | 'kind' | '
   const clauses: string[] = [];
   const replacements: Record<string, unknown> = {};
   if (query.q) {
-    replacements.pattern = `%${query.q.toLowerCase().replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+    replacements.pattern = containsPattern(query.q, { lower: true });
     replacements.exact = query.q;
     clauses.push('(lower(o.name) LIKE :pattern OR o.designations @> ARRAY[:exact]::text[])');
   }

@@ -1,5 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
+import { containsPattern } from '../../db/like-pattern.ts';
 import { Measurement, Source } from '../../models/index.ts';
 
 /** A source with how many measurements in use (not retired) cite it. */
@@ -13,7 +14,7 @@ export interface SourceWithUse {
  * (ignoring case) when one is given, each with its measurements in use.
  */
 export async function listSources(q?: string): Promise<SourceWithUse[]> {
-  const pattern = q ? `%${q.toLowerCase()}%` : null;
+  const pattern = q ? containsPattern(q, { lower: true }) : null;
   const rows = await getSequelize().query<{ id: string; count: string }>(
     `SELECT s.id, (SELECT count(*) FROM measurements m WHERE m.source_id = s.id AND m.retired_at IS NULL) AS count
      FROM sources s WHERE $1::text IS NULL OR lower(s.citation) LIKE $1 OR lower(coalesce(s.bibcode, '')) LIKE $1 OR lower(coalesce(s.doi, '')) LIKE $1

@@ -3,7 +3,7 @@ import { ConflictError } from '../../errors.ts';
 import { Media, MediaRendition, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { noteFiles, settleFiles } from './media-file-journal.ts';
-import { findMediaUsage } from './media-usage.ts';
+import { findMediaUsage, hiddenUsageText } from './media-usage.ts';
 
 /**
  * Deletes an unused image: its row, renditions and object links in one transaction, then its
@@ -12,15 +12,17 @@ import { findMediaUsage } from './media-usage.ts';
  * @throws HttpError 409 in_use, naming where the image is used
  */
 export async function deleteMedia(media: Media, actor: User, ip?: string): Promise<void> {
-  const usage = await findMediaUsage(media.id);
-  if (usage.length) {
-    const places = usage
-      .slice(0, 3)
-      .map((u) => `${u.kind} “${u.title}”`)
-      .join(', ');
-    const more = usage.length > 3 ? ` and ${usage.length - 3} more` : '';
+  const { usage, hiddenCount } = await findMediaUsage(media.id, actor);
+  const total = usage.length + hiddenCount;
+  if (total) {
+    // Only what the person may see is named; other writers' private drafts are counted.
+    const named = usage.slice(0, 3).map((u) => `${u.kind} “${u.title}”`);
+    const more = usage.length > 3 ? [`${usage.length - 3} more`] : [];
+    const hidden = hiddenCount ? [hiddenUsageText(hiddenCount)] : [];
+    const parts = [...named, ...more, ...hidden];
+    const list = parts.length > 1 ? `${parts.slice(0, -1).join(', ')} and ${parts.at(-1)}` : parts[0];
     throw ConflictError(
-      `This image is used in ${usage.length === 1 ? 'one place' : `${usage.length} places`} (${places}${more}). Remove it there first.`,
+      `This image is used in ${total === 1 ? 'one place' : `${total} places`} (${list}). Remove it there first.`,
       'in_use',
     );
   }

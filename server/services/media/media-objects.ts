@@ -1,3 +1,4 @@
+import { containsPattern } from '../../db/like-pattern.ts';
 import { QueryTypes, type Transaction } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { ValidationError } from '../../errors.ts';
@@ -54,7 +55,7 @@ export async function replaceMediaObjects(mediaId: string, objectIds: string[], 
 }
 
 /** Escapes LIKE wildcards so a search for "50%" finds the characters, not everything. */
-export const likePattern = (text: string) => `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+export const likePattern = (text: string) => containsPattern(text);
 
 /**
  * Catalogue objects whose name or designation contains the text, for the object picker.

@@ -37,8 +37,12 @@ export function checkFileName(name: string): string {
     const tooLong = `The file name is longer than ${MediaLimits.fileNameMax} characters. Rename the file and upload it again.`;
     throw BadRequestError(tooLong, 'unsafe_file_name', { file: tooLong });
   }
-  return name.normalize('NFC');
+  // Bidirectional overrides and isolates make `photo\u202Egpj.exe` read as `photoexe.jpg`: dropped.
+  return name.replace(BIDI_CONTROLS, '').normalize('NFC');
 }
+
+/** Unicode's explicit directional embeddings, overrides and isolates (U+202A–U+202E, U+2066–U+2069). */
+export const BIDI_CONTROLS = /[\u202a-\u202e\u2066-\u2069]/g;
 
 const duplicate = (existing: Media | null) =>
   ConflictError(

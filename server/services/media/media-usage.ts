@@ -1,8 +1,14 @@
 import type { MediaRequirement, MediaUsage } from '@shared/media/schemas.ts';
-import { Media } from '../../models/index.ts';
+import { Media, type User } from '../../models/index.ts';
+
+/**
+ * One place an image is used; `visibleTo` says whether a person may see that place (a private
+ * draft is its writer's own), absent when everyone who sees the library may.
+ */
+export type MediaUsePlace = MediaUsage & { visibleTo?: (viewer: User) => boolean };
 
 /** Finds where one image is used, in one feature (pages, kiosk channels …). */
-export type MediaUsageProvider = (mediaId: string) => Promise<MediaUsage[]>;
+export type MediaUsageProvider = (mediaId: string) => Promise<MediaUsePlace[]>;
 
 const providers = new Map<string, MediaUsageProvider>();
 
@@ -23,12 +29,26 @@ export function unregisterMediaUsageProvider(name: string): void {
 }
 
 /**
- * Every place an image is used, across all registered features.
+ * Every place an image is used, across all registered features, as one person may see them: the
+ * places they may not see (another writer's private draft) are only counted.
  * @param mediaId the image
+ * @param viewer who is asking
+ * @returns the visible places, and how many others there are
  */
-export async function findMediaUsage(mediaId: string): Promise<MediaUsage[]> {
-  const found = await Promise.all([...providers.values()].map((fn) => fn(mediaId)));
-  return found.flat();
+export async function findMediaUsage(mediaId: string, viewer: User): Promise<{ usage: MediaUsage[]; hiddenCount: number }> {
+  const found = (await Promise.all([...providers.values()].map((fn) => fn(mediaId)))).flat();
+  const usage: MediaUsage[] = [];
+  let hiddenCount = 0;
+  for (const { visibleTo, ...place } of found) {
+    if (!visibleTo || visibleTo(viewer)) usage.push(place);
+    else hiddenCount += 1;
+  }
+  return { usage, hiddenCount };
+}
+
+/** "and 2 private drafts": the places a person may not see, counted. */
+export function hiddenUsageText(hiddenCount: number): string {
+  return hiddenCount === 1 ? 'a private draft' : `${hiddenCount} private drafts`;
 }
 
 /**

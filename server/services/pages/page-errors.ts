@@ -12,7 +12,7 @@ export class PageConflictError extends HttpError {
       'page_changed',
       `${current.savedBy ?? 'Someone'} saved this page while you were editing (now revision ${current.revisionNumber}). Your text is kept: compare both versions and choose what to keep.`,
       undefined,
-      current,
+      { current },
     );
   }
 }

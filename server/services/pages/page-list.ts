@@ -1,3 +1,4 @@
+import { containsPattern } from '../../db/like-pattern.ts';
 import { Op, type WhereOptions } from 'sequelize';
 import type { PageListQuery, PageRow } from '@shared/schemas/page.ts';
 import { Page, PageRevision, SkyObject, User } from '../../models/index.ts';
@@ -48,7 +49,7 @@ export async function listPages(query: PageListQuery, viewer: User): Promise<{ r
       query.status ? { status: query.status } : {},
       query.objectId ? { skyObjectId: query.objectId } : {},
       query.writerId ? { writerId: query.writerId } : {},
-      query.q ? { title: { [Op.iLike]: `%${query.q.replace(/[\\%_]/g, (c) => `\\${c}`)}%` } } : {},
+      query.q ? { title: { [Op.iLike]: containsPattern(query.q) } } : {},
     ],
   } as WhereOptions<Page>;
   const { rows, count } = await Page.findAndCountAll({

@@ -1,7 +1,8 @@
 import { QueryTypes } from 'sequelize';
-import type { MediaUsage } from '@shared/media/schemas.ts';
 import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
+import type { Page, User } from '../../models/index.ts';
+import { pagePolicy } from '../../policies/page.ts';
 import { enqueuePageRecheck } from './page-recheck.ts';
 
 /**
@@ -9,15 +10,27 @@ import { enqueuePageRecheck } from './page-recheck.ts';
  * (the media library's usage provider for pages).
  * @param mediaId the image; anything but a uuid uses nothing
  */
-export async function pagesUsingMedia(mediaId: string): Promise<MediaUsage[]> {
+export async function pagesUsingMedia(mediaId: string) {
   if (!/^[0-9a-f-]{36}$/i.test(mediaId)) return [];
-  const rows = await getSequelize().query<{ id: string; title: string }>(
-    `SELECT DISTINCT p.id, p.title FROM pages p JOIN page_revisions r
+  const rows = await getSequelize().query<{
+    id: string;
+    title: string;
+    writerId: string;
+    status: Page['status'];
+    submittedAt: Date | null;
+  }>(
+    `SELECT DISTINCT p.id, p.title, p.writer_id AS "writerId", p.status, p.submitted_at AS "submittedAt" FROM pages p JOIN page_revisions r
         ON r.id IN (p.current_revision_id, p.approved_revision_id, p.published_revision_id)
       WHERE r.media_ids @> ARRAY[:mediaId]::uuid[] ORDER BY p.title`,
     { replacements: { mediaId }, type: QueryTypes.SELECT },
   );
-  return rows.map((r) => ({ kind: 'page', id: r.id, title: r.title }));
+  // Another writer's private draft is listed only to those who may read it (see pagePolicy.read).
+  return rows.map((r) => ({
+    kind: 'page',
+    id: r.id,
+    title: r.title,
+    visibleTo: (viewer: User) => pagePolicy.read(viewer, r as unknown as Page),
+  }));
 }
 
 /**

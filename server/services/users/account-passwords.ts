@@ -5,9 +5,13 @@ import { sendMail } from '../../mail/mailer.ts';
 import { passwordResetMail } from '../../mail/templates.ts';
 import { User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { consumeToken, issueToken } from './auth-tokens.ts';
+import { consumeToken, countRecentTokens, issueToken, revokeTokens } from './auth-tokens.ts';
 import { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords.ts';
+import { releaseAttempts } from './sign-in.ts';
 import { endUserSessions } from './user-sessions.ts';
+
+/** Reset e-mails one account may be sent in an hour, however many addresses ask. */
+export const RESETS_PER_HOUR = 3;
 
 /**
  * Changes a signed-in user's password. Their other sessions (devices signed in with the old
@@ -30,7 +34,9 @@ export async function changePassword(
   user.passwordHash = await hashPassword(passwords.newPassword);
   await getSequelize().transaction(async (transaction) => {
     await user.save({ transaction });
+    // Other devices signed in with the old password are signed out, and reset links mailed earlier die.
     await endUserSessions(user.id, keepSessionId, transaction);
+    await revokeTokens(user.id, 'password_reset', transaction);
     await recordAudit(
       { actorId: user.id, action: 'auth.password_changed', subjectType: 'user', subjectId: user.id, ip },
       transaction,
@@ -45,7 +51,11 @@ export async function changePassword(
 export async function requestPasswordReset(email: string, ip?: string): Promise<void> {
   const user = await User.findOne({ where: { email, active: true } });
   if (!user?.passwordHash) return;
-  const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000);
+  if ((await countRecentTokens(user.id, 'password_reset', 3_600_000)) >= RESETS_PER_HOUR) return;
+  // A new request keeps the earlier link working while it is still fresh.
+  const token = await issueToken(user.id, 'password_reset', TokenLifetimes.passwordResetMinutes * 60_000, undefined, {
+    keepEarlier: true,
+  });
   await sendMail(passwordResetMail(user.email, user.name, token));
   await recordAudit({ actorId: null, action: 'auth.password_reset_requested', subjectType: 'user', subjectId: user.id, ip });
 }
@@ -62,12 +72,16 @@ export async function setPasswordWithToken(
   purpose: 'invitation' | 'password_reset',
   ip?: string,
 ): Promise<User> {
-  return getSequelize().transaction(async (transaction) => {
+  // Hashed before the transaction: no database connection is held while a worker hashes.
+  const passwordHash = await hashPassword(newPassword);
+  const user = await getSequelize().transaction(async (transaction) => {
     const found = await consumeToken(token, purpose, transaction);
     assertAcceptablePassword(newPassword, found.email);
-    found.set({ passwordHash: await hashPassword(newPassword), failedSignIns: 0, throttledUntil: null });
+    found.set({ passwordHash });
     await found.save({ transaction });
     await endUserSessions(found.id, undefined, transaction);
+    // The new password replaces every other reset link still in a mailbox.
+    await revokeTokens(found.id, 'password_reset', transaction);
     await recordAudit(
       {
         actorId: found.id,
@@ -80,6 +94,8 @@ export async function setPasswordWithToken(
     );
     return found;
   });
+  await releaseAttempts(user.email);
+  return user;
 }
 
 /** Records a sign-out (the session itself is ended by the caller). */

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import { Op, type Transaction } from 'sequelize';
 import { BadRequestError } from '../../errors.ts';
 import { logger } from '../../logger.ts';
+import { purgeOldSignInAttempts } from './sign-in.ts';
 import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
 
 /** SHA-256 of the token: a leaked table row cannot be turned back into a working link. */
@@ -9,16 +10,18 @@ export const hashToken = (raw: string) => crypto.createHash('sha256').update(raw
 
 /**
  * Issues a single-use token and returns it in the clear (for the e-mail only). Earlier unused
- * tokens of the same purpose for this user stop working.
+ * tokens of the same purpose for this user stop working, unless `keepEarlier` (password resets: a
+ * second request must not silently kill a link that is still fresh in someone's inbox).
  */
 export async function issueToken(
   userId: string,
   purpose: TokenPurpose,
   lifetimeMs: number,
   transaction?: Transaction,
+  { keepEarlier = false } = {},
 ): Promise<string> {
   const raw = crypto.randomBytes(32).toString('base64url');
-  await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
+  if (!keepEarlier) await revokeTokens(userId, purpose, transaction);
   await AuthToken.create(
     { userId, purpose, tokenHash: hashToken(raw), expiresAt: new Date(Date.now() + lifetimeMs) },
     { transaction },
@@ -49,6 +52,16 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   return user;
 }
 
+/** Every outstanding token of the purpose for this user stops working (a password change revokes reset links). */
+export async function revokeTokens(userId: string, purpose: TokenPurpose, transaction?: Transaction): Promise<void> {
+  await AuthToken.update({ usedAt: new Date() }, { where: { userId, purpose, usedAt: null }, transaction });
+}
+
+/** How many tokens of the purpose were issued to this user within the last `windowMs`. */
+export function countRecentTokens(userId: string, purpose: TokenPurpose, windowMs: number): Promise<number> {
+  return AuthToken.count({ where: { userId, purpose, createdAt: { [Op.gte]: new Date(Date.now() - windowMs) } } });
+}
+
 /** Removes tokens that expired over 30 days ago (a used or refused link needs no row after that); run daily by TOKEN_PURGE_JOB. */
 export async function purgeOldTokens(): Promise<number> {
   return AuthToken.destroy({ where: { expiresAt: { [Op.lt]: new Date(Date.now() - 30 * 86_400_000) } } });
@@ -61,4 +74,7 @@ export const TOKEN_PURGE_JOB = 'users.purge-old-tokens';
 export async function runTokenPurgeJob(): Promise<void> {
   const removed = await purgeOldTokens();
   if (removed) logger.info({ removed }, 'expired sign-in links removed');
+  // Attempt counts for addresses nobody has tried for a day (guessed addresses included) go too.
+  const forgotten = await purgeOldSignInAttempts();
+  if (forgotten) logger.info({ forgotten }, 'idle sign-in attempt counts removed');
 }

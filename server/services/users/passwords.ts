@@ -1,7 +1,7 @@
 import fs from 'node:fs';
-import bcrypt from 'bcryptjs';
-import { ValidationError } from '../../errors.ts';
 import { config } from '../../config.ts';
+import { ValidationError } from '../../errors.ts';
+import { runHashJob } from '../../auth/password-pool.ts';
 
 const COST = config.env === 'test' ? 4 : 11;
 
@@ -13,14 +13,31 @@ const commonPasswords = new Set(
     .filter((line) => line && !line.startsWith('#')),
 );
 
-/** Hashes a password with bcrypt (cost 11 in use, 4 under test for speed). */
+/** Hashes a password with bcrypt (cost 11 in use, 4 under test for speed), in the worker pool. */
 export function hashPassword(password: string): Promise<string> {
-  return bcrypt.hash(password, COST);
+  return runHashJob<string>({ op: 'hash', password, cost: COST });
 }
 
-/** Compares in constant time; a user with no password (pending invitation) never matches. */
-export function verifyPassword(password: string, hash: string | null | undefined): Promise<boolean> {
-  return hash ? bcrypt.compare(password, hash) : Promise.resolve(false);
+let dummyHash: Promise<string> | undefined;
+/** A hash of a random secret at the same cost, so "no such account" takes as long as a wrong password. */
+function dummy(): Promise<string> {
+  dummyHash ??= hashPassword(crypto.randomUUID()).catch((err) => {
+    dummyHash = undefined;
+    throw err;
+  });
+  return dummyHash;
+}
+
+/**
+ * Compares in constant time, in the worker pool. With no hash (unknown address, pending
+ * invitation) a dummy hash is compared all the same, so the answer takes as long, and never matches.
+ */
+export async function verifyPassword(password: string, hash: string | null | undefined): Promise<boolean> {
+  if (!hash) {
+    await runHashJob<boolean>({ op: 'compare', password, hash: await dummy() });
+    return false;
+  }
+  return runHashJob<boolean>({ op: 'compare', password, hash });
 }
 
 /**

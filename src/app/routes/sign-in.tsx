@@ -10,9 +10,7 @@ import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { paths } from '@/config/paths.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
-
-/** Only same-site paths are followed after sign-in. */
-const safeNext = (next: string | null) => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/');
+import { safeNext } from '@/lib/safe-next.ts';
 
 export function Component() {
   const [params] = useSearchParams();

@@ -10,7 +10,7 @@ describe('reading CSV files', () => {
     expect(detectDelimiter('a\tb\tc\n')).toBe('\t');
   });
 
-  it('notes a byte-order mark and keeps quoted commas and line breaks in one cell', () => {
+  it('notes a byte-order mark and keeps quoted commas and line breaks in one cell', async () => {
     const decoded = decodeCsv(
       Buffer.from(
         '\uFEFFobject,quantity,value,note\n"Gamma, the Comma Galaxy",redshift,0.1,"two\nlines"\n\nDelta,redshift,0.2,\n',
@@ -18,20 +18,20 @@ describe('reading CSV files', () => {
       ),
     );
     expect(decoded.hadByteOrderMark).toBe(true);
-    const { rows } = readCsvRows(decoded, undefined);
+    const { rows } = await readCsvRows(decoded, undefined);
     expect(rows.map((r) => [r.row, r.cells.object, r.cells.note])).toEqual([
       [2, 'Gamma, the Comma Galaxy', 'two\nlines'],
       [4, 'Delta', ''],
     ]);
   });
 
-  it('refuses what is not UTF-8 CSV text, saying why', () => {
+  it('refuses what is not UTF-8 CSV text, saying why', async () => {
     expect(() => decodeCsv(Buffer.alloc(0))).toThrow(/empty/);
     expect(() => decodeCsv(Buffer.from('  \n \n'))).toThrow(/no text/);
     expect(() => decodeCsv(Buffer.from([0x25, 0x50, 0x44, 0x46, 0x2d]))).toThrow(/a PDF/);
     expect(() => decodeCsv(Buffer.from('name\nabc\u0000def'))).toThrow(/binary data/);
     expect(() => decodeCsv(Buffer.from([0x61, 0x0a, 0x62, 0xe9, 0x0a]))).toThrow(/line 2/);
-    expect(() => readCsvRows(decodeCsv(Buffer.from('object,quantity,value\n"open,redshift,1\n')), undefined)).toThrow(
+    await expect(readCsvRows(decodeCsv(Buffer.from('object,quantity,value\n"open,redshift,1\n')), undefined)).rejects.toThrow(
       /could not be read as CSV/,
     );
   });

@@ -122,12 +122,13 @@ function Renditions({ media }: { media: MediaDetailDto }) {
 function Usage({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => void }) {
   const remove = useDeleteMedia();
   const [confirming, setConfirming] = useState(false);
+  const inUse = media.usage.length + media.hiddenUsageCount;
   return (
     <section aria-labelledby="usage-title" className="space-y-2 border-t border-rule pt-4">
       <h3 id="usage-title" className="text-sm font-semibold">
         Where it is used
       </h3>
-      {media.usage.length === 0 ? (
+      {inUse === 0 ? (
         <p className="text-sm text-muted">Not used on any page or kiosk channel.</p>
       ) : (
         <ul className="list-disc pl-5 text-sm">
@@ -136,9 +137,15 @@ function Usage({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => v
               <span className="text-muted">{u.kind}</span> {u.title}
             </li>
           ))}
+          {media.hiddenUsageCount > 0 && (
+            <li className="text-muted">
+              {media.usage.length ? 'and ' : ''}
+              {media.hiddenUsageCount === 1 ? 'a private draft' : `${media.hiddenUsageCount} private drafts`} by other writers
+            </li>
+          )}
         </ul>
       )}
-      {media.can.delete && media.usage.length === 0 && !confirming && (
+      {media.can.delete && inUse === 0 && !confirming && (
         <Button variant="danger" onClick={() => setConfirming(true)}>
           <Icon name="trash" className="size-4" />
           Delete image
@@ -155,9 +162,7 @@ function Usage({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => v
           </Button>
         </div>
       )}
-      {media.usage.length > 0 && (
-        <p className="text-xs text-muted">An image in use cannot be deleted. Remove it from these places first.</p>
-      )}
+      {inUse > 0 && <p className="text-xs text-muted">An image in use cannot be deleted. Remove it from these places first.</p>}
       {remove.error && <Notice tone="error">{remove.error.message}</Notice>}
     </section>
   );

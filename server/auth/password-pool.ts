@@ -1,0 +1,94 @@
+import os from 'node:os';
+import { Piscina } from 'piscina';
+import { config } from '../config.ts';
+import { HttpError } from '../errors.ts';
+
+let pool: Piscina | undefined;
+
+/** How many hashes may run at once: one thread per core but one, at least one, at most the setting. */
+function threadCount(): number {
+  return Math.max(1, Math.min(config.passwordHashThreads, os.availableParallelism() - 1 || 1));
+}
+
+function getPool(): Piscina {
+  pool ??= new Piscina({
+    filename: new URL('./hash-worker.mjs', import.meta.url).href,
+    minThreads: 0,
+    maxThreads: threadCount(),
+    maxQueue: config.passwordHashQueue,
+    idleTimeout: 30_000,
+    // The worker is plain JavaScript: no TypeScript loader needed in the thread.
+    execArgv: [],
+  });
+  return pool;
+}
+
+/** Seconds a refused caller is told to wait. */
+export const BUSY_RETRY_SECONDS = 5;
+
+/** Recent time one hash job takes (ms), smoothed; starts pessimistic for cost 11 on a slow machine. */
+let typicalJobMs = 500;
+
+const busy = () =>
+  new HttpError(429, 'busy', 'Too many people are signing in at this moment. Try again in a few seconds.', undefined, {
+    retryAfterSeconds: BUSY_RETRY_SECONDS,
+  });
+
+/** Sign-ins admitted and not yet answered (each needs one hash job). */
+let signInsInFlight = 0;
+
+function expectedWaitMs(jobsAhead: number, threads: number): number {
+  return (Math.max(0, jobsAhead - threads + 1) * typicalJobMs) / threads;
+}
+
+/**
+ * Admits one sign-in before it does any database work, or refuses it at once (429 `busy`) when its
+ * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
+ * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time.
+ * @returns release, to call once the sign-in has its answer
+ * @throws HttpError 429 `busy`
+ */
+export function admitSignIn(): () => void {
+  const threads = Math.max(1, getPool().options.maxThreads);
+  if (expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs) throw busy();
+  signInsInFlight += 1;
+  let released = false;
+  return () => {
+    if (!released) signInsInFlight -= 1;
+    released = true;
+  };
+}
+
+/**
+ * Runs one bcrypt job in the worker pool, off the thread that answers requests. A job that would
+ * wait longer than `passwordHashMaxWaitMs` for a thread (judged from how long recent jobs took), or
+ * find the queue full, is refused at once (429 `busy` with Retry-After) instead of waiting.
+ * @throws HttpError 429 `busy`
+ */
+export async function runHashJob<R>(
+  task: { op: 'hash'; password: string; cost: number } | { op: 'compare'; password: string; hash: string },
+): Promise<R> {
+  const p = getPool();
+  const threads = Math.max(1, p.options.maxThreads);
+  if (p.queueSize > 0 && expectedWaitMs(p.queueSize + threads, threads) > config.passwordHashMaxWaitMs) throw busy();
+  try {
+    const { result, ms } = (await p.run(task)) as { result: R; ms: number };
+    typicalJobMs = 0.8 * typicalJobMs + 0.2 * ms;
+    return result;
+  } catch (err) {
+    if (err instanceof Error && /queue is at limit|No task queue available/i.test(err.message)) throw busy();
+    throw err;
+  }
+}
+
+/** How many hash jobs the pool has finished since it started (tests count comparisons with it). */
+export function hashJobsCompleted(): number {
+  return pool?.completed ?? 0;
+}
+
+/** Stops the worker threads (shutdown, tests). */
+export async function closePasswordPool(): Promise<void> {
+  const p = pool;
+  pool = undefined;
+  await p?.destroy();
+}

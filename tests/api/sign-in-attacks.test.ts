@@ -1,0 +1,196 @@
+import supertest from 'supertest';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
+import { config } from '../../server/config.ts';
+import { getSequelize } from '../../server/db.ts';
+import { FREE_ATTEMPTS, purgeOldSignInAttempts } from '../../server/services/users/sign-in.ts';
+import { OutboxMessage } from '../../server/models/index.ts';
+import { buildUser, getTestApp, resetDatabase, TEST_PASSWORD, tokenFromMail, waitForMail } from '../support/app.ts';
+
+/** Settings are read from the environment when asked, so a test changes the variable itself. */
+const setEnv = (name: string, value: string | number | undefined) => {
+  if (value === undefined) delete process.env[name];
+  else process.env[name] = String(value);
+};
+
+// Issue 15, points 1, 2, 6 and 7: sign-in and password resets under attack.
+
+beforeAll(async () => {
+  await getTestApp();
+  await resetDatabase();
+});
+
+const api = async () => supertest(await getTestApp());
+
+describe('parallel guesses (point 1)', () => {
+  it('60 wrong guesses and the right password at once: no more than the free attempts are compared', async () => {
+    const user = await buildUser();
+    const app = await api();
+    const before = hashJobsCompleted();
+    const guesses = Array.from({ length: 60 }, (_, i) =>
+      app
+        .post('/api/auth/sign-in')
+        .set('X-Forwarded-For', `203.0.113.${i + 1}`)
+        .send({ email: user.email, password: `wrong-guess-${i}` }),
+    );
+    guesses.splice(30, 0, app.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD }));
+    const answers = await Promise.all(guesses);
+    const statuses = answers.map((r) => r.status);
+    // 401 and 200 are answers to a compared password; everything else was refused before comparing.
+    const compared = statuses.filter((s) => s === 401 || s === 200).length;
+    expect(compared).toBeLessThanOrEqual(FREE_ATTEMPTS);
+    expect(hashJobsCompleted() - before).toBeLessThanOrEqual(FREE_ATTEMPTS);
+    expect(statuses.filter((s) => s === 429).length).toBeGreaterThanOrEqual(61 - FREE_ATTEMPTS);
+    expect(statuses.every((s) => [200, 401, 429].includes(s))).toBe(true);
+    for (const r of answers.filter((a) => a.status === 429)) {
+      expect(['too_many_attempts', 'busy']).toContain(r.body.error.code);
+      expect(Number(r.headers['retry-after'])).toBeGreaterThan(0);
+    }
+  }, 60_000);
+
+  it('a correct password gives the address its free attempts back', async () => {
+    const user = await buildUser();
+    const app = await api();
+    for (let i = 0; i < FREE_ATTEMPTS - 1; i++)
+      expect((await app.post('/api/auth/sign-in').send({ email: user.email, password: 'wrong-guess' })).status).toBe(401);
+    expect((await app.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD })).status).toBe(200);
+    for (let i = 0; i < FREE_ATTEMPTS - 1; i++)
+      expect((await app.post('/api/auth/sign-in').send({ email: user.email, password: 'wrong-guess' })).status).toBe(401);
+  });
+});
+
+describe('unknown addresses look like known ones (point 6)', () => {
+  it('a password is compared (against a dummy hash) for an unknown address, as for a known one', async () => {
+    const app = await api();
+    const before = hashJobsCompleted();
+    const res = await app.post('/api/auth/sign-in').send({ email: 'no-such-person@example.test', password: 'some-guess-1' });
+    expect(res.status).toBe(401);
+    // The dummy hash is made once (a hash job) and then compared (a second); later calls compare only.
+    const afterFirst = hashJobsCompleted();
+    expect(afterFirst - before).toBeGreaterThanOrEqual(1);
+    await app.post('/api/auth/sign-in').send({ email: 'no-such-person-2@example.test', password: 'some-guess-2' });
+    expect(hashJobsCompleted() - afterFirst).toBe(1);
+  });
+
+  it('an unknown address is locked after the same number of failures, with the same answer', async () => {
+    const known = await buildUser();
+    const app = await api();
+    const answersFor = async (email: string) => {
+      const out: Array<{ status: number; code: string }> = [];
+      for (let i = 0; i <= FREE_ATTEMPTS; i++) {
+        const r = await app.post('/api/auth/sign-in').send({ email, password: `guess-${i}` });
+        out.push({ status: r.status, code: r.body.error.code });
+      }
+      return out;
+    };
+    const knownAnswers = await answersFor(known.email);
+    const unknownAnswers = await answersFor('nobody-here@example.test');
+    expect(unknownAnswers).toEqual(knownAnswers);
+    expect(knownAnswers.at(-1)).toEqual({ status: 429, code: 'too_many_attempts' });
+  });
+});
+
+describe('housekeeping', () => {
+  it('attempt counts idle for a day and without a running lock are forgotten; fresh ones stay', async () => {
+    const app = await api();
+    await app.post('/api/auth/sign-in').send({ email: 'stale-guess@example.test', password: 'a-guess' });
+    await app.post('/api/auth/sign-in').send({ email: 'fresh-guess@example.test', password: 'a-guess' });
+    await getSequelize().query(
+      "UPDATE sign_in_attempts SET updated_at = now() - interval '2 days' WHERE email = 'stale-guess@example.test'",
+    );
+    expect(await purgeOldSignInAttempts()).toBeGreaterThanOrEqual(1);
+    const [rows] = await getSequelize().query("SELECT email FROM sign_in_attempts WHERE email LIKE '%-guess@example.test'");
+    expect((rows as Array<{ email: string }>).map((r) => r.email)).toEqual(['fresh-guess@example.test']);
+  });
+});
+
+describe('busy, not down (point 2)', () => {
+  it('a full hashing queue refuses at once with 429 busy and Retry-After', async () => {
+    const saved = { threads: config.passwordHashThreads, queue: config.passwordHashQueue };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_QUEUE', 1);
+    try {
+      const jobs = Array.from({ length: 10 }, () =>
+        runHashJob({ op: 'hash', password: 'a-slow-hash-here', cost: 10 }).then(
+          () => 'done',
+          (err: { status?: number; code?: string; options?: { retryAfterSeconds?: number } }) =>
+            `${err.status} ${err.code} ${err.options?.retryAfterSeconds}`,
+        ),
+      );
+      const results = await Promise.all(jobs);
+      expect(results.filter((r) => r === 'done').length).toBe(2);
+      expect(results.filter((r) => r === '429 busy 5').length).toBe(8);
+    } finally {
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_QUEUE', saved.queue);
+    }
+  }, 60_000);
+
+  it('when every pooled connection is taken, a request answers 503 busy (not database_unavailable) with Retry-After', async () => {
+    const user = await buildUser();
+    const agent = supertest.agent(await getTestApp());
+    expect((await agent.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD })).status).toBe(200);
+    const manager = getSequelize().connectionManager as unknown as {
+      getConnection(): Promise<unknown>;
+      releaseConnection(c: unknown): Promise<void>;
+    };
+    const max = getSequelize().config.pool?.max ?? 10;
+    const held = await Promise.all(Array.from({ length: max }, () => manager.getConnection()));
+    try {
+      const res = await agent.get('/api/pages');
+      expect(res.status).toBe(503);
+      expect(res.body.error.code).toBe('busy');
+      expect(Number(res.headers['retry-after'])).toBeGreaterThan(0);
+    } finally {
+      await Promise.all(held.map((c) => manager.releaseConnection(c)));
+    }
+    expect((await agent.get('/api/pages')).status).toBe(200);
+  }, 30_000);
+});
+
+describe('password reset links (point 7)', () => {
+  it('a password change revokes a reset link mailed earlier', async () => {
+    const user = await buildUser();
+    const app = await api();
+    await app.post('/api/auth/password-reset').send({ email: user.email });
+    const token = tokenFromMail(await waitForMail(user.email));
+    const agent = supertest.agent(await getTestApp());
+    await agent.post('/api/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+    expect(
+      (await agent.post('/api/auth/password').send({ currentPassword: TEST_PASSWORD, newPassword: 'a-fresh-long-phrase' }))
+        .status,
+    ).toBe(204);
+    const late = await app.post('/api/auth/password-reset/complete').send({ token, newPassword: 'the-attackers-choice' });
+    expect(late.status).toBe(400);
+    expect(late.body.error.code).toBe('invalid_token');
+  });
+
+  it('at most 3 reset mails an hour per account, the answer unchanged; a second request leaves the first link working', async () => {
+    const user = await buildUser();
+    const app = await api();
+    const answers = [];
+    for (let i = 0; i < 5; i++) {
+      const res = await app
+        .post('/api/auth/password-reset')
+        .set('X-Forwarded-For', `198.51.100.${i + 1}`)
+        .send({ email: user.email });
+      answers.push(res.status);
+    }
+    expect(answers).toEqual([202, 202, 202, 202, 202]);
+    await waitForMail(user.email);
+    await new Promise((r) => setTimeout(r, 500));
+    const mails = await OutboxMessage.findAll({ where: { toAddresses: user.email }, order: [['receivedAt', 'ASC']] });
+    expect(mails.length).toBe(3);
+    // The first link still works although two more were mailed after it.
+    const first = tokenFromMail(mails[0]);
+    const done = await app.post('/api/auth/password-reset/complete').send({ token: first, newPassword: 'lantern-over-the-dome' });
+    expect(done.status).toBe(200);
+    // …and using it revokes the others.
+    const second = tokenFromMail(mails[1]);
+    expect(
+      (await app.post('/api/auth/password-reset/complete').send({ token: second, newPassword: 'another-long-phrase' })).status,
+    ).toBe(400);
+  });
+});
