@@ -143,7 +143,10 @@ export function PageWorkspace({
           />
         </div>
       )}
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_18rem]">
+      {/* The side column widens while a statement's working is open: its value table needs the room. */}
+      <div
+        className={`grid gap-6 ${working ? 'lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]' : 'lg:grid-cols-[minmax(0,1fr)_18rem]'}`}
+      >
         <div className="min-w-0 space-y-3">
           <label className="block">
             <span className="sr-only">Title</span>
@@ -177,7 +180,7 @@ export function PageWorkspace({
             <EditorContent editor={editor} />
           </div>
         </div>
-        <div className="space-y-4">
+        <div className="min-w-0 space-y-4">
           <SaveStatus state={autosave.state} message={autosave.message} savedAt={autosave.savedAt} editable={editable} />
           {picker && (
             <StatementPicker

@@ -29,7 +29,7 @@ export function ScreensPicker({
       <ul className="space-y-1.5">
         {channel.venueScreens.map((s) => (
           <li key={s.id}>
-            <label className="flex items-center gap-2 text-sm">
+            <label className="flex flex-wrap items-center gap-x-2 text-sm">
               <input
                 type="checkbox"
                 className="accent-accent"
