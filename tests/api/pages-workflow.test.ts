@@ -135,13 +135,11 @@ describe('from draft to published', () => {
     const eclipse = await agent.post(`/api/pages/${moonPage.id}/submit`).send({});
     expect(eclipse.status).toBe(422);
     expect(eclipse.body.error.message).toMatch(/mentions “eclipse”/);
-    const withNotice = await agent
-      .put(`/api/pages/${moonPage.id}`)
-      .send({
-        version: moonPage.version,
-        title: 'Moon',
-        doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
-      });
+    const withNotice = await agent.put(`/api/pages/${moonPage.id}`).send({
+      version: moonPage.version,
+      title: 'Moon',
+      doc: doc(paragraph(text('Watch the total eclipse from the car park.')), { type: 'eyeSafetyNotice' }),
+    });
     expect((await agent.post(`/api/pages/${moonPage.id}/submit`).send({ version: withNotice.body.data.version })).status).toBe(
       200,
     );
@@ -307,6 +305,30 @@ describe('when a statement’s data changes after publication', () => {
     expect(actions.slice(-4)).toEqual(['page.needs_recheck', 'page.statement_signed_off', 'page.approved', 'page.published']);
   });
 
+  it('a page returns to published when every statement reads again as signed (cosmology A → B → A)', async () => {
+    const { reviewer, editor, q, page } = await submittedPage();
+    const admin = await signedInAgent('admin');
+    await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'A loose comparison.' });
+    await signOffEverything(reviewer, page.id, [q.distanceId, q.nakedEyeId]);
+    expect((await editor.agent.post(`/api/pages/${page.id}/publish`)).status).toBe(200);
+    const switchTo = async (model: object) => {
+      const settings = (await admin.agent.get('/api/settings')).body.data;
+      const res = await admin.agent.put('/api/settings/cosmology').send({ model, expectedVersion: settings.version });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    };
+    await switchTo({ law: 'hubble', H0: 70 });
+    await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('needs_recheck');
+    await switchTo({ preset: 'planck18' });
+    await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('published');
+    const back = (await editor.agent.get(`/api/pages/${page.id}`)).body.data;
+    expect(back.statements.every((s: { signedOff: boolean }) => s.signedOff)).toBe(true);
+    expect((await Page.findByPk(page.id))!.recheckStatementIds).toEqual([]);
+    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
+    expect(actions.slice(-2)).toEqual(['page.needs_recheck', 'page.recheck_cleared']);
+  });
+
   it('a draft or in-review page is not sent to re-check; an unrelated page is untouched', async () => {
     const { reviewer, q, page } = await submittedPage();
     const better = await Measurement.create({
@@ -334,13 +356,11 @@ describe('revisions, scheduling and the digest', () => {
     const { agent, user } = await signedInAgent('writer');
     const q = await quasarWithStatements(agent, user);
     const page = await pageWithBody(agent, q.object.id, doc(paragraph(text('The first words.'))), 'Diff me');
-    const second = await agent
-      .put(`/api/pages/${page.id}`)
-      .send({
-        version: page.version,
-        title: 'Diff me again',
-        doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
-      });
+    const second = await agent.put(`/api/pages/${page.id}`).send({
+      version: page.version,
+      title: 'Diff me again',
+      doc: doc(paragraph(text('The second words.')), paragraph(statement(q.distanceId))),
+    });
     const list = (await agent.get(`/api/pages/${page.id}/revisions`)).body.data;
     expect(list.map((r: { number: number }) => r.number)).toEqual([3, 2, 1]);
     expect(list[0].marks).toEqual(['current']);

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
 import { registerMediaUsageProvider } from '../media-usage.ts';
 import { statementEvents } from '../statements/events.ts';
-import { enqueuePageRecheck } from './page-recheck.ts';
+import { enqueuePageRecheck, enqueueRecheckClear } from './page-recheck.ts';
 
 let registered = false;
 
@@ -23,7 +23,7 @@ export async function pagesUsingMedia(mediaId: string) {
 
 /**
  * Wires object pages to the rest of the product: a statement whose wording changed or broke queues
- * a look for pages to re-check; the media library learns which pages use an image. Idempotent.
+ * a look for pages to re-check, and one back to current a look for re-checks that have settled; the media library learns which pages use an image. Idempotent.
  */
 export function registerPageReactions(): void {
   if (registered) return;
@@ -35,6 +35,13 @@ export function registerPageReactions(): void {
   };
   statementEvents.on('textChanged', queue);
   statementEvents.on('broken', queue);
+  const clear = ({ statementIds }: { statementIds: string[] }) => {
+    enqueueRecheckClear({ statementIds }).catch((err: unknown) =>
+      logger.error({ err, statementIds }, 'could not queue a look for settled re-checks'),
+    );
+  };
+  statementEvents.on('recovered', clear);
+  statementEvents.on('accepted', clear);
   registerMediaUsageProvider('pages', (mediaId) =>
     /^[0-9a-f-]{36}$/i.test(mediaId) ? pagesUsingMedia(mediaId) : Promise.resolve([]),
   );
