@@ -2,6 +2,8 @@ import { Router } from 'express';
 import {
   FlagResolveSchema,
   PageCommentSchema,
+  PageSubmitSchema,
+  type PageSubmitInput,
   ScheduleSchema,
   SendBackSchema,
   StatementSignoffSchema,
@@ -13,7 +15,7 @@ import { authorize } from '../../policies/index.ts';
 import { loadPageDetail } from '../../services/pages/page-detail.ts';
 import { publishPage, schedulePublish, unpublishPage } from '../../services/pages/page-publish.ts';
 import { resolveNumberFlag, signOffPage, signOffStatement } from '../../services/pages/page-signoff.ts';
-import { currentApprovalProblems, sendBackPage, submitPage } from '../../services/pages/page-workflow.ts';
+import { currentApprovalProblems, sendBackPage, submitPage, withdrawPage } from '../../services/pages/page-workflow.ts';
 import { recordAudit } from '../../services/audit.ts';
 import { findPage } from './load.ts';
 
@@ -27,12 +29,20 @@ async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[
   return loadPageDetail(page, currentUser(req));
 }
 
-workflowRouter.post('/submit', async (req, res) => {
+workflowRouter.post('/submit', validate(PageSubmitSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await findPage(pageId(req));
   authorize(viewer, 'page', 'submit', page);
-  const version = typeof req.body?.version === 'number' ? (req.body.version as number) : undefined;
-  await submitPage(page.id, version, viewer);
+  const { version, flagNotes } = req.body as PageSubmitInput;
+  await submitPage(page.id, version, viewer, flagNotes);
+  res.json({ data: await detail(req, page.id) });
+});
+
+workflowRouter.post('/withdraw', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await findPage(pageId(req));
+  authorize(viewer, 'page', 'submit', page);
+  await withdrawPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 
@@ -139,15 +149,13 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
     subjectId: page.id,
     data: { commentId: comment.id },
   });
-  res
-    .status(201)
-    .json({
-      data: {
-        id: comment.id,
-        body: comment.body,
-        author: viewer.name,
-        revisionNumber: comment.revisionNumber,
-        createdAt: comment.createdAt.toISOString(),
-      },
-    });
+  res.status(201).json({
+    data: {
+      id: comment.id,
+      body: comment.body,
+      author: viewer.name,
+      revisionNumber: comment.revisionNumber,
+      createdAt: comment.createdAt.toISOString(),
+    },
+  });
 });
