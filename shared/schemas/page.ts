@@ -171,6 +171,8 @@ export interface PageMediaDto {
 export interface PageCan {
   edit: boolean;
   submit: boolean;
+  /** Take the page back from review (writer or editor, before the page is signed off). */
+  withdraw: boolean;
   review: boolean;
   publish: boolean;
   unpublish: boolean;
@@ -191,6 +193,8 @@ export interface PageDto extends PageRow {
   pageSignedOff: boolean;
   lastReviewer: string | null;
   submittedAt: string | null;
+  /** The last send-back, while the page is the draft it made: who, when and the reviewer's reason. */
+  sentBack: { by: string | null; at: string; reason: string } | null;
   can: PageCan;
 }
 

@@ -143,7 +143,11 @@ export function usePageAction<T = void>(id: string, call: (arg: T) => Promise<Ap
   });
 }
 
-export const useSubmitPage = (id: string) => usePageAction(id, (version: number) => api.post(`/pages/${id}/submit`, { version }));
+export const useSubmitPage = (id: string) =>
+  usePageAction(id, (input: { version: number; flagNotes?: Array<{ text: string; reason: string }> }) =>
+    api.post(`/pages/${id}/submit`, input),
+  );
+export const useWithdrawPage = (id: string) => usePageAction(id, () => api.post(`/pages/${id}/withdraw`));
 export const useSendBack = (id: string) =>
   usePageAction(id, (comment: string) => api.post(`/pages/${id}/send-back`, { comment }));
 export const useSignOffStatement = (id: string) =>
