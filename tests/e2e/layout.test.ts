@@ -194,4 +194,19 @@ describe('phones and tablets', () => {
       expect(fits, `at ${size.width} px ${debug}`).toEqual({ summary: true, tables: true });
     }
   });
+
+  it('the red look filters every picture, the logo included, to red on black', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    await useSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
+    await page.setViewportSize({ width: 1440, height: 900 });
+    await page.goto(`${baseUrl}/`);
+    await page.getByLabel('Look').selectOption('red');
+    expect(await page.evaluate(() => document.documentElement.dataset.theme)).toBe('red');
+    const logo = page.locator('aside img.sp-logo');
+    expect(await logo.evaluate((img) => getComputedStyle(img).filter)).toContain('sp-red-only');
+    // The filter keeps only red: its matrix sends nothing to green or blue.
+    const matrix = await page.evaluate(() => document.querySelector('#sp-red-only feColorMatrix')?.getAttribute('values'));
+    expect(matrix?.split(/\s+/).map(Number).slice(5, 15)).toEqual([0, 0, 0, 0, 0, 0, 0, 0, 0, 0]);
+    await screenshot(page, 'layout-red-look');
+  });
 });
