@@ -49,4 +49,36 @@ describe('forms that never lie', () => {
     expect(retired.retireReason).toBe('Superseded by the night 14 spectrum.');
     expect(errors).toEqual([]);
   });
+
+  it('a role change waits for confirmation and says it was saved', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const admin = await demoSession(baseUrl, 'admin');
+    const invited = ok(
+      await admin.call<{ data: { id: string } }>('POST', '/api/users', {
+        email: `role-check-${Date.now()}@corrievale.example`,
+        name: 'Role Check (demo)',
+        role: 'writer',
+      }),
+      'invite',
+    ).body.data;
+    const roleNow = async () =>
+      (await admin.call<{ data: Array<{ id: string; role: string }> }>('GET', '/api/users')).body.data.find(
+        (u) => u.id === invited.id,
+      )!.role;
+    await useSessionInBrowser(context, baseUrl, admin);
+    await page.goto(`${baseUrl}/admin/users`);
+    const select = page.getByLabel('Role of Role Check (demo)');
+    await expect.poll(() => select.count(), WAIT).toBe(1);
+    await select.selectOption('editor');
+    await expect.poll(() => page.getByText('Make Role Check (demo) editor?').count()).toBe(1);
+    expect(await roleNow()).toBe('writer');
+    await page.getByRole('button', { name: 'Save role' }).click();
+    await expect.poll(() => page.getByText('Saved: Role Check (demo) is now editor.').count(), WAIT).toBe(1);
+    expect(await roleNow()).toBe('editor');
+    // Cancel puts the shown role back and changes nothing.
+    await select.selectOption('reviewer');
+    await page.getByRole('button', { name: 'Cancel' }).click();
+    expect(await select.inputValue()).toBe('editor');
+    expect(await roleNow()).toBe('editor');
+  });
 });
