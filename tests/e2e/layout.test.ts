@@ -112,7 +112,6 @@ describe('phones and tablets', () => {
           // Layout settles on the next frame after a resize.
           await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
           const over = await sidewaysOverflow(page);
-          if (over > 0) console.log(`${screen.name} as ${role} at ${size.width}: ${over}`);
           if (over > 0) wide.push(`${screen.name} as ${role} at ${size.width} px: ${over} px too wide (${await culprits(page)})`);
           if (role === 'editor') await screenshot(page, `layout-${screen.name}-${size.width}`);
         }
