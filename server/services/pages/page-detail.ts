@@ -60,7 +60,7 @@ async function lastSendBack(page: Page): Promise<PageDto['sentBack']> {
     where: { subjectType: 'page', subjectId: page.id, action: ['page.sent_back', 'page.submitted', 'page.withdrawn'] },
     order: [['createdAt', 'DESC']],
   });
-  if (!last || last.action !== 'page.sent_back') return null;
+  if (last?.action !== 'page.sent_back') return null;
   const comment = await PageComment.findOne({
     where: { pageId: page.id, authorId: last.actorId },
     order: [['createdAt', 'DESC']],
