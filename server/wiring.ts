@@ -9,6 +9,9 @@ import {
   PUBLISH_DUE_JOB,
   pagesUsingMedia,
   queuePageRecheck,
+  queueRecheckClear,
+  RECHECK_CLEAR_JOB,
+  runRecheckClearJob,
   runDigestJob,
   runPageRecheckJob,
   runPublishDueJob,
@@ -76,6 +79,10 @@ export function wireServer(): void {
   statementEvents.on('textChanged', queuePageRecheck);
   // a statement breaks → pages using it go to re-check
   statementEvents.on('broken', queuePageRecheck);
+  // a statement reads again as it was signed (recomputed back, or its wording accepted) → pages whose
+  // every statement is back leave "needs re-check" for the state they were signed off in
+  statementEvents.on('recovered', queueRecheckClear);
+  statementEvents.on('accepted', queueRecheckClear);
 
   // ── Statements and publishing → kiosk feeds (the feed's fingerprint decides what really moved) ──
   // page published / unpublished → kiosk feeds rebuild
@@ -113,6 +120,7 @@ export function wireServer(): void {
   registerBatchJob(RECOMPUTE_JOB, runRecomputeJobs, { batchSize: RECOMPUTE_BATCH });
   // pages: look for pages that use changed or broken statements
   registerJob(PAGE_RECHECK_JOB, runPageRecheckJob);
+  registerJob(RECHECK_CLEAR_JOB, runRecheckClearJob);
   // pages: the morning digest e-mail, and publishing pages whose scheduled time has come
   registerJob(DIGEST_JOB, runDigestJob);
   registerJob(PUBLISH_DUE_JOB, runPublishDueJob);

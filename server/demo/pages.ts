@@ -89,7 +89,9 @@ export async function seedDemoPages(): Promise<void> {
         ),
       ],
     });
-    await submitPage(quasar.id, undefined, writer);
+    await submitPage(quasar.id, undefined, writer, [
+      { text: '5 billion light-years', reason: 'Quoted from an old leaflet; please check which distance it means.' },
+    ]);
   });
 
   const sunTitle = 'Watching the Sun safely (demo)';

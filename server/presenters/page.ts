@@ -34,6 +34,7 @@ export function pageAbilities(page: Page, viewer: User): PageCan {
   return {
     edit: can(viewer, 'page', 'edit', page) && page.status !== 'in_review',
     submit: can(viewer, 'page', 'submit', page) && page.status === 'draft',
+    withdraw: can(viewer, 'page', 'submit', page) && page.status === 'in_review',
     review: can(viewer, 'page', 'review', page) && reviewable,
     publish: can(viewer, 'page', 'publish', page) && page.status === 'approved',
     unpublish: can(viewer, 'page', 'publish', page) && !!page.publishedSnapshot,

@@ -1,3 +1,4 @@
+import type { ScreenHealth } from './kiosk.ts';
 import { z } from 'zod';
 import { ChannelLimits } from '../validations.ts';
 
@@ -113,7 +114,7 @@ export interface SlideDto {
 export interface ChannelScreenRef {
   id: string;
   name: string;
-  health: string;
+  health: ScreenHealth;
 }
 
 export interface ChannelRowDto {

@@ -42,6 +42,15 @@ export type KioskHeartbeatInput = z.infer<typeof KioskHeartbeatSchema>;
 export const SCREEN_HEALTH = ['online', 'offline', 'awaiting-pairing', 'never-seen', 'revoked'] as const;
 export type ScreenHealth = (typeof SCREEN_HEALTH)[number];
 
+/** A screen's health in a few words for people (the codes above never reach the screen). */
+export const SCREEN_HEALTH_LABELS: Record<ScreenHealth, string> = {
+  online: 'online',
+  offline: 'offline',
+  'awaiting-pairing': 'waiting to be paired',
+  'never-seen': 'paired, not yet seen',
+  revoked: 'access revoked',
+};
+
 /** A kiosk screen as the admin screens show it (never its token or code). */
 export interface KioskScreenDto {
   id: string;

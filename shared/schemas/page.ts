@@ -70,6 +70,26 @@ export const FlagResolveSchema = z.object({
     .max(PageLimits.reasonMax, `Reasons are at most ${PageLimits.reasonMax} characters`),
 });
 
+/** The writer's word on one hand-typed number left on a page sent to review (shown to the reviewer). */
+export const FlagNoteSchema = z.object({
+  text: z.string({ message: 'Name the flagged number' }).trim().min(1).max(200),
+  reason: z
+    .string({ message: 'Say why this number stays as typed' })
+    .trim()
+    .min(PageLimits.reasonMin, `Say why this number stays as typed (at least ${PageLimits.reasonMin} characters)`)
+    .max(PageLimits.reasonMax, `Reasons are at most ${PageLimits.reasonMax} characters`),
+});
+
+/**
+ * Sending a page to review. `version` is the version the writer is looking at; `flagNotes` give a
+ * reason for every hand-typed number still open (without one for each, submission is refused).
+ */
+export const PageSubmitSchema = z.object({
+  version: z.number().int().positive().optional(),
+  flagNotes: z.array(FlagNoteSchema).max(200).default([]),
+});
+export type PageSubmitInput = z.infer<typeof PageSubmitSchema>;
+
 export const StatementSignoffSchema = z.object({ statementId: z.uuid({ message: 'statementId must be a valid id' }) });
 
 export const ScheduleSchema = z.object({
@@ -153,6 +173,8 @@ export interface PageMediaDto {
 export interface PageCan {
   edit: boolean;
   submit: boolean;
+  /** Take the page back from review (writer or editor, before the page is signed off). */
+  withdraw: boolean;
   review: boolean;
   publish: boolean;
   unpublish: boolean;
@@ -187,6 +209,8 @@ export interface PageDto extends PageRow {
   pageSignedOff: boolean;
   lastReviewer: string | null;
   submittedAt: string | null;
+  /** The last send-back, while the page is the draft it made: who, when and the reviewer's reason. */
+  sentBack: { by: string | null; at: string; reason: string } | null;
   can: PageCan;
 }
 

@@ -9,7 +9,11 @@ import { usePageChange } from './pages.ts';
 const post = (url: string, body?: unknown) => api.post<ApiData<PageDto>>(url, body);
 
 /** Sends the page for review, from the version the writer last saved. */
-export const useSubmitPage = (id: string) => usePageChange(id, (version: number) => post(`/pages/${id}/submit`, { version }));
+export const useSubmitPage = (id: string) =>
+  usePageChange(id, (input: { version: number; flagNotes?: Array<{ text: string; reason: string }> }) =>
+    post(`/pages/${id}/submit`, input),
+  );
+export const useWithdrawPage = (id: string) => usePageChange(id, () => post(`/pages/${id}/withdraw`));
 /** Sends the page back to its writer with a comment. */
 export const useSendBack = (id: string) => usePageChange(id, (comment: string) => post(`/pages/${id}/send-back`, { comment }));
 /** Signs off one statement on the page. */

@@ -1,8 +1,10 @@
 import type { JSONContent } from '@tiptap/core';
 import { EditorContent, useEditor, useEditorState } from '@tiptap/react';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
+import { Link } from 'react-router-dom';
 import type { PageDto } from '@shared/schemas/page.ts';
 import { Notice } from '@/components/ui/notice.tsx';
+import { paths } from '@/config/paths.ts';
 import { ConflictView } from '@/features/pages/components/conflict-view.tsx';
 import { MediaPicker } from '@/features/pages/components/media-picker.tsx';
 import { NumberCheckPanel, type LiveFlag } from '@/features/pages/components/number-check-panel.tsx';
@@ -23,6 +25,8 @@ const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b)
 /** Handles a page's editor screen gives back to its header: save now, and the version saved. */
 export interface WorkspaceHandle {
   flush: () => Promise<number>;
+  /** The hand-typed numbers on the page now that no reviewer has resolved (one per wording). */
+  openFlags: () => string[];
 }
 
 /**
@@ -63,7 +67,8 @@ export function PageWorkspace({
   const read = useCallback(() => ({ title: titleRef.current, doc: editor.getJSON() }), [editor]);
   const autosave = useAutosave({ pageId: page.id, version: page.version, read, onSaved });
   autosaveRef.current = editable ? autosave.changed : null;
-  handleRef.current = { flush: autosave.flush };
+  const openFlagsRef = useRef<string[]>([]);
+  handleRef.current = { flush: autosave.flush, openFlags: () => openFlagsRef.current };
 
   // No update event: becoming read-only is not an edit to save.
   useEffect(() => editor.setEditable(editable, false), [editor, editable]);
@@ -88,6 +93,7 @@ export function PageWorkspace({
     const resolved = new Map(page.flags.map((f) => [f.normalised, f.resolution]));
     return (ranges ?? []).map((r) => ({ ...r, resolution: resolved.get(r.normalised) ?? null }));
   }, [ranges, page.flags]);
+  openFlagsRef.current = [...new Map(flags.filter((f) => !f.resolution).map((f) => [f.normalised, f.text])).values()];
 
   const apply = (t: string, doc: JSONContent) => {
     editor.commands.setContent(doc);
@@ -143,7 +149,10 @@ export function PageWorkspace({
           />
         </div>
       )}
-      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_18rem]">
+      {/* The side column widens while a statement's working is open: its value table needs the room. */}
+      <div
+        className={`grid gap-6 ${working ? 'lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]' : 'lg:grid-cols-[minmax(0,1fr)_18rem]'}`}
+      >
         <div className="min-w-0 space-y-3">
           <label className="block">
             <span className="sr-only">Title</span>
@@ -167,17 +176,25 @@ export function PageWorkspace({
           </label>
           {editable && <Toolbar editor={editor} onStatement={() => setPicker({})} onImage={() => setMediaPicker(true)} />}
           {!editable && (
-            <Notice tone="info">
+            <Notice tone="info" title="Read-only">
               {page.status === 'in_review'
-                ? 'This page is with the reviewers; it cannot be changed until it is sent back.'
+                ? 'This page is with the reviewers; it cannot be changed until it is sent back or withdrawn.'
                 : 'You can read this page but not change it.'}
+              {page.can.review && page.status !== 'draft' && (
+                <>
+                  {' '}
+                  <Link to={paths.pageReview.href(page.id)} className="font-medium text-accent underline">
+                    Sign off in the review view
+                  </Link>
+                </>
+              )}
             </Notice>
           )}
           <div className={`rounded-b-lg border border-rule bg-panel ${editable ? 'border-t-0' : 'rounded-t-lg'}`}>
             <EditorContent editor={editor} />
           </div>
         </div>
-        <div className="space-y-4">
+        <div className="min-w-0 space-y-4">
           <SaveStatus state={autosave.state} message={autosave.message} savedAt={autosave.savedAt} editable={editable} />
           {picker && (
             <StatementPicker

@@ -1,4 +1,5 @@
 import type { FeedItem, FeedSky, FeedSlide, FeedStatement } from '@shared/schemas/kiosk-feed.ts';
+import { keepDesignationsTogether as nb } from '@shared/text/designations.ts';
 import { h } from './dom.ts';
 
 /** "as of 3 March 2026", in the venue's time zone. */
@@ -28,7 +29,7 @@ function statementList(statements: FeedStatement[], timeZone: string, roomForNot
       h(
         'li',
         {},
-        h('span', { class: 'statement-text' }, s.text),
+        h('span', { class: 'statement-text' }, nb(s.text)),
         ' ',
         h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone)),
         withNotes && s.note ? h('small', { class: 'statement-note' }, s.note) : null,
@@ -114,14 +115,14 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
   }
   if (slide.image && imageSrc) layer.append(picture(slide, imageSrc), h('div', { class: 'shade' }));
   if (slide.layout === 'image') {
-    if (slide.text) layer.append(h('p', { class: 'caption' }, slide.text));
+    if (slide.text) layer.append(h('p', { class: 'caption' }, nb(slide.text)));
   } else {
     layer.append(
       h(
         'div',
         { class: 'panel' },
-        h('h1', { class: 'title' }, item.title),
-        slide.text ? h('p', { class: 'body' }, slide.text) : null,
+        h('h1', { class: 'title' }, nb(item.title)),
+        slide.text ? h('p', { class: 'body' }, nb(slide.text)) : null,
         statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280),
       ),
     );

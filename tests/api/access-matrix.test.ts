@@ -37,6 +37,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'GET /api/pages/:id/preview': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/pages/:id/published': ['401', '401', '403', '403', 'ok', 'ok'],
   'POST /api/pages/:id/submit': ['401', '401', '403', '403', 'ok', 'ok'],
+  'POST /api/pages/:id/withdraw': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/pages/:id/approval-problems': ['401', '401', '403', '403', 'ok', 'ok'],
   'POST /api/pages/:id/signoffs/statements': ['401', '401', '403', 'ok', '403', 'ok'],
   'POST /api/pages/:id/signoffs/page': ['401', '401', '403', 'ok', '403', 'ok'],
@@ -135,6 +136,7 @@ const SESSION_ENDING = new Set(['POST /api/auth/sign-out']);
  */
 const LAST = [
   'POST /api/pages/:id/send-back',
+  'POST /api/pages/:id/withdraw',
   'POST /api/pages/:id/unpublish',
   'DELETE /api/channels/:id/slides/:slideId',
   'DELETE /api/channels/:id',

@@ -26,8 +26,11 @@ async function submittedPage() {
     paragraph(statement(q.nakedEyeId)),
   );
   const page = await pageWithBody(writer.agent, q.object.id, body, 'The quasar next door');
-  const submitted = await writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: page.version });
-  expect(submitted.status).toBe(200);
+  const submitted = await writer.agent.post(`/api/pages/${page.id}/submit`).send({
+    version: page.version,
+    flagNotes: [{ text: '3 times brighter', reason: 'A loose comparison with its neighbours.' }],
+  });
+  expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
   expect(submitted.body.data.status).toBe('in_review');
   return { writer, reviewer, editor, q, page: submitted.body.data };
 }
@@ -103,6 +106,59 @@ describe('from draft to published', () => {
       'page.approved',
       'page.published',
     ]);
+  });
+
+  it('submitting with an open hand-typed number needs a reason for it, shown to the reviewer; the writer can withdraw', async () => {
+    const writer = await signedInAgent('writer');
+    const reviewer = await signedInAgent('reviewer');
+    const q = await quasarWithStatements(writer.agent, writer.user);
+    const body = doc(paragraph(statement(q.distanceId), text(' It is about 3 times brighter than its neighbours.')));
+    const page = await pageWithBody(writer.agent, q.object.id, body, 'Flags need a reason');
+    const bare = await writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: page.version });
+    expect(bare.status).toBe(422);
+    expect(bare.body.error.code).toBe('flags_need_reasons');
+    expect(bare.body.error.message).toContain('“3 times brighter”');
+    const blank = await writer.agent
+      .post(`/api/pages/${page.id}/submit`)
+      .send({ version: page.version, flagNotes: [{ text: '3 times brighter', reason: ' ' }] });
+    expect(blank.status).toBe(400);
+    expect((await Page.findByPk(page.id))!.status).toBe('draft');
+
+    const ok = await writer.agent.post(`/api/pages/${page.id}/submit`).send({
+      version: page.version,
+      flagNotes: [{ text: '3  times brighter', reason: 'A loose comparison, not a measurement.' }],
+    });
+    expect(ok.status, JSON.stringify(ok.body)).toBe(200);
+    const comments = (await reviewer.agent.get(`/api/pages/${page.id}/comments`)).body.data;
+    expect(JSON.stringify(comments)).toContain('“3 times brighter” left as typed: A loose comparison, not a measurement.');
+
+    // Signed statements survive the withdrawal; once the page is signed off it cannot be withdrawn.
+    expect(
+      (await reviewer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: q.distanceId })).status,
+    ).toBe(200);
+    const other = await signedInAgent('writer');
+    expect((await other.agent.post(`/api/pages/${page.id}/withdraw`)).status).toBe(403);
+    const withdrawn = await writer.agent.post(`/api/pages/${page.id}/withdraw`);
+    expect(withdrawn.status).toBe(200);
+    expect(withdrawn.body.data.status).toBe('draft');
+    expect((await writer.agent.post(`/api/pages/${page.id}/withdraw`)).status).toBe(409);
+    const edited = await writer.agent.put(`/api/pages/${page.id}`).send({
+      version: withdrawn.body.data.version,
+      title: 'Flags need a reason',
+      doc: doc(paragraph(statement(q.distanceId), text(' A new sentence.'))),
+    });
+    expect(edited.status, JSON.stringify(edited.body)).toBe(200);
+    expect((await writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: edited.body.data.version })).status).toBe(
+      200,
+    );
+    const seen = (await reviewer.agent.get(`/api/pages/${page.id}`)).body.data;
+    expect(seen.statements.find((s: { id: string }) => s.id === q.distanceId).signedOff).toBe(true);
+    expect((await reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`)).status).toBe(200);
+    const late = await writer.agent.post(`/api/pages/${page.id}/withdraw`);
+    expect(late.status).toBe(409);
+    expect(late.body.error.message).toMatch(/signed off already/);
+    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id } })).map((e) => e.action);
+    expect(actions).toContain('page.withdrawn');
   });
 
   it('a page about the Sun, or one that mentions an eclipse, needs the eye-safety notice to be submitted', async () => {
@@ -303,6 +359,30 @@ describe('when a statement’s data changes after publication', () => {
       (e) => e.action,
     );
     expect(actions.slice(-4)).toEqual(['page.needs_recheck', 'page.statement_signed_off', 'page.approved', 'page.published']);
+  });
+
+  it('a page returns to published when every statement reads again as signed (cosmology A → B → A)', async () => {
+    const { reviewer, editor, q, page } = await submittedPage();
+    const admin = await signedInAgent('admin');
+    await reviewer.agent.post(`/api/pages/${page.id}/flags`).send({ text: '3 times brighter', reason: 'A loose comparison.' });
+    await signOffEverything(reviewer, page.id, [q.distanceId, q.nakedEyeId]);
+    expect((await editor.agent.post(`/api/pages/${page.id}/publish`)).status).toBe(200);
+    const switchTo = async (model: object) => {
+      const settings = (await admin.agent.get('/api/settings')).body.data;
+      const res = await admin.agent.put('/api/settings/cosmology').send({ model, expectedVersion: settings.version });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    };
+    await switchTo({ law: 'hubble', H0: 70 });
+    await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('needs_recheck');
+    await switchTo({ preset: 'planck18' });
+    await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('published');
+    const back = (await editor.agent.get(`/api/pages/${page.id}`)).body.data;
+    expect(back.statements.every((s: { signedOff: boolean }) => s.signedOff)).toBe(true);
+    expect((await Page.findByPk(page.id))!.recheckStatementIds).toEqual([]);
+    const actions = (await AuditEvent.findAll({ where: { subjectId: page.id }, order: [['createdAt', 'ASC']] })).map(
+      (e) => e.action,
+    );
+    expect(actions.slice(-2)).toEqual(['page.needs_recheck', 'page.recheck_cleared']);
   });
 
   it('a draft or in-review page is not sent to re-check; an unrelated page is untouched', async () => {

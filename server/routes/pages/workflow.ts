@@ -1,8 +1,8 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import {
   FlagResolveSchema,
   PageCommentSchema,
+  PageSubmitSchema,
   ScheduleSchema,
   SendBackSchema,
   StatementSignoffSchema,
@@ -24,24 +24,31 @@ import {
   currentApprovalProblems,
   sendBackPage,
   submitPage,
+  withdrawPage,
 } from '../../services/pages/index.ts';
 import { loadPage, parentParam } from '../load.ts';
 
 /** Workflow steps on one page (mounted under /api/pages/:id). Each answers with the page as it is now. */
 export const workflowRouter = Router({ mergeParams: true });
 
-/** Submitting may name the version the writer saw; anything else in the body is ignored, as it always was. */
-const SubmitSchema = z.object({ version: z.number().optional().catch(undefined) }).catch({});
-
 async function detail(req: Parameters<Parameters<typeof workflowRouter.get>[1]>[0], id: string) {
   return loadPageDetail(await loadPage(id), currentUser(req));
 }
 
-workflowRouter.post('/submit', validate(SubmitSchema), async (req, res) => {
+workflowRouter.post('/submit', validate(PageSubmitSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'submit', page);
-  await submitPage(page.id, req.body.version, viewer);
+  const { version, flagNotes } = req.body;
+  await submitPage(page.id, version, viewer, flagNotes);
+  res.json({ data: await detail(req, page.id) });
+});
+
+workflowRouter.post('/withdraw', async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await loadPage(parentParam(req, 'id'));
+  authorize(viewer, 'page', 'submit', page);
+  await withdrawPage(page.id, viewer);
   res.json({ data: await detail(req, page.id) });
 });
 

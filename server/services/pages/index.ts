@@ -15,6 +15,8 @@ export { publicPageTexts, renderPublishedPage, renderWithLookups } from './page-
 export { createPage, savePage } from './page-save.ts';
 export { resolveNumberFlag, signOffPage, signOffStatement } from './page-signoff.ts';
 export { currentText, loadStatements } from './page-statements.ts';
-export { currentApprovalProblems, sendBackPage, submitPage } from './page-workflow.ts';
+export { currentApprovalProblems, sendBackPage, submitPage, withdrawPage } from './page-workflow.ts';
 export { addPageComment } from './page-comments.ts';
 export { listPageComments } from './page-comments.ts';
+export { queueRecheckClear } from './page-reactions.ts';
+export { RECHECK_CLEAR_JOB, runRecheckClearJob } from './page-recheck.ts';

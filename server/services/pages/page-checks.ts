@@ -76,10 +76,12 @@ function followsSignedNight(statement: LoadedStatement['statement'], signedAt: D
  */
 export async function validStatementSignoffs(
   page: Page,
-  revision: PageRevision,
+  _revision: PageRevision,
   statements: Map<string, LoadedStatement>,
 ): Promise<Set<string>> {
-  const rows = await PageSignoff.findAll({ where: { pageId: page.id, revisionId: revision.id, kind: 'statement' } });
+  // Any revision's sign-off counts while the statement still reads as signed: a send-back or a
+  // withdrawal and a new draft do not undo what a reviewer checked and nobody changed.
+  const rows = await PageSignoff.findAll({ where: { pageId: page.id, kind: 'statement' } });
   const valid = new Set<string>();
   for (const row of rows) {
     const loaded = row.statementId ? statements.get(row.statementId) : undefined;

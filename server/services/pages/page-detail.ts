@@ -4,7 +4,17 @@ import type { PageDto, PageMediaDto } from '@shared/schemas/page.ts';
 import { Op } from 'sequelize';
 import { findLicence } from '@shared/media/licences.ts';
 import { renditionUrl } from '../../media/keys.ts';
-import { Media, MediaRendition, PageRevision, PageSignoff, SkyObject, User, type Page } from '../../models/index.ts';
+import {
+  AuditEvent,
+  Media,
+  MediaRendition,
+  PageComment,
+  PageRevision,
+  PageSignoff,
+  SkyObject,
+  User,
+  type Page,
+} from '../../models/index.ts';
 import { pageAbilities, presentPageRow } from '../../presenters/page.ts';
 import { missingForPublishing } from '../media/index.ts';
 import { eyeSafetyRequirement, flagsWithResolutions, validStatementSignoffs } from './page-checks.ts';
@@ -40,6 +50,26 @@ const names = async (ids: Array<string | null | undefined>) => {
  * (wording now and as signed off), number flags with resolutions, images, the caution check, the
  * approved and live versions, and what the viewer may do.
  */
+/**
+ * The reviewer's reason when the page's last workflow step was a send-back (the comment written
+ * with it); null once the page moved on (submitted, withdrawn, approved).
+ */
+async function lastSendBack(page: Page): Promise<PageDto['sentBack']> {
+  if (page.status !== 'draft') return null;
+  const last = await AuditEvent.findOne({
+    where: { subjectType: 'page', subjectId: page.id, action: ['page.sent_back', 'page.submitted', 'page.withdrawn'] },
+    order: [['createdAt', 'DESC']],
+  });
+  if (last?.action !== 'page.sent_back') return null;
+  const comment = await PageComment.findOne({
+    where: { pageId: page.id, authorId: last.actorId },
+    order: [['createdAt', 'DESC']],
+    include: [{ model: User, as: 'author', attributes: ['name'] }],
+  });
+  if (!comment) return null;
+  return { by: comment.author?.name ?? null, at: comment.createdAt.toISOString(), reason: comment.body };
+}
+
 export async function loadPageDetail(page: Page, viewer: User): Promise<PageDto> {
   const revision = (await PageRevision.findByPk(page.currentRevisionId!))!;
   const statements = await loadStatements(revision.statementIds);
@@ -136,6 +166,7 @@ export async function loadPageDetail(page: Page, viewer: User): Promise<PageDto>
     pageSignedOff: !!pageSignoff,
     lastReviewer: page.lastReviewerId ? (people.get(page.lastReviewerId) ?? null) : null,
     submittedAt: page.submittedAt?.toISOString() ?? null,
+    sentBack: await lastSendBack(page),
     can: pageAbilities(page, viewer),
   };
 }

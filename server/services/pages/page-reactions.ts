@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
 import type { Page, User } from '../../models/index.ts';
 import { pagePolicy } from '../../policies/page.ts';
-import { enqueuePageRecheck } from './page-recheck.ts';
+import { enqueuePageRecheck, enqueueRecheckClear } from './page-recheck.ts';
 
 /**
  * Where a library image appears: pages whose working copy, approved or published version shows it
@@ -41,5 +41,16 @@ export async function pagesUsingMedia(mediaId: string) {
 export function queuePageRecheck({ statementIds }: { statementIds: string[] }): void {
   enqueuePageRecheck({ statementIds }).catch((err: unknown) =>
     logger.error({ err, statementIds }, 'could not queue a page re-check'),
+  );
+}
+
+/**
+ * Queues a look for pages whose re-check has settled (every statement reads again as signed), from
+ * an event listener: a failure to queue is logged, not thrown.
+ * @param event the statements that became current again
+ */
+export function queueRecheckClear({ statementIds }: { statementIds: string[] }): void {
+  enqueueRecheckClear({ statementIds }).catch((err: unknown) =>
+    logger.error({ err, statementIds }, 'could not queue a look for settled re-checks'),
   );
 }

@@ -71,3 +71,62 @@ export async function runPageRecheckJob({ statementIds }: { statementIds: string
   const marked = await markPagesForRecheck(statementIds);
   if (marked.length) logger.info({ pages: marked.length }, 'pages sent to re-check');
 }
+
+/**
+ * Sends pages waiting for a re-check back to where they were (published, or approved) when every
+ * statement they were signed off with reads again exactly as signed and none is broken: nothing a
+ * reader sees moved (a cosmology switched A → B → A), so a new sign-off would check nothing.
+ * @param statementIds statements that became current again (recomputed back, or accepted)
+ * @returns the ids of the pages returned to their signed-off state
+ */
+export async function clearSettledRechecks(statementIds: string[]): Promise<string[]> {
+  if (!statementIds.length) return [];
+  const rows = await getSequelize().query<{ id: string }>(
+    `SELECT p.id FROM pages p JOIN page_revisions r ON r.id = p.approved_revision_id
+      WHERE p.status = 'needs_recheck' AND r.statement_ids && ARRAY[:ids]::uuid[]`,
+    { replacements: { ids: statementIds }, type: QueryTypes.SELECT },
+  );
+  const cleared: string[] = [];
+  for (const { id } of rows) {
+    const done = await getSequelize().transaction(async (transaction) => {
+      const page = await Page.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
+      if (!page || page.status !== 'needs_recheck' || !page.approvedSnapshot) return false;
+      const signed = page.approvedSnapshot.statementTexts;
+      const statements = await Statement.findAll({ where: { id: { [Op.in]: Object.keys(signed) } }, transaction });
+      if (statements.length !== Object.keys(signed).length) return false;
+      const settled = statements.every((s) => s.status !== 'broken' && currentText(s, page.locale) === signed[s.id]);
+      if (!settled) return false;
+      const to = page.publishedRevisionId && page.publishedRevisionId === page.approvedRevisionId ? 'published' : 'approved';
+      const statementIdsBack = page.recheckStatementIds;
+      page.set({ status: to, recheckStatementIds: [] });
+      await page.save({ transaction });
+      await recordAudit(
+        {
+          actorId: null,
+          action: 'page.recheck_cleared',
+          subjectType: 'page',
+          subjectId: page.id,
+          data: { to, statementIds: statementIdsBack, reason: 'every statement reads again as it was signed off' },
+        },
+        transaction,
+      );
+      return true;
+    });
+    if (done) cleared.push(id);
+  }
+  return cleared;
+}
+
+/** The background job behind statements becoming current again: pages whose wording is all back. */
+export const RECHECK_CLEAR_JOB = 'pages.recheck-clear';
+
+/** Queues a look for re-checks that have settled. */
+export async function enqueueRecheckClear(data: { statementIds: string[] }): Promise<void> {
+  await enqueue(RECHECK_CLEAR_JOB, data);
+}
+
+/** Runs RECHECK_CLEAR_JOB: pages whose every statement reads again as signed go back to their state. */
+export async function runRecheckClearJob({ statementIds }: { statementIds: string[] }): Promise<void> {
+  const cleared = await clearSettledRechecks(statementIds);
+  if (cleared.length) logger.info({ pages: cleared.length }, 'pages back to their signed-off state');
+}

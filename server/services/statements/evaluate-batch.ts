@@ -83,6 +83,8 @@ export interface WriteBatchResult {
   /** Statements that became changed or broken in this batch. */
   changed: string[];
   broken: string[];
+  /** Statements that were changed or broken and are current again (their wording is back to the accepted one). */
+  recovered: string[];
 }
 
 /** A statement whose public wording (in the preview's locale) or status would move. */
@@ -137,6 +139,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   const brokenRows: Record<string, unknown>[] = [];
   const changed: string[] = [];
   const broken: string[] = [];
+  const recovered: string[] = [];
   const preview: PreviewChange[] = [];
   let checkedModel: object | null = null;
   const skeletons = new Map<string, SkeletonJson>();
@@ -170,6 +173,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
       continue;
     }
     if (result.status === 'changed' && statement.status !== 'changed') changed.push(statement.id);
+    if (result.status === 'current' && statement.status !== 'current') recovered.push(statement.id);
     let modelId: string | null = null;
     if (result.model) {
       // Outcomes share the engine's one description per model: compare each distinct one once.
@@ -221,5 +225,6 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
     written: computed.length + brokenRows.length,
     changed,
     broken,
+    recovered,
   };
 }

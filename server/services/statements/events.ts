@@ -6,6 +6,8 @@ export interface StatementEventMap {
   textChanged: [{ statementIds: string[] }];
   /** These statements can no longer be computed. */
   broken: [{ statementIds: string[] }];
+  /** A recompute brought these back to their accepted wording (e.g. a cosmology switched A → B → A). */
+  recovered: [{ statementIds: string[] }];
   /** A reviewer accepted new wording; these statements are current again. */
   accepted: [{ statementIds: string[] }];
 }

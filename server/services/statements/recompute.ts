@@ -142,17 +142,17 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
 export async function recomputeStatements(
   scope: RecomputeScope,
   options: { settings?: SettingsSnapshot } = {},
-): Promise<{ written: number; changed: string[]; broken: string[] }> {
+): Promise<{ written: number; changed: string[]; broken: string[]; recovered: string[] }> {
   const settings = options.settings ?? (await currentSettingsSnapshot());
   const ids = await idsFor(scope);
   // Every venue's new night asks, most with no statements: nothing to load or store then.
-  if (ids.length === 0) return { written: 0, changed: [], broken: [] };
+  if (ids.length === 0) return { written: 0, changed: [], broken: [], recovered: [] };
   const model = await batchModelFor(settings);
   const computedAt = new Date();
   const inline = ids.length <= BATCH;
   // Two batches queued per worker, so none waits for the next to load; plus those being written.
   const inFlight = 2 * Math.max(1, poolSize()) + WRITES_IN_FLIGHT;
-  const totals = { written: 0, changed: [] as string[], broken: [] as string[] };
+  const totals = { written: 0, changed: [] as string[], broken: [] as string[], recovered: [] as string[] };
   const running = new Set<Promise<void>>();
   let failure: unknown;
   for (let i = 0; i < ids.length && failure === undefined; i += BATCH) {
@@ -166,6 +166,7 @@ export async function recomputeStatements(
         totals.written += result.written;
         totals.changed.push(...result.changed);
         totals.broken.push(...result.broken);
+        totals.recovered.push(...result.recovered);
       })
       .catch((error: unknown) => {
         failure ??= error;
@@ -177,6 +178,7 @@ export async function recomputeStatements(
   if (failure !== undefined) throw failure;
   if (totals.changed.length) statementEvents.emit('textChanged', { statementIds: totals.changed });
   if (totals.broken.length) statementEvents.emit('broken', { statementIds: totals.broken });
+  if (totals.recovered.length) statementEvents.emit('recovered', { statementIds: totals.recovered });
   return totals;
 }
 

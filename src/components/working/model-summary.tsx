@@ -43,7 +43,7 @@ export function ModelSummary({ model, defaultOpen = false }: { model: ResolvedMo
   const rows = PARAMS.filter((p) => model[p.key] !== undefined);
   return (
     <details open={defaultOpen} className="group rounded-lg border border-rule bg-panel">
-      <summary className="flex cursor-pointer list-none items-baseline gap-2 px-4 py-3 text-sm [&::-webkit-details-marker]:hidden">
+      <summary className="flex cursor-pointer list-none flex-wrap items-baseline gap-x-2 gap-y-1 px-4 py-3 text-sm [&::-webkit-details-marker]:hidden">
         <span aria-hidden="true" className="inline-block w-3 text-muted transition-transform group-open:rotate-90">
           ›
         </span>
@@ -52,7 +52,8 @@ export function ModelSummary({ model, defaultOpen = false }: { model: ResolvedMo
         <span className="ml-auto text-xs text-accent group-open:hidden">Show parameters</span>
         <span className="ml-auto hidden text-xs text-accent group-open:inline">Hide parameters</span>
       </summary>
-      <div className="overflow-x-auto border-t border-rule px-4 pb-3 pt-2">
+      {/* In a narrow side panel the unit joins the value and the source goes under the parameter. */}
+      <div className="@container overflow-x-auto border-t border-rule px-4 pb-3 pt-2">
         <table className="w-full text-left text-sm">
           <caption className="sr-only">Parameters of {model.label}, with their sources</caption>
           <thead className="text-xs text-muted">
@@ -66,10 +67,10 @@ export function ModelSummary({ model, defaultOpen = false }: { model: ResolvedMo
               <th scope="col" className="py-1.5 pr-3 text-right font-medium">
                 Value
               </th>
-              <th scope="col" className="py-1.5 pr-3 font-medium">
+              <th scope="col" className="hidden py-1.5 pr-3 font-medium @lg:table-cell">
                 Unit
               </th>
-              <th scope="col" className="py-1.5 font-medium">
+              <th scope="col" className="hidden py-1.5 font-medium @lg:table-cell">
                 Source
               </th>
             </tr>
@@ -82,24 +83,36 @@ export function ModelSummary({ model, defaultOpen = false }: { model: ResolvedMo
                   <td className="py-1.5 pr-3 font-mono text-[13px] whitespace-nowrap">
                     <SymbolText text={p.symbol} />
                   </td>
-                  <td className="py-1.5 pr-3">{p.name}</td>
+                  <td className="py-1.5 pr-3">
+                    {p.name}
+                    <span className="mt-0.5 block text-xs leading-5 text-muted [overflow-wrap:anywhere] @lg:hidden">
+                      {describeSource(model.sources[p.key])}
+                    </span>
+                  </td>
                   <td className="py-1.5 pr-3 text-right whitespace-nowrap tabular-nums" title={fullValue(value)}>
                     {shownValue(value)}
+                    {p.unit && <span className="text-muted @lg:hidden"> {p.unit}</span>}
                   </td>
-                  <td className="py-1.5 pr-3 text-muted">{p.unit}</td>
-                  <td className="py-1.5 text-xs leading-5 text-muted">{describeSource(model.sources[p.key])}</td>
+                  <td className="hidden py-1.5 pr-3 text-muted @lg:table-cell">{p.unit}</td>
+                  <td className="hidden py-1.5 text-xs leading-5 text-muted [overflow-wrap:anywhere] @lg:table-cell">
+                    {describeSource(model.sources[p.key])}
+                  </td>
                 </tr>
               );
             })}
             {model.H0_range && (
               <tr className="border-t border-rule/70">
                 <td className="py-1.5 pr-3 font-mono text-[13px]">H₀ range</td>
-                <td className="py-1.5 pr-3">68 % range of the Hubble constant, propagated with the densities held fixed</td>
+                <td className="py-1.5 pr-3">
+                  68 % range of the Hubble constant, propagated with the densities held fixed
+                  <span className="mt-0.5 block text-xs text-muted @lg:hidden">entered for this calculation</span>
+                </td>
                 <td className="py-1.5 pr-3 text-right whitespace-nowrap tabular-nums">
                   {formatSig(model.H0_range.low)} – {formatSig(model.H0_range.high)}
+                  <span className="text-muted @lg:hidden"> km/s/Mpc</span>
                 </td>
-                <td className="py-1.5 pr-3 text-muted">km/s/Mpc</td>
-                <td className="py-1.5 text-xs text-muted">entered for this calculation</td>
+                <td className="hidden py-1.5 pr-3 text-muted @lg:table-cell">km/s/Mpc</td>
+                <td className="hidden py-1.5 text-xs text-muted @lg:table-cell">entered for this calculation</td>
               </tr>
             )}
           </tbody>

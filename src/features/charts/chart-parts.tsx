@@ -159,30 +159,34 @@ export function ChartTooltip({ active, row, styles }: { active?: boolean; row?: 
 
 /** The chart's numbers as a table for screen readers, at a few round redshifts and the object's own. */
 export function ChartDataTable({ rows, styles, caption }: { rows: ChartRow[]; styles: SeriesStyle[]; caption: string }) {
+  // The wrapper, not the table, is visually hidden: a table ignores the 1 px width of `sr-only`
+  // and its cells grew the calculator to thousands of pixels wide.
   return (
-    <table className="sr-only">
-      <caption>{caption}</caption>
-      <thead>
-        <tr>
-          <th scope="col">Redshift z</th>
-          {styles.map((s) => (
-            <th key={s.key} scope="col">
-              {s.label} (Mpc)
-            </th>
-          ))}
-        </tr>
-      </thead>
-      <tbody>
-        {rows.map((r) => (
-          <tr key={r.z}>
-            <th scope="row">{formatZ(r.z)}</th>
-            {styles.map((s) => {
-              const d = r[s.key];
-              return <td key={s.key}>{typeof d === 'number' ? mpcFormat.format(d) : 'not defined'}</td>;
-            })}
+    <div className="sr-only">
+      <table>
+        <caption>{caption}</caption>
+        <thead>
+          <tr>
+            <th scope="col">Redshift z</th>
+            {styles.map((s) => (
+              <th key={s.key} scope="col">
+                {s.label} (Mpc)
+              </th>
+            ))}
           </tr>
-        ))}
-      </tbody>
-    </table>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.z}>
+              <th scope="row">{formatZ(r.z)}</th>
+              {styles.map((s) => {
+                const d = r[s.key];
+                return <td key={s.key}>{typeof d === 'number' ? mpcFormat.format(d) : 'not defined'}</td>;
+              })}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

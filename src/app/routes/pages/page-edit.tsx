@@ -1,8 +1,8 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { useCallback, useRef } from 'react';
+import { useCallback, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { PageDto } from '@shared/schemas/page.ts';
-import { useSubmitPage } from '@/api/page-workflow.ts';
+import { useSubmitPage, useWithdrawPage } from '@/api/page-workflow.ts';
 import { pageKeys, usePage } from '@/api/pages.ts';
 import { useSettings } from '@/api/settings.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -12,6 +12,8 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
+import { PublishPanel } from '@/features/pages/components/publish-panel.tsx';
+import { SubmitFlagsForm } from '@/features/pages/components/submit-flags-form.tsx';
 
 /** The editor screen (the only route that loads the editor). */
 export function Component() {
@@ -20,6 +22,8 @@ export function Component() {
   const settings = useSettings();
   const queryClient = useQueryClient();
   const submit = useSubmitPage(id);
+  const withdraw = useWithdrawPage(id);
+  const [askReasons, setAskReasons] = useState<string[] | null>(null);
   const workspace = useRef<WorkspaceHandle | null>(null);
   const onSaved = useCallback((saved: PageDto) => queryClient.setQueryData(pageKeys.detail(id), saved), [queryClient, id]);
 
@@ -27,10 +31,15 @@ export function Component() {
   // A failed refresh must not unmount the editor and the text in it.
   if (page.error && !page.data) return <Notice tone="error">{page.error.message}</Notice>;
   const p = page.data;
-  const submitNow = async () => {
+  const submitNow = async (flagNotes?: Array<{ text: string; reason: string }>) => {
     const version = (await workspace.current?.flush()) ?? p.version;
-    submit.mutate(version);
+    const open = workspace.current?.openFlags() ?? [];
+    // Open hand-typed numbers need the writer's reason before the page goes to review.
+    if (open.length && !flagNotes) return setAskReasons(open);
+    withdraw.reset();
+    submit.mutate({ version, flagNotes }, { onSuccess: () => setAskReasons(null) });
   };
+  const sentBackAt = p.sentBack ? new Date(p.sentBack.at) : null;
   return (
     <>
       <PageHeader
@@ -63,9 +72,61 @@ export function Component() {
                 Submit for review
               </Button>
             )}
+            {p.can.withdraw && (
+              <Button
+                variant="secondary"
+                busy={withdraw.isPending}
+                onClick={() => {
+                  submit.reset();
+                  withdraw.mutate();
+                }}
+              >
+                Withdraw from review
+              </Button>
+            )}
           </>
         }
       />
+      {p.sentBack && sentBackAt && (
+        <div className="mb-4">
+          <Notice tone="warning" title={`Sent back by ${p.sentBack.by ?? 'a reviewer'}`}>
+            <p className="whitespace-pre-wrap">{p.sentBack.reason}</p>
+            <p className="mt-1 text-xs text-muted">
+              {sentBackAt.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })} ·{' '}
+              <Link to={paths.pageReview.href(p.id)} className="text-accent underline">
+                every comment
+              </Link>
+            </p>
+          </Notice>
+        </div>
+      )}
+      {askReasons && p.can.submit && (
+        <SubmitFlagsForm
+          flags={askReasons}
+          busy={submit.isPending}
+          onSubmit={(notes) => void submitNow(notes)}
+          onCancel={() => setAskReasons(null)}
+        />
+      )}
+      {withdraw.error && (
+        <div className="mb-4">
+          <Notice tone="error" title="Not withdrawn">
+            {withdraw.error.message}
+          </Notice>
+        </div>
+      )}
+      {withdraw.isSuccess && p.status === 'draft' && (
+        <div className="mb-4">
+          <Notice tone="success" title="Withdrawn from review">
+            The page is a draft again. Statements a reviewer signed off keep their sign-off while their wording stays the same.
+          </Notice>
+        </div>
+      )}
+      {p.can.publish && (
+        <div className="mb-4">
+          <PublishPanel page={p} />
+        </div>
+      )}
       {submit.error && (
         <div className="mb-4">
           <Notice tone="error" title="Not submitted">
@@ -73,7 +134,7 @@ export function Component() {
           </Notice>
         </div>
       )}
-      {submit.isSuccess && (
+      {submit.isSuccess && p.status === 'in_review' && (
         <div className="mb-4">
           <Notice tone="success" title="Submitted for review">
             The reviewers have been e-mailed. The page is locked until a reviewer signs it off or sends it back.

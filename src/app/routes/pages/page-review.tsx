@@ -81,7 +81,7 @@ export function Component() {
           <Notice tone="error">{error.message}</Notice>
         </div>
       )}
-      <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem]">
+      <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           {p.published && (

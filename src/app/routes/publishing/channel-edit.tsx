@@ -104,7 +104,7 @@ export function Component() {
           </Notice>
         </div>
       )}
-      <div className="grid gap-8 xl:grid-cols-[minmax(0,1fr)_28rem]">
+      <div className="grid grid-cols-1 gap-8 xl:grid-cols-[minmax(0,1fr)_28rem]">
         <section aria-labelledby="slides-heading" className="space-y-4">
           <h2 id="slides-heading" className="text-lg font-semibold text-ink">
             Slides

@@ -1,14 +1,15 @@
+import { formatSig } from '@/components/working/format-number.ts';
 import { formatDeclination, formatRightAscension } from '@shared/catalogue/coordinates.ts';
 import { CONSTELLATION_NAMES } from '@shared/catalogue/constellations.ts';
 import { findQuantity, findUnit } from '@shared/catalogue/quantities.ts';
 import type { MeasurementDto } from '@shared/schemas/measurement.ts';
 
-/** A number as people read it: up to 6 significant figures, with a typographic minus. */
+/**
+ * A number as people read it: up to 6 significant figures, a typographic minus, and a power of ten
+ * ("7 × 10⁻⁶") instead of a programmer's "7e-6" for very small or large values.
+ */
 export function formatNumber(value: number): string {
-  if (value === 0) return '0';
-  const abs = Math.abs(value);
-  const text = abs >= 1e7 || abs < 1e-4 ? value.toExponential(4).replace(/\.?0+e/, 'e') : String(Number(value.toPrecision(6)));
-  return text.replace('-', '−');
+  return formatSig(value, 6);
 }
 
 const unitLabel = (quantity: string, unit: string) => {

@@ -6,6 +6,7 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatMeasurement, quantityTitle, sourceHref } from './format.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
+import { ReasonDialog } from '@/components/ui/reason-dialog.tsx';
 
 function Status({ m }: { m: MeasurementDto }) {
   if (m.retired)
@@ -66,17 +67,32 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
   const hidden = measurements.length - visible.length;
   const error = prefer.error ?? review.error ?? retire.error;
 
-  const askAndRetire = (m: MeasurementDto) => {
-    const reason = window.prompt(`Why retire ${formatMeasurement(m)}? It stays in the history.`);
-    if (reason?.trim()) retire.mutate({ id: m.id, reason: reason.trim() });
-  };
-  const askAndDecline = (m: MeasurementDto) => {
-    const reason = window.prompt('Why is this proposal declined? The proposer sees the reason.');
-    if (reason?.trim()) review.mutate({ id: m.id, decision: 'decline', reason: reason.trim() });
-  };
+  // Which measurement is waiting for a reason, and for which step.
+  const [asking, setAsking] = useState<{ m: MeasurementDto; step: 'retire' | 'decline' } | null>(null);
+  const askAndRetire = (m: MeasurementDto) => setAsking({ m, step: 'retire' });
+  const askAndDecline = (m: MeasurementDto) => setAsking({ m, step: 'decline' });
+  const done = { onSuccess: () => setAsking(null) };
 
   return (
     <div className="space-y-4">
+      {asking && (
+        <ReasonDialog
+          title={asking.step === 'retire' ? `Retire ${formatMeasurement(asking.m)}` : 'Decline this proposal'}
+          label={
+            asking.step === 'retire'
+              ? 'Why is it retired? It stays in the history with this reason.'
+              : 'Why is it declined? The proposer sees the reason.'
+          }
+          confirm={asking.step === 'retire' ? 'Retire' : 'Decline'}
+          busy={retire.isPending || review.isPending}
+          onCancel={() => setAsking(null)}
+          onConfirm={(reason) =>
+            asking.step === 'retire'
+              ? retire.mutate({ id: asking.m.id, reason }, done)
+              : review.mutate({ id: asking.m.id, decision: 'decline', reason }, done)
+          }
+        />
+      )}
       {error && (
         <Notice tone="error" title="That change was not made">
           {error.message}

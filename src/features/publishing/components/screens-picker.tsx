@@ -1,3 +1,4 @@
+import { SCREEN_HEALTH_LABELS } from '@shared/schemas/kiosk.ts';
 import { useEffect, useState } from 'react';
 import type { ChannelDetailDto } from '@shared/schemas/channel.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -29,7 +30,7 @@ export function ScreensPicker({
       <ul className="space-y-1.5">
         {channel.venueScreens.map((s) => (
           <li key={s.id}>
-            <label className="flex items-center gap-2 text-sm">
+            <label className="flex flex-wrap items-center gap-x-2 text-sm">
               <input
                 type="checkbox"
                 className="accent-accent"
@@ -38,7 +39,7 @@ export function ScreensPicker({
               />
               <span className="font-medium text-ink">{s.name}</span>
               <span className="text-xs text-muted">
-                {s.health}
+                {SCREEN_HEALTH_LABELS[s.health]}
                 {s.channelId && s.channelId !== channel.id ? ` · now showing “${s.channelName}”` : ''}
               </span>
             </label>

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { ROLE_LABELS, ROLES, type Role } from '@shared/roles.ts';
 import type { UserDto } from '@shared/schemas/user.ts';
 import { useResendInvitation, useUpdateUser } from '@/api/users.ts';
@@ -29,6 +30,66 @@ function Status({ user }: { user: UserDto }) {
   );
 }
 
+/**
+ * A role picker that changes nothing until confirmed: choosing a role asks "Make … an editor?",
+ * Save applies it and says so; Cancel puts the old role back.
+ */
+function RoleCell({ user, update }: { user: UserDto; update: ReturnType<typeof useUpdateUser> }) {
+  const [choice, setChoice] = useState<Role | null>(null);
+  const [saved, setSaved] = useState<Role | null>(null);
+  const busy = update.isPending && update.variables?.id === user.id;
+  return (
+    <div className="space-y-1">
+      <select
+        aria-label={`Role of ${user.name}`}
+        value={choice ?? user.role}
+        onChange={(e) => {
+          const next = e.target.value as Role;
+          setSaved(null);
+          setChoice(next === user.role ? null : next);
+        }}
+        className="rounded border border-rule bg-panel px-2 py-1 text-sm"
+      >
+        {ROLES.map((role) => (
+          <option key={role} value={role}>
+            {ROLE_LABELS[role]}
+          </option>
+        ))}
+      </select>
+      {choice && (
+        <div className="flex flex-wrap items-center gap-1 text-xs">
+          <span>
+            Make {user.name} {ROLE_LABELS[choice].toLowerCase()}?
+          </span>
+          <Button
+            variant="secondary"
+            busy={busy}
+            onClick={() =>
+              update.mutate(
+                { id: user.id, role: choice },
+                {
+                  onSuccess: () => {
+                    setSaved(choice);
+                    setChoice(null);
+                  },
+                },
+              )
+            }
+          >
+            Save role
+          </Button>
+          <Button variant="quiet" onClick={() => setChoice(null)}>
+            Cancel
+          </Button>
+        </div>
+      )}
+      <p role="status" className="text-xs text-ok">
+        {saved && saved === user.role ? `Saved: ${user.name} is now ${ROLE_LABELS[saved].toLowerCase()}.` : ''}
+      </p>
+    </div>
+  );
+}
+
 /** Staff accounts with their role and status; admins change roles and deactivate here. */
 export function UsersTable({ users }: { users: UserDto[] }) {
   const update = useUpdateUser();
@@ -56,24 +117,7 @@ export function UsersTable({ users }: { users: UserDto[] }) {
             <span className="block font-medium">{user.name}</span>
             <span className="block text-xs text-muted">{user.email}</span>
           </td>
-          <td className="px-4 py-2">
-            {user.can.deactivate ? (
-              <select
-                aria-label={`Role of ${user.name}`}
-                value={user.role}
-                onChange={(e) => update.mutate({ id: user.id, role: e.target.value as Role })}
-                className="rounded border border-rule bg-panel px-2 py-1 text-sm"
-              >
-                {ROLES.map((role) => (
-                  <option key={role} value={role}>
-                    {ROLE_LABELS[role]}
-                  </option>
-                ))}
-              </select>
-            ) : (
-              ROLE_LABELS[user.role]
-            )}
-          </td>
+          <td className="px-4 py-2">{user.can.deactivate ? <RoleCell user={user} update={update} /> : ROLE_LABELS[user.role]}</td>
           <td className="px-4 py-2">
             <Status user={user} />
           </td>
