@@ -19,6 +19,8 @@ export type CalcErrorCode =
   | 'no_big_bang'
   | 'unknown_band'
   | 'no_solution'
+  | 'several_solutions'
+  | 'ill_conditioned'
   | 'not_in_hubble_law'
   | 'interval_outside_domain'
   | 'non_finite_result'

@@ -109,6 +109,35 @@ describe('hostile requests', () => {
     expect(errorOf({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: -5 } }).message).toContain('distance_mpc');
   });
 
+  it('a luminosity distance reached at two redshifts in a closed model is refused, naming both', () => {
+    // Ωm = 1, ΩΛ = 2.5 (Ωk = −2.5): D_L rises to about 4500 Mpc near z = 0.7 and falls again before the antipode.
+    const model = { H0: 70, Om0: 1, Ode0: 2.5 };
+    const e = errorOf({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: 3000 }, model });
+    expect(e.code).toBe('several_solutions');
+    const zs = [...e.message.matchAll(/(\d+\.\d{6})/g)].map((m) => Number(m[1]));
+    expect(zs).toHaveLength(2);
+    // Each named redshift gives the distance back through the forward calculation.
+    for (const z of zs) {
+      const back = calculate({ quantity: 'luminosity_distance', inputs: { z }, model });
+      expect('value' in back && back.value).toBeCloseTo(3000, 0);
+    }
+    // A flat model has one solution, found as before.
+    expect('value' in calculate({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: 3000 } })).toBe(true);
+  });
+
+  it('a lookback time within a hair of the age is refused as ill-conditioned; a sensitive one warns', () => {
+    // Planck 2018 (astropy's Planck18): age 13.787 Gyr. 13.7868 Gyr sits 0.1 Myr short of it.
+    const e = errorOf({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 13.7868 } });
+    expect(e.code).toBe('ill_conditioned');
+    expect(e.message).toMatch(/condition number .*0\.1 % change of lookback_gyr would move z by over 100 %/);
+    const warned = calculate({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 13 } });
+    if (!('value' in warned)) throw new Error('expected a value');
+    // dz/dt = (1+z)E(z)/t_H: at z ≈ 6.8 a 1 % change of the time moves z by about 13 %.
+    expect(warned.warnings.join(' ')).toMatch(/a 1 % change of lookback_gyr moves z by about 1[23] %/);
+    const calm = calculate({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 5 } });
+    expect('value' in calm && calm.warnings).toEqual([]);
+  });
+
   it('overflowing results become errors, not Infinity', () => {
     expect(errorOf({ quantity: 'flux_ratio', inputs: { delta_mag: -1e6 } }).code).toBe('non_finite_result');
     expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1 }, model: { H0: 1e-320, Om0: 0.3 } }).code).toBe(
