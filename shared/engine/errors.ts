@@ -21,6 +21,7 @@ export type CalcErrorCode =
   | 'no_solution'
   | 'several_solutions'
   | 'ill_conditioned'
+  | 'poor_parallax'
   | 'not_in_hubble_law'
   | 'interval_outside_domain'
   | 'non_finite_result'
