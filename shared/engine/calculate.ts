@@ -14,6 +14,8 @@ import { parseRequest, requestId } from './request.ts';
 import { bounded, H0_KEY, LOWER_BOUND, quantityInterval } from './interval.ts';
 import { boundMass, SAMPLES, SEED, type Measurement } from './uncertainty.ts';
 import { conversionsFor } from './units.ts';
+import { hubbleLawWarning } from './hubble-law.ts';
+import { HUBBLE_LAW_TOLERANCE, hubbleLawMaxZ, referenceModel } from './hubble-law-limit.ts';
 import type { Step } from './working.ts';
 
 // More failed draws than this and an interval would misrepresent the uncertainty.
@@ -95,6 +97,43 @@ function uncertaintyStep(
   };
 }
 
+/**
+ * The Hubble law's own error: the same request under the standard model (Planck 2018 densities,
+ * the law's H0). Returns the reference value and the step showing the difference, or null when the
+ * reference is undefined there. A magnitude's difference is read as the distance ratio it implies.
+ */
+function lawComparison(
+  req: CalcRequest,
+  measured: Record<string, Measurement>,
+  value: number,
+  unit: string,
+  H0: number,
+): { reference: number; difference: number; step: Step } | null {
+  const inputs: Record<string, unknown> = Object.fromEntries(Object.entries(measured).map(([k, m]) => [k, m.value]));
+  if (req.inputs?.band !== undefined) inputs.band = req.inputs.band;
+  const ref = calculate({ quantity: req.quantity, inputs, model: referenceModel(H0) });
+  if (!('value' in ref)) return null;
+  const difference = unit === 'mag' ? 10 ** (0.2 * Math.abs(value - ref.value)) - 1 : Math.abs(value / ref.value - 1);
+  const step: Step = {
+    title: 'The Hubble law against a standard cosmology model',
+    formula: unit === 'mag' ? 'δ = 10^(0.2 |m_law − m_FLRW|) − 1' : 'δ = |x_law / x_FLRW − 1|',
+    inputs: [
+      { symbol: 'x_law', name: 'Hubble-law result', value, unit, source: 'previous step' },
+      {
+        symbol: 'x_FLRW',
+        name: 'the same under flat ΛCDM with Planck 2018 densities and the law’s H0',
+        value: ref.value,
+        unit,
+        source: 'this engine (Planck 2018 VI, A&A 641, A6, parameters as astropy’s Planck18)',
+      },
+    ],
+    constants: [],
+    result: { symbol: 'δ', name: 'relative difference: the law’s own error', value: difference, unit: '' },
+    note: `The interval is widened to include the standard model’s value, so the public figures never claim more than the law’s own error allows. Tolerance ${HUBBLE_LAW_TOLERANCE * 100} % (where our precision rule drops from 3 figures to 2): beyond it the result carries a warning. Every quantity the law answers stays within the tolerance below z = ${hubbleLawMaxZ().toFixed(3)} (the angular diameter distance departs first).`,
+  };
+  return { reference: ref.value, difference, step };
+}
+
 function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess {
   const quantity: CalcQuantity = req.quantity;
   const spec = QUANTITY_SPECS[quantity];
@@ -147,6 +186,18 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
       );
     }
     steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit, outcome.failures));
+  }
+  if (resolved && view.kind === 'hubble_law') {
+    const law = lawComparison(req, measured, value, spec.unit, view.H0);
+    if (law) {
+      steps.push(law.step);
+      if (law.difference > HUBBLE_LAW_TOLERANCE) warnings.add(hubbleLawWarning(law.difference, HUBBLE_LAW_TOLERANCE));
+      interval = {
+        ...(interval ?? { level: 0.68 as const }),
+        low: Math.min(interval?.low ?? value, law.reference),
+        high: Math.max(interval?.high ?? value, law.reference),
+      };
+    }
   }
   // The resolved model's description is shared and frozen; only an H0 range makes it this result's own.
   const description =

@@ -81,9 +81,9 @@ export function zFromLuminosityDistanceSteps(ctx: Ctx, d: number): number {
   const c = requireCosmology(ctx);
   if (!(d > 0)) throw new CalcError('out_of_range', `distance_mpc must be greater than 0 (got ${d})`);
   const f = (u: number): number => luminosityDistanceMpc(c, Math.expm1(u)) / ctx.h0Scale - d;
-  // The luminosity distance need not be monotonic in a closed model: step outward through the whole
-  // range and keep every crossing, not only the first. Flat and open models rise monotonically
-  // (both 1+z and D_M do), so there the first crossing is the only one.
+  // The luminosity distance need not be monotonic in a closed model: it can rise, then fall, so a
+  // distance may be reached twice, and both crossings are looked for. Flat and open models rise
+  // monotonically (both 1+z and D_M do), so there the first crossing is the only one.
   const closed = c.model.Ok0 < 0;
   const limit = Math.min(searchLimit(c.model.zBounce), Math.log1p(1e6));
   const roots: number[] = [];
@@ -92,12 +92,34 @@ export function zFromLuminosityDistanceSteps(ctx: Ctx, d: number): number {
   for (let u = SCAN_STEP; lo < limit; u += SCAN_STEP) {
     const uu = Math.min(u, limit);
     const fu = f(uu);
-    if (fu === 0) roots.push(Math.expm1(uu));
-    else if (fLo < 0 && fu > 0) roots.push(Math.expm1(brent(f, lo, uu)));
-    else if (fLo > 0 && fu < 0) roots.push(Math.expm1(brent(f, lo, uu)));
+    if (fLo < 0 && fu >= 0) {
+      roots.push(Math.expm1(fu === 0 ? uu : brent(f, lo, uu)));
+      lo = uu;
+      break;
+    }
     lo = uu;
     fLo = fu;
-    if (!closed && roots.length > 0) break;
+  }
+  if (closed && roots.length === 1) {
+    // Past the first crossing a closed model's D_L rises to a maximum, then falls towards zero at the
+    // antipode: a second crossing is where it falls below d again. Steps grow geometrically from the
+    // first root, and the scan stops where the distance is no longer defined.
+    let prev = lo;
+    for (let step = SCAN_STEP; prev < limit; step *= 1.5) {
+      const uu = Math.min(prev + step, limit);
+      let fu: number;
+      try {
+        fu = f(uu);
+      } catch {
+        break;
+      }
+      if (!Number.isFinite(fu)) break;
+      if (fu < 0) {
+        roots.push(Math.expm1(brent(f, prev, uu)));
+        break;
+      }
+      prev = uu;
+    }
   }
   if (roots.length === 0)
     throw new CalcError(
@@ -121,7 +143,7 @@ export function zFromLuminosityDistanceSteps(ctx: Ctx, d: number): number {
     inputs: [inputValue(ctx, 'distance_mpc', d), h0Value(ctx)],
     constants: [],
     result: { symbol: 'z', name: 'redshift', unit: '' },
-    note: `Solved by Brent's method in ln(1+z) to a relative tolerance of 1e-13 (H0 = ${currentH0(ctx)} km/s/Mpc); check: the luminosity distance at this z is ${(f(Math.log1p(z)) + d).toPrecision(10)} Mpc. Every crossing between z = 0 and the search limit was looked for ${closed ? `(steps of ${SCAN_STEP} in ln(1+z), the model being closed)` : '(the model is not closed, so D_L rises with z)'}; this is the only one. ${conditioned}`,
+    note: `Solved by Brent's method in ln(1+z) to a relative tolerance of 1e-13 (H0 = ${currentH0(ctx)} km/s/Mpc); check: the luminosity distance at this z is ${(f(Math.log1p(z)) + d).toPrecision(10)} Mpc. Every crossing between z = 0 and the search limit was looked for ${closed ? '(the model is closed: past the first crossing, on through the maximum of D_L to where it is no longer defined)' : '(the model is not closed, so D_L rises with z)'}; this is the only one. ${conditioned}`,
   }));
 }
 
