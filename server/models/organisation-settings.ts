@@ -7,6 +7,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import type { H0Range } from '@shared/schemas/settings.ts';
 
 /** The organisation's defaults: the adopted cosmology, band, locale and eye-safety wording. */
 export class OrganisationSettings extends Model<
@@ -18,6 +19,8 @@ export class OrganisationSettings extends Model<
   declare defaultBand: string;
   declare defaultLocale: string;
   declare eyeSafetyNotice: string;
+  /** Null: the default range (shared/statements/model-uncertainty.ts). */
+  declare h0Range: CreationOptional<H0Range | null>;
   declare version: CreationOptional<number>;
   declare updatedById: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
@@ -31,6 +34,7 @@ export class OrganisationSettings extends Model<
         defaultBand: { type: DataTypes.STRING(20), allowNull: false },
         defaultLocale: { type: DataTypes.STRING(10), allowNull: false },
         eyeSafetyNotice: { type: DataTypes.TEXT, allowNull: false },
+        h0Range: { type: DataTypes.JSONB, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         updatedById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,

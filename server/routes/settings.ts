@@ -9,6 +9,7 @@ import {
   type SettingsUpdateInput,
 } from '@shared/schemas/settings.ts';
 import type { StatementLocale } from '@shared/statements/index.ts';
+import { DEFAULT_H0_RANGE } from '@shared/statements/model-uncertainty.ts';
 import { calculate } from '@shared/engine/calculate.ts';
 import { HttpError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
@@ -32,6 +33,8 @@ function presentSettings(settings: OrganisationSettings): SettingsDto {
     defaultBand: settings.defaultBand,
     defaultLocale: settings.defaultLocale as StatementLocale,
     eyeSafetyNotice: settings.eyeSafetyNotice,
+    h0Range: settings.h0Range ?? null,
+    h0RangeInUse: settings.h0Range ?? DEFAULT_H0_RANGE,
     version: settings.version,
     updatedAt: settings.updatedAt.toISOString(),
   };

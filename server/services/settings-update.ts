@@ -49,11 +49,16 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
   return settings;
 }
 
-/** Changes the band, locale or eye-safety notice. A band change moves magnitudes, so statements are recomputed. */
+/**
+ * Changes the band, locale, eye-safety notice or H0 range. A band change moves magnitudes and an
+ * H0 range moves every cosmological interval (hence the figures shown), so statements are recomputed.
+ */
 export async function updateSettings(input: SettingsUpdateInput, actor: User): Promise<OrganisationSettings> {
   const settings = await getSequelize().transaction(async (transaction) => {
     const row = await getSettings(transaction, 'update');
-    const bandChanged = input.defaultBand !== undefined && input.defaultBand !== row.defaultBand;
+    const bandChanged =
+      (input.defaultBand !== undefined && input.defaultBand !== row.defaultBand) ||
+      (input.h0Range !== undefined && JSON.stringify(input.h0Range) !== JSON.stringify(row.h0Range ?? null));
     row.set({ ...input, updatedById: actor.id, ...(bandChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
     await recordAudit(

@@ -7,6 +7,7 @@ import {
   type TemplateContext,
 } from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import type { H0Range } from '@shared/schemas/settings.ts';
 import { findQuantity } from '@shared/catalogue/quantities.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
@@ -19,6 +20,8 @@ import { getSkySnapshot } from '../sky-snapshots.ts';
 export interface SettingsSnapshot {
   model: CalcModel;
   band: string;
+  /** The organisation's H0 range; null or absent: the default. */
+  h0Range?: H0Range | null;
   version: number;
 }
 
@@ -46,6 +49,7 @@ function contextFor(object: ObjectRef, measurements: StatementMeasurement[], set
     measurements,
     model: settings.model,
     band: settings.band,
+    h0Range: settings.h0Range ?? null,
   };
 }
 

@@ -45,6 +45,7 @@ export async function findOrCreateStatement(
   const base = await buildTemplateContext(object, {
     model: settings.cosmologyModel,
     band: settings.defaultBand,
+    h0Range: settings.h0Range ?? null,
     version: settings.version,
   });
   const night = venue ? (await buildVenueNights([venue.id], new Date())).get(venue.id) : undefined;

@@ -31,7 +31,7 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
       },
     )
   ).map((r) => r.id);
-  const proposed = { model, band: settings.defaultBand, version: settings.version };
+  const proposed = { model, band: settings.defaultBand, h0Range: settings.h0Range ?? null, version: settings.version };
   const computedAt = new Date();
   const batches: Array<Promise<PreviewChange[]>> = [];
   const changes: PreviewChange[] = [];

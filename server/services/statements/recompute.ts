@@ -31,7 +31,7 @@ export class SettingsMovedError extends Error {}
 /** The adopted settings as a statement computation reads them. */
 export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
   const row = await getSettings();
-  return { model: row.cosmologyModel, band: row.defaultBand, version: row.version };
+  return { model: row.cosmologyModel, band: row.defaultBand, h0Range: row.h0Range ?? null, version: row.version };
 }
 
 async function idsFor(scope: RecomputeScope): Promise<string[]> {

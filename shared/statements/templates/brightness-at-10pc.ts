@@ -1,6 +1,6 @@
 import { SOLAR_MAGNITUDES } from '../../engine/solar-magnitudes.ts';
 import { compose, cosmologyFootnote, derivedStep, mapInterval } from '../compose.ts';
-import { asInput, distanceInputs, find, missing, requireDistance, run, used } from '../inputs.ts';
+import { asInput, distanceInputs, find, missing, requireDistance, runWithModel, used } from '../inputs.ts';
 import type { StatementTemplate } from '../types.ts';
 import { pickMagnitude } from './luminosity-sun.ts';
 import { bandFootnote, frenchCount, isFrench } from './words.ts';
@@ -22,7 +22,7 @@ export const brightnessAt10pc: StatementTemplate = {
     const basis = requireDistance(ctx);
     const extinction = find(ctx, 'extinction', mag.band);
     const alpha = basis.kind === 'z' ? find(ctx, 'spectral_index') : undefined;
-    const r = run({
+    const r = runWithModel(ctx, {
       quantity: 'absolute_magnitude',
       inputs: {
         m: asInput(mag),

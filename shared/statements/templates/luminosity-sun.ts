@@ -1,6 +1,6 @@
 import { SOLAR_MAGNITUDES } from '../../engine/solar-magnitudes.ts';
 import { compose, cosmologyFootnote, derivedStep } from '../compose.ts';
-import { asInput, distanceInputs, find, missing, requireDistance, run, used } from '../inputs.ts';
+import { asInput, distanceInputs, find, missing, requireDistance, runWithModel, used } from '../inputs.ts';
 import type { StatementTemplate, TemplateContext } from '../types.ts';
 import { bandFootnote, frenchCount, isFrench } from './words.ts';
 
@@ -28,7 +28,7 @@ export const luminositySun: StatementTemplate = {
     const basis = requireDistance(ctx);
     const extinction = find(ctx, 'extinction', mag.band);
     const alpha = basis.kind === 'z' ? find(ctx, 'spectral_index') : undefined;
-    const r = run({
+    const r = runWithModel(ctx, {
       quantity: 'luminosity_ratio_sun',
       inputs: {
         m: asInput(mag),
