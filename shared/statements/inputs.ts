@@ -1,5 +1,6 @@
 import type { CalcRequest, CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
 import { calculate } from '../engine/calculate.ts';
+import { resolveModel } from '../engine/model-resolve.ts';
 import { budgetStep, h0RangeFor, withPeculiarVelocity } from './model-uncertainty.ts';
 import type { StatementMeasurement, TemplateContext, TemplateFailure, UsedInput } from './types.ts';
 
@@ -106,11 +107,14 @@ export function runWithModel(ctx: TemplateContext, request: CalcRequest, options
   const range = h0RangeFor(request.model, ctx.h0Range);
   const z = request.inputs?.z;
   const pec = z === undefined ? null : withPeculiarVelocity(z);
-  const result = run({
+  const ranged = run({
     ...request,
     inputs: pec ? { ...request.inputs, z: pec.input } : request.inputs,
     H0_range: { low: range.low, high: range.high },
   });
+  // The statement names the adopted model itself (the engine's one shared description of it); the
+  // H0 range it was drawn over is in the working's budget step.
+  const result = ranged.model ? { ...ranged, model: resolveModel(request.model).description } : ranged;
   if (!pec || options.budget === false || !result.model) return result;
   const step = budgetStep({ z: z!, sigmaPec: pec.sigmaPec, range, H0: result.model.H0 });
   return { ...result, working: [step, ...result.working] };
