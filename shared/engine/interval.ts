@@ -29,11 +29,11 @@ const DOMAIN: Record<string, (x: number) => boolean> = {
 
 /**
  * Physical lower bounds the draws respect (truncated there, not failed): extinction cannot be
- * negative, nor a distance, a time or H0; 1 + z cannot be. A parallax has none: a measured parallax
- * may be zero or negative, and one too uncertain to invert is refused before drawing.
+ * negative, nor a distance, a time or H0. Not z: a redshift whose uncertainty reaches z = −1 is not a
+ * usable measurement, and its failed draws say so (refused above 1 %). Nor a parallax: a measured
+ * parallax may be zero or negative, and one too uncertain to invert is refused before drawing.
  */
 export const LOWER_BOUND: Record<string, number> = {
-  z: -1,
   lookback_gyr: 0,
   distance_mpc: 0,
   distance_1: 0,
