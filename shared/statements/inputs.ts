@@ -115,7 +115,7 @@ export function runWithModel(ctx: TemplateContext, request: CalcRequest, options
   // The statement names the adopted model itself (the engine's one shared description of it); the
   // H0 range it was drawn over is in the working's budget step.
   const result = ranged.model ? { ...ranged, model: resolveModel(request.model).description } : ranged;
-  if (!pec || options.budget === false || !result.model) return result;
-  const step = budgetStep({ z: z!, sigmaPec: pec.sigmaPec, range, H0: result.model.H0 });
+  if (!pec || z === undefined || options.budget === false || !result.model) return result;
+  const step = budgetStep({ z, sigmaPec: pec.sigmaPec, range, H0: result.model.H0 });
   return { ...result, working: [step, ...result.working] };
 }
