@@ -36,7 +36,7 @@ export function referenceModel(H0: number) {
   return { ...params, name: 'Planck 2018 densities (reference for the Hubble law)', H0 };
 }
 
-function valueOf(r: ReturnType<typeof calculate>): number {
+function resultValue(r: ReturnType<typeof calculate>): number {
   return 'value' in r ? (r as CalcSuccess).value : Number.NaN;
 }
 
@@ -50,7 +50,7 @@ export function largestLawDifference(z: number): { difference: number; quantity:
   for (const quantity of LAW_QUANTITIES) {
     // The law's value in closed form (a law request through calculate would compare itself again).
     const law = quantity === 'lookback_time' ? hubbleLawTimeGyr(z, 70) : hubbleLawDistanceMpc(z, 70);
-    const flrw = valueOf(calculate({ quantity, inputs: { z }, model: referenceModel(70) }));
+    const flrw = resultValue(calculate({ quantity, inputs: { z }, model: referenceModel(70) }));
     const difference = Math.abs(law / flrw - 1);
     if (difference > worst.difference) worst = { difference, quantity };
   }
