@@ -7,7 +7,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { CalcModel } from '@shared/schemas/calc.ts';
-import type { SpectralIndexDefaults } from '@shared/schemas/settings.ts';
+import type { H0Range, SpectralIndexDefaults } from '@shared/schemas/settings.ts';
 
 /** The organisation's defaults: the adopted cosmology, band, locale and eye-safety wording. */
 export class OrganisationSettings extends Model<
@@ -21,6 +21,8 @@ export class OrganisationSettings extends Model<
   declare eyeSafetyNotice: string;
   /** Default spectral index per object kind, each with its source: a stated assumption for the K-correction. */
   declare spectralIndexDefaults: CreationOptional<SpectralIndexDefaults>;
+  /** Null: the default range (shared/statements/model-uncertainty.ts). */
+  declare h0Range: CreationOptional<H0Range | null>;
   declare version: CreationOptional<number>;
   /** The release of the statement rules the stored statements were last computed by (STATEMENT_RULES_VERSION). */
   declare statementRulesVersion: CreationOptional<number>;
@@ -37,6 +39,7 @@ export class OrganisationSettings extends Model<
         defaultLocale: { type: DataTypes.STRING(10), allowNull: false },
         eyeSafetyNotice: { type: DataTypes.TEXT, allowNull: false },
         spectralIndexDefaults: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        h0Range: { type: DataTypes.JSONB, allowNull: true },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         statementRulesVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         updatedById: { type: DataTypes.UUID },

@@ -6,6 +6,7 @@ import {
   type SettingsDto,
 } from '@shared/schemas/settings.ts';
 import type { StatementLocale } from '@shared/statements/index.ts';
+import { DEFAULT_H0_RANGE } from '@shared/statements/model-uncertainty.ts';
 import { calculate } from '@shared/engine/calculate.ts';
 import { BadRequestError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
@@ -29,6 +30,8 @@ function presentSettings(settings: OrganisationSettings): SettingsDto {
     defaultLocale: settings.defaultLocale as StatementLocale,
     eyeSafetyNotice: settings.eyeSafetyNotice,
     spectralIndexDefaults: settings.spectralIndexDefaults ?? {},
+    h0Range: settings.h0Range ?? null,
+    h0RangeInUse: settings.h0Range ?? DEFAULT_H0_RANGE,
     version: settings.version,
     updatedAt: settings.updatedAt.toISOString(),
   };

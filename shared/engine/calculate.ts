@@ -11,13 +11,35 @@ import type { Ctx } from './quantities/context.ts';
 import type { Values } from './quantities/photometry.ts';
 import { QUANTITY_SPECS, checkInputs } from './quantities/registry.ts';
 import { parseRequest, requestId } from './request.ts';
-import { H0_KEY, quantityInterval } from './interval.ts';
-import { SAMPLES, SEED, type Measurement } from './uncertainty.ts';
+import { bounded, H0_KEY, LOWER_BOUND, quantityInterval } from './interval.ts';
+import { boundMass, SAMPLES, SEED, type Measurement } from './uncertainty.ts';
 import { conversionsFor } from './units.ts';
+import { hubbleLawWarning } from './hubble-law.ts';
+import { HUBBLE_LAW_TOLERANCE, hubbleLawMaxZ, referenceModel } from './hubble-law-limit.ts';
 import type { Step } from './working.ts';
 
 // More failed draws than this and an interval would misrepresent the uncertainty.
 const MAX_FAILED_FRACTION = 0.01;
+
+/**
+ * Above this fractional parallax error, 1/ϖ is refused as a distance: the inverse of a noisy
+ * parallax is a biased estimator with a skewed, heavy-tailed error, and beyond f = σ_ϖ/ϖ ≈ 0.2 it is
+ * a poor guide to the distance (Bailer-Jones 2015, PASP 127, 994, "Estimating distances from
+ * parallaxes"); a distance then needs a prior on the star's distribution, which we do not assume.
+ */
+export const MAX_PARALLAX_FRACTIONAL_ERROR = 0.2;
+
+/** Refuses a parallax too uncertain to invert, with the reason and the source of the rule. */
+function checkParallax(m: Measurement | undefined): void {
+  if (!m || !(m.value > 0)) return;
+  const f = Math.max(m.minus, m.plus) / m.value;
+  if (f > MAX_PARALLAX_FRACTIONAL_ERROR) {
+    throw new CalcError(
+      'poor_parallax',
+      `parallax_mas = ${m.value} ± ${Math.max(m.minus, m.plus)} has a fractional error of ${f.toPrecision(2)}, above ${MAX_PARALLAX_FRACTIONAL_ERROR}: its inverse is not a usable distance (Bailer-Jones 2015, PASP 127, 994); give a distance or a more precise parallax`,
+    );
+  }
+}
 
 function toMeasurement(x: MeasuredInput): Measurement {
   if (typeof x === 'number') return { value: x, minus: 0, plus: 0, source: 'request' };
@@ -38,7 +60,26 @@ function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
   return { value: H0, minus: H0 - r.low, plus: r.high - H0, source: 'H0_range in the request' };
 }
 
-function uncertaintyStep(measured: Record<string, Measurement>, quantity: string, low: number, high: number, unit: string): Step {
+function uncertaintyStep(
+  measured: Record<string, Measurement>,
+  quantity: string,
+  low: number,
+  high: number,
+  unit: string,
+  failed: Map<string, number>,
+): Step {
+  const failedCount = [...failed.values()].reduce((a, b) => a + b, 0);
+  const failedNote =
+    failedCount > 0
+      ? ` ${failedCount} of ${SAMPLES} draws fell where ${quantity} is not defined (${[...failed].map(([k, n]) => `${n} from ${k}`).join(', ')}) and are left out of the percentiles; the interval is from the other ${SAMPLES - failedCount}.`
+      : '';
+  const bounds = Object.entries(measured)
+    .filter(([k, m]) => (m.minus > 0 || m.plus > 0) && LOWER_BOUND[k] !== undefined && boundMass(bounded(k, m)) > 0)
+    .map(([k]) => `${k} ≥ ${LOWER_BOUND[k]}`);
+  const boundNote =
+    bounds.length > 0
+      ? ` Draws respect the physical bound${bounds.length > 1 ? 's' : ''} ${bounds.join(', ')}: the two-piece normal is truncated there (drawn conditioned on lying above it).`
+      : '';
   const varied = Object.entries(measured).filter(([, m]) => m.minus > 0 || m.plus > 0);
   return {
     title: 'Uncertainty: 68 % interval by Monte Carlo propagation',
@@ -52,8 +93,45 @@ function uncertaintyStep(measured: Record<string, Measurement>, quantity: string
     })),
     constants: [],
     result: { symbol: 'Δ', name: `width of the 68 % interval of ${quantity}`, value: high - low, unit },
-    note: `${SAMPLES} draws from a seeded generator (mulberry32, seed ${SEED}), so the interval is reproducible. Each input is drawn from a two-piece normal whose 16th and 84th percentiles are value − minus and value + plus. H0 draws hold the density parameters fixed, so distances and times scale as 1/H0. Interval: ${low} to ${high}.`,
+    note: `${SAMPLES} draws from a seeded generator (mulberry32, seed ${SEED}), so the interval is reproducible. Each input is drawn from a two-piece normal whose 16th and 84th percentiles are value − minus and value + plus. H0 draws hold the density parameters fixed, so distances and times scale as 1/H0.${boundNote}${failedNote} Interval: ${low} to ${high}.`,
   };
+}
+
+/**
+ * The Hubble law's own error: the same request under the standard model (Planck 2018 densities,
+ * the law's H0). Returns the reference value and the step showing the difference, or null when the
+ * reference is undefined there. A magnitude's difference is read as the distance ratio it implies.
+ */
+function lawComparison(
+  req: CalcRequest,
+  measured: Record<string, Measurement>,
+  value: number,
+  unit: string,
+  H0: number,
+): { reference: number; difference: number; step: Step } | null {
+  const inputs: Record<string, unknown> = Object.fromEntries(Object.entries(measured).map(([k, m]) => [k, m.value]));
+  if (req.inputs?.band !== undefined) inputs.band = req.inputs.band;
+  const ref = calculate({ quantity: req.quantity, inputs, model: referenceModel(H0) });
+  if (!('value' in ref)) return null;
+  const difference = unit === 'mag' ? 10 ** (0.2 * Math.abs(value - ref.value)) - 1 : Math.abs(value / ref.value - 1);
+  const step: Step = {
+    title: 'The Hubble law against a standard cosmology model',
+    formula: unit === 'mag' ? 'δ = 10^(0.2 |m_law − m_FLRW|) − 1' : 'δ = |x_law / x_FLRW − 1|',
+    inputs: [
+      { symbol: 'x_law', name: 'Hubble-law result', value, unit, source: 'previous step' },
+      {
+        symbol: 'x_FLRW',
+        name: 'the same under flat ΛCDM with Planck 2018 densities and the law’s H0',
+        value: ref.value,
+        unit,
+        source: 'this engine (Planck 2018 VI, A&A 641, A6, parameters as astropy’s Planck18)',
+      },
+    ],
+    constants: [],
+    result: { symbol: 'δ', name: 'relative difference: the law’s own error', value: difference, unit: '' },
+    note: `The interval is widened to include the standard model’s value, so the public figures never claim more than the law’s own error allows. Tolerance ${HUBBLE_LAW_TOLERANCE * 100} % (where our precision rule drops from 3 figures to 2): beyond it the result carries a warning. Every quantity the law answers stays within the tolerance below z = ${hubbleLawMaxZ().toFixed(3)} (the angular diameter distance departs first).`,
+  };
+  return { reference: ref.value, difference, step };
 }
 
 function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess {
@@ -66,6 +144,7 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
   for (const [k, v] of Object.entries(rawInputs)) {
     if (k !== 'band' && v !== undefined) measured[k] = toMeasurement(v as MeasuredInput);
   }
+  checkParallax(measured.parallax_mas);
   const usesModel = spec.usesModel(present);
   const resolved = usesModel ? resolveModel(req.model) : null;
   if (resolved && spec.flrwOnly && resolved.view.kind === 'hubble_law') {
@@ -95,8 +174,30 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
         `the uncertainty on ${who} reaches values where ${quantity} is not defined (${pct} % of draws); give a smaller uncertainty`,
       );
     }
-    interval = { low: outcome.low, high: outcome.high, level: 0.68 };
-    steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit));
+    interval = {
+      low: outcome.low,
+      high: outcome.high,
+      level: 0.68,
+      ...(outcome.failed > 0 ? { failed_draws: outcome.failed } : {}),
+    };
+    if (outcome.failed > 0) {
+      warnings.add(
+        `${outcome.failed} of ${SAMPLES} uncertainty draws fell where ${quantity} is not defined and were left out of the interval (see the working).`,
+      );
+    }
+    steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit, outcome.failures));
+  }
+  if (resolved && view.kind === 'hubble_law') {
+    const law = lawComparison(req, measured, value, spec.unit, view.H0);
+    if (law) {
+      steps.push(law.step);
+      if (law.difference > HUBBLE_LAW_TOLERANCE) warnings.add(hubbleLawWarning(law.difference, HUBBLE_LAW_TOLERANCE));
+      interval = {
+        ...(interval ?? { level: 0.68 as const }),
+        low: Math.min(interval?.low ?? value, law.reference),
+        high: Math.max(interval?.high ?? value, law.reference),
+      };
+    }
   }
   // The resolved model's description is shared and frozen; only an H0 range makes it this result's own.
   const description =

@@ -1,17 +1,20 @@
 /**
  * The simple Hubble law, d = cz/H0: a classroom model that holds only at small
- * redshift. Under it every distance measure is the same cz/H0 and times are z/H0;
- * results carry a warning when z > 0.1, where the law is no longer a good guide.
+ * redshift. Under it every distance measure is the same cz/H0 and times are z/H0.
+ * Each result is compared with a standard FLRW model (hubble-law-limit.ts): the
+ * difference widens its interval, and above the tolerance it carries a warning.
  */
 import { SPEED_OF_LIGHT } from './constants.ts';
 import { hubbleTimeGyr } from './units.ts';
 
-/** Above this redshift the Hubble law's working carries a warning. */
-export const HUBBLE_LAW_MAX_Z = 0.1;
-
-/** The warning shown when the Hubble law is used beyond its range. */
-export const HUBBLE_LAW_WARNING =
-  'The simple Hubble law d = cz/H0 only holds for small redshifts (z < 0.1); at this redshift it misstates the distance — use a cosmology model instead.';
+/**
+ * The warning shown when the Hubble law is used beyond its range.
+ * @param difference this result's relative difference from the standard model
+ * @param tolerance the tolerance it exceeds
+ */
+export function hubbleLawWarning(difference: number, tolerance: number): string {
+  return `The simple Hubble law d = cz/H0 only holds for small redshifts; here it differs from a standard cosmology model (Planck 2018 densities) by ${(difference * 100).toPrecision(2)} %, more than our ${tolerance * 100} % tolerance — use a cosmology model instead.`;
+}
 
 /**
  * Distance under the Hubble law.

@@ -7,7 +7,7 @@ import type { ModelView } from './quantities/context.ts';
 import type { QuantitySpec } from './quantities/registry.ts';
 import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
 import { propagate, propagateOne } from './monte-carlo.ts';
-import { deviateRange, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+import { boundMass, deviateRange, truncatedDeviate, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 import { localModulus } from './quantities/local-modulus.ts';
 import { exactModulusAt } from './quantities/sample-photometry.ts';
 import type { Sampler } from './quantities/sample-env.ts';
@@ -26,6 +26,27 @@ const DOMAIN: Record<string, (x: number) => boolean> = {
   extinction: (x) => x >= 0,
   [H0_KEY]: (x) => x > 0,
 };
+
+/**
+ * Physical lower bounds the draws respect (truncated there, not failed): extinction cannot be
+ * negative, nor a distance, a time or H0. Not z: a redshift whose uncertainty reaches z = −1 is not a
+ * usable measurement, and its failed draws say so (refused above 1 %). Nor a parallax: a measured
+ * parallax may be zero or negative, and one too uncertain to invert is refused before drawing.
+ */
+export const LOWER_BOUND: Record<string, number> = {
+  lookback_gyr: 0,
+  distance_mpc: 0,
+  distance_1: 0,
+  distance_2: 0,
+  extinction: 0,
+  [H0_KEY]: 0,
+};
+
+/** The measurement with its physical bound, if its input has one. */
+export function bounded(name: string, m: Measurement): Measurement {
+  const lower = LOWER_BOUND[name];
+  return lower === undefined ? m : { ...m, lower };
+}
 
 // One slot buffer for every run (a fresh 104-byte typed array would live outside the JavaScript
 // heap and cost a garbage-collection finaliser per request). Runs never nest: draws do not calculate.
@@ -76,6 +97,7 @@ export function quantityInterval(
   present: Set<string>,
 ): MonteCarloOutcome {
   const names = Object.keys(all);
+  all = Object.fromEntries(names.map((k) => [k, bounded(k, all[k])]));
   const env = sampleEnv(view, band, names);
   const x = DRAW.fill(NaN);
   for (const k of names) x[slotOf(k)] = all[k].value;
@@ -95,8 +117,11 @@ export function quantityInterval(
   const prepare =
     spec.modulusInZ && !varyH0 && varied.includes('z')
       ? () => {
-          const { min, max } = deviateRange(varied.length, varied.indexOf('z'));
+          const range = deviateRange(varied.length, varied.indexOf('z'));
           const z = all.z;
+          const mass = boundMass(z);
+          const [min, max] =
+            mass > 0 ? [truncatedDeviate(range.min, mass), truncatedDeviate(range.max, mass)] : [range.min, range.max];
           env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
         }
       : undefined;

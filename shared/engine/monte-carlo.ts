@@ -6,7 +6,7 @@
  */
 import { quantileFromStatistics, quantilePair, type MonotoneMap } from './order-statistics.ts';
 import { LEVELS, recalledRun, rememberRun, type DrawSummary } from './recent-runs.ts';
-import { SAMPLES, seededDeviates, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
+import { boundMass, SAMPLES, seededDeviates, truncatedDeviate, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
 
 export type { MonotoneMap } from './order-statistics.ts';
 
@@ -74,6 +74,7 @@ function drawAll(
   centre: Float64Array,
   minus: Float64Array,
   plus: Float64Array,
+  mass: Float64Array,
   out: Float64Array,
   failed: () => void,
 ): void {
@@ -85,7 +86,8 @@ function drawAll(
   for (; run.draw < SAMPLES; run.draw++) {
     const base = run.draw * n;
     for (let j = 0; j < n; j++) {
-      const d = dev[base + j];
+      // An input with a physical bound draws from its distribution truncated there (mass > 0).
+      const d = mass[j] > 0 ? truncatedDeviate(dev[base + j], mass[j]) : dev[base + j];
       x[slots[j]] = centre[j] + d * (d < 0 ? minus[j] : plus[j]);
     }
     const r = f(x);
@@ -121,6 +123,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   const centre = Float64Array.from(p.varied, (v) => v.m.value);
   const minus = Float64Array.from(p.varied, (v) => v.m.minus);
   const plus = Float64Array.from(p.varied, (v) => v.m.plus);
+  const mass = Float64Array.from(p.varied, (v) => boundMass(v.m));
   const failures = new Map<string, number>();
   const failed = (): void => {
     const who = p.blame(p.x);
@@ -149,7 +152,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   const out = takeScratch();
   while (run.draw < SAMPLES) {
     try {
-      drawAll(run, p, slots, centre, minus, plus, out, failed);
+      drawAll(run, p, slots, centre, minus, plus, mass, out, failed);
     } catch {
       // The draw at run.draw threw: it counts as outside the domain, and sampling resumes after it.
       failed();
@@ -201,8 +204,9 @@ function sortedDeviates(): Float64Array {
 export function propagateOne(m: Measurement, g: MonotoneMap, everyDraw: () => MonteCarloOutcome): MonteCarloOutcome {
   const sorted = sortedDeviates();
   const n = SAMPLES;
+  const mass = boundMass(m);
   const drawAt = (rank: number): number => {
-    const d = sorted[rank];
+    const d = mass > 0 ? truncatedDeviate(sorted[rank], mass) : sorted[rank];
     return m.value + d * (d < 0 ? m.minus : m.plus);
   };
   const finiteAt = (rank: number): boolean => {

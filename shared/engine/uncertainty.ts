@@ -10,12 +10,51 @@
  * The runs themselves are in monte-carlo.ts.
  */
 
+import erfc from '@stdlib/math-base-special-erfc';
+import erfcinv from '@stdlib/math-base-special-erfcinv';
+
 /** An input value with its 68 % uncertainty (minus = plus = 0 when exact) and its source. */
 export interface Measurement {
   value: number;
   minus: number;
   plus: number;
   source: string;
+  /**
+   * A physical lower bound (extinction ≥ 0, a distance > 0): the draws come from the two-piece
+   * normal truncated there, i.e. conditioned on lying above it, instead of failing below it.
+   */
+  lower?: number;
+}
+
+/** Below this (in standard deviations) a bound changes no draw in double precision: Φ(−8.5) ≈ 10⁻¹⁷. */
+const NO_EFFECT = -8.5;
+
+/**
+ * Φ at the bound's deviate for a measurement with a lower bound, or 0 when the bound is too far
+ * below the value to change any draw (so unbounded inputs keep exactly their draws).
+ * @param m the measurement
+ * @returns Φ(a), a = the deviate at which the draw equals the bound
+ */
+export function boundMass(m: Measurement): number {
+  if (m.lower === undefined) return 0;
+  const below = m.lower < m.value;
+  const width = below ? m.minus : m.plus;
+  if (!(width > 0)) return 0;
+  const a = (m.lower - m.value) / width;
+  return a < NO_EFFECT ? 0 : 0.5 * erfc(-a / Math.SQRT2);
+}
+
+/**
+ * A standard-normal deviate mapped into the normal truncated below: the same quantile of the
+ * truncated distribution, u′ = Φ(a) + u (1 − Φ(a)) with u = Φ(d). Monotonic in d, so order
+ * statistics and the one-input shortcut still hold. The upper tail is mapped through 1 − u to
+ * keep its precision (erfc and erfcinv from stdlib, accurate to double precision).
+ * @param d the deviate
+ * @param mass Φ(a) from boundMass (0 < mass < 1)
+ */
+export function truncatedDeviate(d: number, mass: number): number {
+  if (d <= 0) return -Math.SQRT2 * erfcinv(2 * (mass + 0.5 * erfc(-d / Math.SQRT2) * (1 - mass)));
+  return Math.SQRT2 * erfcinv(2 * (0.5 * erfc(d / Math.SQRT2) * (1 - mass)));
 }
 
 /** Number of Monte Carlo samples; enough for percentiles to ~1 % of the interval width. */

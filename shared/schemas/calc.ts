@@ -153,7 +153,10 @@ export const CalcSuccessSchema = z.object({
   quantity: CalcQuantitySchema,
   value: z.number(),
   unit: z.enum(CALC_UNITS),
-  interval: z.object({ low: z.number(), high: z.number(), level: z.literal(0.68) }).optional(),
+  /** failed_draws: how many Monte Carlo draws fell outside the quantity's domain and were left out (absent when none). */
+  interval: z
+    .object({ low: z.number(), high: z.number(), level: z.literal(0.68), failed_draws: z.number().int().optional() })
+    .optional(),
   conversions: z.array(z.object({ value: z.number(), unit: z.string() })),
   warnings: z.array(z.string()),
   working: z.array(StepSchema),

@@ -23,6 +23,16 @@ export const SpectralIndexDefaultSchema = z.object({
 export const SpectralIndexDefaultsSchema = z.partialRecord(z.enum(SKY_OBJECT_KINDS), SpectralIndexDefaultSchema);
 export type SpectralIndexDefaults = z.infer<typeof SpectralIndexDefaultsSchema>;
 
+/** The organisation's range for H0 (km/s/Mpc) with where it comes from: the model's own uncertainty. */
+export const H0RangeSettingSchema = z
+  .object({
+    low: z.number().positive().max(200),
+    high: z.number().positive().max(200),
+    source: z.string().trim().min(10, 'Name the source of the H0 range (10 characters or more)').max(1000),
+  })
+  .refine((r) => r.low < r.high, { message: 'The H0 range’s low end must be below its high end', path: ['high'] });
+export type H0Range = z.infer<typeof H0RangeSettingSchema>;
+
 export const SettingsDtoSchema = z.object({
   cosmologyModel: CalcModelSchema,
   cosmologyLabel: z.string(),
@@ -30,6 +40,9 @@ export const SettingsDtoSchema = z.object({
   defaultLocale: z.enum(STATEMENT_LOCALES),
   eyeSafetyNotice: z.string(),
   spectralIndexDefaults: SpectralIndexDefaultsSchema,
+  /** The H0 range statements use; null means the default (shown in h0RangeInUse). */
+  h0Range: H0RangeSettingSchema.nullable(),
+  h0RangeInUse: H0RangeSettingSchema,
   version: z.number(),
   updatedAt: z.string(),
 });
@@ -46,6 +59,8 @@ export const SettingsUpdateSchema = z
       .max(2000)
       .optional(),
     spectralIndexDefaults: SpectralIndexDefaultsSchema.optional(),
+    /** null goes back to the default range. */
+    h0Range: H0RangeSettingSchema.nullable().optional(),
   })
   .refine((v) => Object.keys(v).length > 0, { message: 'Nothing to change' });
 export type SettingsUpdateInput = z.infer<typeof SettingsUpdateSchema>;

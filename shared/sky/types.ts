@@ -109,8 +109,10 @@ export interface MoonTonight extends SkyPlace {
   illuminatedFraction: number;
   /** Phase angle Sun–Moon–Earth, degrees (Meeus 48.2/48.3). */
   phaseAngleDeg: number;
-  /** Moon's ecliptic longitude minus the Sun's, degrees [0, 360): under 180 waxing. */
+  /** Elongation: the Moon's angle from the Sun on the sky (geocentric), degrees [0, 180]. */
   elongationDeg: number;
+  /** The Moon's ecliptic longitude minus the Sun's, degrees [0, 360): under 180 waxing; names the phase. */
+  longitudeFromSunDeg: number;
   waxing: boolean;
   distanceKm: number;
   times: RiseTransitSetTimes;
@@ -145,8 +147,10 @@ export interface Observation extends SkyEvent {
  * names a set before dawn. Version 3: a body up at noon and still up at sunset keeps tonight's stay.
  * Version 4: crossings found from the altitude itself; events carry a state ("occurs", "grazes",
  * "none"), a local ISO time and how close a grazing body comes.
+ * Version 5: the Moon's elongationDeg is its angle from the Sun (it was the longitude difference, now
+ * longitudeFromSunDeg).
  */
-export const SKY_VERSION = 4;
+export const SKY_VERSION = 5;
 
 /** Everything the sky-tonight panel and slide show. */
 export interface SkyTonight {

@@ -2,7 +2,7 @@ import type { ResolvedModel } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
 import { perLocale, type StatementLocale } from './locales.ts';
 import { formatApproximate } from './number-words.ts';
-import { choosePrecision } from './precision.ts';
+import { choosePrecision, type PrecisionChoice } from './precision.ts';
 import type { TemplateSuccess, UsedInput } from './types.ts';
 
 /** What a template hands over once its numbers are computed. */
@@ -21,6 +21,8 @@ export interface ComposeArgs {
   warnings?: string[];
   inputs: UsedInput[];
   model: ResolvedModel | null;
+  /** A precision the template chose itself (e.g. one that holds all evening); else the rule's, from the interval. */
+  precision?: PrecisionChoice;
 }
 
 /**
@@ -28,7 +30,7 @@ export interface ComposeArgs {
  * the wording step to the working so a reviewer sees why the public text says what it says.
  */
 export function compose(args: ComposeArgs): TemplateSuccess {
-  const precision = choosePrecision(args.value, args.interval);
+  const precision = args.precision ? { ...args.precision } : choosePrecision(args.value, args.interval);
   const unknown = args.inputs.filter((i) => i.sigma == null && (i.minus == null || i.plus == null));
   if (unknown.length > 0) {
     const names = unknown.map((i) => `${i.quantity}${i.band ? ` (${i.band})` : ''} from ${i.citation}`).join(', ');

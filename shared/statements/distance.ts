@@ -1,7 +1,7 @@
 import type { ResolvedModel } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
 import { derivedStep, mapInterval } from './compose.ts';
-import { asInput, requireDistance, run, used, type DistanceBasis } from './inputs.ts';
+import { asInput, requireDistance, run, runWithModel, used, type DistanceBasis } from './inputs.ts';
 import type { TemplateContext, UsedInput } from './types.ts';
 
 /** A distance today with everything a statement needs to show its working. */
@@ -30,7 +30,7 @@ export function distanceToday(ctx: TemplateContext): DistanceToday {
   const basis = requireDistance(ctx);
   const m = basis.measurement;
   if (basis.kind === 'z') {
-    const r = run({ quantity: 'proper_distance', inputs: { z: asInput(m) }, model: ctx.model });
+    const r = runWithModel(ctx, { quantity: 'proper_distance', inputs: { z: asInput(m) }, model: ctx.model });
     return {
       mpc: r.value,
       interval: r.interval ?? null,

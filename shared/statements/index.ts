@@ -26,8 +26,10 @@ export { SentenceNamesSchema, type SentenceName, type SentenceNames } from './na
  * once when it starts under a newer release (server/services/statements/rules-release.ts).
  * 2: band light in the sentence, names with article and number, ratio house style, template kinds,
  *    K-correction and extinction rules.
+ * 3: intervals include the adopted model's H0 range and a peculiar-velocity term; trailing zeros
+ *    kept; Hubble-law figures limited by the law's own error; planet light time holds for the evening.
  */
-export const STATEMENT_RULES_VERSION = 2;
+export const STATEMENT_RULES_VERSION = 3;
 
 /** Every template, in the order the picker lists them. */
 export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [

@@ -1,5 +1,7 @@
 import type { CalcRequest, CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
 import { calculate } from '../engine/calculate.ts';
+import { resolveModel } from '../engine/model-resolve.ts';
+import { budgetStep, h0RangeFor, withPeculiarVelocity } from './model-uncertainty.ts';
 import type { StatementMeasurement, TemplateContext, TemplateFailure, UsedInput } from './types.ts';
 
 /** Thrown inside a template's evaluation; turned into a TemplateFailure by `guard`. */
@@ -92,4 +94,28 @@ export function run(request: CalcRequest): CalcSuccess {
     });
   }
   return result;
+}
+
+/**
+ * Runs the engine for a statement that uses the organisation's cosmology, with the model's own
+ * uncertainty in the interval that sets the public figures: the H0 range from the settings (or the
+ * default) and, for a redshift, the peculiar-velocity term. The working gains a step showing each
+ * contribution (left out with `budget: false` when an earlier run of the same statement showed it).
+ */
+export function runWithModel(ctx: TemplateContext, request: CalcRequest, options: { budget?: boolean } = {}): CalcSuccess {
+  if (!request.model) return run(request);
+  const range = h0RangeFor(request.model, ctx.h0Range);
+  const z = request.inputs?.z;
+  const pec = z === undefined ? null : withPeculiarVelocity(z);
+  const ranged = run({
+    ...request,
+    inputs: pec ? { ...request.inputs, z: pec.input } : request.inputs,
+    H0_range: { low: range.low, high: range.high },
+  });
+  // The statement names the adopted model itself (the engine's one shared description of it); the
+  // H0 range it was drawn over is in the working's budget step.
+  const result = ranged.model ? { ...ranged, model: resolveModel(request.model).description } : ranged;
+  if (!pec || z === undefined || options.budget === false || !result.model) return result;
+  const step = budgetStep({ z, sigmaPec: pec.sigmaPec, range, H0: result.model.H0 });
+  return { ...result, working: [step, ...result.working] };
 }

@@ -20,6 +20,8 @@ const BIG_WORDS: Record<'en' | 'fr', Array<[number, string, string]>> = {
   ],
 };
 
+// Trailing zeros are kept (minimum = maximum significant digits): "2.20 billion" when the rule chose
+// three figures, so what the reader sees says as much precision as the working claims, no less.
 // Building an Intl.NumberFormat costs far more than formatting with one, and statements are
 // recomputed by the hundred thousand: keep one per locale and options (the output is the same).
 const formatters = new Map<string, Intl.NumberFormat>();
@@ -30,8 +32,13 @@ function formatter(locale: StatementLocale, significantFigures: number, compact:
     f = new Intl.NumberFormat(
       locale,
       compact
-        ? { notation: 'compact', compactDisplay: 'long', maximumSignificantDigits: significantFigures }
-        : { maximumSignificantDigits: significantFigures },
+        ? {
+            notation: 'compact',
+            compactDisplay: 'long',
+            minimumSignificantDigits: significantFigures,
+            maximumSignificantDigits: significantFigures,
+          }
+        : { minimumSignificantDigits: significantFigures, maximumSignificantDigits: significantFigures },
     );
     formatters.set(key, f);
   }
@@ -40,7 +47,8 @@ function formatter(locale: StatementLocale, significantFigures: number, compact:
 
 /**
  * A rounded number for the public: digits with the locale's grouping below a million, scale words
- * above ("about 3.4 trillion", "3,4 billions"). Never more digits than `significantFigures`.
+ * above ("about 3.4 trillion", "3,4 billions"). Exactly `significantFigures` digits, trailing zeros
+ * included ("8.60", "2.20 billion"), except that an integer's zeros before the decimal point stay.
  * @param value the value to show
  * @param significantFigures from choosePrecision
  * @param locale the reader's locale

@@ -25,7 +25,7 @@ import type { CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
 import { KIND_LABELS, type SkyObjectKind } from '../catalogue/kinds.ts';
 import { derivedStep } from './compose.ts';
-import { asInput, distanceInputs, find, missing, requireDistance, run, type DistanceBasis, used } from './inputs.ts';
+import { asInput, distanceInputs, find, missing, requireDistance, runWithModel, type DistanceBasis, used } from './inputs.ts';
 import type { StatementMeasurement, TemplateContext, UsedInput } from './types.ts';
 
 /** How far a spectral index plausibly differs from the K = 0 assumption (α = −1). */
@@ -112,7 +112,7 @@ export function photometryRun(
   }
   const alpha = basis.kind === 'z' ? find(ctx, 'spectral_index') : undefined;
   const request = (extra: { alpha?: MeasuredInput }) =>
-    run({
+    runWithModel(ctx, {
       quantity,
       inputs: {
         m: asInput(mag),

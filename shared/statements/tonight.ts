@@ -90,3 +90,22 @@ export const LARGEST_MEASURED_DIFFERENCE = 1.7e-4;
  * 0.80 %; our ephemeris sampled daily over 2020–2039, and checked in the statement tests).
  */
 export const NIGHT_DRIFT_BOUND = 0.01;
+
+/** Half the window the wording must hold for: the evening, ±6 hours around the observation time. */
+export const WORDING_WINDOW_HOURS = 6;
+
+/**
+ * Per planet, a bound on the relative change of its distance within ±6 hours of any instant: the
+ * largest change found with our ephemeris sampling 2020–2039 every 2.3 days (Mercury 0.800 %, Venus
+ * 0.417 %, Mars 0.285 %, Jupiter 0.0841 %, Saturn 0.0467 %, Uranus 0.0232 %, Neptune 0.0146 %), plus
+ * 15 % and rounded up. The statement tests check each bound on an independent sampling.
+ */
+export const WINDOW_DRIFT: Record<PlanetId, number> = {
+  mercury: 0.0092,
+  venus: 0.0048,
+  mars: 0.0033,
+  jupiter: 0.00097,
+  saturn: 0.00054,
+  uranus: 0.00027,
+  neptune: 0.00017,
+};

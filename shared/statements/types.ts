@@ -1,4 +1,5 @@
 import type { CalcModel, ResolvedModel } from '../schemas/calc.ts';
+import type { H0Range } from '../schemas/settings.ts';
 import type { Step } from '../engine/working.ts';
 import type { SkyObjectKind } from '../catalogue/kinds.ts';
 import type { LocalisedText } from './locales.ts';
@@ -72,6 +73,8 @@ export interface TemplateContext {
   };
   measurements: StatementMeasurement[];
   model: CalcModel;
+  /** The organisation's H0 range with its source (null or absent: the default range). */
+  h0Range?: H0Range | null;
   /** The organisation's preferred band for magnitudes (e.g. V). */
   band: string;
   /** For statements tied to a venue: the venue and its night (absent or null otherwise). */

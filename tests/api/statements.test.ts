@@ -204,6 +204,29 @@ describe('changing the adopted cosmology', () => {
       .send({ model: { preset: 'planck18' }, expectedVersion: switched.body.data.version });
   });
 
+  it('the organisation’s H0 range is a setting with its source; changing it recomputes the statements', async () => {
+    const { agent: admin, user } = await signedInAgent('admin');
+    const { object } = await quasar(user);
+    const created = await admin.post('/api/statements').send({ objectId: object.id, templateId: 'light-travel' });
+    const before = (await admin.get('/api/settings')).body.data;
+    // Default: Planck 2018 VI (67.4) to SH0ES 2022 (73.04), stored as null.
+    expect(before.h0Range).toBeNull();
+    expect(before.h0RangeInUse).toMatchObject({ low: 67.4, high: 73.04 });
+    const bad = await admin
+      .patch('/api/settings')
+      .send({ h0Range: { low: 74, high: 70, source: 'Corrie Vale demo choice (demo)' } });
+    expect(bad.status).toBe(400);
+    const narrow = { low: 67.2, high: 68.2, source: 'Corrie Vale demo choice: CMB only (demo)' };
+    const changed = await admin.patch('/api/settings').send({ h0Range: narrow });
+    expect(changed.status).toBe(200);
+    expect(changed.body.data).toMatchObject({ h0Range: narrow, h0RangeInUse: narrow, version: before.version + 1 });
+    const after = await Statement.findByPk(created.body.data.id);
+    // Recomputed under the new settings version.
+    expect(after!.settingsVersion).toBe(before.version + 1);
+    // Back to the default for the other tests.
+    await admin.patch('/api/settings').send({ h0Range: null });
+  });
+
   it('a recompute that started before a model change writes nothing', async () => {
     const { agent: admin, user } = await signedInAgent('admin');
     const { object } = await quasar(user);

@@ -51,9 +51,9 @@ export async function changeCosmology(model: CalcModel, expectedVersion: number,
 }
 
 /**
- * Changes the band, locale, eye-safety notice or default spectral indices. A band change moves
- * magnitudes and a default spectral index can stand in for a missing measurement, so either
- * recomputes every statement.
+ * Changes the band, locale, eye-safety notice, default spectral indices or H0 range. A band change
+ * moves magnitudes, a default spectral index can stand in for a missing measurement, and an H0 range
+ * moves every cosmological interval (hence the figures shown): each recomputes every statement.
  */
 export async function updateSettings(input: SettingsUpdateInput, actor: User): Promise<OrganisationSettings> {
   const settings = await getSequelize().transaction(async (transaction) => {
@@ -61,7 +61,8 @@ export async function updateSettings(input: SettingsUpdateInput, actor: User): P
     const defaultsChanged =
       (input.defaultBand !== undefined && input.defaultBand !== row.defaultBand) ||
       (input.spectralIndexDefaults !== undefined &&
-        JSON.stringify(input.spectralIndexDefaults) !== JSON.stringify(row.spectralIndexDefaults ?? {}));
+        JSON.stringify(input.spectralIndexDefaults) !== JSON.stringify(row.spectralIndexDefaults ?? {})) ||
+      (input.h0Range !== undefined && JSON.stringify(input.h0Range) !== JSON.stringify(row.h0Range ?? null));
     row.set({ ...input, updatedById: actor.id, ...(defaultsChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
     await recordAudit(

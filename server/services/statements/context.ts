@@ -9,6 +9,7 @@ import {
   type TemplateContext,
 } from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
+import type { H0Range } from '@shared/schemas/settings.ts';
 import { findQuantity } from '@shared/catalogue/quantities.ts';
 import { SkyInputError } from '@shared/sky/errors.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
@@ -21,6 +22,8 @@ import { getSkySnapshot } from '../sky/index.ts';
 export interface SettingsSnapshot {
   model: CalcModel;
   band: string;
+  /** The organisation's H0 range; null or absent: the default. */
+  h0Range?: H0Range | null;
   version: number;
   /** Stated defaults for missing measurements (absent: none). */
   assumptions?: StatementAssumptions;
@@ -57,6 +60,7 @@ function contextFor(object: ObjectRef, measurements: StatementMeasurement[], set
     model: settings.model,
     band: settings.band,
     assumptions: settings.assumptions ?? null,
+    h0Range: settings.h0Range ?? null,
   };
 }
 

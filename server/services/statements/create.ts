@@ -47,6 +47,7 @@ export async function findOrCreateStatement(
   const base = await buildTemplateContext(object, {
     model: settings.cosmologyModel,
     band: settings.defaultBand,
+    h0Range: settings.h0Range ?? null,
     version: settings.version,
     assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
   });

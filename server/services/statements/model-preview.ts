@@ -34,6 +34,7 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
   const proposed = {
     model,
     band: settings.defaultBand,
+    h0Range: settings.h0Range ?? null,
     version: settings.version,
     assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
   };

@@ -34,6 +34,7 @@ export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
   return {
     model: row.cosmologyModel,
     band: row.defaultBand,
+    h0Range: row.h0Range ?? null,
     version: row.version,
     assumptions: { spectralIndex: row.spectralIndexDefaults ?? {} },
   };

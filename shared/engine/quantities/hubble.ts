@@ -1,19 +1,15 @@
 /**
- * Quantities under the simple Hubble law d = cz/H0, each recording its step
- * and a warning when z > 0.1.
+ * Quantities under the simple Hubble law d = cz/H0, each recording its step. The comparison with
+ * a standard model, the warning and the widened interval are added by calculate.ts.
  */
 import { SPEED_OF_LIGHT } from '../constants.ts';
 import { CalcError } from '../errors.ts';
-import { HUBBLE_LAW_MAX_Z, HUBBLE_LAW_WARNING } from '../hubble-law.ts';
 import { hubbleTimeGyr } from '../units.ts';
 import { fromConstant, record } from '../working.ts';
 import { type Ctx, currentH0, h0Value, inputValue } from './context.ts';
 
-function warnIfHigh(ctx: Ctx, z: number): string | undefined {
-  if (Math.abs(z) <= HUBBLE_LAW_MAX_Z) return undefined;
-  ctx.warnings?.add(HUBBLE_LAW_WARNING);
-  return `Warning: ${HUBBLE_LAW_WARNING}`;
-}
+// The law's range is not decided here: the next step of the working compares the result with a standard model.
+const LAW_NOTE = 'A classroom model for small redshifts; the step after it compares it with a standard cosmology model.';
 
 function checkZ(z: number): void {
   if (!(z > -1)) throw new CalcError('out_of_range', `z must be greater than −1 (got ${z})`);
@@ -28,14 +24,13 @@ function checkZ(z: number): void {
  */
 export function hubbleLawDistanceSteps(ctx: Ctx, z: number, measure: string): number {
   checkZ(z);
-  const note = warnIfHigh(ctx, z);
   return record(ctx.steps, (SPEED_OF_LIGHT.value * z) / currentH0(ctx), () => ({
     title: `Hubble law: distance proportional to redshift (used here for the ${measure})`,
     formula: 'd = c z / H0',
     inputs: [inputValue(ctx, 'z', z), h0Value(ctx)],
     constants: [fromConstant(SPEED_OF_LIGHT)],
     result: { symbol: 'd', name: `${measure} (Hubble law)`, unit: 'Mpc' },
-    note: note ?? 'Under the simple Hubble law every distance measure equals cz/H0; this holds for small redshifts (z < 0.1).',
+    note: `Under the simple Hubble law every distance measure equals cz/H0. ${LAW_NOTE}`,
   }));
 }
 
@@ -47,14 +42,13 @@ export function hubbleLawDistanceSteps(ctx: Ctx, z: number, measure: string): nu
  */
 export function hubbleLawTimeSteps(ctx: Ctx, z: number): number {
   checkZ(z);
-  const note = warnIfHigh(ctx, z);
   return record(ctx.steps, z * hubbleTimeGyr(currentH0(ctx)), () => ({
     title: 'Hubble law: light-travel time is the distance divided by the speed of light',
     formula: 't = d / c = z / H0',
     inputs: [inputValue(ctx, 'z', z), h0Value(ctx)],
     constants: [],
     result: { symbol: 't', name: 'light-travel time (Hubble law)', unit: 'Gyr' },
-    note: note ?? '1/H0 converted to Gyr with the IAU parsec and the Julian year.',
+    note: `1/H0 converted to Gyr with the IAU parsec and the Julian year. ${LAW_NOTE}`,
   }));
 }
 
@@ -69,13 +63,12 @@ export function hubbleLawRedshiftSteps(ctx: Ctx, key: 'distance_mpc' | 'lookback
   if (!(x > 0)) throw new CalcError('out_of_range', `${key} must be greater than 0 (got ${x})`);
   const H0 = currentH0(ctx);
   const z = key === 'distance_mpc' ? (H0 * x) / SPEED_OF_LIGHT.value : x / hubbleTimeGyr(H0);
-  const note = warnIfHigh(ctx, z);
   return record(ctx.steps, z, () => ({
     title: 'Hubble law solved for the redshift',
     formula: key === 'distance_mpc' ? 'z = H0 d / c' : 'z = H0 t',
     inputs: [inputValue(ctx, key, x), h0Value(ctx)],
     constants: key === 'distance_mpc' ? [fromConstant(SPEED_OF_LIGHT)] : [],
     result: { symbol: 'z', name: 'redshift (Hubble law)', unit: '' },
-    note,
+    note: LAW_NOTE,
   }));
 }

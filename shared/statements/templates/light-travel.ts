@@ -1,7 +1,7 @@
 import { LY_PER_PC } from '../../engine/units.ts';
 import { compose, cosmologyFootnote, derivedStep, mapInterval } from '../compose.ts';
 import { distanceToday } from '../distance.ts';
-import { asInput, distanceBasis, run, used } from '../inputs.ts';
+import { asInput, distanceBasis, runWithModel, used } from '../inputs.ts';
 import { formatApproximate } from '../number-words.ts';
 import { frenchOf, nameIn } from '../names.ts';
 import { choosePrecision } from '../precision.ts';
@@ -53,8 +53,11 @@ export const lightTravel: StatementTemplate = {
       });
     }
     const z = { z: asInput(basis.measurement) };
-    const lookback = run({ quantity: 'lookback_time', inputs: z, model: ctx.model });
-    const age = lookback.model?.kind === 'flrw' ? run({ quantity: 'age_at_z', inputs: z, model: ctx.model }) : undefined;
+    const lookback = runWithModel(ctx, { quantity: 'lookback_time', inputs: z, model: ctx.model });
+    const age =
+      lookback.model?.kind === 'flrw'
+        ? runWithModel(ctx, { quantity: 'age_at_z', inputs: z, model: ctx.model }, { budget: false })
+        : undefined;
     const years = lookback.value * 1e9;
     const ageYears = age ? age.value * 1e9 : 0;
     const agePrecision = age

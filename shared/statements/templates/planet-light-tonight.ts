@@ -5,13 +5,14 @@ import { compose, derivedStep } from '../compose.ts';
 import { perLocale, type StatementLocale } from '../locales.ts';
 import { nameIn } from '../names.ts';
 import { formatApproximate } from '../number-words.ts';
-import { choosePrecision, roundToSignificant } from '../precision.ts';
+import { choosePrecision, roundToSignificant, type PrecisionChoice } from '../precision.ts';
 import {
   DISTANCE_RELATIVE_UNCERTAINTY,
   LARGEST_MEASURED_DIFFERENCE,
-  NIGHT_DRIFT_BOUND,
   requirePlanet,
   requireVenueNight,
+  WINDOW_DRIFT,
+  WORDING_WINDOW_HOURS,
 } from '../tonight.ts';
 import type { NightBasis, StatementNight, StatementTemplate, StatementVenue } from '../types.ts';
 import { isFrench } from './words.ts';
@@ -40,11 +41,69 @@ const plural = (n: number, en: string, fr: string, locale: StatementLocale) => {
   return (isFrench(locale) ? n >= 2 : n !== 1) ? `${word}s` : word;
 };
 
+/** The number of minutes the words say, for a value and a figure count (hours-and-minutes wording rounds to the minute). */
+function wordedMinutes(minutes: number, significantFigures: number, inHours: boolean): number {
+  const shown = roundToSignificant(minutes, significantFigures);
+  return inHours ? Math.round(shown) : shown;
+}
+
+/** How a planet-light wording holds over the evening. */
+interface WindowPrecision extends PrecisionChoice {
+  /** True when the words are the same over the whole ±6 h window. */
+  holds: boolean;
+  /** Otherwise, minutes either side of the observation time within which they are certainly the same. */
+  holdsForMinutes: number | null;
+}
+
+/**
+ * Figures for a light time that must hold over the evening. Rounding is monotonic, so equal words at
+ * the window's nearest and farthest distance mean equal words at every instant between. The rule's
+ * figures are kept when they hold all evening, else one fewer when those do; when neither does (the
+ * light time sits on a rounding boundary), one fewer all the same, and the working states how long
+ * the words hold either side of the observation time: the time to the nearest rounding boundary at
+ * the planet's largest rate of change (so at least that long).
+ * @param minutes the light time at the observation time
+ * @param rule the precision rule's choice from the ephemeris uncertainty
+ * @param drift the planet's largest relative change within ±6 h
+ */
+function precisionForWindow(minutes: number, rule: PrecisionChoice, drift: number, inHours: boolean): WindowPrecision {
+  const low = minutes * (1 - drift);
+  const high = minutes * (1 + drift);
+  const holdsAt = (k: number) => wordedMinutes(low, k, inHours) === wordedMinutes(high, k, inHours);
+  const within = `Within ±${WORDING_WINDOW_HOURS} h of the observation time the light time stays within ${low.toPrecision(5)}–${high.toPrecision(5)} min`;
+  const rn = rule.significantFigures;
+  const named = (k: number) => `${k} significant figure${k > 1 ? 's' : ''}`;
+  const choice = (n: number, reason: string, holdsForMinutes: number | null = null): WindowPrecision => ({
+    significantFigures: n,
+    relativeUncertainty: rule.relativeUncertainty,
+    reason: `${rule.reason} ${reason}`,
+    holds: holdsForMinutes === null,
+    holdsForMinutes,
+  });
+  if (holdsAt(rn)) return choice(rn, `${within}, which rounds to the same words: the wording holds for the whole evening.`);
+  const n = Math.max(1, rn - 1);
+  if (holdsAt(n)) {
+    return choice(n, `${within}; ${rn} figures would change during the evening, ${named(n)} hold for the whole evening.`);
+  }
+  // The nearest rounding boundary of the n-figure words, and the time to reach it at the largest rate.
+  const place = 10 ** (Math.floor(Math.log10(minutes)) - n + 1);
+  const step = inHours ? Math.max(1, place) : place;
+  const shown = wordedMinutes(minutes, n, inHours);
+  const margin = Math.max(0, step / 2 - Math.abs(minutes - shown));
+  const ratePerMinute = (minutes * drift) / (WORDING_WINDOW_HOURS * 60);
+  const holdsFor = Math.floor(margin / ratePerMinute / 10) * 10;
+  return choice(
+    n,
+    `${within}, across a rounding boundary at ${rn} and at ${n} figures. Shown to ${named(n)}, which hold for at least ${holdsFor} minutes either side of the time in the footnote (the time to the nearest rounding boundary at the planet’s largest rate of change), and then move by one in the last figure.`,
+    holdsFor,
+  );
+}
+
 /** "43.2 minutes", "2 hours and 40 minutes", "4 heures 6 minutes", from minutes already rounded. */
 function durationWords(locale: StatementLocale, minutes: number, significantFigures: number, inHours: boolean): string {
   if (!inHours)
     return `${formatApproximate(minutes, significantFigures, locale).text} ${plural(minutes, 'minute', 'minute', locale)}`;
-  const shown = Math.round(roundToSignificant(minutes, significantFigures));
+  const shown = wordedMinutes(minutes, significantFigures, true);
   const h = Math.floor(shown / 60);
   const m = shown - h * 60;
   const hours = `${h} ${plural(h, 'hour', 'heure', locale)}`;
@@ -134,7 +193,7 @@ export const planetLightTonight: StatementTemplate = {
         },
       ],
       result: { symbol: 'σ_d', name: 'uncertainty of the distance', value: k * distanceAu, unit: 'au' },
-      note: `The ephemeris distance is far more precise than the wording needs. Largest difference measured against astropy, any planet, 1992–2040: ${LARGEST_MEASURED_DIFFERENCE} (relative), mostly the reference’s own error; full VSOP87 is good to about 1″ in position over these years (recalled from memory). Within ±6 hours of the observation time the distance moves by under ${NIGHT_DRIFT_BOUND * 100} % (our ephemeris), still below the 3 % at which the precision rule drops a figure, so the wording holds for the whole evening.`,
+      note: `The ephemeris distance is far more precise than the wording needs. Largest difference measured against astropy, any planet, 1992–2040: ${LARGEST_MEASURED_DIFFERENCE} (relative), mostly the reference’s own error; full VSOP87 is good to about 1″ in position over these years (recalled from memory). The distance also changes during the evening; the wording step chooses figures that hold over it.`,
     });
     const timeStep = derivedStep({
       title: 'Light-travel time',
@@ -154,8 +213,28 @@ export const planetLightTonight: StatementTemplate = {
         : 'The wording gives minutes.',
     });
     const interval = { low: minutes * (1 - k), high: minutes * (1 + k) };
-    // compose applies the same rule; the hours-and-minutes words need the figure count first.
-    const figures = choosePrecision(minutes, interval).significantFigures;
+    const drift = WINDOW_DRIFT[planet];
+    const window = { low: minutes * (1 - drift), high: minutes * (1 + drift) };
+    const precision = precisionForWindow(minutes, choosePrecision(minutes, interval), drift, inHours);
+    const figures = precision.significantFigures;
+    const windowStep = derivedStep({
+      title: `How far the light time moves during the evening (±${WORDING_WINDOW_HOURS} h)`,
+      formula: 't_low, t_high = t × (1 ∓ δ)',
+      inputs: [
+        { symbol: 't', name: 'light-travel time', value: minutes, unit: 'min', source: 'previous step' },
+        {
+          symbol: 'δ',
+          name: `largest relative change of ${PLANET_NAMES[planet]}’s distance within ±${WORDING_WINDOW_HOURS} h`,
+          value: drift,
+          unit: '',
+          source: 'our ephemeris sampled 2020–2039, plus 15 % (shared/statements/tonight.ts)',
+        },
+      ],
+      result: { symbol: 't_high − t_low', name: 'range over the evening', value: window.high - window.low, unit: 'min' },
+      note: precision.holds
+        ? `The wording keeps ${figures} significant figure${figures > 1 ? 's' : ''}: the same words at both ends of the evening.`
+        : `On this night the light time sits on a rounding boundary: ${figures} significant figure${figures > 1 ? 's' : ''}, the same words for at least ${precision.holdsForMinutes} minutes either side of the time in the footnote, then one more or less in the last figure.`,
+    });
     const english = nameIn(ctx.object, 'en-GB');
     const basis: NightBasis = {
       venueId: venue.id,
@@ -176,9 +255,10 @@ export const planetLightTonight: StatementTemplate = {
       interval,
       sentence: (locale) => sentence(locale, english, planet, durationWords(locale, minutes, figures, inHours)),
       footnote: (locale) => nightFootnote(locale, venue, night),
-      working: [distanceStep, sigmaStep, timeStep, minutesStep],
+      working: [distanceStep, sigmaStep, timeStep, minutesStep, windowStep],
       inputs: [],
       model: null,
+      precision,
     });
     return { ...composed, night: basis };
   },

@@ -103,6 +103,8 @@ describe('Meeus worked examples (recalled from memory)', () => {
     const moon = e.moon(2_448_724.5);
     const phase = moonPhase(moon, e.sun(2_448_724.5));
     expect(phase.phaseAngleDeg).toBeCloseTo(69.0756, 2);
+    // Meeus Example 48.a, geocentric elongation ψ = 110.7929° (recalled from memory): an angle on the sky.
+    expect(phase.elongationDeg).toBeCloseTo(110.7929, 2);
     expect(phase.illuminatedFraction).toBeCloseTo(0.6786, 3);
     expect(phase.waxing).toBe(true);
     expect(moon.ra * D).toBeCloseTo(134.6885, 3);

@@ -1,5 +1,6 @@
 /** The contract's behaviour: working, intervals, warnings, units and the Hubble law. */
 import { describe, expect, it } from 'vitest';
+import { HUBBLE_LAW_TOLERANCE, hubbleLawMaxZ, largestLawDifference } from '../../../shared/engine/hubble-law-limit.ts';
 import { calculate } from '../../../shared/engine/calculate.ts';
 import { createModel } from '../../../shared/engine/cosmology/model.ts';
 import { PLANCK18 } from '../../../shared/engine/cosmology/presets.ts';
@@ -77,16 +78,46 @@ describe('calculate', () => {
     expect(r.model?.H0_range).toEqual({ low: 68, high: 72 });
   });
 
-  it('the Hubble law gives cz/H0 for every distance measure and warns above z = 0.1', () => {
+  it('the Hubble law gives cz/H0 for every distance measure, compared with a standard model', () => {
     const model = { law: 'hubble', H0: 70 };
-    const low = ok({ quantity: 'angular_diameter_distance', inputs: { z: 0.05 }, model });
-    expect(low.value).toBeCloseTo((299792.458 * 0.05) / 70, 10);
+    const low = ok({ quantity: 'luminosity_distance', inputs: { z: 0.02 }, model });
+    expect(low.value).toBeCloseTo((299792.458 * 0.02) / 70, 10);
     expect(low.warnings).toEqual([]);
     const high = ok({ quantity: 'luminosity_distance', inputs: { z: 0.5 }, model });
     expect(high.value).toBeCloseTo((299792.458 * 0.5) / 70, 10);
     expect(high.warnings[0]).toContain('only holds for small redshifts');
-    expect(high.working[0].note).toContain('Warning');
+    expect(high.working.at(-1)!.title).toBe('The Hubble law against a standard cosmology model');
     expect(high.model?.kind).toBe('hubble_law');
+  });
+
+  it('the law’s own error: 3.6 % at z = 0.05 and 6.9 % at z = 0.1 in luminosity distance, which widens the interval', () => {
+    // Check values: D_L under flat ΛCDM with Planck 2018 densities (this engine, held to astropy's
+    // Planck18 within 1e-5 in tests/reference/engine/astropy.test.ts). Second-order cosmography,
+    // D_L ≈ (cz/H0)(1 + (1 − q0) z / 2) with q0 = Ωm/2 − ΩΛ ≈ −0.535 (recalled from memory), gives
+    // 3.7 % and 7.1 %: the same to within the third-order term.
+    const model = { law: 'hubble', H0: 70 };
+    const at = (z: number) => ok({ quantity: 'luminosity_distance', inputs: { z }, model });
+    const d05 = at(0.05);
+    const delta05 = d05.working.at(-1)!.result.value;
+    expect(delta05).toBeCloseTo(0.0363, 3);
+    expect(at(0.1).working.at(-1)!.result.value).toBeCloseTo(0.0688, 3);
+    expect(d05.warnings[0]).toMatch(
+      /differs from a standard cosmology model \(Planck 2018 densities\) by 3\.6 %, more than our 3 % tolerance/,
+    );
+    // Exact input, yet an interval: it reaches the standard model's value, so the precision rule sees the law's error.
+    expect(d05.interval!.low).toBe(d05.value);
+    expect(d05.interval!.high / d05.value - 1).toBeCloseTo(delta05 / (1 - delta05), 6);
+    // Below the derived threshold no warning: D_L at z = 0.03 is 2.2 % off.
+    expect(at(0.03).warnings).toEqual([]);
+  });
+
+  it('derives the Hubble-law threshold from the tolerance: every distance and time within 3 % below z ≈ 0.024', () => {
+    const z = hubbleLawMaxZ();
+    expect(z).toBeGreaterThan(0.02);
+    expect(z).toBeLessThan(0.03);
+    expect(largestLawDifference(z * 0.99).difference).toBeLessThan(HUBBLE_LAW_TOLERANCE);
+    expect(largestLawDifference(z * 1.01)).toMatchObject({ quantity: 'angular_diameter_distance' });
+    expect(largestLawDifference(z * 1.01).difference).toBeGreaterThan(HUBBLE_LAW_TOLERANCE);
   });
 
   it('converts distances and times for public text', () => {

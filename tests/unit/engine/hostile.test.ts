@@ -109,6 +109,35 @@ describe('hostile requests', () => {
     expect(errorOf({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: -5 } }).message).toContain('distance_mpc');
   });
 
+  it('a luminosity distance reached at two redshifts in a closed model is refused, naming both', () => {
+    // Ωm = 1, ΩΛ = 2.5 (Ωk = −2.5): D_L rises to about 4500 Mpc near z = 0.7 and falls again before the antipode.
+    const model = { H0: 70, Om0: 1, Ode0: 2.5 };
+    const e = errorOf({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: 3000 }, model });
+    expect(e.code).toBe('several_solutions');
+    const zs = [...e.message.matchAll(/(\d+\.\d{6})/g)].map((m) => Number(m[1]));
+    expect(zs).toHaveLength(2);
+    // Each named redshift gives the distance back through the forward calculation.
+    for (const z of zs) {
+      const back = calculate({ quantity: 'luminosity_distance', inputs: { z }, model });
+      expect('value' in back && back.value).toBeCloseTo(3000, 0);
+    }
+    // A flat model has one solution, found as before.
+    expect('value' in calculate({ quantity: 'z_from_luminosity_distance', inputs: { distance_mpc: 3000 } })).toBe(true);
+  });
+
+  it('a lookback time within a hair of the age is refused as ill-conditioned; a sensitive one warns', () => {
+    // Planck 2018 (astropy's Planck18): age 13.787 Gyr. 13.7868 Gyr sits 0.1 Myr short of it.
+    const e = errorOf({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 13.7868 } });
+    expect(e.code).toBe('ill_conditioned');
+    expect(e.message).toMatch(/condition number .*0\.1 % change of lookback_gyr would move z by over 100 %/);
+    const warned = calculate({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 13 } });
+    if (!('value' in warned)) throw new Error('expected a value');
+    // dz/dt = (1+z)E(z)/t_H: at z ≈ 6.8 a 1 % change of the time moves z by about 13 %.
+    expect(warned.warnings.join(' ')).toMatch(/a 1 % change of lookback_gyr moves z by about 1[23] %/);
+    const calm = calculate({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: 5 } });
+    expect('value' in calm && calm.warnings).toEqual([]);
+  });
+
   it('overflowing results become errors, not Infinity', () => {
     expect(errorOf({ quantity: 'flux_ratio', inputs: { delta_mag: -1e6 } }).code).toBe('non_finite_result');
     expect(errorOf({ quantity: 'luminosity_distance', inputs: { z: 1 }, model: { H0: 1e-320, Om0: 0.3 } }).code).toBe(
@@ -117,9 +146,58 @@ describe('hostile requests', () => {
   });
 
   it('an uncertainty reaching outside the domain names the input', () => {
-    const e = errorOf({ quantity: 'parallax_distance', inputs: { parallax_mas: { value: 1, sigma: 2 } } });
+    // Planck 2018 age 13.787 Gyr: 13 ± 1.5 Gyr puts about 30 % of the draws beyond it.
+    const e = errorOf({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: { value: 13, sigma: 1.5 } } });
     expect(e.code).toBe('interval_outside_domain');
-    expect(e.message).toContain('parallax_mas');
+    expect(e.message).toContain('lookback_gyr');
+  });
+
+  it('a parallax with a fractional error above 0.2 is refused as a distance, with the reason and its source', () => {
+    // Rule: Bailer-Jones 2015, PASP 127, 994 (1/ϖ is a poor distance estimator beyond f ≈ 0.2).
+    const e = errorOf({ quantity: 'parallax_distance', inputs: { parallax_mas: { value: 1.0, sigma: 0.4 } } });
+    expect(e.code).toBe('poor_parallax');
+    expect(e.message).toMatch(/fractional error of 0\.40, above 0\.2.*Bailer-Jones 2015, PASP 127, 994/);
+    expect(
+      errorOf({ quantity: 'absolute_magnitude', inputs: { m: 5, parallax_mas: { value: 2, minus: 0.1, plus: 0.5 } } }).code,
+    ).toBe('poor_parallax');
+    // f = 0.2 exactly is accepted (the rule refuses above it); a parallax without an uncertainty cannot be judged.
+    expect('value' in calculate({ quantity: 'parallax_distance', inputs: { parallax_mas: { value: 1, sigma: 0.2 } } })).toBe(
+      true,
+    );
+    expect('value' in calculate({ quantity: 'parallax_distance', inputs: { parallax_mas: 1 } })).toBe(true);
+  });
+
+  it('extinction near zero is drawn truncated at zero, not failed', () => {
+    const r = calculate({
+      quantity: 'absolute_magnitude',
+      inputs: { m: 10, parallax_mas: { value: 5, sigma: 0.5 }, extinction: { value: 0.05, sigma: 0.05 } },
+    });
+    if (!('value' in r)) throw new Error(r.error.message);
+    expect(r.interval?.failed_draws).toBeUndefined();
+    expect(r.working.at(-1)!.note).toMatch(/physical bound extinction ≥ 0: the two-piece normal is truncated there/);
+    // Extinction 0 ± 0.05 draws a half-normal: A ≥ 0 in every draw, so M = m − μ − A never exceeds m − μ.
+    const half = calculate({
+      quantity: 'absolute_magnitude',
+      inputs: { m: 10, distance_mpc: 1e-5, extinction: { value: 0, sigma: 0.05 } },
+    });
+    if (!('value' in half)) throw new Error(half.error.message);
+    expect(half.interval!.high).toBeLessThanOrEqual(half.value + 1e-12);
+    // Half-normal 16th and 84th percentiles: σ × Φ⁻¹(0.58) = 0.0101 and σ × Φ⁻¹(0.92) = 0.0703 (standard normal table).
+    expect(half.value - half.interval!.low).toBeCloseTo(0.0703, 2);
+    expect(half.value - half.interval!.high).toBeCloseTo(0.0101, 2);
+  });
+
+  it('failed draws below 1 % are reported in the result, a warning and the working, never dropped silently', () => {
+    // 13.0 ± 0.3 Gyr: draws beyond the age (13.787 Gyr, 2.6σ) have no redshift.
+    const r = calculate({ quantity: 'z_from_lookback_time', inputs: { lookback_gyr: { value: 13, sigma: 0.3 } } });
+    if (!('value' in r)) throw new Error(r.error.message);
+    const failed = r.interval!.failed_draws!;
+    expect(failed).toBeGreaterThan(0);
+    expect(failed).toBeLessThanOrEqual(40);
+    expect(r.warnings.join(' ')).toContain(`${failed} of 4000 uncertainty draws fell where z_from_lookback_time is not defined`);
+    expect(r.working.at(-1)!.note).toContain(
+      `${failed} of 4000 draws fell where z_from_lookback_time is not defined (${failed} from lookback_gyr)`,
+    );
   });
 
   it('malformed JSON lines give an error result', () => {

@@ -1,7 +1,8 @@
 /** Time zones through Intl, compass words, phase names and the shape of an ordinary night. */
 import { describe, expect, it } from 'vitest';
 import { compassPoint, formatDeclination, formatRightAscension } from '../../../shared/sky/angles.ts';
-import { phaseName } from '../../../shared/sky/moon-phase.ts';
+import { Ephemeris } from '../../../shared/sky/ephemeris.ts';
+import { moonPhase, phaseName } from '../../../shared/sky/moon-phase.ts';
 import { canonicalTimeZone, localDateOf, localTimeOf, localToMs, nightDateAt } from '../../../shared/sky/time-zone.ts';
 import { computeSkyTonight } from '../../../shared/sky/tonight.ts';
 
@@ -101,5 +102,23 @@ describe('an ordinary night at the demo venue', () => {
     expect(m.phaseName).toMatch(/moon|crescent|gibbous|quarter/i);
     expect(m.distanceKm).toBeGreaterThan(356_000);
     expect(m.distanceKm).toBeLessThan(407_000);
+  });
+
+  it('gives the Moon’s elongation as its angle from the Sun, not the longitude difference', () => {
+    const e = new Ephemeris();
+    // 2026-12-03 00h TT onwards, a lunar month day by day.
+    for (let day = 0; day < 30; day++) {
+      const jde = 2_461_377.5 + day;
+      const p = moonPhase(e.moon(jde), e.sun(jde));
+      expect(p.elongationDeg).toBeGreaterThanOrEqual(0);
+      expect(p.elongationDeg).toBeLessThanOrEqual(180);
+      // The Moon is within 5.3° of the ecliptic (inclination 5.145°, recalled from memory), so the
+      // angle from the Sun differs from the folded longitude difference by less than that.
+      const folded = Math.min(p.longitudeFromSunDeg, 360 - p.longitudeFromSunDeg);
+      expect(Math.abs(p.elongationDeg - folded)).toBeLessThan(5.3);
+      expect(p.waxing).toBe(p.longitudeFromSunDeg < 180);
+    }
+    // A waning crescent 299.9° east of the Sun in longitude is about 60° from it, never 299.9°.
+    expect(sky.moon.elongationDeg).toBeLessThanOrEqual(180);
   });
 });

@@ -64,6 +64,18 @@ describe('numbers in words', () => {
     }
   });
 
+  // Issue 14 point 5: the working claims 3 figures, so the page shows 3, zeros included.
+  it.each([
+    [2.2e9, 3, 'en-GB', '2.20 billion'],
+    [8.6, 3, 'en-GB', '8.60'],
+    [8.6, 3, 'fr-FR', '8,60'],
+    [2.2e9, 3, 'fr-FR', '2,20 milliards'],
+    [2.5e15, 3, 'en-GB', '2.50 quadrillion'],
+    [0.5, 2, 'en-GB', '0.50'],
+  ] as const)('keeps trailing zeros: %d to %d figures in %s reads “%s”', (value, n, locale, text) => {
+    expect(formatApproximate(value, n, locale).text).toBe(text);
+  });
+
   it('puts “de” after a French scale noun only', () => {
     expect(frenchCount('3,4 milliards', 'kilomètres')).toBe('3,4 milliards de kilomètres');
     expect(frenchCount('2,2 milliards', 'années-lumière')).toBe('2,2 milliards d’années-lumière');

@@ -15,7 +15,7 @@ const CHOICES: ReadonlyArray<{ value: ModelChoice; title: string; line: string }
   {
     value: 'hubble',
     title: 'Simple Hubble law',
-    line: 'd = cz/H₀ · a classroom model that holds only for small redshifts (z < 0.1)',
+    line: 'd = cz/H₀ · a classroom model that holds only for small redshifts (within 3 % below z ≈ 0.024)',
   },
 ];
 
