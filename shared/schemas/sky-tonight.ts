@@ -79,6 +79,7 @@ export const SkyTonightSchema = z.object({
     illuminatedFraction: z.number(),
     phaseAngleDeg: z.number(),
     elongationDeg: z.number(),
+    longitudeFromSunDeg: z.number(),
     waxing: z.boolean(),
     distanceKm: z.number(),
     times: TimesSchema,
