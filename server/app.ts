@@ -7,6 +7,7 @@ import { getSequelize } from './db.ts';
 import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
 import { errorHandler } from './middlewares/error-handler.ts';
+import { fixedHeaders } from './middlewares/fixed-headers.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
@@ -39,10 +40,12 @@ export function createApp(options: AppOptions = {}) {
   app.disable('x-powered-by');
   // One proxy hop (a load balancer) is trusted for the client address and protocol.
   app.set('trust proxy', 'loopback, uniquelocal');
-  app.use(securityHeaders(https));
+  const security = securityHeaders(https);
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
-  // user loading, none of which it needs (its own errors still reach the error handler and the log).
-  app.use('/api/kiosk/feed', kioskFeedRouter);
+  // user loading, none of which it needs (its own errors still reach the error handler and the log),
+  // with the security headers recorded once rather than rebuilt per request.
+  app.use('/api/kiosk/feed', fixedHeaders(security), kioskFeedRouter);
+  app.use(security);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const sessions = sessionMiddleware(databaseUrl, https);
