@@ -12,7 +12,7 @@ import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
-import { kioskFeedRouter } from './routes/kiosk-feed.ts';
+import { kioskFeed } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
 import { sessionMiddleware } from './session.ts';
@@ -44,7 +44,7 @@ export function createApp(options: AppOptions = {}) {
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
   // user loading, none of which it needs (its own errors still reach the error handler and the log),
   // with the security headers recorded once rather than rebuilt per request.
-  app.use('/api/kiosk/feed', fixedHeaders(security), kioskFeedRouter);
+  app.get('/api/kiosk/feed', fixedHeaders(security), ...kioskFeed);
   app.use(security);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 

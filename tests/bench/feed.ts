@@ -9,7 +9,8 @@
  * (If-None-Match), feed and peer taking turns for BENCH_FEED_ROUNDS rounds (default 2) so a loaded
  * machine weighs on both alike; each server reports its event-loop delay and GC pauses per run.
  * Request logging is off in both servers (LOG_LEVEL=warn), as a production deployment would sample
- * it. Prints the kiosk entry's gzipped JavaScript too (BENCH_FEED_BUNDLE=0 skips the build).
+ * it. Prints the kiosk entry's gzipped JavaScript too (BENCH_FEED_BUNDLE=0 skips the build);
+ * BENCH_FEED_PROFILE=1 writes a CPU profile of the app server.
  * Targets (issue 19, same run): 304 at least express.static's rate with a p99 no worse than its
  * own; full 200 answers ≥ 1.0× express.static.
  */
@@ -143,7 +144,10 @@ interface Server {
   ask: (message: 'reset' | 'report') => Promise<unknown>;
 }
 function startServer(args: string[]): Promise<Server> {
-  const child = spawn(process.execPath, ['--import', 'tsx', 'tests/bench/feed-server.ts', ...args], {
+  // BENCH_FEED_PROFILE=1: a CPU profile of the app server in .data/bench-feed/profile, for finding where its time goes.
+  const profile =
+    process.env.BENCH_FEED_PROFILE === '1' && args[0] === 'app' ? ['--cpu-prof', `--cpu-prof-dir=${work}/profile`] : [];
+  const child = spawn(process.execPath, [...profile, '--import', 'tsx', 'tests/bench/feed-server.ts', ...args], {
     env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
     stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
   });

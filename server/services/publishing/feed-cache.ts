@@ -97,22 +97,31 @@ async function refresh(
 export async function getKioskFeed(target: FeedTarget): Promise<CachedFeed> {
   const key = keyOf(target);
   const entry = entries.get(key);
+  const expired = !entry || (entry.validUntil !== null && Date.now() >= entry.validUntil);
+  return freshKioskFeed(target) ?? share(key, target, entry, !expired);
+}
+
+/**
+ * The kiosk feed from memory, without waiting, when it is still within its check time (else
+ * undefined: ask getKioskFeed). Past half that time it starts the next check in the background, so
+ * a channel polled steadily is checked before its time runs out and no request waits for the
+ * database.
+ * @param target the channel and venue
+ */
+export function freshKioskFeed(target: FeedTarget): CachedFeed | undefined {
+  const key = keyOf(target);
+  const entry = entries.get(key);
+  if (!entry) return undefined;
   const now = Date.now();
-  const expired = !entry || (entry.validUntil !== null && now >= entry.validUntil);
-  if (!expired) {
-    const age = now - entry.checkedAt;
-    if (age < CHECK_MS) {
-      // Past half its time, check in the background while answering from memory: a channel polled
-      // steadily is checked before its time runs out, and no request waits for the database.
-      if (age >= RECHECK_MS && !pending.has(key)) {
-        share(key, target, entry, true).catch((error: unknown) =>
-          logger.warn({ err: error, key }, 'kiosk feed background check failed'),
-        );
-      }
-      return entry;
-    }
+  if (entry.validUntil !== null && now >= entry.validUntil) return undefined;
+  const age = now - entry.checkedAt;
+  if (age >= CHECK_MS) return undefined;
+  if (age >= RECHECK_MS && !pending.has(key)) {
+    share(key, target, entry, true).catch((error: unknown) =>
+      logger.warn({ err: error, key }, 'kiosk feed background check failed'),
+    );
   }
-  return share(key, target, entry, !expired);
+  return entry;
 }
 
 /** The check or build already running for this feed, or a new one; concurrent requests share it. */
