@@ -8,11 +8,12 @@ import { logger } from './logger.ts';
 import { loadUser } from './middlewares/authenticate.ts';
 import { errorHandler } from './middlewares/error-handler.ts';
 import { guardJsonBody } from './middlewares/json-guard.ts';
+import { fixedHeaders } from './middlewares/fixed-headers.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
-import { kioskFeedRouter } from './routes/kiosk-feed.ts';
+import { kioskFeed } from './routes/kiosk-feed.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
 import { sessionMiddleware } from './session.ts';
@@ -42,10 +43,12 @@ export function createApp(options: AppOptions = {}) {
   // loopback by default): anyone else on the network could rotate X-Forwarded-For past the
   // per-address limits, or name another host to the same-origin check.
   app.set('trust proxy', trustProxySetting(config.trustProxy));
-  app.use(securityHeaders(https));
+  const security = securityHeaders(https);
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
-  // user loading, none of which it needs (its own errors still reach the error handler and the log).
-  app.use('/api/kiosk/feed', kioskFeedRouter);
+  // user loading, none of which it needs (its own errors still reach the error handler and the log),
+  // with the security headers recorded once rather than rebuilt per request.
+  app.get('/api/kiosk/feed', fixedHeaders(security), ...kioskFeed);
+  app.use(security);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const sessions = sessionMiddleware(databaseUrl, https);

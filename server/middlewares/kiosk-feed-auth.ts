@@ -1,7 +1,8 @@
 import type { RequestHandler } from 'express';
 import { config } from '../config.ts';
 import { ChannelScreen, type KioskScreen } from '../models/index.ts';
-import { requireKiosk } from './kiosk-auth.ts';
+import { logger } from '../logger.ts';
+import { checkKioskToken, refuseKiosk } from './kiosk-auth.ts';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -18,6 +19,12 @@ declare global {
  * this instance ends it at once (event); on another instance, within this time.
  */
 const TRUST_MS = config.kioskAuthCacheMs;
+/**
+ * From this age on, a request still answers from the remembered check but starts the next check in
+ * the background, so a screen polling steadily never waits for the database: without it, every
+ * request in flight when the trust ran out queued for its own lookup, which made the feed's tail.
+ */
+const RECHECK_MS = TRUST_MS / 2;
 const MAX_ENTRIES = 5000;
 
 interface Trusted {
@@ -26,48 +33,86 @@ interface Trusted {
   checkedAt: number;
 }
 
+/** A check's outcome: the screen and its channel, or the challenge of a refused token. */
+type Outcome = Trusted | { challenge: string };
+
 const trusted = new Map<string, Trusted>();
+/** One database check per header at a time; concurrent requests share it. */
+const checking = new Map<string, Promise<Outcome>>();
+/** Bumped by every forget, so a check that was already running then does not bring back what was forgotten. */
+let generation = 0;
 
 /**
  * Ends the remembered sign-in of a revoked screen at once (the wiring calls it on `screenRevoked`).
  * @param screenId the revoked screen
  */
 export function forgetKioskScreen(screenId: string): void {
+  generation += 1;
   for (const [key, t] of trusted) if (t.screen.id === screenId) trusted.delete(key);
+  checking.clear();
 }
 
 /** Forgets every remembered channel assignment: a screen moved, or its channel was removed (`channelChanged`). */
 export function forgetKioskAssignments(): void {
+  generation += 1;
   trusted.clear();
+  checking.clear();
+}
+
+async function lookUp(header: string): Promise<Outcome> {
+  const startedGeneration = generation;
+  const checkedAt = Date.now();
+  const check = await checkKioskToken(header);
+  if ('challenge' in check) {
+    trusted.delete(header);
+    return check;
+  }
+  const row = await ChannelScreen.findByPk(check.screen.id);
+  const outcome: Trusted = { screen: check.screen, channelId: row?.channelId ?? null, checkedAt };
+  if (generation === startedGeneration) {
+    if (trusted.size >= MAX_ENTRIES) trusted.clear();
+    trusted.set(header, outcome);
+  }
+  return outcome;
+}
+
+/** The running check for this header, or a new one. */
+function checkShared(header: string): Promise<Outcome> {
+  const running = checking.get(header);
+  if (running) return running;
+  const job = lookUp(header).finally(() => {
+    if (checking.get(header) === job) checking.delete(header);
+  });
+  checking.set(header, job);
+  return job;
 }
 
 /**
  * requireKiosk for the feed, which players poll every half minute and which must answer a 304
  * without touching the database: the same check (Bearer token of a paired, unrevoked screen, else
- * 401 `kiosk_token_invalid`), remembered for a second together with the screen's channel.
+ * 401 `kiosk_token_invalid`), remembered for a second together with the screen's channel and
+ * renewed in the background before it runs out.
  * Sets req.kioskScreen and req.kioskChannelId.
  */
 export const requireKioskFeed: RequestHandler = (req, res, next) => {
-  const header = req.get('authorization') ?? '';
+  const header = req.headers.authorization ?? '';
   const hit = trusted.get(header);
-  if (hit && Date.now() - hit.checkedAt < TRUST_MS) {
-    req.kioskScreen = hit.screen;
-    req.kioskChannelId = hit.channelId;
-    return next();
-  }
-  trusted.delete(header);
-  Promise.resolve(
-    requireKiosk(req, res, async (err?: unknown) => {
-      if (err || !req.kioskScreen) return next(err);
-      try {
-        const row = await ChannelScreen.findByPk(req.kioskScreen.id);
-        req.kioskChannelId = row?.channelId ?? null;
-        if (trusted.size >= MAX_ENTRIES) trusted.clear();
-        trusted.set(header, { screen: req.kioskScreen, channelId: req.kioskChannelId, checkedAt: Date.now() });
-        next();
-      } catch (lookupError) {
-        next(lookupError);
+  if (hit) {
+    const age = Date.now() - hit.checkedAt;
+    if (age < TRUST_MS) {
+      if (age >= RECHECK_MS && !checking.has(header)) {
+        // A failed background check is only logged: the next request past the trust checks again and answers for it.
+        checkShared(header).catch((error: unknown) => logger.warn({ err: error }, 'kiosk token recheck failed'));
       }
-    }),
-  ).catch(next);
+      req.kioskScreen = hit.screen;
+      req.kioskChannelId = hit.channelId;
+      return next();
+    }
+  }
+  checkShared(header).then((outcome) => {
+    if ('challenge' in outcome) return refuseKiosk(res, next, outcome.challenge);
+    req.kioskScreen = outcome.screen;
+    req.kioskChannelId = outcome.channelId;
+    next();
+  }, next);
 };

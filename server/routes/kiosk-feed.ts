@@ -1,8 +1,8 @@
-import { Router } from 'express';
+import type { Request, RequestHandler, Response } from 'express';
 import { currentKiosk } from '../middlewares/kiosk-auth.ts';
 import { requireKioskFeed } from '../middlewares/kiosk-feed-auth.ts';
 import { sendCached } from '../middlewares/http-cache.ts';
-import { getKioskFeed } from '../services/publishing/index.ts';
+import { type CachedFeed, freshKioskFeed, getKioskFeed } from '../services/publishing/index.ts';
 
 /**
  * `no-cache`: a player (or a cache in between) may keep the feed but must revalidate it every
@@ -12,12 +12,23 @@ import { getKioskFeed } from '../services/publishing/index.ts';
 export const FEED_CACHE_CONTROL = 'private, no-cache';
 export const FEED_CONTENT_TYPE = 'application/feed+json; charset=utf-8';
 
-/** GET /api/kiosk/feed: the screen's channel as JSON Feed 1.1, with a strong ETag. */
-export const kioskFeedRouter = Router();
-
-kioskFeedRouter.get('/', requireKioskFeed, async (req, res) => {
-  const screen = currentKiosk(req);
-  const feed = await getKioskFeed({ channelId: req.kioskChannelId ?? null, venueId: screen.venueId });
-  res.set('Vary', 'Authorization');
+function sendFeed(req: Request, res: Response, feed: CachedFeed): void {
+  res.setHeader('Vary', 'Authorization');
   sendCached(req, res, feed.body, feed.etag, FEED_CONTENT_TYPE, FEED_CACHE_CONTROL);
-});
+}
+
+/**
+ * GET /api/kiosk/feed: the screen's channel as JSON Feed 1.1, with a strong ETag. Mounted by the app
+ * as a route of its own (`app.get`) rather than a router, so a poll passes no mount or nested router;
+ * a feed in memory is answered in the same tick, without a promise.
+ */
+export const kioskFeed: RequestHandler[] = [
+  requireKioskFeed,
+  (req, res, next) => {
+    const screen = currentKiosk(req);
+    const target = { channelId: req.kioskChannelId ?? null, venueId: screen.venueId };
+    const ready = freshKioskFeed(target);
+    if (ready) return sendFeed(req, res, ready);
+    getKioskFeed(target).then((feed) => sendFeed(req, res, feed), next);
+  },
+];

@@ -1,6 +1,6 @@
 import supertest from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
-import { Page } from '../../server/models/index.ts';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { KioskScreen, Page } from '../../server/models/index.ts';
 import { kioskFeedStats } from '../../server/services/publishing/feed-cache.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { buildKioskMedia, getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
@@ -219,5 +219,40 @@ describe('the kiosk feed', () => {
     const feed = JSON.parse((await getFeed(ours.token)).text);
     expect(feed.items).toEqual([]);
     expect(feed._starproof.venue.id).toBe(venue.id);
+  });
+  it('sends the same security headers as the rest of the API on its 200, 304 and 401 answers', async () => {
+    const { channelId, token } = await channelWithScreen('Headers', 'Headers screen');
+    await addSlide(channelId, { kind: 'sky_tonight' });
+    const health = await supertest(await getTestApp()).get('/api/health');
+    const security = (headers: Record<string, unknown>) =>
+      Object.fromEntries(
+        Object.entries(headers).filter(
+          ([name]) =>
+            !/^(etag|cache-control|content-type|content-length|vary|date|connection|keep-alive|www-authenticate|set-cookie)$/.test(
+              name,
+            ),
+        ),
+      );
+    const expected = security(health.headers);
+    expect(expected['content-security-policy']).toContain("default-src 'self'");
+    const full = await getFeed(token);
+    const again = await getFeed(token, full.headers.etag);
+    const refused = await getFeed('spk_thisTokenWasNeverIssuedToAnyScreen');
+    expect([full.status, again.status, refused.status]).toEqual([200, 304, 401]);
+    for (const res of [full, again, refused]) expect(security(res.headers)).toEqual(expected);
+    expect(again.headers.vary).toBe('Authorization');
+    expect(refused.headers['www-authenticate']).toBe('Bearer realm="kiosk", error="invalid_token"');
+  });
+
+  it('checks a token once for all the requests that bring it at the same moment', async () => {
+    const { token } = await channelWithScreen('Crowd', 'Crowd screen');
+    const lookups = vi.spyOn(KioskScreen, 'findOne');
+    try {
+      const answers = await Promise.all(Array.from({ length: 8 }, () => getFeed(token)));
+      expect(answers.map((a) => a.status)).toEqual(Array(8).fill(200));
+      expect(lookups).toHaveBeenCalledTimes(1);
+    } finally {
+      lookups.mockRestore();
+    }
   });
 });

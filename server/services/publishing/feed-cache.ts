@@ -20,6 +20,8 @@ export interface CachedFeed {
 
 /** How often (ms) a cached feed's fingerprint is compared with the database; other instances' changes show within this. */
 const CHECK_MS = config.feedCheckMs;
+/** From this age a request still answers from memory but starts the next check in the background. */
+const RECHECK_MS = CHECK_MS / 2;
 
 const entries = new Map<string, CachedFeed>();
 const pending = new Map<string, Promise<CachedFeed>>();
@@ -72,7 +74,10 @@ async function refresh(
   if (checkOnly && previous) {
     stats.checks += 1;
     const now = Date.now();
-    if ((await feedFingerprint(previous.deps)) === previous.fingerprint && previous.fingerprint) {
+    const startedGeneration = generation;
+    const same = (await feedFingerprint(previous.deps)) === previous.fingerprint && previous.fingerprint;
+    // An event during the check (a background one, say) outdates what it checked: build instead.
+    if (same && generation === startedGeneration) {
       previous.checkedAt = now;
       return previous;
     }
@@ -92,12 +97,40 @@ async function refresh(
 export async function getKioskFeed(target: FeedTarget): Promise<CachedFeed> {
   const key = keyOf(target);
   const entry = entries.get(key);
+  const expired = !entry || (entry.validUntil !== null && Date.now() >= entry.validUntil);
+  return freshKioskFeed(target) ?? share(key, target, entry, !expired);
+}
+
+/**
+ * The kiosk feed from memory, without waiting, when it is still within its check time (else
+ * undefined: ask getKioskFeed). Past half that time it starts the next check in the background, so
+ * a channel polled steadily is checked before its time runs out and no request waits for the
+ * database.
+ * @param target the channel and venue
+ */
+export function freshKioskFeed(target: FeedTarget): CachedFeed | undefined {
+  const key = keyOf(target);
+  const entry = entries.get(key);
+  if (!entry) return undefined;
   const now = Date.now();
-  const expired = !entry || (entry.validUntil !== null && now >= entry.validUntil);
-  if (!expired && now - entry.checkedAt < CHECK_MS) return entry;
+  if (entry.validUntil !== null && now >= entry.validUntil) return undefined;
+  const age = now - entry.checkedAt;
+  if (age >= CHECK_MS) return undefined;
+  if (age >= RECHECK_MS && !pending.has(key)) {
+    share(key, target, entry, true).catch((error: unknown) =>
+      logger.warn({ err: error, key }, 'kiosk feed background check failed'),
+    );
+  }
+  return entry;
+}
+
+/** The check or build already running for this feed, or a new one; concurrent requests share it. */
+function share(key: string, target: FeedTarget, entry: CachedFeed | undefined, checkOnly: boolean): Promise<CachedFeed> {
   const inFlight = pending.get(key);
   if (inFlight) return inFlight;
-  const job = refresh(key, target, entry, !expired).finally(() => pending.delete(key));
+  const job: Promise<CachedFeed> = refresh(key, target, entry, checkOnly).finally(() => {
+    if (pending.get(key) === job) pending.delete(key);
+  });
   pending.set(key, job);
   return job;
 }
@@ -106,6 +139,8 @@ export async function getKioskFeed(target: FeedTarget): Promise<CachedFeed> {
 export function invalidateKioskFeeds(reason: string): void {
   generation += 1;
   for (const [key, entry] of entries) entries.set(key, { ...entry, validUntil: 0 });
+  // A check or build already running read the rows before the event: the next request starts anew.
+  pending.clear();
   logger.debug({ reason }, 'kiosk feeds invalidated');
 }
 

@@ -9,7 +9,7 @@ export { channelsUsingMedia } from './channel-media.ts';
 export { loadSlideSources } from './channel-sources.ts';
 export { publishingEvents } from './events.ts';
 export { inWindow } from './feed-build.ts';
-export { getKioskFeed, invalidateKioskFeeds } from './feed-cache.ts';
+export { type CachedFeed, freshKioskFeed, getKioskFeed, invalidateKioskFeeds } from './feed-cache.ts';
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
 export { getPublicPages, invalidatePublicPages, prepare } from './public-pages.ts';
