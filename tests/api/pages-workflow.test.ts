@@ -372,7 +372,8 @@ describe('when a statement’s data changes after publication', () => {
       const res = await admin.agent.put('/api/settings/cosmology').send({ model, expectedVersion: settings.version });
       expect(res.status, JSON.stringify(res.body)).toBe(200);
     };
-    await switchTo({ law: 'hubble', H0: 70 });
+    // A model far enough from Planck 2018 (H0 = 50) that the wording moves even at two figures.
+    await switchTo({ H0: 50, Om0: 0.3 });
     await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('needs_recheck');
     await switchTo({ preset: 'planck18' });
     await expect.poll(async () => (await Page.findByPk(page.id))!.status, { timeout: 15_000 }).toBe('published');
