@@ -186,7 +186,7 @@ function findBounce(a4e2: (a: number) => number): number {
   if (!(a4e2(1) > 0)) return 0;
   const grid: number[] = [];
   for (let i = 4096; i >= 1; i--) grid.push(i / 4096);
-  for (let k = 1; k <= 2048; k++) grid.push(Math.pow(10, -3.6 - (k * 8) / 2048));
+  for (let k = 1; k <= 2048; k++) grid.push(10 ** (-3.6 - (k * 8) / 2048));
   grid.sort((x, y) => y - x);
   let prev = 1;
   for (const a of grid) {
