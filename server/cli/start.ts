@@ -1,6 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { checkConfig, config, useDatabaseUrl } from '../config.ts';
+import { checkConfig, config, adoptDatabaseUrl } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
@@ -8,7 +8,7 @@ import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
 import { logger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
-import { useMailCatcher } from '../mail/mailer.ts';
+import { routeMailToCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
@@ -39,7 +39,7 @@ process.on('unhandledRejection', (reason) => {
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {
-  useDatabaseUrl(await startLocalPostgres(config.localPostgres));
+  adoptDatabaseUrl(await startLocalPostgres(config.localPostgres));
   console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
 }
 const sequelize = initModels(getSequelize());
@@ -50,7 +50,7 @@ await sweepOrphanMedia();
 let catcher: Awaited<ReturnType<typeof startMailCatcher>> | undefined;
 if (!config.smtpUrl) {
   catcher = await startMailCatcher(config.smtpCatcherPort);
-  useMailCatcher(catcher.port);
+  routeMailToCatcher(catcher.port);
   console.log(`Mail catcher on 127.0.0.1:${catcher.port}; admins read it on the Outbox page.`);
 }
 
