@@ -23,7 +23,7 @@ export const loadUser: RequestHandler = async (req, _res, next) => {
   const userId = req.session?.userId;
   if (!userId) return next();
   const user = await User.findByPk(userId);
-  if (!user || !user.active) {
+  if (!user?.active) {
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
     return next();
   }

@@ -89,8 +89,8 @@ function drawAll(
       x[slots[j]] = centre[j] + d * (d < 0 ? minus[j] : plus[j]);
     }
     const r = f(x);
-    // r − r is 0 only for finite r; r === r excludes only NaN.
-    if (keepInfinite ? r === r : r - r === 0) out[run.kept++] = r;
+    // r − r is 0 only for finite r.
+    if (keepInfinite ? !Number.isNaN(r) : r - r === 0) out[run.kept++] = r;
     else failed();
   }
 }
@@ -239,7 +239,7 @@ export function monteCarlo(
   const names = Object.keys(inputs);
   const values: Record<string, number> = {};
   const byName = (x: Float64Array): Record<string, number> => {
-    names.forEach((k, i) => (values[k] = x[i]));
+    for (let i = 0; i < names.length; i++) values[names[i]] = x[i];
     return values;
   };
   return propagate({

@@ -95,7 +95,9 @@ function neutrinoMasses(Neff: number, Tcmb0: number, m_nu: number | number[] | u
   if (Tcmb0 === 0 || n === 0) return [];
   if (m_nu === undefined) return new Array<number>(n).fill(0);
   const masses = Array.isArray(m_nu) ? m_nu : new Array<number>(n).fill(m_nu);
-  masses.forEach((m, i) => requireNonNegative(Array.isArray(m_nu) ? `m_nu[${i}]` : 'm_nu', m));
+  masses.forEach((m, i) => {
+    requireNonNegative(Array.isArray(m_nu) ? `m_nu[${i}]` : 'm_nu', m);
+  });
   if (masses.length !== n) {
     throw new CalcError('invalid_model', `model.m_nu must list floor(Neff) = ${n} masses (got ${masses.length})`);
   }
