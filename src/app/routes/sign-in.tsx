@@ -12,7 +12,7 @@ import { paths } from '@/config/paths.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 
 /** Only same-site paths are followed after sign-in. */
-const safeNext = (next: string | null) => (next && next.startsWith('/') && !next.startsWith('//') ? next : '/');
+const safeNext = (next: string | null) => (next?.startsWith('/') && !next.startsWith('//') ? next : '/');
 
 export function Component() {
   const [params] = useSearchParams();
