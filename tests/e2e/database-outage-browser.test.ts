@@ -90,7 +90,9 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
       await expect
         .poll(() => status.textContent(), { timeout: 30_000 })
         .toMatch(/Not saved yet: retrying.*database is not answering.*tries again by itself/s);
+      // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
       expect(await body.innerText()).toContain(BEFORE.trim());
+      // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
       expect(await body.innerText()).toContain(DURING);
       await screenshot(editor, 'outage-editor-retrying');
 
@@ -117,6 +119,7 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     expect(JSON.stringify(saved.doc)).toContain(DURING);
     // Opened afresh, the page holds all of it, with nothing waiting in the browser.
     await editor.reload();
+    // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     await expect.poll(() => body.innerText()).toContain(DURING);
     expect(await editor.evaluate((id) => localStorage.getItem(`starproof:page-draft:${id}`), created.id)).toBeNull();
     await screenshot(editor, 'outage-editor-saved');

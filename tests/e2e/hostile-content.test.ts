@@ -195,6 +195,7 @@ describe('hostile content', () => {
       await page.goto(`${baseUrl}${url}`);
       if (visible)
         await expect
+          // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
           .poll(() => page.locator('body').innerText(), { ...WAIT, message: `${name} shows the payload as text` })
           .toContain(visible);
       await assertInert(page, dialogs, name);
@@ -221,6 +222,7 @@ describe('hostile content', () => {
     expect(dialogs).toEqual([]);
     expect(await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned)).toBeUndefined();
     expect(live.data.html).not.toMatch(/<(script|svg|math|iframe|object|embed|img[^>]*onerror|[a-z]+[^>]*\son[a-z]+=)/i);
+    // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     expect(await page.locator('main').innerText()).toContain('<script>window.__pwned=1</script>');
   });
 
