@@ -4,7 +4,6 @@
  * results carry a warning when z > 0.1, where the law is no longer a good guide.
  */
 import { SPEED_OF_LIGHT } from './constants.ts';
-import { hubbleTimeGyr } from './units.ts';
 
 /** Above this redshift the Hubble law's working carries a warning. */
 export const HUBBLE_LAW_MAX_Z = 0.1;
@@ -21,24 +20,4 @@ export const HUBBLE_LAW_WARNING =
  */
 export function hubbleLawDistanceMpc(z: number, H0: number): number {
   return (SPEED_OF_LIGHT.value * z) / H0;
-}
-
-/**
- * Light-travel time under the Hubble law: the distance divided by c, i.e. z/H0.
- * @param z redshift
- * @param H0 Hubble constant in km/s/Mpc
- * @returns z/H0 in Gyr
- */
-export function hubbleLawTimeGyr(z: number, H0: number): number {
-  return z * hubbleTimeGyr(H0);
-}
-
-/**
- * Redshift for a distance under the Hubble law, z = H0 d / c.
- * @param dMpc distance in Mpc
- * @param H0 Hubble constant in km/s/Mpc
- * @returns z
- */
-export function hubbleLawRedshift(dMpc: number, H0: number): number {
-  return (H0 * dMpc) / SPEED_OF_LIGHT.value;
 }

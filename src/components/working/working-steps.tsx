@@ -5,8 +5,6 @@ import { formatFull, formatSig } from './format-number.ts';
 import { ModelSummary, describeSource } from './model-summary.tsx';
 import { SymbolText } from './symbol-text.tsx';
 
-export { ModelSummary } from './model-summary.tsx';
-
 /** Finds the earlier step whose result a "previous step" input refers to, so the source can say which. */
 function producingStep(steps: Step[], before: number, symbol: string): number | undefined {
   for (let i = before - 1; i >= 0; i--) if (steps[i].result.symbol === symbol) return i + 1;
