@@ -9,7 +9,6 @@ declare module 'express-session' {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       /** The signed-in, active user; set by loadUser. */

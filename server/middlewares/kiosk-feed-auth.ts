@@ -4,7 +4,6 @@ import { ChannelScreen, type KioskScreen } from '../models/index.ts';
 import { requireKiosk } from './kiosk-auth.ts';
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       /** The channel the kiosk screen shows (null: none assigned); set by requireKioskFeed. */
