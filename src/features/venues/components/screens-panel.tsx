@@ -18,10 +18,10 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
           <p className="text-sm text-muted">
             Type this code on the screen’s player page. It works once, until {formatTime(pairing.expiresAt)}.
           </p>
-          <p className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums">
-            {/* Spelled out one character at a time, so a screen reader does not read the code as a word. */}
-            <span className="sr-only">{`Pairing code ${pairing.pairingCode.split('').join(' ')}`}</span>
-            <span aria-hidden="true">{pairing.pairingCode}</span>
+          {/* Spelled out one character at a time for screen readers, so the code is not read as a word. */}
+          <p className="sr-only">{`Pairing code ${pairing.pairingCode.split('').join(' ')}`}</p>
+          <p className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums" aria-hidden="true">
+            {pairing.pairingCode}
           </p>
           <Notice tone="warning">It is shown only this once. If it is lost, re-pair the screen for a new one.</Notice>
           <div className="mt-5 flex justify-end">
