@@ -218,7 +218,7 @@ export const config = {
  * variable is the one place the URL lives, so everything reading `config.databaseUrl` sees it.
  * @param url the connection URL
  */
-export function useDatabaseUrl(url: string): void {
+export function adoptDatabaseUrl(url: string): void {
   process.env.DATABASE_URL = url;
 }
 

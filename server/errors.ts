@@ -35,8 +35,6 @@ export const AuthorizationError = (message = 'Your role does not allow this.', c
   new HttpError(403, code, message);
 export const NotFoundError = (message = 'Not found.', code = 'not_found') => new HttpError(404, code, message);
 export const ConflictError = (message: string, code = 'conflict') => new HttpError(409, code, message);
-/** Too large to take (an upload, a page), with what to do instead. */
-export const TooLargeError = (message: string, code: string) => new HttpError(413, code, message);
 /** Well-formed but unusable content (e.g. a file that is not text), with its own code. */
 export const UnprocessableError = (message: string, code: string) => new HttpError(422, code, message);
 export const TooManyRequestsError = (message: string, code = 'too_many_requests') => new HttpError(429, code, message);

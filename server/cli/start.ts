@@ -1,6 +1,6 @@
 import type { Server } from 'node:http';
 import { createApp } from '../app.ts';
-import { checkConfig, config, productionSettingProblems, useDatabaseUrl } from '../config.ts';
+import { adoptDatabaseUrl, checkConfig, config, productionSettingProblems } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
@@ -8,7 +8,7 @@ import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
 import { logger, routeConsoleToLogger } from '../logger.ts';
 import { startMailCatcher } from '../mail/catcher.ts';
-import { useMailCatcher } from '../mail/mailer.ts';
+import { routeMailToCatcher } from '../mail/mailer.ts';
 import { startJobQueue, stopJobQueue } from '../jobs/queue.ts';
 import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
@@ -47,7 +47,7 @@ routeConsoleToLogger();
 const ownsPostgres = !config.databaseUrl;
 
 if (ownsPostgres) {
-  useDatabaseUrl(await startLocalPostgres(config.localPostgres));
+  adoptDatabaseUrl(await startLocalPostgres(config.localPostgres));
   console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
 }
 const sequelize = initModels(getSequelize());
@@ -58,7 +58,7 @@ await sweepOrphanMedia();
 let catcher: Awaited<ReturnType<typeof startMailCatcher>> | undefined;
 if (!config.smtpUrl) {
   catcher = await startMailCatcher(config.smtpCatcherPort);
-  useMailCatcher(catcher.port);
+  routeMailToCatcher(catcher.port);
   console.log(`Mail catcher on 127.0.0.1:${catcher.port}; admins read it on the Outbox page.`);
 }
 

@@ -1,6 +1,6 @@
 import { MeasurementInputSchema } from '@shared/schemas/measurement.ts';
 import { SkyObjectInputSchema } from '@shared/schemas/sky-object.ts';
-import { Measurement, SkyObject, Source, User } from '../models/index.ts';
+import { SkyObject, Source, User } from '../models/index.ts';
 import { createMeasurement, setPreferred, createSkyObject } from '../services/catalogue/index.ts';
 import { getSettings } from '../services/settings/index.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
@@ -64,12 +64,6 @@ export async function seedCatalogueDemo(): Promise<void> {
       }
     }
   }
-}
-
-/** @returns true when the catalogue holds the demo data (used by start-up messages and tests) */
-export async function hasCatalogueDemo(): Promise<boolean> {
-  const source = await Source.findOne({ where: { citation: DEMO_SOURCE_CITATION } });
-  return !!source && (await Measurement.count({ where: { sourceId: source.id } })) > 0;
 }
 
 /**

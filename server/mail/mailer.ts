@@ -4,7 +4,7 @@ import { config } from '../config.ts';
 let transporter: Transporter | undefined;
 
 /** Points the mailer at the local catcher (when no SMTP_URL is set). */
-export function useMailCatcher(port: number): void {
+export function routeMailToCatcher(port: number): void {
   transporter = nodemailer.createTransport({ host: '127.0.0.1', port, secure: false, ignoreTLS: true });
 }
 

@@ -9,7 +9,6 @@ declare module 'express-session' {
 }
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       /** The signed-in, active user; set by loadUser. */
@@ -23,7 +22,7 @@ export const loadUser: RequestHandler = async (req, _res, next) => {
   const userId = req.session?.userId;
   if (!userId) return next();
   const user = await User.findByPk(userId);
-  if (!user || !user.active) {
+  if (!user?.active) {
     await new Promise<void>((resolve) => req.session.destroy(() => resolve()));
     return next();
   }

@@ -6,7 +6,6 @@ export const MAX_JSON_DEPTH = 100;
 
 // C0 controls but tab, newline and carriage return (a pasted Windows line end); DEL; C1 controls.
 // PostgreSQL refuses NUL outright; the others have no business in a title, a name or a note.
-// biome-ignore lint/suspicious/noControlCharactersInRegex: finding control characters is this pattern's job.
 const CONTROL = /[\u0000-\u0008\u000b\u000c\u000e-\u001f\u007f-\u009f]/;
 
 const fieldName = (path: Array<string | number>) => path.join('.') || 'body';

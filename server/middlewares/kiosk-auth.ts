@@ -4,7 +4,6 @@ import { KioskScreen } from '../models/index.ts';
 import { hashToken } from '../services/users/index.ts';
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       /** The kiosk screen whose token came with the request; set by requireKiosk. */

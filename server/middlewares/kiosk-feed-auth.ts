@@ -5,7 +5,6 @@ import { logger } from '../logger.ts';
 import { checkKioskToken, refuseKiosk } from './kiosk-auth.ts';
 
 declare global {
-  // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
     interface Request {
       /** The channel the kiosk screen shows (null: none assigned); set by requireKioskFeed. */

@@ -33,7 +33,7 @@ export function can<R extends keyof Policies, A extends keyof Policies[R]>(
   action: A,
   record?: Parameters<Extract<Policies[R][A], Rule<never>>>[1],
 ): boolean {
-  if (!user || !user.active) return false;
+  if (!user?.active) return false;
   const rule = policies[resource][action] as Rule<unknown>;
   return rule(user, record);
 }

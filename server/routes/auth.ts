@@ -4,7 +4,7 @@ import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPa
 import { HttpError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
-import { User } from '../models/index.ts';
+import type { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { config } from '../config.ts';
 import { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken, signIn } from '../services/users/index.ts';

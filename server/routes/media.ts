@@ -8,7 +8,7 @@ import { mediaSettings } from '../media/settings.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { singleImageUpload } from '../middlewares/media-upload.ts';
 import { validate, validateQuery } from '../middlewares/validate.ts';
-import { Media, User } from '../models/index.ts';
+import type { Media, User } from '../models/index.ts';
 import { authorize } from '../policies/index.ts';
 import { presentMedia, presentRendition } from '../presenters/media.ts';
 import {

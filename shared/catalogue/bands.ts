@@ -13,9 +13,6 @@ export const KNOWN_BANDS: ReadonlyArray<{ id: string; label: string }> = Object.
 /** A band id: letters, digits and _ . : - up to 16 characters, e.g. V, Ks_2MASS, G_Gaia. */
 export const BAND_PATTERN = /^[A-Za-z0-9][A-Za-z0-9_.:-]{0,15}$/;
 
-/** @returns true when the engine can relate magnitudes in this band to the Sun's */
-export const isSolarBand = (band: string): boolean => band in SOLAR_MAGNITUDES;
-
 /** A band's light in plain words, for public sentences: the adjective form and the "in … light" phrase. */
 export interface BandLight {
   /** "visible light", "lumière visible": what a luminosity counts ("as much visible light as"). */

@@ -10,9 +10,6 @@ type Strip = [raLowHours: number, raHighHours: number, decLowDeg: number, abbrev
 
 const STRIPS = boundaries.rows as Strip[];
 
-/** Where the boundary table comes from, for working and documentation. */
-export const CONSTELLATION_BOUNDARY_SOURCE: string = boundaries.source;
-
 /** Julian date of the Besselian epoch B1875.0: 2415020.31352 + (1875 − 1900) × 365.242198781 days. */
 const JD_B1875 = 2415020.31352 + (1875 - 1900) * 365.242198781;
 const JD_J2000 = 2451545.0;

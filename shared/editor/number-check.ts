@@ -16,8 +16,8 @@ export interface NumberFlag {
 // Digits with separators ("300,000", "4.6", "1 000"), optional sign and ×10^n, or a number word.
 const DIGITS = String.raw`[-−+]?\d(?:[\d,]*\d)?(?:[.·]\d+)?(?:\s?[×x]\s?10\^?[-−]?\d+)?`;
 const WORDS = String.raw`(?:a|one|two|three|four|five|six|seven|eight|nine|ten|eleven|twelve|thirteen|fourteen|fifteen|twenty|thirty|forty|fifty|sixty|seventy|eighty|ninety|hundred|a\s+few|several|hundreds|thousands)`;
-const NUMBER = String.raw`(?:${DIGITS}|${WORDS})`;
-const SCALE = String.raw`(?:thousand|million|billion|trillion|quadrillion|quintillion|milliards?|billions?|millions?|trillions?)`;
+const NUMBER = `(?:${DIGITS}|${WORDS})`;
+const SCALE = '(?:thousand|million|billion|trillion|quadrillion|quintillion|milliards?|billions?|millions?|trillions?)';
 const UNIT = String.raw`(?:light[-\s]?(?:years?|minutes?|seconds?|hours?|days?)|ly|parsecs?|[kMG]?pc|kilo-?parsecs?|mega-?parsecs?|kilomet(?:re|er)s?|km(?:\/s)?|miles?|astronomical\s+units?|au|AU|mag(?:nitudes?)?|[GMk]yr|gigayears?|solar\s+(?:masses|mass|radii|radius|luminosit(?:y|ies))|earth\s+(?:masses|mass|radii)|années?[-\s]lumière|kelvin|K\b|degrees|years?(?:\s+(?:ago|old))?)`;
 const COMPARE = String.raw`times\s+(?:brighter|fainter|bigger|larger|smaller|heavier|lighter|more|less|further|farther|closer|wider|hotter|older|as)`;
 

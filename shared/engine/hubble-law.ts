@@ -35,13 +35,3 @@ export function hubbleLawDistanceMpc(z: number, H0: number): number {
 export function hubbleLawTimeGyr(z: number, H0: number): number {
   return z * hubbleTimeGyr(H0);
 }
-
-/**
- * Redshift for a distance under the Hubble law, z = H0 d / c.
- * @param dMpc distance in Mpc
- * @param H0 Hubble constant in km/s/Mpc
- * @returns z
- */
-export function hubbleLawRedshift(dMpc: number, H0: number): number {
-  return (H0 * dMpc) / SPEED_OF_LIGHT.value;
-}

@@ -59,7 +59,10 @@ const identities = new WeakMap<object, number>();
 let nextIdentity = 1;
 function identity(o: object): number {
   let id = identities.get(o);
-  if (id === undefined) identities.set(o, (id = nextIdentity++));
+  if (id === undefined) {
+    id = nextIdentity++;
+    identities.set(o, id);
+  }
   return id;
 }
 

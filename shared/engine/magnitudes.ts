@@ -43,7 +43,7 @@ export function absoluteMagnitude(m: number, mu: number, extinction: number, k: 
  * @returns L / L☉
  */
 export function luminosityRatioSun(M: number, Msun: number): number {
-  return Math.pow(10, -0.4 * (M - Msun));
+  return 10 ** (-0.4 * (M - Msun));
 }
 
 /**
@@ -52,7 +52,7 @@ export function luminosityRatioSun(M: number, Msun: number): number {
  * @returns F₁ / F₂
  */
 export function fluxRatioFromMagnitudes(deltaMag: number): number {
-  return Math.pow(10, -0.4 * deltaMag);
+  return 10 ** (-0.4 * deltaMag);
 }
 
 /**

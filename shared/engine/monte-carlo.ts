@@ -91,8 +91,8 @@ function drawAll(
       x[slots[j]] = centre[j] + d * (d < 0 ? minus[j] : plus[j]);
     }
     const r = f(x);
-    // r − r is 0 only for finite r; r === r excludes only NaN.
-    if (keepInfinite ? r === r : r - r === 0) out[run.kept++] = r;
+    // r − r is 0 only for finite r.
+    if (keepInfinite ? !Number.isNaN(r) : r - r === 0) out[run.kept++] = r;
     else failed();
   }
 }
@@ -226,30 +226,4 @@ export function propagateOne(m: Measurement, g: MonotoneMap, everyDraw: () => Mo
     return i + 1 < n ? x * (1 - f) + g.map(drawAt(g.decreasing ? rank - 1 : rank + 1)) * f : x;
   };
   return { low: quantileAt(0.16), high: quantileAt(0.84), samples: n, failures: new Map(), failed: 0 };
-}
-
-/**
- * Propagates uncertainties through f by Monte Carlo, with inputs by name.
- * @param inputs measurements by name (only those with a non-zero uncertainty are varied)
- * @param f the calculation; returns NaN (or throws) for draws where the quantity is undefined
- * @param blame names the input responsible for a failed draw
- * @returns 68 % interval and failure counts
- */
-export function monteCarlo(
-  inputs: Record<string, Measurement>,
-  f: (values: Record<string, number>) => number,
-  blame: (values: Record<string, number>) => string,
-): MonteCarloOutcome {
-  const names = Object.keys(inputs);
-  const values: Record<string, number> = {};
-  const byName = (x: Float64Array): Record<string, number> => {
-    names.forEach((k, i) => (values[k] = x[i]));
-    return values;
-  };
-  return propagate({
-    x: Float64Array.from(names, (k) => inputs[k].value),
-    varied: names.flatMap((k, slot) => (inputs[k].minus > 0 || inputs[k].plus > 0 ? [{ slot, m: inputs[k] }] : [])),
-    f: (x) => f(byName(x)),
-    blame: (x) => blame(byName(x)),
-  });
 }

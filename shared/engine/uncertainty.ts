@@ -91,16 +91,6 @@ export function normal(rand: () => number): () => number {
 }
 
 /**
- * One draw from a measurement's split normal.
- * @param m the measurement
- * @param n a standard normal deviate
- * @returns the sampled value
- */
-export function drawSplitNormal(m: Measurement, n: number): number {
-  return m.value + n * (n < 0 ? m.minus : m.plus);
-}
-
-/**
  * The p-quantile of sorted data by linear interpolation.
  * @param sorted ascending values
  * @param p probability in [0, 1]

@@ -17,14 +17,10 @@ export const AU_PER_PC = PARSEC.value / ASTRONOMICAL_UNIT.value;
 export const mpcToLy = (mpc: number): number => mpc * 1e6 * LY_PER_PC;
 /** @param mpc distance in Mpc @returns distance in km */
 export const mpcToKm = (mpc: number): number => mpc * KM_PER_MPC;
-/** @param ly distance in light-years @returns distance in Mpc */
-export const lyToMpc = (ly: number): number => ly / (1e6 * LY_PER_PC);
 /** @param pc distance in parsecs @returns distance in light-years */
 export const pcToLy = (pc: number): number => pc * LY_PER_PC;
 /** @param gyr time in Gyr @returns time in years */
 export const gyrToYr = (gyr: number): number => gyr * 1e9;
-/** @param yr time in years @returns time in Gyr */
-export const yrToGyr = (yr: number): number => yr / 1e9;
 
 /**
  * Hubble distance c/H0.

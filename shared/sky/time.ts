@@ -11,9 +11,6 @@ const JD_UNIX_EPOCH = 2_440_587.5;
 /** Julian Day (UT) of an instant given in milliseconds since the Unix epoch. */
 export const jdFromMs = (ms: number): number => ms / MS_PER_DAY + JD_UNIX_EPOCH;
 
-/** The instant, in milliseconds since the Unix epoch, of a Julian Day (UT). */
-export const msFromJd = (jd: number): number => (jd - JD_UNIX_EPOCH) * MS_PER_DAY;
-
 /** ΔT = TT − UT in seconds at a Julian Day, from astronomia's table and polynomials. */
 export function deltaTSeconds(jd: number): number {
   return deltaT(2000 + (jd - 2_451_545) / 365.25);

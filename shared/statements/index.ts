@@ -17,8 +17,8 @@ export * from './types.ts';
 export * from './locales.ts';
 export { choosePrecision, roundToSignificant } from './precision.ts';
 export { formatApproximate } from './number-words.ts';
-export { nightFromSky, planetOf } from './tonight.ts';
-export { SentenceNamesSchema, type SentenceName, type SentenceNames } from './names.ts';
+export { nightFromSky } from './tonight.ts';
+export type { SentenceNames } from './names.ts';
 
 /**
  * The release of the statement rules: raise it whenever a release changes templates' wording, the
@@ -41,8 +41,6 @@ export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [
   scaleModel,
   planetLightTonight,
 ];
-
-export const TEMPLATE_IDS = STATEMENT_TEMPLATES.map((t) => t.id) as [string, ...string[]];
 
 export function findTemplate(id: string): StatementTemplate | undefined {
   return STATEMENT_TEMPLATES.find((t) => t.id === id);

@@ -82,8 +82,3 @@ export function formatApproximate(
   const digits = formatter(locale, significantFigures, false).format(mantissa);
   return { text: `${digits} ${Math.abs(mantissa) >= 2 ? plural : singular}`, shown };
 }
-
-/** "about" in the locale; used whenever a number is rounded for the public. */
-export function about(locale: StatementLocale): string {
-  return language(locale) === 'fr' ? 'environ' : 'about';
-}

@@ -79,7 +79,10 @@ function hollowed(text: string, pattern: RegExp, cache: boolean): Hollowed {
   // PostgreSQL text cannot hold NUL, so no stored citation can; the engine never writes one.
   if (text.includes(HOLE)) throw new Error('A working text contains a NUL character.');
   const data: string[] = [];
-  const hollow = text.replace(pattern, (found) => (data.push(found), HOLE));
+  const hollow = text.replace(pattern, (found) => {
+    data.push(found);
+    return HOLE;
+  });
   const out = { text: hollow, data, piece: pieceId(hollow) };
   // Only texts without data are kept: they are the ones that come back (a name with this
   // statement's uncertainty in it, or a source with its measurement id, would only crowd them out).
@@ -97,7 +100,10 @@ export function packWorking(
   idOf: (skeleton: SkeletonJson) => string,
 ): { stored: StoredWorking; skeletons: Map<string, SkeletonJson> } {
   let known = skeletonsBySignature.get(idOf);
-  if (!known) skeletonsBySignature.set(idOf, (known = new Map()));
+  if (!known) {
+    known = new Map();
+    skeletonsBySignature.set(idOf, known);
+  }
   const skeletons = new Map<string, SkeletonJson>();
   const w: StoredWorking['w'] = [];
   for (const step of steps) {

@@ -74,19 +74,23 @@ export function PageWorkspace({
   useEffect(() => editor.setEditable(editable, false), [editor, editable]);
 
   // A copy kept in this browser that the server never confirmed: restore it or offer a choice.
+  // Only when a page is opened (not after each save), so the rest is read from a ref that
+  // always holds this render's values.
+  const openedRef = useRef({ page, editable, editor, changed: autosave.changed });
+  openedRef.current = { page, editable, editor, changed: autosave.changed };
+  const pageId = page.id;
   useEffect(() => {
-    const draft = readLocalDraft(page.id);
-    if (!draft || !editable) return;
-    if (same(draft.doc, page.doc) && draft.title === page.title) return dropLocalDraft(page.id);
-    if (draft.baseVersion === page.version) {
-      editor.commands.setContent(draft.doc);
+    const { page: opened, editable: canEdit, editor: openedEditor, changed } = openedRef.current;
+    const draft = readLocalDraft(pageId);
+    if (!draft || !canEdit) return;
+    if (same(draft.doc, opened.doc) && draft.title === opened.title) return dropLocalDraft(pageId);
+    if (draft.baseVersion === opened.version) {
+      openedEditor.commands.setContent(draft.doc);
       titleRef.current = draft.title;
       setTitle(draft.title);
-      autosave.changed();
+      changed();
     } else setRestore(draft);
-    // Only when the page is first opened.
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [page.id]);
+  }, [pageId]);
 
   const ranges = useEditorState({ editor, selector: ({ editor: e }) => flagRanges(e.state.doc), equalityFn: same });
   const flags: LiveFlag[] = useMemo(() => {

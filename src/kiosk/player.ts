@@ -66,7 +66,7 @@ export class Player {
   stop(): void {
     this.stopped = true;
     window.clearTimeout(this.slideTimer);
-    this.timers.forEach((t) => window.clearInterval(t));
+    for (const t of this.timers) window.clearInterval(t);
   }
 
   private playable(): FeedItem[] {

@@ -6,7 +6,6 @@
  * @param next the `next` search parameter, as typed into the address bar
  */
 export function safeNext(next: string | null): string {
-  // biome-ignore lint/suspicious/noControlCharactersInRegex: a control character in the path is refused on purpose.
   if (!next?.startsWith('/') || next.includes('\\') || /[\u0000-\u001f\u007f]/.test(next)) return '/';
   const base = 'https://starproof.invalid';
   try {

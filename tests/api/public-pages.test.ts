@@ -6,6 +6,18 @@ import { appBaseUrl } from '../../server/config.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { buildKioskMedia, publishedPage, publishingCrew } from '../support/publishing.ts';
 
+/** The fields of a listed public page this file reads. */
+type PublicPageBody = {
+  id: string;
+  title: string;
+  slug: string;
+  summary: string;
+  html: string;
+  statements: Array<{ id: string; text: string; asOf: string; note: string | null }>;
+  images: Array<Record<string, unknown>>;
+  object: { name: string };
+};
+
 // A low limit for this file only, so the 429 is reached quickly (read when the router loads).
 vi.hoisted(() => {
   process.env.STARPROOF_PUBLIC_LIMIT = '60';
@@ -33,7 +45,7 @@ describe('the public API', () => {
     expect(res.status).toBe(200);
     expect(res.headers['access-control-allow-origin']).toBe('*');
     expect(res.headers['cache-control']).toBe('public, max-age=60, must-revalidate');
-    const pages = res.body.data as Array<Record<string, any>>;
+    const pages = res.body.data as PublicPageBody[];
     expect(res.body.meta.total).toBe(2);
     const page = pages.find((p) => p.id === hostile.pageId)!;
     expect(page.title).toBe(HOSTILE_TITLE);
@@ -45,7 +57,7 @@ describe('the public API', () => {
     expect(page.statements[0]).toMatchObject({ id: expect.any(String), text: expect.any(String) });
     expect(Date.parse(page.statements[0].asOf)).not.toBeNaN();
     // The small print reaches the public: the distance names its cosmology, the naked-eye one has none.
-    const [distance, nakedEye] = hostile.statementIds.map((id) => page.statements.find((s: { id: string }) => s.id === id));
+    const [distance, nakedEye] = hostile.statementIds.map((id) => page.statements.find((s) => s.id === id)!);
     expect(distance.note).toMatch(/^Worked out with the Planck 2018 .* cosmology\.$/);
     expect(nakedEye.note).toBeNull();
     expect(page.html).toMatch(/<sup class="statement-note-ref">1<\/sup>/);

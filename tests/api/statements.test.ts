@@ -10,7 +10,7 @@ import {
   recomputeStatements,
   SettingsMovedError,
 } from '../../server/services/statements/recompute.ts';
-import { buildUser, getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
+import { type buildUser, getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildObjectWithMeasurements } from '../support/sky-fixtures.ts';
 
 beforeAll(async () => {

@@ -3,7 +3,7 @@ import { createRequire } from 'node:module';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const require = createRequire(import.meta.url);
 const AXE_SOURCE = fs.readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
@@ -65,7 +65,7 @@ describe('accessibility', () => {
     await page.keyboard.press('Enter');
     await expect.poll(() => page.getByRole('alert').textContent(), WAIT).toMatch(/\w/);
 
-    await useSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'admin'));
+    await openSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'admin'));
     const screens: Array<[string, string]> = [
       ['overview', '/'],
       ['pages', '/pages'],

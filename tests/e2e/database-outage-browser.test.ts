@@ -3,7 +3,7 @@ import { startLocalPostgres, stopLocalPostgres } from '../../server/db/local-pos
 import { DEMO_VENUE } from '../../server/demo/accounts.ts';
 import { TEST_CLUSTER } from '../setup/test-postgres.ts';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, ok, readyImage, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, ok, readyImage, openSessionInBrowser } from '../support/e2e-api.ts';
 import { solidImage } from '../support/media.ts';
 
 const BEFORE = 'The Crab Nebula is what is left of a star that exploded. ';
@@ -70,7 +70,7 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     await kiosk.getByRole('button', { name: 'Pair this screen' }).click();
     await expect.poll(() => kiosk.locator('.slide.shown .credit').count(), { timeout: 30_000 }).toBe(1);
 
-    await useSessionInBrowser(context, baseUrl, writer);
+    await openSessionInBrowser(context, baseUrl, writer);
     await editor.goto(`${baseUrl}/pages/${created.id}`);
     const body = editor.getByRole('textbox', { name: 'Page text' });
     const status = editor.getByRole('status').filter({ hasText: /saved|Saving|retrying/i });
@@ -90,7 +90,9 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
       await expect
         .poll(() => status.textContent(), { timeout: 30_000 })
         .toMatch(/Not saved yet: retrying.*database is not answering.*tries again by itself/s);
+      // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
       expect(await body.innerText()).toContain(BEFORE.trim());
+      // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
       expect(await body.innerText()).toContain(DURING);
       await screenshot(editor, 'outage-editor-retrying');
 
@@ -117,6 +119,7 @@ describe.skipIf(!!process.env.STARPROOF_TEST_DATABASE_URL)('a database outage se
     expect(JSON.stringify(saved.doc)).toContain(DURING);
     // Opened afresh, the page holds all of it, with nothing waiting in the browser.
     await editor.reload();
+    // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     await expect.poll(() => body.innerText()).toContain(DURING);
     expect(await editor.evaluate((id) => localStorage.getItem(`starproof:page-draft:${id}`), created.id)).toBeNull();
     await screenshot(editor, 'outage-editor-saved');

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, ok, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, ok, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const WAIT = { timeout: 20_000 };
 
@@ -26,7 +26,7 @@ describe('forms that never lie', () => {
       'measurement',
     ).body.data;
 
-    await useSessionInBrowser(context, baseUrl, reviewer);
+    await openSessionInBrowser(context, baseUrl, reviewer);
     await page.goto(`${baseUrl}/catalogue/${objectId}`);
     const row = page.getByRole('region', { name: 'Redshift' }).getByRole('listitem').filter({ hasText: '0.51 ± 0.02' });
     await expect.poll(() => row.count(), WAIT).toBe(1);
@@ -65,7 +65,7 @@ describe('forms that never lie', () => {
       (await admin.call<{ data: Array<{ id: string; role: string }> }>('GET', '/api/users')).body.data.find(
         (u) => u.id === invited.id,
       )!.role;
-    await useSessionInBrowser(context, baseUrl, admin);
+    await openSessionInBrowser(context, baseUrl, admin);
     await page.goto(`${baseUrl}/admin/users`);
     const select = page.getByLabel('Role of Role Check (demo)');
     await expect.poll(() => select.count(), WAIT).toBe(1);

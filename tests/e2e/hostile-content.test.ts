@@ -3,7 +3,7 @@ import type { Page } from 'playwright-core';
 import sharp from 'sharp';
 import { describe, expect, inject, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, ok, useSessionInBrowser, type E2eSession } from '../support/e2e-api.ts';
+import { demoSession, ok, openSessionInBrowser, type E2eSession } from '../support/e2e-api.ts';
 import { FORMULA_PAYLOADS, XSS_PAYLOADS } from '../support/xss-payloads.ts';
 
 const WAIT = { timeout: 20_000 };
@@ -179,7 +179,7 @@ describe('hostile content', () => {
       dialogs.push(d.message());
       void d.dismiss();
     });
-    await useSessionInBrowser(context, baseUrl, admin);
+    await openSessionInBrowser(context, baseUrl, admin);
 
     const screens: Array<[string, string, string]> = [
       ['catalogue', `/catalogue?q=${tag}`, 'window.__pwned=1'],
@@ -195,6 +195,7 @@ describe('hostile content', () => {
       await page.goto(`${baseUrl}${url}`);
       if (visible)
         await expect
+          // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
           .poll(() => page.locator('body').innerText(), { ...WAIT, message: `${name} shows the payload as text` })
           .toContain(visible);
       await assertInert(page, dialogs, name);
@@ -221,6 +222,7 @@ describe('hostile content', () => {
     expect(dialogs).toEqual([]);
     expect(await page.evaluate(() => (window as unknown as { __pwned?: unknown }).__pwned)).toBeUndefined();
     expect(live.data.html).not.toMatch(/<(script|svg|math|iframe|object|embed|img[^>]*onerror|[a-z]+[^>]*\son[a-z]+=)/i);
+    // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     expect(await page.locator('main').innerText()).toContain('<script>window.__pwned=1</script>');
   });
 

@@ -1,7 +1,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, type E2eSession, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, type E2eSession, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const WAIT = { timeout: 20_000 };
 const ROLES = ['admin', 'editor', 'reviewer', 'writer'] as const;
@@ -94,7 +94,7 @@ describe('phones and tablets', () => {
     const wide: string[] = [];
     for (const role of ROLES) {
       await context.clearCookies();
-      await useSessionInBrowser(
+      await openSessionInBrowser(
         context,
         baseUrl,
         role === 'admin' ? admin : role === 'reviewer' ? reviewer : await demoSession(baseUrl, role),
@@ -126,7 +126,7 @@ describe('phones and tablets', () => {
 
   it('below the breakpoint the navigation is a menu button that opens, moves on and closes', async () => {
     const { context, page, baseUrl } = await openBrowser();
-    await useSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
+    await openSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
     await page.setViewportSize(NARROW[0]);
     await page.goto(`${baseUrl}/`);
     const menu = page.getByRole('button', { name: 'Menu' });
@@ -155,8 +155,18 @@ describe('phones and tablets', () => {
   it("the editor's working panel holds its parameters and every column of its values, at 768 px and 1440 px", async () => {
     const { context, page, baseUrl } = await openBrowser();
     const reviewer = await demoSession(baseUrl, 'reviewer');
-    await useSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'editor'));
-    const pageId = await firstId(reviewer, '/api/pages');
+    await openSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'editor'));
+    // The first demo page whose text holds a statement (not every demo page has one).
+    const pages = await reviewer.call<{ data: Array<{ id: string }> }>('GET', '/api/pages');
+    let pageId = '';
+    for (const { id } of pages.body.data) {
+      const detail = await reviewer.call<{ data: { statements: unknown[] } }>('GET', `/api/pages/${id}`);
+      if (detail.body.data.statements.length) {
+        pageId = id;
+        break;
+      }
+    }
+    expect(pageId, 'a demo page with a statement').not.toBe('');
     for (const size of [NARROW[1], { width: 1440, height: 900 }]) {
       await page.setViewportSize(size);
       await page.goto(`${baseUrl}/pages/${pageId}`);
@@ -196,7 +206,7 @@ describe('phones and tablets', () => {
 
   it('the red look filters every picture, the logo included, to red on black', async () => {
     const { context, page, baseUrl } = await openBrowser();
-    await useSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
+    await openSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
     await page.setViewportSize({ width: 1440, height: 900 });
     await page.goto(`${baseUrl}/`);
     await page.getByLabel('Look').selectOption('red');

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS } from '../../server/demo/accounts.ts';
 import { openBrowser, screenshot, signInThroughForm } from '../support/browser.ts';
-import { demoSession, ok, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, ok, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 
@@ -26,7 +26,7 @@ describe('checked statements in the browser', () => {
   it('a writer works out a planet’s light time tonight for the venue, and sees the venue and night on the statement', async () => {
     const { context, page, errors, baseUrl } = await openBrowser();
     const writer = await demoSession(baseUrl, 'writer');
-    await useSessionInBrowser(context, baseUrl, writer);
+    await openSessionInBrowser(context, baseUrl, writer);
     const found = ok(
       await writer.call<{ data: { rows: Array<{ id: string; name: string }> } }>('GET', '/api/catalogue/objects?q=Mars'),
       'find Mars',

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, ok, useSessionInBrowser } from '../support/e2e-api.ts';
+import { demoSession, ok, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const WAIT = { timeout: 20_000 };
 
@@ -33,7 +33,7 @@ describe('a workflow without dead ends', () => {
       'save page',
     );
 
-    await useSessionInBrowser(context, baseUrl, writer);
+    await openSessionInBrowser(context, baseUrl, writer);
     await page.goto(`${baseUrl}/pages/${created.id}`);
     await page.getByRole('button', { name: 'Submit for review' }).click();
     const reasons = page.getByRole('form', { name: 'Reasons for hand-typed numbers' });
@@ -59,7 +59,7 @@ describe('a workflow without dead ends', () => {
 
     // The reviewer opening the editor is told it is read-only and where to sign off.
     await context.clearCookies();
-    await useSessionInBrowser(context, baseUrl, reviewer);
+    await openSessionInBrowser(context, baseUrl, reviewer);
     await page.goto(`${baseUrl}/pages/${created.id}`);
     await expect.poll(() => page.getByText('Read-only').count(), WAIT).toBe(1);
     await page.getByRole('link', { name: 'Sign off in the review view' }).click();
@@ -72,7 +72,7 @@ describe('a workflow without dead ends', () => {
     );
 
     await context.clearCookies();
-    await useSessionInBrowser(context, baseUrl, writer);
+    await openSessionInBrowser(context, baseUrl, writer);
     await page.goto(`${baseUrl}/pages/${created.id}`);
     await expect.poll(() => page.getByText(/^Sent back by /).count(), WAIT).toBe(1);
     expect(await page.getByText('Say which distance the leaflet means, or make it a statement.').count()).toBe(1);
@@ -92,7 +92,7 @@ describe('a workflow without dead ends', () => {
         ok(await editor.call('POST', `/api/pages/${live.id}/unpublish`), 'unpublish');
         return live;
       })());
-    await useSessionInBrowser(context, baseUrl, editor);
+    await openSessionInBrowser(context, baseUrl, editor);
     await page.goto(`${baseUrl}/pages/${target.id}`);
     const publish = page.getByRole('button', { name: /^Publish revision/ });
     await expect.poll(() => publish.count(), WAIT).toBe(1);

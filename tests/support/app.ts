@@ -6,7 +6,7 @@ import type { Role } from '../../shared/roles.ts';
 import { createApp } from '../../server/app.ts';
 import { closeSequelize, getSequelize } from '../../server/db.ts';
 import { startMailCatcher } from '../../server/mail/catcher.ts';
-import { useMailCatcher } from '../../server/mail/mailer.ts';
+import { routeMailToCatcher } from '../../server/mail/mailer.ts';
 import { OutboxMessage, User } from '../../server/models/index.ts';
 import { hashPassword } from '../../server/services/users/passwords.ts';
 
@@ -18,7 +18,7 @@ export async function getTestApp(): Promise<Express> {
   if (!app) {
     app = createApp();
     catcher = await startMailCatcher(0);
-    useMailCatcher(catcher.port);
+    routeMailToCatcher(catcher.port);
     afterAll(async () => {
       catcher?.server.close(() => undefined);
       await (app?.locals.sessionPool as { end(): Promise<void> } | undefined)?.end();

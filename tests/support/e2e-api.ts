@@ -49,7 +49,7 @@ export async function demoSession(baseUrl: string, role: 'admin' | 'editor' | 'r
 }
 
 /** Gives the browser the session's cookie, so it is signed in without using the sign-in form. */
-export async function useSessionInBrowser(context: BrowserContext, baseUrl: string, session: E2eSession): Promise<void> {
+export async function openSessionInBrowser(context: BrowserContext, baseUrl: string, session: E2eSession): Promise<void> {
   const [name, value] = session.cookie.split('=');
   await context.addCookies([{ name, value, url: baseUrl, httpOnly: true, sameSite: 'Lax' }]);
 }

@@ -37,6 +37,7 @@ export const XSS_PAYLOADS: readonly string[] = [
   '" autofocus onfocus="window.__pwned=1',
   "' onmouseover='window.__pwned=1",
   // Template and framework tricks
+  // biome-ignore lint/suspicious/noTemplateCurlyInString: the payload is a template placeholder, sent as plain text on purpose
   '${window.__pwned=1}',
   '{{constructor.constructor("window.__pwned=1")()}}',
   '`;window.__pwned=1;`',

@@ -5,7 +5,7 @@ import { ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-i
 import { CatalogueLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
-import { CatalogueImport } from '../../models/index.ts';
+import type { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { commitCatalogueImport, checkCatalogueImport } from '../../services/catalogue/index.ts';
 import { loadImport } from '../load.ts';

@@ -4,7 +4,7 @@
  */
 export { deleteMedia } from './media-delete.ts';
 export { objectsForMedia, suggestObjects, type LinkedObject } from './media-objects.ts';
-export { RENDITIONS_JOB, requestRenditions, runRenditionsJob } from './media-renditions-job.ts';
+export { RENDITIONS_JOB, runRenditionsJob } from './media-renditions-job.ts';
 export { searchMedia } from './media-search.ts';
 export { sweepOrphanMedia } from './media-sweep.ts';
 export { updateMedia } from './media-update.ts';

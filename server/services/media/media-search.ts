@@ -17,7 +17,7 @@ const showsObject = (escapedPattern: string) =>
  * @returns one page of images with their renditions and uploader, and the total found
  */
 export async function searchMedia(query: MediaListQuery): Promise<{ rows: Media[]; total: number; page: number }> {
-  const escape = (text: string) => getSequelize().escape(likePattern(text));
+  const quoted = (text: string) => getSequelize().escape(likePattern(text));
   const where: WhereOptions[] = [];
   if (query.q) {
     const pattern = likePattern(query.q);
@@ -26,11 +26,11 @@ export async function searchMedia(query: MediaListQuery): Promise<{ rows: Media[
         { altText: { [Op.iLike]: pattern } },
         { fileName: { [Op.iLike]: pattern } },
         { credit: { [Op.iLike]: pattern } },
-        showsObject(escape(query.q)),
+        showsObject(quoted(query.q)),
       ],
     });
   }
-  if (query.object) where.push(showsObject(escape(query.object)));
+  if (query.object) where.push(showsObject(quoted(query.object)));
   if (query.credit) where.push({ credit: { [Op.iLike]: likePattern(query.credit) } });
   if (query.licence) where.push({ licenceId: query.licence === 'none' ? null : query.licence });
 

@@ -6,7 +6,6 @@ export { dashboardFor, setDigest } from './page-dashboard.ts';
 export { loadPageDetail } from './page-detail.ts';
 export { diffRevisions } from './page-diff.ts';
 export { DIGEST_JOB, PUBLISH_DUE_JOB, runDigestJob, runPublishDueJob } from './page-digest.ts';
-export { PageConflictError } from './page-errors.ts';
 export { listPages } from './page-list.ts';
 export { publishPage, schedulePublish, unpublishPage } from './page-publish.ts';
 export { pagesUsingMedia, queuePageRecheck } from './page-reactions.ts';

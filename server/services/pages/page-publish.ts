@@ -1,7 +1,7 @@
 import { Op } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { logger } from '../../logger.ts';
-import { Page, User } from '../../models/index.ts';
+import { Page, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { publishingEvents } from '../publishing/index.ts';
 import { WorkflowError } from './page-errors.ts';

@@ -90,7 +90,7 @@ export async function clearSettledRechecks(statementIds: string[]): Promise<stri
   for (const { id } of rows) {
     const done = await getSequelize().transaction(async (transaction) => {
       const page = await Page.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!page || page.status !== 'needs_recheck' || !page.approvedSnapshot) return false;
+      if (page?.status !== 'needs_recheck' || !page.approvedSnapshot) return false;
       const signed = page.approvedSnapshot.statementTexts;
       const statements = await Statement.findAll({ where: { id: { [Op.in]: Object.keys(signed) } }, transaction });
       if (statements.length !== Object.keys(signed).length) return false;

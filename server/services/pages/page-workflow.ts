@@ -2,7 +2,7 @@ import { getSequelize } from '../../db.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { pageSentBackMail, pageSubmittedMail } from '../../mail/page-templates.ts';
 import { normaliseFlagText } from '@shared/editor/number-check.ts';
-import { Page, PageComment, PageRevision, User } from '../../models/index.ts';
+import { Page, PageComment, PageRevision, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { approvalProblems, flagsWithResolutions, submissionProblems } from './page-checks.ts';
 import { ChecksFailedError, WorkflowError } from './page-errors.ts';

@@ -26,7 +26,7 @@ const RECHECK_MS = CHECK_MS / 2;
 const entries = new Map<string, CachedFeed>();
 const pending = new Map<string, Promise<CachedFeed>>();
 let generation = 0;
-let stats = { builds: 0, checks: 0 };
+const stats = { builds: 0, checks: 0 };
 
 const keyOf = (t: FeedTarget) => t.channelId ?? `venue:${t.venueId}`;
 const sha = (data: string | Buffer) => createHash('sha256').update(data).digest('base64url');
@@ -147,9 +147,4 @@ export function invalidateKioskFeeds(reason: string): void {
 /** Counters for the benchmark and tests: how many builds and fingerprint checks ran. */
 export function kioskFeedStats(): { builds: number; checks: number } {
   return { ...stats };
-}
-
-/** Resets counters (tests). */
-export function resetKioskFeedStats(): void {
-  stats = { builds: 0, checks: 0 };
 }

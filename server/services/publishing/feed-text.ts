@@ -12,7 +12,6 @@ export function escapeMarkup(value: string): string {
  * which would make an Atom document ill-formed even when escaped.
  */
 export function xmlSafe(value: string): string {
-  // eslint-disable-next-line no-control-regex
   return value.replace(
     /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]|[\uD800-\uDBFF](?![\uDC00-\uDFFF])|(?<![\uD800-\uDBFF])[\uDC00-\uDFFF]/g,
     '',

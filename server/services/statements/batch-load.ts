@@ -29,7 +29,7 @@ interface StatementRow {
  * @param settings the adopted settings
  */
 export async function batchModelFor(settings: SettingsSnapshot): Promise<BatchModel | null> {
-  let description;
+  let description: ReturnType<typeof resolveModel>['description'];
   try {
     description = resolveModel(settings.model).description;
   } catch {

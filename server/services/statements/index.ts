@@ -11,5 +11,4 @@ export { enqueueRecompute, RECOMPUTE_BATCH, RECOMPUTE_JOB, recomputeStatements, 
 export { queueRecompute } from './triggers.ts';
 export { recomputeAfterRulesRelease } from './rules-release.ts';
 export { listStatements, loadStatementView } from './statement-read.ts';
-export { readWorking } from './working-store.ts';
 export { statementIncludes } from './statement-read.ts';

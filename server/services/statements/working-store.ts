@@ -31,7 +31,9 @@ export async function saveSkeletons(skeletons: Iterable<[string, SkeletonJson]>,
      ON CONFLICT (id) DO NOTHING`,
     { bind: [JSON.stringify(fresh.map(([id, skeleton]) => ({ id, skeleton })))], transaction },
   );
-  transaction.afterCommit(() => fresh.forEach(([id, json]) => remember(id, json)));
+  transaction.afterCommit(() => {
+    for (const [id, json] of fresh) remember(id, json);
+  });
 }
 
 /**

@@ -46,7 +46,7 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   if (token.expiresAt.getTime() < Date.now())
     throw BadRequestError(`This ${what} has expired. Ask for a new one.`, 'invalid_token');
   const user = await User.findByPk(token.userId, { transaction });
-  if (!user || !user.active) throw BadRequestError('This account has been deactivated.', 'invalid_token');
+  if (!user?.active) throw BadRequestError('This account has been deactivated.', 'invalid_token');
   token.usedAt = new Date();
   await token.save({ transaction });
   return user;

@@ -2,10 +2,9 @@
  * People: sign-in, passwords, invitations, one-time tokens, accounts and their sessions.
  * The public face of the domain: other domains and routes import from here, never a file inside.
  */
-export { consumeToken, hashToken, issueToken, purgeOldTokens, runTokenPurgeJob, TOKEN_PURGE_JOB } from './auth-tokens.ts';
-export { assertAcceptablePassword, hashPassword, verifyPassword } from './passwords.ts';
+export { hashToken, runTokenPurgeJob, TOKEN_PURGE_JOB } from './auth-tokens.ts';
+export { hashPassword, verifyPassword } from './passwords.ts';
 export { signIn } from './sign-in.ts';
 export { inviteUser, resendInvitation } from './user-invite.ts';
-export { endUserSessions } from './user-sessions.ts';
 export { updateUser } from './user-update.ts';
 export { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken } from './account-passwords.ts';

@@ -8,13 +8,8 @@ import { verifyPassword } from './passwords.ts';
 
 /** Free attempts before an address is slowed down. */
 export const FREE_ATTEMPTS = 5;
+// After the free attempts each failure doubles the wait (30 s, 1 min, 2 min …) up to this (in the SQL below).
 const MAX_DELAY_MS = 15 * 60_000;
-
-/** After the free attempts each failure doubles the wait: 30 s, 1 min, 2 min … up to 15 min. */
-export function throttleDelayMs(failedAttempts: number): number {
-  if (failedAttempts < FREE_ATTEMPTS) return 0;
-  return Math.min(MAX_DELAY_MS, 30_000 * 2 ** (failedAttempts - FREE_ATTEMPTS));
-}
 
 const wrongDetails = () =>
   AuthenticationError('That e-mail address and password do not match an active account.', 'wrong_credentials');

@@ -95,7 +95,9 @@ function neutrinoMasses(Neff: number, Tcmb0: number, m_nu: number | number[] | u
   if (Tcmb0 === 0 || n === 0) return [];
   if (m_nu === undefined) return new Array<number>(n).fill(0);
   const masses = Array.isArray(m_nu) ? m_nu : new Array<number>(n).fill(m_nu);
-  masses.forEach((m, i) => requireNonNegative(Array.isArray(m_nu) ? `m_nu[${i}]` : 'm_nu', m));
+  masses.forEach((m, i) => {
+    requireNonNegative(Array.isArray(m_nu) ? `m_nu[${i}]` : 'm_nu', m);
+  });
   if (masses.length !== n) {
     throw new CalcError('invalid_model', `model.m_nu must list floor(Neff) = ${n} masses (got ${masses.length})`);
   }
@@ -186,7 +188,7 @@ function findBounce(a4e2: (a: number) => number): number {
   if (!(a4e2(1) > 0)) return 0;
   const grid: number[] = [];
   for (let i = 4096; i >= 1; i--) grid.push(i / 4096);
-  for (let k = 1; k <= 2048; k++) grid.push(Math.pow(10, -3.6 - (k * 8) / 2048));
+  for (let k = 1; k <= 2048; k++) grid.push(10 ** (-3.6 - (k * 8) / 2048));
   grid.sort((x, y) => y - x);
   let prev = 1;
   for (const a of grid) {

@@ -53,6 +53,3 @@ export const WMAP9: Preset = {
 
 /** Presets by name. */
 export const PRESETS = { planck18: PLANCK18, wmap9: WMAP9 } as const;
-
-/** A preset's name. */
-export type PresetName = keyof typeof PRESETS;

@@ -277,7 +277,7 @@ export function checkInputs(quantity: CalcQuantity, present: Set<string>): void 
         'missing_input',
         `${missing} is required with ${touched[0].filter((k) => present.has(k)).join(', ')} for ${quantity}`,
       );
-    touched[0].forEach((k) => allowed.add(k));
+    for (const k of touched[0]) allowed.add(k);
   }
   if (spec.band && !present.has('band')) throw new CalcError('missing_input', `band is required for ${quantity}`);
   for (const k of present) {

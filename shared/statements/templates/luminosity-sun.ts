@@ -7,8 +7,6 @@ import { aboutEqual, readRatio } from '../ratio.ts';
 import type { StatementTemplate } from '../types.ts';
 import { bandFootnote, frenchCount, isFrench } from './words.ts';
 
-export { pickMagnitude } from '../photometry.ts';
-
 /** Half-width of a luminosity ratio's interval, in magnitudes. */
 const ratioHalfWidthMag = (value: number, interval?: { low: number; high: number }) =>
   interval && interval.low > 0 ? 2.5 * Math.max(Math.log10(interval.high / value), Math.log10(value / interval.low)) : null;

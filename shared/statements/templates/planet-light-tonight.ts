@@ -120,7 +120,10 @@ function sentence(locale: StatementLocale, englishName: string, planet: PlanetId
 const dateFormats = new Map<StatementLocale, Intl.DateTimeFormat>();
 function longDate(locale: StatementLocale, localDate: string): string {
   let f = dateFormats.get(locale);
-  if (!f) dateFormats.set(locale, (f = new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' })));
+  if (!f) {
+    f = new Intl.DateTimeFormat(locale, { dateStyle: 'long', timeZone: 'UTC' });
+    dateFormats.set(locale, f);
+  }
   return f.format(new Date(`${localDate}T12:00:00Z`));
 }
 

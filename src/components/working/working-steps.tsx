@@ -5,8 +5,6 @@ import { formatFull, formatSig } from './format-number.ts';
 import { ModelSummary, describeSource } from './model-summary.tsx';
 import { SymbolText } from './symbol-text.tsx';
 
-export { ModelSummary } from './model-summary.tsx';
-
 /** Finds the earlier step whose result a "previous step" input refers to, so the source can say which. */
 function producingStep(steps: Step[], before: number, symbol: string): number | undefined {
   for (let i = before - 1; i >= 0; i--) if (steps[i].result.symbol === symbol) return i + 1;
@@ -31,6 +29,7 @@ function ValueCell({ value, exact }: { value: number | string; exact: boolean })
 
 function ValueRows({ steps, index, values }: { steps: Step[]; index: number; values: WorkingValue[] }) {
   return values.map((v, i) => (
+    // biome-ignore lint/suspicious/noArrayIndexKey: a step's values are a fixed list from the engine, never reordered; a symbol can repeat
     <tr key={`${v.symbol}-${i}`} className="border-t border-rule/70">
       <th scope="row" className="py-1.5 pr-3 text-left font-mono text-[13px] font-normal whitespace-nowrap">
         <SymbolText text={v.symbol} />
@@ -172,6 +171,7 @@ export function WorkingSteps({
       {model && <ModelSummary model={model} />}
       <ol className="space-y-3" aria-label={`${working.length} ${working.length === 1 ? 'step' : 'steps'}`}>
         {working.map((_, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: steps refer to each other by position and are never reordered
           <StepItem key={i} steps={working} index={i} />
         ))}
       </ol>

@@ -96,9 +96,6 @@ export function fieldsFor(quantity: CalcQuantity, group: number): QuantityFields
   };
 }
 
-/** True when the quantity, with the chosen inputs, takes a redshift (so a distance–redshift chart applies). */
-export const takesRedshift = (f: QuantityFields): boolean => f.required.includes('z');
-
 /**
  * Parses a typed number; accepts a typographic minus and exponents ("1e-3").
  * @returns the number, undefined when empty, or NaN when it is not a number

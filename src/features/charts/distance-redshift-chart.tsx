@@ -73,12 +73,18 @@ export function DistanceRedshiftChart({ z, zInterval, model, alternatives = [], 
   const zMin = chartZMin(z);
   const zMax = Math.max(10, 2 * z);
   const modelsKey = JSON.stringify([model, ...alternatives]);
+  // Keyed on the models' contents, and read back from that key: callers often rebuild the model
+  // objects on every render, and models that serialise alike are the same model.
   const models = useMemo(() => {
     const seen = new Set<string>();
-    return [model, ...alternatives]
-      .filter((m) => (seen.has(JSON.stringify(m)) ? false : (seen.add(JSON.stringify(m)), true)))
-      .map(chartModel);
-    // Keyed on the models' contents: callers often rebuild the model objects on every render.
+    const distinct: CalcModel[] = [];
+    for (const m of JSON.parse(modelsKey) as CalcModel[]) {
+      const key = JSON.stringify(m);
+      if (seen.has(key)) continue;
+      seen.add(key);
+      distinct.push(m);
+    }
+    return distinct.map(chartModel);
   }, [modelsKey]);
   const chosen = models[0];
   const hubbleH0 = chosen.H0;

@@ -18,7 +18,7 @@ const QUANTITIES = [
   'distance_modulus',
 ] as const;
 
-function valueOf(result: ReturnType<typeof calculate>): number {
+function resultValue(result: ReturnType<typeof calculate>): number {
   if ('error' in result) throw new Error(`${result.error.code}: ${result.error.message}`);
   return result.value;
 }
@@ -35,14 +35,14 @@ describe(`astropy ${fixture.astropy_version} reference fixture`, () => {
       let worst = 0;
       for (const c of m.cases) {
         for (const q of QUANTITIES) {
-          const ours = valueOf(calculate({ quantity: q, inputs: { z: c.z }, model: m.model }));
+          const ours = resultValue(calculate({ quantity: q, inputs: { z: c.z }, model: m.model }));
           const ref = c[q];
           const rel = Math.abs(ours - ref) / Math.abs(ref);
           worst = Math.max(worst, rel);
           expect(rel, `${q} at z = ${c.z}: ours ${ours}, astropy ${ref}`).toBeLessThanOrEqual(tol);
         }
       }
-      const age = valueOf(calculate({ quantity: 'age_now', model: m.model }));
+      const age = resultValue(calculate({ quantity: 'age_now', model: m.model }));
       expect(Math.abs(age - m.age_now) / m.age_now).toBeLessThanOrEqual(tol);
       expect(worst).toBeLessThanOrEqual(tol);
     });

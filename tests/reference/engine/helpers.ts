@@ -6,7 +6,7 @@ import { calculate } from '../../../shared/engine/calculate.ts';
  * @param request the calculation request
  * @returns the result's value
  */
-export function valueOf(request: unknown): number {
+export function calcValue(request: unknown): number {
   const r = calculate(request);
   if ('error' in r) throw new Error(`${r.error.code}: ${r.error.message}`);
   return r.value;

@@ -27,7 +27,11 @@ function differences(actual: unknown, expected: unknown, path: string, out: stri
     const e = expected.match(NUMBER) ?? [];
     if (actual.replace(NUMBER, '#') !== expected.replace(NUMBER, '#') || a.length !== e.length)
       out.push(`${path}: ${JSON.stringify(actual)} ≠ ${JSON.stringify(expected)}`);
-    else e.forEach((x, i) => differences(Number(a[i]), Number(x), `${path}[number ${i}]`, out));
+    else {
+      e.forEach((x, i) => {
+        differences(Number(a[i]), Number(x), `${path}[number ${i}]`, out);
+      });
+    }
     return;
   }
   if (Array.isArray(expected) || (typeof expected === 'object' && expected !== null)) {
@@ -51,7 +55,9 @@ describe('Monte Carlo results stay as frozen', () => {
 
   it('every calculation gives the frozen value, interval, working and errors', () => {
     const out: string[] = [];
-    calcCases().forEach((request, i) => differences(frozen(calculate(request) as never), fixture.calc[i], `calc[${i}]`, out));
+    calcCases().forEach((request, i) => {
+      differences(frozen(calculate(request) as never), fixture.calc[i], `calc[${i}]`, out);
+    });
     expect(out).toEqual([]);
   }, 60_000);
 

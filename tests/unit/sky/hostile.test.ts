@@ -18,7 +18,10 @@ function refusal(change: Record<string, unknown>): SkyInputError {
 /** Every number in the result is finite: no NaN or Infinity leaks into JSON. */
 function assertFinite(value: unknown, path = 'sky'): void {
   if (typeof value === 'number') expect(Number.isFinite(value), path).toBe(true);
-  else if (Array.isArray(value)) value.forEach((v, i) => assertFinite(v, `${path}[${i}]`));
+  else if (Array.isArray(value))
+    value.forEach((v, i) => {
+      assertFinite(v, `${path}[${i}]`);
+    });
   else if (value && typeof value === 'object') for (const [k, v] of Object.entries(value)) assertFinite(v, `${path}.${k}`);
 }
 

@@ -37,7 +37,7 @@ describe('the stored form of a working', () => {
     let plainBytes = 0;
     for (const working of all) {
       const { stored } = packWorking(working, skeletonId);
-      skeletonIds(stored).forEach((id) => ids.add(id));
+      for (const id of skeletonIds(stored)) ids.add(id);
       packedBytes += JSON.stringify(stored).length;
       plainBytes += JSON.stringify(working).length;
     }
@@ -67,7 +67,7 @@ describe('the stored form of a working', () => {
     const store = new Map<string, string>();
     const packed = [one, two].map((w) => {
       const { stored, skeletons } = packWorking(w, skeletonId);
-      skeletons.forEach((json, id) => store.set(id, json));
+      for (const [id, json] of skeletons) store.set(id, json);
       return stored;
     });
     expect(unpackWorking(packed[0], (id) => store.get(id))).toEqual(one);

@@ -25,9 +25,9 @@ export function Component() {
               type="button"
               aria-expanded={openId === m.id}
               onClick={() => setOpenId(openId === m.id ? undefined : m.id)}
-              className="flex w-full items-baseline justify-between gap-4 px-4 py-3 text-left hover:bg-wash"
+              className="flex w-full flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-4 py-3 text-left hover:bg-wash"
             >
-              <span>
+              <span className="min-w-0 [overflow-wrap:anywhere]">
                 <span className="block font-medium">{m.subject}</span>
                 <span className="block text-xs text-muted">To {m.to}</span>
               </span>

@@ -98,7 +98,7 @@ export function Component() {
       />
       <div className="space-y-4">
         {adding.open && <ObjectForm onDone={(o) => navigate(paths.catalogueObject.href(o.id))} onCancel={adding.close} />}
-        <div className="flex flex-wrap items-end gap-3" role="search" aria-label="Filter the catalogue">
+        <search className="flex flex-wrap items-end gap-3" aria-label="Filter the catalogue">
           <label className="text-sm">
             <span className="mb-1 block font-medium">Search</span>
             <input
@@ -139,7 +139,7 @@ export function Component() {
               ))}
             </select>
           </label>
-        </div>
+        </search>
         {objects.error && <Notice tone="error">{objects.error.message}</Notice>}
         {objects.isPending && <p className="text-sm text-muted">Loading the catalogue…</p>}
         {objects.data && (

@@ -85,6 +85,7 @@ export function Component() {
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           {p.published && (
+            // biome-ignore lint/a11y/useSemanticElements: two toggle buttons, not form fields; a fieldset would bring form semantics and its own box
             <div
               role="group"
               aria-label="Which version"

@@ -48,7 +48,7 @@ const resolver: Resolver<CalcFormValues> = async (values) => {
   const built = buildRequest(values);
   if ('request' in built) return { values, errors: {} };
   const errors: Record<string, unknown> = {};
-  built.problems.forEach((p) => putError(errors, p.path, p.message));
+  for (const p of built.problems) putError(errors, p.path, p.message);
   return { values: {}, errors: errors as FieldErrors<CalcFormValues> };
 };
 

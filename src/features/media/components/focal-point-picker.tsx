@@ -55,6 +55,10 @@ export function FocalPointPicker({
         tabIndex={0}
         aria-label="Focal point"
         aria-describedby="focal-help-text"
+        // A slider needs one number: the across position; the text names both.
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={Math.round(value.x * 100)}
         aria-valuetext={`${Math.round(value.x * 100)}% across, ${Math.round(value.y * 100)}% down`}
         onClick={onClick}
         onKeyDown={onKey}

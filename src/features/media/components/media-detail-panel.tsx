@@ -16,6 +16,7 @@ const bytesText = (b: number) =>
 export function MediaDetailPanel({ id, onClose }: { id: string; onClose: () => void }) {
   const media = useMedia(id);
   const heading = useRef<HTMLHeadingElement>(null);
+  // biome-ignore lint/correctness/useExhaustiveDependencies: runs again on purpose when another image opens in the same panel, so focus moves to its heading
   useEffect(() => heading.current?.focus(), [id]);
   useEffect(() => {
     const onKey = (e: KeyboardEvent) => e.key === 'Escape' && onClose();

@@ -18,7 +18,7 @@ export function MediaFilters({ onChange }: { onChange: (query: MediaListQuery) =
   const settledQuery = useDebouncedValue(query, 250);
   useEffect(() => onChange(settledQuery), [settledQuery, onChange]);
   return (
-    <div role="search" className="grid gap-3 sm:grid-cols-[1fr_11rem_16rem]">
+    <search className="grid gap-3 sm:grid-cols-[1fr_11rem_16rem]">
       <TextField
         label="Search"
         type="search"
@@ -40,6 +40,6 @@ export function MediaFilters({ onChange }: { onChange: (query: MediaListQuery) =
           </option>
         ))}
       </SelectField>
-    </div>
+    </search>
   );
 }

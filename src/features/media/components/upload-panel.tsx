@@ -52,6 +52,7 @@ export function UploadPanel({ maxBytes, onOpen }: { maxBytes: number; onOpen: (i
 
   return (
     <section aria-label="Upload images" className="space-y-3">
+      {/* biome-ignore lint/a11y/noStaticElementInteractions: dropping files is a pointer shortcut; the file button inside does the same from the keyboard */}
       <div
         onDragOver={(e) => {
           e.preventDefault();

@@ -37,6 +37,7 @@ export function NumberCheckPanel({
       </p>
       <ul className="space-y-2">
         {flags.map((f, i) => (
+          // biome-ignore lint/suspicious/noArrayIndexKey: flags come in text order from the page and are never reordered; the index only separates repeats
           <li key={`${f.normalised}-${f.from}-${i}`} className="rounded-md border border-rule px-3 py-2 text-sm">
             <button type="button" className="number-flag text-left font-serif" onClick={() => onShow?.(f)}>
               {f.text}

@@ -85,6 +85,7 @@ export function ReviewFlags({
       ) : (
         <ul className="space-y-2">
           {flags.map((f, i) => (
+            // biome-ignore lint/suspicious/noArrayIndexKey: the same number can be typed twice; the list comes in text order and is never reordered
             <FlagRow key={`${f.normalised}-${i}`} flag={f} canReview={canReview} onResolve={onResolve} />
           ))}
         </ul>

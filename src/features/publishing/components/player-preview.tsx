@@ -1,17 +1,14 @@
-import { useEffect, useState } from 'react';
-
 /**
  * The real player in a 16:9 frame, playing this channel's feed through the signed-in session
- * (`/kiosk?preview=<id>`). Reloaded after each edit so the change shows at once.
+ * (`/kiosk?preview=<id>`). Keyed on the channel's version, so the frame reloads after each edit and
+ * the change shows at once.
  */
 export function PlayerPreview({ channelId, version }: { channelId: string; version: number }) {
-  const [key, setKey] = useState(0);
-  useEffect(() => setKey((k) => k + 1), [version]);
   return (
     <figure className="space-y-2">
       <div className="relative aspect-video w-full overflow-hidden rounded-lg border border-rule bg-black">
         <iframe
-          key={key}
+          key={version}
           title="Live preview of the kiosk player"
           src={`/kiosk?preview=${channelId}`}
           className="absolute inset-0 h-full w-full border-0"

@@ -40,6 +40,7 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
   const [open, setOpen] = useState<string | null>(null);
   const [focusAfterMove, setFocusAfterMove] = useState<{ id: string; dir: 'up' | 'down' } | null>(null);
 
+  // biome-ignore lint/correctness/useExhaustiveDependencies: runs again when the slides come back in their new order, so the moved row's button exists to take focus
   useEffect(() => {
     if (!focusAfterMove) return;
     const el = document.querySelector<HTMLButtonElement>(

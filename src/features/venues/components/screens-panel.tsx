@@ -18,10 +18,9 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
           <p className="text-sm text-muted">
             Type this code on the screen’s player page. It works once, until {formatTime(pairing.expiresAt)}.
           </p>
-          <p
-            className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums"
-            aria-label={`Pairing code ${pairing.pairingCode.split('').join(' ')}`}
-          >
+          {/* Spelled out one character at a time for screen readers, so the code is not read as a word. */}
+          <p className="sr-only">{`Pairing code ${pairing.pairingCode.split('').join(' ')}`}</p>
+          <p className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums" aria-hidden="true">
             {pairing.pairingCode}
           </p>
           <Notice tone="warning">It is shown only this once. If it is lost, re-pair the screen for a new one.</Notice>
