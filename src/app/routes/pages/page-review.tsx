@@ -81,7 +81,7 @@ export function Component() {
           <Notice tone="error">{error.message}</Notice>
         </div>
       )}
-      <div className="grid gap-8 lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]">
+      <div className="grid grid-cols-[minmax(0,1fr)] gap-8 [overflow-wrap:anywhere] lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
           {p.published && (
@@ -109,7 +109,7 @@ export function Component() {
               </button>
             </div>
           )}
-          <article className="rounded-lg border border-rule bg-panel px-8 py-6">
+          <article className="rounded-lg border border-rule bg-panel px-4 py-6 sm:px-8">
             <h1 className="mb-4 font-serif text-3xl font-semibold">{showLive ? published.data?.title : p.title}</h1>
             {html !== undefined ? (
               <PageHtml html={html} onStatement={setWorking} />
@@ -119,7 +119,7 @@ export function Component() {
           </article>
           <PageComments pageId={p.id} canComment={p.can.comment} />
         </div>
-        <div className="space-y-6">
+        <div className="min-w-0 space-y-6">
           <ReviewStatements
             page={p}
             busyId={signStatement.isPending ? (signStatement.variables ?? null) : null}
