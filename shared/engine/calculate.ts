@@ -249,20 +249,3 @@ export function calculate(request: unknown): CalcResult {
     return { ...base, error: { code: 'internal_error', message: 'the calculation failed unexpectedly for these inputs' } };
   }
 }
-
-/**
- * Parses one line of JSON and computes it, for the command-line tool.
- * @param line one JSON request
- * @returns the result; malformed JSON gives an `invalid_json` error result
- */
-export function calculateLine(line: string): CalcResult {
-  let parsed: unknown;
-  try {
-    parsed = JSON.parse(line);
-  } catch (e) {
-    return {
-      error: { code: 'invalid_json', message: `the line is not valid JSON: ${e instanceof Error ? e.message : String(e)}` },
-    };
-  }
-  return calculate(parsed);
-}

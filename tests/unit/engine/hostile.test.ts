@@ -1,6 +1,7 @@
 /** Bad input: each case returns a clear error that names the input, never a throw. */
 import { describe, expect, it } from 'vitest';
-import { calculate, calculateLine } from '../../../shared/engine/calculate.ts';
+import { answerLine } from '../../../shared/contract/calculate.ts';
+import { calculate } from '../../../shared/engine/calculate.ts';
 
 function errorOf(request: unknown): { code: string; message: string } {
   const r = calculate(request);
@@ -25,7 +26,7 @@ describe('hostile requests', () => {
       expect(e.code).toBe('invalid_input');
       expect(e.message).toMatch(/^z must be a finite number/);
     }
-    const line = calculateLine('{"quantity":"luminosity_distance","inputs":{"z":1e999}}');
+    const line = answerLine('{"quantity":"luminosity_distance","inputs":{"z":1e999}}');
     expect('error' in line && line.error.message).toMatch(/^z must be a finite number/);
     expect(errorOf({ quantity: 'age_now', model: { H0: 'NaN', Om0: 0.3 } }).message).toMatch(
       /^model\.H0 must be a finite number/,
@@ -201,7 +202,7 @@ describe('hostile requests', () => {
   });
 
   it('malformed JSON lines give an error result', () => {
-    expect(calculateLine('{"quantity":')).toMatchObject({ error: { code: 'invalid_json' } });
+    expect(answerLine('{"quantity":')).toMatchObject({ error: { code: 'invalid_json' } });
   });
 
   it('echoes the id, even on errors', () => {
