@@ -11,6 +11,7 @@ export const FEED_EXTENSION_VERSION = 1;
 /** How the player lays a slide out. */
 export type SlideLayout = 'text' | 'image-text' | 'image' | 'sky-table';
 
+/** Every address in the feed is absolute (PUBLIC_URL, or the CDN's): images and pages alike. */
 export interface FeedImage {
   /** 16:9 rendition for 1920 × 1080 screens (JPEG, read by every device). */
   hd: string;
@@ -75,6 +76,8 @@ export interface FeedSlide {
 
 export interface FeedItem {
   id: string;
+  /** A page slide's public page, absolute (`${PUBLIC_URL}/explore/<slug>`; JSON Feed's item `url`). */
+  url?: string;
   title: string;
   content_html: string;
   image?: string;

@@ -11,6 +11,31 @@ export type FeedAnswer =
 const TIMEOUT_MS = 15_000;
 
 /**
+ * The feed gives absolute image addresses from PUBLIC_URL, which a screen on the building's own
+ * network may not reach (or its Content-Security-Policy may not allow). This server's renditions
+ * (`/media/files/…`) are read from the origin the player was loaded from; a CDN's stay as they are.
+ */
+function servedHere(url: string): string {
+  try {
+    const parsed = new URL(url, location.href);
+    return parsed.pathname.startsWith('/media/files/') ? `${location.origin}${parsed.pathname}` : url;
+  } catch {
+    return url;
+  }
+}
+
+function withImagesFromHere(feed: KioskFeed): KioskFeed {
+  for (const item of feed.items ?? []) {
+    const image = item._starproof?.slide?.image;
+    if (image) {
+      image.hd = servedHere(image.hd);
+      image.uhd = servedHere(image.uhd);
+    }
+  }
+  return feed;
+}
+
+/**
  * Revalidates the feed with If-None-Match. Only a 401 means "pair again"; anything else that
  * goes wrong (no network, a timeout, a 5xx, a broken body) means "keep playing what you have".
  * @param url the kiosk feed or the staff preview feed
@@ -31,7 +56,7 @@ export async function fetchFeed(url: string, token: string | null, etag: string 
     if (!res.ok) return { kind: 'unreachable', reason: `server answered ${res.status}` };
     const feed = (await res.json()) as KioskFeed;
     if (!feed || !Array.isArray(feed.items) || !feed._starproof) return { kind: 'unreachable', reason: 'not a Starproof feed' };
-    return { kind: 'fresh', feed, etag: res.headers.get('etag') ?? '' };
+    return { kind: 'fresh', feed: withImagesFromHere(feed), etag: res.headers.get('etag') ?? '' };
   } catch (err) {
     return { kind: 'unreachable', reason: err instanceof Error ? err.message : 'network error' };
   } finally {

@@ -16,6 +16,7 @@ import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-te
 import { getSkySnapshot } from '../sky/index.ts';
 import { publicPageTexts } from '../pages/index.ts';
 import { publicStatements } from '../statements/index.ts';
+import { getPublicPages } from './public-pages.ts';
 
 /** What the feed is for: a channel at its venue, or a screen with no channel (a holding feed). */
 export interface FeedTarget {
@@ -71,7 +72,8 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   const imageOf = (s: ChannelSlide) =>
     (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
   const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
-  const images = await loadPublishedImages(mediaIds);
+  const [images, publicPages] = await Promise.all([loadPublishedImages(mediaIds), pageIds.length ? getPublicPages() : null]);
+  const pageUrls = new Map(publicPages?.pages.map((p) => [p.id, p.url]));
 
   let validUntil: number | null = null;
   const until = (t: number) => (validUntil = validUntil === null ? t : Math.min(validUntil, t));
@@ -111,8 +113,10 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       const text = firstParagraphText(shown.html);
       const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
+      const url = pageUrls.get(s.pageId!);
       items.push({
         id: s.id,
+        ...(url ? { url } : {}),
         title: snapshot.title,
         content_html: html,
         ...(img ? { image: img.image.hd } : {}),

@@ -4,12 +4,13 @@ import { findLicence } from '@shared/media/licences.ts';
 import { renditionUrl } from '../../media/keys.ts';
 import { Media, MediaRendition } from '../../models/index.ts';
 import { missingForPublishing } from '../media/index.ts';
+import { absoluteUrl } from './public-urls.ts';
 
 /** A library image as a kiosk slide or the public API shows it: always with its credit and licence. */
 export interface PublishedImage {
   id: string;
   image: FeedImage;
-  /** The page-size rendition, for the public API. */
+  /** The page-size rendition, for the public API. Every address here is absolute (public-urls.ts). */
   pageUrl: string | null;
   credit: string;
   licence: string;
@@ -45,12 +46,12 @@ export async function loadPublishedImages(mediaIds: string[]): Promise<Map<strin
     found.set(m.id, {
       id: m.id,
       image: {
-        hd: renditionUrl(hd.storageKey),
-        uhd: renditionUrl(uhd.storageKey),
+        hd: absoluteUrl(renditionUrl(hd.storageKey)),
+        uhd: absoluteUrl(renditionUrl(uhd.storageKey)),
         focal: { x: m.focalX, y: m.focalY },
         alt: m.altText,
       },
-      pageUrl: page ? renditionUrl(page.storageKey) : null,
+      pageUrl: page ? absoluteUrl(renditionUrl(page.storageKey)) : null,
       credit: m.credit,
       licence: licence.label,
       licenceUrl: licence.url,

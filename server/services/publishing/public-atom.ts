@@ -9,7 +9,8 @@ const EPOCH = '1970-01-01T00:00:00.000Z';
 
 /**
  * An Atom 1.0 document (RFC 4287) of the most recently published pages: every text escaped, the
- * page HTML carried as escaped `type="html"` content, links absolute.
+ * page HTML carried as escaped `type="html"` content, links absolute (each entry's public page first,
+ * then its JSON).
  * @param pages published pages, newest first
  * @param baseUrl e.g. https://starproof.example.org (no trailing slash)
  * @param publisher the feed's author name
@@ -26,6 +27,7 @@ export function atomDocument(pages: PublicPageDto[], baseUrl: string, publisher:
       `    <title type="text">${x(p.title)}</title>`,
       `    <updated>${x(at)}</updated>`,
       `    <published>${x(at)}</published>`,
+      `    <link rel="alternate" type="text/html" href="${x(p.url)}"/>`,
       `    <link rel="alternate" type="application/json" href="${x(`${baseUrl}/api/public/pages/${encodeURIComponent(p.slug)}`)}"/>`,
       p.object.name ? `    <category term="${x(p.object.kind || 'object')}" label="${x(p.object.name)}"/>` : '',
       `    <summary type="text">${x(p.summary)}</summary>`,

@@ -6,8 +6,11 @@ import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
 import { publicPageTexts } from '../pages/index.ts';
-import { publicStatements } from '../statements/index.ts';
+import { loadStatementEvidence, publicStatements } from '../statements/index.ts';
+import { getSettings } from '../settings/index.ts';
+import { eyeSafetyReason } from '@shared/editor/caution.ts';
 import { config } from '../../config.ts';
+import { absoluteHtml, publicPageUrl } from './public-urls.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {
@@ -22,6 +25,8 @@ export interface PublicPages {
   bySlugOrId: Map<string, Prepared>;
   /** Atom documents per base URL (links in Atom are absolute). */
   atom: Map<string, Prepared>;
+  /** Rendered public HTML (pages, index, sitemap, fragments) by route key, made on first request. */
+  rendered: Map<string, Prepared>;
   deps: FeedDeps;
   fingerprint: string;
   checkedAt: number;
@@ -46,13 +51,15 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
   );
   const statementIds = [...new Set(rows.flatMap((p) => Object.keys(p.publishedSnapshot!.statementTexts)))];
   const mediaIds = [...new Set(rows.flatMap((p) => mediaIdsInHtml(p.publishedSnapshot!.html)))];
-  const [objects, statements, images] = await Promise.all([
+  const [objects, statements, images, evidence, settings] = await Promise.all([
     SkyObject.findAll({
       where: { id: { [Op.in]: [...new Set(rows.map((p) => p.skyObjectId))] } },
       attributes: ['id', 'name', 'kind'],
     }),
     publicStatements(statementIds),
     loadPublishedImages(mediaIds),
+    loadStatementEvidence(statementIds),
+    getSettings(),
   ]);
   const objectById = new Map(objects.map((o) => [o.id, o]));
   const slugCount = new Map<string, number>();
@@ -65,22 +72,32 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
     // Statements that follow tonight show tonight's wording, in the list and in the page text alike.
     const shown = publicPageTexts(live, statements, p.locale);
     const object = objectById.get(p.skyObjectId);
+    // Two live pages with one title: both get the start of their id, so neither link is ambiguous.
+    const slug = (slugCount.get(base) ?? 0) > 1 ? `${base}-${p.id.slice(0, 8)}` : base;
+    const plainText = `${live.title} ${shown.textHtml.replace(/<[^>]*>/g, ' ')}`;
     return {
       id: p.id,
-      // Two live pages with one title: both get the start of their id, so neither link is ambiguous.
-      slug: (slugCount.get(base) ?? 0) > 1 ? `${base}-${p.id.slice(0, 8)}` : base,
+      slug,
+      url: publicPageUrl(slug),
       title: live.title,
       locale: p.locale,
       object: { id: p.skyObjectId, name: object?.name ?? '', kind: object?.kind ?? '' },
       summary: firstParagraphText(shown.textHtml, 300),
       publishedAt: live.publishedAt ?? null,
-      html: shown.html,
-      statements: Object.entries(shown.statementTexts).map(([id, text]) => ({
-        id,
-        text,
-        note: shown.notes[id] ?? null,
-        asOf: statements.get(id)?.asOf ?? live.signedOffAt,
-      })),
+      html: absoluteHtml(shown.html),
+      eyeSafetyNotice: eyeSafetyReason(object?.kind, plainText) ? settings.eyeSafetyNotice : null,
+      statements: Object.entries(shown.statementTexts).map(([id, text]) => {
+        const working = evidence.get(id);
+        return {
+          id,
+          text,
+          note: shown.notes[id] ?? null,
+          asOf: statements.get(id)?.asOf ?? live.signedOffAt,
+          // The working belongs to the wording it was computed with: a page still showing older
+          // signed wording (the data moved, a reviewer has yet to look) shows none rather than another number's.
+          howWeKnow: working?.texts?.[p.locale as keyof typeof working.texts] === text ? working.evidence(p.locale) : null,
+        };
+      }),
       images: mediaIdsInHtml(live.html).flatMap((id) => {
         const img = images.get(id);
         return img
@@ -110,6 +127,7 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
     list: prepare({ data: pages, meta: { total: pages.length } }),
     bySlugOrId,
     atom: new Map(),
+    rendered: new Map(),
     deps: { channelId: null, venueId: null, pageIds: [], statementIds, mediaIds, skyDate: null, allPublishedPages: true },
   };
 }

@@ -53,9 +53,5 @@ export function formatPosition(raDeg: number | null, decDeg: number | null): str
 export const constellationName = (abbreviation: string | null) =>
   abbreviation ? `${CONSTELLATION_NAMES[abbreviation] ?? abbreviation} (${abbreviation})` : '—';
 
-/** A link for a source: DOI first, then the ADS record for a bibcode, then its URL. */
-export function sourceHref(source: { doi: string | null; bibcode: string | null; url: string | null }): string | null {
-  if (source.doi) return `https://doi.org/${source.doi}`;
-  if (source.bibcode) return `https://ui.adsabs.harvard.edu/abs/${encodeURIComponent(source.bibcode)}`;
-  return source.url;
-}
+/** A link for a source: the one rule, shared with the public pages. */
+export { sourceHref } from '@shared/catalogue/source-link.ts';
