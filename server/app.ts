@@ -14,6 +14,7 @@ import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
 import { apiRouter } from './routes/index.ts';
 import { kioskFeed } from './routes/kiosk-feed.ts';
+import { exploreRouter } from './routes/explore.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
 import { sessionMiddleware } from './session.ts';
@@ -65,6 +66,8 @@ export function createApp(options: AppOptions = {}) {
   app.use('/api', api);
 
   app.use('/media', mediaFilesRouter);
+  // The public site (pages that show their working, the sitemap, embeddable fragments): no session.
+  app.use(exploreRouter);
   if (options.serveClient) serveClient(app);
   app.use(errorHandler);
   return app;

@@ -36,9 +36,10 @@ async function once(title: string, make: () => Promise<void>): Promise<void> {
 }
 
 /**
- * Three demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: one
- * published, one waiting for review (with a hand-typed number for the reviewer), one draft about
- * the Sun with its eye-safety notice. Idempotent per page.
+ * Five demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: three
+ * published (Andromeda; 3C 48, worked out from its redshift; sunspots, with the eye-safety notice),
+ * one waiting for review (with a hand-typed number for the reviewer), one draft about the Sun with
+ * its eye-safety notice. Idempotent per page.
  */
 export async function seedDemoPages(): Promise<void> {
   const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
@@ -92,6 +93,46 @@ export async function seedDemoPages(): Promise<void> {
     await submitPage(quasar.id, undefined, writer, [
       { text: '5 billion light-years', reason: 'Quoted from an old leaflet; please check which distance it means.' },
     ]);
+  });
+
+  // Published for the public site: a statement worked out from a redshift (so "How we know" names
+  // the cosmology), and a page about the Sun that carries the eye-safety notice.
+  const oldLightTitle = '3C 48: light that set out billions of years ago (demo)';
+  await once(oldLightTitle, async () => {
+    const travel = await statementFor('3C 48', 'light-travel', writer);
+    const page = await draft(oldLightTitle, '3C 48', writer, {
+      type: 'doc',
+      content: [
+        p(
+          t(
+            '3C 48 was one of the first quasars found: a point of light that turned out to be the bright centre of a galaxy far beyond our own.',
+          ),
+        ),
+        p(s(travel), t(' Its redshift tells us how much the universe has stretched while that light was on its way.')),
+      ],
+    });
+    await submitPage(page.id, undefined, writer);
+    await signOffStatement(page.id, travel, reviewer);
+    await signOffPage(page.id, reviewer);
+    await publishPage(page.id, editor);
+  });
+
+  const sunSpotsTitle = 'Sunspots from the terrace (demo)';
+  await once(sunSpotsTitle, async () => {
+    const page = await draft(sunSpotsTitle, 'Sun', writer, {
+      type: 'doc',
+      content: [
+        { type: 'eyeSafetyNotice' },
+        p(
+          t(
+            'On clear days our staff show sunspots on the terrace with a solar telescope whose certified filter they fit and check before every session. Sunspots are cooler patches on the Sun’s surface that come and go over days and weeks.',
+          ),
+        ),
+      ],
+    });
+    await submitPage(page.id, undefined, writer);
+    await signOffPage(page.id, reviewer);
+    await publishPage(page.id, editor);
   });
 
   const sunTitle = 'Watching the Sun safely (demo)';

@@ -22,8 +22,10 @@ mediaFilesRouter.get('/files/:name', async (req, res) => {
     'Cache-Control': IMMUTABLE_CACHE,
     ETag: etag,
     'X-Content-Type-Options': 'nosniff',
-    // The public API's consumers may show our images on their own pages.
+    // The public API's consumers may show our images on their own pages, and read them by fetch
+    // (a kiosk reaching this server by another address than PUBLIC_URL caches them that way).
     'Cross-Origin-Resource-Policy': 'cross-origin',
+    'Access-Control-Allow-Origin': '*',
   });
   if (req.get('if-none-match') === etag) {
     res.status(304).end();

@@ -50,7 +50,17 @@ export interface EvidenceInput {
 }
 
 /** Working "sources" that name no source: they point inside the working itself or at the person who typed a value. */
-const NOT_SOURCES = new Set(['', 'previous step', 'this step', 'request', 'the catalogue']);
+const NOT_SOURCES = new Set([
+  '',
+  'previous step',
+  'previous steps',
+  'this step',
+  'uncertainty step',
+  'request',
+  'H0_range in the request',
+  'the catalogue',
+  'the model’s choice',
+]);
 
 /**
  * A working source as the public reads it: the measurement id the staff working carries (so a

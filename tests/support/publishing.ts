@@ -1,3 +1,4 @@
+import type { JSONContent } from '@tiptap/core';
 import supertest from 'supertest';
 import type { Agent } from 'supertest';
 import { Media, MediaRendition, type User } from '../../server/models/index.ts';
@@ -73,10 +74,12 @@ export async function publishedPage(
   title: string,
   mediaId?: string,
   opening = 'A bright quasar you can find with a small telescope.',
+  extra: { caption?: string; blocks?: JSONContent[] } = {},
 ) {
   const q = await quasarWithStatements(crew.writer.agent, crew.writer.user);
   const blocks = [
-    ...(mediaId ? [{ type: 'mediaImage', attrs: { mediaId, caption: null } }] : []),
+    ...(mediaId ? [{ type: 'mediaImage', attrs: { mediaId, caption: extra.caption ?? null } }] : []),
+    ...(extra.blocks ?? []),
     paragraph(text(opening)),
     paragraph(statement(q.distanceId)),
     paragraph(statement(q.nakedEyeId)),
