@@ -1,7 +1,7 @@
 import type { PublicPageDto } from '@shared/schemas/public-page.ts';
 import { html, type Html } from './html.ts';
 import { longDate } from './dates.ts';
-import { description, kindLabel } from './page-view.ts';
+import { aboutLine, description } from './page-view.ts';
 import { pagePath } from './paths.ts';
 
 /** A venue whose sky tonight has a public view. */
@@ -20,7 +20,7 @@ export function indexMain(pages: PublicPageDto[], venues: VenueLink[]): Html {
     ? html`<ul class="cards">${pages.map(
         (p) => html`<li class="card" lang="${p.locale}">
 <h3><a href="${pagePath(p.slug)}">${p.title}</a></h3>
-<p class="kicker">${[p.object.name, kindLabel(p.object.kind)].filter(Boolean).join(' · ')}</p>
+<p class="kicker">${aboutLine(p.object)}</p>
 <p>${description(p)}</p>
 ${p.publishedAt ? html`<p class="meta">Published <time datetime="${p.publishedAt}">${longDate(p.publishedAt, p.locale)}</time></p>` : ''}
 </li>`,

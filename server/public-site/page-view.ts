@@ -8,6 +8,12 @@ import { safeLink, withDisclosures } from './how-we-know.ts';
 /** "Galaxy", or nothing for an unknown kind. */
 export const kindLabel = (kind: string): string => KIND_LABELS[kind as SkyObjectKind] ?? '';
 
+/** "Andromeda Galaxy · Galaxy"; the kind once when it is the name ("Sun"). */
+export function aboutLine(object: PublicPageDto['object']): string {
+  const kind = kindLabel(object.kind);
+  return [object.name, kind.toLowerCase() === object.name.toLowerCase() ? '' : kind].filter(Boolean).join(' · ');
+}
+
 /** The eye-safety notice, first thing under the title, when the page is about looking at the Sun. */
 export const eyeSafety = (notice: string | null): Html | '' =>
   notice ? html`<aside class="eye-safety" aria-label="Eye safety"><p><strong>Eye safety.</strong> ${notice}</p></aside>` : '';
@@ -35,7 +41,7 @@ function pictureCredits(page: PublicPageDto): Html | '' {
  * @param page the page as the public API gives it
  */
 export function pageMain(page: PublicPageDto): Html {
-  const about = [page.object.name, kindLabel(page.object.kind)].filter(Boolean).join(' · ');
+  const about = aboutLine(page.object);
   return html`<article class="page" lang="${page.locale}">
 <header class="page-head">
 ${about ? html`<p class="kicker">${about}</p>` : ''}<h1>${page.title}</h1>

@@ -16,7 +16,7 @@ export function skyTonight(sky: FeedSky, headingLevel: 1 | 2): Html {
   return html`<section class="sky" aria-labelledby="sky-title-${sky.local_date}">
 ${headingLevel === 1 ? html`<h1 id="sky-title-${sky.local_date}">${heading}</h1>` : html`<h2 id="sky-title-${sky.local_date}">${heading}</h2>`}
 <p>The evening of <time datetime="${sky.local_date}">${night}</time>, local time (${sky.time_zone}). Sunset ${sky.sunset}; ${sky.dark_from}. ${capital(sky.darkness)}</p>
-<p>The Moon: ${sky.moon.phase}, ${sky.moon.illuminated_percent} % lit; rises ${sky.moon.rise}, sets ${sky.moon.set}.</p>
+<p>The Moon: ${sky.moon.phase.toLowerCase()}, ${sky.moon.illuminated_percent} % lit; rises ${sky.moon.rise}, sets ${sky.moon.set}.</p>
 <div class="table-wrap" role="region" aria-labelledby="sky-caption-${sky.local_date}" tabindex="0">
 <table>
 <caption id="sky-caption-${sky.local_date}">The planets tonight</caption>

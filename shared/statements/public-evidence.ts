@@ -92,6 +92,9 @@ function measuredValue(input: UsedInput, locale: string): string {
   return `${v}${unit}`;
 }
 
+/** Names that carry a number at full machine precision ("z ± 0.00136794…") read with three figures. */
+const shortNumbers = (text: string) => text.replace(/\d+\.\d{5,}/g, (n) => String(Number(Number(n).toPrecision(3))));
+
 const percent = (fraction: number) => `${Math.round(fraction * 100)} %`;
 
 /** The cosmology in words for visitors: what the universe is assumed to be made of and how fast it grows. */
@@ -164,7 +167,7 @@ export function publicEvidence(input: EvidenceInput, locale = 'en-GB'): PublicEv
       const name = publicSourceName(v.source);
       if (NOT_SOURCES.has(name) || citations.has(name)) continue;
       if (!usedFor.has(name)) usedFor.set(name, new Set());
-      usedFor.get(name)!.add(v.name);
+      usedFor.get(name)!.add(shortNumbers(v.name));
     }
   const method =
     METHOD[input.templateId]?.(input.inputs) ??

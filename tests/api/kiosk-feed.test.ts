@@ -1,6 +1,8 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { appBaseUrl } from '../../server/config.ts';
 import { KioskScreen, Page } from '../../server/models/index.ts';
+import { publicPageUrl } from '../../server/services/publishing/index.ts';
 import { kioskFeedStats } from '../../server/services/publishing/feed-cache.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { buildKioskMedia, getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
@@ -78,7 +80,10 @@ describe('the kiosk feed', () => {
     const [p, i, s] = feed.items;
     expect(p.title).toBe('A quasar for the foyer');
     expect(p.content_html).toContain('<p>A bright quasar you can find with a small telescope.</p>');
-    expect(p.image).toMatch(/^\/media\/files\/[0-9a-f]{64}\.jpg$/);
+    // Absolute addresses (PUBLIC_URL), for images and for the page's public address (issue 17).
+    expect(p.image).toMatch(new RegExp(`^${appBaseUrl()}/media/files/[0-9a-f]{64}\\.jpg$`));
+    expect(p._starproof.slide.image.uhd).toMatch(new RegExp(`^${appBaseUrl()}/media/files/[0-9a-f]{64}\\.jpg$`));
+    expect(p.url).toBe(publicPageUrl('a-quasar-for-the-foyer'));
     expect(Date.parse(p.date_published)).not.toBeNaN();
     expect(p._starproof.slide).toMatchObject({
       kind: 'page',

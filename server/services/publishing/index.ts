@@ -13,8 +13,8 @@ export { type CachedFeed, freshKioskFeed, getKioskFeed, invalidateKioskFeeds } f
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
 export { getPublicPages, invalidatePublicPages, prepare, type Prepared } from './public-pages.ts';
-export { listPublicVenues, venueSkyTonight, type PublicVenue } from './public-sky.ts';
-export { absoluteUrl, exploreIndexUrl, publicBaseUrl, publicPageUrl } from './public-urls.ts';
+export { listPublicVenues, venueSkyTonight } from './public-sky.ts';
+export { exploreIndexUrl, publicBaseUrl, publicPageUrl } from './public-urls.ts';
 export type { ChannelDetailContext } from './channel-view.ts';
 export type { ChannelRowContext } from './channel-view.ts';
 export { listChannels } from './channel-view.ts';

@@ -6,7 +6,7 @@ export { acceptStatementWording } from './accept.ts';
 export { findOrCreateStatement } from './create.ts';
 export { statementEvents } from './events.ts';
 export { previewCosmologyChange } from './model-preview.ts';
-export { loadStatementEvidence, type StatementEvidence } from './statement-evidence.ts';
+export { loadStatementEvidence } from './statement-evidence.ts';
 export { publicNote, publicStatements, publicText, type PublicStatement } from './public-texts.ts';
 export { enqueueRecompute, RECOMPUTE_BATCH, RECOMPUTE_JOB, recomputeStatements, runRecomputeJobs } from './recompute.ts';
 export { queueRecompute } from './triggers.ts';
