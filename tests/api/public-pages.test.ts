@@ -61,7 +61,7 @@ describe('the public API', () => {
     expect(distance.note).toMatch(/^Worked out with the Planck 2018 .* cosmology\.$/);
     expect(nakedEye.note).toBeNull();
     expect(page.html).toMatch(/<sup class="statement-note-ref">1<\/sup>/);
-    expect(page.html).toMatch(/<ol class="statement-notes" role="note"><li value="1">Worked out with the Planck 2018 /);
+    expect(page.html).toMatch(/<ol class="statement-notes" aria-label="Notes"><li value="1">Worked out with the Planck 2018 /);
     expect(page.images[0]).toMatchObject({
       credit: 'Ama & Co <Imaging>',
       licence: 'CC BY 4.0',

@@ -225,7 +225,7 @@ describe('small print reaches the page HTML', () => {
       ]),
     );
     expect(out).toBe(
-      `<p><span class="statement" data-statement-id="${a}">A.</span><sup class="statement-note-ref">1</sup> <span class="statement" data-statement-id="${b}">B.</span><sup class="statement-note-ref">1</sup></p><ol class="statement-notes" role="note"><li value="1">Compared in the Johnson V band.</li></ol>`,
+      `<p><span class="statement" data-statement-id="${a}">A.</span><sup class="statement-note-ref">1</sup> <span class="statement" data-statement-id="${b}">B.</span><sup class="statement-note-ref">1</sup></p><ol class="statement-notes" aria-label="Notes"><li value="1">Compared in the Johnson V band.</li></ol>`,
     );
     expect(withStatementNotes(html, new Map())).toBe(html);
     expect(withStatementNotes(html, new Map([[a, '<b>x</b>']]))).toContain('&lt;b&gt;x&lt;/b&gt;');

@@ -151,7 +151,8 @@ export function withStatementNotes(html: string, notes: Map<string, string>): st
   );
   if (numbers.size === 0) return html;
   const items = [...numbers].map(([note, n]) => `<li value="${n}">${escapeText(note)}</li>`).join('');
-  return `${withRefs}<ol class="statement-notes" role="note">${items}</ol>`;
+  // A label, not role="note": that role would take the list's semantics away from its items (axe: listitem).
+  return `${withRefs}<ol class="statement-notes" aria-label="Notes">${items}</ol>`;
 }
 
 /**
