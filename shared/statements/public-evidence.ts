@@ -132,9 +132,9 @@ const METHOD: Record<string, (inputs: UsedInput[]) => string> = {
       ? 'The redshift says how much the universe has stretched while the light travelled. Adding up, along the way, how fast the universe was growing gives how long the light has been travelling; the age of the universe then is its age today less that time.'
       : `${distanceWords(inputs)} Light crosses one light-year in one year, so the travel time in years is the distance in light-years.`,
   'luminosity-sun': (inputs) =>
-    `How bright the object looks in one band of light, corrected for the dust in between, and its distance give how much light it really gives out in that band. That is compared with the Sun’s output in the same band. ${distanceWords(inputs)}`,
+    `How bright the object looks in one band of light, corrected for dust along the way where that has been measured, and its distance give how much light it really gives out in that band. That is compared with the Sun’s output in the same band. ${distanceWords(inputs)}`,
   'brightness-at-10pc': (inputs) =>
-    `How bright the object looks, corrected for the dust in between, and its distance give how bright it would look from a standard 10 parsecs (32.6 light-years); that is compared with how bright the Sun looks from the Earth. ${distanceWords(inputs)}`,
+    `How bright the object looks, corrected for dust along the way where that has been measured, and its distance give how bright it would look from a standard 10 parsecs (32.6 light-years); that is compared with how bright the Sun looks from the Earth. ${distanceWords(inputs)}`,
   'naked-eye': () =>
     'How bright the object looks (its apparent magnitude) is compared with the faintest stars the unaided eye can see on a dark night, about magnitude 6. Each step of one magnitude is about 2.5 times fainter.',
   'scale-model': (inputs) =>
