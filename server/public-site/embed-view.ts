@@ -16,7 +16,7 @@ export function pageFragment(page: PublicPageDto, siteName: string): Html {
   return html`<article class="starproof-embed" lang="${page.locale}">
 <h2>${page.title}</h2>
 ${eyeSafety(page.eyeSafetyNotice)}
-<div class="starproof-body">${withDisclosures(withoutInlineNotice(page), page.statements, page.locale)}</div>
+<div class="starproof-body">${withDisclosures(withoutInlineNotice(page), page.statements, page.locale, `starproof-${page.slug}-how-`)}</div>
 <p class="starproof-source"><a href="${page.url}">Read this page and how we know each figure on ${siteName}</a></p>
 </article>
 `;

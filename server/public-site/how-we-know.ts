@@ -20,14 +20,14 @@ function excerpt(text: string): string {
  * model and the formula in words, every other source the working names, and when it was last
  * checked. A closed `<details>`, so the page reads without it and works without JavaScript.
  * @param statement the statement as the public API gives it
- * @param n its number on the page (for a stable fragment id)
+ * @param id the disclosure's id, stable for links (`how-2`)
  * @param locale the page's locale, for dates
  */
-export function howWeKnow(statement: PublicStatementDto, n: number, locale: string): Html {
+export function howWeKnow(statement: PublicStatementDto, id: string, locale: string): Html {
   const e = statement.howWeKnow;
   const summary = html`<summary><span class="how-label">How we know</span><span class="how-about">: “${excerpt(statement.text)}”</span></summary>`;
   if (!e)
-    return html`<details class="how" id="how-${n}">${summary}<div class="how-body"><p>New data about this object came in after this page was checked. Our reviewers are checking the figure again; its working will be shown here once they have.</p><p class="how-checked">Figure as of <time datetime="${statement.asOf}">${longDate(statement.asOf, locale)}</time>.</p></div></details>`;
+    return html`<details class="how" id="${id}">${summary}<div class="how-body"><p>New data about this object came in after this page was checked. Our reviewers are checking the figure again; its working will be shown here once they have.</p><p class="how-checked">Figure as of <time datetime="${statement.asOf}">${longDate(statement.asOf, locale)}</time>.</p></div></details>`;
   const measured = e.measurements.length
     ? html`<dt>What was measured</dt><dd><ul>${e.measurements.map(
         (m) =>
@@ -40,7 +40,7 @@ export function howWeKnow(statement: PublicStatementDto, n: number, locale: stri
         (r) => html`<li>${r.source} <span class="how-for">(for ${r.usedFor.join('; ')})</span></li>`,
       )}</ul></dd>`
     : '';
-  return html`<details class="how" id="how-${n}">${summary}<div class="how-body" lang="${e.lang}"><dl>${measured}${model}<dt>How it is worked out</dt><dd>${e.method}</dd>${references}<dt>Last checked</dt><dd><time datetime="${e.checkedAt}">${longDate(e.checkedAt, locale)}</time></dd></dl></div></details>`;
+  return html`<details class="how" id="${id}">${summary}<div class="how-body" lang="${e.lang}"><dl>${measured}${model}<dt>How it is worked out</dt><dd>${e.method}</dd>${references}<dt>Last checked</dt><dd><time datetime="${e.checkedAt}">${longDate(e.checkedAt, locale)}</time></dd></dl></div></details>`;
 }
 
 /**
@@ -49,8 +49,10 @@ export function howWeKnow(statement: PublicStatementDto, n: number, locale: stri
  * @param pageHtml the sanitised page HTML from the public API
  * @param statements the page's statements
  * @param locale the page's locale
+ * @param idPrefix what each disclosure's id starts with: `how-` on our pages; embedded fragments name
+ *   the page too, so two of them on one host page do not share ids
  */
-export function withDisclosures(pageHtml: string, statements: PublicStatementDto[], locale: string): Html {
+export function withDisclosures(pageHtml: string, statements: PublicStatementDto[], locale: string, idPrefix = 'how-'): Html {
   const byId = new Map(statements.map((s, i) => [s.id, { s, n: i + 1 }]));
   const placed = new Set<string>();
   const body = pageHtml.replace(/<p(?:\s[^>]*)?>[\s\S]*?<\/p>/g, (paragraph) => {
@@ -59,13 +61,13 @@ export function withDisclosures(pageHtml: string, statements: PublicStatementDto
       const found = byId.get(id);
       if (!found || placed.has(id)) return [];
       placed.add(id);
-      return [howWeKnow(found.s, found.n, locale).value];
+      return [howWeKnow(found.s, `${idPrefix}${found.n}`, locale).value];
     });
     return paragraph + details.join('');
   });
   const rest = statements.filter((s) => !placed.has(s.id));
   const tail = rest.length
-    ? html`<section class="how-rest" aria-labelledby="how-rest-h"><h2 id="how-rest-h">How we know the other figures</h2>${rest.map((s) => howWeKnow(s, byId.get(s.id)!.n, locale))}</section>`
+    ? html`<section class="how-rest" aria-labelledby="${idPrefix}rest"><h2 id="${idPrefix}rest">How we know the other figures</h2>${rest.map((s) => howWeKnow(s, `${idPrefix}${byId.get(s.id)!.n}`, locale))}</section>`
     : '';
   return html`${trusted(body)}${tail}`;
 }

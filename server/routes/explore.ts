@@ -106,8 +106,8 @@ const openToOtherSites: RequestHandler = (req, res, next) => {
  * HTML fragments other websites can embed (`/embed`). No sign-in, no session, no script.
  */
 export const exploreRouter = Router();
-exploreRouter.use([EXPLORE_PATH, '/embed', '/sitemap.xml'], limiter);
-
+// Our own stylesheet and fonts are not counted: a class on one school network reading pages at once
+// would otherwise use up the allowance four times as fast.
 exploreRouter.get(`${ASSETS_PATH}/explore.css`, (req, res) => {
   sendCached(req, res, stylesheet.body, stylesheet.etag, 'text/css; charset=utf-8', IMMUTABLE);
 });
@@ -117,6 +117,8 @@ exploreRouter.get(`${ASSETS_PATH}/:font`, (req, res) => {
   if (!font) throw NotFoundError('There is no such file.');
   sendCached(req, res, font.body, font.etag, 'font/woff2', IMMUTABLE);
 });
+
+exploreRouter.use([EXPLORE_PATH, '/embed', '/sitemap.xml'], limiter);
 
 exploreRouter.get(EXPLORE_PATH, async (req, res) => {
   const venues = await venueLinks();

@@ -224,6 +224,16 @@ describe('hostile content', () => {
     expect(live.data.html).not.toMatch(/<(script|svg|math|iframe|object|embed|img[^>]*onerror|[a-z]+[^>]*\son[a-z]+=)/i);
     // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     expect(await page.locator('main').innerText()).toContain('<script>window.__pwned=1</script>');
+
+    // The same page on the public site (our CSP), and its fragment embedded on a page with no CSP at all.
+    const { slug } = live.data as unknown as { slug: string };
+    await page.goto(`${baseUrl}/explore/${slug}`);
+    await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText(), WAIT).toBe(XSS_PAYLOADS[3]);
+    await assertInert(page, dialogs, 'public page');
+    const fragment = await (await fetch(`${baseUrl}/embed/pages/${slug}`)).text();
+    await page.goto('about:blank');
+    await page.setContent(`<!doctype html><title>embed</title><main>${fragment}</main>`);
+    await assertInert(page, dialogs, 'embedded fragment');
   });
 
   it('CSV exports escape cells that a spreadsheet would read as a formula', async () => {
@@ -242,7 +252,7 @@ describe('hostile content', () => {
 
   it('HTML pages (the staff app and the kiosk player) carry the Content-Security-Policy and security headers', async () => {
     const baseUrl = inject('baseUrl');
-    for (const url of ['/', '/sign-in', '/kiosk']) {
+    for (const url of ['/', '/sign-in', '/kiosk', '/explore']) {
       const res = await fetch(`${baseUrl}${url}`);
       expect(res.status, url).toBe(200);
       expect(res.headers.get('content-type'), url).toMatch(/text\/html/);
