@@ -228,6 +228,7 @@ describe('hostile content', () => {
     // The same page on the public site (our CSP), and its fragment embedded on a page with no CSP at all.
     const { slug } = live.data as unknown as { slug: string };
     await page.goto(`${baseUrl}/explore/${slug}`);
+    // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
     await expect.poll(() => page.getByRole('heading', { level: 1 }).innerText(), WAIT).toBe(XSS_PAYLOADS[3]);
     await assertInert(page, dialogs, 'public page');
     const fragment = await (await fetch(`${baseUrl}/embed/pages/${slug}`)).text();

@@ -110,6 +110,7 @@ describe('the public pages in a browser', () => {
         expect(staff.status).toBe(200);
         const details = page.locator(`details#how-${i + 1}`);
         await details.locator('summary').click();
+        // biome-ignore lint/performance/useDomNodeTextContent: a Playwright locator, not a DOM node: innerText is the text a reader sees
         const shown = await details.innerText();
         for (const source of workingSources(staff.body.data.working))
           expect(shown, `${published.slug}: ${source}`).toContain(source);
