@@ -95,7 +95,10 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
           asOf: statements.get(id)?.asOf ?? live.signedOffAt,
           // The working belongs to the wording it was computed with: a page still showing older
           // signed wording (the data moved, a reviewer has yet to look) shows none rather than another number's.
-          howWeKnow: working?.texts?.[p.locale as keyof typeof working.texts] === text ? working.evidence(p.locale) : null,
+          howWeKnow:
+            working?.texts?.[p.locale as keyof typeof working.texts] === text
+              ? working.evidence(p.locale, live.signedOffAt)
+              : null,
         };
       }),
       images: mediaIdsInHtml(live.html).flatMap((id) => {

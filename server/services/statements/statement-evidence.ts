@@ -9,8 +9,11 @@ import { readWorking } from './working-store.ts';
 export interface StatementEvidence {
   /** The wording (per locale) this working belongs to: shown only beside that wording. */
   texts: Record<StatementLocale, string> | null;
-  /** The working retold for visitors, in a page's locale. */
-  evidence: (locale: string) => PublicEvidence;
+  /**
+   * The working retold for visitors, in a page's locale.
+   * @param pageSignedOffAt when the page showing it was signed off (a reviewer read this statement then)
+   */
+  evidence: (locale: string, pageSignedOffAt: string) => PublicEvidence;
 }
 
 /**
@@ -34,10 +37,17 @@ export async function loadStatementEvidence(statementIds: string[]): Promise<Map
   const found = new Map<string, StatementEvidence>();
   for (const s of rows) {
     const working = await readWorking(s.working);
-    // A statement following tonight is checked each night it is computed; the others when a reviewer accepted them.
-    const checkedAt = (s.night ? s.computedAt : (s.acknowledgedAt ?? s.computedAt)).toISOString();
-    const input = { templateId: s.templateId, inputs: s.inputs ?? [], sourceLinks: links, working, model: s.model, checkedAt };
-    found.set(s.id, { texts: s.texts ?? null, evidence: (locale) => publicEvidence(input, locale) });
+    const input = { templateId: s.templateId, inputs: s.inputs ?? [], sourceLinks: links, working, model: s.model };
+    // A statement following tonight was checked for its method and is worked out each night; any
+    // other was last checked by a person: when a reviewer accepted its wording or signed off the page.
+    const checkedAt = (pageSignedOffAt: string) =>
+      s.night
+        ? s.computedAt.toISOString()
+        : [s.acknowledgedAt?.toISOString() ?? '', pageSignedOffAt].reduce((a, b) => (a > b ? a : b));
+    found.set(s.id, {
+      texts: s.texts ?? null,
+      evidence: (locale, pageSignedOffAt) => publicEvidence({ ...input, checkedAt: checkedAt(pageSignedOffAt) }, locale),
+    });
   }
   return found;
 }
