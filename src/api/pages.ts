@@ -92,7 +92,11 @@ export const publishedQueryOptions = (id: string) =>
   queryOptions({
     queryKey: pageKeys.published(id),
     queryFn: async () =>
-      (await api.get<ApiData<(RenderedPage & { publishedAt: string | null }) | null>>(`/pages/${id}/published`)).data,
+      (
+        await api.get<ApiData<(RenderedPage & { publishedAt: string | null; publicUrl: string | null }) | null>>(
+          `/pages/${id}/published`,
+        )
+      ).data,
   });
 
 /** The version the public sees now (null when unpublished); loaded only when `enabled`. */

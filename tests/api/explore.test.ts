@@ -159,6 +159,9 @@ describe('the public pages (/explore)', () => {
     expect(page.images[0].url).toMatch(new RegExp(`^${appBaseUrl()}/media/files/[0-9a-f]{64}\\.jpg$`));
     expect(page.html).not.toMatch(/src="\//);
     expect(page.statements[0].howWeKnow).toMatchObject({ lang: 'en', method: expect.any(String) });
+    // The desk's view of the live version links to the same address.
+    const staff = await crew.editor.agent.get(`/api/pages/${hostile.pageId}/published`);
+    expect(staff.body.data.publicUrl).toBe(page.url);
     const atom = await (await visitor()).get('/api/public/pages.atom');
     expect(atom.text).toContain(`<link rel="alternate" type="text/html" href="${appBaseUrl()}/explore/${PLAIN_SLUG}"/>`);
   });

@@ -6,7 +6,7 @@ import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import type { Step } from '../../shared/engine/working.ts';
 import type { PublicPageDto } from '../../shared/schemas/public-page.ts';
 import { workingSources } from '../../shared/statements/public-evidence.ts';
-import { demoSession } from '../support/e2e-api.ts';
+import { demoSession, openSessionInBrowser } from '../support/e2e-api.ts';
 
 const require = createRequire(import.meta.url);
 const AXE_SOURCE = fs.readFileSync(require.resolve('axe-core/axe.min.js'), 'utf8');
@@ -93,6 +93,22 @@ describe('the public pages in a browser', () => {
       await page.keyboard.press('Enter');
       expect(await second.getAttribute('open')).not.toBeNull();
     }
+  });
+
+  it('an editor goes from the live version in the desk to its public page', async () => {
+    const editor = await demoSession(baseUrl, 'editor');
+    const demo = (await publishedPages())[0];
+    const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
+    await openSessionInBrowser(context, baseUrl, editor);
+    const page = await context.newPage();
+    await page.goto(`${baseUrl}/pages/${demo.id}/review`);
+    await page.getByRole('button', { name: /^Live version/ }).click();
+    const link = page.getByRole('link', { name: 'Open the public page' });
+    await expect.poll(() => link.getAttribute('href'), { timeout: 20_000 }).toBe(demo.url);
+    await link.click();
+    await page.waitForURL(`**/explore/${demo.slug}`);
+    await expect.poll(() => page.getByRole('heading', { level: 1, name: demo.title }).count()).toBe(1);
+    await context.close();
   });
 
   it('"How we know" names every source the staff working names, and no id', async () => {

@@ -20,6 +20,7 @@ import {
   currentText,
   loadStatements,
 } from '../../services/pages/index.ts';
+import { getPublicPages } from '../../services/publishing/index.ts';
 import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
 import { workflowRouter } from './workflow.ts';
@@ -105,12 +106,17 @@ pagesRouter.get('/:id/preview', async (req, res) => {
   res.json({ data: { title: revision.title, html, revisionNumber: revision.number } });
 });
 
-/** What the public sees now: the published version, unchanged by later edits or recomputes. */
+/**
+ * What the public sees now: the published version, unchanged by later edits or recomputes, with
+ * its public address (`publicUrl`, the same builder the public site, feeds and kiosks use).
+ */
 pagesRouter.get('/:id/published', async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(req.params.id);
   authorize(viewer, 'page', 'read', page);
-  res.json({ data: await renderPublishedPage(page.id) });
+  const live = await renderPublishedPage(page.id);
+  const publicUrl = live ? ((await getPublicPages()).pages.find((p) => p.id === page.id)?.url ?? null) : null;
+  res.json({ data: live ? { ...live, publicUrl } : null });
 });
 
 pagesRouter.use('/:id', workflowRouter);

@@ -109,6 +109,14 @@ export function Component() {
               </button>
             </div>
           )}
+          {showLive && published.data?.publicUrl && (
+            <p className="text-sm">
+              <a className="text-accent underline" href={published.data.publicUrl}>
+                Open the public page
+              </a>{' '}
+              <span className="text-muted">(what visitors read, with “How we know” under each figure)</span>
+            </p>
+          )}
           <article className="rounded-lg border border-rule bg-panel px-4 py-6 sm:px-8">
             <h1 className="mb-4 font-serif text-3xl font-semibold">{showLive ? published.data?.title : p.title}</h1>
             {html !== undefined ? (
