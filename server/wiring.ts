@@ -102,6 +102,8 @@ export function wireServer(): void {
   publishingEvents.on('pagePublished', invalidatePublicPages);
   publishingEvents.on('pageUnpublished', invalidatePublicPages);
   publishingEvents.on('mediaChanged', invalidatePublicPages);
+  // The public pages head pages about the Sun with the organisation's notice, in its current words.
+  settingsEvents.on('eyeSafetyNoticeChanged', invalidatePublicPages);
   statementEvents.on('accepted', invalidatePublicPages);
   statementEvents.on('textChanged', invalidatePublicPages);
 

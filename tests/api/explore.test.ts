@@ -119,6 +119,10 @@ describe('the public pages (/explore)', () => {
     expect(ordinary.text).not.toContain('class="eye-safety"');
     const api = await (await visitor()).get(`/api/public/pages/${solar.pageId}`);
     expect(api.body.data.eyeSafetyNotice).toMatch(/Sun/);
+    // New words for the notice reach the public page at once.
+    const words = 'Never look at the Sun without a certified solar filter; ask our staff (words for a test).';
+    expect((await crew.admin.agent.patch('/api/settings').send({ eyeSafetyNotice: words })).status).toBe(200);
+    expect((await (await visitor()).get('/explore/watching-a-partial-eclipse-of-the-sun')).text).toContain(words);
   });
 
   it('says in words when there is no such page, and serves the index, the sitemap and the stylesheet', async () => {

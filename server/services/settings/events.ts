@@ -6,6 +6,8 @@ export interface SettingsEventMap {
   cosmologyAdopted: [{ version: number }];
   /** The default band or the default spectral indices changed: magnitudes and luminosities may move. */
   statementDefaultsChanged: [{ version: number }];
+  /** The eye-safety notice's wording changed: public pages that carry it show the new words. */
+  eyeSafetyNoticeChanged: [{ version: number }];
 }
 
 /**

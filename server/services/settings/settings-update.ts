@@ -63,14 +63,16 @@ export async function updateSettings(input: SettingsUpdateInput, actor: User): P
       (input.spectralIndexDefaults !== undefined &&
         JSON.stringify(input.spectralIndexDefaults) !== JSON.stringify(row.spectralIndexDefaults ?? {})) ||
       (input.h0Range !== undefined && JSON.stringify(input.h0Range) !== JSON.stringify(row.h0Range ?? null));
+    const noticeChanged = input.eyeSafetyNotice !== undefined && input.eyeSafetyNotice !== row.eyeSafetyNotice;
     row.set({ ...input, updatedById: actor.id, ...(defaultsChanged ? { version: row.version + 1 } : {}) });
     await row.save({ transaction });
     await recordAudit(
       { actorId: actor.id, action: 'settings.updated', subjectType: 'organisation_settings', subjectId: '1', data: { ...input } },
       transaction,
     );
-    return { row, defaultsChanged };
+    return { row, defaultsChanged, noticeChanged };
   });
   if (settings.defaultsChanged) await emitAndWait(settingsEvents, 'statementDefaultsChanged', { version: settings.row.version });
+  if (settings.noticeChanged) await emitAndWait(settingsEvents, 'eyeSafetyNoticeChanged', { version: settings.row.version });
   return settings.row;
 }
