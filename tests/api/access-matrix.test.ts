@@ -50,6 +50,8 @@ const EXPECTED: Record<string, Answer[]> = {
   'GET /api/pages/:id/revisions/diff': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/pages/:id/revisions/:number': ['401', '401', '403', '403', 'ok', 'ok'],
   'POST /api/pages/:id/revisions/:number/restore': ['401', '401', '403', '403', 'ok', 'ok'],
+  'GET /api/pages/:id/versions': ['401', '401', '403', '403', 'ok', 'ok'],
+  'POST /api/pages/:id/versions': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/statements': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/statements': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/statements/:id': ['401', '401', 'ok', 'ok', 'ok', 'ok'],

@@ -142,6 +142,7 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'POST /api/pages/:id/flags': { body: { text: '42', reason: 'It is a catalogue number, not a measurement.' } },
     'PUT /api/pages/:id/schedule': { body: { at: null } },
     'POST /api/pages/:id/comments': { body: { body: 'A comment from the access matrix.' } },
+    'POST /api/pages/:id/versions': { body: { locale: 'fr-FR' } },
     'GET /api/pages/:id/revisions/diff': { query: 'from=1&to=1' },
     'POST /api/pages/:id/revisions/:number/restore': { body: { version: pageVersion } },
     'POST /api/statements': { body: { objectId: ids.object, templateId: 'naked-eye' } },

@@ -22,6 +22,7 @@ import {
 } from '../../services/pages/index.ts';
 import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
+import { versionsRouter } from './versions.ts';
 import { workflowRouter } from './workflow.ts';
 
 const tooLarge = () =>
@@ -115,3 +116,4 @@ pagesRouter.get('/:id/published', async (req, res) => {
 
 pagesRouter.use('/:id', workflowRouter);
 pagesRouter.use('/:id/revisions', revisionsRouter);
+pagesRouter.use('/:id/versions', versionsRouter);
