@@ -40,3 +40,21 @@ export interface PageVersionsDto {
   missing: Array<{ locale: StatementLocale; label: string; addLabel: string }>;
   can: { add: boolean };
 }
+
+const languageList = [...STATEMENT_LOCALES, ...new Set(STATEMENT_LOCALES.map((l) => l.slice(0, 2)))].join(', ');
+
+/** Whether a `?lang=` value names a registered locale (any case) or the language of one ("fr"). */
+export const isKnownLanguageTag = (value: string) => {
+  const v = value.toLowerCase();
+  return STATEMENT_LOCALES.some((l) => l.toLowerCase() === v || l.slice(0, 2).toLowerCase() === v);
+};
+
+/** `?lang=` on the public API: a registered locale or its language; anything else is refused in words. */
+export const PublicLangQuerySchema = z.object({
+  lang: z
+    .string()
+    .trim()
+    .max(35, 'A language tag is at most 35 characters')
+    .refine(isKnownLanguageTag, { message: `There is no such language here. Ask for one of: ${languageList}` })
+    .optional(),
+});

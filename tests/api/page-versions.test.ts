@@ -2,7 +2,7 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, Measurement, Page, PageVersionGroup, Statement } from '../../server/models/index.ts';
 import { setPreferred } from '../../server/services/catalogue/preferred-write.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
-import { doc, pageWithBody, paragraph, quasarWithStatements, statement, text } from '../support/pages.ts';
+import { addVersion, englishPage as englishPageOf, publishVersion, type Desk } from '../support/page-versions.ts';
 
 type Signed = Awaited<ReturnType<typeof signedInAgent>>;
 let writer: Signed;
@@ -17,30 +17,9 @@ beforeAll(async () => {
   editor = await signedInAgent('editor');
 });
 
-/** An English page with two statements about a fresh quasar. */
-async function englishPage(title = 'The quasar next door') {
-  const q = await quasarWithStatements(writer.agent, writer.user);
-  const body = doc(paragraph(text('Astronomers say '), statement(q.distanceId)), paragraph(statement(q.nakedEyeId)));
-  const page = await pageWithBody(writer.agent, q.object.id, body, title);
-  return { q, page };
-}
-
-async function addVersion(agent: Signed['agent'], pageId: string, locale: string) {
-  return agent.post(`/api/pages/${pageId}/versions`).send({ locale });
-}
-
-/** Submits, signs off every statement and the page, and publishes one version. */
-async function publish(pageId: string) {
-  const seen = (await writer.agent.get(`/api/pages/${pageId}`)).body.data;
-  const submitted = await writer.agent.post(`/api/pages/${pageId}/submit`).send({ version: seen.version });
-  expect(submitted.status, JSON.stringify(submitted.body)).toBe(200);
-  for (const s of seen.statements as Array<{ id: string }>)
-    expect((await reviewer.agent.post(`/api/pages/${pageId}/signoffs/statements`).send({ statementId: s.id })).status).toBe(200);
-  const approved = await reviewer.agent.post(`/api/pages/${pageId}/signoffs/page`);
-  expect(approved.status, JSON.stringify(approved.body)).toBe(200);
-  const published = await editor.agent.post(`/api/pages/${pageId}/publish`);
-  expect(published.status, JSON.stringify(published.body)).toBe(200);
-}
+const desk = (): Desk => ({ writer, reviewer, editor });
+const englishPage = (title = 'The quasar next door') => englishPageOf(desk(), title);
+const publish = (pageId: string) => publishVersion(desk(), pageId);
 
 describe('adding a version in another language', () => {
   it('copies the structure and statements; each statement reads in the new locale, with the same numbers', async () => {
