@@ -124,6 +124,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'DELETE /api/catalogue/measurements/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'DELETE /api/catalogue/objects/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'POST /api/venues/:venueId/screens/:screenId/revoke': ['401', '401', '403', '403', '403', 'ok'],
+  'PATCH /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:id': ['401', '401', '403', '403', '403', 'ok'],
 };
