@@ -70,7 +70,7 @@ async function frenchAndromeda(englishTitle: string, writer: User, reviewer: Use
             ),
           ),
           h('Très loin d’ici'),
-          p(s(distance!), t(' '), s(travel!), t(' Cette lumière est partie bien avant l’apparition de notre espèce.')),
+          p(s(distance!), t(' '), s(travel!), t(' C’était bien avant l’apparition de notre espèce.')),
           h('Peut-on la voir\u202f?'),
           p(
             t(

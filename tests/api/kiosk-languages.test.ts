@@ -133,7 +133,7 @@ describe('demo data', () => {
     const texts = Object.values(french[0]!.publishedSnapshot!.statementTexts);
     expect(texts).toHaveLength(2);
     for (const t of texts) expect(t).toMatch(/galaxie d’Andromède|années/);
-    expect(french[0]!.publishedSnapshot!.html).toContain('Cette lumière est partie bien avant l’apparition de notre espèce.');
+    expect(french[0]!.publishedSnapshot!.html).toContain('C’était bien avant l’apparition de notre espèce.');
     const channel = await Channel.findOne({ where: { name: 'Foyer loop in English and French (demo)' } });
     expect(channel!.languages).toEqual(['en-GB', 'fr-FR']);
   });
