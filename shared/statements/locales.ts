@@ -38,19 +38,6 @@ export const LOCALE_LABELS = Object.fromEntries(LOCALE_REGISTRY.map((l) => [l.ta
 export const isStatementLocale = (value: string): value is StatementLocale =>
   STATEMENT_LOCALES.includes(value as StatementLocale);
 
-/**
- * The registered locale a tag names: the exact tag (any case), or a bare language ("fr") when
- * exactly one registered locale has that language. Null for anything else.
- * @param tag what a reader or a query string gave
- */
-export function resolveLocaleTag(tag: string): StatementLocale | null {
-  const wanted = tag.trim().toLowerCase();
-  const exact = STATEMENT_LOCALES.find((l) => l.toLowerCase() === wanted);
-  if (exact) return exact;
-  const byLanguage = LOCALE_REGISTRY.filter((l) => l.language === wanted);
-  return byLanguage.length === 1 ? byLanguage[0]!.tag : null;
-}
-
 /** Per-locale text, one entry for every supported locale. */
 export type LocalisedText = Record<StatementLocale, string>;
 

@@ -11,12 +11,19 @@ describe('the kiosk player in several languages', () => {
   it('alternates between the channel’s languages, then plays only the screen’s own', async () => {
     const { page, errors, baseUrl } = await openBrowser();
     const admin = await StaffClient.signIn(baseUrl, account('admin').email, account('admin').password);
-    const venue = (await admin.call<Array<{ id: string; name: string }>>('GET', '/venues')).find((v) => v.name === DEMO_VENUE.name)!;
+    const venue = (await admin.call<Array<{ id: string; name: string }>>('GET', '/venues')).find(
+      (v) => v.name === DEMO_VENUE.name,
+    )!;
     const pages = await admin.call<Array<{ id: string; title: string; locale: string }>>('GET', '/pages?q=Andromeda');
     const english = pages.find((p) => p.title === ENGLISH)!;
-    const channel = await admin.call<{ id: string }>('POST', '/channels', { venueId: venue.id, name: 'Two languages (player test)' });
+    const channel = await admin.call<{ id: string }>('POST', '/channels', {
+      venueId: venue.id,
+      name: 'Two languages (player test)',
+    });
     await admin.call('PATCH', `/channels/${channel.id}`, { name: 'Two languages (player test)', languages: ['en-GB', 'fr-FR'] });
-    await admin.call('POST', `/channels/${channel.id}/slides`, { kind: 'page', pageId: english.id, durationS: 5 });
+    const detail = await admin.call<{ statements: Array<{ id: string }> }>('GET', `/pages/${english.id}`);
+    const statementIds = detail.statements.map((st) => st.id);
+    await admin.call('POST', `/channels/${channel.id}/slides`, { kind: 'page', pageId: english.id, statementIds, durationS: 5 });
     const added = await admin.call<{ pairingCode: string; screen: { id: string } }>('POST', `/venues/${venue.id}/screens`, {
       name: 'Two-language screen (player test)',
     });

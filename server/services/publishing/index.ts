@@ -13,7 +13,6 @@ export { type CachedFeed, freshKioskFeed, getKioskFeed, invalidateKioskFeeds } f
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
 export { getPublicPages, invalidatePublicPages, negotiatedList, negotiatedPage, prepare } from './public-pages.ts';
-export { chooseVersion } from './public-languages.ts';
 export type { ChannelDetailContext } from './channel-view.ts';
 export type { ChannelRowContext } from './channel-view.ts';
 export { listChannels } from './channel-view.ts';
