@@ -50,8 +50,11 @@ describe('the kiosk player in several languages', () => {
     await expect.poll(() => shown.getAttribute('lang'), { timeout: 15_000 }).toBe('en-GB');
 
     // The screen gets a language of its own: from its next poll it plays only French.
+    const newFeed = page.waitForResponse((r) => r.url().endsWith('/api/kiosk/feed') && r.status() === 200, { timeout: 45_000 });
     await admin.call('PATCH', `/venues/${venue.id}/screens/${added.screen.id}`, { language: 'fr-FR' });
-    await expect.poll(() => shown.getAttribute('lang'), { timeout: 45_000, interval: 500 }).toBe('fr-FR');
+    expect(((await (await newFeed).json()) as { _starproof: { languages: string[] } })._starproof.languages).toEqual(['fr-FR']);
+    // The slide on screen finishes its 5 s (and its fade), then only French plays.
+    await page.waitForTimeout(7000);
     const seen = new Set<string | null>();
     for (let i = 0; i < 12; i += 1) {
       await page.waitForTimeout(1000);
