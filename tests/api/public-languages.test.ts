@@ -144,3 +144,18 @@ describe('the list', () => {
     expect(english.body.meta.total).toBe(2);
   });
 });
+
+describe('taking one version down', () => {
+  it('leaves the others: alternates drop it, and readers who asked for it get the default version', async () => {
+    expect((await desk.editor.agent.post(`/api/pages/${fr.id}/unpublish`)).status).toBe(200);
+    const res = await get(`/api/public/pages/${en.slug}`, 'fr');
+    expect(res.body.data.id).toBe(en.id);
+    expect(res.headers['content-language']).toBe('en-GB');
+    expect(res.body.data.alternates.map((a: { hreflang: string }) => a.hreflang)).toEqual(['en-GB']);
+    expect(res.headers.link).toBeUndefined();
+    expect((await get(`/api/public/pages/${fr.slug}`)).status).toBe(404);
+    expect((await get(`/api/public/pages?lang=fr`)).body.data.map((p: { id: string }) => p.id).sort()).toEqual(
+      [en.id, lone.id].sort(),
+    );
+  });
+});

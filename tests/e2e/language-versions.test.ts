@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { DEMO_VENUE } from '../../server/demo/accounts.ts';
+import { seriousAxeFindings } from '../support/axe.ts';
 import { openBrowser, screenshot } from '../support/browser.ts';
 import { demoSession, ok, openSessionInBrowser } from '../support/e2e-api.ts';
 
@@ -30,6 +31,8 @@ describe('language versions on the desk', () => {
       await panel.scrollIntoViewIfNeeded();
       await screenshot(page, `language-versions-english-${width}`);
     }
+    await page.waitForLoadState('networkidle');
+    expect(await seriousAxeFindings(page, 'section[aria-labelledby="languages"]')).toEqual([]);
     // From the English version to the French one, which reads its statements in French.
     await page.getByRole('region', { name: 'Languages' }).getByRole('link', { name: FRENCH }).click();
     await expect.poll(() => page.getByRole('heading', { level: 1 }).textContent()).toBe(FRENCH);
@@ -63,6 +66,8 @@ describe('language versions on the desk', () => {
       await form.scrollIntoViewIfNeeded();
       await screenshot(page, `channel-languages-${width}`);
     }
+    await page.waitForLoadState('networkidle');
+    expect(await seriousAxeFindings(page, 'form[aria-label="Languages this channel plays"]')).toEqual([]);
     const venues = ok(await admin.call<{ data: Array<{ id: string; name: string }> }>('GET', '/api/venues'), 'venues').body.data;
     const venue = venues.find((v) => v.name === DEMO_VENUE.name)!;
     for (const width of WIDTHS) {
@@ -74,6 +79,8 @@ describe('language versions on the desk', () => {
       await select.scrollIntoViewIfNeeded();
       await screenshot(page, `screen-language-${width}`);
     }
+    await page.waitForLoadState('networkidle');
+    expect(await seriousAxeFindings(page, 'section[aria-labelledby="screens-heading"]')).toEqual([]);
     await page.getByRole('combobox', { name: 'Language Lobby screen (demo) plays' }).selectOption('fr-FR');
     await expect
       .poll(async () => {
