@@ -28,7 +28,7 @@ export interface PageVersionDto {
   isDefault: boolean;
   /** The version being looked at. */
   current: boolean;
-  /** False for another writer's private draft: listed, but not openable by this viewer. */
+  /** False for another writer's private draft: listed (its language is taken), without its title, and not openable. */
   readable: boolean;
 }
 

@@ -119,6 +119,22 @@ describe('adding a version in another language', () => {
   });
 });
 
+describe('a colleague’s version', () => {
+  it('another writer’s unsubmitted version is listed without its title, and cannot be opened', async () => {
+    const { page } = await englishPage('Published, then translated by a colleague');
+    await publish(page.id);
+    const colleague = await signedInAgent('writer');
+    const fr = await addVersion(colleague.agent, page.id, 'fr-FR');
+    expect(fr.status).toBe(201);
+    const list = (await writer.agent.get(`/api/pages/${page.id}/versions`)).body.data;
+    expect(list.versions[1]).toMatchObject({ locale: 'fr-FR', title: '', readable: false, status: 'draft' });
+    expect((await writer.agent.get(`/api/pages/${fr.body.data.id}`)).status).toBe(403);
+    expect((await colleague.agent.get(`/api/pages/${page.id}/versions`)).body.data.versions[1].title).toBe(
+      'Published, then translated by a colleague',
+    );
+  });
+});
+
 describe('each version has its own review and publication', () => {
   it('signing off and publishing one version leaves the other as it was', async () => {
     const { page } = await englishPage('Signed per language');

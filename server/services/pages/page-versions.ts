@@ -1,4 +1,4 @@
-import { Op, UniqueConstraintError } from 'sequelize';
+import { UniqueConstraintError } from 'sequelize';
 import type { PageVersionDto, PageVersionsDto } from '@shared/schemas/page-version.ts';
 import { LOCALE_LABELS, LOCALE_REGISTRY, type StatementLocale } from '@shared/statements/locales.ts';
 import { getSequelize } from '../../db.ts';
@@ -52,17 +52,21 @@ export async function defaultVersionId(groupId: string | null, versions: Page[])
 export async function listPageVersions(page: Page, viewer: User): Promise<PageVersionsDto> {
   const versions = await versionsOf(page);
   const defaultId = await defaultVersionId(page.versionGroupId, versions);
-  const dtos: PageVersionDto[] = versions.map((v) => ({
-    id: v.id,
-    locale: v.locale,
-    label: label(v.locale),
-    title: v.title,
-    status: v.status,
-    live: !!v.publishedSnapshot,
-    isDefault: v.id === defaultId,
-    current: v.id === page.id,
-    readable: can(viewer, 'page', 'read', v),
-  }));
+  const dtos: PageVersionDto[] = versions.map((v) => {
+    const readable = can(viewer, 'page', 'read', v);
+    return {
+      id: v.id,
+      locale: v.locale,
+      label: label(v.locale),
+      // Another writer's private draft is listed (its language is taken) but not its title.
+      title: readable ? v.title : '',
+      status: v.status,
+      live: !!v.publishedSnapshot,
+      isDefault: v.id === defaultId,
+      current: v.id === page.id,
+      readable,
+    };
+  });
   const taken = new Set<string>(versions.map((v) => v.locale));
   return {
     groupId: page.versionGroupId ?? null,
@@ -143,9 +147,8 @@ export async function createPageVersion(source: Page, locale: StatementLocale, a
   } catch (error) {
     // Two requests at once: the unique index (group, locale) lets one through.
     if (error instanceof UniqueConstraintError) {
-      const existing = await Page.findOne({
-        where: { versionGroupId: { [Op.ne]: null }, locale, skyObjectId: source.skyObjectId },
-      });
+      const groupId = (await Page.findByPk(source.id, { attributes: ['versionGroupId'] }))?.versionGroupId ?? null;
+      const existing = groupId ? await Page.findOne({ where: { versionGroupId: groupId, locale }, attributes: ['title'] }) : null;
       throw alreadyThere(locale, existing?.title ?? source.title);
     }
     throw error;

@@ -33,7 +33,7 @@ export function LanguageVersions({ pageId }: { pageId: string }) {
                 {v.title}
               </Link>
             ) : (
-              <span className="min-w-0 break-words text-muted">{v.title} (a colleague’s draft)</span>
+              <span className="min-w-0 break-words text-muted">A colleague’s draft, not yet submitted</span>
             )}
             <PageStatusBadge status={v.status} />
             {v.isDefault && list.length > 1 && <span className="text-xs text-muted">default for other languages</span>}
