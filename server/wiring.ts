@@ -110,6 +110,8 @@ export function wireServer(): void {
   // ── Publishing → kiosk sign-in cache ──────────────────────────────────────────────────────
   // a screen is revoked → its remembered sign-in ends at once
   publishingEvents.on('screenRevoked', ({ screenId }) => forgetKioskScreen(screenId));
+  // a screen's language changes → its remembered sign-in (which carries the language) is read again
+  publishingEvents.on('screenChanged', ({ screenId }) => forgetKioskScreen(screenId));
   // a channel changes (screens moved, channel removed) → screens' channel assignments are looked up again
   publishingEvents.on('channelChanged', forgetKioskAssignments);
 

@@ -3,15 +3,54 @@ import { Channel, ChannelScreen, ChannelSlide, KioskScreen, Page, User, Venue } 
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 
 const DEMO_CHANNEL = 'Foyer loop (demo)';
+const DEMO_BILINGUAL_CHANNEL = 'Foyer loop in English and French (demo)';
 
 /**
- * A demo kiosk channel at the demo venue: every published demo page (with its statements) and the
+ * A channel that plays in English and French, round by round: the published demo pages that have a
+ * French version. No screen shows it at first; an admin assigns one (or gives a screen one language).
+ */
+async function seedBilingualChannel(venue: Venue, editor: User | null): Promise<void> {
+  if (await Channel.findOne({ where: { venueId: venue.id, name: DEMO_BILINGUAL_CHANNEL } })) return;
+  const pages = await Page.findAll({
+    where: {
+      publishedSnapshot: { [Op.ne]: null },
+      versionGroupId: { [Op.ne]: null },
+      locale: 'en-GB',
+      title: { [Op.like]: '%(demo)' },
+    },
+    order: [['title', 'ASC']],
+  });
+  if (!pages.length) return;
+  const channel = await Channel.create({
+    venueId: venue.id,
+    name: DEMO_BILINGUAL_CHANNEL,
+    languages: ['en-GB', 'fr-FR'],
+    createdById: editor?.id ?? null,
+  });
+  let position = 0;
+  for (const page of pages) {
+    const statementIds = Object.keys(page.publishedSnapshot!.statementTexts).slice(0, 2);
+    await ChannelSlide.create({
+      channelId: channel.id,
+      position: position++,
+      kind: 'page',
+      pageId: page.id,
+      statementIds,
+      durationS: 20,
+    });
+  }
+}
+
+/**
+ * Demo kiosk channels at the demo venue. The foyer loop: every published demo page (with its statements) and the
  * sky tonight, shown by the venue's demo screens. Idempotent: does nothing once the channel exists.
  */
 export async function seedDemoChannels(): Promise<void> {
   const venue = await Venue.findOne({ where: { name: DEMO_VENUE.name } });
-  if (!venue || (await Channel.findOne({ where: { venueId: venue.id, name: DEMO_CHANNEL } }))) return;
+  if (!venue) return;
   const editor = await User.findOne({ where: { email: DEMO_ACCOUNTS.find((a) => a.role === 'editor')!.email } });
+  await seedBilingualChannel(venue, editor);
+  if (await Channel.findOne({ where: { venueId: venue.id, name: DEMO_CHANNEL } })) return;
   const pages = await Page.findAll({
     where: { publishedSnapshot: { [Op.ne]: null }, title: { [Op.like]: '%(demo)' } },
     order: [['title', 'ASC']],

@@ -1,6 +1,14 @@
 import type { JSONContent } from '@tiptap/core';
-import { Page, SkyObject, User } from '../models/index.ts';
-import { savePage, createPage, publishPage, signOffPage, signOffStatement, submitPage } from '../services/pages/index.ts';
+import { Page, PageRevision, SkyObject, User } from '../models/index.ts';
+import {
+  savePage,
+  createPage,
+  createPageVersion,
+  publishPage,
+  signOffPage,
+  signOffStatement,
+  submitPage,
+} from '../services/pages/index.ts';
 import { findOrCreateStatement } from '../services/statements/index.ts';
 import { logger } from '../logger.ts';
 import { DEMO_ACCOUNTS } from './accounts.ts';
@@ -35,11 +43,56 @@ async function once(title: string, make: () => Promise<void>): Promise<void> {
   }
 }
 
+/** The French version of the Andromeda page, written for French-speaking visitors (demo). */
+export const DEMO_FRENCH_TITLE = 'À quelle distance se trouve la galaxie d’Andromède\u202f? (démo)';
+
+/**
+ * The published Andromeda page's French version: the same statements (which read in French by
+ * themselves), the text around them translated, signed off and published on its own.
+ */
+async function frenchAndromeda(englishTitle: string, writer: User, reviewer: User, editor: User): Promise<void> {
+  const english = await Page.findOne({ where: { title: englishTitle, locale: 'en-GB' } });
+  if (!english) return;
+  const version = await createPageVersion(english, 'fr-FR', writer);
+  const revision = (await PageRevision.findByPk(version.currentRevisionId!))!;
+  const [distance, travel] = revision.statementIds;
+  const french = await savePage(
+    version.id,
+    {
+      version: version.version,
+      title: DEMO_FRENCH_TITLE,
+      doc: {
+        type: 'doc',
+        content: [
+          p(
+            t(
+              'Par une nuit claire d’automne à Corrie Vale, cherchez haut vers l’est une faible tache de lumière\u00a0: la galaxie d’Andromède, la grande galaxie la plus proche de la nôtre.',
+            ),
+          ),
+          h('Très loin d’ici'),
+          p(s(distance!), t(' '), s(travel!), t(' C’était bien avant l’apparition de notre espèce.')),
+          h('Peut-on la voir\u202f?'),
+          p(
+            t(
+              'Oui, par une nuit bien noire\u00a0: non pas comme une étoile, mais comme une faible lueur ovale, car sa lumière s’étale sur une partie du ciel plusieurs fois plus large que la pleine Lune. Laissez d’abord vos yeux s’habituer à l’obscurité pendant vingt minutes, loin des lumières du parking.',
+            ),
+          ),
+        ],
+      },
+    },
+    writer,
+  );
+  await submitPage(french.page.id, undefined, writer);
+  for (const id of [distance!, travel!]) await signOffStatement(french.page.id, id, reviewer);
+  await signOffPage(french.page.id, reviewer);
+  await publishPage(french.page.id, editor);
+}
+
 /**
  * Five demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: three
- * published (Andromeda; 3C 48, worked out from its redshift; sunspots, with the eye-safety notice),
- * one waiting for review (with a hand-typed number for the reviewer), one draft about the Sun with
- * its eye-safety notice. Idempotent per page.
+ * published (Andromeda, with a published French version; 3C 48, worked out from its redshift;
+ * sunspots, with the eye-safety notice), one waiting for review (with a hand-typed number for the
+ * reviewer), one draft about the Sun with its eye-safety notice. Idempotent per page.
  */
 export async function seedDemoPages(): Promise<void> {
   const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
@@ -73,6 +126,7 @@ export async function seedDemoPages(): Promise<void> {
     await signOffPage(andromeda.id, reviewer);
     await publishPage(andromeda.id, editor);
   });
+  await once(DEMO_FRENCH_TITLE, () => frenchAndromeda(andromedaTitle, writer, reviewer, editor));
 
   const quasarTitle = '3C 279, a quasar in Virgo (demo)';
   await once(quasarTitle, async () => {

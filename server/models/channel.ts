@@ -16,6 +16,8 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
   declare name: string;
   /** Bumped by every edit; feed caches on other server instances compare it. */
   declare version: CreationOptional<number>;
+  /** The languages (locale tags) the channel plays, in order; screens without their own alternate between them. */
+  declare languages: CreationOptional<string[]>;
   declare createdById: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -30,6 +32,7 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
         venueId: { type: DataTypes.UUID, allowNull: false },
         name: { type: DataTypes.STRING(80), allowNull: false },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        languages: { type: DataTypes.ARRAY(DataTypes.STRING(10)), allowNull: false, defaultValue: [] },
         createdById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

@@ -23,7 +23,7 @@ export { Media, MediaRendition };
 export { CosmologyDescription, OrganisationSettings, Statement };
 export type { StatementStatus } from './statement.ts';
 export { KioskScreen, SkySnapshot };
-export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff } from './page-models.ts';
+export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff, PageVersionGroup } from './page-models.ts';
 export { Channel, ChannelScreen, ChannelSlide } from './channel-models.ts';
 
 let initialised: Sequelize | undefined;

@@ -21,6 +21,8 @@ export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreati
   declare lastSeenAt: CreationOptional<Date | null>;
   declare playerVersion: CreationOptional<string | null>;
   declare showing: CreationOptional<Record<string, unknown> | null>;
+  /** The one language this screen plays (a locale tag), or null to alternate between its channel's. */
+  declare language: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -38,6 +40,7 @@ export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreati
         lastSeenAt: { type: DataTypes.DATE },
         playerVersion: { type: DataTypes.STRING(40) },
         showing: { type: DataTypes.JSONB },
+        language: { type: DataTypes.STRING(10) },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

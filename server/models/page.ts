@@ -33,6 +33,8 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
   declare lastReviewerId: CreationOptional<string | null>;
   /** The statements whose wording moved after sign-off, while the page needs a re-check. */
   declare recheckStatementIds: CreationOptional<string[]>;
+  /** The language versions this page belongs to (PageVersionGroup), or null while it has none. */
+  declare versionGroupId: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -55,6 +57,7 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
         submittedAt: { type: DataTypes.DATE },
         lastReviewerId: { type: DataTypes.UUID },
         recheckStatementIds: { type: DataTypes.ARRAY(DataTypes.UUID), allowNull: false, defaultValue: [] },
+        versionGroupId: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -16,6 +16,7 @@ export function presentChannelRow(channel: Channel, context: ChannelRowContext):
     name: channel.name,
     venue: { id: channel.venueId, name: context.venueName },
     slideCount: context.slideCount,
+    languages: channel.languages ?? [],
     screens: context.screens.map(screenRef),
     updatedAt: channel.updatedAt.toISOString(),
   };

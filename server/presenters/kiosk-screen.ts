@@ -27,6 +27,7 @@ export function presentKioskScreen(screen: KioskScreen, now = Date.now()): Kiosk
     lastSeenAt: screen.lastSeenAt?.toISOString() ?? null,
     playerVersion: screen.playerVersion ?? null,
     showing: screen.showing ?? null,
+    language: screen.language ?? null,
     createdAt: screen.createdAt.toISOString(),
   };
 }

@@ -26,7 +26,7 @@ export const kioskFeed: RequestHandler[] = [
   requireKioskFeed,
   (req, res, next) => {
     const screen = currentKiosk(req);
-    const target = { channelId: req.kioskChannelId ?? null, venueId: screen.venueId };
+    const target = { channelId: req.kioskChannelId ?? null, venueId: screen.venueId, language: screen.language ?? null };
     const ready = freshKioskFeed(target);
     if (ready) return sendFeed(req, res, ready);
     getKioskFeed(target).then((feed) => sendFeed(req, res, feed), next);

@@ -1,10 +1,17 @@
 import { Router } from 'express';
-import { ScreenCreateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
+import { ScreenCreateSchema, ScreenLanguageSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
-import { issuePairingCode, revokeScreen, addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
+import {
+  issuePairingCode,
+  revokeScreen,
+  addScreen,
+  listScreens,
+  removeScreen,
+  setScreenLanguage,
+} from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
@@ -37,6 +44,15 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
   const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
   res.status(201).json({ data: body });
+});
+
+/** The one language the screen plays, or null to alternate between its channel's languages. */
+venueScreensRouter.patch('/:screenId', validate(ScreenLanguageSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
+  authorize(viewer, 'venue', 'manageScreens', venue);
+  const screen = await loadScreen(venue, req.params.screenId);
+  res.json({ data: presentKioskScreen(await setScreenLanguage(screen, req.body.language, viewer, req.ip)) });
 });
 
 venueScreensRouter.post('/:screenId/revoke', async (req, res) => {

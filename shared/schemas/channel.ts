@@ -1,6 +1,8 @@
 import type { ScreenHealth } from './kiosk.ts';
 import { z } from 'zod';
 import { ChannelLimits } from '../validations.ts';
+import { LocaleTagSchema } from './page-version.ts';
+import { STATEMENT_LOCALES } from '../statements/locales.ts';
 
 export const SLIDE_KINDS = ['page', 'image', 'sky_tonight'] as const;
 export type SlideKind = (typeof SLIDE_KINDS)[number];
@@ -36,7 +38,17 @@ const windowIssue = { message: 'The end must be after the start', path: ['endsAt
 export const ChannelCreateSchema = z.object({ venueId: z.uuid({ message: 'Choose a venue' }), name });
 export type ChannelCreateInput = z.infer<typeof ChannelCreateSchema>;
 
-export const ChannelUpdateSchema = z.object({ name });
+/**
+ * The languages a channel plays, in order (locale tags from the registry, each once). Screens without
+ * a language of their own alternate between them, one round of slides per language; empty plays each
+ * page slide in the language of the page chosen for it.
+ */
+export const ChannelLanguagesSchema = z
+  .array(LocaleTagSchema)
+  .max(STATEMENT_LOCALES.length)
+  .refine((tags) => new Set(tags).size === tags.length, 'A language is listed twice');
+
+export const ChannelUpdateSchema = z.object({ name, languages: ChannelLanguagesSchema.optional() });
 export type ChannelUpdateInput = z.infer<typeof ChannelUpdateSchema>;
 
 export const ChannelListQuerySchema = z.object({ venueId: z.uuid({ message: 'venueId must be a valid id' }).optional() });
@@ -122,6 +134,8 @@ export interface ChannelRowDto {
   name: string;
   venue: { id: string; name: string };
   slideCount: number;
+  /** The languages the channel plays, in order (empty: each page in its own language). */
+  languages: string[];
   screens: ChannelScreenRef[];
   updatedAt: string;
 }

@@ -75,10 +75,13 @@ export interface FeedSlide {
 }
 
 export interface FeedItem {
+  /** The slide's id; with languages to play, `<slide id>~<locale>` (one item per slide and language round). */
   id: string;
   /** A page slide's public page, absolute (`${PUBLIC_URL}/explore/<slug>`; JSON Feed's item `url`). */
   url?: string;
   title: string;
+  /** JSON Feed 1.1: the item's language (a page slide's version; the sky table is English; an image has none). */
+  language?: string;
   content_html: string;
   image?: string;
   date_published?: string;
@@ -98,6 +101,12 @@ export interface KioskFeed {
     /** The feed is rebuilt by then at the latest (a slide's window opens or closes, or the night changes). */
     valid_until: string | null;
     channel: { id: string; name: string } | null;
+    /**
+     * The languages this screen plays, in order: the screen's own, else the channel's. Items come in
+     * one round per language (a page slide in its version in that language, or as chosen when it has
+     * none; image and sky slides in every round). Empty: one round, each page as chosen.
+     */
+    languages: string[];
     venue: { id: string; name: string; time_zone: string };
     /** True when nothing is to be shown: the player shows a calm holding screen. */
     holding: boolean;

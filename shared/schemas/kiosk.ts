@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import type { SkyTonight } from '../sky/types.ts';
 import { KioskLimits } from '../validations.ts';
+import { LocaleTagSchema } from './page-version.ts';
 
 const screenName = z
   .string({ message: 'Enter a name for the screen' })
@@ -10,6 +11,12 @@ const screenName = z
 
 export const ScreenCreateSchema = z.object({ name: screenName });
 export type ScreenCreateInput = z.infer<typeof ScreenCreateSchema>;
+
+/** A screen's own language (a registered locale), or null to alternate between its channel's languages. */
+export const ScreenLanguageSchema = z.object({
+  language: LocaleTagSchema.nullable(),
+});
+export type ScreenLanguageInput = z.infer<typeof ScreenLanguageSchema>;
 
 /** The pairing code as typed on the player: letters and digits, dash and spaces optional. */
 export const KioskPairSchema = z.object({
@@ -64,6 +71,8 @@ export interface KioskScreenDto {
   lastSeenAt: string | null;
   playerVersion: string | null;
   showing: Record<string, unknown> | null;
+  /** The one language the screen plays, or null: it follows its channel's languages. */
+  language: string | null;
   createdAt: string;
 }
 

@@ -29,6 +29,18 @@ export interface PublicImageDto {
   sourceUrl: string;
 }
 
+/** Another language version of the same page (hreflang-style), the page itself included. */
+export interface PublicAlternateDto {
+  /** BCP 47 tag, as hreflang takes it. */
+  hreflang: string;
+  title: string;
+  slug: string;
+  /** Absolute address of that version in this API. */
+  href: string;
+  /** The version a reader gets when none of their languages is there (hreflang "x-default"). */
+  isDefault: boolean;
+}
+
 export interface PublicPageDto {
   id: string;
   /** Stable while the title stays the same; either the slug or the id finds the page. */
@@ -47,4 +59,6 @@ export interface PublicPageDto {
   eyeSafetyNotice: string | null;
   statements: PublicStatementDto[];
   images: PublicImageDto[];
+  /** Every published language version of this page, itself included (one entry when it has no other). */
+  alternates: PublicAlternateDto[];
 }

@@ -1,6 +1,6 @@
 import type { ResolvedModel } from '../schemas/calc.ts';
 import type { Step } from '../engine/working.ts';
-import { perLocale, type StatementLocale } from './locales.ts';
+import { language, perLocale, type StatementLocale } from './locales.ts';
 import { formatApproximate } from './number-words.ts';
 import { choosePrecision, type PrecisionChoice } from './precision.ts';
 import type { TemplateSuccess, UsedInput } from './types.ts';
@@ -110,11 +110,11 @@ export function cosmologyFootnote(model: ResolvedModel | null) {
   return (locale: StatementLocale): string | null => {
     if (!model) return null;
     if (model.kind === 'hubble_law') {
-      return locale.startsWith('fr')
+      return language(locale) === 'fr'
         ? `Calculé avec la loi de Hubble simple (H0 = ${model.H0}), un modèle d'enseignement valable seulement pour les faibles décalages vers le rouge.`
         : `Worked out with the simple Hubble law (H0 = ${model.H0}), a classroom model that only holds for small redshifts.`;
     }
-    return locale.startsWith('fr')
+    return language(locale) === 'fr'
       ? `Calculé avec le modèle cosmologique ${model.label}.`
       : `Worked out with the ${model.label} cosmology.`;
   };

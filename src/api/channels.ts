@@ -109,3 +109,11 @@ export function useDeleteChannel() {
     onSuccess: () => queryClient.invalidateQueries({ queryKey: channelKeys.all }),
   });
 }
+
+/** Sets the languages the channel plays, in order (its name is sent unchanged). */
+export const useSetChannelLanguages = (id: string) =>
+  useChannelEdit(
+    id,
+    async (input: { name: string; languages: string[] }) =>
+      (await api.patch<ApiData<ChannelDetailDto>>(`/channels/${id}`, input)).data,
+  );

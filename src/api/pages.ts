@@ -48,6 +48,8 @@ export const pageKeys = {
   revisions: (id: string) => [...pageKeys.all, 'revisions', id] as const,
   diff: (id: string, from?: number, to?: number) => [...pageKeys.all, 'diff', id, from, to] as const,
   comments: (id: string) => [...pageKeys.all, 'comments', id] as const,
+  versionLists: () => [...pageKeys.all, 'versions'] as const,
+  versions: (id: string) => [...pageKeys.versionLists(), id] as const,
 };
 
 export const pagesQueryOptions = (filters: PageFilters) =>

@@ -40,3 +40,12 @@ export const useRevokeScreen = (venueId: string) =>
     venueId,
     async (screenId: string) => (await api.post<ApiData<KioskScreenDto>>(`/venues/${venueId}/screens/${screenId}/revoke`)).data,
   );
+
+/** Gives a screen one language to play, or none (null) to follow its channel's languages. */
+export const useSetScreenLanguage = (venueId: string) =>
+  useScreenMutation(
+    venueId,
+    async (input: { screenId: string; language: string | null }) =>
+      (await api.patch<ApiData<KioskScreenDto>>(`/venues/${venueId}/screens/${input.screenId}`, { language: input.language }))
+        .data,
+  );

@@ -59,7 +59,14 @@ export function PageWorkspace({
     editable,
     immediatelyRender: true,
     editorProps: {
-      attributes: { class: 'page-prose', 'aria-label': 'Page text', role: 'textbox', 'aria-multiline': 'true' },
+      // The text's language (a French version is French): spell-checking, hyphenation and screen readers follow it.
+      attributes: {
+        class: 'page-prose',
+        'aria-label': 'Page text',
+        role: 'textbox',
+        'aria-multiline': 'true',
+        lang: page.locale,
+      },
       transformPastedHTML: cleanPastedHtml,
     },
     onUpdate: () => autosaveRef.current?.(),

@@ -110,6 +110,7 @@ export class Player {
           showing: {
             slideId: this.current?.id ?? null,
             title: this.current?.layer.getAttribute('aria-label') ?? 'Holding screen',
+            language: this.current?.layer.getAttribute('lang') ?? null,
             feedEtag: this.etag,
             offline: Date.now() - this.lastContact > OFFLINE_AFTER_MS,
           },

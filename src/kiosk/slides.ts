@@ -2,14 +2,23 @@ import type { FeedItem, FeedSky, FeedSlide, FeedStatement } from '@shared/schema
 import { keepDesignationsTogether as nb } from '@shared/text/designations.ts';
 import { h } from './dom.ts';
 
-/** "as of 3 March 2026", in the venue's time zone. */
-function asOfText(iso: string, timeZone: string): string {
+/** The player's own words, per language of the slide (English when a slide names none we have). */
+const WORDS = {
+  en: { asOf: 'as of', image: 'Image: ' },
+  fr: { asOf: 'en date du', image: 'Image\u00a0: ' },
+} as const;
+const wordsFor = (language: string | undefined) => (language?.toLowerCase().startsWith('fr') ? WORDS.fr : WORDS.en);
+
+/** "as of 3 March 2026" / "en date du 3 mars 2026", in the venue's time zone and the slide's language. */
+function asOfText(iso: string, timeZone: string, language: string | undefined): string {
   const date = new Date(iso);
   if (Number.isNaN(date.getTime())) return '';
+  const words = wordsFor(language);
   try {
-    return `as of ${new Intl.DateTimeFormat('en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone }).format(date)}`;
+    const format = new Intl.DateTimeFormat(language ?? 'en-GB', { day: 'numeric', month: 'long', year: 'numeric', timeZone });
+    return `${words.asOf} ${format.format(date)}`;
   } catch {
-    return `as of ${date.toISOString().slice(0, 10)}`;
+    return `${words.asOf} ${date.toISOString().slice(0, 10)}`;
   }
 }
 
@@ -19,7 +28,12 @@ function asOfText(iso: string, timeZone: string): string {
  */
 const NOTES_UP_TO = 3;
 
-function statementList(statements: FeedStatement[], timeZone: string, roomForNotes: boolean): HTMLElement | null {
+function statementList(
+  statements: FeedStatement[],
+  timeZone: string,
+  roomForNotes: boolean,
+  language: string | undefined,
+): HTMLElement | null {
   if (!statements.length) return null;
   const withNotes = roomForNotes && statements.length <= NOTES_UP_TO;
   return h(
@@ -31,7 +45,7 @@ function statementList(statements: FeedStatement[], timeZone: string, roomForNot
         {},
         h('span', { class: 'statement-text' }, nb(s.text)),
         ' ',
-        h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone)),
+        h('span', { class: 'as-of' }, asOfText(s.as_of, timeZone, language)),
         withNotes && s.note ? h('small', { class: 'statement-note' }, s.note) : null,
       ),
     ),
@@ -39,12 +53,12 @@ function statementList(statements: FeedStatement[], timeZone: string, roomForNot
 }
 
 /** Credit and licence, always on screen with an image, bottom right. */
-function creditLine(slide: FeedSlide): HTMLElement | null {
+function creditLine(slide: FeedSlide, language: string | undefined): HTMLElement | null {
   if (!slide.image) return null;
   return h(
     'p',
     { class: 'credit' },
-    h('span', { class: 'visually-hidden' }, 'Image: '),
+    h('span', { class: 'visually-hidden' }, wordsFor(language).image),
     slide.credit ?? '',
     ' · ',
     slide.licence ?? '',
@@ -101,6 +115,8 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
     'data-slide-id': item.id,
     'aria-label': item.title || 'Image',
   });
+  // Screen readers, hyphenation and quotation marks follow the slide's language (a round of French slides is French).
+  if (item.language) layer.setAttribute('lang', item.language);
   if (slide.layout === 'sky-table' && item._starproof.sky) {
     layer.append(
       h(
@@ -123,11 +139,11 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
         { class: 'panel' },
         h('h1', { class: 'title' }, nb(item.title)),
         slide.text ? h('p', { class: 'body' }, nb(slide.text)) : null,
-        statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280),
+        statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280, item.language),
       ),
     );
   }
-  const credit = creditLine(slide);
+  const credit = creditLine(slide, item.language);
   if (credit && imageSrc) layer.append(credit);
   return layer;
 }

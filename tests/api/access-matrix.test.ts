@@ -50,6 +50,8 @@ const EXPECTED: Record<string, Answer[]> = {
   'GET /api/pages/:id/revisions/diff': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/pages/:id/revisions/:number': ['401', '401', '403', '403', 'ok', 'ok'],
   'POST /api/pages/:id/revisions/:number/restore': ['401', '401', '403', '403', 'ok', 'ok'],
+  'GET /api/pages/:id/versions': ['401', '401', '403', '403', 'ok', 'ok'],
+  'POST /api/pages/:id/versions': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/statements': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/statements': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/statements/:id': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
@@ -132,6 +134,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'DELETE /api/catalogue/measurements/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'DELETE /api/catalogue/objects/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'POST /api/venues/:venueId/screens/:screenId/revoke': ['401', '401', '403', '403', '403', 'ok'],
+  'PATCH /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:id': ['401', '401', '403', '403', '403', 'ok'],
 };

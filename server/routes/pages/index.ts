@@ -23,6 +23,7 @@ import {
 import { getPublicPages } from '../../services/publishing/index.ts';
 import { loadPage } from '../load.ts';
 import { revisionsRouter } from './revisions.ts';
+import { versionsRouter } from './versions.ts';
 import { workflowRouter } from './workflow.ts';
 
 const tooLarge = () =>
@@ -121,3 +122,4 @@ pagesRouter.get('/:id/published', async (req, res) => {
 
 pagesRouter.use('/:id', workflowRouter);
 pagesRouter.use('/:id/revisions', revisionsRouter);
+pagesRouter.use('/:id/versions', versionsRouter);

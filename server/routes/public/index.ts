@@ -1,9 +1,12 @@
-import { Router, type RequestHandler } from 'express';
+import { Router, type Request, type RequestHandler, type Response } from 'express';
+import { PublicLangQuerySchema } from '@shared/schemas/page-version.ts';
+import type { PublicPageDto } from '@shared/schemas/public-page.ts';
 import { rateLimit } from 'express-rate-limit';
 import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { sendCached } from '../../middlewares/http-cache.ts';
-import { atomDocument, getPublicPages, prepare } from '../../services/publishing/index.ts';
+import { validateQuery } from '../../middlewares/validate.ts';
+import { atomDocument, getPublicPages, negotiatedList, negotiatedPage, prepare } from '../../services/publishing/index.ts';
 
 /**
  * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
@@ -33,7 +36,7 @@ const cors: RequestHandler = (req, res, next) => {
     'Access-Control-Allow-Origin': '*',
     'Access-Control-Allow-Methods': 'GET, HEAD, OPTIONS',
     'Access-Control-Allow-Headers': 'If-None-Match, Accept',
-    'Access-Control-Expose-Headers': 'ETag, RateLimit, RateLimit-Policy, Retry-After',
+    'Access-Control-Expose-Headers': 'ETag, Link, RateLimit, RateLimit-Policy, Retry-After',
     'Access-Control-Max-Age': '86400',
     'Cross-Origin-Resource-Policy': 'cross-origin',
   });
@@ -60,8 +63,32 @@ const atomBaseUrl = () => appBaseUrl().replace(/\/+$/, '');
 export const publicRouter = Router();
 publicRouter.use(cors, limiter);
 
-publicRouter.get('/pages', async (req, res) => {
-  const { list } = await getPublicPages();
+/**
+ * The reader's Accept-Language ranges, best first (negotiator, through Express: q-values, `q=0`
+ * left out, ties in the header's order), or null when the header is absent or empty.
+ */
+function rankedLanguages(req: Request): string[] | null {
+  if (!req.get('accept-language')?.trim()) return null;
+  return req.acceptsLanguages();
+}
+
+/** The headers of a negotiated answer: which language it is in, its alternates, and that it varies by Accept-Language. */
+function languageHeaders(res: Response, page: PublicPageDto | null): void {
+  res.vary('Accept-Language');
+  if (!page) return;
+  res.set('Content-Language', page.locale);
+  if (page.alternates.length > 1) {
+    const links = page.alternates.map((a) => `<${a.href}>; rel="alternate"; hreflang="${a.hreflang}"`);
+    const fallback = page.alternates.find((a) => a.isDefault);
+    if (fallback) links.push(`<${fallback.href}>; rel="alternate"; hreflang="x-default"`);
+    res.set('Link', links.join(', '));
+  }
+}
+
+/** Every published page; with `?lang=` or Accept-Language, one language version of each. */
+publicRouter.get('/pages', validateQuery(PublicLangQuerySchema), async (req, res) => {
+  const list = negotiatedList(await getPublicPages(), req.query.lang, rankedLanguages(req));
+  languageHeaders(res, null);
   sendCached(req, res, list.body, list.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
@@ -78,10 +105,16 @@ publicRouter.get('/pages.atom', async (req, res) => {
   sendCached(req, res, doc.body, doc.etag, 'application/atom+xml; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
-publicRouter.get('/pages/:slugOrId', async (req, res) => {
-  const found = (await getPublicPages()).bySlugOrId.get(String(req.params.slugOrId).toLowerCase());
+/**
+ * One published page, in the language version the reader asks for (`?lang=`, else Accept-Language,
+ * else the version the address names; the page's default version when their languages are not there).
+ */
+publicRouter.get('/pages/:slugOrId', validateQuery(PublicLangQuerySchema), async (req, res) => {
+  const slugOrId = String((req.params as { slugOrId: string }).slugOrId).toLowerCase();
+  const found = negotiatedPage(await getPublicPages(), slugOrId, req.query.lang, rankedLanguages(req));
   if (!found) throw NotFoundError('There is no published page with this name or id.');
-  sendCached(req, res, found.body, found.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
+  languageHeaders(res, found.page);
+  sendCached(req, res, found.prepared.body, found.prepared.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
 publicRouter.use((req, _res, next) =>

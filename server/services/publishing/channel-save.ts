@@ -59,15 +59,32 @@ export async function createChannel(input: ChannelCreateInput, actor: User, ip?:
 }
 
 /**
- * Renames a channel.
+ * Renames a channel and, when `languages` is given, sets the languages it plays.
  * @throws HttpError 409 name taken at the venue
  */
 export async function updateChannel(channel: Channel, input: ChannelUpdateInput, actor: User, ip?: string): Promise<Channel> {
   await getSequelize().transaction(async (transaction) => {
     const row = await lockChannel(channel.id, transaction);
     await assertNameFree(row.venueId, input.name, row.id, transaction);
-    await row.update({ name: input.name }, { transaction });
+    const languages = input.languages ?? row.languages;
+    const languagesMoved = languages.join(',') !== row.languages.join(',');
+    await row.update({ name: input.name, languages }, { transaction });
     await touchChannel(row.id, transaction);
+    if (languagesMoved) {
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'channel.languages_set',
+          subjectType: 'channel',
+          subjectId: row.id,
+          data: { from: channel.languages, to: languages },
+          ip,
+        },
+        transaction,
+      );
+    }
+    // A change of languages alone is not a rename.
+    if (channel.name === input.name && input.languages !== undefined) return;
     await recordAudit(
       {
         actorId: actor.id,

@@ -12,6 +12,8 @@ export interface PublishingEventMap {
   channelChanged: [{ channelId: string }];
   /** A kiosk screen's token was revoked (its cached sign-in must end at once). */
   screenRevoked: [{ screenId: string }];
+  /** A kiosk screen's settings changed (its language): its cached sign-in, which carries them, is read again. */
+  screenChanged: [{ screenId: string }];
 }
 
 /**

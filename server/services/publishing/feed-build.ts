@@ -22,6 +22,8 @@ import { getPublicPages } from './public-pages.ts';
 export interface FeedTarget {
   channelId: string | null;
   venueId: string;
+  /** The screen's own language (it plays only that one), or null/absent to follow the channel's languages. */
+  language?: string | null;
 }
 
 export interface BuiltFeed {
@@ -59,19 +61,42 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   const channel = target.channelId ? await Channel.findOne({ where: { id: target.channelId, venueId: venue.id } }) : null;
   const slides = channel ? await ChannelSlide.findAll({ where: { channelId: channel.id }, order: [['position', 'ASC']] }) : [];
 
-  const pageIds = [...new Set(slides.flatMap((s) => (s.pageId ? [s.pageId] : [])))];
+  const languages = target.language ? [target.language] : (channel?.languages ?? []);
+  const slidePageIds = [...new Set(slides.flatMap((s) => (s.pageId ? [s.pageId] : [])))];
   const statementIds = [...new Set(slides.flatMap((s) => s.statementIds ?? []))];
-  const [pages, statements] = await Promise.all([
-    pageIds.length
-      ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'locale', 'publishedSnapshot'] })
+  const [slidePages, statements] = await Promise.all([
+    slidePageIds.length
+      ? Page.findAll({
+          where: { id: { [Op.in]: slidePageIds } },
+          attributes: ['id', 'locale', 'publishedSnapshot', 'versionGroupId'],
+        })
       : [],
     publicStatements(statementIds),
   ]);
+  // With languages to play, the other published language versions of each slide's page too.
+  const groupIds = languages.length ? [...new Set(slidePages.flatMap((p) => (p.versionGroupId ? [p.versionGroupId] : [])))] : [];
+  const versions = groupIds.length
+    ? await Page.findAll({
+        where: { versionGroupId: { [Op.in]: groupIds }, publishedSnapshot: { [Op.ne]: null } },
+        attributes: ['id', 'locale', 'publishedSnapshot', 'versionGroupId'],
+      })
+    : [];
+  const pages = [...new Map([...slidePages, ...versions].map((p) => [p.id, p])).values()];
+  const pageIds = pages.map((p) => p.id);
   const live = new Map(pages.filter((p) => p.publishedSnapshot).map((p) => [p.id, p.publishedSnapshot!]));
   const pageLocales = new Map(pages.map((p) => [p.id, p.locale]));
-  const imageOf = (s: ChannelSlide) =>
-    (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
-  const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
+  const pageById = new Map(pages.map((p) => [p.id, p]));
+  /** The page a slide shows in a language: its published version in that locale, else the page chosen for it. */
+  const pageIn = (pageId: string, language: string | null): string => {
+    const chosen = pageById.get(pageId);
+    if (!language || !chosen?.versionGroupId || chosen.locale === language) return pageId;
+    return versions.find((v) => v.versionGroupId === chosen.versionGroupId && v.locale === language)?.id ?? pageId;
+  };
+  const imageOf = (s: ChannelSlide, pageId = s.pageId) =>
+    (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
+  const mediaIds = [
+    ...new Set([...slides.map((s) => imageOf(s)), ...pages.map((p) => mediaIdsInHtml(p.publishedSnapshot?.html ?? '')[0])]),
+  ].filter((id): id is string => !!id);
   const [images, publicPages] = await Promise.all([loadPublishedImages(mediaIds), pageIds.length ? getPublicPages() : null]);
   const pageUrls = new Map(publicPages?.pages.map((p) => [p.id, p.url]));
 
@@ -89,73 +114,81 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   }
 
   const items: FeedItem[] = [];
-  for (const s of active) {
-    const base = {
-      kind: s.kind,
-      position: s.position,
-      duration_s: s.durationS,
-      starts_at: s.startsAt?.toISOString() ?? null,
-      ends_at: s.endsAt?.toISOString() ?? null,
-    };
-    const img = images.get(imageOf(s) ?? '');
-    if (s.kind === 'page') {
-      const snapshot = live.get(s.pageId!);
-      if (!snapshot) continue; // unpublished: gone from the screens at once
-      const shown = publicPageTexts(snapshot, statements, pageLocales.get(s.pageId!) ?? 'en-GB');
-      const chosen = (s.statementIds ?? [])
-        .filter((id) => shown.statementTexts[id])
-        .map((id) => ({
-          id,
-          text: shown.statementTexts[id],
-          ...(shown.notes[id] ? { note: shown.notes[id]! } : {}),
-          as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt,
-        }));
-      const text = firstParagraphText(shown.html);
-      const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
-      const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
-      const url = pageUrls.get(s.pageId!);
-      items.push({
-        id: s.id,
-        ...(url ? { url } : {}),
-        title: snapshot.title,
-        content_html: html,
-        ...(img ? { image: img.image.hd } : {}),
-        date_published: snapshot.publishedAt ?? snapshot.signedOffAt,
-        _starproof: { slide },
-      });
-    } else if (s.kind === 'image') {
-      if (!img) continue; // no picture goes up without its credit and licence
-      const slide: FeedSlide = { ...base, layout: 'image', text: s.caption, statements: [], ...imageParts(img) };
-      items.push({
-        id: s.id,
-        title: s.caption,
-        content_html: `${figureHtml(img)}${s.caption ? `<p>${e(s.caption)}</p>` : ''}`,
-        image: img.image.hd,
-        date_published: s.createdAt.toISOString(),
-        date_modified: img.updatedAt.toISOString(),
-        _starproof: { slide },
-      });
-    } else if (sky) {
-      const table = feedSky(sky.data, sky.computedAt, venue.name);
-      const slide: FeedSlide = {
-        ...base,
-        layout: 'sky-table',
-        text: `Tonight from ${venue.name}`,
-        statements: [],
-        credit: null,
-        licence: null,
-        licence_url: null,
-        image: null,
+  // One round of slides per language, in the order listed: the player plays the items in order, so
+  // a screen alternates between languages round by round. No languages: one round, as chosen.
+  for (const round of languages.length ? languages : [null])
+    for (const s of active) {
+      const shownPageId = s.pageId ? pageIn(s.pageId, round) : null;
+      const id = round ? `${s.id}~${round}` : s.id;
+      const base = {
+        kind: s.kind,
+        position: s.position,
+        duration_s: s.durationS,
+        starts_at: s.startsAt?.toISOString() ?? null,
+        ends_at: s.endsAt?.toISOString() ?? null,
       };
-      items.push({
-        id: s.id,
-        title: 'The sky tonight',
-        content_html: skyHtml(table),
-        date_published: sky.computedAt.toISOString(),
-        _starproof: { slide, sky: table },
-      });
+      const img = images.get(imageOf(s, shownPageId) ?? '');
+      if (s.kind === 'page') {
+        const snapshot = live.get(shownPageId!);
+        if (!snapshot) continue; // unpublished: gone from the screens at once
+        const locale = pageLocales.get(shownPageId!) ?? 'en-GB';
+        const shown = publicPageTexts(snapshot, statements, locale);
+        const chosen = (s.statementIds ?? [])
+          .filter((id) => shown.statementTexts[id])
+          .map((id) => ({
+            id,
+            text: shown.statementTexts[id],
+            ...(shown.notes[id] ? { note: shown.notes[id]! } : {}),
+            as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt,
+          }));
+        const text = firstParagraphText(shown.html);
+        const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
+        const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
+        const url = pageUrls.get(shownPageId!);
+        items.push({
+          id,
+          ...(url ? { url } : {}),
+          title: snapshot.title,
+          language: locale,
+          content_html: html,
+          ...(img ? { image: img.image.hd } : {}),
+          date_published: snapshot.publishedAt ?? snapshot.signedOffAt,
+          _starproof: { slide },
+        });
+      } else if (s.kind === 'image') {
+        if (!img) continue; // no picture goes up without its credit and licence
+        const slide: FeedSlide = { ...base, layout: 'image', text: s.caption, statements: [], ...imageParts(img) };
+        items.push({
+          id,
+          title: s.caption,
+          content_html: `${figureHtml(img)}${s.caption ? `<p>${e(s.caption)}</p>` : ''}`,
+          image: img.image.hd,
+          date_published: s.createdAt.toISOString(),
+          date_modified: img.updatedAt.toISOString(),
+          _starproof: { slide },
+        });
+      } else if (sky) {
+        const table = feedSky(sky.data, sky.computedAt, venue.name);
+        const slide: FeedSlide = {
+          ...base,
+          layout: 'sky-table',
+          text: `Tonight from ${venue.name}`,
+          statements: [],
+          credit: null,
+          licence: null,
+          licence_url: null,
+          image: null,
+        };
+        items.push({
+          id,
+          title: 'The sky tonight',
+          language: 'en',
+          content_html: skyHtml(table),
+          date_published: sky.computedAt.toISOString(),
+          _starproof: { slide, sky: table },
+        });
+      }
     }
-  }
 
   const feed: KioskFeed = {
     version: JSON_FEED_VERSION,
@@ -169,13 +202,14 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       server_time: new Date(now).toISOString(),
       valid_until: validUntil === null ? null : new Date(validUntil).toISOString(),
       channel: channel ? { id: channel.id, name: channel.name } : null,
+      languages,
       venue: { id: venue.id, name: venue.name, time_zone: venue.timeZone },
       holding: items.length === 0,
     },
   };
   return {
     feed,
-    deps: { channelId: channel?.id ?? null, venueId: venue.id, pageIds, statementIds, mediaIds, skyDate },
+    deps: { channelId: channel?.id ?? null, venueId: venue.id, pageIds, pageGroupIds: groupIds, statementIds, mediaIds, skyDate },
     validUntil,
   };
 }

@@ -28,7 +28,7 @@ const pending = new Map<string, Promise<CachedFeed>>();
 let generation = 0;
 const stats = { builds: 0, checks: 0 };
 
-const keyOf = (t: FeedTarget) => t.channelId ?? `venue:${t.venueId}`;
+const keyOf = (t: FeedTarget) => `${t.channelId ?? `venue:${t.venueId}`}|${t.language ?? ''}`;
 const sha = (data: string | Buffer) => createHash('sha256').update(data).digest('base64url');
 
 async function build(target: FeedTarget, previous: CachedFeed | undefined): Promise<CachedFeed> {

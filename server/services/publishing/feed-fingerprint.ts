@@ -11,6 +11,8 @@ export interface FeedDeps {
   mediaIds: string[];
   /** The night whose sky snapshot was used, or null when no sky slide is showing. */
   skyDate: string | null;
+  /** Language version groups whose published versions count (a version published in another language shows up). */
+  pageGroupIds?: string[];
   /** Every published page counts (the public API lists them all). */
   allPublishedPages?: boolean;
 }
@@ -30,6 +32,7 @@ export async function feedFingerprint(deps: FeedDeps): Promise<string> {
      UNION ALL SELECT 'v' || v.id || ':' || v.updated_at::text FROM venues v WHERE v.id = :venueId
      UNION ALL SELECT 'p' || p.id || ':' || coalesce(p.published_revision_id::text, '-') || ':' || coalesce(p.published_snapshot->>'publishedAt', '-')
        FROM pages p WHERE p.id = ANY(CAST(:pageIds AS uuid[])) OR (:allPages AND p.published_snapshot IS NOT NULL)
+         OR (p.version_group_id = ANY(CAST(:groupIds AS uuid[])) AND p.published_snapshot IS NOT NULL)
      UNION ALL SELECT 's' || s.id || ':' || s.computed_at::text || ':' || coalesce(s.acknowledged_at::text, '-') FROM statements s WHERE s.id = ANY(CAST(:statementIds AS uuid[]))
      UNION ALL SELECT 'm' || m.id || ':' || m.updated_at::text FROM media m WHERE m.id = ANY(CAST(:mediaIds AS uuid[]))
      UNION ALL SELECT 'k' || k.computed_at::text FROM sky_snapshots k WHERE k.venue_id = :venueId AND k.local_date = CAST(:skyDate AS date)
@@ -41,6 +44,7 @@ export async function feedFingerprint(deps: FeedDeps): Promise<string> {
         venueId: deps.venueId ?? NONE,
         pageIds: `{${deps.pageIds.join(',')}}`,
         allPages: !!deps.allPublishedPages,
+        groupIds: `{${(deps.pageGroupIds ?? []).join(',')}}`,
         statementIds: `{${deps.statementIds.join(',')}}`,
         mediaIds: `{${deps.mediaIds.join(',')}}`,
         skyDate: deps.skyDate ?? '1800-01-01',

@@ -2,6 +2,7 @@ import { getSequelize } from '../../db.ts';
 import { ConflictError } from '../../errors.ts';
 import { KioskScreen, type User, type Venue } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
+import { publishingEvents } from './events.ts';
 
 /** A venue's screens, by name. */
 export async function listScreens(venue: Venue): Promise<KioskScreen[]> {
@@ -79,4 +80,35 @@ export async function countScreensByVenue(): Promise<Map<string, number>> {
 /** How many screens a venue has. */
 export function countScreens(venue: Venue): Promise<number> {
   return KioskScreen.count({ where: { venueId: venue.id } });
+}
+
+/**
+ * Sets the one language a screen plays, or null to alternate between its channel's languages. The
+ * screen's remembered sign-in is dropped after commit (`screenChanged`), so its next poll reads the
+ * feed for the new language.
+ */
+export async function setScreenLanguage(
+  screen: KioskScreen,
+  language: string | null,
+  actor: User,
+  ip?: string,
+): Promise<KioskScreen> {
+  if ((screen.language ?? null) === language) return screen;
+  const from = screen.language ?? null;
+  await getSequelize().transaction(async (transaction) => {
+    await screen.update({ language }, { transaction });
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'kiosk.screen_language_set',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { from, to: language },
+        ip,
+      },
+      transaction,
+    );
+    transaction.afterCommit(() => void publishingEvents.emit('screenChanged', { screenId: screen.id }));
+  });
+  return screen;
 }

@@ -1,7 +1,9 @@
 import { createHash } from 'node:crypto';
 import { Op } from 'sequelize';
 import type { PublicPageDto } from '@shared/schemas/public-page.ts';
-import { Page, SkyObject } from '../../models/index.ts';
+import { Page, PageVersionGroup, SkyObject } from '../../models/index.ts';
+import { appBaseUrl } from '../../config.ts';
+import { chooseVersion, type VersionChoice } from './public-languages.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages } from './feed-media.ts';
 import { firstParagraphText, mediaIdsInHtml, slugify } from './feed-text.ts';
@@ -23,6 +25,12 @@ export interface PublicPages {
   pages: PublicPageDto[];
   list: Prepared;
   bySlugOrId: Map<string, Prepared>;
+  /** Slug or id → the page's id; page id → its published versions, the default first. */
+  idBySlugOrId: Map<string, string>;
+  versions: Map<string, VersionChoice[]>;
+  byId: Map<string, PublicPageDto>;
+  /** Lists answered for one choice of language, by that choice. */
+  lists: Map<string, Prepared>;
   /** Atom documents per base URL (links in Atom are absolute). */
   atom: Map<string, Prepared>;
   /** Rendered public HTML (pages, index, sitemap, fragments) by route key, made on first request. */
@@ -43,8 +51,15 @@ export function prepare(value: unknown): Prepared {
 async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'checkedAt'>> {
   const rows = await Page.findAll({
     where: { publishedSnapshot: { [Op.ne]: null } },
-    attributes: ['id', 'locale', 'skyObjectId', 'publishedSnapshot'],
+    attributes: ['id', 'locale', 'skyObjectId', 'publishedSnapshot', 'versionGroupId', 'createdAt'],
   });
+  const groupIds = [...new Set(rows.flatMap((p) => (p.versionGroupId ? [p.versionGroupId] : [])))];
+  const defaults = new Map(
+    (groupIds.length ? await PageVersionGroup.findAll({ where: { id: { [Op.in]: groupIds } } }) : []).map((g) => [
+      g.id,
+      g.defaultPageId,
+    ]),
+  );
   rows.sort(
     (a, b) =>
       (b.publishedSnapshot!.publishedAt ?? '').localeCompare(a.publishedSnapshot!.publishedAt ?? '') || a.id.localeCompare(b.id),
@@ -101,6 +116,7 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
               : null,
         };
       }),
+      alternates: [],
       images: mediaIdsInHtml(live.html).flatMap((id) => {
         const img = images.get(id);
         return img
@@ -119,20 +135,68 @@ async function buildPublicPages(): Promise<Omit<PublicPages, 'fingerprint' | 'ch
       }),
     };
   });
+  const versions = publishedVersions(rows, defaults);
+  const byId = new Map(pages.map((p) => [p.id, p]));
+  const base = appBaseUrl().replace(/\/+$/, '');
+  for (const page of pages) {
+    const group = versions.get(page.id)!;
+    page.alternates = group.map((v, i) => {
+      const other = byId.get(v.id)!;
+      return {
+        hreflang: v.locale,
+        title: other.title,
+        slug: other.slug,
+        href: `${base}/api/public/pages/${other.slug}`,
+        isDefault: i === 0,
+      };
+    });
+  }
   const bySlugOrId = new Map<string, Prepared>();
+  const idBySlugOrId = new Map<string, string>();
   for (const page of pages) {
     const prepared = prepare({ data: page });
     bySlugOrId.set(page.id, prepared);
     bySlugOrId.set(page.slug, prepared);
+    idBySlugOrId.set(page.id, page.id);
+    idBySlugOrId.set(page.slug, page.id);
   }
   return {
     pages,
     list: prepare({ data: pages, meta: { total: pages.length } }),
     bySlugOrId,
+    idBySlugOrId,
+    versions,
+    byId,
+    lists: new Map(),
     atom: new Map(),
     rendered: new Map(),
     deps: { channelId: null, venueId: null, pageIds: [], statementIds, mediaIds, skyDate: null, allPublishedPages: true },
   };
+}
+
+/**
+ * Each published page's published language versions, the group's default first (or, when the
+ * default is not published or was deleted, the oldest published version), then oldest first.
+ */
+function publishedVersions(rows: Page[], defaults: Map<string, string | null>): Map<string, VersionChoice[]> {
+  const groups = new Map<string, Page[]>();
+  for (const p of rows) {
+    const key = p.versionGroupId ?? p.id;
+    groups.set(key, [...(groups.get(key) ?? []), p]);
+  }
+  const result = new Map<string, VersionChoice[]>();
+  for (const [key, members] of groups) {
+    const defaultId = defaults.get(key) ?? null;
+    const ordered = [...members].sort(
+      (a, b) =>
+        Number(b.id === defaultId) - Number(a.id === defaultId) ||
+        a.createdAt.getTime() - b.createdAt.getTime() ||
+        a.id.localeCompare(b.id),
+    );
+    const choices = ordered.map((p) => ({ id: p.id, locale: p.locale }));
+    for (const p of members) result.set(p.id, choices);
+  }
+  return result;
 }
 
 let current: PublicPages | undefined;
@@ -180,4 +244,54 @@ export function invalidatePublicPages(): void {
     current.checkedAt = 0;
     current.fingerprint = '';
   }
+}
+
+/** A negotiated answer: the prepared bytes, the page (for headers) or null for a list. */
+export interface NegotiatedPage {
+  prepared: Prepared;
+  page: PublicPageDto;
+}
+
+/**
+ * The language version of a published page a reader gets (see chooseVersion), prepared.
+ * @param slugOrId what the address names, lower case
+ * @param lang `?lang=`, checked against the registry
+ * @param ranked Accept-Language ranges by preference, or null without the header
+ * @returns undefined when no published page has that slug or id
+ */
+export function negotiatedPage(
+  pages: PublicPages,
+  slugOrId: string,
+  lang: string | undefined,
+  ranked: string[] | null,
+): NegotiatedPage | undefined {
+  const id = pages.idBySlugOrId.get(slugOrId);
+  if (!id) return undefined;
+  const versions = pages.versions.get(id)!;
+  const chosen = chooseVersion(versions, versions.find((v) => v.id === id)!, lang, ranked);
+  return { prepared: pages.bySlugOrId.get(chosen.id)!, page: pages.byId.get(chosen.id)! };
+}
+
+/**
+ * The list of published pages. With no language asked for (neither `?lang=` nor Accept-Language),
+ * every version; otherwise one version per page, chosen as for a single page.
+ */
+export function negotiatedList(pages: PublicPages, lang: string | undefined, ranked: string[] | null): Prepared {
+  if (!lang && !ranked) return pages.list;
+  const key = JSON.stringify([lang ?? null, ranked]);
+  let list = pages.lists.get(key);
+  if (!list) {
+    const seen = new Set<VersionChoice[]>();
+    const chosen: PublicPageDto[] = [];
+    for (const page of pages.pages) {
+      const versions = pages.versions.get(page.id)!;
+      if (seen.has(versions)) continue;
+      seen.add(versions);
+      chosen.push(pages.byId.get(chooseVersion(versions, versions[0]!, lang, ranked).id)!);
+    }
+    if (pages.lists.size >= 64) pages.lists.clear();
+    list = prepare({ data: chosen, meta: { total: chosen.length } });
+    pages.lists.set(key, list);
+  }
+  return list;
 }

@@ -1,7 +1,8 @@
 import { SOLAR_MAGNITUDES } from '../../engine/solar-magnitudes.ts';
-import type { StatementLocale } from '../locales.ts';
+import { language, type StatementLocale } from '../locales.ts';
 
-export const isFrench = (locale: StatementLocale) => locale.startsWith('fr');
+/** Whether a locale's words are French (from the locale registry: fr-FR, and any French locale added there). */
+export const isFrench = (locale: StatementLocale) => language(locale) === 'fr';
 export const isAmerican = (locale: StatementLocale) => locale === 'en-US';
 
 /**

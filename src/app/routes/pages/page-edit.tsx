@@ -2,6 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useCallback, useRef, useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
 import type { PageDto } from '@shared/schemas/page.ts';
+import { LOCALE_LABELS } from '@shared/statements/locales.ts';
 import { useSubmitPage, useWithdrawPage } from '@/api/page-workflow.ts';
 import { pageKeys, usePage } from '@/api/pages.ts';
 import { useSettings } from '@/api/settings.ts';
@@ -11,6 +12,7 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
+import { LanguageVersions } from '@/features/pages/components/language-versions.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
 import { PublishPanel } from '@/features/pages/components/publish-panel.tsx';
 import { SubmitFlagsForm } from '@/features/pages/components/submit-flags-form.tsx';
@@ -46,7 +48,8 @@ export function Component() {
         title={p.title}
         description={
           <span className="flex flex-wrap items-center gap-2">
-            <PageStatusBadge status={p.status} /> About {p.object.name} · revision {p.revision.number} · by {p.writer.name}
+            <PageStatusBadge status={p.status} /> About {p.object.name} · {LOCALE_LABELS[p.locale]} · revision {p.revision.number}{' '}
+            · by {p.writer.name}
             {p.published && p.status !== 'published' && <span>· revision {p.published.revisionNumber} is live</span>}
           </span>
         }
@@ -122,6 +125,9 @@ export function Component() {
           </Notice>
         </div>
       )}
+      <div className="mb-4">
+        <LanguageVersions pageId={p.id} />
+      </div>
       {p.can.publish && (
         <div className="mb-4">
           <PublishPanel page={p} />

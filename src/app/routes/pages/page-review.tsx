@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Link, useParams } from 'react-router-dom';
+import { LOCALE_LABELS } from '@shared/statements/locales.ts';
 import { useResolveFlag, useSendBack, useSignOffPage, useSignOffStatement } from '@/api/page-workflow.ts';
 import { useApprovalProblems, usePage, usePreview, usePublished } from '@/api/pages.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -42,8 +43,8 @@ export function Component() {
         title={p.title}
         description={
           <span className="flex flex-wrap items-center gap-2">
-            <PageStatusBadge status={p.status} /> About {p.object.name} · revision {p.revision.number} by{' '}
-            {p.revision.author ?? p.writer.name}
+            <PageStatusBadge status={p.status} /> About {p.object.name} · {LOCALE_LABELS[p.locale]} · revision {p.revision.number}{' '}
+            by {p.revision.author ?? p.writer.name}
             {p.lastReviewer ? ` · last reviewer ${p.lastReviewer}` : ''}
           </span>
         }

@@ -17,6 +17,7 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
+import { ChannelLanguages } from '@/features/publishing/components/channel-languages.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
 import { SlideList } from '@/features/publishing/components/slide-list.tsx';
 
@@ -135,6 +136,12 @@ export function Component() {
             </h2>
             {screens.error && <Notice tone="error">{screens.error.message}</Notice>}
             <ScreensPicker channel={c} busy={screens.isPending} onSave={(ids) => screens.mutate(ids)} />
+          </section>
+          <section aria-labelledby="languages-heading" className="space-y-2 rounded-lg border border-rule bg-panel p-4">
+            <h2 id="languages-heading" className="text-lg font-semibold text-ink">
+              Languages
+            </h2>
+            <ChannelLanguages channel={c} />
           </section>
         </aside>
       </div>

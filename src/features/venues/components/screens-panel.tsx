@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from 'react';
 import type { KioskScreenDto, PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
+import { ScreenLanguage } from './screen-language.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
@@ -111,6 +112,7 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
               <span className="min-w-40 font-medium">{screen.name}</span>
               <ScreenHealth screen={screen} />
               {screen.playerVersion && <span className="text-xs text-muted">player {screen.playerVersion}</span>}
+              <ScreenLanguage venueId={venueId} screen={screen} canManage={canManage} />
               {canManage && (
                 <span className="ml-auto flex gap-2">
                   <Button
