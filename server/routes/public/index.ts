@@ -1,5 +1,6 @@
 import { Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import { PgRateLimitStore } from '../../middlewares/rate-limit-store.ts';
 import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { sendCached } from '../../middlewares/http-cache.ts';
@@ -15,6 +16,7 @@ const PUBLISHER = config.publisherName;
 const limiter = rateLimit({
   windowMs: 60_000,
   limit: config.limits.publicApi,
+  store: new PgRateLimitStore('public'),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

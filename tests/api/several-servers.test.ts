@@ -1,0 +1,92 @@
+import { QueryTypes } from 'sequelize';
+import { beforeAll, describe, expect, it } from 'vitest';
+import { getSequelize } from '../../server/db.ts';
+import { PgRateLimitStore, runRateLimitPurgeJob } from '../../server/middlewares/rate-limit-store.ts';
+import { SkySnapshot, Venue } from '../../server/models/index.ts';
+import { skyEvents } from '../../server/services/sky/index.ts';
+import { refreshVenueSky } from '../../server/services/sky/sky-snapshots.ts';
+import { getTestApp, resetDatabase } from '../support/app.ts';
+
+beforeAll(async () => {
+  await getTestApp();
+  await resetDatabase();
+});
+
+/** A store as one server would build it for a limiter (two of them stand for two servers). */
+function storeFor(name: string, windowMs: number) {
+  const store = new PgRateLimitStore(name);
+  store.init({ windowMs } as Parameters<PgRateLimitStore['init']>[0]);
+  return store;
+}
+
+describe('rate limits counted in PostgreSQL', () => {
+  it('two servers count one client against one limit', async () => {
+    const a = storeFor('shared-test', 60_000);
+    const b = storeFor('shared-test', 60_000);
+    expect((await a.increment('203.0.113.7')).totalHits).toBe(1);
+    expect((await b.increment('203.0.113.7')).totalHits).toBe(2);
+    expect((await a.increment('203.0.113.7')).totalHits).toBe(3);
+    expect((await b.get('203.0.113.7'))?.totalHits).toBe(3);
+    // another client, and another limiter with the same client, have counters of their own
+    expect((await b.increment('203.0.113.8')).totalHits).toBe(1);
+    expect((await storeFor('other-test', 60_000).increment('203.0.113.7')).totalHits).toBe(1);
+  });
+
+  it('hits arriving at once on several servers are each counted exactly once', async () => {
+    const stores = [storeFor('burst-test', 60_000), storeFor('burst-test', 60_000), storeFor('burst-test', 60_000)];
+    const totals = await Promise.all(Array.from({ length: 60 }, (_, i) => stores[i % 3]!.increment('198.51.100.9')));
+    expect(totals.map((t) => t.totalHits).sort((x, y) => x - y)).toEqual(Array.from({ length: 60 }, (_, i) => i + 1));
+  });
+
+  it('a window that has ended starts again at one; decrement and reset act on the shared counter', async () => {
+    const store = storeFor('window-test', 200);
+    await store.increment('192.0.2.1');
+    await store.increment('192.0.2.1');
+    await store.decrement('192.0.2.1');
+    expect((await store.get('192.0.2.1'))?.totalHits).toBe(1);
+    await new Promise((r) => setTimeout(r, 300));
+    expect(await store.get('192.0.2.1')).toBeUndefined();
+    const again = await store.increment('192.0.2.1');
+    expect(again.totalHits).toBe(1);
+    expect(again.resetTime!.getTime()).toBeGreaterThan(Date.now());
+    await store.resetKey('192.0.2.1');
+    expect(await store.get('192.0.2.1')).toBeUndefined();
+  });
+
+  it('the hourly purge removes only counters whose window has ended', async () => {
+    await storeFor('purge-test', 100).increment('192.0.2.50');
+    await storeFor('purge-test', 60_000).increment('192.0.2.51');
+    await new Promise((r) => setTimeout(r, 200));
+    await runRateLimitPurgeJob();
+    const keys = await getSequelize().query<{ key: string }>("SELECT key FROM rate_limit_hits WHERE key LIKE 'purge-test:%'", {
+      type: QueryTypes.SELECT,
+    });
+    expect(keys.map((k) => k.key)).toEqual(['purge-test:192.0.2.51']);
+  });
+});
+
+describe('the nightly sky with two workers', () => {
+  it('two refreshes of one venue at once compute each night once and announce tonight once', async () => {
+    const venue = await Venue.create({
+      name: 'Twin Worker Dome (demo)',
+      latitude: 51.5,
+      longitude: -0.1,
+      elevationM: 20,
+      timeZone: 'Europe/London',
+    });
+    const announced: string[] = [];
+    const listener = ({ venueId, localDate }: { venueId: string; localDate: string }) => {
+      if (venueId === venue.id) announced.push(localDate);
+    };
+    skyEvents.on('nightComputed', listener);
+    try {
+      const now = new Date('2026-11-20T12:00:00Z');
+      const counts = await Promise.all([refreshVenueSky(venue, now), refreshVenueSky(venue, now)]);
+      expect(counts.sort()).toEqual([0, 2]);
+      expect(announced).toEqual(['2026-11-20']);
+      expect(await SkySnapshot.count({ where: { venueId: venue.id } })).toBe(2);
+    } finally {
+      skyEvents.off('nightComputed', listener);
+    }
+  });
+});
