@@ -1,11 +1,19 @@
 import { QueryTypes } from 'sequelize';
-import { beforeAll, describe, expect, it } from 'vitest';
+import supertest from 'supertest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { getSequelize } from '../../server/db.ts';
 import { PgRateLimitStore, runRateLimitPurgeJob } from '../../server/middlewares/rate-limit-store.ts';
 import { SkySnapshot, Venue } from '../../server/models/index.ts';
 import { skyEvents } from '../../server/services/sky/index.ts';
 import { refreshVenueSky } from '../../server/services/sky/sky-snapshots.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
+import { publishedPage, publishingCrew } from '../support/publishing.ts';
+
+// A long check interval for this file only (read when the publishing services load), so "still in
+// memory" below does not depend on how fast this machine is.
+vi.hoisted(() => {
+  process.env.STARPROOF_FEED_CHECK_MS = '60000';
+});
 
 beforeAll(async () => {
   await getTestApp();
@@ -88,5 +96,42 @@ describe('the nightly sky with two workers', () => {
     } finally {
       skyEvents.off('nightComputed', listener);
     }
+  });
+});
+
+describe('a reader moving between servers never steps back', () => {
+  it('a validator this server does not hold makes it check the database before answering', async () => {
+    const crew = await publishingCrew();
+    const page = await publishedPage(crew, 'Moving between servers (demo)');
+    const visitor = supertest(await getTestApp());
+    // Publishing's own follow-up events (recomputes, re-checks) settle first; then the list is held in memory.
+    await new Promise((resolve) => setTimeout(resolve, 1500));
+    await visitor.get('/api/public/pages');
+    const first = await visitor.get('/api/public/pages');
+    expect(first.body.meta.total).toBe(1);
+    // Another server publishes a new title: this one hears no event.
+    await getSequelize().query(
+      `UPDATE pages SET published_snapshot = published_snapshot
+         || jsonb_build_object('title', 'Renamed elsewhere (demo)', 'publishedAt', '2030-01-01T00:00:00.000Z')
+       WHERE id = :id`,
+      {
+        replacements: { id: page.pageId },
+        type: QueryTypes.UPDATE,
+      },
+    );
+    // Within the check interval a reader without a validator still gets the list in memory ...
+    const unchanged = await visitor.get('/api/public/pages');
+    expect(unchanged.body.data[0].title).toBe('Moving between servers (demo)');
+    expect(unchanged.headers.etag).toBe(first.headers.etag);
+    // ... the one whose validator (served elsewhere) is not ours gets the database's present state,
+    const moved = await visitor.get('/api/public/pages').set('If-None-Match', '"served-by-another-server"');
+    expect(moved.status).toBe(200);
+    expect(moved.body.data[0].title).toBe('Renamed elsewhere (demo)');
+    // and so does everyone after, since the check refreshed what is in memory.
+    const after = await visitor.get('/api/public/pages');
+    expect(after.body.data[0].title).toBe('Renamed elsewhere (demo)');
+    expect(after.headers.etag).toBe(moved.headers.etag);
+    // Our own validator still gets a 304 without a check.
+    expect((await visitor.get('/api/public/pages').set('If-None-Match', String(moved.headers.etag))).status).toBe(304);
   });
 });

@@ -1,10 +1,10 @@
-import { Router, type RequestHandler } from 'express';
+import { type Request, Router, type RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { PgRateLimitStore } from '../../middlewares/rate-limit-store.ts';
 import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
-import { sendCached } from '../../middlewares/http-cache.ts';
-import { atomDocument, getPublicPages, prepare } from '../../services/publishing/index.ts';
+import { etagMatches, sendCached } from '../../middlewares/http-cache.ts';
+import { atomDocument, getPublicPages, type PublicPages, prepare } from '../../services/publishing/index.ts';
 
 /**
  * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
@@ -62,14 +62,28 @@ const atomBaseUrl = () => appBaseUrl().replace(/\/+$/, '');
 export const publicRouter = Router();
 publicRouter.use(cors, limiter);
 
+/**
+ * The published pages for this request. A validator (If-None-Match) this server does not hold may be
+ * newer than its own answer (another server served it): then the answer comes from a check begun after
+ * the request arrived, so a reader never steps back to an older version.
+ * @param current the ETag this server would answer with, from the pages in memory
+ */
+async function pagesFor(req: Request, current: (pages: PublicPages) => string | undefined): Promise<PublicPages> {
+  const validator = req.get('if-none-match');
+  const arrived = Date.now();
+  const pages = await getPublicPages();
+  if (!validator || etagMatches(validator, current(pages) ?? '')) return pages;
+  return getPublicPages(arrived);
+}
+
 publicRouter.get('/pages', async (req, res) => {
-  const { list } = await getPublicPages();
+  const { list } = await pagesFor(req, (pages) => pages.list.etag);
   sendCached(req, res, list.body, list.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
 publicRouter.get('/pages.atom', async (req, res) => {
-  const published = await getPublicPages();
   const base = atomBaseUrl();
+  const published = await pagesFor(req, (pages) => pages.atom.get(base)?.etag);
   let doc = published.atom.get(base);
   if (!doc) {
     // One base in use; the map only outlives a change of setting in tests.
@@ -81,7 +95,8 @@ publicRouter.get('/pages.atom', async (req, res) => {
 });
 
 publicRouter.get('/pages/:slugOrId', async (req, res) => {
-  const found = (await getPublicPages()).bySlugOrId.get(String(req.params.slugOrId).toLowerCase());
+  const key = String(req.params.slugOrId).toLowerCase();
+  const found = (await pagesFor(req, (pages) => pages.bySlugOrId.get(key)?.etag)).bySlugOrId.get(key);
   if (!found) throw NotFoundError('There is no published page with this name or id.');
   sendCached(req, res, found.body, found.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });

@@ -12,7 +12,7 @@ export { inWindow } from './feed-build.ts';
 export { type CachedFeed, freshKioskFeed, getKioskFeed, invalidateKioskFeeds } from './feed-cache.ts';
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
-export { getPublicPages, invalidatePublicPages, prepare } from './public-pages.ts';
+export { getPublicPages, invalidatePublicPages, type PublicPages, prepare } from './public-pages.ts';
 export type { ChannelDetailContext } from './channel-view.ts';
 export type { ChannelRowContext } from './channel-view.ts';
 export { listChannels } from './channel-view.ts';
