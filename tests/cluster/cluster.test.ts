@@ -102,10 +102,16 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
   beforeAll(async () => {
     const primaryDir = path.join(folder, 'primary');
     const replicaDir = path.join(folder, 'replica');
+    const withLog = (dir: string) => (error: Error) => {
+      const log = path.join(dir, 'server.log');
+      throw new Error(`${error.message}\n${fs.existsSync(log) ? fs.readFileSync(log, 'utf8').slice(-3_000) : ''}`);
+    };
     clusters.push(primaryDir);
-    await startLocalPostgres({ dataDir: primaryDir, port: PORTS.primary, database, fast: true });
+    await startLocalPostgres({ dataDir: primaryDir, port: PORTS.primary, database, fast: true }).catch(withLog(primaryDir));
     clusters.push(replicaDir);
-    await startLocalReplica(PORTS.primary, { dataDir: replicaDir, port: PORTS.replica, database, fast: true });
+    await startLocalReplica(PORTS.primary, { dataDir: replicaDir, port: PORTS.replica, database, fast: true }).catch(
+      withLog(replicaDir),
+    );
     primary = new pg.Pool({ connectionString: primaryUrl, max: 2 });
 
     s3 = new S3rver({
@@ -157,9 +163,12 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
       },
       folder,
     );
-    await within(15_000, 'every server UP in HAProxy', async () => {
-      const states = await serverStates(PORTS.stats);
+    let states: Record<string, string> = {};
+    await within(30_000, 'every server UP in HAProxy', async () => {
+      states = await serverStates(PORTS.stats);
       return states.web1 === 'UP' && states.web2 === 'UP' && states.worker === 'UP';
+    }).catch((error: Error) => {
+      throw new Error(`${error.message}: ${JSON.stringify(states)}\n${haproxy?.output()}`);
     });
   }, 240_000);
 
@@ -245,7 +254,8 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
     const venue = (await call<{ id: string; name: string }[]>(lb, admin, 'GET', '/venues')).find(
       (v) => v.name === DEMO_VENUE.name,
     )!;
-    channelId = (await call<{ id: string }>(lb, admin, 'POST', '/channels', { venueId: venue.id, name: 'Cluster loop (demo)' })).id;
+    channelId = (await call<{ id: string }>(lb, admin, 'POST', '/channels', { venueId: venue.id, name: 'Cluster loop (demo)' }))
+      .id;
     const channel = await call<{ slides: { id: string }[] }>(lb, admin, 'POST', `/channels/${channelId}/slides`, {
       kind: 'image',
       mediaId,
@@ -262,14 +272,18 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
       headers: { 'Content-Type': 'application/json' },
       body: JSON.stringify({ code: added.pairingCode }),
     });
-    expect(paired.status).toBe(200);
+    expect(paired.status).toBe(201);
     token = ((await paired.json()) as { data: { token: string } }).data.token;
     const feedOn = async (base: string) =>
       (await fetch(`${base}/api/kiosk/feed`, { headers: { Authorization: `Bearer ${token}` } })).text();
     for (const base of [direct(PORTS.web1), direct(PORTS.web2)]) expect(await feedOn(base)).toContain('First caption (demo)');
 
-    await call(direct(PORTS.web1), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, { caption: 'Edited on web1 (demo)' });
-    const took = await within(WAIT_MS, 'the edit on web2', async () => (await feedOn(direct(PORTS.web2))).includes('Edited on web1'));
+    await call(direct(PORTS.web1), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, {
+      caption: 'Edited on web1 (demo)',
+    });
+    const took = await within(WAIT_MS, 'the edit on web2', async () =>
+      (await feedOn(direct(PORTS.web2))).includes('Edited on web1'),
+    );
     expect((await feedOn(direct(PORTS.web1))).includes('Edited on web1')).toBe(true);
     console.log(`slide edit on web1 seen in web2's kiosk feed after ${took} ms (bound ${BOUND_MS} ms)`);
   });
@@ -292,10 +306,14 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
 
   it('a reader moving between servers never gets an older feed than one it was served', async () => {
     const feed = (base: string, etag?: string) =>
-      fetch(`${base}/api/kiosk/feed`, { headers: { Authorization: `Bearer ${token}`, ...(etag ? { 'If-None-Match': etag } : {}) } });
+      fetch(`${base}/api/kiosk/feed`, {
+        headers: { Authorization: `Bearer ${token}`, ...(etag ? { 'If-None-Match': etag } : {}) },
+      });
     // warm both servers' memory, then change the slide through web1 and read it there at once
     await feed(direct(PORTS.web2));
-    await call(direct(PORTS.web1), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, { caption: 'Newest caption (demo)' });
+    await call(direct(PORTS.web1), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, {
+      caption: 'Newest caption (demo)',
+    });
     const fromWeb1 = await feed(direct(PORTS.web1));
     expect(await fromWeb1.text()).toContain('Newest caption (demo)');
     // web2 has not heard of it yet, but the player's validator is not one it holds: it checks first
@@ -343,7 +361,9 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
 
   it('with the replica stopped, public reads fall back to the primary and stay current', async () => {
     stopLocalPostgres(path.join(folder, 'replica'));
-    await call(direct(PORTS.web2), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, { caption: 'After the replica (demo)' });
+    await call(direct(PORTS.web2), admin, 'PATCH', `/channels/${channelId}/slides/${slideId}`, {
+      caption: 'After the replica (demo)',
+    });
     const list = await fetch(`${lb}/api/public/pages`, { headers: { 'If-None-Match': '"after-replica"' } });
     expect(list.status).toBe(200);
     await within(WAIT_MS, 'the edit with the replica down', async () => {

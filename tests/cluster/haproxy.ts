@@ -20,7 +20,7 @@ export interface BalancerPlan {
 /**
  * The test's HAProxy configuration, the same rules as `server/deploy/haproxy.cfg`: round robin
  * without stickiness (any web server serves any session), health checks on /api/health every
- * 500 ms, a request whose connection failed is sent to another server (`option redispatch`,
+ * second (300 ms once one failed), a request whose connection failed is sent to another server (`option redispatch`,
  * `retry-on conn-failure`), and a GET or HEAD whose server died before answering is retried too.
  */
 export function haproxyConfig(plan: BalancerPlan): string {
@@ -36,10 +36,11 @@ defaults
   timeout client 30s
   timeout server 30s
   timeout queue 10s
+  timeout check 3s
   retries 3
   option redispatch 1
   retry-on conn-failure empty-response response-timeout
-  default-server inter 500ms fastinter 250ms downinter 500ms fall 2 rise 2
+  default-server inter 1s fastinter 300ms downinter 1s fall 2 rise 1
 
 frontend public
   bind 127.0.0.1:${plan.port}
