@@ -7,7 +7,14 @@ import S3rver from 's3rver';
 import sharp from 'sharp';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from '../../server/demo/accounts.ts';
-import { localDatabaseUrl, startLocalPostgres, startLocalReplica, stopLocalPostgres } from '../../server/db/local-postgres.ts';
+import { restoreBackup, writeBackup } from '../../server/backup/archive.ts';
+import {
+  ensureDatabase,
+  localDatabaseUrl,
+  startLocalPostgres,
+  startLocalReplica,
+  stopLocalPostgres,
+} from '../../server/db/local-postgres.ts';
 import { type ServerProcess, startServerProcess, stopServerProcess } from '../support/server-process.ts';
 import { haproxyInstalled, serverStates, startHaproxy } from './haproxy.ts';
 
@@ -321,6 +328,35 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
     expect([200, 304]).toContain(fromWeb2.status);
     if (fromWeb2.status === 200) expect(await fromWeb2.text()).toContain('Newest caption (demo)');
     else expect(fromWeb2.headers.get('etag')).toBe(fromWeb1.headers.get('etag'));
+  });
+
+  it('a backup taken from the replica restores with the latest change', async () => {
+    const archive = path.join(folder, 'from-replica.tar.gz');
+    // the replica has replayed the last edit (milliseconds on loopback)
+    await within(5_000, 'the last edit on the replica', async () => {
+      const client = new pg.Client({ connectionString: replicaUrl });
+      await client.connect();
+      try {
+        const { rows } = await client.query('SELECT caption FROM channel_slides WHERE id = $1', [slideId]);
+        return rows[0]?.caption === 'Newest caption (demo)';
+      } finally {
+        await client.end();
+      }
+    });
+    // what `npm run backup` does with DATABASE_READ_URL set
+    const manifest = writeBackup(replicaUrl, path.join(folder, 'uploads-worker'), archive);
+    expect(manifest.database).toBe(database);
+    const restored = { port: PORTS.primary, database: 'starproof_restored' };
+    await ensureDatabase(restored);
+    await restoreBackup(archive, localDatabaseUrl(restored), path.join(folder, 'restored-uploads'));
+    const client = new pg.Client({ connectionString: localDatabaseUrl(restored) });
+    await client.connect();
+    try {
+      const { rows } = await client.query('SELECT caption FROM channel_slides WHERE id = $1', [slideId]);
+      expect(rows).toEqual([{ caption: 'Newest caption (demo)' }]);
+    } finally {
+      await client.end();
+    }
   });
 
   it('public reads use the replica while it keeps up', async () => {
