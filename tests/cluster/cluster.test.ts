@@ -36,6 +36,7 @@ const BOUND_MS = 1_000 + 500;
 /** The bound plus room for polling on a busy shared machine. */
 const WAIT_MS = BOUND_MS + 3_500;
 const BUCKET = 'starproof-cluster';
+const PAIRING_LIMIT = 6;
 
 const folder = fs.mkdtempSync(path.join(os.tmpdir(), 'starproof-cluster-'));
 const database = 'starproof';
@@ -143,6 +144,8 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
       AWS_ACCESS_KEY_ID: 'S3RVER',
       AWS_SECRET_ACCESS_KEY: 'S3RVER',
       STARPROOF_STATEMENT_WORKERS: '0',
+      // low, so the shared count is reached in a few requests
+      STARPROOF_PAIRING_LIMIT: String(PAIRING_LIMIT),
       PASSWORD_HASH_THREADS: '1',
       // the staff client is not what this test looks at: a stand-in page instead of a build
       STARPROOF_DIST_DIR: path.join(folder, 'dist'),
@@ -211,6 +214,21 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
       const me = await call<{ email: string }>(base, cookie, 'GET', '/auth/me');
       expect(me.email).toBe(account('editor').email);
     }
+  });
+
+  it('a rate limit counts one address across every server, not once per server', async () => {
+    const attempt = (port: number) =>
+      fetch(`${direct(port)}/api/kiosk/pair`, {
+        method: 'POST',
+        // the servers trust loopback proxies, so this names the caller as HAProxy would
+        headers: { 'Content-Type': 'application/json', 'X-Forwarded-For': '203.0.113.50' },
+        body: JSON.stringify({ code: 'ZZZ-999' }),
+      });
+    const statuses: number[] = [];
+    for (let i = 0; i < PAIRING_LIMIT + 2; i += 1) statuses.push((await attempt(i % 2 ? PORTS.web2 : PORTS.web1)).status);
+    // in process memory each server would allow the limit on its own (twice as many in all)
+    expect(statuses.slice(0, PAIRING_LIMIT)).not.toContain(429);
+    expect(statuses.slice(PAIRING_LIMIT)).toEqual([429, 429]);
   });
 
   let admin = '';
