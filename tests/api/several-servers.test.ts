@@ -1,7 +1,9 @@
 import { QueryTypes } from 'sequelize';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
+import { enqueue, registerJob, startJobQueue, stopJobQueue } from '../../server/jobs/queue.ts';
 import { PgRateLimitStore, runRateLimitPurgeJob } from '../../server/middlewares/rate-limit-store.ts';
 import { SkySnapshot, Venue } from '../../server/models/index.ts';
 import { skyEvents } from '../../server/services/sky/index.ts';
@@ -133,5 +135,34 @@ describe('a reader moving between servers never steps back', () => {
     expect(after.headers.etag).toBe(moved.headers.etag);
     // Our own validator still gets a 304 without a check.
     expect((await visitor.get('/api/public/pages').set('If-None-Match', String(moved.headers.etag))).status).toBe(304);
+  });
+});
+
+describe('STARPROOF_ROLE: a web server queues jobs and runs none', () => {
+  it('a job queued by a queue without workers waits for a worker, which runs it once', async () => {
+    const ran: string[] = [];
+    registerJob<{ mark: string }>('test.role-split', async ({ mark }) => void ran.push(mark));
+    const state = async () =>
+      (
+        await getSequelize().query<{ state: string }>(
+          "SELECT state FROM pgboss.job WHERE name = 'test.role-split' AND data->>'mark' = 'queued-by-web'",
+          { type: QueryTypes.SELECT },
+        )
+      ).map((r) => r.state);
+    try {
+      // as a `web` server starts it: queueing only
+      await startJobQueue(config.databaseUrl!, { pollingIntervalSeconds: 0.5, workers: false });
+      await enqueue('test.role-split', { mark: 'queued-by-web' });
+      await new Promise((resolve) => setTimeout(resolve, 2_000));
+      expect(ran).toEqual([]);
+      expect(await state()).toEqual(['created']);
+      await stopJobQueue();
+      // as a `worker` starts it: the waiting job runs, once
+      await startJobQueue(config.databaseUrl!, { pollingIntervalSeconds: 0.5 });
+      await expect.poll(() => ran, { timeout: 10_000, interval: 100 }).toEqual(['queued-by-web']);
+      await expect.poll(state, { timeout: 10_000, interval: 100 }).toEqual(['completed']);
+    } finally {
+      await stopJobQueue();
+    }
   });
 });

@@ -34,7 +34,7 @@ const PORTS = {
 /** STARPROOF_FEED_CHECK_MS + STARPROOF_REPLICA_MAX_LAG_MS (their defaults): the documented bound for a change to show elsewhere. */
 const BOUND_MS = 1_000 + 500;
 /** The bound plus room for polling on a busy shared machine. */
-const WAIT_MS = BOUND_MS + 3_500;
+const WAIT_MS = BOUND_MS + 6_500;
 const BUCKET = 'starproof-cluster';
 const PAIRING_LIMIT = 6;
 
