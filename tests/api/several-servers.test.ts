@@ -9,7 +9,7 @@ import { SkySnapshot, Venue } from '../../server/models/index.ts';
 import { skyEvents } from '../../server/services/sky/index.ts';
 import { refreshVenueSky } from '../../server/services/sky/sky-snapshots.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
-import { publishedPage, publishingCrew } from '../support/publishing.ts';
+import { getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
 
 // A long check interval for this file only (read when the publishing services load), so "still in
 // memory" below does not depend on how fast this machine is.
@@ -135,6 +135,30 @@ describe('a reader moving between servers never steps back', () => {
     expect(after.headers.etag).toBe(moved.headers.etag);
     // Our own validator still gets a 304 without a check.
     expect((await visitor.get('/api/public/pages').set('If-None-Match', String(moved.headers.etag))).status).toBe(304);
+  });
+
+  it('a kiosk whose validator this server does not hold gets the feed as the database has it now', async () => {
+    const crew = await publishingCrew();
+    const venue = await makeVenue(crew.admin.agent, 'Twin Server Dome (demo)');
+    const channel = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name: 'Before (demo)' });
+    const channelId = channel.body.data.id as string;
+    await crew.editor.agent.post(`/api/channels/${channelId}/slides`).send({ kind: 'sky_tonight' });
+    const screen = await pairedScreen(crew.admin.agent, venue.id, 'Twin screen (demo)');
+    await crew.editor.agent.put(`/api/channels/${channelId}/screens`).send({ screenIds: [screen.screenId] });
+    await new Promise((resolve) => setTimeout(resolve, 1500));
+    await getFeed(screen.token);
+    const first = await getFeed(screen.token);
+    expect(JSON.parse(first.text).title).toContain('Before (demo)');
+    // Another server renames the channel: this one hears no event.
+    await getSequelize().query("UPDATE channels SET name = 'After (demo)', version = version + 1 WHERE id = :id", {
+      replacements: { id: channelId },
+      type: QueryTypes.UPDATE,
+    });
+    const unchanged = await getFeed(screen.token, first.headers.etag);
+    expect(unchanged.status).toBe(304);
+    const moved = await getFeed(screen.token, '"served-by-another-server"');
+    expect(moved.status).toBe(200);
+    expect(JSON.parse(moved.text).title).toContain('After (demo)');
   });
 });
 
