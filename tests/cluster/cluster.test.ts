@@ -329,6 +329,30 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
     console.log(`unpublish on web1 seen on web2 after ${down} ms; publish on web2 seen on web1 after ${up} ms`);
   });
 
+  it('a cosmology change on one server is recomputed once, by the worker, and seen on the other', async () => {
+    const since = new Date();
+    const settings = await call<{ version: number }>(direct(PORTS.web1), admin, 'GET', '/settings');
+    await call(direct(PORTS.web1), admin, 'PUT', '/settings/cosmology', {
+      model: { H0: 50, Om0: 0.3 },
+      expectedVersion: settings.version,
+    });
+    const jobs = async () =>
+      (
+        await primary.query(
+          `SELECT state FROM pgboss.job WHERE name = 'statements.recompute' AND created_on >= $1 AND data->'scope'->>'all' = 'true'
+           UNION ALL SELECT state FROM pgboss.archive WHERE name = 'statements.recompute' AND created_on >= $1 AND data->'scope'->>'all' = 'true'`,
+          [since],
+        )
+      ).rows.map((r: { state: string }) => r.state);
+    const took = await within(60_000, 'the recompute, seen on web2', async () => {
+      if ((await jobs()).join() !== 'completed') return false;
+      const statements = await call<{ computedAt: string }[]>(direct(PORTS.web2), admin, 'GET', '/statements?pageSize=100');
+      return statements.some((s) => Date.parse(s.computedAt) >= since.getTime());
+    });
+    expect(await jobs()).toEqual(['completed']);
+    console.log(`cosmology change on web1: recomputed by the worker and seen on web2 after ${took} ms`);
+  });
+
   it('a reader moving between servers never gets an older feed than one it was served', async () => {
     const feed = (base: string, etag?: string) =>
       fetch(`${base}/api/kiosk/feed`, {
