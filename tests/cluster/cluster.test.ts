@@ -58,7 +58,17 @@ function killEverything() {
   for (const child of spawned) if (child.exitCode === null && child.signalCode === null) child.kill('SIGKILL');
   if (haproxy && haproxy.child.exitCode === null) haproxy.child.kill('SIGKILL');
 }
-process.once('exit', killEverything);
+process.once('exit', () => {
+  killEverything();
+  // afterAll stops the clusters; this is for a run that never got there (pg_ctl runs synchronously)
+  for (const dir of clusters) {
+    try {
+      stopLocalPostgres(dir);
+    } catch {
+      // already stopped, or never started
+    }
+  }
+});
 
 const account = (role: string) => DEMO_ACCOUNTS.find((a) => a.role === role)!;
 
@@ -187,7 +197,7 @@ describe.skipIf(!runs)('several app servers behind HAProxy, with a read replica 
     for (const server of Object.values(servers)) if (server) await stopServerProcess(server, 'SIGKILL').catch(() => undefined);
     killEverything();
     await s3?.close().catch(() => undefined);
-    for (const dir of clusters.reverse()) {
+    for (const dir of clusters.splice(0).reverse()) {
       try {
         stopLocalPostgres(dir);
       } catch {
