@@ -60,6 +60,11 @@ export default defineConfig({
           fileParallelism: false,
         },
       },
+      {
+        resolve: { alias },
+        // Several app servers, a replica and HAProxy on loopback (skipped where haproxy is not installed).
+        test: { name: 'cluster', include: ['tests/cluster/**/*.test.ts'], environment: 'node', testTimeout: 60_000 },
+      },
     ],
   },
 });

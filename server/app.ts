@@ -12,6 +12,7 @@ import { fixedHeaders } from './middlewares/fixed-headers.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
 import { initModels } from './models/index.ts';
+import { healthRouter } from './routes/health.ts';
 import { apiRouter } from './routes/index.ts';
 import { kioskFeed } from './routes/kiosk-feed.ts';
 import { exploreRouter } from './routes/explore.ts';
@@ -70,6 +71,23 @@ export function createApp(options: AppOptions = {}) {
   app.use(exploreRouter);
   if (options.serveClient) serveClient(app);
   app.use(errorHandler);
+  return app;
+}
+
+/**
+ * The whole of a worker's HTTP face (STARPROOF_ROLE=worker): `/api/health` for the load balancer
+ * or the process supervisor, nothing else. Its session pool is a stand-in so shutdown reads the same.
+ */
+export function createWorkerApp() {
+  initModels(getSequelize());
+  wireServer();
+  const app = express();
+  app.disable('x-powered-by');
+  app.locals.sessionPool = { end: async () => undefined, totalCount: 0, idleCount: 0, waitingCount: 0 };
+  app.use('/api/health', healthRouter);
+  app.use((_req, res) => {
+    res.status(404).json({ error: { code: 'not_found', message: 'This process runs background jobs only.' } });
+  });
   return app;
 }
 

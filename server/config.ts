@@ -27,6 +27,9 @@ export const EnvSchema = z.object({
   HOST: text('127.0.0.1'),
   PORT: port(4780),
   DATABASE_URL: optionalText(),
+  DATABASE_READ_URL: optionalText(),
+  STARPROOF_REPLICA_MAX_LAG_MS: ms(500),
+  STARPROOF_ROLE: variable(z.enum(['web', 'worker', 'both'], { error: 'must be "web", "worker" or "both"' }).default('both')),
   STARPROOF_PGDATA: text('.data/postgres'),
   STARPROOF_PGPORT: port(54380),
   SMTP_URL: optionalText(),
@@ -115,6 +118,21 @@ export const config = {
   /** Set to use an existing PostgreSQL; when unset the project runs its own on loopback. */
   get databaseUrl() {
     return read('DATABASE_URL');
+  },
+  /**
+   * A streaming replica for public reads (kiosk feed, public API, Atom); unset: everything reads the
+   * primary. See services/publishing/public-reads.ts for when the replica is used.
+   */
+  get databaseReadUrl() {
+    return read('DATABASE_READ_URL');
+  },
+  /** Longest a public read waits for the replica to replay the primary's position before it reads the primary (ms). */
+  get replicaMaxLagMs() {
+    return read('STARPROOF_REPLICA_MAX_LAG_MS');
+  },
+  /** What this process does: `web` serves requests only, `worker` runs jobs and schedules only, `both` (default) does both. */
+  get role() {
+    return read('STARPROOF_ROLE');
   },
   get localPostgres() {
     return { dataDir: path.resolve(read('STARPROOF_PGDATA')), port: read('STARPROOF_PGPORT'), database: 'starproof' };

@@ -1,7 +1,23 @@
+import { AsyncLocalStorage } from 'node:async_hooks';
 import { Sequelize, type Transaction } from 'sequelize';
 import { config } from './config.ts';
 
 let instance: Sequelize | undefined;
+
+/** Set while a public read runs on the replica; `wrote` once it wrote something (its reads then follow the write). */
+const replicaScope = new AsyncLocalStorage<{ wrote: boolean }>();
+
+/** Sequelize's connection settings for a `postgres://` URL (its replication settings take no URLs). */
+function connectionOf(url: string) {
+  const u = new URL(url);
+  return {
+    host: u.hostname,
+    port: u.port ? Number(u.port) : 5432,
+    username: decodeURIComponent(u.username),
+    password: decodeURIComponent(u.password),
+    database: decodeURIComponent(u.pathname.replace(/^\//, '')),
+  };
+}
 
 /** Longest wait for a free pooled connection (ms). */
 export const ACQUIRE_TIMEOUT_MS = 5_000;
@@ -37,9 +53,34 @@ export function getSequelize(): Sequelize {
       pool: { max: 10, min: 0, acquire: ACQUIRE_TIMEOUT_MS, idle: 10_000 },
       // A dead or frozen database must fail requests quickly rather than hang them.
       dialectOptions: poolTimeouts(),
+      // With a read replica: a second pool, used only inside readFromReplica (see the hook below).
+      ...(config.databaseReadUrl
+        ? { replication: { write: connectionOf(url), read: [connectionOf(config.databaseReadUrl)] } }
+        : {}),
     });
+    // Sequelize would send every SELECT outside a transaction to the replica; Starproof sends only the
+    // public reads there (staff must read their own writes), and a public read that wrote reads the primary.
+    if (config.databaseReadUrl)
+      instance.addHook('beforePoolAcquire', (options: { type?: string; useMaster?: boolean }) => {
+        const scope = replicaScope.getStore();
+        if (scope && options.type !== 'SELECT') scope.wrote = true;
+        options.useMaster = !scope || scope.wrote || options.type !== 'SELECT';
+      });
   }
   return instance;
+}
+
+/** Whether a read replica is configured (DATABASE_READ_URL). */
+export const hasReadReplica = (): boolean => !!config.databaseReadUrl;
+
+/**
+ * Runs `work` with its plain SELECTs on the read replica (DATABASE_READ_URL; the primary when there
+ * is none). Writes, transactions, and reads after a write in the same work go to the primary.
+ * Callers decide whether the replica is fresh enough (services/publishing/public-reads.ts).
+ * @param work the reading to do
+ */
+export function readFromReplica<T>(work: () => Promise<T>): Promise<T> {
+  return replicaScope.run({ wrote: false }, work);
 }
 
 /** Closes the pool (tests, shutdown). */

@@ -1,5 +1,6 @@
 import type PgBoss from 'pg-boss';
 import { registerBatchJob, registerJob } from './jobs/queue.ts';
+import { RATE_LIMIT_PURGE_JOB, runRateLimitPurgeJob } from './middlewares/rate-limit-store.ts';
 import { forgetKioskAssignments, forgetKioskScreen } from './middlewares/kiosk-feed-auth.ts';
 import { catalogueEvents } from './services/catalogue/index.ts';
 import { RENDITIONS_JOB, registerMediaUsageProvider, runRenditionsJob } from './services/media/index.ts';
@@ -135,6 +136,8 @@ export function wireServer(): void {
   registerJob(VENUE_SKY_JOB, runVenueSkyJob);
   // users: expired sign-in links
   registerJob(TOKEN_PURGE_JOB, runTokenPurgeJob);
+  // rate limits: counters whose window has ended
+  registerJob(RATE_LIMIT_PURGE_JOB, runRateLimitPurgeJob);
 }
 
 /**
@@ -153,4 +156,6 @@ export async function startSchedules(boss: PgBoss): Promise<void> {
   await boss.schedule(PUBLISH_DUE_JOB, '* * * * *', {}, { tz: 'UTC' });
   // expired sign-in links, removed daily at 03:17
   await boss.schedule(TOKEN_PURGE_JOB, '17 3 * * *', {}, { tz: 'UTC' });
+  // rate-limit counters whose window has ended, hourly at :41
+  await boss.schedule(RATE_LIMIT_PURGE_JOB, '41 * * * *', {}, { tz: 'UTC' });
 }

@@ -1,9 +1,10 @@
 import type { Server } from 'node:http';
-import { createApp } from '../app.ts';
+import { createApp, createWorkerApp } from '../app.ts';
 import { adoptDatabaseUrl, checkConfig, config, productionSettingProblems } from '../config.ts';
 import { closeSequelize, getSequelize } from '../db.ts';
 import { isDatabaseDown } from '../db-down.ts';
 import { startLocalPostgres, stopLocalPostgres } from '../db/local-postgres.ts';
+import { underStartUpLock } from '../db/start-up-lock.ts';
 import { DEMO_ACCOUNTS } from '../demo/accounts.ts';
 import { accountsWithDemoPasswords, seedDemo } from '../demo/seed.ts';
 import { logger, routeConsoleToLogger } from '../logger.ts';
@@ -50,8 +51,12 @@ if (ownsPostgres) {
   adoptDatabaseUrl(await startLocalPostgres(config.localPostgres));
   console.log(`PostgreSQL running on 127.0.0.1:${config.localPostgres.port} (data in ${config.localPostgres.dataDir})`);
 }
+const role = config.role;
+const runsJobs = role !== 'web';
+const servesRequests = role !== 'worker';
 const sequelize = initModels(getSequelize());
-const applied = await migrate(sequelize);
+// Several servers started together take turns: one migrates (and seeds), the others find it done.
+const applied = await underStartUpLock(() => migrate(sequelize));
 if (applied.length) console.log(`Applied ${applied.length} migration(s).`);
 await sweepOrphanMedia();
 
@@ -71,18 +76,22 @@ if (config.isProduction) {
     process.exit(1);
   }
 } else {
-  await seedDemo();
+  await underStartUpLock(() => seedDemo());
 }
 
-const app = createApp({ serveClient: true });
-const queue = await startJobQueue(config.databaseUrl ?? '');
-await startSchedules(queue);
-if (await recomputeAfterRulesRelease())
-  console.log('Statement rules changed with this release: every statement is being recomputed.');
+// A web server only queues jobs (a worker runs them); a worker serves nothing but its health.
+const app = servesRequests ? createApp({ serveClient: true }) : createWorkerApp();
+const queue = await startJobQueue(config.databaseUrl ?? '', { workers: runsJobs });
+if (runsJobs) {
+  await startSchedules(queue);
+  if (await recomputeAfterRulesRelease())
+    console.log('Statement rules changed with this release: every statement is being recomputed.');
+}
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
-  console.log(`\nStarproof is ready at ${url}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
-  if (!config.isProduction) {
+  const what = role === 'both' ? '' : ` as ${role === 'web' ? 'a web server (no jobs)' : 'a worker (jobs and health only)'}`;
+  console.log(`\nStarproof is ready at ${url}${what}  (${((Date.now() - started) / 1000).toFixed(1)} s)`);
+  if (!config.isProduction && servesRequests) {
     console.log('\nDemo accounts (demo data only; never used in production):');
     for (const a of DEMO_ACCOUNTS) console.log(`  ${a.role.padEnd(9)} ${a.email.padEnd(30)} ${a.password}`);
   }

@@ -18,7 +18,9 @@ export interface LocalPostgresOptions {
 const SUPERUSER = 'postgres';
 
 /** Finds a PostgreSQL server binary: on PATH first, then the newest /usr/lib/postgresql/<v>/bin. */
-export function findPgBinary(name: 'initdb' | 'pg_ctl' | 'postgres' | 'pg_dump' | 'pg_restore' | 'psql'): string {
+export function findPgBinary(
+  name: 'initdb' | 'pg_ctl' | 'postgres' | 'pg_dump' | 'pg_restore' | 'psql' | 'pg_basebackup',
+): string {
   const onPath = spawnSync('sh', ['-c', `command -v ${name}`], { encoding: 'utf8' }).stdout.trim();
   // Debian puts only client wrappers on PATH; the server tools live in the versioned folder.
   if (onPath && !onPath.startsWith('/usr/bin/')) return onPath;
@@ -147,6 +149,35 @@ export async function startLocalPostgres(opts: LocalPostgresOptions): Promise<st
   await waitUntilReady(resolved);
   await ensureDatabase(resolved);
   return localDatabaseUrl(resolved);
+}
+
+/**
+ * Makes a streaming replica of a running local cluster (`pg_basebackup -R`: a copy of its data plus
+ * the standby settings that follow the primary over streaming replication) and starts it on its own
+ * port. The primary's default `wal_level` (replica) and loopback replication rule from initdb suffice.
+ * @param primaryPort the running primary's port
+ * @param opts the replica's folder (must not exist yet), port and database
+ * @returns the replica's connection URL (read-only)
+ */
+export async function startLocalReplica(primaryPort: number, opts: LocalPostgresOptions): Promise<string> {
+  const dataDir = path.resolve(opts.dataDir);
+  prepareDataDir(dataDir);
+  runPgTool(findPgBinary('pg_basebackup'), [
+    '-h',
+    '127.0.0.1',
+    '-p',
+    String(primaryPort),
+    '-U',
+    SUPERUSER,
+    '-D',
+    dataDir,
+    '-R',
+    '-X',
+    'stream',
+    '-c',
+    'fast',
+  ]);
+  return startLocalPostgres({ ...opts, dataDir });
 }
 
 /** Stops the cluster cleanly (fast shutdown: rolls back open transactions, keeps all committed data). */

@@ -2,6 +2,9 @@ import PgBoss from 'pg-boss';
 import { poolTimeouts } from '../db.ts';
 import { logger } from '../logger.ts';
 
+/** How a job is queued (pg-boss send options: a singleton key, a delay, ...). */
+export type SendOptions = PgBoss.SendOptions;
+
 /** A background job's handler; throwing makes pg-boss retry it with backoff. */
 export type JobHandler<T extends object> = (data: T) => Promise<void>;
 
@@ -44,15 +47,26 @@ export function registerBatchJob<T extends object>(
   handlers.set(name, { run: handler as BatchHandler<object>, batchSize });
 }
 
-/** Starts pg-boss on the app's database (its tables live in their own `pgboss` schema) and the workers. */
-export async function startJobQueue(databaseUrl: string, { pollingIntervalSeconds = 0.5 } = {}): Promise<PgBoss> {
+/**
+ * Starts pg-boss on the app's database (its tables live in their own `pgboss` schema). With
+ * `workers` (roles `worker` and `both`) it also runs every registered job and pg-boss's own
+ * maintenance and schedules; without (role `web`) it only queues jobs for a worker to run.
+ * @param options.workers run jobs here (default true)
+ */
+export async function startJobQueue(databaseUrl: string, { pollingIntervalSeconds = 0.5, workers = true } = {}): Promise<PgBoss> {
   if (boss) return boss;
   // The same timeouts as the app's other pools: enqueuing from a request never hangs on a frozen database.
-  const instance = new PgBoss({ connectionString: databaseUrl, max: 4, ...(poolTimeouts() as object) });
+  const instance = new PgBoss({
+    connectionString: databaseUrl,
+    max: 4,
+    ...(workers ? {} : { supervise: false, schedule: false }),
+    ...(poolTimeouts() as object),
+  });
   instance.on('error', (err) => logger.warn({ err }, 'job queue error'));
   await instance.start();
   for (const [name, { run, batchSize }] of handlers) {
     await instance.createQueue(name, { name, retryLimit: 5, retryDelay: 2, retryBackoff: true });
+    if (!workers) continue;
     await instance.work<object>(name, { pollingIntervalSeconds, batchSize }, async (jobs) => {
       await run(jobs.map((job) => job.data));
     });
@@ -62,7 +76,7 @@ export async function startJobQueue(databaseUrl: string, { pollingIntervalSecond
 }
 
 /** Puts a job on the queue. Without a running queue (a CLI, some tests) the job runs inline. */
-export async function enqueue(name: string, data: object, options: PgBoss.SendOptions = {}): Promise<void> {
+export async function enqueue(name: string, data: object, options: SendOptions = {}): Promise<void> {
   if (boss) {
     await boss.send(name, data, options);
     return;

@@ -1,5 +1,6 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import { PgRateLimitStore } from '../middlewares/rate-limit-store.ts';
 import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPasswordSchema } from '@shared/schemas/auth.ts';
 import { HttpError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
@@ -10,10 +11,11 @@ import { config } from '../config.ts';
 import { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken, signIn } from '../services/users/index.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
-function addressLimiter(limit: number) {
+function addressLimiter(name: string, limit: number) {
   return rateLimit({
     windowMs: 15 * 60_000,
     limit: config.limits.signIn ?? limit,
+    store: new PgRateLimitStore(name),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, _res, next) =>
@@ -40,7 +42,7 @@ authRouter.get('/me', requireUser, (req, res) => {
   res.json({ data: presentSessionUser(currentUser(req)) });
 });
 
-authRouter.post('/sign-in', addressLimiter(30), validate(SignInSchema), async (req, res) => {
+authRouter.post('/sign-in', addressLimiter('sign-in', 30), validate(SignInSchema), async (req, res) => {
   const { email, password } = req.body;
   const user = await signIn(email, password, req.ip);
   await startSession(req, user);
@@ -60,18 +62,23 @@ authRouter.post('/password', requireUser, validate(ChangePasswordSchema), async 
   res.status(204).end();
 });
 
-authRouter.post('/password-reset', addressLimiter(10), validate(RequestPasswordResetSchema), async (req, res) => {
-  await requestPasswordReset(req.body.email, req.ip);
-  // The same answer whether or not the address has an account.
-  res.status(202).json({ data: { message: 'If that address has an account, a reset link is on its way.' } });
-});
+authRouter.post(
+  '/password-reset',
+  addressLimiter('password-reset', 10),
+  validate(RequestPasswordResetSchema),
+  async (req, res) => {
+    await requestPasswordReset(req.body.email, req.ip);
+    // The same answer whether or not the address has an account.
+    res.status(202).json({ data: { message: 'If that address has an account, a reset link is on its way.' } });
+  },
+);
 
 /** Invitation acceptance and password reset: consume the token, set the password, sign in. */
 for (const [path, purpose] of [
   ['/invitation/accept', 'invitation'],
   ['/password-reset/complete', 'password_reset'],
 ] as const) {
-  authRouter.post(path, addressLimiter(30), validate(TokenPasswordSchema), async (req, res) => {
+  authRouter.post(path, addressLimiter(purpose, 30), validate(TokenPasswordSchema), async (req, res) => {
     const user = await setPasswordWithToken(req.body.token, req.body.newPassword, purpose, req.ip);
     await startSession(req, user);
     res.json({ data: presentSessionUser(user) });

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { ipKeyGenerator, rateLimit } from 'express-rate-limit';
+import { PgRateLimitStore } from '../middlewares/rate-limit-store.ts';
 import { answer } from '@shared/contract/calculate.ts';
 import { HttpError } from '../errors.ts';
 import { requireUser } from '../middlewares/authenticate.ts';
@@ -14,6 +15,7 @@ calcRouter.post(
     windowMs: 60_000,
     limit: 240,
     keyGenerator: (req) => req.user?.id ?? ipKeyGenerator(req.ip ?? ''),
+    store: new PgRateLimitStore('calc'),
     standardHeaders: 'draft-8',
     legacyHeaders: false,
     handler: (_req, _res, next) =>

@@ -1,7 +1,7 @@
 import type { Request, RequestHandler, Response } from 'express';
 import { currentKiosk } from '../middlewares/kiosk-auth.ts';
 import { requireKioskFeed } from '../middlewares/kiosk-feed-auth.ts';
-import { sendCached } from '../middlewares/http-cache.ts';
+import { etagMatches, sendCached } from '../middlewares/http-cache.ts';
 import { type CachedFeed, freshKioskFeed, getKioskFeed } from '../services/publishing/index.ts';
 
 /**
@@ -28,7 +28,10 @@ export const kioskFeed: RequestHandler[] = [
     const screen = currentKiosk(req);
     const target = { channelId: req.kioskChannelId ?? null, venueId: screen.venueId, language: screen.language ?? null };
     const ready = freshKioskFeed(target);
-    if (ready) return sendFeed(req, res, ready);
-    getKioskFeed(target).then((feed) => sendFeed(req, res, feed), next);
+    const validator = req.get('if-none-match');
+    if (ready && (!validator || etagMatches(validator, ready.etag))) return sendFeed(req, res, ready);
+    // A validator we do not hold may be newer than ours (another server served it): answer from a
+    // check begun after this request arrived, so a player never steps back to an older feed.
+    getKioskFeed(target, validator ? Date.now() : 0).then((feed) => sendFeed(req, res, feed), next);
   },
 ];

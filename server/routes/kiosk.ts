@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import { rateLimit } from 'express-rate-limit';
+import { PgRateLimitStore } from '../middlewares/rate-limit-store.ts';
 import { KioskHeartbeatSchema, KioskPairSchema, type KioskPairedDto } from '@shared/schemas/kiosk.ts';
 import { nightDateAt } from '@shared/sky/time-zone.ts';
 import { NotFoundError, TooManyRequestsError } from '../errors.ts';
@@ -15,6 +16,7 @@ import { getSkySnapshot } from '../services/sky/index.ts';
 const pairingLimiter = rateLimit({
   windowMs: 15 * 60_000,
   limit: config.limits.pairing,
+  store: new PgRateLimitStore('pairing'),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

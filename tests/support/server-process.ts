@@ -24,9 +24,15 @@ export interface ServerProcess {
  * Starts `server/cli/start.ts` on a free port against an existing database and waits for its
  * "ready" line (the start-up sweep has run by then).
  * @param env DATABASE_URL, UPLOADS_DIR and anything else; NODE_ENV, PORT, HOST and the mail port are set here
+ * @param options.port the port to listen on (default: a free one)
+ * @param options.timeoutMs how long to wait for "ready" before killing it (default 60 s)
+ * @param options.onSpawn told of the process at once, so a caller can stop it even if it never gets ready
  */
-export async function startServerProcess(env: Record<string, string>): Promise<ServerProcess> {
-  const port = await freePort();
+export async function startServerProcess(
+  env: Record<string, string>,
+  { port = 0, timeoutMs = 60_000, onSpawn }: { port?: number; timeoutMs?: number; onSpawn?: (child: ChildProcess) => void } = {},
+): Promise<ServerProcess> {
+  port ||= await freePort();
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {
     env: {
       ...process.env,
@@ -39,9 +45,13 @@ export async function startServerProcess(env: Record<string, string>): Promise<S
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
+  onSpawn?.(child);
   let output = '';
   await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
+    const timer = setTimeout(() => {
+      child.kill('SIGKILL');
+      reject(new Error(`server did not start within ${timeoutMs / 1000} s:\n${output}`));
+    }, timeoutMs);
     const onData = (chunk: Buffer) => {
       output += chunk.toString();
       if (output.includes('Starproof is ready')) {

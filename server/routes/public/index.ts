@@ -1,12 +1,20 @@
-import { Router, type Request, type RequestHandler, type Response } from 'express';
+import { type Request, type RequestHandler, type Response, Router } from 'express';
 import { PublicLangQuerySchema } from '@shared/schemas/page-version.ts';
 import type { PublicPageDto } from '@shared/schemas/public-page.ts';
 import { rateLimit } from 'express-rate-limit';
+import { PgRateLimitStore } from '../../middlewares/rate-limit-store.ts';
 import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
-import { sendCached } from '../../middlewares/http-cache.ts';
+import { etagMatches, sendCached } from '../../middlewares/http-cache.ts';
 import { validateQuery } from '../../middlewares/validate.ts';
-import { atomDocument, getPublicPages, negotiatedList, negotiatedPage, prepare } from '../../services/publishing/index.ts';
+import {
+  atomDocument,
+  getPublicPages,
+  negotiatedList,
+  negotiatedPage,
+  type PublicPages,
+  prepare,
+} from '../../services/publishing/index.ts';
 
 /**
  * Browsers and CDNs may reuse an answer for a minute, then must revalidate (a cheap 304). A page
@@ -18,6 +26,7 @@ const PUBLISHER = config.publisherName;
 const limiter = rateLimit({
   windowMs: 60_000,
   limit: config.limits.publicApi,
+  store: new PgRateLimitStore('public'),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>
@@ -64,6 +73,20 @@ export const publicRouter = Router();
 publicRouter.use(cors, limiter);
 
 /**
+ * The published pages for this request. A validator (If-None-Match) this server does not hold may be
+ * newer than its own answer (another server served it): then the answer comes from a check begun after
+ * the request arrived, so a reader never steps back to an older version.
+ * @param current the ETag this server would answer with, from the pages in memory
+ */
+async function pagesFor(req: Request, current: (pages: PublicPages) => string | undefined): Promise<PublicPages> {
+  const validator = req.get('if-none-match');
+  const arrived = Date.now();
+  const pages = await getPublicPages();
+  if (!validator || etagMatches(validator, current(pages) ?? '')) return pages;
+  return getPublicPages(arrived);
+}
+
+/**
  * The reader's Accept-Language ranges, best first (negotiator, through Express: q-values, `q=0`
  * left out, ties in the header's order), or null when the header is absent or empty.
  */
@@ -87,14 +110,16 @@ function languageHeaders(res: Response, page: PublicPageDto | null): void {
 
 /** Every published page; with `?lang=` or Accept-Language, one language version of each. */
 publicRouter.get('/pages', validateQuery(PublicLangQuerySchema), async (req, res) => {
-  const list = negotiatedList(await getPublicPages(), req.query.lang, rankedLanguages(req));
+  const ranked = rankedLanguages(req);
+  const pages = await pagesFor(req, (p) => negotiatedList(p, req.query.lang, ranked).etag);
+  const list = negotiatedList(pages, req.query.lang, ranked);
   languageHeaders(res, null);
   sendCached(req, res, list.body, list.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);
 });
 
 publicRouter.get('/pages.atom', async (req, res) => {
-  const published = await getPublicPages();
   const base = atomBaseUrl();
+  const published = await pagesFor(req, (pages) => pages.atom.get(base)?.etag);
   let doc = published.atom.get(base);
   if (!doc) {
     // One base in use; the map only outlives a change of setting in tests.
@@ -111,7 +136,9 @@ publicRouter.get('/pages.atom', async (req, res) => {
  */
 publicRouter.get('/pages/:slugOrId', validateQuery(PublicLangQuerySchema), async (req, res) => {
   const slugOrId = String((req.params as { slugOrId: string }).slugOrId).toLowerCase();
-  const found = negotiatedPage(await getPublicPages(), slugOrId, req.query.lang, rankedLanguages(req));
+  const ranked = rankedLanguages(req);
+  const pages = await pagesFor(req, (p) => negotiatedPage(p, slugOrId, req.query.lang, ranked)?.prepared.etag);
+  const found = negotiatedPage(pages, slugOrId, req.query.lang, ranked);
   if (!found) throw NotFoundError('There is no published page with this name or id.');
   languageHeaders(res, found.page);
   sendCached(req, res, found.prepared.body, found.prepared.etag, 'application/json; charset=utf-8', PUBLIC_CACHE_CONTROL);

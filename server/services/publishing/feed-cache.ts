@@ -3,6 +3,7 @@ import { logger } from '../../logger.ts';
 import { buildKioskFeed, type FeedTarget } from './feed-build.ts';
 import { feedFingerprint, type FeedDeps } from './feed-fingerprint.ts';
 import { config } from '../../config.ts';
+import { readForPublic } from './public-reads.ts';
 
 /** A built feed, ready to send as it is. */
 export interface CachedFeed {
@@ -24,7 +25,7 @@ const CHECK_MS = config.feedCheckMs;
 const RECHECK_MS = CHECK_MS / 2;
 
 const entries = new Map<string, CachedFeed>();
-const pending = new Map<string, Promise<CachedFeed>>();
+const pending = new Map<string, { job: Promise<CachedFeed>; startedAt: number }>();
 let generation = 0;
 const stats = { builds: 0, checks: 0 };
 
@@ -32,6 +33,10 @@ const keyOf = (t: FeedTarget) => `${t.channelId ?? `venue:${t.venueId}`}|${t.lan
 const sha = (data: string | Buffer) => createHash('sha256').update(data).digest('base64url');
 
 async function build(target: FeedTarget, previous: CachedFeed | undefined): Promise<CachedFeed> {
+  return readForPublic((asOf) => buildAsOf(target, previous, asOf));
+}
+
+async function buildAsOf(target: FeedTarget, previous: CachedFeed | undefined, asOf: number): Promise<CachedFeed> {
   const startedGeneration = generation;
   let guess = previous?.deps;
   for (let attempt = 0; ; attempt += 1) {
@@ -59,7 +64,7 @@ async function build(target: FeedTarget, previous: CachedFeed | undefined): Prom
       fingerprint,
       contentHash,
       validUntil: built.validUntil,
-      checkedAt: fingerprint ? now : 0,
+      checkedAt: fingerprint ? asOf : 0,
       builtAt: now,
     };
   }
@@ -73,12 +78,14 @@ async function refresh(
 ): Promise<CachedFeed> {
   if (checkOnly && previous) {
     stats.checks += 1;
-    const now = Date.now();
     const startedGeneration = generation;
-    const same = (await feedFingerprint(previous.deps)) === previous.fingerprint && previous.fingerprint;
+    const checked = await readForPublic(async (asOf) => {
+      const same = (await feedFingerprint(previous.deps)) === previous.fingerprint && previous.fingerprint;
+      return same ? asOf : null;
+    });
     // An event during the check (a background one, say) outdates what it checked: build instead.
-    if (same && generation === startedGeneration) {
-      previous.checkedAt = now;
+    if (checked !== null && generation === startedGeneration) {
+      previous.checkedAt = checked;
       return previous;
     }
   }
@@ -93,12 +100,16 @@ async function refresh(
  * or closes or the night changes, or when the fingerprint shows a change made by another instance.
  * Concurrent requests share one build or check.
  * @param target the channel and venue
+ * @param checkedAfter when set, the answer must come from a check begun at or after this time (ms):
+ *   a player whose validator does not match may have been served a newer feed by another server
  */
-export async function getKioskFeed(target: FeedTarget): Promise<CachedFeed> {
+export async function getKioskFeed(target: FeedTarget, checkedAfter = 0): Promise<CachedFeed> {
   const key = keyOf(target);
   const entry = entries.get(key);
   const expired = !entry || (entry.validUntil !== null && Date.now() >= entry.validUntil);
-  return freshKioskFeed(target) ?? share(key, target, entry, !expired);
+  const ready = freshKioskFeed(target);
+  if (ready && ready.checkedAt >= checkedAfter) return ready;
+  return share(key, target, entry, !expired, checkedAfter);
 }
 
 /**
@@ -124,14 +135,24 @@ export function freshKioskFeed(target: FeedTarget): CachedFeed | undefined {
   return entry;
 }
 
-/** The check or build already running for this feed, or a new one; concurrent requests share it. */
-function share(key: string, target: FeedTarget, entry: CachedFeed | undefined, checkOnly: boolean): Promise<CachedFeed> {
+/**
+ * The check or build already running for this feed (when it began late enough), or a new one;
+ * concurrent requests share it.
+ */
+function share(
+  key: string,
+  target: FeedTarget,
+  entry: CachedFeed | undefined,
+  checkOnly: boolean,
+  checkedAfter = 0,
+): Promise<CachedFeed> {
   const inFlight = pending.get(key);
-  if (inFlight) return inFlight;
+  if (inFlight && inFlight.startedAt >= checkedAfter) return inFlight.job;
+  const startedAt = Date.now();
   const job: Promise<CachedFeed> = refresh(key, target, entry, checkOnly).finally(() => {
-    if (pending.get(key) === job) pending.delete(key);
+    if (pending.get(key)?.job === job) pending.delete(key);
   });
-  pending.set(key, job);
+  pending.set(key, { job, startedAt });
   return job;
 }
 

@@ -12,7 +12,15 @@ export { inWindow } from './feed-build.ts';
 export { type CachedFeed, freshKioskFeed, getKioskFeed, invalidateKioskFeeds } from './feed-cache.ts';
 export { issuePairingCode, pairScreen, revokeScreen } from './kiosk-pairing.ts';
 export { atomDocument } from './public-atom.ts';
-export { getPublicPages, invalidatePublicPages, negotiatedList, negotiatedPage, prepare, type Prepared } from './public-pages.ts';
+export {
+  getPublicPages,
+  invalidatePublicPages,
+  negotiatedList,
+  negotiatedPage,
+  type PublicPages,
+  prepare,
+  type Prepared,
+} from './public-pages.ts';
 export { listPublicVenues, venueSkyTonight } from './public-sky.ts';
 export { exploreIndexUrl, publicBaseUrl, publicPageUrl } from './public-urls.ts';
 export type { ChannelDetailContext } from './channel-view.ts';

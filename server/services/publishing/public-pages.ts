@@ -13,6 +13,7 @@ import { getSettings } from '../settings/index.ts';
 import { eyeSafetyReason } from '@shared/editor/caution.ts';
 import { config } from '../../config.ts';
 import { absoluteHtml, publicPageUrl } from './public-urls.ts';
+import { readForPublic } from './public-reads.ts';
 
 /** Prepared bytes with their strong validator. */
 export interface Prepared {
@@ -200,37 +201,46 @@ function publishedVersions(rows: Page[], defaults: Map<string, string | null>): 
 }
 
 let current: PublicPages | undefined;
-let pending: Promise<PublicPages> | undefined;
+let pending: { job: Promise<PublicPages>; startedAt: number } | undefined;
 let generation = 0;
 
-async function rebuild(): Promise<PublicPages> {
+async function rebuild(asOf: number): Promise<PublicPages> {
   const started = generation;
   const before = current ? await feedFingerprint(current.deps) : '';
   const built = await buildPublicPages();
   const after = await feedFingerprint(built.deps);
   // Something moved while building (or an event came in): keep it, but rebuild on the next request.
   const settled = before === after && generation === started;
-  current = { ...built, fingerprint: settled ? after : '', checkedAt: settled ? Date.now() : 0 };
+  current = { ...built, fingerprint: settled ? after : '', checkedAt: settled ? asOf : 0 };
   return current;
 }
 
-async function refresh(): Promise<PublicPages> {
-  if (current?.fingerprint && (await feedFingerprint(current.deps)) === current.fingerprint) {
-    current.checkedAt = Date.now();
-    return current;
-  }
-  return rebuild();
+/** Checks (and rebuilds if need be) on the replica when it has caught up, else on the primary. */
+function refresh(): Promise<PublicPages> {
+  return readForPublic(async (asOf) => {
+    if (current?.fingerprint && (await feedFingerprint(current.deps)) === current.fingerprint) {
+      current.checkedAt = asOf;
+      return current;
+    }
+    return rebuild(asOf);
+  });
 }
 
 /**
  * The published pages, from memory unless something they show changed: a page published or
  * unpublished, a statement or image changed (events on this instance; the fingerprint, checked at
  * most once a second, for changes made on others).
+ * @param checkedAfter when set, the answer must come from a check begun at or after this time (ms):
+ *   a reader whose validator does not match may have been served a newer answer by another server
  */
-export async function getPublicPages(): Promise<PublicPages> {
-  if (current && Date.now() - current.checkedAt < CHECK_MS) return current;
-  pending ??= refresh().finally(() => (pending = undefined));
-  return pending;
+export async function getPublicPages(checkedAfter = 0): Promise<PublicPages> {
+  if (current && Date.now() - current.checkedAt < CHECK_MS && current.checkedAt >= checkedAfter) return current;
+  if (pending && pending.startedAt >= checkedAfter) return pending.job;
+  const job = refresh().finally(() => {
+    if (pending?.job === job) pending = undefined;
+  });
+  pending = { job, startedAt: Date.now() };
+  return job;
 }
 
 /**

@@ -28,7 +28,11 @@ export async function runDailySkyJob(): Promise<void> {
   if (computed) logger.info({ computed }, 'sky snapshots computed');
 }
 
-/** Queues the refresh once now (start-up), besides its hourly schedule. */
+/**
+ * Queues the refresh once now (start-up), besides its hourly schedule. Several workers starting
+ * together queue it once (one job per key and five-minute slot); a venue's night is computed once
+ * even when two refreshes do overlap (see refreshVenueSky).
+ */
 export async function enqueueDailySky(): Promise<void> {
-  await enqueue(DAILY_SKY_JOB, {});
+  await enqueue(DAILY_SKY_JOB, {}, { singletonKey: 'start-up', singletonSeconds: 300 });
 }

@@ -64,20 +64,29 @@ export async function getSkySnapshot(venueId: string, localDate: string): Promis
 /**
  * Makes sure a venue has snapshots for the night in progress (or coming) and the next one. When
  * the night in progress is computed (a new night, or the venue moved) it says so (`nightComputed`),
- * so statements about the venue's night follow.
+ * so statements about the venue's night follow. Runs under a lock per venue (held by a transaction
+ * that only waits), so two workers refreshing at once compute each night once: the second finds
+ * the first's snapshots when the lock is released.
  * @param force recompute even when present (after the venue moved)
  */
 export async function refreshVenueSky(venue: Venue, now = new Date(), force = false): Promise<number> {
-  const tonight = nightDateAt(now.getTime(), venue.timeZone);
-  let computed = 0;
-  for (const localDate of [tonight, nextDate(tonight)]) {
-    const stored = force ? null : await SkySnapshot.findOne({ where: { venueId: venue.id, localDate } });
-    if (stored && matchesVenue(stored.data, venue)) continue;
-    await computeSkySnapshot(venue, localDate, now);
-    computed += 1;
-    if (localDate === tonight) skyEvents.emit('nightComputed', { venueId: venue.id, localDate });
-  }
-  return computed;
+  return getSequelize().transaction(async (transaction) => {
+    await getSequelize().query("SELECT pg_advisory_xact_lock(hashtext('sky:' || :venueId))", {
+      replacements: { venueId: venue.id },
+      type: QueryTypes.SELECT,
+      transaction,
+    });
+    const tonight = nightDateAt(now.getTime(), venue.timeZone);
+    let computed = 0;
+    for (const localDate of [tonight, nextDate(tonight)]) {
+      const stored = force ? null : await SkySnapshot.findOne({ where: { venueId: venue.id, localDate } });
+      if (stored && matchesVenue(stored.data, venue)) continue;
+      await computeSkySnapshot(venue, localDate, now);
+      computed += 1;
+      if (localDate === tonight) skyEvents.emit('nightComputed', { venueId: venue.id, localDate });
+    }
+    return computed;
+  });
 }
 
 /** Every venue's coming nights, and old snapshots removed (kept a week for the record). */

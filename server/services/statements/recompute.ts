@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { getSequelize } from '../../db.ts';
-import { enqueue } from '../../jobs/queue.ts';
+import { enqueue, type SendOptions } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
 import { getSettings } from '../settings/index.ts';
@@ -210,9 +210,12 @@ export const RECOMPUTE_JOB = 'statements.recompute';
 /** Queued recomputes handed over at once and merged into one. */
 export const RECOMPUTE_BATCH = 100;
 
-/** Queues a recompute of the statements a scope covers (inline when no queue runs). */
-export async function enqueueRecompute(data: { scope: RecomputeScope }): Promise<void> {
-  await enqueue(RECOMPUTE_JOB, data);
+/**
+ * Queues a recompute of the statements a scope covers (inline when no queue runs).
+ * @param options pg-boss send options (a singleton key where several servers may queue one trigger)
+ */
+export async function enqueueRecompute(data: { scope: RecomputeScope }, options: SendOptions = {}): Promise<void> {
+  await enqueue(RECOMPUTE_JOB, data, options);
 }
 
 /**
