@@ -82,5 +82,8 @@ export interface ImportDto {
   report: ImportReport;
   committedAt: string | null;
   createdAt: string;
+  /** After a commit: how many measurements this import added (once, however often it was committed). */
   insertedCount?: number;
+  /** After a commit: true when an earlier commit of the same import had already added them. */
+  alreadyCommitted?: boolean;
 }

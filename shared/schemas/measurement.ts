@@ -27,6 +27,13 @@ export function readNumber(value: unknown): number | null | 'invalid' {
   return Number.isFinite(n) ? n : 'invalid';
 }
 
+/** The uncertainty fields as the form and the CSV import name them. */
+const UNCERTAINTY_LABELS = {
+  uncertainty: 'Uncertainty (±)',
+  uncertaintyMinus: 'Uncertainty minus',
+  uncertaintyPlus: 'Uncertainty plus',
+} as const;
+
 const numberish = z.union([z.string(), z.number()]).nullish();
 
 const issue = (ctx: z.RefinementCtx, path: string, message: string, reason: MeasurementProblem) =>
@@ -88,9 +95,17 @@ export const MeasurementInputSchema = z
       ['uncertaintyMinus', minus],
       ['uncertaintyPlus', plus],
     ] as const) {
-      if (v === 'invalid') issue(ctx, path, 'Uncertainties are numbers, e.g. 0.02.', 'invalid_uncertainty');
-      else if (v !== null && v < 0)
-        issue(ctx, path, 'Uncertainties are zero or more; the sign is in the field (minus or plus).', 'invalid_uncertainty');
+      const label = UNCERTAINTY_LABELS[path];
+      if (v === 'invalid') issue(ctx, path, `${label} is a number, e.g. 0.02.`, 'invalid_uncertainty');
+      // A published uncertainty is never zero; "none published" is an empty field. The sign of an
+      // asymmetric one is in the field's name (minus or plus), so the number itself is above zero.
+      else if (v !== null && !(v > 0))
+        issue(
+          ctx,
+          path,
+          `${label} must be more than zero; leave it empty when the source gives none${path === 'uncertainty' ? '' : ' (the sign is in the field: minus or plus)'}.`,
+          'invalid_uncertainty',
+        );
     }
     if (sigma !== null && (minus !== null || plus !== null))
       issue(

@@ -42,13 +42,13 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
-const present = (record: CatalogueImport, insertedCount?: number): ImportDto => ({
+const present = (record: CatalogueImport, commit?: { inserted: number; alreadyCommitted: boolean }): ImportDto => ({
   id: record.id,
   status: record.status,
   report: record.report,
   committedAt: record.committedAt?.toISOString() ?? null,
   createdAt: record.createdAt.toISOString(),
-  ...(insertedCount === undefined ? {} : { insertedCount }),
+  ...(commit === undefined ? {} : { insertedCount: commit.inserted, alreadyCommitted: commit.alreadyCommitted }),
 });
 
 export const importsRouter = Router();
@@ -87,6 +87,6 @@ importsRouter.post('/:id/commit', async (req, res) => {
   const viewer = currentUser(req);
   const { id } = await loadImport(req.params.id);
   authorize(viewer, 'catalogue', 'import');
-  const { record, inserted } = await commitCatalogueImport(id, viewer, req.ip);
-  res.json({ data: present(record, inserted) });
+  const { record, ...commit } = await commitCatalogueImport(id, viewer, req.ip);
+  res.json({ data: present(record, commit) });
 });
