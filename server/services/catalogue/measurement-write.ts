@@ -13,7 +13,7 @@ async function checkSource(sourceId: string | null): Promise<void> {
 
 /**
  * Adds a measurement to an object. A reviewer's or admin's entry is accepted at once; a writer's or
- * editor's is a proposal waiting for review.
+ * editor's is a proposal waiting for review, and must cite a source.
  * @param object the object measured
  * @param values the parsed input, in canonical units
  * @param actor who enters it
@@ -26,6 +26,14 @@ export async function createMeasurement(
   actor: User,
   asProposal: boolean,
 ): Promise<Measurement> {
+  // A reviewer checks a proposal against its source, so a proposal without one cannot be checked.
+  if (asProposal && !values.sourceId)
+    throw ValidationError(
+      'Choose the source this value comes from: a proposed measurement needs one, so a reviewer can check it.',
+      {
+        sourceId: 'Source: a proposed measurement needs the source its value comes from.',
+      },
+    );
   await checkSource(values.sourceId);
   const measurement = await getSequelize().transaction(async (transaction) => {
     const m = await Measurement.create(
