@@ -57,6 +57,8 @@ export const MeasurementInputSchema = z
       .nullish()
       .or(z.literal('').transform(() => null)),
     note: z.string().trim().max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`).nullish(),
+    /** True once the person has read the value's warnings (a negative parallax, a likely sign error) and keeps it. */
+    confirm: z.boolean({ message: 'confirm must be true or false' }).optional(),
   })
   .transform((input, ctx) => {
     const quantity = findQuantity(input.quantity);
@@ -138,6 +140,7 @@ export const MeasurementInputSchema = z
       enteredUnit: unit.id,
       sourceId: input.sourceId ?? null,
       note: input.note ?? '',
+      confirm: input.confirm === true,
     };
   });
 export type MeasurementInput = z.input<typeof MeasurementInputSchema>;
@@ -165,9 +168,21 @@ const reason = z.string().trim().max(CatalogueLimits.reasonMax, `At most ${Catal
  */
 export const MeasurementPreferredSchema = z.object({
   preferred: z.boolean({ message: 'preferred must be true or false' }),
+  /** True once the reviewer has read which statements a negative parallax will leave without a distance. */
+  confirm: z.boolean({ message: 'confirm must be true or false' }).optional(),
   replaces: z.uuid({ message: 'replaces must be a measurement id or null' }).nullable().optional(),
 });
 export type MeasurementPreferredInput = z.infer<typeof MeasurementPreferredSchema>;
+
+/**
+ * The body of a 409 `confirmation_needed` (in the error's `current`): what to read before sending
+ * the same request again with `confirm: true`.
+ */
+export interface MeasurementConfirmationDto {
+  warnings: Array<{ code: string; message: string }>;
+  /** Statements that will no longer work out (making a negative parallax preferred). */
+  statements: Array<{ id: string; text: string }>;
+}
 
 /** A reviewer's decision on a proposed measurement; declining needs a reason. */
 export const MeasurementReviewSchema = z

@@ -41,7 +41,9 @@ export async function startServerProcess(env: Record<string, string>): Promise<S
   });
   let output = '';
   await new Promise<void>((resolve, reject) => {
-    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
+    // A machine shared by several test runs may need longer (STARPROOF_E2E_START_TIMEOUT_MS).
+    const startTimeout = Number(process.env.STARPROOF_E2E_START_TIMEOUT_MS) || 60_000;
+    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), startTimeout);
     const onData = (chunk: Buffer) => {
       output += chunk.toString();
       if (output.includes('Starproof is ready')) {

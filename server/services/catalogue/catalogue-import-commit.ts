@@ -23,9 +23,15 @@ interface CommitOutcome {
  * One commit per import: a second commit (a double click, a retried request) waits for the first
  * on the import's row lock and answers the first one's result, adding nothing.
  * @returns the import, how many measurements it added, and whether it had been committed before
- * @throws HttpError 404 when there is no such import, 409 (catalogue_changed)
+ * @param options.confirm true once the rows the dry run asked to confirm have been read
+ * @throws HttpError 404 when there is no such import, 409 (catalogue_changed, confirmation_needed)
  */
-export async function commitCatalogueImport(importId: string, actor: User, ip?: string): Promise<CommitOutcome> {
+export async function commitCatalogueImport(
+  importId: string,
+  actor: User,
+  options: { confirm: boolean; ip?: string },
+): Promise<CommitOutcome> {
+  const { ip } = options;
   const sequelize = getSequelize();
   let inserted = 0;
   let alreadyCommitted = false;
@@ -45,6 +51,12 @@ export async function commitCatalogueImport(importId: string, actor: User, ip?: 
         inserted = await Measurement.count({ where: { importId }, transaction });
         return record;
       }
+      const needing = record.report.confirmationCount ?? 0;
+      if (needing > 0 && !options.confirm)
+        throw ConflictError(
+          `${needing} row${needing === 1 ? ' needs' : 's need'} a second look (a negative parallax, a likely sign error): read the warnings in the dry run and confirm them. Nothing was imported.`,
+          'confirmation_needed',
+        );
 
       const [{ duplicates }] = await sequelize.query<{ duplicates: string }>(
         `SELECT count(*) AS duplicates FROM catalogue_imports ci, ${RECORDSET}

@@ -99,7 +99,7 @@ export async function reviewProposal(
 ): Promise<CatalogueProposal> {
   return getSequelize().transaction(async (transaction) => {
     const proposal = await CatalogueProposal.findByPk(proposalId, { transaction, lock: transaction.LOCK.UPDATE });
-    if (!proposal || proposal.status !== 'proposed')
+    if (proposal?.status !== 'proposed')
       throw ConflictError('This proposal has already been reviewed; reload the page.', 'already_reviewed');
     const accepted = input.decision === 'accept';
     const recordId = accepted ? await createFromProposal(proposal, actor, ip, transaction) : null;
