@@ -9,7 +9,11 @@
  */
 
 /** Why a value needs a second look. */
-export type MeasurementWarningCode = 'negative_parallax' | 'impossible_negative_parallax' | 'likely_sign_error' | 'far_from_published';
+export type MeasurementWarningCode =
+  | 'negative_parallax'
+  | 'impossible_negative_parallax'
+  | 'likely_sign_error'
+  | 'far_from_published';
 
 export interface MeasurementWarning {
   code: MeasurementWarningCode;
@@ -28,29 +32,36 @@ export interface PublishedValue {
  */
 const NOISE_SIGMAS = 5;
 
-const mas = (v: number) => `${v < 0 ? '−' : v > 0 ? '+' : ''}${Math.abs(v).toLocaleString('en-GB', { maximumFractionDigits: 4 })} mas`;
-const sigmaOf = (v: PublishedValue) => (v.uncertainty === null ? '' : ` ± ${v.uncertainty.toLocaleString('en-GB', { maximumFractionDigits: 4 })}`);
+const plain = (v: number) => Math.abs(v).toLocaleString('en-GB', { maximumFractionDigits: 4 });
+const signed = (v: number) => `${v < 0 ? '−' : v > 0 ? '+' : ''}${plain(v)}`;
+const mas = (v: number) => `${signed(v)} mas`;
+/** A published value with its uncertainty: "+130.2 ± 0.4 mas". */
+const published = (p: PublishedValue) => `${signed(p.value)}${p.uncertainty === null ? '' : ` ± ${plain(p.uncertainty)}`} mas`;
 
 /**
  * The warnings for a parallax (canonical: mas) about to be stored for an object.
  * @param value the parallax in mas
  * @param uncertainty its symmetric uncertainty in mas (or the larger of an asymmetric pair), if any
- * @param published the object's other accepted, current parallaxes
+ * @param others the object's other accepted, current parallaxes
  */
-export function parallaxWarnings(value: number, uncertainty: number | null, published: readonly PublishedValue[]): MeasurementWarning[] {
+export function parallaxWarnings(
+  value: number,
+  uncertainty: number | null,
+  others: readonly PublishedValue[],
+): MeasurementWarning[] {
   const warnings: MeasurementWarning[] = [];
   if (value <= 0)
     warnings.push({
       code: 'negative_parallax',
       message: `A parallax of ${mas(value)} gives no distance: the object is too far for this measurement to tell, and noise took the value to zero or below. It is kept as published, but no statement can work out a distance from it.`,
     });
-  const flipped = published.find(
+  const flipped = others.find(
     (p) => p.value > 0 && value < 0 && Math.abs(value + p.value) <= Math.max(0.05 * p.value, NOISE_SIGMAS * (p.uncertainty ?? 0)),
   );
   if (flipped) {
     warnings.push({
       code: 'likely_sign_error',
-      message: `This object's published parallax is ${mas(flipped.value)}${sigmaOf(flipped)}; ${mas(value)} is the same size with the opposite sign, which is most likely a sign error. Check the source.`,
+      message: `This object's published parallax is ${published(flipped)}; ${mas(value)} is the same size with the opposite sign, which is most likely a sign error. Check the source.`,
     });
     return warnings;
   }
@@ -59,7 +70,7 @@ export function parallaxWarnings(value: number, uncertainty: number | null, publ
       code: 'impossible_negative_parallax',
       message: `${mas(value)} lies ${Math.round(-value / uncertainty).toLocaleString('en-GB')} times its uncertainty below zero. A true parallax is never negative, so noise cannot explain this: check the sign and the unit.`,
     });
-  const far = published.find((p) => {
+  const far = others.find((p) => {
     const combined = Math.hypot(uncertainty ?? 0, p.uncertainty ?? 0);
     const apart = Math.abs(value - p.value);
     return apart > 0.2 * Math.max(Math.abs(p.value), 1) && (combined === 0 || apart > NOISE_SIGMAS * combined);
@@ -67,7 +78,7 @@ export function parallaxWarnings(value: number, uncertainty: number | null, publ
   if (far)
     warnings.push({
       code: 'far_from_published',
-      message: `${mas(value)} is far from this object's published parallax of ${mas(far.value)}${sigmaOf(far)}. Check the value and its unit before saving.`,
+      message: `${mas(value)} is far from this object's published parallax of ${published(far)}. Check the value and its unit before saving.`,
     });
   return warnings;
 }

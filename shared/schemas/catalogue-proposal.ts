@@ -12,13 +12,16 @@ import { SourceInputSchema, type SourceValues } from './source.ts';
 export const PROPOSAL_KINDS = ['object', 'source'] as const;
 export type ProposalKind = (typeof PROPOSAL_KINDS)[number];
 
+/** What an object proposal without a source is told (the form says it before sending, from here). */
+export const PROPOSAL_SOURCE_MISSING = 'Source: choose the source the name and position come from.';
+
 /** The source an object proposal cites, checked beside the object's own fields. */
 const ProposalSourceSchema = z.object({
   sourceId: z
-    .uuid({ message: 'Source: choose the source the name and position come from.' })
+    .uuid({ message: PROPOSAL_SOURCE_MISSING })
     .nullish()
     .or(z.literal('').transform(() => null))
-    .refine((v) => !!v, 'Source: choose the source the name and position come from.'),
+    .refine((v) => !!v, PROPOSAL_SOURCE_MISSING),
 });
 
 /** A proposed object: the object form's fields and the source they come from. */

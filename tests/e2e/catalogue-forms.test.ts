@@ -47,9 +47,9 @@ describe('catalogue forms that never lie', () => {
     await row.getByRole('button', { name: 'Accept object' }).click();
     await expect.poll(() => row.getByText('Accepted').count()).toBe(1);
     await row.getByRole('link', { name: 'Open the object' }).click();
-    await expect.poll(() => reviewer.page.getByRole('heading', { level: 1 }).textContent()).toBe(
-      'Corrie Vale Proposed Cluster (demo)',
-    );
+    await expect
+      .poll(() => reviewer.page.getByRole('heading', { level: 1 }).textContent())
+      .toBe('Corrie Vale Proposed Cluster (demo)');
     await expect.poll(() => reviewer.page.getByText('Orion (Ori)').count()).toBe(1);
     expect(reviewer.errors).toEqual([]);
   });
@@ -58,10 +58,11 @@ describe('catalogue forms that never lie', () => {
     const { page, errors, baseUrl } = await openBrowser();
     await signInAs(page, baseUrl, 'reviewer');
     await page.goto(`${baseUrl}/catalogue/import`);
-    const csv = `object,quantity,value,unit,band,uncertainty,source\nDeneb,angular_size,2.4,mas,,0.1,${DEMO_SOURCE_CITATION}\n`.replace(
-      'mas,',
-      'arcsec,',
-    );
+    const csv =
+      `object,quantity,value,unit,band,uncertainty,source\nDeneb,angular_size,2.4,mas,,0.1,${DEMO_SOURCE_CITATION}\n`.replace(
+        'mas,',
+        'arcsec,',
+      );
     await page
       .getByLabel('CSV file (UTF-8, up to 10 MB)')
       .setInputFiles({ name: 'double-click.csv', mimeType: 'text/csv', buffer: Buffer.from(csv, 'utf8') });

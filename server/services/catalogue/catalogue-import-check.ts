@@ -161,13 +161,20 @@ async function confirmationsFor(accepted: AcceptedImportRow[]): Promise<Array<{ 
   const parallaxes = accepted.filter((r) => r.quantity === 'parallax');
   if (parallaxes.length === 0) return [];
   const published = await Measurement.findAll({
-    where: { skyObjectId: [...new Set(parallaxes.map((r) => r.objectId))], quantity: 'parallax', status: 'accepted', retiredAt: null },
+    where: {
+      skyObjectId: [...new Set(parallaxes.map((r) => r.objectId))],
+      quantity: 'parallax',
+      status: 'accepted',
+      retiredAt: null,
+    },
     attributes: ['skyObjectId', 'value', 'uncertainty'],
   });
   const byObject = new Map<string, Array<{ value: number; uncertainty: number | null }>>();
   for (const m of published) byObject.set(m.skyObjectId, [...(byObject.get(m.skyObjectId) ?? []), m]);
   return parallaxes.flatMap((r) => {
-    const sigma = r.uncertainty ?? (r.uncertaintyMinus !== null && r.uncertaintyPlus !== null ? Math.max(r.uncertaintyMinus, r.uncertaintyPlus) : null);
+    const sigma =
+      r.uncertainty ??
+      (r.uncertaintyMinus !== null && r.uncertaintyPlus !== null ? Math.max(r.uncertaintyMinus, r.uncertaintyPlus) : null);
     const warnings = parallaxWarnings(r.value, sigma, byObject.get(r.objectId) ?? []);
     return warnings.length === 0 ? [] : [{ row: r.row, message: warnings.map((w) => w.message).join(' ') }];
   });

@@ -7,7 +7,8 @@ import { Measurement } from '../../models/index.ts';
 
 /** The larger side of a measurement's uncertainty, or none. */
 const sigmaOf = (v: { uncertainty: number | null; uncertaintyMinus: number | null; uncertaintyPlus: number | null }) =>
-  v.uncertainty ?? (v.uncertaintyMinus !== null && v.uncertaintyPlus !== null ? Math.max(v.uncertaintyMinus, v.uncertaintyPlus) : null);
+  v.uncertainty ??
+  (v.uncertaintyMinus !== null && v.uncertaintyPlus !== null ? Math.max(v.uncertaintyMinus, v.uncertaintyPlus) : null);
 
 /**
  * The warnings a value needs confirmed before it is stored: for a parallax, compared with the
@@ -16,7 +17,13 @@ const sigmaOf = (v: { uncertainty: number | null; uncertaintyMinus: number | nul
  */
 export async function warningsForValue(
   objectId: string,
-  values: { quantity: string; value: number; uncertainty: number | null; uncertaintyMinus: number | null; uncertaintyPlus: number | null },
+  values: {
+    quantity: string;
+    value: number;
+    uncertainty: number | null;
+    uncertaintyMinus: number | null;
+    uncertaintyPlus: number | null;
+  },
   exceptId?: string,
 ): Promise<MeasurementWarning[]> {
   if (values.quantity !== 'parallax') return [];
@@ -65,11 +72,7 @@ export function requireConfirmation(
 ): void {
   if (confirmed || warnings.length === 0) return;
   const current: MeasurementConfirmationDto = { warnings, statements };
-  throw new HttpError(
-    409,
-    'confirmation_needed',
-    `Please confirm: ${warnings.map((w) => w.message).join(' ')}`,
-    undefined,
-    { current },
-  );
+  throw new HttpError(409, 'confirmation_needed', `Please confirm: ${warnings.map((w) => w.message).join(' ')}`, undefined, {
+    current,
+  });
 }

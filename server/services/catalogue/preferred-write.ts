@@ -45,7 +45,7 @@ async function setFlag(m: Measurement, preferred: boolean, actor: User, transact
 async function confirmNegativeParallax(measurementId: string, input: MeasurementPreferredInput): Promise<void> {
   if (!input.preferred || input.confirm) return;
   const m = await Measurement.findByPk(measurementId, { attributes: ['id', 'skyObjectId', 'quantity', 'value', 'preferred'] });
-  if (!m || m.quantity !== 'parallax' || m.value > 0 || m.preferred) return;
+  if (m?.quantity !== 'parallax' || m.value > 0 || m.preferred) return;
   const statements = await statementsUsingParallax(m.skyObjectId);
   const count = statements.length;
   requireConfirmation(

@@ -15,12 +15,14 @@ export function ImportPanel() {
   const [mapping, setMapping] = useState<ImportMapping>({});
   const dryRun = useDryRunImport();
   const commit = useCommitImport();
+  // Rows the dry run asks to confirm (a negative parallax, a likely sign error) need a yes first.
+  const [confirmed, setConfirmed] = useState(false);
   // One commit per dry run: a second click before React re-renders the busy button sends nothing.
   const committing = useRef<string | null>(null);
   const runCommit = (id: string) => {
     if (committing.current === id) return;
     committing.current = id;
-    commit.mutate(id, { onError: () => (committing.current = null) });
+    commit.mutate({ id, confirm: confirmed }, { onError: () => (committing.current = null) });
   };
 
   const check = (withMapping?: ImportMapping) => {
@@ -30,6 +32,7 @@ export function ImportPanel() {
       { file, mapping: withMapping },
       {
         onSuccess: (result) => {
+          setConfirmed(false);
           setChecked(result);
           setMapping(result.report.mapping);
         },

@@ -9,6 +9,7 @@ import {
   type SkyObjectValues,
 } from '@shared/schemas/sky-object.ts';
 import { useCreateSkyObject, useUpdateSkyObject } from '@/api/catalogue-objects.ts';
+import { PROPOSAL_SOURCE_MISSING } from '@shared/schemas/catalogue-proposal.ts';
 import { useProposeObject } from '@/api/catalogue-proposals.ts';
 import { useSources } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -134,6 +135,7 @@ export function ObjectForm({
       const rest = applyServerErrors(error, setError, ['name', 'designations', 'kind', 'ra', 'dec', 'notes']);
       setFormError(fields?.sourceId && Object.keys(fields).length === 1 ? undefined : rest);
     };
+    if (proposing && !sourceId) return setSourceError(PROPOSAL_SOURCE_MISSING);
     if (proposing) propose.mutate({ ...input, sourceId }, { onSuccess: (p) => onProposed?.(p.title), onError });
     else (object ? update : create).mutate(input, { onSuccess: onDone, onError });
   });

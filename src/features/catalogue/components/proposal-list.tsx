@@ -18,7 +18,8 @@ const STATUS_LABELS: Record<ProposalDto['status'], string> = {
 function details(p: ProposalDto): string {
   const v = p.values;
   if (p.kind === 'object') {
-    const position = v.raDeg === null ? 'no fixed position' : `RA ${Number(v.raDeg).toFixed(4)}°, Dec ${Number(v.decDeg).toFixed(4)}°`;
+    const position =
+      v.raDeg === null ? 'no fixed position' : `RA ${Number(v.raDeg).toFixed(4)}°, Dec ${Number(v.decDeg).toFixed(4)}°`;
     return `${String(v.kind)}, ${position}`;
   }
   return (['bibcode', 'doi', 'url'] as const)
@@ -39,7 +40,9 @@ function ProposalRow({ proposal, onDecline }: { proposal: ProposalDto; onDecline
     <li className="space-y-1 rounded-md border border-rule bg-panel p-3 text-sm">
       <div className="flex flex-wrap items-baseline justify-between gap-2">
         <span className="font-medium break-words">{proposal.title}</span>
-        <span className={proposal.status === 'declined' ? 'text-broken' : proposal.status === 'accepted' ? 'text-ok' : 'text-changed'}>
+        <span
+          className={proposal.status === 'declined' ? 'text-broken' : proposal.status === 'accepted' ? 'text-ok' : 'text-changed'}
+        >
           {STATUS_LABELS[proposal.status]}
         </span>
       </div>
