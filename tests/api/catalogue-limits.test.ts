@@ -103,7 +103,7 @@ describe('hard physical limits, through the API', () => {
 
   it('keeps values inside the limits, including a negative parallax and a blueshift', async () => {
     for (const body of [
-      { quantity: 'parallax', value: '-0.4', unit: 'mas', uncertainty: '0.3' },
+      { quantity: 'parallax', value: '-0.4', unit: 'mas', uncertainty: '0.3', confirm: true },
       { quantity: 'redshift', value: '-0.0002' },
       { quantity: 'extinction', band: 'V', value: '0', unit: 'mag' },
     ])

@@ -217,7 +217,9 @@ describe('changing the adopted cosmology', () => {
       .send({ h0Range: { low: 74, high: 70, source: 'Corrie Vale demo choice (demo)' } });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields['h0Range.high']).toBe('High end of the H0 range: it must be above the low end');
-    const notNumber = await admin.patch('/api/settings').send({ h0Range: { low: 'sixty', high: 70, source: 'Corrie Vale demo (demo)' } });
+    const notNumber = await admin
+      .patch('/api/settings')
+      .send({ h0Range: { low: 'sixty', high: 70, source: 'Corrie Vale demo (demo)' } });
     expect(notNumber.body.error.fields['h0Range.low']).toMatch(/^Low end of the H0 range: write a number/);
     const narrow = { low: 67.2, high: 68.2, source: 'Corrie Vale demo choice: CMB only (demo)' };
     const changed = await admin.patch('/api/settings').send({ h0Range: narrow });
