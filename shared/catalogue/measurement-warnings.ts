@@ -53,7 +53,7 @@ export function parallaxWarnings(
   if (value <= 0)
     warnings.push({
       code: 'negative_parallax',
-      message: `A parallax of ${mas(value)} gives no distance: the object is too far for this measurement to tell, and noise took the value to zero or below. It is kept as published, but no statement can work out a distance from it.`,
+      message: `A parallax of ${mas(value)} gives no distance. Catalogues publish negative parallaxes for stars too far for the measurement to tell (noise takes the value below zero); Starproof keeps them as published, but no statement can work out a distance from one.`,
     });
   const flipped = others.find(
     (p) => p.value > 0 && value < 0 && Math.abs(value + p.value) <= Math.max(0.05 * p.value, NOISE_SIGMAS * (p.uncertainty ?? 0)),

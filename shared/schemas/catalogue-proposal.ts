@@ -1,7 +1,7 @@
 import { z } from 'zod';
 import { CatalogueLimits } from '../validations.ts';
-import { SkyObjectInputSchema, type SkyObjectValues } from './sky-object.ts';
-import { SourceInputSchema, type SourceValues } from './source.ts';
+import { SkyObjectInputSchema } from './sky-object.ts';
+import { SourceInputSchema } from './source.ts';
 
 /**
  * Writers and editors cannot add objects or sources to the catalogue; they propose them, and a
@@ -9,8 +9,7 @@ import { SourceInputSchema, type SourceValues } from './source.ts';
  * where its facts come from: an object proposal cites a source from the catalogue, a source
  * proposal says where a reviewer finds the source (bibcode, DOI or URL).
  */
-export const PROPOSAL_KINDS = ['object', 'source'] as const;
-export type ProposalKind = (typeof PROPOSAL_KINDS)[number];
+export type ProposalKind = 'object' | 'source';
 
 /** What an object proposal without a source is told (the form says it before sending, from here). */
 export const PROPOSAL_SOURCE_MISSING = 'Source: choose the source the name and position come from.';
@@ -57,9 +56,6 @@ export type ProposalReviewInput = z.infer<typeof ProposalReviewSchema>;
 export const ProposalListQuerySchema = z.object({
   status: z.enum(['proposed', 'all'], { message: 'Status is proposed or all' }).default('proposed'),
 });
-
-/** What a proposal carries, by kind (object values with their source id, or source values). */
-export type ProposalValues = (SkyObjectValues & { sourceId: string }) | SourceValues;
 
 /** A proposal as the API shows it. */
 export interface ProposalDto {

@@ -133,6 +133,8 @@ describe('catalogue forms that never lie', () => {
     await check.getByRole('button', { name: 'Keep this value' }).click();
     const group = page.getByRole('region', { name: 'Parallax' });
     await expect.poll(() => group.getByText('−130 ± 0.5 mas').count()).toBe(1);
+    // Kept once, and the form has closed.
+    await expect.poll(() => page.getByRole('form', { name: 'Add a measurement' }).count()).toBe(0);
 
     // Made preferred, it says which statement loses its distance, and waits for a yes.
     const row = group.getByRole('listitem').filter({ hasText: '−130 ± 0.5 mas' });

@@ -44,10 +44,11 @@ export function ConfirmWarnings({
         </>
       )}
       <div className="flex flex-wrap gap-2 pt-1">
-        <Button busy={busy} onClick={onConfirm}>
+        {/* Inside a form these must not submit it as well: type="button". */}
+        <Button type="button" busy={busy} onClick={onConfirm}>
           {confirmLabel}
         </Button>
-        <Button variant="secondary" onClick={onCancel}>
+        <Button type="button" variant="secondary" onClick={onCancel}>
           Go back
         </Button>
       </div>

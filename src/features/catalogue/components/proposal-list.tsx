@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
+import { KIND_LABELS, type SkyObjectKind } from '@shared/catalogue/kinds.ts';
 import type { ProposalDto, ProposalKind } from '@shared/schemas/catalogue-proposal.ts';
 import { useProposals, useReviewProposal } from '@/api/catalogue-proposals.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -20,7 +21,7 @@ function details(p: ProposalDto): string {
   if (p.kind === 'object') {
     const position =
       v.raDeg === null ? 'no fixed position' : `RA ${Number(v.raDeg).toFixed(4)}°, Dec ${Number(v.decDeg).toFixed(4)}°`;
-    return `${String(v.kind)}, ${position}`;
+    return `${KIND_LABELS[v.kind as SkyObjectKind] ?? String(v.kind)}, ${position}`;
   }
   return (['bibcode', 'doi', 'url'] as const)
     .filter((k) => v[k])
@@ -97,6 +98,7 @@ export function ProposalList({ kind, reviewer }: { kind: ProposalKind; reviewer:
           ? 'Check each against its source, then accept it into the catalogue or decline it with a reason the proposer will read.'
           : 'A reviewer or an admin accepts or declines each proposal; their reason shows here.'}
       </p>
+      {review.error && <Notice tone="error">{review.error.message}</Notice>}
       <ul className="space-y-2">
         {[...waiting, ...reviewed].map((p) => (
           <ProposalRow key={p.id} proposal={p} onDecline={setDeclining} />
