@@ -18,7 +18,7 @@ import { initChannelModels } from './channel-models.ts';
 
 export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
 export type { TokenPurpose } from './auth-token.ts';
-export { CatalogueImport, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue-models.ts';
+export { CatalogueImport, CatalogueProposal, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue-models.ts';
 export { Media, MediaRendition };
 export { CosmologyDescription, OrganisationSettings, Statement };
 export type { StatementStatus } from './statement.ts';

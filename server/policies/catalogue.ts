@@ -1,4 +1,4 @@
-import type { Measurement } from '../models/index.ts';
+import type { CatalogueProposal, Measurement } from '../models/index.ts';
 import { anyStaff, hasRole, type Rule } from './utils.ts';
 
 /** Reviewers keep the catalogue's data; admins may step in. */
@@ -26,4 +26,8 @@ export const cataloguePolicy = {
   preferMeasurement: ((user, m) => keeper(user) && current(m) && m!.status === 'accepted') as Rule<Measurement>,
   reviewMeasurement: ((user, m) => keeper(user) && current(m) && m!.status === 'proposed') as Rule<Measurement>,
   retireMeasurement: ((user, m) => keeper(user) && current(m)) as Rule<Measurement>,
+  /** Writers and editors propose objects and sources; reviewers and admins add them directly. */
+  proposeEntry: proposer,
+  /** A keeper reviews proposals, never their own (an admin who proposed nothing may review any). */
+  reviewProposal: ((user, p) => keeper(user) && !!p && p.createdById !== user.id) as Rule<CatalogueProposal>,
 };

@@ -15,6 +15,7 @@ import {
   User,
   Venue,
 } from '../models/index.ts';
+import { findProposal } from '../services/catalogue/index.ts';
 import { statementIncludes } from '../services/statements/index.ts';
 
 /*
@@ -95,6 +96,9 @@ export const loadMeasurement = (id: unknown) =>
 
 /** @throws HttpError 404 */
 export const loadSource = (id: unknown) => loadRecord(id, (pk) => Source.findByPk(pk), 'There is no source with that id.');
+
+/** A proposed object or source, with its source and people. @throws HttpError 404 */
+export const loadProposal = (id: unknown) => loadRecord(id, findProposal, 'There is no proposal with that id.');
 
 /** A CSV import without its accepted rows (they can be large). @throws HttpError 404 */
 export const loadImport = (id: unknown) =>

@@ -35,6 +35,13 @@ export interface QuantityDefinition {
   exclusiveMin?: number;
   /** Values (canonical) must be at least this, when set. */
   inclusiveMin?: number;
+  /** Values (canonical) must be at most this, when set. */
+  inclusiveMax?: number;
+  /**
+   * Why the limits are what they are, for a person: ends the message of a value out of range.
+   * The same limits are check constraints on `measurements` (migration 202612050201).
+   */
+  limitReason?: string;
   hint: string;
 }
 
@@ -64,6 +71,8 @@ export const QUANTITIES = {
     units: [DIMENSIONLESS],
     needsBand: false,
     exclusiveMin: -1,
+    // 1 + z is the ratio of observed to emitted wavelength, which is positive, so z > −1 (common practice).
+    limitReason: '1 + z is a ratio of wavelengths, which is never zero or negative',
     hint: 'Dimensionless; negative for objects approaching us (blueshift).',
   },
   apparent_magnitude: {
@@ -73,6 +82,11 @@ export const QUANTITIES = {
     canonicalUnit: 'mag',
     units: [MAG],
     needsBand: true,
+    // The Sun is about −26.7 mag in V and the faintest objects ever measured about +31 (recalled from
+    // memory): −30 to +40 leaves room for every band and still catches a value typed in the wrong field.
+    inclusiveMin: -30,
+    inclusiveMax: 40,
+    limitReason: 'nothing in the sky is brighter than −30 (the Sun is about −26.7) or fainter than +40',
     hint: 'In a named band, e.g. V.',
   },
   extinction: {
@@ -83,6 +97,10 @@ export const QUANTITIES = {
     units: [MAG],
     needsBand: true,
     inclusiveMin: 0,
+    // Dust only dims: extinction is never negative. About 30 mag in V towards the Galactic centre is
+    // the largest known (recalled from memory), so 100 mag is a typing error.
+    inclusiveMax: 100,
+    limitReason: 'dust only dims the light, and no line of sight is dimmed by more than 100 magnitudes',
     hint: 'Interstellar extinction in a named band; zero or more.',
   },
   spectral_index: {
@@ -92,6 +110,11 @@ export const QUANTITIES = {
     canonicalUnit: '',
     units: [DIMENSIONLESS],
     needsBand: false,
+    // Observed radio and optical spectral indices lie within about ±3 (common practice); ±10 only catches
+    // a value in the wrong field, never a real steep or inverted spectrum.
+    inclusiveMin: -10,
+    inclusiveMax: 10,
+    limitReason: 'measured spectral indices lie within about ±3, so a value beyond ±10 is a typing error',
     hint: 'α in f_ν ∝ ν^α; dimensionless.',
   },
   parallax: {
@@ -105,6 +128,11 @@ export const QUANTITIES = {
       { id: 'arcsec', label: 'arcsec', toCanonical: 1000, aliases: ['as', '″', '"'] },
       { id: 'µas', label: 'µas', toCanonical: 1e-3, aliases: ['μas', 'uas'] },
     ],
+    // Negative parallaxes are published (noise around a tiny true value) and kept. The nearest star's is
+    // about 768 mas (recalled from memory), so beyond ±1000 mas (1 arcsec) is a unit or typing error.
+    inclusiveMin: -1000,
+    inclusiveMax: 1000,
+    limitReason: 'no star has a parallax larger than 1 arcsecond (1000 mas); the nearest is about 768 mas',
     hint: 'Measured parallaxes of distant stars can be negative; keep them as published.',
   },
   distance: {
@@ -127,6 +155,10 @@ export const QUANTITIES = {
       },
       { id: 'km', label: 'km', toCanonical: 1000 / PC_M, source: PARSEC.source },
     ],
+    // A distance is a length: above zero. Past about 15,000 Mpc is beyond the observable universe
+    // (comoving radius about 14,300 Mpc, recalled from memory): 100,000 Mpc catches a wrong unit.
+    inclusiveMax: 1e11,
+    limitReason: 'a distance is above zero and within the observable universe (less than 100,000 Mpc)',
     hint: 'A measured distance (not one computed from redshift).',
   },
   radius: {
@@ -147,6 +179,8 @@ export const QUANTITIES = {
       },
       { id: 'au', label: 'au', toCanonical: ASTRONOMICAL_UNIT.value / 1000, source: ASTRONOMICAL_UNIT.source },
     ],
+    // A size is above zero.
+    limitReason: 'a radius is a size, so it is above zero',
     hint: 'Equatorial or mean radius as published.',
   },
   mass: {
@@ -173,6 +207,8 @@ export const QUANTITIES = {
         source: `${EARTH_MASS_PARAMETER.source} ÷ ${GRAVITATIONAL_CONSTANT.source} G`,
       },
     ],
+    // A mass is above zero.
+    limitReason: 'a mass is above zero',
     hint: 'Solar and Earth masses are the nominal mass parameters divided by G.',
   },
   angular_size: {
@@ -187,6 +223,9 @@ export const QUANTITIES = {
       { id: 'arcmin', label: 'arcmin', toCanonical: 60, aliases: ['′', "'"] },
       { id: 'deg', label: 'deg', toCanonical: 3600, aliases: ['°', 'degree', 'degrees'] },
     ],
+    // An apparent diameter is above zero and cannot exceed half the sky, 180° (648,000 arcsec).
+    inclusiveMax: 648_000,
+    limitReason: 'an apparent diameter is above zero and at most 180°',
     hint: 'Apparent diameter across the sky.',
   },
 } as const satisfies Record<string, QuantityDefinition>;
@@ -220,11 +259,14 @@ export function describeUnits(quantity: QuantityDefinition): string {
  */
 export function checkRange(quantity: QuantityDefinition, canonical: number): string | undefined {
   if (!Number.isFinite(canonical)) return 'The value must be a finite number.';
-  if (quantity.exclusiveMin !== undefined && !(canonical > quantity.exclusiveMin)) {
-    return `${quantity.label} must be greater than ${quantity.exclusiveMin}${quantity.canonicalUnit ? ` ${quantity.canonicalUnit}` : ''}.`;
-  }
-  if (quantity.inclusiveMin !== undefined && canonical < quantity.inclusiveMin) {
-    return `${quantity.label} cannot be less than ${quantity.inclusiveMin}${quantity.canonicalUnit ? ` ${quantity.canonicalUnit}` : ''}.`;
-  }
+  const unit = quantity.canonicalUnit ? ` ${quantity.canonicalUnit}` : '';
+  const why = quantity.limitReason ? `: ${quantity.limitReason}.` : '.';
+  const number = (n: number) => n.toLocaleString('en-GB', { maximumFractionDigits: 6 }).replace('-', '−');
+  if (quantity.exclusiveMin !== undefined && !(canonical > quantity.exclusiveMin))
+    return `${quantity.label} must be greater than ${number(quantity.exclusiveMin)}${unit}${why}`;
+  if (quantity.inclusiveMin !== undefined && canonical < quantity.inclusiveMin)
+    return `${quantity.label} cannot be less than ${number(quantity.inclusiveMin)}${unit}${why}`;
+  if (quantity.inclusiveMax !== undefined && canonical > quantity.inclusiveMax)
+    return `${quantity.label} cannot be more than ${number(quantity.inclusiveMax)}${unit}${why}`;
   return undefined;
 }

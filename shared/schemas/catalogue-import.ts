@@ -72,8 +72,20 @@ export interface ImportReport {
   rejections: ImportRejection[];
   rejectionsByReason: Partial<Record<ImportRejectionReason, number>>;
   warnings: string[];
+  /**
+   * Accepted rows whose values need a yes before they are imported (a negative parallax, a likely
+   * sign error), in file order, up to a limit; confirmationCount is always the full count. Reports
+   * stored before these existed have neither.
+   */
+  confirmations?: Array<{ row: number; message: string }>;
+  confirmationCount?: number;
   durationMs: number;
 }
+
+/** Committing a checked import: `confirm` once the rows needing confirmation have been read. */
+export const ImportCommitSchema = z.object({
+  confirm: z.boolean({ message: 'confirm must be true or false' }).optional(),
+});
 
 /** A dry run or a commit as the API shows it. */
 export interface ImportDto {
@@ -82,5 +94,8 @@ export interface ImportDto {
   report: ImportReport;
   committedAt: string | null;
   createdAt: string;
+  /** After a commit: how many measurements this import added (once, however often it was committed). */
   insertedCount?: number;
+  /** After a commit: true when an earlier commit of the same import had already added them. */
+  alreadyCommitted?: boolean;
 }

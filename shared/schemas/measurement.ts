@@ -27,6 +27,13 @@ export function readNumber(value: unknown): number | null | 'invalid' {
   return Number.isFinite(n) ? n : 'invalid';
 }
 
+/** The uncertainty fields as the form and the CSV import name them. */
+const UNCERTAINTY_LABELS = {
+  uncertainty: 'Uncertainty (±)',
+  uncertaintyMinus: 'Uncertainty minus',
+  uncertaintyPlus: 'Uncertainty plus',
+} as const;
+
 const numberish = z.union([z.string(), z.number()]).nullish();
 
 const issue = (ctx: z.RefinementCtx, path: string, message: string, reason: MeasurementProblem) =>
@@ -50,6 +57,8 @@ export const MeasurementInputSchema = z
       .nullish()
       .or(z.literal('').transform(() => null)),
     note: z.string().trim().max(CatalogueLimits.notesMax, `Notes are at most ${CatalogueLimits.notesMax} characters`).nullish(),
+    /** True once the person has read the value's warnings (a negative parallax, a likely sign error) and keeps it. */
+    confirm: z.boolean({ message: 'confirm must be true or false' }).optional(),
   })
   .transform((input, ctx) => {
     const quantity = findQuantity(input.quantity);
@@ -88,9 +97,17 @@ export const MeasurementInputSchema = z
       ['uncertaintyMinus', minus],
       ['uncertaintyPlus', plus],
     ] as const) {
-      if (v === 'invalid') issue(ctx, path, 'Uncertainties are numbers, e.g. 0.02.', 'invalid_uncertainty');
-      else if (v !== null && v < 0)
-        issue(ctx, path, 'Uncertainties are zero or more; the sign is in the field (minus or plus).', 'invalid_uncertainty');
+      const label = UNCERTAINTY_LABELS[path];
+      if (v === 'invalid') issue(ctx, path, `${label} is a number, e.g. 0.02.`, 'invalid_uncertainty');
+      // A published uncertainty is never zero; "none published" is an empty field. The sign of an
+      // asymmetric one is in the field's name (minus or plus), so the number itself is above zero.
+      else if (v !== null && !(v > 0))
+        issue(
+          ctx,
+          path,
+          `${label} must be more than zero; leave it empty when the source gives none${path === 'uncertainty' ? '' : ' (the sign is in the field: minus or plus)'}.`,
+          'invalid_uncertainty',
+        );
     }
     if (sigma !== null && (minus !== null || plus !== null))
       issue(
@@ -123,6 +140,7 @@ export const MeasurementInputSchema = z
       enteredUnit: unit.id,
       sourceId: input.sourceId ?? null,
       note: input.note ?? '',
+      confirm: input.confirm === true,
     };
   });
 export type MeasurementInput = z.input<typeof MeasurementInputSchema>;
@@ -150,9 +168,21 @@ const reason = z.string().trim().max(CatalogueLimits.reasonMax, `At most ${Catal
  */
 export const MeasurementPreferredSchema = z.object({
   preferred: z.boolean({ message: 'preferred must be true or false' }),
+  /** True once the reviewer has read which statements a negative parallax will leave without a distance. */
+  confirm: z.boolean({ message: 'confirm must be true or false' }).optional(),
   replaces: z.uuid({ message: 'replaces must be a measurement id or null' }).nullable().optional(),
 });
 export type MeasurementPreferredInput = z.infer<typeof MeasurementPreferredSchema>;
+
+/**
+ * The body of a 409 `confirmation_needed` (in the error's `current`): what to read before sending
+ * the same request again with `confirm: true`.
+ */
+export interface MeasurementConfirmationDto {
+  warnings: Array<{ code: string; message: string }>;
+  /** Statements that will no longer work out (making a negative parallax preferred). */
+  statements: Array<{ id: string; text: string }>;
+}
 
 /** A reviewer's decision on a proposed measurement; declining needs a reason. */
 export const MeasurementReviewSchema = z

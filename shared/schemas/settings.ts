@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CalcModelSchema } from './calc.ts';
+import { AdoptableModelSchema } from './cosmology-check.ts';
 import { STATEMENT_LOCALES } from '../statements/locales.ts';
 import { SKY_OBJECT_KINDS } from '../catalogue/kinds.ts';
 
@@ -26,11 +27,21 @@ export type SpectralIndexDefaults = z.infer<typeof SpectralIndexDefaultsSchema>;
 /** The organisation's range for H0 (km/s/Mpc) with where it comes from: the model's own uncertainty. */
 export const H0RangeSettingSchema = z
   .object({
-    low: z.number().positive().max(200),
-    high: z.number().positive().max(200),
-    source: z.string().trim().min(10, 'Name the source of the H0 range (10 characters or more)').max(1000),
+    low: z
+      .number({ message: 'Low end of the H0 range: write a number in km/s/Mpc, e.g. 67' })
+      .positive('Low end of the H0 range: H0 is above 0 km/s/Mpc')
+      .max(200, 'Low end of the H0 range: at most 200 km/s/Mpc (measurements give about 67 to 74)'),
+    high: z
+      .number({ message: 'High end of the H0 range: write a number in km/s/Mpc, e.g. 74' })
+      .positive('High end of the H0 range: H0 is above 0 km/s/Mpc')
+      .max(200, 'High end of the H0 range: at most 200 km/s/Mpc (measurements give about 67 to 74)'),
+    source: z
+      .string({ message: 'Source of the H0 range: name the paper or handbook it comes from' })
+      .trim()
+      .min(10, 'Source of the H0 range: name the paper or handbook it comes from (10 characters or more)')
+      .max(1000, 'Source of the H0 range: at most 1,000 characters'),
   })
-  .refine((r) => r.low < r.high, { message: 'The H0 range’s low end must be below its high end', path: ['high'] });
+  .refine((r) => r.low < r.high, { message: 'High end of the H0 range: it must be above the low end', path: ['high'] });
 export type H0Range = z.infer<typeof H0RangeSettingSchema>;
 
 export const SettingsDtoSchema = z.object({
@@ -66,13 +77,13 @@ export const SettingsUpdateSchema = z
 export type SettingsUpdateInput = z.infer<typeof SettingsUpdateSchema>;
 
 export const CosmologyChangeSchema = z.object({
-  model: CalcModelSchema,
+  model: AdoptableModelSchema,
   /** The settings version the admin previewed against; a newer one means someone else changed it. */
   expectedVersion: z.number().int().positive(),
 });
 export type CosmologyChangeInput = z.infer<typeof CosmologyChangeSchema>;
 
-export const CosmologyPreviewSchema = z.object({ model: CalcModelSchema });
+export const CosmologyPreviewSchema = z.object({ model: AdoptableModelSchema });
 export type CosmologyPreviewInput = z.infer<typeof CosmologyPreviewSchema>;
 
 /** One statement whose public text a model change would move. */

@@ -20,6 +20,7 @@ export const catalogueKeys = {
   measurements: (objectId: string) => [...catalogueKeys.object(objectId), 'measurements'] as const,
   history: (objectId: string) => [...catalogueKeys.object(objectId), 'history'] as const,
   sources: () => [...catalogueKeys.all, 'sources'] as const,
+  proposals: () => [...catalogueKeys.all, 'proposals'] as const,
 };
 
 export const skyObjectsQueryOptions = (query: Partial<SkyObjectListQuery>) =>

@@ -33,11 +33,15 @@ async function uploadForDryRun(file: File, mapping?: ImportMapping): Promise<Imp
 export const useDryRunImport = () =>
   useMutation({ mutationFn: ({ file, mapping }: { file: File; mapping?: ImportMapping }) => uploadForDryRun(file, mapping) });
 
-/** Imports every accepted row of a checked file, in one transaction. */
+/**
+ * Imports every accepted row of a checked file, in one transaction; `confirm` once the rows the dry
+ * run asked to confirm have been read. A second commit of the same import answers the first one's result.
+ */
 export function useCommitImport() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: async (id: string) => (await api.post<ApiData<ImportDto>>(`/catalogue/imports/${id}/commit`)).data,
+    mutationFn: async ({ id, confirm }: { id: string; confirm: boolean }) =>
+      (await api.post<ApiData<ImportDto>>(`/catalogue/imports/${id}/commit`, { confirm })).data,
     onSuccess: () => queryClient.invalidateQueries({ queryKey: catalogueKeys.all }),
   });
 }

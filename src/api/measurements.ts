@@ -1,12 +1,13 @@
 /** An object's measurements and their history: adding, editing, choosing the preferred one, review, retiring. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
+  MeasurementConfirmationDto,
   MeasurementDto,
   MeasurementHistoryDto,
   MeasurementInput,
   MeasurementReviewInput,
 } from '@shared/schemas/measurement.ts';
-import { api, type ApiData } from '@/lib/api-client.ts';
+import { api, ApiRequestError, type ApiData } from '@/lib/api-client.ts';
 import { queryString } from '@/lib/query-string.ts';
 import { catalogueKeys } from './catalogue-objects.ts';
 
@@ -48,12 +49,23 @@ export function useAddMeasurement(objectId: string) {
   });
 }
 
-/** Chooses (or stops choosing) a measurement as the one statements use. */
+/**
+ * What the server asks to be confirmed before it stores a value or a preferred choice (a 409
+ * `confirmation_needed`): its warnings and the statements at stake; null for any other error.
+ */
+export function confirmationOf(error: unknown): MeasurementConfirmationDto | null {
+  if (!(error instanceof ApiRequestError) || error.code !== 'confirmation_needed') return null;
+  const current = error.current as Partial<MeasurementConfirmationDto> | undefined;
+  if (!Array.isArray(current?.warnings)) return null;
+  return { warnings: current.warnings, statements: Array.isArray(current.statements) ? current.statements : [] };
+}
+
+/** Chooses (or stops choosing) a measurement as the one statements use; `confirm` after reading its warnings. */
 export function useSetPreferred(objectId: string) {
   const refresh = useRefresh(objectId);
   return useMutation({
-    mutationFn: async ({ id, preferred, replaces }: { id: string; preferred: boolean; replaces: string | null }) =>
-      (await api.put<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}/preferred`, { preferred, replaces })).data,
+    mutationFn: async ({ id, ...input }: { id: string; preferred: boolean; replaces: string | null; confirm?: boolean }) =>
+      (await api.put<ApiData<MeasurementDto>>(`/catalogue/measurements/${id}/preferred`, input)).data,
     // A refused choice (another reviewer got there first) also means the page is out of date.
     onSettled: refresh,
   });

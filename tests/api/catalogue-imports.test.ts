@@ -142,10 +142,27 @@ describe('CSV import: the commit', () => {
     const imported = await Measurement.findAll({ where: { importId: res.body.data.id } });
     expect(imported.map((m) => m.value).sort()).toEqual([1.5, 1.6]);
     expect(await MeasurementHistory.count({ where: { action: 'imported', measurementId: imported.map((m) => m.id) } })).toBe(2);
+    // A second commit of the same import adds nothing and answers the first one's result.
     const again = await agent.post(`/api/catalogue/imports/${res.body.data.id}/commit`);
-    expect(again.status).toBe(409);
-    expect(again.body.error.code).toBe('already_committed');
+    expect(again.status).toBe(200);
+    expect(again.body.data).toMatchObject({ status: 'committed', insertedCount: 2, alreadyCommitted: true });
     expect(await countAll()).toBe(before + 2);
+  });
+
+  it('commits once when two commits of one import arrive together (a double click)', async () => {
+    const before = await countAll();
+    const csv = `object,quantity,value,unit,source\nGamma, the Comma Galaxy,parallax,0.31,mas,${citation}\n`.replace(
+      'Gamma, the Comma Galaxy',
+      '"Gamma, the Comma Galaxy"',
+    );
+    const { res, agent } = await dryRun(csv);
+    expect(res.body.data.report.acceptedCount).toBe(1);
+    const url = `/api/catalogue/imports/${res.body.data.id}/commit`;
+    const answers = await Promise.all([agent.post(url), agent.post(url)]);
+    expect(answers.map((a) => a.status)).toEqual([200, 200]);
+    expect(answers.map((a) => a.body.data.insertedCount)).toEqual([1, 1]);
+    expect(answers.map((a) => a.body.data.alreadyCommitted).sort()).toEqual([false, true]);
+    expect(await countAll()).toBe(before + 1);
   });
 
   it('commits nothing when the catalogue changed since the dry run', async () => {

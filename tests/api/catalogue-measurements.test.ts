@@ -42,10 +42,10 @@ describe('measurements', () => {
       .post(url(object.id))
       .send({ quantity: 'radius', value: 2, unit: 'R_sun', uncertainty: 0.1, sourceId: source.id });
     expect(radius.body.data).toMatchObject({ value: 1_391_400, unit: 'km', uncertainty: 69_570 });
-    // 1 arcsec = 1000 mas by definition.
+    // 1 arcsec = 1000 mas by definition. A negative parallax is kept once its warning is confirmed.
     const parallax = await agent
       .post(url(object.id))
-      .send({ quantity: 'parallax', value: '−0.0012', unit: 'arcsec', sourceId: source.id });
+      .send({ quantity: 'parallax', value: '−0.0012', unit: 'arcsec', sourceId: source.id, confirm: true });
     expect(parallax.body.data.value).toBeCloseTo(-1.2, 12);
   });
 

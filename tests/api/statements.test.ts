@@ -216,6 +216,11 @@ describe('changing the adopted cosmology', () => {
       .patch('/api/settings')
       .send({ h0Range: { low: 74, high: 70, source: 'Corrie Vale demo choice (demo)' } });
     expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['h0Range.high']).toBe('High end of the H0 range: it must be above the low end');
+    const notNumber = await admin
+      .patch('/api/settings')
+      .send({ h0Range: { low: 'sixty', high: 70, source: 'Corrie Vale demo (demo)' } });
+    expect(notNumber.body.error.fields['h0Range.low']).toMatch(/^Low end of the H0 range: write a number/);
     const narrow = { low: 67.2, high: 68.2, source: 'Corrie Vale demo choice: CMB only (demo)' };
     const changed = await admin.patch('/api/settings').send({ h0Range: narrow });
     expect(changed.status).toBe(200);
@@ -247,7 +252,15 @@ describe('changing the adopted cosmology', () => {
     const { agent: admin } = await signedInAgent('admin');
     const res = await admin.post('/api/settings/cosmology/preview').send({ model: { H0: 70, Om0: 0.3, Ode0: 3 } });
     expect(res.status).toBe(400);
-    expect(res.body.error.code).toBe('invalid_model');
+    // The field at fault, in words a staff member reads (not "E(z)² ≤ 0").
+    expect(res.body.error.code).toBe('invalid_input');
+    expect(res.body.error.fields['model.Ode0']).toMatch(/^With this much dark energy \(ΩΛ = 3\).*it had no big bang/);
+    expect(res.body.error.fields['model.Ode0']).not.toMatch(/E\(z\)/);
+    const flat = await admin.post('/api/settings/cosmology/preview').send({ model: { H0: 70, Om0: 1.4 } });
+    expect(flat.body.error.fields['model.Om0']).toMatch(/In a flat model the shares add up to 1/);
+    const change = await admin.put('/api/settings/cosmology').send({ model: { H0: 900, Om0: 0.3 }, expectedVersion: 1 });
+    expect(change.status).toBe(400);
+    expect(change.body.error.fields['model.H0']).toMatch(/^H0 is the expansion rate today/);
     const { agent: editor } = await signedInAgent('editor');
     expect((await editor.post('/api/settings/cosmology/preview').send({ model: { preset: 'wmap9' } })).status).toBe(403);
     expect((await editor.put('/api/settings/cosmology').send({ model: { preset: 'wmap9' }, expectedVersion: 1 })).status).toBe(

@@ -114,7 +114,7 @@ async function benchImport() {
 
   const [, parseOnly] = await time(() => parse(buffer.toString('utf8'), { delimiter: ',' }));
   const [checked, dryRun] = await time(() => checkCatalogueImport({ buffer, originalname: 'bench.csv' }, undefined, user));
-  const [committed, commit] = await time(() => commitCatalogueImport(checked.id, user));
+  const [committed, commit] = await time(() => commitCatalogueImport(checked.id, user, { confirm: true }));
   // A logged table like measurements with its indexes (LIKE copies no foreign keys); dropped at the end.
   await sql.query(
     'CREATE TABLE peer_measurements (LIKE measurements INCLUDING DEFAULTS INCLUDING INDEXES INCLUDING CONSTRAINTS)',

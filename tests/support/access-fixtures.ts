@@ -58,8 +58,14 @@ export async function buildAccessWorld() {
     .post('/api/catalogue/imports')
     .attach('file', Buffer.from('object,quantity,value\nNo Such Object (demo),redshift,0.2\n', 'utf8'), 'access-matrix.csv');
   if (checked.status !== 201) throw new Error(`import: ${JSON.stringify(checked.body)}`);
+  // A source proposed by a writer who is not among the callers, for the review route.
+  const proposal = await owner.agent
+    .post('/api/catalogue/proposals/sources')
+    .send({ citation: 'Access matrix proposed source (invented)', url: 'https://example.test/access-matrix' });
+  if (proposal.status !== 201) throw new Error(`proposal: ${JSON.stringify(proposal.body)}`);
   const ids: Record<string, string> = {
     import: checked.body.data.id,
+    proposal: proposal.body.data.id,
     page: page.id,
     reviewPage: inReview.id,
     slide: slide.body.data.slides[0].id,
@@ -90,6 +96,7 @@ export function fillPath(template: string, ids: Record<string, string>): string 
     [/^\/api\/venues\/:id/, ids.venue],
     [/^\/api\/channels\/:id/, ids.channel],
     [/^\/api\/catalogue\/imports\/:id/, ids.import],
+    [/^\/api\/catalogue\/proposals\/:id/, ids.proposal],
   ];
   let path = template;
   for (const [re, id] of byPrefix) if (re.test(path)) path = path.replace(':id', id);
@@ -164,6 +171,19 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'DELETE /api/catalogue/measurements/:id': { query: 'reason=Superseded+by+a+newer+value' },
     'POST /api/catalogue/sources': { body: { citation: `Access matrix source ${randomUUID().slice(0, 8)}` } },
     'PATCH /api/catalogue/sources/:id': { body: { citation: 'Access matrix test values (invented)' } },
+    'POST /api/catalogue/proposals/objects': {
+      body: {
+        name: `Access matrix proposed object ${randomUUID().slice(0, 8)}`,
+        kind: 'galaxy',
+        ra: '12 29 06.7',
+        dec: '+02 03 09',
+        sourceId: ids.source,
+      },
+    },
+    'POST /api/catalogue/proposals/sources': {
+      body: { citation: `Access matrix proposed source ${randomUUID().slice(0, 8)}`, url: 'https://example.test/proposed' },
+    },
+    'POST /api/catalogue/proposals/:id/review': { body: { decision: 'decline', reason: 'Access matrix check.' } },
     'POST /api/venues': {
       body: {
         name: `Access matrix venue ${randomUUID().slice(0, 8)}`,

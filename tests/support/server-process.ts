@@ -25,12 +25,13 @@ export interface ServerProcess {
  * "ready" line (the start-up sweep has run by then).
  * @param env DATABASE_URL, UPLOADS_DIR and anything else; NODE_ENV, PORT, HOST and the mail port are set here
  * @param options.port the port to listen on (default: a free one)
- * @param options.timeoutMs how long to wait for "ready" before killing it (default 60 s)
+ * @param options.timeoutMs how long to wait for "ready" before killing it (default 60 s, or
+ *   STARPROOF_E2E_START_TIMEOUT_MS on a machine shared by several test runs)
  * @param options.onSpawn told of the process at once, so a caller can stop it even if it never gets ready
  */
 export async function startServerProcess(
   env: Record<string, string>,
-  { port = 0, timeoutMs = 60_000, onSpawn }: { port?: number; timeoutMs?: number; onSpawn?: (child: ChildProcess) => void } = {},
+  { port = 0, timeoutMs = Number(process.env.STARPROOF_E2E_START_TIMEOUT_MS) || 60_000, onSpawn }: { port?: number; timeoutMs?: number; onSpawn?: (child: ChildProcess) => void } = {},
 ): Promise<ServerProcess> {
   port ||= await freePort();
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {

@@ -1,10 +1,11 @@
 import { Router, type RequestHandler } from 'express';
 import multer from 'multer';
 import { z } from 'zod';
-import { ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-import.ts';
+import { ImportCommitSchema, ImportMappingSchema, type ImportDto } from '@shared/schemas/catalogue-import.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
+import { validate } from '../../middlewares/validate.ts';
 import type { CatalogueImport } from '../../models/index.ts';
 import { authorize } from '../../policies/index.ts';
 import { commitCatalogueImport, checkCatalogueImport } from '../../services/catalogue/index.ts';
@@ -42,13 +43,13 @@ const receiveFile: RequestHandler = (req, res, next) => {
   });
 };
 
-const present = (record: CatalogueImport, insertedCount?: number): ImportDto => ({
+const present = (record: CatalogueImport, commit?: { inserted: number; alreadyCommitted: boolean }): ImportDto => ({
   id: record.id,
   status: record.status,
   report: record.report,
   committedAt: record.committedAt?.toISOString() ?? null,
   createdAt: record.createdAt.toISOString(),
-  ...(insertedCount === undefined ? {} : { insertedCount }),
+  ...(commit === undefined ? {} : { insertedCount: commit.inserted, alreadyCommitted: commit.alreadyCommitted }),
 });
 
 export const importsRouter = Router();
@@ -83,10 +84,10 @@ importsRouter.get('/:id', async (req, res) => {
   res.json({ data: present(record) });
 });
 
-importsRouter.post('/:id/commit', async (req, res) => {
+importsRouter.post('/:id/commit', validate(ImportCommitSchema), async (req, res) => {
   const viewer = currentUser(req);
   const { id } = await loadImport(req.params.id);
   authorize(viewer, 'catalogue', 'import');
-  const { record, inserted } = await commitCatalogueImport(id, viewer, req.ip);
-  res.json({ data: present(record, inserted) });
+  const { record, ...commit } = await commitCatalogueImport(id, viewer, { confirm: req.body.confirm === true, ip: req.ip });
+  res.json({ data: present(record, commit) });
 });

@@ -2,7 +2,8 @@ import type { ImportMapping, ImportRejection, ImportRejectionReason, ImportRepor
 import { MeasurementInputSchema, type MeasurementProblem } from '@shared/schemas/measurement.ts';
 import { CatalogueLimits } from '@shared/validations.ts';
 import { getSequelize } from '../../db.ts';
-import { CatalogueImport, type User } from '../../models/index.ts';
+import { parallaxWarnings } from '@shared/catalogue/measurement-warnings.ts';
+import { CatalogueImport, Measurement, type User } from '../../models/index.ts';
 import type { AcceptedImportRow } from '../../models/catalogue-import.ts';
 import { decodeCsv } from './csv-decode.ts';
 import { ROWS_PER_SLICE, readCsvRows, yieldToEventLoop, type CsvRow } from './csv-rows.ts';
@@ -129,6 +130,7 @@ export async function checkCatalogueImport(
     return false;
   });
   rejections.sort((a, b) => a.row - b.row);
+  const confirmations = await confirmationsFor(accepted);
 
   const report: ImportReport = {
     fileName: file.originalname,
@@ -143,10 +145,39 @@ export async function checkCatalogueImport(
     rejections: rejections.slice(0, CatalogueLimits.importReportedRejectionsMax),
     rejectionsByReason: byReason,
     warnings: warningsFor(decoded.delimiter, rejections.length),
+    confirmations: confirmations.slice(0, CatalogueLimits.importReportedRejectionsMax),
+    confirmationCount: confirmations.length,
     durationMs: 0,
   };
   report.durationMs = Math.round(performance.now() - started);
   return storeCheckedImport(actor.id, file.originalname.slice(0, 255), report, accepted);
+}
+
+/**
+ * The accepted rows whose values need a yes before import: each parallax, compared with the
+ * object's accepted parallaxes, gets the same warnings as in the measurement form.
+ */
+async function confirmationsFor(accepted: AcceptedImportRow[]): Promise<Array<{ row: number; message: string }>> {
+  const parallaxes = accepted.filter((r) => r.quantity === 'parallax');
+  if (parallaxes.length === 0) return [];
+  const published = await Measurement.findAll({
+    where: {
+      skyObjectId: [...new Set(parallaxes.map((r) => r.objectId))],
+      quantity: 'parallax',
+      status: 'accepted',
+      retiredAt: null,
+    },
+    attributes: ['skyObjectId', 'value', 'uncertainty'],
+  });
+  const byObject = new Map<string, Array<{ value: number; uncertainty: number | null }>>();
+  for (const m of published) byObject.set(m.skyObjectId, [...(byObject.get(m.skyObjectId) ?? []), m]);
+  return parallaxes.flatMap((r) => {
+    const sigma =
+      r.uncertainty ??
+      (r.uncertaintyMinus !== null && r.uncertaintyPlus !== null ? Math.max(r.uncertaintyMinus, r.uncertaintyPlus) : null);
+    const warnings = parallaxWarnings(r.value, sigma, byObject.get(r.objectId) ?? []);
+    return warnings.length === 0 ? [] : [{ row: r.row, message: warnings.map((w) => w.message).join(' ') }];
+  });
 }
 
 /**

@@ -1,27 +1,40 @@
 import { ForeignKeyConstraintError, QueryTypes } from 'sequelize';
 import { allowLongStatements, getSequelize } from '../../db.ts';
 import { ConflictError, NotFoundError } from '../../errors.ts';
-import { CatalogueImport, type User } from '../../models/index.ts';
+import { CatalogueImport, Measurement, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 
 const RECORDSET = `jsonb_to_recordset(ci.accepted_rows) AS r(
   "objectId" uuid, quantity text, band text, value float8, uncertainty float8, "uncertaintyMinus" float8,
   "uncertaintyPlus" float8, "enteredValue" float8, "enteredUnit" text, "sourceId" uuid, note text)`;
 
+/** What a commit did: the import, how many measurements it added, and whether an earlier commit already had. */
+interface CommitOutcome {
+  record: CatalogueImport;
+  inserted: number;
+  alreadyCommitted: boolean;
+}
+
 /**
  * Commits a checked import: every accepted row becomes a measurement, with a history row each, in
  * one transaction, or nothing does. Refused if the catalogue changed since the dry run so that a
  * row would now duplicate a measurement, or an object or source has been deleted.
- * @returns the import and how many measurements were inserted
- * @throws HttpError 404 when there is no such import, 409 (already_committed, catalogue_changed)
+ *
+ * One commit per import: a second commit (a double click, a retried request) waits for the first
+ * on the import's row lock and answers the first one's result, adding nothing.
+ * @returns the import, how many measurements it added, and whether it had been committed before
+ * @param options.confirm true once the rows the dry run asked to confirm have been read
+ * @throws HttpError 404 when there is no such import, 409 (catalogue_changed, confirmation_needed)
  */
 export async function commitCatalogueImport(
   importId: string,
   actor: User,
-  ip?: string,
-): Promise<{ record: CatalogueImport; inserted: number }> {
+  options: { confirm: boolean; ip?: string },
+): Promise<CommitOutcome> {
+  const { ip } = options;
   const sequelize = getSequelize();
   let inserted = 0;
+  let alreadyCommitted = false;
   try {
     const record = await sequelize.transaction(async (transaction) => {
       // A bulk commit of up to 100,000 rows may outlast the limit meant for ordinary requests.
@@ -33,8 +46,17 @@ export async function commitCatalogueImport(
         lock: transaction.LOCK.UPDATE,
       });
       if (!record) throw NotFoundError('There is no import with that id; upload the file again.');
-      if (record.status === 'committed')
-        throw ConflictError('This file has already been imported; nothing was added twice.', 'already_committed');
+      if (record.status === 'committed') {
+        alreadyCommitted = true;
+        inserted = await Measurement.count({ where: { importId }, transaction });
+        return record;
+      }
+      const needing = record.report.confirmationCount ?? 0;
+      if (needing > 0 && !options.confirm)
+        throw ConflictError(
+          `${needing} row${needing === 1 ? ' needs' : 's need'} a second look (a negative parallax, a likely sign error): read the warnings in the dry run and confirm them. Nothing was imported.`,
+          'confirmation_needed',
+        );
 
       const [{ duplicates }] = await sequelize.query<{ duplicates: string }>(
         `SELECT count(*) AS duplicates FROM catalogue_imports ci, ${RECORDSET}
@@ -87,7 +109,7 @@ export async function commitCatalogueImport(
     // No events: imported measurements are new and never preferred, so nothing that listens
     // (statements use preferred values only) can depend on them yet, and 50,000 events would
     // flood the listeners' job queue. Choosing one as preferred later emits preferredChanged.
-    return { record, inserted };
+    return { record, inserted, alreadyCommitted };
   } catch (error) {
     if (error instanceof ForeignKeyConstraintError) {
       throw ConflictError(

@@ -7,6 +7,8 @@ export { checkCatalogueImport } from './catalogue-import-check.ts';
 export { commitCatalogueImport } from './catalogue-import-commit.ts';
 export { catalogueEvents } from './events.ts';
 export { reviewMeasurement } from './measurement-review.ts';
+export { findProposal, listProposals } from './proposal-list.ts';
+export { proposeSkyObject, proposeSource, reviewProposal } from './proposal-write.ts';
 export { createMeasurement, retireMeasurement, updateMeasurement } from './measurement-write.ts';
 export { getPreferredMeasurements, type PreferredMeasurement } from './preferred-read.ts';
 export { setPreferred } from './preferred-write.ts';

@@ -4,6 +4,7 @@ import { ConflictError, ValidationError } from '../../errors.ts';
 import { Measurement, Source, type SkyObject, type User } from '../../models/index.ts';
 import { catalogueEvents } from './events.ts';
 import { isPreferredIndexViolation } from './preferred-write.ts';
+import { requireConfirmation, warningsForValue } from './measurement-confirmation.ts';
 import { changedFields, recordMeasurementHistory, snapshotMeasurement } from './measurement-history-write.ts';
 
 async function checkSource(sourceId: string | null): Promise<void> {
@@ -13,7 +14,7 @@ async function checkSource(sourceId: string | null): Promise<void> {
 
 /**
  * Adds a measurement to an object. A reviewer's or admin's entry is accepted at once; a writer's or
- * editor's is a proposal waiting for review.
+ * editor's is a proposal waiting for review, and must cite a source.
  * @param object the object measured
  * @param values the parsed input, in canonical units
  * @param actor who enters it
@@ -22,11 +23,20 @@ async function checkSource(sourceId: string | null): Promise<void> {
  */
 export async function createMeasurement(
   object: SkyObject,
-  values: MeasurementValues,
+  { confirm, ...values }: MeasurementValues,
   actor: User,
   asProposal: boolean,
 ): Promise<Measurement> {
+  // A reviewer checks a proposal against its source, so a proposal without one cannot be checked.
+  if (asProposal && !values.sourceId)
+    throw ValidationError(
+      'Choose the source this value comes from: a proposed measurement needs one, so a reviewer can check it.',
+      {
+        sourceId: 'Source: a proposed measurement needs the source its value comes from.',
+      },
+    );
   await checkSource(values.sourceId);
+  requireConfirmation(confirm, await warningsForValue(object.id, values));
   const measurement = await getSequelize().transaction(async (transaction) => {
     const m = await Measurement.create(
       { ...values, skyObjectId: object.id, createdById: actor.id, status: asProposal ? 'proposed' : 'accepted' },
@@ -47,15 +57,18 @@ export async function createMeasurement(
 /**
  * Changes a measurement's value, unit, uncertainty, band, source or note, keeping the old values in
  * its history. The quantity cannot change (retire and add a new one instead).
- * @throws HttpError 400 when the quantity differs; 409 when it was retired meanwhile or a preferred value would lose its source
+ * @throws HttpError 400 when the quantity differs; 409 when it was retired meanwhile, a preferred value would
+ * lose its source, or the value's warnings (a negative parallax, a likely sign error) are not confirmed
  */
 export async function updateMeasurement(
   measurementId: string,
-  values: MeasurementValues,
+  { confirm, ...values }: MeasurementValues,
   actor: User,
   reason: string | null,
 ): Promise<Measurement> {
   await checkSource(values.sourceId);
+  const existing = await Measurement.findByPk(measurementId, { attributes: ['skyObjectId'] });
+  if (existing) requireConfirmation(confirm, await warningsForValue(existing.skyObjectId, values, measurementId));
   return getSequelize().transaction(async (transaction) => {
     const m = await Measurement.findByPk(measurementId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!m || m.retiredAt) throw ConflictError('This measurement has been retired meanwhile; reload the page.', 'retired');

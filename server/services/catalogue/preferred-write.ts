@@ -5,6 +5,7 @@ import { getSequelize } from '../../db.ts';
 import { ConflictError } from '../../errors.ts';
 import { Measurement, type User } from '../../models/index.ts';
 import { catalogueEvents } from './events.ts';
+import { requireConfirmation, statementsUsingParallax } from './measurement-confirmation.ts';
 import { changedFields, recordMeasurementHistory, snapshotMeasurement } from './measurement-history-write.ts';
 
 /** True when an error is the database refusing a second preferred value for one quantity and band. */
@@ -37,13 +38,40 @@ async function setFlag(m: Measurement, preferred: boolean, actor: User, transact
 }
 
 /**
+ * A parallax of zero or below gives no distance: before it is made preferred, the reviewer reads
+ * which statements will no longer work out, and confirms.
+ * @throws HttpError 409 `confirmation_needed` until confirmed
+ */
+async function confirmNegativeParallax(measurementId: string, input: MeasurementPreferredInput): Promise<void> {
+  if (!input.preferred || input.confirm) return;
+  const m = await Measurement.findByPk(measurementId, { attributes: ['id', 'skyObjectId', 'quantity', 'value', 'preferred'] });
+  if (m?.quantity !== 'parallax' || m.value > 0 || m.preferred) return;
+  const statements = await statementsUsingParallax(m.skyObjectId);
+  const count = statements.length;
+  requireConfirmation(
+    false,
+    [
+      {
+        code: 'negative_parallax',
+        message:
+          count === 0
+            ? 'This parallax is zero or below, so it gives no distance. No statement of this object uses a parallax today; any added later cannot work out a distance from it.'
+            : `This parallax is zero or below, so it gives no distance. Made preferred, it leaves ${count} statement${count === 1 ? '' : 's'} of this object without a distance (shown as broken until another parallax is preferred).`,
+      },
+    ],
+    statements,
+  );
+}
+
+/**
  * Marks a measurement as the preferred one for its object, quantity and band (unmarking the one it
  * replaces), or unmarks it. When `replaces` is given and the current preferred measurement is not
  * that one, another reviewer got there first: 409. Two simultaneous requests that both pass that
  * check meet the database's partial unique index, and the later one also gets 409.
- * @throws HttpError 409 (preferred_changed, needs_source, retired, not_accepted)
+ * @throws HttpError 409 (preferred_changed, needs_source, retired, not_accepted, confirmation_needed)
  */
 export async function setPreferred(measurementId: string, input: MeasurementPreferredInput, actor: User): Promise<Measurement> {
+  await confirmNegativeParallax(measurementId, input);
   try {
     return await getSequelize().transaction(async (transaction) => {
       const m = await Measurement.findByPk(measurementId, { transaction, lock: transaction.LOCK.UPDATE });

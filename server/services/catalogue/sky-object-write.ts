@@ -1,4 +1,4 @@
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { constellationAt } from '@shared/catalogue/constellations.ts';
 import type { SkyObjectValues } from '@shared/schemas/sky-object.ts';
 import { getSequelize } from '../../db.ts';
@@ -12,8 +12,13 @@ const withConstellation = (values: SkyObjectValues) => ({
   constellation: values.raDeg !== null && values.decDeg !== null ? constellationAt(values.raDeg, values.decDeg) : null,
 });
 
-async function assertNameFree(name: string, exceptId?: string): Promise<void> {
+/**
+ * Refuses a name another object has (ignoring case).
+ * @throws HttpError 409 `name_taken`
+ */
+export async function assertNameFree(name: string, exceptId?: string, transaction?: Transaction): Promise<void> {
   const clash = await SkyObject.findOne({
+    transaction,
     where: {
       [Op.and]: [
         getSequelize().where(getSequelize().fn('lower', getSequelize().col('name')), name.toLowerCase()),
@@ -26,11 +31,18 @@ async function assertNameFree(name: string, exceptId?: string): Promise<void> {
 
 /**
  * Adds an object; its constellation is computed from the position.
+ * @param within the caller's transaction (accepting a proposal), or none for one of its own
  * @throws HttpError 409 when the name is taken (names are unique, ignoring case)
  */
-export async function createSkyObject(values: SkyObjectValues, actor: User, ip?: string): Promise<SkyObject> {
-  await assertNameFree(values.name);
-  return getSequelize().transaction(async (transaction) => {
+export async function createSkyObject(
+  values: SkyObjectValues,
+  actor: User,
+  ip?: string,
+  within?: Transaction,
+): Promise<SkyObject> {
+  await assertNameFree(values.name, undefined, within);
+  const run = <T>(work: (t: Transaction) => Promise<T>) => (within ? work(within) : getSequelize().transaction(work));
+  return run(async (transaction) => {
     const object = await SkyObject.create({ ...withConstellation(values), createdById: actor.id }, { transaction });
     await recordAudit(
       {

@@ -1,4 +1,4 @@
-import { QueryTypes } from 'sequelize';
+import { QueryTypes, type Transaction } from 'sequelize';
 import type { SourceValues } from '@shared/schemas/source.ts';
 import { getSequelize } from '../../db.ts';
 import { ConflictError } from '../../errors.ts';
@@ -8,12 +8,15 @@ import { catalogueEvents } from './events.ts';
 
 const sql = () => getSequelize();
 
-/** Citation, bibcode and DOI each identify one source (CSV rows name sources by them). */
-async function assertUnique(values: SourceValues, exceptId?: string): Promise<void> {
+/**
+ * Citation, bibcode and DOI each identify one source (CSV rows name sources by them).
+ * @throws HttpError 409 `source_exists`
+ */
+export async function assertUnique(values: SourceValues, exceptId?: string, transaction?: Transaction): Promise<void> {
   const [clash] = await sql().query<{ citation: string; bibcode: string | null }>(
     `SELECT citation, bibcode FROM sources
      WHERE (lower(citation) = lower($1) OR bibcode = $2 OR lower(doi) = lower($3)) AND ($4::uuid IS NULL OR id <> $4) LIMIT 1`,
-    { type: QueryTypes.SELECT, bind: [values.citation, values.bibcode, values.doi, exceptId ?? null] },
+    { type: QueryTypes.SELECT, bind: [values.citation, values.bibcode, values.doi, exceptId ?? null], transaction },
   );
   if (!clash) return;
   const what =
@@ -27,11 +30,13 @@ async function assertUnique(values: SourceValues, exceptId?: string): Promise<vo
 
 /**
  * Adds a source.
+ * @param within the caller's transaction (accepting a proposal), or none for one of its own
  * @throws HttpError 409 when its citation, bibcode or DOI is already used
  */
-export async function createSource(values: SourceValues, actor: User, ip?: string): Promise<Source> {
-  await assertUnique(values);
-  return sql().transaction(async (transaction) => {
+export async function createSource(values: SourceValues, actor: User, ip?: string, within?: Transaction): Promise<Source> {
+  await assertUnique(values, undefined, within);
+  const run = <T>(work: (t: Transaction) => Promise<T>) => (within ? work(within) : sql().transaction(work));
+  return run(async (transaction) => {
     const source = await Source.create({ ...values, createdById: actor.id }, { transaction });
     await recordAudit(
       {

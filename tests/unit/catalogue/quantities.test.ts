@@ -28,7 +28,7 @@ describe('quantities and their units', () => {
   });
 
   it('keeps values in their physical range', () => {
-    expect(checkRange(QUANTITIES.redshift, -1)).toMatch(/greater than -1/);
+    expect(checkRange(QUANTITIES.redshift, -1)).toMatch(/Redshift must be greater than −1: 1 \+ z is a ratio of wavelengths/);
     expect(checkRange(QUANTITIES.redshift, -0.001)).toBeUndefined();
     expect(checkRange(QUANTITIES.extinction, -0.1)).toMatch(/cannot be less than 0/);
     expect(checkRange(QUANTITIES.parallax, -0.3)).toBeUndefined();

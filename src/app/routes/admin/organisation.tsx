@@ -8,8 +8,10 @@ import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { CosmologyPreviewTable } from '@/features/settings/components/cosmology-preview-table.tsx';
+import { H0RangeForm } from '@/features/settings/components/h0-range-form.tsx';
 import { ModelChooser } from '@/features/settings/components/model-chooser.tsx';
 import { SpectralIndexDefaultsForm } from '@/features/settings/components/spectral-index-defaults.tsx';
+import { ApiRequestError } from '@/lib/api-client.ts';
 
 /** Organisation defaults: the adopted cosmology (previewed before switching), band, locale, eye-safety notice. */
 export function Component() {
@@ -22,6 +24,9 @@ export function Component() {
   if (settings.isPending) return <p className="text-sm text-muted">Loading…</p>;
   if (settings.error) return <Notice tone="error">{settings.error.message}</Notice>;
   const s = settings.data;
+  // The server checks the model with the same shared schema; its field messages go on the fields.
+  const modelError = [preview.error, change.error].find((e) => e instanceof ApiRequestError && e.fields);
+  const serverErrors = modelError instanceof ApiRequestError ? modelError.fields : undefined;
 
   return (
     <>
@@ -38,16 +43,18 @@ export function Component() {
             Now: <strong>{s.cosmologyLabel}</strong>
           </p>
           <ModelChooser
+            serverErrors={serverErrors}
             onChange={(m) => {
               setModel(m);
               preview.reset();
               change.reset();
             }}
           />
-          <div className="flex gap-2">
+          <div className="flex flex-wrap items-center gap-2">
             <Button variant="secondary" disabled={!model} busy={preview.isPending} onClick={() => model && preview.mutate(model)}>
               Preview the change
             </Button>
+            {!model && <span className="text-sm text-broken">Correct the field marked above to preview this model.</span>}
             {preview.data && model && (
               <Button
                 busy={change.isPending}
@@ -59,8 +66,8 @@ export function Component() {
               </Button>
             )}
           </div>
-          {preview.error && <Notice tone="error">{preview.error.message}</Notice>}
-          {change.error && <Notice tone="error">{change.error.message}</Notice>}
+          {preview.error && !serverErrors && <Notice tone="error">{preview.error.message}</Notice>}
+          {change.error && !serverErrors && <Notice tone="error">{change.error.message}</Notice>}
           {change.isSuccess && (
             <Notice tone="success">
               Switched. Every statement is being recomputed in the background; changed wording waits for a reviewer.
@@ -134,6 +141,17 @@ export function Component() {
               Save defaults
             </Button>
           </form>
+        </section>
+
+        <section aria-labelledby="h0-range-heading" className="space-y-4 rounded-lg border border-rule bg-panel p-6">
+          <h2 id="h0-range-heading" className="text-lg font-semibold">
+            H0 range (the cosmology’s own uncertainty)
+          </h2>
+          <p className="text-sm text-muted">
+            Measurements of the expansion rate today disagree a little; distances worked out from a redshift carry that spread as
+            their model uncertainty. Give the range of H0 your organisation accepts, with where it comes from.
+          </p>
+          <H0RangeForm settings={s} />
         </section>
 
         <section aria-labelledby="spectral-heading" className="space-y-4 rounded-lg border border-rule bg-panel p-6">

@@ -12,6 +12,7 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { CatalogueTable } from '@/features/catalogue/components/catalogue-table.tsx';
 import { ObjectForm } from '@/features/catalogue/components/object-form.tsx';
+import { ProposalList } from '@/features/catalogue/components/proposal-list.tsx';
 import { useCurrentUser } from '@/lib/auth.tsx';
 import { searchParams } from '@/lib/query-string.ts';
 import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
@@ -58,6 +59,7 @@ export function Component() {
   const adding = useFormOpener();
   const objects = useSkyObjects(query);
   const keeper = user.role === 'reviewer' || user.role === 'admin';
+  const [proposed, setProposed] = useState<string | null>(null);
 
   // Searching waits for a pause in typing rather than asking the server at every key.
   const settledSearch = useDebouncedValue(search, 300);
@@ -87,17 +89,48 @@ export function Component() {
                 Import CSV
               </Link>
             )}
-            {keeper && !adding.open && (
-              <Button ref={adding.openerRef} onClick={adding.show}>
+            {!adding.open && (
+              <Button
+                ref={adding.openerRef}
+                onClick={() => {
+                  setProposed(null);
+                  adding.show();
+                }}
+              >
                 <Icon name="plus" className="size-4" />
-                Add object
+                {keeper ? 'Add object' : 'Propose an object'}
               </Button>
             )}
           </>
         }
       />
       <div className="space-y-4">
-        {adding.open && <ObjectForm onDone={(o) => navigate(paths.catalogueObject.href(o.id))} onCancel={adding.close} />}
+        {!keeper && (
+          <p className="text-sm text-muted">
+            Reviewers and admins add objects and import CSV files. As {user.role === 'editor' ? 'an editor' : 'a writer'}, you
+            propose an object with the source it comes from, and a reviewer accepts or declines it.
+          </p>
+        )}
+        {proposed && (
+          <Notice tone="success" title="Proposed">
+            “{proposed}” is waiting for a reviewer. It joins the catalogue when a reviewer or an admin accepts it.
+          </Notice>
+        )}
+        {adding.open && (
+          <ObjectForm
+            onDone={(o) => navigate(paths.catalogueObject.href(o.id))}
+            onProposed={
+              keeper
+                ? undefined
+                : (title) => {
+                    setProposed(title);
+                    adding.close();
+                  }
+            }
+            onCancel={adding.close}
+          />
+        )}
+        <ProposalList kind="object" reviewer={keeper} />
         <search className="flex flex-wrap items-end gap-3" aria-label="Filter the catalogue">
           <label className="text-sm">
             <span className="mb-1 block font-medium">Search</span>

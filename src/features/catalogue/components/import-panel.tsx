@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { IMPORT_FIELD_LABELS, IMPORT_FIELDS, type ImportDto, type ImportMapping } from '@shared/schemas/catalogue-import.ts';
 import { useCommitImport, useDryRunImport } from '@/api/imports.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -15,6 +15,15 @@ export function ImportPanel() {
   const [mapping, setMapping] = useState<ImportMapping>({});
   const dryRun = useDryRunImport();
   const commit = useCommitImport();
+  // Rows the dry run asks to confirm (a negative parallax, a likely sign error) need a yes first.
+  const [confirmed, setConfirmed] = useState(false);
+  // One commit per dry run: a second click before React re-renders the busy button sends nothing.
+  const committing = useRef<string | null>(null);
+  const runCommit = (id: string) => {
+    if (committing.current === id) return;
+    committing.current = id;
+    commit.mutate({ id, confirm: confirmed }, { onError: () => (committing.current = null) });
+  };
 
   const check = (withMapping?: ImportMapping) => {
     if (!file) return;
@@ -23,6 +32,7 @@ export function ImportPanel() {
       { file, mapping: withMapping },
       {
         onSuccess: (result) => {
+          setConfirmed(false);
           setChecked(result);
           setMapping(result.report.mapping);
         },
@@ -94,17 +104,13 @@ export function ImportPanel() {
           </fieldset>
           <ImportReport report={checked.report} />
           {commit.error && (
-            <Notice tone="error" title="Nothing was imported">
+            <Notice tone="error" title="The import did not go through">
               {commit.error.message}
             </Notice>
           )}
           <div className="flex items-center gap-3">
-            <Button
-              onClick={() => commit.mutate(checked.id)}
-              disabled={checked.report.acceptedCount === 0}
-              busy={commit.isPending}
-            >
-              Import {checked.report.acceptedCount.toLocaleString()} rows
+            <Button onClick={() => runCommit(checked.id)} disabled={checked.report.acceptedCount === 0} busy={commit.isPending}>
+              {commit.isPending ? 'Importing…' : `Import ${checked.report.acceptedCount.toLocaleString()} rows`}
             </Button>
             {checked.report.rejectedCount > 0 && (
               <span className="text-sm text-muted">Rejected rows are left out; fix them in the file and import them later.</span>
@@ -115,8 +121,9 @@ export function ImportPanel() {
 
       {commit.isSuccess && (
         <Notice tone="success" title="Imported">
-          {commit.data.insertedCount?.toLocaleString()} measurements were added, each with its history. None is preferred yet:
-          choose preferred values on each object’s page.
+          {commit.data.insertedCount?.toLocaleString()} measurements were added from {commit.data.report.fileName}, each with its
+          history{commit.data.alreadyCommitted ? ' (this file had already been imported once; nothing was added twice)' : ''}.
+          None is preferred yet: choose preferred values on each object’s page.
         </Notice>
       )}
     </div>

@@ -43,6 +43,16 @@ export function ImportReport({ report }: { report: Report }) {
           {w}
         </p>
       ))}
+      {(report.confirmationCount ?? 0) > 0 && (
+        <DataTable caption="Rows to confirm before importing" columns={[{ label: 'Row' }, { label: 'What to check' }]}>
+          {(report.confirmations ?? []).map((c) => (
+            <tr key={c.row} className="border-b border-rule last:border-0">
+              <td className="px-4 py-1.5 tabular-nums">{c.row}</td>
+              <td className="px-4 py-1.5">{c.message}</td>
+            </tr>
+          ))}
+        </DataTable>
+      )}
       {report.rejectedCount > 0 && (
         <DataTable caption="Rejected rows" columns={[{ label: 'Row' }, { label: 'Reason' }, { label: 'What to fix' }]}>
           {report.rejections.map((r) => (

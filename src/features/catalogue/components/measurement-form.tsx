@@ -2,14 +2,23 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm, type Resolver } from 'react-hook-form';
 import { KNOWN_BANDS } from '@shared/catalogue/bands.ts';
-import { findQuantity, QUANTITIES, QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
-import { MeasurementInputSchema, type MeasurementFormValues, type MeasurementValues } from '@shared/schemas/measurement.ts';
-import { useAddMeasurement } from '@/api/measurements.ts';
+import { parallaxWarnings } from '@shared/catalogue/measurement-warnings.ts';
+import { findQuantity, findUnit, QUANTITIES, QUANTITY_IDS } from '@shared/catalogue/quantities.ts';
+import {
+  MeasurementInputSchema,
+  readNumber,
+  type MeasurementConfirmationDto,
+  type MeasurementFormValues,
+  type MeasurementInput,
+  type MeasurementValues,
+} from '@shared/schemas/measurement.ts';
+import { confirmationOf, useAddMeasurement } from '@/api/measurements.ts';
 import { useSources } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { applyServerErrors } from '@/lib/form-errors.ts';
+import { ConfirmWarnings } from './confirm-warnings.tsx';
 
 const FIELDS = [
   'quantity',
@@ -30,6 +39,8 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
   const add = useAddMeasurement(objectId);
   const sources = useSources();
   const [formError, setFormError] = useState<string>();
+  // The server's warnings for what was sent (a negative parallax, a likely sign error), waiting for a yes.
+  const [pending, setPending] = useState<{ input: MeasurementInput; confirmation: MeasurementConfirmationDto } | null>(null);
   const { register, handleSubmit, setError, watch, getValues, setValue, formState } = useForm<
     MeasurementFormValues,
     unknown,
@@ -54,6 +65,27 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
   const quantity = findQuantity(watch('quantity')) ?? QUANTITIES.redshift;
   const kind = watch('uncertaintyKind');
   const errors = formState.errors;
+  // Told as it is typed: a negative parallax is kept as published but gives no distance.
+  const typed = readNumber(watch('value'));
+  const typedUnit = findUnit(quantity, watch('unit'));
+  const parallaxNote =
+    quantity.id === 'parallax' && typeof typed === 'number' && typedUnit
+      ? parallaxWarnings(typed * typedUnit.toCanonical, null, []).find((w) => w.code === 'negative_parallax')
+      : undefined;
+
+  const send = (input: MeasurementInput) =>
+    add.mutate(input, {
+      onSuccess: () => {
+        setPending(null);
+        onDone();
+      },
+      onError: (error) => {
+        const confirmation = confirmationOf(error);
+        if (confirmation) return setPending({ input, confirmation });
+        setPending(null);
+        setFormError(applyServerErrors(error, setError, [...FIELDS]));
+      },
+    });
 
   const onSubmit = handleSubmit(() => {
     setFormError(undefined);
@@ -69,10 +101,7 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
       uncertaintyMinus: kind === 'asymmetric' ? v.uncertaintyMinus : '',
       uncertaintyPlus: kind === 'asymmetric' ? v.uncertaintyPlus : '',
     };
-    add.mutate(input, {
-      onSuccess: onDone,
-      onError: (error) => setFormError(applyServerErrors(error, setError, [...FIELDS])),
-    });
+    send(input);
   });
 
   return (
@@ -122,6 +151,13 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
         </SelectField>
       ) : (
         <p className="self-end pb-2 text-sm text-muted">No unit (dimensionless)</p>
+      )}
+      {parallaxNote && (
+        <div className="sm:col-span-3">
+          <Notice tone="warning" title="A negative parallax">
+            {parallaxNote.message}
+          </Notice>
+        </div>
       )}
       {quantity.needsBand && (
         <>
@@ -182,7 +218,7 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
         </>
       )}
       <SelectField label="Source" className="sm:col-span-3" error={errors.sourceId?.message} {...register('sourceId')}>
-        <option value="">No source yet (cannot be preferred)</option>
+        <option value="">{proposal ? 'Choose the source (a proposal needs one)' : 'No source yet (cannot be preferred)'}</option>
         {sources.data?.map((s) => (
           <option key={s.id} value={s.id}>
             {s.citation}
@@ -190,6 +226,17 @@ export function MeasurementForm({ objectId, proposal, onDone }: { objectId: stri
         ))}
       </SelectField>
       <TextField label="Note" autoComplete="off" className="sm:col-span-3" error={errors.note?.message} {...register('note')} />
+      {pending && (
+        <div className="sm:col-span-3">
+          <ConfirmWarnings
+            confirmation={pending.confirmation}
+            confirmLabel={proposal ? 'Propose it as it is' : 'Keep this value'}
+            busy={add.isPending}
+            onConfirm={() => send({ ...pending.input, confirm: true })}
+            onCancel={() => setPending(null)}
+          />
+        </div>
+      )}
       <div className="flex gap-2 sm:col-span-3">
         <Button type="submit" busy={add.isPending}>
           {proposal ? 'Propose measurement' : 'Add measurement'}

@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import type { MeasurementDto } from '@shared/schemas/measurement.ts';
-import { useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '@/api/measurements.ts';
+import { confirmationOf, useRetireMeasurement, useReviewMeasurement, useSetPreferred } from '@/api/measurements.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatMeasurement, quantityTitle, sourceHref } from './format.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
+import { ConfirmWarnings } from './confirm-warnings.tsx';
 import { ReasonDialog } from '@/components/ui/reason-dialog.tsx';
 
 function Status({ m }: { m: MeasurementDto }) {
@@ -65,7 +66,9 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
     groups.set(key, [...(groups.get(key) ?? []), m]);
   }
   const hidden = measurements.length - visible.length;
-  const error = prefer.error ?? review.error ?? retire.error;
+  // A negative parallax made preferred is confirmed after reading which statements it breaks.
+  const preferConfirmation = confirmationOf(prefer.error);
+  const error = (preferConfirmation ? null : prefer.error) ?? review.error ?? retire.error;
 
   // Which measurement is waiting for a reason, and for which step.
   const [asking, setAsking] = useState<{ m: MeasurementDto; step: 'retire' | 'decline' } | null>(null);
@@ -91,6 +94,15 @@ export function MeasurementGroups({ objectId, measurements }: { objectId: string
               ? retire.mutate({ id: asking.m.id, reason }, done)
               : review.mutate({ id: asking.m.id, decision: 'decline', reason }, done)
           }
+        />
+      )}
+      {preferConfirmation && prefer.variables && (
+        <ConfirmWarnings
+          confirmation={preferConfirmation}
+          confirmLabel="Make it preferred anyway"
+          busy={prefer.isPending}
+          onConfirm={() => prefer.mutate({ ...prefer.variables!, confirm: true })}
+          onCancel={() => prefer.reset()}
         />
       )}
       {error && (

@@ -9,9 +9,13 @@ import {
   type SkyObjectValues,
 } from '@shared/schemas/sky-object.ts';
 import { useCreateSkyObject, useUpdateSkyObject } from '@/api/catalogue-objects.ts';
+import { PROPOSAL_SOURCE_MISSING } from '@shared/schemas/catalogue-proposal.ts';
+import { useProposeObject } from '@/api/catalogue-proposals.ts';
+import { useSources } from '@/api/sources.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField, TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
+import { ApiRequestError } from '@/lib/api-client.ts';
 import { applyServerErrors } from '@/lib/form-errors.ts';
 
 const toForm = (object?: SkyObjectDto): SkyObjectFormValues => ({
@@ -58,23 +62,52 @@ function SentenceNameField({
   );
 }
 
+/** The source picker of a proposal: a proposed object cites where its name and position come from. */
+function ProposalSourceField({ value, error, onChange }: { value: string; error?: string; onChange: (id: string) => void }) {
+  const sources = useSources();
+  return (
+    <SelectField
+      label="Source"
+      hint="Where the name and position come from. Not in the list? Propose the source first, under Sources."
+      className="sm:col-span-2"
+      error={error}
+      value={value}
+      onChange={(e) => onChange(e.target.value)}
+    >
+      <option value="">Choose the source (a proposal needs one)</option>
+      {sources.data?.map((s) => (
+        <option key={s.id} value={s.id}>
+          {s.citation}
+        </option>
+      ))}
+    </SelectField>
+  );
+}
+
 /**
- * Adds an object, or edits one when `object` is given. Position in degrees or sexagesimal; the
+ * Adds an object, or edits one when `object` is given; with `onProposed` (writers and editors), it
+ * proposes one for a reviewer instead, citing a source. Position in degrees or sexagesimal; the
  * constellation is computed by the server from it. Focus starts in its first field, since the
  * button that opened it is gone.
  */
 export function ObjectForm({
   object,
   onDone,
+  onProposed,
   onCancel,
 }: {
   object?: SkyObjectDto;
   onDone: (saved: SkyObjectDto) => void;
+  onProposed?: (title: string) => void;
   onCancel: () => void;
 }) {
   const create = useCreateSkyObject();
   const update = useUpdateSkyObject(object?.id ?? '');
-  const mutation = object ? update : create;
+  const propose = useProposeObject();
+  const proposing = !!onProposed && !object;
+  const mutation = proposing ? propose : object ? update : create;
+  const [sourceId, setSourceId] = useState('');
+  const [sourceError, setSourceError] = useState<string>();
   const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, watch, getValues, formState } = useForm<
     SkyObjectFormValues,
@@ -88,23 +121,29 @@ export function ObjectForm({
   const errors = formState.errors;
   const onSubmit = handleSubmit(() => {
     setFormError(undefined);
+    setSourceError(undefined);
     // The server parses the same text again (one schema, two uses), so send what was typed.
     const { sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields } = getValues();
     const raw = {
       ...fields,
       sentenceNames: sentenceNamesOf({ sentenceEn, sentenceEnPlural, sentenceFr, sentenceFrPlural, ...fields }),
     };
-    mutation.mutate(moving ? { ...raw, ra: '', dec: '' } : raw, {
-      onSuccess: onDone,
-      onError: (error) =>
-        setFormError(applyServerErrors(error, setError, ['name', 'designations', 'kind', 'ra', 'dec', 'notes'])),
-    });
+    const input = moving ? { ...raw, ra: '', dec: '' } : raw;
+    const onError = (error: Error) => {
+      const fields = error instanceof ApiRequestError ? error.fields : undefined;
+      if (fields?.sourceId) setSourceError(fields.sourceId);
+      const rest = applyServerErrors(error, setError, ['name', 'designations', 'kind', 'ra', 'dec', 'notes']);
+      setFormError(fields?.sourceId && Object.keys(fields).length === 1 ? undefined : rest);
+    };
+    if (proposing && !sourceId) return setSourceError(PROPOSAL_SOURCE_MISSING);
+    if (proposing) propose.mutate({ ...input, sourceId }, { onSuccess: (p) => onProposed?.(p.title), onError });
+    else (object ? update : create).mutate(input, { onSuccess: onDone, onError });
   });
   return (
     <form
       onSubmit={onSubmit}
       noValidate
-      aria-label={object ? 'Edit object' : 'Add an object'}
+      aria-label={object ? 'Edit object' : proposing ? 'Propose an object' : 'Add an object'}
       className="grid gap-4 rounded-lg border border-rule bg-panel p-5 sm:grid-cols-2"
     >
       {formError && (
@@ -173,6 +212,7 @@ export function ObjectForm({
           pluralLabel="Pluriel (« sont »)"
         />
       </fieldset>
+      {proposing && <ProposalSourceField value={sourceId} error={sourceError} onChange={setSourceId} />}
       <div className="sm:col-span-2">
         <label htmlFor="object-notes" className="mb-1 block text-sm font-medium text-ink">
           Notes
@@ -186,7 +226,7 @@ export function ObjectForm({
       </div>
       <div className="flex gap-2 sm:col-span-2">
         <Button type="submit" busy={mutation.isPending}>
-          {object ? 'Save object' : 'Add object'}
+          {object ? 'Save object' : proposing ? 'Propose object' : 'Add object'}
         </Button>
         <Button type="button" variant="secondary" onClick={onCancel}>
           Cancel
