@@ -21,6 +21,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { ensureDatabase, localDatabaseUrl, startLocalPostgres } from '../../server/db/local-postgres.ts';
 import { entrySize } from '../../server/build/bundle-budget.ts';
+import { productionNodeOptions } from './node-options.ts';
 
 const dataDir = path.resolve(process.env.BENCH_FEED_PGDATA ?? '.data/bench-feed-pg');
 const port = Number(process.env.BENCH_FEED_PGPORT ?? 54598);
@@ -147,10 +148,15 @@ function startServer(args: string[]): Promise<Server> {
   // BENCH_FEED_PROFILE=1: a CPU profile of the app server in .data/bench-feed/profile, for finding where its time goes.
   const profile =
     process.env.BENCH_FEED_PROFILE === '1' && args[0] === 'app' ? ['--cpu-prof', `--cpu-prof-dir=${work}/profile`] : [];
-  const child = spawn(process.execPath, [...profile, '--import', 'tsx', 'tests/bench/feed-server.ts', ...args], {
-    env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
-    stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
-  });
+  // Both servers, ours and the peer, run with the Node options `npm start` gives production.
+  const child = spawn(
+    process.execPath,
+    [...productionNodeOptions(), ...profile, '--import', 'tsx', 'tests/bench/feed-server.ts', ...args],
+    {
+      env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
+      stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
+    },
+  );
   const ask = (message: 'reset' | 'report') =>
     new Promise<unknown>((resolve) => {
       child.once('message', resolve);
@@ -262,7 +268,7 @@ const line = (label: string, r: Figures) =>
       `GC ${r.server.gc.totalMs} ms in ${r.server.gc.count} (max ${r.server.gc.maxMs})   ${r.statuses}, errors ${r.errors}`,
   );
 console.log(
-  `Kiosk feed benchmark (Node ${process.version}, ${ROUNDS} rounds × ${DURATION} s per case, 100 connections, loopback)`,
+  `Kiosk feed benchmark (Node ${process.version} ${productionNodeOptions().join(' ') || '(no options)'} for both servers, ${ROUNDS} rounds × ${DURATION} s per case, 100 connections, loopback)`,
 );
 console.log(`  channel of 50 slides → feed of ${items} items, ${(body.length / 1024).toFixed(1)} KB`);
 console.log('  (loop delay and GC: measured inside the answering server over its runs)');
