@@ -25,12 +25,15 @@ const dataDir = path.resolve('.data/bench-capacity-pg');
 const pgPort = Number(process.env.BENCH_CAPACITY_PGPORT ?? 54596);
 const database = 'starproof_bench_capacity';
 const SCALE = Number(process.env.BENCH_CAPACITY_SCALE ?? 1);
+// The address the app believes it is reached at: state-changing requests name it as their Origin.
+const PUBLIC_URL = 'http://127.0.0.1';
 
 await startLocalPostgres({ dataDir, port: pgPort, database: 'postgres', fast: true });
 await ensureDatabase({ port: pgPort, database }, { recreate: true });
 const databaseUrl = localDatabaseUrl({ port: pgPort, database });
 process.env.DATABASE_URL = databaseUrl;
-process.env.LOG_LEVEL = 'warn';
+// The demo's review mails have no relay here: their errors are expected, not news.
+process.env.LOG_LEVEL = 'silent';
 const { getSequelize, closeSequelize } = await import('../../server/db.ts');
 const { migrate } = await import('../../server/migrations/runner.ts');
 const { initModels, KioskScreen, User, Statement } = await import('../../server/models/index.ts');
@@ -61,8 +64,8 @@ const child: ChildProcess = spawn(
       NODE_ENV: 'production',
       LOG_LEVEL: 'warn',
       MALLOC_ARENA_MAX: '2',
-      PUBLIC_URL: 'http://127.0.0.1',
-      STARPROOF_PUBLIC_LIMIT: '1000000000',
+      PUBLIC_URL,
+      STARPROOF_PUBLIC_LIMIT: '1000000',
       STARPROOF_SIGNIN_LIMIT: '1000',
     },
     stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
@@ -89,7 +92,8 @@ async function signIn(role: string): Promise<string> {
   if (!res.ok) throw new Error(`sign-in as ${role}: ${res.status} ${await res.text()}`);
   return res.headers.get('set-cookie')!.split(';')[0];
 }
-const editorCookie = await signIn('editor');
+// Reviewers (and admins) may recompute a statement.
+const reviewerCookie = await signIn('reviewer');
 const writerCookie = await signIn('writer');
 const kiosk = { authorization: `Bearer ${token}` };
 const feed = await fetch(`${base}/api/kiosk/feed`, { headers: kiosk });
@@ -100,9 +104,10 @@ if (!publicPage) throw new Error('the demo scenario published no page');
 const objectId = (await Statement.findByPk(statement.id))!.skyObjectId;
 const made = await fetch(`${base}/api/pages`, {
   method: 'POST',
-  headers: { cookie: writerCookie, origin: base, 'content-type': 'application/json' },
+  headers: { cookie: writerCookie, origin: PUBLIC_URL, 'content-type': 'application/json' },
   body: JSON.stringify({ title: 'Capacity draft (benchmark)', objectId, locale: 'en-GB' }),
 });
+if (!made.ok) throw new Error(`creating the draft: ${made.status} ${await made.text()}`);
 const draft = ((await made.json()) as { data: { id: string; version: number } }).data;
 
 interface Case {
@@ -143,7 +148,7 @@ const cases: Case[] = [
     request: {
       method: 'PUT',
       path: `/api/pages/${draft.id}`,
-      headers: { cookie: writerCookie, origin: base, 'content-type': 'application/json' },
+      headers: { cookie: writerCookie, origin: PUBLIC_URL, 'content-type': 'application/json' },
       setupRequest: (req: Record<string, unknown>) => ({
         ...req,
         body: JSON.stringify({
@@ -168,7 +173,7 @@ const cases: Case[] = [
     request: {
       method: 'POST',
       path: `/api/statements/${statement.id}/recompute`,
-      headers: { cookie: editorCookie, origin: base },
+      headers: { cookie: reviewerCookie, origin: PUBLIC_URL },
     },
     expect: 200,
   },

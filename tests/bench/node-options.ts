@@ -6,6 +6,9 @@ import fs from 'node:fs';
  * @returns the options as command-line arguments (empty when `npm start` sets none)
  */
 export function productionNodeOptions(): string[] {
+  // BENCH_NODE_OPTIONS (even empty) replaces them, to measure what they change.
+  const override = process.env.BENCH_NODE_OPTIONS;
+  if (override !== undefined) return override.split(/\s+/).filter(Boolean);
   const start = (JSON.parse(fs.readFileSync('package.json', 'utf8')) as { scripts: { start: string } }).scripts.start;
   const match = /NODE_OPTIONS=(?:'([^']*)'|"([^"]*)"|(\S+))/.exec(start);
   const value = match ? (match[1] ?? match[2] ?? match[3]) : '';

@@ -121,6 +121,8 @@ async function main(): Promise<void> {
   // Server modules read DATABASE_URL when first used: set it before they load.
   process.env.DATABASE_URL = url;
   process.env.LOG_LEVEL ??= 'warn';
+  // Seeding 100,000 rows on a loaded machine can outlast the app's 15-s query bound.
+  process.env.DB_QUERY_TIMEOUT_MS ??= '600000';
   const { getSequelize, closeSequelize } = await import('../../server/db.ts');
   const { migrate } = await import('../../server/migrations/runner.ts');
   const { initModels, CosmologyDescription, SkyObject, Statement, User } = await import('../../server/models/index.ts');

@@ -133,11 +133,14 @@ export function lookbackIntegral(c: Cosmology, z: number): number {
  */
 export function ageIntegral(c: Cosmology, z: number): number {
   checkRedshift(c.model, z);
-  if (!c.model.hasBigBang) {
-    throw new CalcError('no_big_bang', `model "${c.model.name}" has no big bang, so its age is not defined`);
-  }
+  if (!c.model.hasBigBang) refuseAge(c.model);
   if (z <= AGE_BY_SUBTRACTION_MAX_Z) return c.ageNowIntegral - lookbackIntegral(c, z);
   return ageIntegralTo(c.model, 1 / (1 + z));
+}
+
+// Out of line, so that ageIntegral, called for every Monte Carlo draw of an age, stays small.
+function refuseAge(model: FlrwModel): never {
+  throw new CalcError('no_big_bang', `model "${model.name}" has no big bang, so its age is not defined`);
 }
 
 /**
