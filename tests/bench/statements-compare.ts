@@ -6,6 +6,7 @@
  * The older commit is checked out with `git worktree add` into the system's temporary folder
  * (sharing this checkout's node_modules) and runs this checkout's copy of `statements.ts`, so both
  * sides time exactly the same steps; each side seeds its own PostgreSQL cluster in its own folder.
+ * The temporary checkout is removed at the end.
  * Default commit: 6c90f6c (main before the recompute work of issue 19).
  * `BENCH_COMPARE_ROUNDS=N` alternates the two N times (default 1).
  */
@@ -83,3 +84,4 @@ for (const [i, { base: b, head: h }] of results.entries()) {
     `    ratio this / ${sha}: wall ${(h.changeMs / b.changeMs).toFixed(2)}, CPU ${((h.nodeCpu + h.pgCpu) / (b.nodeCpu + b.pgCpu)).toFixed(2)}`,
   );
 }
+execFileSync('git', ['worktree', 'remove', '--force', baseDir], { stdio: 'inherit' });
