@@ -42,6 +42,19 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
 }
 
 /**
+ * True when a sign-in arriving now would be refused by admitSignIn: lets the app answer it 429
+ * before parsing its body, loading a session or writing a log line, so a burst of refusals costs
+ * the event loop almost nothing (`refuseBusySignIn`, mounted first in app.ts).
+ */
+export function signInWouldWaitTooLong(): boolean {
+  const threads = Math.max(1, getPool().options.maxThreads);
+  return expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
+}
+
+/** The 429 `busy` answer, with Retry-After. */
+export const busyError = (): HttpError => busy();
+
+/**
  * Admits one sign-in before it does any database work, or refuses it at once (429 `busy`) when its
  * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
  * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time.
@@ -49,8 +62,7 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
  * @throws HttpError 429 `busy`
  */
 export function admitSignIn(): () => void {
-  const threads = Math.max(1, getPool().options.maxThreads);
-  if (expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs) throw busy();
+  if (signInWouldWaitTooLong()) throw busy();
   signInsInFlight += 1;
   let released = false;
   return () => {

@@ -128,6 +128,27 @@ describe('busy, not down (point 2)', () => {
     }
   }, 60_000);
 
+  it('a sign-in the hashing threads cannot take in time is refused before its body is read or a session made', async () => {
+    const saved = config.passwordHashMaxWaitMs;
+    // No wait allowed: every sign-in would wait for its own hash, so each is refused at the door.
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
+    try {
+      const res = await supertest(await getTestApp())
+        .post('/api/auth/sign-in')
+        .set('Content-Type', 'application/json')
+        .send('{"email": not json');
+      // Malformed JSON would be a 400 had the body parser run.
+      expect(res.status).toBe(429);
+      expect(res.body.error.code).toBe('busy');
+      expect(res.headers['retry-after']).toBe('5');
+      expect(res.headers['cache-control']).toBe('no-store');
+      expect(res.headers['set-cookie']).toBeUndefined();
+      expect(res.headers['x-content-type-options']).toBe('nosniff');
+    } finally {
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved);
+    }
+  });
+
   it('when every pooled connection is taken, a request answers 503 busy (not database_unavailable) with Retry-After', async () => {
     const user = await buildUser();
     const agent = supertest.agent(await getTestApp());

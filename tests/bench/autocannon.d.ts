@@ -5,6 +5,8 @@ declare module 'autocannon' {
     p50: number;
     p99: number;
     max: number;
+    /** Requests: how many were answered in all. */
+    total: number;
   }
   interface Result {
     requests: Histogram;
@@ -23,6 +25,8 @@ declare module 'autocannon' {
     duration?: number;
     pipelining?: number;
     headers?: Record<string, string>;
+    /** Stop after this many requests instead of after `duration`. */
+    amount?: number;
   }
   function autocannon(options: Options): Promise<Result>;
   export default autocannon;

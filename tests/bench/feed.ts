@@ -21,6 +21,7 @@ import path from 'node:path';
 import autocannon from 'autocannon';
 import { ensureDatabase, localDatabaseUrl, startLocalPostgres } from '../../server/db/local-postgres.ts';
 import { entrySize } from '../../server/build/bundle-budget.ts';
+import { productionNodeOptions } from './node-options.ts';
 
 const dataDir = path.resolve(process.env.BENCH_FEED_PGDATA ?? '.data/bench-feed-pg');
 const port = Number(process.env.BENCH_FEED_PGPORT ?? 54598);
@@ -147,10 +148,15 @@ function startServer(args: string[]): Promise<Server> {
   // BENCH_FEED_PROFILE=1: a CPU profile of the app server in .data/bench-feed/profile, for finding where its time goes.
   const profile =
     process.env.BENCH_FEED_PROFILE === '1' && args[0] === 'app' ? ['--cpu-prof', `--cpu-prof-dir=${work}/profile`] : [];
-  const child = spawn(process.execPath, [...profile, '--import', 'tsx', 'tests/bench/feed-server.ts', ...args], {
-    env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
-    stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
-  });
+  // Both servers, ours and the peer, run with the Node options `npm start` gives production.
+  const child = spawn(
+    process.execPath,
+    [...productionNodeOptions(), ...profile, '--import', 'tsx', 'tests/bench/feed-server.ts', ...args],
+    {
+      env: { ...process.env, DATABASE_URL: url, NODE_ENV: 'production', LOG_LEVEL: 'warn', MALLOC_ARENA_MAX: '2' },
+      stdio: ['ignore', 'pipe', 'inherit', 'ipc'],
+    },
+  );
   const ask = (message: 'reset' | 'report') =>
     new Promise<unknown>((resolve) => {
       child.once('message', resolve);
@@ -167,6 +173,8 @@ function startServer(args: string[]): Promise<Server> {
 interface ServerStats {
   loop: { p50: number; p99: number; max: number };
   gc: { count: number; totalMs: number; maxMs: number };
+  /** CPU time of the server process over the run (every thread). */
+  cpuMs: number;
 }
 interface Figures {
   rate: number;
@@ -174,6 +182,8 @@ interface Figures {
   statuses: string;
   errors: number;
   server: ServerStats;
+  /** Server CPU per answer, in microseconds: steadier than rates on a machine shared with other work. */
+  cpuUs: number;
 }
 /** One autocannon run against a server, with that server's event-loop delay and GC over the run. */
 async function run(server: Server, target: string, headers: Record<string, string>, expect: number): Promise<Figures> {
@@ -187,6 +197,7 @@ async function run(server: Server, target: string, headers: Record<string, strin
     statuses: other ? `${other} not ${expect}` : `all ${expect}`,
     errors: r.errors + r.timeouts,
     server: stats,
+    cpuUs: (stats.cpuMs * 1000) / Math.max(1, r.requests.total),
   };
 }
 
@@ -245,6 +256,7 @@ function merge(runs: Figures[]): Figures {
     p99: worst((r) => r.p99),
     statuses: runs.map((r) => r.statuses).find((s) => !s.startsWith('all')) ?? runs[0].statuses,
     errors: runs.reduce((sum, r) => sum + r.errors, 0),
+    cpuUs: runs.reduce((sum, r) => sum + r.cpuUs, 0) / runs.length,
     server: {
       loop: { p50: worst((r) => r.server.loop.p50), p99: worst((r) => r.server.loop.p99), max: worst((r) => r.server.loop.max) },
       gc: {
@@ -252,6 +264,7 @@ function merge(runs: Figures[]): Figures {
         totalMs: runs.reduce((sum, r) => sum + r.server.gc.totalMs, 0),
         maxMs: worst((r) => r.server.gc.maxMs),
       },
+      cpuMs: runs.reduce((sum, r) => sum + r.server.cpuMs, 0),
     },
   };
 }
@@ -259,10 +272,10 @@ const line = (label: string, r: Figures) =>
   console.log(
     `  ${label.padEnd(34)} ${n(r.rate).padStart(7)} req/s   p99 ${String(r.p99).padStart(4)} ms   ` +
       `loop delay p99 ${String(r.server.loop.p99).padStart(5)} ms (max ${r.server.loop.max})   ` +
-      `GC ${r.server.gc.totalMs} ms in ${r.server.gc.count} (max ${r.server.gc.maxMs})   ${r.statuses}, errors ${r.errors}`,
+      `GC ${r.server.gc.totalMs} ms in ${r.server.gc.count} (max ${r.server.gc.maxMs})   CPU ${r.cpuUs.toFixed(0)} µs per answer   ${r.statuses}, errors ${r.errors}`,
   );
 console.log(
-  `Kiosk feed benchmark (Node ${process.version}, ${ROUNDS} rounds × ${DURATION} s per case, 100 connections, loopback)`,
+  `Kiosk feed benchmark (Node ${process.version} ${productionNodeOptions().join(' ') || '(no options)'} for both servers, ${ROUNDS} rounds × ${DURATION} s per case, 100 connections, loopback)`,
 );
 console.log(`  channel of 50 slides → feed of ${items} items, ${(body.length / 1024).toFixed(1)} KB`);
 console.log('  (loop delay and GC: measured inside the answering server over its runs)');
@@ -278,7 +291,7 @@ for (const [name, label, target] of [
   const ratio = ours.rate / theirs.rate;
   const meets = ratio >= 1 && (name === 'full' || ours.p99 <= theirs.p99);
   console.log(
-    `    ratio feed / express.static: ${ratio.toFixed(2)}×, p99 ${ours.p99} vs ${theirs.p99} ms → ${meets ? 'meets' : 'MISSES'} (${target})`,
+    `    ratio feed / express.static: ${ratio.toFixed(2)}×, p99 ${ours.p99} vs ${theirs.p99} ms → ${meets ? 'meets' : 'MISSES'} (${target}); CPU per answer ${(ours.cpuUs / theirs.cpuUs).toFixed(2)}× the peer's`,
   );
 }
 if (size)

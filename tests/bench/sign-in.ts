@@ -17,7 +17,7 @@ import { ensureDatabase, localDatabaseUrl, startLocalPostgres, stopLocalPostgres
 
 const CONCURRENT = Number(process.env.SIGN_INS ?? 200);
 const dataDir = path.resolve('.data/bench-sign-in-pg');
-const pgPort = 54598;
+const pgPort = Number(process.env.BENCH_SIGN_IN_PGPORT ?? 54598);
 const database = 'starproof_bench_sign_in';
 
 await startLocalPostgres({ dataDir, port: pgPort, database: 'postgres', fast: true });

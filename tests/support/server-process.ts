@@ -31,7 +31,11 @@ export interface ServerProcess {
  */
 export async function startServerProcess(
   env: Record<string, string>,
-  { port = 0, timeoutMs = Number(process.env.STARPROOF_E2E_START_TIMEOUT_MS) || 60_000, onSpawn }: { port?: number; timeoutMs?: number; onSpawn?: (child: ChildProcess) => void } = {},
+  {
+    port = 0,
+    timeoutMs = Number(process.env.STARPROOF_E2E_START_TIMEOUT_MS) || 60_000,
+    onSpawn,
+  }: { port?: number; timeoutMs?: number; onSpawn?: (child: ChildProcess) => void } = {},
 ): Promise<ServerProcess> {
   port ||= await freePort();
   const child = spawn(process.execPath, ['--import', 'tsx', 'server/cli/start.ts'], {

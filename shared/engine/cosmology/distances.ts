@@ -33,14 +33,17 @@ export function prepareCosmology(model: FlrwModel): Cosmology {
   return { model, table, ageNowIntegral };
 }
 
+// Called for every Monte Carlo draw: the check stays small enough to be inlined, the throw is out of line.
 function checkRedshift(model: FlrwModel, z: number): void {
+  if (!(z > -1) || z >= model.zBounce) refuseRedshift(model, z);
+}
+
+function refuseRedshift(model: FlrwModel, z: number): never {
   if (!(z > -1)) throw new CalcError('out_of_range', `z must be greater than −1 (got ${z})`);
-  if (z >= model.zBounce) {
-    throw new CalcError(
-      'no_big_bang',
-      `z must be below ${model.zBounce.toPrecision(6)}, where this model has no big bang: E(z)² ≤ 0 there (got z = ${z})`,
-    );
-  }
+  throw new CalcError(
+    'no_big_bang',
+    `z must be below ${model.zBounce.toPrecision(6)}, where this model has no big bang: E(z)² ≤ 0 there (got z = ${z})`,
+  );
 }
 
 /** ∫ from a = 0 to aEnd of da/(a E(a)), with a = s², in units of the Hubble time. */
@@ -130,11 +133,14 @@ export function lookbackIntegral(c: Cosmology, z: number): number {
  */
 export function ageIntegral(c: Cosmology, z: number): number {
   checkRedshift(c.model, z);
-  if (!c.model.hasBigBang) {
-    throw new CalcError('no_big_bang', `model "${c.model.name}" has no big bang, so its age is not defined`);
-  }
+  if (!c.model.hasBigBang) refuseAge(c.model);
   if (z <= AGE_BY_SUBTRACTION_MAX_Z) return c.ageNowIntegral - lookbackIntegral(c, z);
   return ageIntegralTo(c.model, 1 / (1 + z));
+}
+
+// Out of line, so that ageIntegral, called for every Monte Carlo draw of an age, stays small.
+function refuseAge(model: FlrwModel): never {
+  throw new CalcError('no_big_bang', `model "${model.name}" has no big bang, so its age is not defined`);
 }
 
 /**
