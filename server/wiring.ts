@@ -21,6 +21,8 @@ import {
   invalidateKioskFeeds,
   invalidatePublicPages,
   publishingEvents,
+  runScreenSilenceJob,
+  SCREEN_SILENCE_JOB,
 } from './services/publishing/index.ts';
 import { settingsEvents } from './services/settings/index.ts';
 import {
@@ -131,6 +133,8 @@ export function wireServer(): void {
   registerJob(VENUE_SKY_JOB, runVenueSkyJob);
   // users: expired sign-in links
   registerJob(TOKEN_PURGE_JOB, runTokenPurgeJob);
+  // publishing: kiosk screens silent for longer than their channel allows → one e-mail to admins per outage
+  registerJob(SCREEN_SILENCE_JOB, runScreenSilenceJob);
 }
 
 /**
@@ -149,4 +153,6 @@ export async function startSchedules(boss: PgBoss): Promise<void> {
   await boss.schedule(PUBLISH_DUE_JOB, '* * * * *', {}, { tz: 'UTC' });
   // expired sign-in links, removed daily at 03:17
   await boss.schedule(TOKEN_PURGE_JOB, '17 3 * * *', {}, { tz: 'UTC' });
+  // silent kiosk screens, checked every minute
+  await boss.schedule(SCREEN_SILENCE_JOB, '* * * * *', {}, { tz: 'UTC' });
 }

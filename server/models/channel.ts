@@ -16,6 +16,10 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
   declare name: string;
   /** Bumped by every edit; feed caches on other server instances compare it. */
   declare version: CreationOptional<number>;
+  /** Object slides carry a QR code to the page's public address. */
+  declare showQr: CreationOptional<boolean>;
+  /** Minutes without a heartbeat before admins are e-mailed about one of the channel's screens; null = never. */
+  declare silenceAlertMinutes: CreationOptional<number | null>;
   declare createdById: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -30,6 +34,8 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
         venueId: { type: DataTypes.UUID, allowNull: false },
         name: { type: DataTypes.STRING(80), allowNull: false },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+        showQr: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        silenceAlertMinutes: { type: DataTypes.INTEGER },
         createdById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

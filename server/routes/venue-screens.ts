@@ -1,10 +1,17 @@
 import { Router } from 'express';
-import { ScreenCreateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
+import { ScreenCreateSchema, ScreenUpdateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
-import { issuePairingCode, revokeScreen, addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
+import {
+  issuePairingCode,
+  revokeScreen,
+  addScreen,
+  listScreens,
+  removeScreen,
+  setScreenOrientation,
+} from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
@@ -44,6 +51,15 @@ venueScreensRouter.post('/:screenId/revoke', async (req, res) => {
   const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await revokeScreen(await loadScreen(venue, req.params.screenId), viewer, req.ip);
+  res.json({ data: presentKioskScreen(screen) });
+});
+
+/** How the screen hangs (auto, landscape, portrait); its player follows at its next heartbeat. */
+venueScreensRouter.patch('/:screenId', validate(ScreenUpdateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
+  authorize(viewer, 'venue', 'manageScreens', venue);
+  const screen = await setScreenOrientation(await loadScreen(venue, req.params.screenId), req.body.orientation, viewer, req.ip);
   res.json({ data: presentKioskScreen(screen) });
 });
 

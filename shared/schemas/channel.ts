@@ -1,6 +1,7 @@
 import type { ScreenHealth } from './kiosk.ts';
 import { z } from 'zod';
 import { ChannelLimits } from '../validations.ts';
+import { SlideScheduleSchema, type SlideSchedule } from './slide-schedule.ts';
 
 export const SLIDE_KINDS = ['page', 'image', 'sky_tonight'] as const;
 export type SlideKind = (typeof SLIDE_KINDS)[number];
@@ -36,12 +37,32 @@ const windowIssue = { message: 'The end must be after the start', path: ['endsAt
 export const ChannelCreateSchema = z.object({ venueId: z.uuid({ message: 'Choose a venue' }), name });
 export type ChannelCreateInput = z.infer<typeof ChannelCreateSchema>;
 
-export const ChannelUpdateSchema = z.object({ name });
+const silenceAlertMinutes = z
+  .number({ message: 'Give the silence before an e-mail in whole minutes, or null for none' })
+  .int('Give the silence before an e-mail in whole minutes, or null for none')
+  .min(ChannelLimits.silenceAlertMin, `Wait at least ${ChannelLimits.silenceAlertMin} minutes before e-mailing about a silent screen`)
+  .max(ChannelLimits.silenceAlertMax, `Wait at most ${ChannelLimits.silenceAlertMax} minutes (a week) before e-mailing about a silent screen`)
+  .nullable();
+
+/** Rename a channel, show or hide QR codes on its object slides, set when a silent screen is reported. */
+export const ChannelUpdateSchema = z
+  .object({
+    name: name.optional(),
+    showQr: z.boolean({ message: 'showQr is true or false' }).optional(),
+    silenceAlertMinutes: silenceAlertMinutes.optional(),
+  })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), 'Say what to change: name, showQr or silenceAlertMinutes');
 export type ChannelUpdateInput = z.infer<typeof ChannelUpdateSchema>;
 
 export const ChannelListQuerySchema = z.object({ venueId: z.uuid({ message: 'venueId must be a valid id' }).optional() });
 
-const timing = { durationS: DurationSchema.optional(), startsAt: instant.optional(), endsAt: instant.optional() };
+const timing = {
+  durationS: DurationSchema.optional(),
+  startsAt: instant.optional(),
+  endsAt: instant.optional(),
+  /** When the slide shows by the venue's clock; null or absent = always. */
+  schedule: SlideScheduleSchema.nullable().optional(),
+};
 
 /** A new slide: an object page (with chosen statements), an image with a caption, or the sky tonight. */
 export const SlideCreateSchema = z
@@ -92,7 +113,7 @@ export const ChannelScreensSchema = z.object({
 export type ChannelScreensInput = z.infer<typeof ChannelScreensSchema>;
 
 /** Why a slide is or is not on the screens now. */
-export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'page_unpublished', 'image_not_ready'] as const;
+export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'off_schedule', 'page_unpublished', 'image_not_ready'] as const;
 export type SlideState = (typeof SLIDE_STATES)[number];
 
 export interface SlideDto {
@@ -102,6 +123,9 @@ export interface SlideDto {
   durationS: number;
   startsAt: string | null;
   endsAt: string | null;
+  schedule: SlideSchedule | null;
+  /** The schedule in words ("every day, from 1 h before sunset until 23:00"). */
+  scheduleText: string;
   caption: string;
   page: { id: string; title: string } | null;
   statementIds: string[];
@@ -128,6 +152,8 @@ export interface ChannelRowDto {
 
 export interface ChannelDetailDto extends ChannelRowDto {
   version: number;
+  showQr: boolean;
+  silenceAlertMinutes: number | null;
   slides: SlideDto[];
   /** Every screen at the channel's venue, with the channel it shows now (if any). */
   venueScreens: Array<ChannelScreenRef & { channelId: string | null; channelName: string | null }>;

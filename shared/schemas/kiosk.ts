@@ -11,6 +11,18 @@ const screenName = z
 export const ScreenCreateSchema = z.object({ name: screenName });
 export type ScreenCreateInput = z.infer<typeof ScreenCreateSchema>;
 
+/** How a screen hangs: `auto` lets the player's viewport decide (taller than wide is portrait). */
+export const SCREEN_ORIENTATIONS = ['auto', 'landscape', 'portrait'] as const;
+export type ScreenOrientation = (typeof SCREEN_ORIENTATIONS)[number];
+/** What the player reports laying slides out in. */
+export type ReportedOrientation = Exclude<ScreenOrientation, 'auto'>;
+
+/** An admin's change to a screen: how it hangs. */
+export const ScreenUpdateSchema = z.object({
+  orientation: z.enum(SCREEN_ORIENTATIONS, { message: 'The orientation is auto, landscape or portrait' }),
+});
+export type ScreenUpdateInput = z.infer<typeof ScreenUpdateSchema>;
+
 /** The pairing code as typed on the player: letters and digits, dash and spaces optional. */
 export const KioskPairSchema = z.object({
   code: z
@@ -35,6 +47,15 @@ export const KioskHeartbeatSchema = z.object({
     .optional(),
   /** When given, must be this token's own screen. */
   screenId: z.string().optional(),
+  /** The slide on screen (null: the holding screen), and its title as shown. */
+  slideId: z.uuid({ message: 'slideId must be a slide’s id, or null for the holding screen' }).nullable().optional(),
+  slideTitle: z
+    .string({ message: 'slideTitle is the title on screen, as text' })
+    .trim()
+    .max(KioskLimits.slideTitleMax, `slideTitle is at most ${KioskLimits.slideTitleMax} characters`)
+    .optional(),
+  /** How the player lays slides out now. */
+  orientation: z.enum(['landscape', 'portrait'], { message: 'orientation is landscape or portrait' }).optional(),
 });
 export type KioskHeartbeatInput = z.infer<typeof KioskHeartbeatSchema>;
 
@@ -64,6 +85,12 @@ export interface KioskScreenDto {
   lastSeenAt: string | null;
   playerVersion: string | null;
   showing: Record<string, unknown> | null;
+  /** The slide on screen at the last heartbeat (null id: the holding screen). */
+  showingSlide: { id: string | null; title: string } | null;
+  orientation: ScreenOrientation;
+  reportedOrientation: ReportedOrientation | null;
+  /** When admins were e-mailed that the screen went silent (this outage), or null. */
+  silenceAlertedAt: string | null;
   createdAt: string;
 }
 

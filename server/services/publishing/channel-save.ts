@@ -59,26 +59,40 @@ export async function createChannel(input: ChannelCreateInput, actor: User, ip?:
 }
 
 /**
- * Renames a channel.
+ * Renames a channel, shows or hides QR codes on its object slides, or sets after how long a silent
+ * screen is reported to admins.
  * @throws HttpError 409 name taken at the venue
  */
 export async function updateChannel(channel: Channel, input: ChannelUpdateInput, actor: User, ip?: string): Promise<Channel> {
   await getSequelize().transaction(async (transaction) => {
     const row = await lockChannel(channel.id, transaction);
-    await assertNameFree(row.venueId, input.name, row.id, transaction);
-    await row.update({ name: input.name }, { transaction });
+    if (input.name !== undefined) {
+      await assertNameFree(row.venueId, input.name, row.id, transaction);
+      await row.update({ name: input.name }, { transaction });
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'channel.renamed',
+          subjectType: 'channel',
+          subjectId: row.id,
+          data: { from: channel.name, to: input.name },
+          ip,
+        },
+        transaction,
+      );
+    }
+    const settings = {
+      ...(input.showQr !== undefined ? { showQr: input.showQr } : {}),
+      ...(input.silenceAlertMinutes !== undefined ? { silenceAlertMinutes: input.silenceAlertMinutes } : {}),
+    };
+    if (Object.keys(settings).length) {
+      await row.update(settings, { transaction });
+      await recordAudit(
+        { actorId: actor.id, action: 'channel.settings_changed', subjectType: 'channel', subjectId: row.id, data: settings, ip },
+        transaction,
+      );
+    }
     await touchChannel(row.id, transaction);
-    await recordAudit(
-      {
-        actorId: actor.id,
-        action: 'channel.renamed',
-        subjectType: 'channel',
-        subjectId: row.id,
-        data: { from: channel.name, to: input.name },
-        ip,
-      },
-      transaction,
-    );
   });
   return channel.reload();
 }

@@ -6,13 +6,17 @@ import {
   type FeedSlide,
   type KioskFeed,
 } from '@shared/schemas/kiosk-feed.ts';
-import { localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
+import { localDateOf, localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
 import { NotFoundError } from '../../errors.ts';
 import { Channel, ChannelSlide, Page, Venue } from '../../models/index.ts';
 import type { FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
 import { feedSky, skyHtml } from './feed-sky.ts';
 import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
+import { followsTheSun, venueSunDays } from './feed-sun.ts';
+import { qrFor } from './feed-qr.ts';
+import { getPublicPages } from './public-pages.ts';
+import { appBaseUrl } from '../../config.ts';
 import { getSkySnapshot } from '../sky/index.ts';
 import { publicPageTexts } from '../pages/index.ts';
 import { publicStatements } from '../statements/index.ts';
@@ -72,12 +76,21 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
     (s.kind === 'page' ? (s.mediaId ?? mediaIdsInHtml(live.get(s.pageId!)?.html ?? '')[0]) : s.mediaId) ?? null;
   const mediaIds = [...new Set(slides.map(imageOf).filter((id): id is string => !!id))];
   const images = await loadPublishedImages(mediaIds);
+  // The public page's address, as the public pages name it (the QR code on object slides).
+  const slugs =
+    channel?.showQr && slides.some((s) => s.kind === 'page')
+      ? new Map((await getPublicPages()).pages.map((p) => [p.id, p.slug]))
+      : new Map<string, string>();
 
   let validUntil: number | null = null;
   const until = (t: number) => (validUntil = validUntil === null ? t : Math.min(validUntil, t));
   for (const s of slides) for (const t of [s.startsAt, s.endsAt]) if (t && t.getTime() > now) until(t.getTime());
 
   const active = slides.filter((s) => inWindow(s, now));
+  // Schedules are left to the player (it follows them offline too); it needs the Sun's times for some.
+  const sunDays = active.some((s) => followsTheSun(s.schedule)) ? venueSunDays(venue, now) : undefined;
+  // Rebuilt at the venue's midnight, so the days roll forward.
+  if (sunDays) until(localToMs(nextDate(localDateOf(now, venue.timeZone)), 0, venue.timeZone));
   let skyDate: string | null = null;
   let sky: Awaited<ReturnType<typeof getSkySnapshot>> = null;
   if (active.some((s) => s.kind === 'sky_tonight')) {
@@ -94,6 +107,7 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       duration_s: s.durationS,
       starts_at: s.startsAt?.toISOString() ?? null,
       ends_at: s.endsAt?.toISOString() ?? null,
+      ...(s.schedule ? { schedule: s.schedule } : {}),
     };
     const img = images.get(imageOf(s) ?? '');
     if (s.kind === 'page') {
@@ -109,7 +123,16 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
           as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt,
         }));
       const text = firstParagraphText(shown.html);
-      const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
+      const slug = slugs.get(s.pageId!);
+      const qr = slug ? { qr: qrFor(`${appBaseUrl()}/explore/${encodeURIComponent(slug)}`) } : {};
+      const slide: FeedSlide = {
+        ...base,
+        layout: img ? 'image-text' : 'text',
+        text,
+        statements: chosen,
+        ...imageParts(img),
+        ...qr,
+      };
       const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
       items.push({
         id: s.id,
@@ -167,6 +190,7 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       channel: channel ? { id: channel.id, name: channel.name } : null,
       venue: { id: venue.id, name: venue.name, time_zone: venue.timeZone },
       holding: items.length === 0,
+      ...(sunDays ? { sun_days: sunDays } : {}),
     },
   };
   return {
