@@ -175,6 +175,7 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'PATCH /api/venues/:id': { body: { elevationM: 120 } },
     'POST /api/venues/:venueId/screens': { body: { name: 'Access matrix screen' } },
     'POST /api/kiosk/heartbeat': { body: { screenId: ids.screen } },
+    'PATCH /api/venues/:venueId/screens/:screenId': { body: { orientation: 'auto' } },
     'POST /api/channels': { body: { venueId: ids.venue, name: `Access matrix channel ${randomUUID().slice(0, 8)}` } },
     'PATCH /api/channels/:id': { body: { name: 'Access matrix channel' } },
     'POST /api/channels/:id/slides': { body: { kind: 'sky_tonight' } },
