@@ -37,7 +37,11 @@ export function screenSilentMail(to: string, name: string, s: SilentScreen, minu
 }
 
 /** To each admin when a screen reported silent is heard from again. */
-export function screenBackMail(to: string, name: string, s: Pick<SilentScreen, 'screenName' | 'venueId' | 'venueName'>): MailMessage {
+export function screenBackMail(
+  to: string,
+  name: string,
+  s: Pick<SilentScreen, 'screenName' | 'venueId' | 'venueName'>,
+): MailMessage {
   return {
     to,
     subject: `Screen back: ${s.screenName} at ${s.venueName}`,

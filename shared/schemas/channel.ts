@@ -40,8 +40,14 @@ export type ChannelCreateInput = z.infer<typeof ChannelCreateSchema>;
 const silenceAlertMinutes = z
   .number({ message: 'Give the silence before an e-mail in whole minutes, or null for none' })
   .int('Give the silence before an e-mail in whole minutes, or null for none')
-  .min(ChannelLimits.silenceAlertMin, `Wait at least ${ChannelLimits.silenceAlertMin} minutes before e-mailing about a silent screen`)
-  .max(ChannelLimits.silenceAlertMax, `Wait at most ${ChannelLimits.silenceAlertMax} minutes (a week) before e-mailing about a silent screen`)
+  .min(
+    ChannelLimits.silenceAlertMin,
+    `Wait at least ${ChannelLimits.silenceAlertMin} minutes before e-mailing about a silent screen`,
+  )
+  .max(
+    ChannelLimits.silenceAlertMax,
+    `Wait at most ${ChannelLimits.silenceAlertMax} minutes (a week) before e-mailing about a silent screen`,
+  )
   .nullable();
 
 /** Rename a channel, show or hide QR codes on its object slides, set when a silent screen is reported. */

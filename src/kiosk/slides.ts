@@ -65,7 +65,13 @@ function qrCode(qr: FeedQr): HTMLElement {
   svg.setAttribute('shape-rendering', 'crispEdges');
   svg.setAttribute('aria-hidden', 'true');
   const ground = document.createElementNS(SVG, 'rect');
-  for (const [k, v] of [['x', '-4'], ['y', '-4'], ['width', String(box)], ['height', String(box)], ['fill', '#fff']])
+  for (const [k, v] of [
+    ['x', '-4'],
+    ['y', '-4'],
+    ['width', String(box)],
+    ['height', String(box)],
+    ['fill', '#fff'],
+  ])
     ground.setAttribute(k, v);
   const modules = document.createElementNS(SVG, 'path');
   modules.setAttribute('d', qr.path);

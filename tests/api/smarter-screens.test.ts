@@ -21,13 +21,18 @@ async function channelWithScreen(name: string, screenName: string) {
   const channel = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name });
   expect(channel.status, JSON.stringify(channel.body)).toBe(201);
   const screen = await pairedScreen(crew.admin.agent, venue.id, screenName);
-  const assigned = await crew.editor.agent.put(`/api/channels/${channel.body.data.id}/screens`).send({ screenIds: [screen.screenId] });
+  const assigned = await crew.editor.agent
+    .put(`/api/channels/${channel.body.data.id}/screens`)
+    .send({ screenIds: [screen.screenId] });
   expect(assigned.status).toBe(200);
   return { channelId: channel.body.data.id as string, ...screen };
 }
 
 const heartbeat = async (token: string, body: object) =>
-  supertest(await getTestApp()).post('/api/kiosk/heartbeat').set('Authorization', `Bearer ${token}`).send(body);
+  supertest(await getTestApp())
+    .post('/api/kiosk/heartbeat')
+    .set('Authorization', `Bearer ${token}`)
+    .send(body);
 
 describe('slide schedules', () => {
   it('stores a sunset-relative schedule, describes it, and sends it with the venue’s sunrises and sunsets', async () => {
@@ -111,7 +116,12 @@ describe('screen health', () => {
   it('records what a screen shows, its player and orientation; refuses hostile heartbeat fields', async () => {
     const { screenId, token } = await pairedScreen(crew.admin.agent, venue.id, 'Health screen');
     const slideId = '6f1d1c5e-9a43-4d7e-8f33-0a1b2c3d4e5f';
-    const ok = await heartbeat(token, { playerVersion: 'starproof-player 1.1', slideId, slideTitle: 'The sky tonight', orientation: 'portrait' });
+    const ok = await heartbeat(token, {
+      playerVersion: 'starproof-player 1.1',
+      slideId,
+      slideTitle: 'The sky tonight',
+      orientation: 'portrait',
+    });
     expect(ok.status).toBe(200);
     expect(ok.body.data.orientation).toBe('auto');
     const list = await crew.admin.agent.get(`/api/venues/${venue.id}/screens`);
@@ -142,10 +152,14 @@ describe('screen health', () => {
     expect(set.status).toBe(200);
     expect(set.body.data.orientation).toBe('portrait');
     expect((await heartbeat(token, {})).body.data.orientation).toBe('portrait');
-    const wrong = await crew.admin.agent.patch(`/api/venues/${venue.id}/screens/${screenId}`).send({ orientation: 'upside-down' });
+    const wrong = await crew.admin.agent
+      .patch(`/api/venues/${venue.id}/screens/${screenId}`)
+      .send({ orientation: 'upside-down' });
     expect(wrong.status).toBe(400);
     expect(wrong.body.error.fields.orientation).toBe('The orientation is auto, landscape or portrait');
-    expect((await crew.editor.agent.patch(`/api/venues/${venue.id}/screens/${screenId}`).send({ orientation: 'auto' })).status).toBe(403);
+    expect(
+      (await crew.editor.agent.patch(`/api/venues/${venue.id}/screens/${screenId}`).send({ orientation: 'auto' })).status,
+    ).toBe(403);
   });
 
   it('e-mails admins once per outage when a screen is silent for the channel’s time, and notes its return', async () => {

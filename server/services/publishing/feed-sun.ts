@@ -17,7 +17,10 @@ export const followsTheSun = (s: SlideSchedule | null | undefined): boolean =>
  * Sunrise and sunset at the venue from yesterday for FEED_SUN_DAYS days (local dates), computed
  * once per venue position and local date (about 60 ms a day on the shared machine, so it is kept).
  */
-export function venueSunDays(venue: Pick<Venue, 'id' | 'latitude' | 'longitude' | 'elevationM' | 'timeZone'>, now: number): SunDay[] {
+export function venueSunDays(
+  venue: Pick<Venue, 'id' | 'latitude' | 'longitude' | 'elevationM' | 'timeZone'>,
+  now: number,
+): SunDay[] {
   const today = localDateOf(now, venue.timeZone);
   const key = [venue.id, venue.latitude, venue.longitude, venue.elevationM, venue.timeZone, today].join('|');
   const known = cache.get(key);

@@ -3,6 +3,7 @@ import type { SlideDto, SlideUpdateInput } from '@shared/schemas/channel.ts';
 import { ChannelLimits } from '@shared/validations.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
+import { draftOf, scheduleOf, SlideScheduleFields } from './slide-schedule-fields.tsx';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
@@ -15,18 +16,22 @@ export function toLocalInput(iso: string | null): string {
 
 const fromLocalInput = (value: string) => (value ? new Date(value).toISOString() : null);
 
-/** Duration and optional start and end of one slide; saved together. */
+/** Duration, optional start and end, and the schedule of one slide; saved together. */
 export function SlideTimingForm({
   slide,
   busy,
   error,
+  scheduleErrors = [],
   onSave,
 }: {
   slide: SlideDto;
   busy: boolean;
   error?: string | null;
+  /** The server's messages about the schedule, field by field. */
+  scheduleErrors?: string[];
   onSave: (input: SlideUpdateInput) => void;
 }) {
+  const [schedule, setSchedule] = useState(draftOf(slide.schedule));
   const [duration, setDuration] = useState(String(slide.durationS));
   const [startsAt, setStartsAt] = useState(toLocalInput(slide.startsAt));
   const [endsAt, setEndsAt] = useState(toLocalInput(slide.endsAt));
@@ -46,6 +51,7 @@ export function SlideTimingForm({
           durationS: clamped,
           startsAt: fromLocalInput(startsAt),
           endsAt: fromLocalInput(endsAt),
+          schedule: scheduleOf(schedule),
           ...(slide.kind === 'image' ? { caption } : {}),
         });
       }}
@@ -76,6 +82,7 @@ export function SlideTimingForm({
       <Button type="submit" variant="secondary" busy={busy}>
         Save timing
       </Button>
+      <SlideScheduleFields draft={schedule} onChange={setSchedule} errors={scheduleErrors} />
       {slide.kind === 'image' && (
         <TextField
           className="sm:col-span-4"
