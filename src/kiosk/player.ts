@@ -51,8 +51,6 @@ export class Player {
 
   /** Shows the saved feed at once (if any), then keeps it fresh. */
   start(): void {
-    applyOrientation();
-    window.addEventListener('resize', applyOrientation);
     this.root.replaceChildren(this.status);
     const saved = this.options.preview ? null : loadSavedFeed();
     if (saved) {
@@ -71,7 +69,6 @@ export class Player {
   /** Stops every timer (before showing the pairing form). */
   stop(): void {
     this.stopped = true;
-    window.removeEventListener('resize', applyOrientation);
     window.clearTimeout(this.slideTimer);
     for (const t of this.timers) window.clearInterval(t);
   }

@@ -57,7 +57,7 @@ const SVG = 'http://www.w3.org/2000/svg';
  * The QR code to the page's public address, drawn from the feed's path (dark modules on a light
  * square with the standard four-module quiet zone, ISO/IEC 18004), beside a line saying what it opens.
  */
-function qrCode(qr: FeedQr): HTMLElement {
+function qrCode(qr: FeedQr, place: 'in-text' | 'on-picture' = 'in-text'): HTMLElement {
   const svg = document.createElementNS(SVG, 'svg');
   const box = qr.size + 8;
   svg.setAttribute('viewBox', `-4 -4 ${box} ${box}`);
@@ -79,7 +79,7 @@ function qrCode(qr: FeedQr): HTMLElement {
   svg.append(ground, modules);
   return h(
     'figure',
-    { class: 'qr', 'data-url': qr.url },
+    { class: `qr qr-${place}`, 'data-url': qr.url },
     svg,
     h('figcaption', {}, 'Scan for the whole page, with how we know each number'),
   );
@@ -91,6 +91,12 @@ function picture(slide: FeedSlide, src: string): HTMLElement {
   return img;
 }
 
+/** "04:05 tomorrow" as the time and a smaller day word, which a narrow (portrait) table puts on its own line. */
+function timeCell(text: string): HTMLElement {
+  const m = /^(\d\d:\d\d) (tomorrow|on \d{4}-\d\d-\d\d)$/.exec(text);
+  return m ? h('td', {}, m[1], ' ', h('span', { class: 'day' }, m[2])) : h('td', {}, text);
+}
+
 function skyTable(sky: FeedSky): HTMLElement {
   const up = sky.planets.filter((p) => p.up_after_dusk);
   const down = sky.planets.filter((p) => !p.up_after_dusk);
@@ -100,9 +106,9 @@ function skyTable(sky: FeedSky): HTMLElement {
       'tr',
       {},
       h('th', { scope: 'row' }, p.name),
-      h('td', {}, p.rise),
-      h('td', {}, p.highest),
-      h('td', {}, p.set),
+      timeCell(p.rise),
+      timeCell(p.highest),
+      timeCell(p.set),
       h('td', {}, p.light_time),
     ),
   );
@@ -158,9 +164,11 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
         h('h1', { class: 'title' }, nb(item.title)),
         slide.text ? h('p', { class: 'body' }, nb(slide.text)) : null,
         statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280),
-        slide.qr ? qrCode(slide.qr) : null,
+        slide.qr && slide.layout === 'text' ? qrCode(slide.qr) : null,
       ),
     );
+    // Beside a picture the text column has no room to spare: the code sits on the picture's lower left.
+    if (slide.qr && slide.layout === 'image-text') layer.append(qrCode(slide.qr, 'on-picture'));
   }
   const credit = creditLine(slide);
   if (credit && imageSrc) layer.append(credit);

@@ -123,7 +123,7 @@ export function SlideScheduleFields({
 }) {
   const set = (patch: Partial<ScheduleDraft>) => onChange({ ...draft, ...patch });
   return (
-    <fieldset className="space-y-3 rounded-md border border-rule p-3 sm:col-span-4">
+    <fieldset className="min-w-0 space-y-3 rounded-md border border-rule p-3">
       <legend className="px-1 text-sm font-medium text-ink">Schedule (the venue’s local time)</legend>
       <label className="flex items-center gap-2 text-sm">
         <input type="checkbox" checked={draft.on} onChange={(e) => set({ on: e.target.checked })} />
@@ -131,7 +131,7 @@ export function SlideScheduleFields({
       </label>
       {draft.on && (
         <>
-          <fieldset>
+          <fieldset className="min-w-0">
             <legend className="mb-1 text-sm font-medium text-ink">Days</legend>
             <div className="flex flex-wrap gap-3">
               {WEEKDAYS.map((d) => (

@@ -43,7 +43,7 @@ export function SlideTimingForm({
   return (
     <form
       aria-label={`Timing for slide ${slide.position + 1}`}
-      className="mt-3 grid gap-3 border-t border-rule pt-3 sm:grid-cols-[8rem_1fr_1fr_auto] sm:items-end"
+      className="mt-3 space-y-3 border-t border-rule pt-3"
       onSubmit={(e) => {
         e.preventDefault();
         setDuration(String(clamped));
@@ -56,42 +56,44 @@ export function SlideTimingForm({
         });
       }}
     >
-      <TextField
-        label="Seconds on screen"
-        type="number"
-        min={ChannelLimits.durationMin}
-        max={ChannelLimits.durationMax}
-        value={duration}
-        onChange={(e) => setDuration(e.target.value)}
-        hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
-      />
-      <TextField
-        label="Show from (optional)"
-        type="datetime-local"
-        value={startsAt}
-        onChange={(e) => setStartsAt(e.target.value)}
-        hint="Your local time"
-      />
-      <TextField
-        label="Show until (optional)"
-        type="datetime-local"
-        value={endsAt}
-        onChange={(e) => setEndsAt(e.target.value)}
-        error={error ?? undefined}
-      />
-      <Button type="submit" variant="secondary" busy={busy}>
-        Save timing
-      </Button>
-      <SlideScheduleFields draft={schedule} onChange={setSchedule} errors={scheduleErrors} />
-      {slide.kind === 'image' && (
+      <div className="grid gap-3 sm:grid-cols-[8rem_1fr_1fr_auto] sm:items-end xl:grid-cols-2 2xl:grid-cols-[8rem_1fr_1fr_auto]">
         <TextField
-          className="sm:col-span-4"
-          label="Caption"
-          maxLength={ChannelLimits.captionMax}
-          value={caption}
-          onChange={(e) => setCaption(e.target.value)}
+          label="Seconds on screen"
+          type="number"
+          min={ChannelLimits.durationMin}
+          max={ChannelLimits.durationMax}
+          value={duration}
+          onChange={(e) => setDuration(e.target.value)}
+          hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
         />
-      )}
+        <TextField
+          label="Show from (optional)"
+          type="datetime-local"
+          value={startsAt}
+          onChange={(e) => setStartsAt(e.target.value)}
+          hint="Your local time"
+        />
+        <TextField
+          label="Show until (optional)"
+          type="datetime-local"
+          value={endsAt}
+          onChange={(e) => setEndsAt(e.target.value)}
+          error={error ?? undefined}
+        />
+        <Button type="submit" variant="secondary" busy={busy}>
+          Save timing
+        </Button>
+        {slide.kind === 'image' && (
+          <TextField
+            className="col-span-full"
+            label="Caption"
+            maxLength={ChannelLimits.captionMax}
+            value={caption}
+            onChange={(e) => setCaption(e.target.value)}
+          />
+        )}
+      </div>
+      <SlideScheduleFields draft={schedule} onChange={setSchedule} errors={scheduleErrors} />
     </form>
   );
 }
