@@ -158,9 +158,11 @@ export class Player {
     const item = items.length ? items[(at + 1) % items.length] : null;
     const timeZone = this.feed?._starproof.venue.time_zone ?? 'UTC';
     if (!item) {
-      if (this.current?.id !== 'holding') {
+      // "Connecting…" until a feed arrives, then the venue's calm holding screen.
+      const holding = this.feed ? 'holding' : 'connecting';
+      if (this.current?.id !== holding) {
         const note = this.feed ? 'More about tonight’s sky will appear here soon.' : 'Connecting…';
-        this.swap('holding', renderHolding(this.feed?._starproof.venue.name ?? this.options.venueName, note));
+        this.swap(holding, renderHolding(this.feed?._starproof.venue.name ?? this.options.venueName, note));
       }
       this.slideTimer = window.setTimeout(() => void this.next(), 10_000);
       return;

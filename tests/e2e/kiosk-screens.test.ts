@@ -105,7 +105,7 @@ describe('smarter screens in the browser', () => {
       'channel',
     ).body.data;
     await page.goto(`${baseUrl}/kiosk?preview=${empty.id}`);
-    await expect.poll(() => page.locator('.slide.shown.layout-holding').count()).toBe(1);
+    await expect.poll(() => page.locator('.slide.shown.layout-holding .holding-venue').textContent()).toBe(DEMO_VENUE.name);
     await page.waitForTimeout(1700);
     expect(await overflowing(page)).toEqual([]);
     await screenshot(page, 'kiosk-portrait-holding');
