@@ -34,6 +34,26 @@ const windowOk = (v: { startsAt?: string | null; endsAt?: string | null }) =>
   !v.startsAt || !v.endsAt || Date.parse(v.endsAt) > Date.parse(v.startsAt);
 const windowIssue = { message: 'The end must be after the start', path: ['endsAt'] };
 
+/** Every time zone is within 14 hours of UTC, so a local date starts no earlier and ends no later than this around UTC. */
+const ZONE_MARGIN_MS = 14 * 3_600_000;
+
+/**
+ * A slide's start–end window must meet its schedule's dates somewhere: a window that ends before the
+ * first date begins anywhere on Earth (or starts after the last date has ended) would never show.
+ */
+const windowMeetsDates = (v: { startsAt?: string | null; endsAt?: string | null; schedule?: SlideSchedule | null }) => {
+  const s = v.schedule;
+  if (!s) return true;
+  if (v.endsAt && s.firstDate && Date.parse(v.endsAt) <= Date.parse(`${s.firstDate}T00:00:00Z`) - ZONE_MARGIN_MS) return false;
+  if (v.startsAt && s.lastDate && Date.parse(v.startsAt) >= Date.parse(`${s.lastDate}T00:00:00Z`) + 86_400_000 + ZONE_MARGIN_MS)
+    return false;
+  return true;
+};
+const datesIssue = {
+  message: 'The slide’s start and end fall outside the schedule’s first and last days: it would never show',
+  path: ['schedule', 'firstDate'],
+};
+
 export const ChannelCreateSchema = z.object({ venueId: z.uuid({ message: 'Choose a venue' }), name });
 export type ChannelCreateInput = z.infer<typeof ChannelCreateSchema>;
 
@@ -92,7 +112,8 @@ export const SlideCreateSchema = z
     ],
     { message: 'The slide kind must be page, image or sky_tonight' },
   )
-  .refine(windowOk, windowIssue);
+  .refine(windowOk, windowIssue)
+  .refine(windowMeetsDates, datesIssue);
 export type SlideCreateInput = z.infer<typeof SlideCreateSchema>;
 
 export const SlideUpdateSchema = z
@@ -102,7 +123,8 @@ export const SlideUpdateSchema = z
     statementIds: statementIds.optional(),
     mediaId: z.uuid({ message: 'Choose an image' }).nullable().optional(),
   })
-  .refine(windowOk, windowIssue);
+  .refine(windowOk, windowIssue)
+  .refine(windowMeetsDates, datesIssue);
 export type SlideUpdateInput = z.infer<typeof SlideUpdateSchema>;
 
 export const SlideOrderSchema = z.object({

@@ -83,6 +83,17 @@ describe('slide schedules', () => {
       expect(res.body.error.code).toBe('invalid_input');
       expect(res.body.error.fields[field], JSON.stringify(res.body.error.fields)).toMatch(message);
     }
+    // A start–end window wholly before the schedule's first day could never show either.
+    const apart = await crew.editor.agent.post(`/api/channels/${channelId}/slides`).send({
+      kind: 'sky_tonight',
+      startsAt: '2027-01-01T18:00:00Z',
+      endsAt: '2027-01-31T18:00:00Z',
+      schedule: { firstDate: '2027-03-01', lastDate: '2027-03-31' },
+    });
+    expect(apart.status).toBe(400);
+    expect(apart.body.error.fields['schedule.firstDate']).toMatch(
+      /outside the schedule’s first and last days: it would never show/,
+    );
     const channel = await crew.editor.agent.get(`/api/channels/${channelId}`);
     expect(channel.body.data.slides).toEqual([]); // nothing half-written
   });
