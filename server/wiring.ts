@@ -22,6 +22,8 @@ import {
   invalidateKioskFeeds,
   invalidatePublicPages,
   publishingEvents,
+  runScreenSilenceJob,
+  SCREEN_SILENCE_JOB,
 } from './services/publishing/index.ts';
 import { settingsEvents } from './services/settings/index.ts';
 import {
@@ -138,6 +140,8 @@ export function wireServer(): void {
   registerJob(TOKEN_PURGE_JOB, runTokenPurgeJob);
   // rate limits: counters whose window has ended
   registerJob(RATE_LIMIT_PURGE_JOB, runRateLimitPurgeJob);
+  // publishing: kiosk screens silent for longer than their channel allows → one e-mail to admins per outage
+  registerJob(SCREEN_SILENCE_JOB, runScreenSilenceJob);
 }
 
 /**
@@ -158,4 +162,6 @@ export async function startSchedules(boss: PgBoss): Promise<void> {
   await boss.schedule(TOKEN_PURGE_JOB, '17 3 * * *', {}, { tz: 'UTC' });
   // rate-limit counters whose window has ended, hourly at :41
   await boss.schedule(RATE_LIMIT_PURGE_JOB, '41 * * * *', {}, { tz: 'UTC' });
+  // silent kiosk screens, checked every minute
+  await boss.schedule(SCREEN_SILENCE_JOB, '* * * * *', {}, { tz: 'UTC' });
 }

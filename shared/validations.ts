@@ -16,6 +16,7 @@ export const KioskLimits = {
   /** A pairing code works for this long after it is shown. */
   pairingCodeMinutes: 15,
   playerVersionMax: 40,
+  slideTitleMax: 200,
   /** The heartbeat's "what is showing" object, as JSON. */
   showingMaxBytes: 4000,
   /** A screen seen within this many seconds counts as online. */
@@ -72,4 +73,7 @@ export const ChannelLimits = {
   durationDefault: 12,
   captionMax: 300,
   statementsPerSlideMax: 4,
+  /** A screen silent this long (minutes) may be reported to admins: from five minutes to a week. */
+  silenceAlertMin: 5,
+  silenceAlertMax: 10080,
 } as const;

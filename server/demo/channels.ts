@@ -1,5 +1,6 @@
 import { Op } from 'sequelize';
 import { Channel, ChannelScreen, ChannelSlide, KioskScreen, Page, User, Venue } from '../models/index.ts';
+import { WEEKDAYS } from '@shared/schemas/slide-schedule.ts';
 import { DEMO_ACCOUNTS, DEMO_VENUE } from './accounts.ts';
 
 const DEMO_CHANNEL = 'Foyer loop (demo)';
@@ -42,8 +43,10 @@ async function seedBilingualChannel(venue: Venue, editor: User | null): Promise<
 }
 
 /**
- * Demo kiosk channels at the demo venue. The foyer loop: every published demo page (with its statements) and the
- * sky tonight, shown by the venue's demo screens. Idempotent: does nothing once the channel exists.
+ * Demo kiosk channels at the demo venue. The foyer loop: every published demo page (with its
+ * statements and a QR code to its public page) and the sky tonight, scheduled from an hour before
+ * the venue's sunset until 23:00, shown by the venue's demo screens; a screen silent for 30 minutes
+ * is e-mailed to admins. Idempotent: does nothing once the channel exists.
  */
 export async function seedDemoChannels(): Promise<void> {
   const venue = await Venue.findOne({ where: { name: DEMO_VENUE.name } });
@@ -55,7 +58,13 @@ export async function seedDemoChannels(): Promise<void> {
     where: { publishedSnapshot: { [Op.ne]: null }, title: { [Op.like]: '%(demo)' } },
     order: [['title', 'ASC']],
   });
-  const channel = await Channel.create({ venueId: venue.id, name: DEMO_CHANNEL, createdById: editor?.id ?? null });
+  const channel = await Channel.create({
+    venueId: venue.id,
+    name: DEMO_CHANNEL,
+    createdById: editor?.id ?? null,
+    showQr: true,
+    silenceAlertMinutes: 30,
+  });
   let position = 0;
   for (const page of pages) {
     const statementIds = Object.keys(page.publishedSnapshot!.statementTexts).slice(0, 2);
@@ -68,7 +77,19 @@ export async function seedDemoChannels(): Promise<void> {
       durationS: 20,
     });
   }
-  await ChannelSlide.create({ channelId: channel.id, position: position++, kind: 'sky_tonight', durationS: 25 });
+  await ChannelSlide.create({
+    channelId: channel.id,
+    position: position++,
+    kind: 'sky_tonight',
+    durationS: 25,
+    schedule: {
+      days: [...WEEKDAYS],
+      from: { at: 'sunset', offsetMin: -60 },
+      until: { at: 'clock', time: '23:00' },
+      firstDate: null,
+      lastDate: null,
+    },
+  });
   const screens = await KioskScreen.findAll({ where: { venueId: venue.id } });
   for (const screen of screens) {
     await ChannelScreen.findOrCreate({

@@ -7,6 +7,7 @@ import {
   type Sequelize,
 } from 'sequelize';
 import type { SlideKind } from '@shared/schemas/channel.ts';
+import type { SlideSchedule } from '@shared/schemas/slide-schedule.ts';
 
 /** One slide of a channel: a published page, an image with a caption, or the sky tonight. */
 export class ChannelSlide extends Model<InferAttributes<ChannelSlide>, InferCreationAttributes<ChannelSlide>> {
@@ -24,6 +25,8 @@ export class ChannelSlide extends Model<InferAttributes<ChannelSlide>, InferCrea
   declare durationS: CreationOptional<number>;
   declare startsAt: CreationOptional<Date | null>;
   declare endsAt: CreationOptional<Date | null>;
+  /** When the slide shows by the venue's clock (weekdays, dates, times tied to the clock or the Sun); null = always. */
+  declare schedule: CreationOptional<SlideSchedule | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -41,6 +44,7 @@ export class ChannelSlide extends Model<InferAttributes<ChannelSlide>, InferCrea
         durationS: { type: DataTypes.SMALLINT, allowNull: false, defaultValue: 12 },
         startsAt: { type: DataTypes.DATE },
         endsAt: { type: DataTypes.DATE },
+        schedule: { type: DataTypes.JSONB },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

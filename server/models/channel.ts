@@ -18,6 +18,10 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
   declare version: CreationOptional<number>;
   /** The languages (locale tags) the channel plays, in order; screens without their own alternate between them. */
   declare languages: CreationOptional<string[]>;
+  /** Object slides carry a QR code to the page's public address. */
+  declare showQr: CreationOptional<boolean>;
+  /** Minutes without a heartbeat before admins are e-mailed about one of the channel's screens; null = never. */
+  declare silenceAlertMinutes: CreationOptional<number | null>;
   declare createdById: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -33,6 +37,8 @@ export class Channel extends Model<InferAttributes<Channel>, InferCreationAttrib
         name: { type: DataTypes.STRING(80), allowNull: false },
         version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         languages: { type: DataTypes.ARRAY(DataTypes.STRING(10)), allowNull: false, defaultValue: [] },
+        showQr: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: true },
+        silenceAlertMinutes: { type: DataTypes.INTEGER },
         createdById: { type: DataTypes.UUID },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,

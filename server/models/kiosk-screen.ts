@@ -1,3 +1,4 @@
+import type { ReportedOrientation, ScreenOrientation } from '@shared/schemas/kiosk.ts';
 import {
   DataTypes,
   Model,
@@ -23,6 +24,15 @@ export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreati
   declare showing: CreationOptional<Record<string, unknown> | null>;
   /** The one language this screen plays (a locale tag), or null to alternate between its channel's. */
   declare language: CreationOptional<string | null>;
+  /** How the screen hangs, as an admin set it: auto lets the player's viewport decide. */
+  declare orientation: CreationOptional<ScreenOrientation>;
+  /** The slide on screen at the last heartbeat (null: the holding screen), and its title. */
+  declare showingSlideId: CreationOptional<string | null>;
+  declare showingSlideTitle: CreationOptional<string | null>;
+  /** The orientation the player reported laying slides out in. */
+  declare reportedOrientation: CreationOptional<ReportedOrientation | null>;
+  /** When admins were e-mailed that the screen went silent; cleared by its next heartbeat. */
+  declare silenceAlertedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -41,6 +51,11 @@ export class KioskScreen extends Model<InferAttributes<KioskScreen>, InferCreati
         playerVersion: { type: DataTypes.STRING(40) },
         showing: { type: DataTypes.JSONB },
         language: { type: DataTypes.STRING(10) },
+        orientation: { type: DataTypes.STRING(10), allowNull: false, defaultValue: 'auto' },
+        showingSlideId: { type: DataTypes.UUID },
+        showingSlideTitle: { type: DataTypes.STRING(200) },
+        reportedOrientation: { type: DataTypes.STRING(10) },
+        silenceAlertedAt: { type: DataTypes.DATE },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -1,3 +1,5 @@
+import { isShowingAt } from '@shared/schedule/evaluate.ts';
+import { describeSchedule } from '@shared/schemas/slide-schedule.ts';
 import type { ChannelDetailDto, ChannelRowDto, ChannelScreenRef, SlideDto, SlideState } from '@shared/schemas/channel.ts';
 import { renditionUrl } from '../media/keys.ts';
 import type { Channel, ChannelSlide, KioskScreen, Media, Page, User } from '../models/index.ts';
@@ -27,6 +29,7 @@ function slideState(
   page: Page | undefined,
   media: Media | undefined,
   now: number,
+  onSchedule: boolean,
 ): { state: SlideState; stateText: string | null } {
   if (slide.kind === 'page' && !page?.publishedSnapshot)
     return { state: 'page_unpublished', stateText: 'Not shown: the page is not published' };
@@ -35,6 +38,7 @@ function slideState(
   if (slide.startsAt && slide.startsAt.getTime() > now)
     return { state: 'scheduled', stateText: `Starts ${slide.startsAt.toISOString()}` };
   if (!inWindow(slide, now)) return { state: 'ended', stateText: 'Not shown: its end date has passed' };
+  if (!onSchedule) return { state: 'off_schedule', stateText: `Not on screen now: shown ${describeSchedule(slide.schedule)}` };
   return { state: 'showing', stateText: null };
 }
 
@@ -62,16 +66,20 @@ export function presentChannelDetail(
       durationS: s.durationS,
       startsAt: s.startsAt?.toISOString() ?? null,
       endsAt: s.endsAt?.toISOString() ?? null,
+      schedule: s.schedule ?? null,
+      scheduleText: describeSchedule(s.schedule ?? null),
       caption: s.caption,
       page: page ? { id: page.id, title: page.publishedSnapshot?.title ?? page.title } : null,
       statementIds: s.statementIds ?? [],
       media: m ? { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText } : null,
-      ...slideState(s, page, m, now),
+      ...slideState(s, page, m, now, isShowingAt(s.schedule, now, context.timeZone, context.sunDays)),
     };
   });
   return {
     ...presentChannelRow(channel, context.row),
     version: channel.version,
+    showQr: channel.showQr,
+    silenceAlertMinutes: channel.silenceAlertMinutes ?? null,
     slides: slideDtos,
     venueScreens: context.venueScreens.map((s) => {
       const showing = context.channelOfScreen.get(s.id) ?? null;

@@ -28,6 +28,13 @@ export function presentKioskScreen(screen: KioskScreen, now = Date.now()): Kiosk
     playerVersion: screen.playerVersion ?? null,
     showing: screen.showing ?? null,
     language: screen.language ?? null,
+    showingSlide:
+      screen.showingSlideId || screen.showingSlideTitle
+        ? { id: screen.showingSlideId ?? null, title: screen.showingSlideTitle ?? '' }
+        : null,
+    orientation: screen.orientation ?? 'auto',
+    reportedOrientation: screen.reportedOrientation ?? null,
+    silenceAlertedAt: screen.silenceAlertedAt?.toISOString() ?? null,
     createdAt: screen.createdAt.toISOString(),
   };
 }

@@ -39,8 +39,10 @@ kioskRouter.post('/heartbeat', requireKiosk, validate(KioskHeartbeatSchema), asy
   const input = req.body;
   assertOwnScreen(screen, { screenId: input.screenId });
   await recordHeartbeat(screen, input);
-  // The player trusts the server's clock over its own.
-  res.json({ data: { screenId: screen.id, venueId: screen.venueId, serverTime: new Date().toISOString() } });
+  // The player trusts the server's clock over its own, and lays slides out as the admin set the screen.
+  res.json({
+    data: { screenId: screen.id, venueId: screen.venueId, serverTime: new Date().toISOString(), orientation: screen.orientation },
+  });
 });
 
 kioskRouter.get('/screen', requireKiosk, async (req, res) => {

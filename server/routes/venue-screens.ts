@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import { ScreenCreateSchema, ScreenLanguageSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
+import { ScreenCreateSchema, ScreenUpdateSchema, type PairingCodeDto } from '@shared/schemas/kiosk.ts';
 import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { authorize } from '../policies/index.ts';
@@ -11,6 +11,7 @@ import {
   listScreens,
   removeScreen,
   setScreenLanguage,
+  setScreenOrientation,
 } from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
 
@@ -46,20 +47,25 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   res.status(201).json({ data: body });
 });
 
-/** The one language the screen plays, or null to alternate between its channel's languages. */
-venueScreensRouter.patch('/:screenId', validate(ScreenLanguageSchema), async (req, res) => {
-  const viewer = currentUser(req);
-  const venue = await loadVenue(parentParam(req, 'venueId'));
-  authorize(viewer, 'venue', 'manageScreens', venue);
-  const screen = await loadScreen(venue, req.params.screenId);
-  res.json({ data: presentKioskScreen(await setScreenLanguage(screen, req.body.language, viewer, req.ip)) });
-});
-
 venueScreensRouter.post('/:screenId/revoke', async (req, res) => {
   const viewer = currentUser(req);
   const venue = await loadVenue(parentParam(req, 'venueId'));
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await revokeScreen(await loadScreen(venue, req.params.screenId), viewer, req.ip);
+  res.json({ data: presentKioskScreen(screen) });
+});
+
+/**
+ * How the screen hangs (auto, landscape, portrait) and/or the one language it plays (null: alternate
+ * between its channel's); its player follows at its next heartbeat.
+ */
+venueScreensRouter.patch('/:screenId', validate(ScreenUpdateSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const venue = await loadVenue(parentParam(req, 'venueId'));
+  authorize(viewer, 'venue', 'manageScreens', venue);
+  let screen = await loadScreen(venue, req.params.screenId);
+  if (req.body.language !== undefined) screen = await setScreenLanguage(screen, req.body.language, viewer, req.ip);
+  if (req.body.orientation !== undefined) screen = await setScreenOrientation(screen, req.body.orientation, viewer, req.ip);
   res.json({ data: presentKioskScreen(screen) });
 });
 

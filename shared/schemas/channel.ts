@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { ChannelLimits } from '../validations.ts';
 import { LocaleTagSchema } from './page-version.ts';
 import { STATEMENT_LOCALES } from '../statements/locales.ts';
+import { SlideScheduleSchema, type SlideSchedule } from './slide-schedule.ts';
 
 export const SLIDE_KINDS = ['page', 'image', 'sky_tonight'] as const;
 export type SlideKind = (typeof SLIDE_KINDS)[number];
@@ -35,6 +36,26 @@ const windowOk = (v: { startsAt?: string | null; endsAt?: string | null }) =>
   !v.startsAt || !v.endsAt || Date.parse(v.endsAt) > Date.parse(v.startsAt);
 const windowIssue = { message: 'The end must be after the start', path: ['endsAt'] };
 
+/** Every time zone is within 14 hours of UTC, so a local date starts no earlier and ends no later than this around UTC. */
+const ZONE_MARGIN_MS = 14 * 3_600_000;
+
+/**
+ * A slide's start–end window must meet its schedule's dates somewhere: a window that ends before the
+ * first date begins anywhere on Earth (or starts after the last date has ended) would never show.
+ */
+const windowMeetsDates = (v: { startsAt?: string | null; endsAt?: string | null; schedule?: SlideSchedule | null }) => {
+  const s = v.schedule;
+  if (!s) return true;
+  if (v.endsAt && s.firstDate && Date.parse(v.endsAt) <= Date.parse(`${s.firstDate}T00:00:00Z`) - ZONE_MARGIN_MS) return false;
+  if (v.startsAt && s.lastDate && Date.parse(v.startsAt) >= Date.parse(`${s.lastDate}T00:00:00Z`) + 86_400_000 + ZONE_MARGIN_MS)
+    return false;
+  return true;
+};
+const datesIssue = {
+  message: 'The slide’s start and end fall outside the schedule’s first and last days: it would never show',
+  path: ['schedule', 'firstDate'],
+};
+
 export const ChannelCreateSchema = z.object({ venueId: z.uuid({ message: 'Choose a venue' }), name });
 export type ChannelCreateInput = z.infer<typeof ChannelCreateSchema>;
 
@@ -48,12 +69,42 @@ export const ChannelLanguagesSchema = z
   .max(STATEMENT_LOCALES.length)
   .refine((tags) => new Set(tags).size === tags.length, 'A language is listed twice');
 
-export const ChannelUpdateSchema = z.object({ name, languages: ChannelLanguagesSchema.optional() });
+const silenceAlertMinutes = z
+  .number({ message: 'Give the silence before an e-mail in whole minutes, or null for none' })
+  .int('Give the silence before an e-mail in whole minutes, or null for none')
+  .min(
+    ChannelLimits.silenceAlertMin,
+    `Wait at least ${ChannelLimits.silenceAlertMin} minutes before e-mailing about a silent screen`,
+  )
+  .max(
+    ChannelLimits.silenceAlertMax,
+    `Wait at most ${ChannelLimits.silenceAlertMax} minutes (a week) before e-mailing about a silent screen`,
+  )
+  .nullable();
+
+/** Rename a channel, set the languages it plays, show or hide QR codes on its object slides, set when a silent screen is reported. */
+export const ChannelUpdateSchema = z
+  .object({
+    name: name.optional(),
+    showQr: z.boolean({ message: 'showQr is true or false' }).optional(),
+    silenceAlertMinutes: silenceAlertMinutes.optional(),
+    languages: ChannelLanguagesSchema.optional(),
+  })
+  .refine(
+    (v) => Object.values(v).some((x) => x !== undefined),
+    'Say what to change: name, languages, showQr or silenceAlertMinutes',
+  );
 export type ChannelUpdateInput = z.infer<typeof ChannelUpdateSchema>;
 
 export const ChannelListQuerySchema = z.object({ venueId: z.uuid({ message: 'venueId must be a valid id' }).optional() });
 
-const timing = { durationS: DurationSchema.optional(), startsAt: instant.optional(), endsAt: instant.optional() };
+const timing = {
+  durationS: DurationSchema.optional(),
+  startsAt: instant.optional(),
+  endsAt: instant.optional(),
+  /** When the slide shows by the venue's clock; null or absent = always. */
+  schedule: SlideScheduleSchema.nullable().optional(),
+};
 
 /** A new slide: an object page (with chosen statements), an image with a caption, or the sky tonight. */
 export const SlideCreateSchema = z
@@ -77,7 +128,8 @@ export const SlideCreateSchema = z
     ],
     { message: 'The slide kind must be page, image or sky_tonight' },
   )
-  .refine(windowOk, windowIssue);
+  .refine(windowOk, windowIssue)
+  .refine(windowMeetsDates, datesIssue);
 export type SlideCreateInput = z.infer<typeof SlideCreateSchema>;
 
 export const SlideUpdateSchema = z
@@ -87,7 +139,8 @@ export const SlideUpdateSchema = z
     statementIds: statementIds.optional(),
     mediaId: z.uuid({ message: 'Choose an image' }).nullable().optional(),
   })
-  .refine(windowOk, windowIssue);
+  .refine(windowOk, windowIssue)
+  .refine(windowMeetsDates, datesIssue);
 export type SlideUpdateInput = z.infer<typeof SlideUpdateSchema>;
 
 export const SlideOrderSchema = z.object({
@@ -104,7 +157,7 @@ export const ChannelScreensSchema = z.object({
 export type ChannelScreensInput = z.infer<typeof ChannelScreensSchema>;
 
 /** Why a slide is or is not on the screens now. */
-export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'page_unpublished', 'image_not_ready'] as const;
+export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'off_schedule', 'page_unpublished', 'image_not_ready'] as const;
 export type SlideState = (typeof SLIDE_STATES)[number];
 
 export interface SlideDto {
@@ -114,6 +167,9 @@ export interface SlideDto {
   durationS: number;
   startsAt: string | null;
   endsAt: string | null;
+  schedule: SlideSchedule | null;
+  /** The schedule in words ("every day, from 1 h before sunset until 23:00"). */
+  scheduleText: string;
   caption: string;
   page: { id: string; title: string } | null;
   statementIds: string[];
@@ -142,6 +198,8 @@ export interface ChannelRowDto {
 
 export interface ChannelDetailDto extends ChannelRowDto {
   version: number;
+  showQr: boolean;
+  silenceAlertMinutes: number | null;
   slides: SlideDto[];
   /** Every screen at the channel's venue, with the channel it shows now (if any). */
   venueScreens: Array<ChannelScreenRef & { channelId: string | null; channelName: string | null }>;

@@ -1,3 +1,6 @@
+import type { SunDay } from '../schedule/evaluate.ts';
+import type { SlideSchedule } from './slide-schedule.ts';
+
 /**
  * The kiosk feed: JSON Feed 1.1 (https://jsonfeed.org/version/1.1) with our own extension objects,
  * named with a leading underscore as the specification asks (`_starproof`). Feed readers ignore
@@ -57,6 +60,15 @@ export interface FeedSky {
   computed_at: string;
 }
 
+/** A QR code to a page's public address: an SVG path in module units (quiet zone not included). */
+export interface FeedQr {
+  url: string;
+  /** Modules per side. */
+  size: number;
+  /** SVG path data drawing the dark modules, in a size × size box. */
+  path: string;
+}
+
 export interface FeedSlide {
   kind: 'page' | 'image' | 'sky_tonight';
   position: number;
@@ -72,6 +84,10 @@ export interface FeedSlide {
   licence: string | null;
   licence_url: string | null;
   image: FeedImage | null;
+  /** When the slide shows by the venue's clock; absent or null = always. The player evaluates it itself. */
+  schedule?: SlideSchedule | null;
+  /** Object slides: a QR code to the page's public address (absent when the channel hides it). */
+  qr?: FeedQr;
 }
 
 export interface FeedItem {
@@ -110,5 +126,10 @@ export interface KioskFeed {
     venue: { id: string; name: string; time_zone: string };
     /** True when nothing is to be shown: the player shows a calm holding screen. */
     holding: boolean;
+    /**
+     * Sunrise and sunset at the venue from yesterday for a week, local dates; present when a slide's
+     * schedule is tied to the Sun. Beyond the last day the player keeps that day's local times.
+     */
+    sun_days?: SunDay[];
   };
 }

@@ -12,11 +12,23 @@ const screenName = z
 export const ScreenCreateSchema = z.object({ name: screenName });
 export type ScreenCreateInput = z.infer<typeof ScreenCreateSchema>;
 
-/** A screen's own language (a registered locale), or null to alternate between its channel's languages. */
-export const ScreenLanguageSchema = z.object({
-  language: LocaleTagSchema.nullable(),
-});
-export type ScreenLanguageInput = z.infer<typeof ScreenLanguageSchema>;
+/** How a screen hangs: `auto` lets the player's viewport decide (taller than wide is portrait). */
+export const SCREEN_ORIENTATIONS = ['auto', 'landscape', 'portrait'] as const;
+export type ScreenOrientation = (typeof SCREEN_ORIENTATIONS)[number];
+/** What the player reports laying slides out in. */
+export type ReportedOrientation = Exclude<ScreenOrientation, 'auto'>;
+
+/**
+ * An admin's change to a screen: how it hangs, and/or its own language (a registered locale, or null
+ * to alternate between its channel's languages).
+ */
+export const ScreenUpdateSchema = z
+  .object({
+    orientation: z.enum(SCREEN_ORIENTATIONS, { message: 'The orientation is auto, landscape or portrait' }).optional(),
+    language: LocaleTagSchema.nullable().optional(),
+  })
+  .refine((v) => v.orientation !== undefined || v.language !== undefined, 'Say what to change: orientation or language');
+export type ScreenUpdateInput = z.infer<typeof ScreenUpdateSchema>;
 
 /** The pairing code as typed on the player: letters and digits, dash and spaces optional. */
 export const KioskPairSchema = z.object({
@@ -42,6 +54,15 @@ export const KioskHeartbeatSchema = z.object({
     .optional(),
   /** When given, must be this token's own screen. */
   screenId: z.string().optional(),
+  /** The slide on screen (null: the holding screen), and its title as shown. */
+  slideId: z.uuid({ message: 'slideId must be a slide’s id, or null for the holding screen' }).nullable().optional(),
+  slideTitle: z
+    .string({ message: 'slideTitle is the title on screen, as text' })
+    .trim()
+    .max(KioskLimits.slideTitleMax, `slideTitle is at most ${KioskLimits.slideTitleMax} characters`)
+    .optional(),
+  /** How the player lays slides out now. */
+  orientation: z.enum(['landscape', 'portrait'], { message: 'orientation is landscape or portrait' }).optional(),
 });
 export type KioskHeartbeatInput = z.infer<typeof KioskHeartbeatSchema>;
 
@@ -73,6 +94,12 @@ export interface KioskScreenDto {
   showing: Record<string, unknown> | null;
   /** The one language the screen plays, or null: it follows its channel's languages. */
   language: string | null;
+  /** The slide on screen at the last heartbeat (null id: the holding screen). */
+  showingSlide: { id: string | null; title: string } | null;
+  orientation: ScreenOrientation;
+  reportedOrientation: ReportedOrientation | null;
+  /** When admins were e-mailed that the screen went silent (this outage), or null. */
+  silenceAlertedAt: string | null;
   createdAt: string;
 }
 

@@ -2,6 +2,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
   ChannelCreateInput,
+  ChannelUpdateInput,
   ChannelDetailDto,
   ChannelRowDto,
   SlideCreateInput,
@@ -69,6 +70,13 @@ function useChannelEdit<V>(id: string, fn: (vars: V) => Promise<ChannelDetailDto
 /** Renames the channel. */
 export const useRenameChannel = (id: string) =>
   useChannelEdit(id, async (name: string) => (await api.patch<ApiData<ChannelDetailDto>>(`/channels/${id}`, { name })).data);
+/** Shows or hides QR codes on object slides; sets after how many minutes a silent screen is e-mailed to admins. */
+export const useChannelSettings = (id: string) =>
+  useChannelEdit(
+    id,
+    async (input: Pick<ChannelUpdateInput, 'showQr' | 'silenceAlertMinutes'>) =>
+      (await api.patch<ApiData<ChannelDetailDto>>(`/channels/${id}`, input)).data,
+  );
 /** Adds a slide at the end. */
 export const useAddSlide = (id: string) =>
   useChannelEdit(

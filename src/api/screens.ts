@@ -1,6 +1,6 @@
 /** A venue's kiosk screens: the list with their health, adding, re-pairing and revoking one. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { KioskScreenDto, PairingCodeDto, ScreenCreateInput } from '@shared/schemas/kiosk.ts';
+import type { KioskScreenDto, PairingCodeDto, ScreenCreateInput, ScreenUpdateInput } from '@shared/schemas/kiosk.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
 import { venueKeys } from './venues.ts';
 
@@ -32,6 +32,14 @@ export const useRepairScreen = (venueId: string) =>
   useScreenMutation(
     venueId,
     async (screenId: string) => (await api.post<ApiData<PairingCodeDto>>(`/venues/${venueId}/screens/${screenId}/pairing`)).data,
+  );
+
+/** Sets how a screen hangs (auto, landscape, portrait); its player follows at its next heartbeat. */
+export const useSetScreenOrientation = (venueId: string) =>
+  useScreenMutation(
+    venueId,
+    async ({ screenId, ...input }: ScreenUpdateInput & { screenId: string }) =>
+      (await api.patch<ApiData<KioskScreenDto>>(`/venues/${venueId}/screens/${screenId}`, input)).data,
   );
 
 /** Stops a screen from showing anything. */

@@ -1,11 +1,16 @@
 import '@fontsource-variable/inter';
 import './kiosk.css';
+import { applyOrientation } from './orientation.ts';
 import { showPairing } from './pairing.ts';
 import { Player } from './player.ts';
 import { forgetPairing, loadPairing, type Pairing } from './storage.ts';
 
 const root = document.getElementById('kiosk')!;
 const preview = new URLSearchParams(location.search).get('preview');
+if (preview) document.documentElement.classList.add('preview');
+// Portrait or landscape, for the pairing form and every slide; again whenever the window changes shape.
+applyOrientation();
+window.addEventListener('resize', applyOrientation);
 
 function play(pairing: Pairing): void {
   const player = new Player(root, {

@@ -1,12 +1,14 @@
+import { isShowingAt } from '@shared/schedule/evaluate.ts';
 import type { FeedItem, KioskFeed } from '@shared/schemas/kiosk-feed.ts';
 import { learnServerTime, serverNow } from './clock.ts';
 import { h } from './dom.ts';
 import { cacheFeedImages, feedImageUrls, fetchFeed, localImageUrl, releaseImagesExcept } from './feed-client.ts';
+import { applyOrientation, currentOrientation } from './orientation.ts';
 import { renderHolding, renderSlide } from './slides.ts';
-import { loadSavedFeed, saveFeed } from './storage.ts';
+import { loadSavedFeed, saveFeed, saveScreenOrientation } from './storage.ts';
 
 /** Reported in every heartbeat; bump with player changes. */
-export const PLAYER_VERSION = 'starproof-player 1.0';
+export const PLAYER_VERSION = 'starproof-player 1.1';
 const POLL_MS = 30_000;
 const HEARTBEAT_MS = 45_000;
 /** Cross-fade length: 1.5 s, within the 1–2 s the design allows; opacity only, never a flash. */
@@ -27,6 +29,8 @@ const inWindow = (item: FeedItem, now: number) => {
   const s = item._starproof.slide;
   return (!s.starts_at || Date.parse(s.starts_at) <= now) && (!s.ends_at || Date.parse(s.ends_at) > now);
 };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 /** Plays a channel's feed full screen: cross-fades slide to slide, revalidates the feed, keeps playing offline. */
 export class Player {
@@ -69,9 +73,17 @@ export class Player {
     for (const t of this.timers) window.clearInterval(t);
   }
 
+  /**
+   * The slides to play now: inside their window and on their schedule, both by the server's clock
+   * as last learnt (so a screen offline for days still follows the venue's days and evenings).
+   */
   private playable(): FeedItem[] {
     const now = serverNow();
-    return (this.feed?.items ?? []).filter((i) => inWindow(i, now));
+    const feed = this.feed;
+    if (!feed) return [];
+    const timeZone = feed._starproof.venue.time_zone;
+    const sunDays = feed._starproof.sun_days ?? [];
+    return feed.items.filter((i) => inWindow(i, now) && isShowingAt(i._starproof.slide.schedule, now, timeZone, sunDays));
   }
 
   private async poll(): Promise<void> {
@@ -107,6 +119,9 @@ export class Player {
         body: JSON.stringify({
           playerVersion: PLAYER_VERSION,
           screenId: this.options.screenId ?? undefined,
+          slideId: this.current && UUID.test(this.current.id) ? this.current.id : null,
+          slideTitle: (this.current?.layer.getAttribute('aria-label') ?? 'Holding screen').slice(0, 200),
+          orientation: currentOrientation(),
           showing: {
             slideId: this.current?.id ?? null,
             title: this.current?.layer.getAttribute('aria-label') ?? 'Holding screen',
@@ -119,7 +134,10 @@ export class Player {
       if (res.status === 401) return this.unpaired();
       if (res.ok) {
         this.lastContact = Date.now();
-        learnServerTime(((await res.json()) as { data?: { serverTime?: string } }).data?.serverTime);
+        const data = ((await res.json()) as { data?: { serverTime?: string; orientation?: string } }).data;
+        learnServerTime(data?.serverTime);
+        // How the admin set the screen to hang; kept for a restart while offline.
+        if (data?.orientation && saveScreenOrientation(data.orientation)) applyOrientation();
       }
     } catch {
       // Offline: the next heartbeat tries again.
@@ -141,9 +159,11 @@ export class Player {
     const item = items.length ? items[(at + 1) % items.length] : null;
     const timeZone = this.feed?._starproof.venue.time_zone ?? 'UTC';
     if (!item) {
-      if (this.current?.id !== 'holding') {
+      // "Connecting…" until a feed arrives, then the venue's calm holding screen.
+      const holding = this.feed ? 'holding' : 'connecting';
+      if (this.current?.id !== holding) {
         const note = this.feed ? 'More about tonight’s sky will appear here soon.' : 'Connecting…';
-        this.swap('holding', renderHolding(this.feed?._starproof.venue.name ?? this.options.venueName, note));
+        this.swap(holding, renderHolding(this.feed?._starproof.venue.name ?? this.options.venueName, note));
       }
       this.slideTimer = window.setTimeout(() => void this.next(), 10_000);
       return;

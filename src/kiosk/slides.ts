@@ -1,4 +1,4 @@
-import type { FeedItem, FeedSky, FeedSlide, FeedStatement } from '@shared/schemas/kiosk-feed.ts';
+import type { FeedItem, FeedQr, FeedSky, FeedSlide, FeedStatement } from '@shared/schemas/kiosk-feed.ts';
 import { keepDesignationsTogether as nb } from '@shared/text/designations.ts';
 import { h } from './dom.ts';
 
@@ -65,10 +65,50 @@ function creditLine(slide: FeedSlide, language: string | undefined): HTMLElement
   );
 }
 
+const SVG = 'http://www.w3.org/2000/svg';
+
+/**
+ * The QR code to the page's public address, drawn from the feed's path (dark modules on a light
+ * square with the standard four-module quiet zone, ISO/IEC 18004), beside a line saying what it opens.
+ */
+function qrCode(qr: FeedQr, place: 'in-text' | 'on-picture' = 'in-text'): HTMLElement {
+  const svg = document.createElementNS(SVG, 'svg');
+  const box = qr.size + 8;
+  svg.setAttribute('viewBox', `-4 -4 ${box} ${box}`);
+  svg.setAttribute('class', 'qr-code');
+  svg.setAttribute('shape-rendering', 'crispEdges');
+  svg.setAttribute('aria-hidden', 'true');
+  const ground = document.createElementNS(SVG, 'rect');
+  for (const [k, v] of [
+    ['x', '-4'],
+    ['y', '-4'],
+    ['width', String(box)],
+    ['height', String(box)],
+    ['fill', '#fff'],
+  ])
+    ground.setAttribute(k, v);
+  const modules = document.createElementNS(SVG, 'path');
+  modules.setAttribute('d', qr.path);
+  modules.setAttribute('fill', '#000');
+  svg.append(ground, modules);
+  return h(
+    'figure',
+    { class: `qr qr-${place}`, 'data-url': qr.url },
+    svg,
+    h('figcaption', {}, 'Scan for the whole page, with how we know each number'),
+  );
+}
+
 function picture(slide: FeedSlide, src: string): HTMLElement {
   const img = h('img', { class: 'picture', src, alt: slide.image!.alt, decoding: 'async' });
   img.style.objectPosition = `${(slide.image!.focal.x * 100).toFixed(1)}% ${(slide.image!.focal.y * 100).toFixed(1)}%`;
   return img;
+}
+
+/** "04:05 tomorrow" as the time and a smaller day word, which a narrow (portrait) table puts on its own line. */
+function timeCell(text: string): HTMLElement {
+  const m = /^(\d\d:\d\d) (tomorrow|on \d{4}-\d\d-\d\d)$/.exec(text);
+  return m ? h('td', {}, m[1], ' ', h('span', { class: 'day' }, m[2])) : h('td', {}, text);
 }
 
 function skyTable(sky: FeedSky): HTMLElement {
@@ -80,9 +120,9 @@ function skyTable(sky: FeedSky): HTMLElement {
       'tr',
       {},
       h('th', { scope: 'row' }, p.name),
-      h('td', {}, p.rise),
-      h('td', {}, p.highest),
-      h('td', {}, p.set),
+      timeCell(p.rise),
+      timeCell(p.highest),
+      timeCell(p.set),
       h('td', {}, p.light_time),
     ),
   );
@@ -102,7 +142,7 @@ function skyTable(sky: FeedSky): HTMLElement {
 }
 
 /**
- * The DOM for one slide at 1920 × 1080 proportions (sizes scale with the screen): title, text,
+ * The DOM for one slide, laid out by kiosk.css for 1920 × 1080 or 1080 × 1920 (sizes scale with the screen): title, text,
  * statements with their "as of" date, the image with its credit and licence, or the sky table.
  * @param item the feed item
  * @param imageSrc the address to show the image from (a cached object URL when offline)
@@ -140,8 +180,11 @@ export function renderSlide(item: FeedItem, imageSrc: string | null, timeZone: s
         h('h1', { class: 'title' }, nb(item.title)),
         slide.text ? h('p', { class: 'body' }, nb(slide.text)) : null,
         statementList(slide.statements, timeZoneOr(timeZone), (slide.text ?? '').length <= 280, item.language),
+        slide.qr && slide.layout === 'text' ? qrCode(slide.qr) : null,
       ),
     );
+    // Beside a picture the text column has no room to spare: the code sits on the picture's lower left.
+    if (slide.qr && slide.layout === 'image-text') layer.append(qrCode(slide.qr, 'on-picture'));
   }
   const credit = creditLine(slide, item.language);
   if (credit && imageSrc) layer.append(credit);

@@ -10,6 +10,7 @@ export interface Pairing {
 
 const PAIRING = 'starproof.kiosk.pairing';
 const FEED = 'starproof.kiosk.feed';
+const ORIENTATION = 'starproof.kiosk.orientation';
 
 const read = <T>(key: string): T | null => {
   try {
@@ -32,6 +33,24 @@ export function savePairing(pairing: Pairing): void {
 export function forgetPairing(): void {
   localStorage.removeItem(PAIRING);
   localStorage.removeItem(FEED);
+  localStorage.removeItem(ORIENTATION);
+}
+
+/** How an admin set this screen to hang: auto (the viewport decides), landscape or portrait. */
+export const loadScreenOrientation = (): 'auto' | 'landscape' | 'portrait' => {
+  const v = localStorage.getItem(ORIENTATION);
+  return v === 'landscape' || v === 'portrait' ? v : 'auto';
+};
+
+/**
+ * Keeps the admin's setting from a heartbeat answer.
+ * @returns true when it changed
+ */
+export function saveScreenOrientation(value: string): boolean {
+  const v = value === 'landscape' || value === 'portrait' ? value : 'auto';
+  if (v === loadScreenOrientation()) return false;
+  localStorage.setItem(ORIENTATION, v);
+  return true;
 }
 
 /** The last good feed with its ETag, to play through an outage and to revalidate with. */

@@ -102,6 +102,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'GET /api/venues/:venueId/screens': ['401', '401', '403', '403', 'ok', 'ok'],
   'POST /api/venues/:venueId/screens': ['401', '401', '403', '403', '403', 'ok'],
   'POST /api/venues/:venueId/screens/:screenId/pairing': ['401', '401', '403', '403', '403', 'ok'],
+  'PATCH /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'POST /api/kiosk/pair': ['ok', 'ok', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/kiosk/heartbeat': ['401', 'ok', '401', '401', '401', '401'],
   'GET /api/kiosk/screen': ['401', 'ok', '401', '401', '401', '401'],
@@ -138,7 +139,6 @@ const EXPECTED: Record<string, Answer[]> = {
   'DELETE /api/catalogue/measurements/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'DELETE /api/catalogue/objects/:id': ['401', '401', '403', 'ok', '403', 'ok'],
   'POST /api/venues/:venueId/screens/:screenId/revoke': ['401', '401', '403', '403', '403', 'ok'],
-  'PATCH /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:venueId/screens/:screenId': ['401', '401', '403', '403', '403', 'ok'],
   'DELETE /api/venues/:id': ['401', '401', '403', '403', '403', 'ok'],
 };

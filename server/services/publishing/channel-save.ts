@@ -59,43 +59,56 @@ export async function createChannel(input: ChannelCreateInput, actor: User, ip?:
 }
 
 /**
- * Renames a channel and, when `languages` is given, sets the languages it plays.
+ * Renames a channel, sets the languages it plays, shows or hides QR codes on its object slides, or
+ * sets after how long a silent screen is reported to admins.
  * @throws HttpError 409 name taken at the venue
  */
 export async function updateChannel(channel: Channel, input: ChannelUpdateInput, actor: User, ip?: string): Promise<Channel> {
   await getSequelize().transaction(async (transaction) => {
     const row = await lockChannel(channel.id, transaction);
-    await assertNameFree(row.venueId, input.name, row.id, transaction);
-    const languages = input.languages ?? row.languages;
-    const languagesMoved = languages.join(',') !== row.languages.join(',');
-    await row.update({ name: input.name, languages }, { transaction });
-    await touchChannel(row.id, transaction);
-    if (languagesMoved) {
+    // The languages form sends the name unchanged: that is not a rename.
+    if (input.name !== undefined && input.name !== row.name) {
+      await assertNameFree(row.venueId, input.name, row.id, transaction);
+      await row.update({ name: input.name }, { transaction });
+      await recordAudit(
+        {
+          actorId: actor.id,
+          action: 'channel.renamed',
+          subjectType: 'channel',
+          subjectId: row.id,
+          data: { from: channel.name, to: input.name },
+          ip,
+        },
+        transaction,
+      );
+    }
+    if (input.languages !== undefined && input.languages.join(',') !== row.languages.join(',')) {
+      const from = row.languages;
+      await row.update({ languages: input.languages }, { transaction });
       await recordAudit(
         {
           actorId: actor.id,
           action: 'channel.languages_set',
           subjectType: 'channel',
           subjectId: row.id,
-          data: { from: channel.languages, to: languages },
+          data: { from, to: input.languages },
           ip,
         },
         transaction,
       );
     }
-    // A change of languages alone is not a rename.
-    if (channel.name === input.name && input.languages !== undefined) return;
-    await recordAudit(
-      {
-        actorId: actor.id,
-        action: 'channel.renamed',
-        subjectType: 'channel',
-        subjectId: row.id,
-        data: { from: channel.name, to: input.name },
-        ip,
-      },
-      transaction,
-    );
+    const settings = {
+      ...(input.showQr !== undefined ? { showQr: input.showQr } : {}),
+      ...(input.silenceAlertMinutes !== undefined ? { silenceAlertMinutes: input.silenceAlertMinutes } : {}),
+    };
+    if (Object.keys(settings).length) {
+      await row.update(settings, { transaction });
+      await recordAudit(
+        { actorId: actor.id, action: 'channel.settings_changed', subjectType: 'channel', subjectId: row.id, data: settings, ip },
+        transaction,
+      );
+    }
+    await touchChannel(row.id, transaction);
   });
   return channel.reload();
 }

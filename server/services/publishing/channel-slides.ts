@@ -78,6 +78,7 @@ export async function addSlide(channel: Channel, input: SlideCreateInput, actor:
         durationS: input.durationS ?? ChannelLimits.durationDefault,
         startsAt: dateOrNull(input.startsAt),
         endsAt: dateOrNull(input.endsAt),
+        schedule: input.schedule ?? null,
       },
       { transaction },
     );
@@ -107,7 +108,7 @@ async function lockSlide(channel: Channel, slideId: string, transaction: Transac
 }
 
 /**
- * Changes a slide's timing, caption, statements or image.
+ * Changes a slide's timing (window and schedule), caption, statements or image.
  * @throws HttpError 400 window ends before it starts, statement not on the page, image not ready; 404
  */
 export async function updateSlide(
@@ -147,6 +148,7 @@ export async function updateSlide(
         startsAt,
         endsAt,
         ...(input.durationS !== undefined ? { durationS: input.durationS } : {}),
+        ...(input.schedule !== undefined ? { schedule: input.schedule } : {}),
         ...(input.caption !== undefined ? { caption: input.caption } : {}),
         ...(input.statementIds !== undefined ? { statementIds: input.statementIds } : {}),
         ...(input.mediaId !== undefined ? { mediaId: input.mediaId } : {}),

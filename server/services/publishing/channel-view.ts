@@ -1,4 +1,6 @@
 import { Op } from 'sequelize';
+import type { SunDay } from '@shared/schedule/evaluate.ts';
+import { followsTheSun, venueSunDays } from './feed-sun.ts';
 import { Channel, ChannelScreen, ChannelSlide, KioskScreen, Media, MediaRendition, Page, Venue } from '../../models/index.ts';
 
 /** What the channels list shows beside one channel. */
@@ -20,6 +22,9 @@ export interface ChannelDetailContext {
   venueScreens: KioskScreen[];
   channelOfScreen: Map<string, string>;
   channelNames: Map<string, string>;
+  /** The venue's time zone and, when a schedule follows the Sun, its sunrises and sunsets: whether each slide is on schedule now. */
+  timeZone: string;
+  sunDays: SunDay[];
 }
 
 /**
@@ -69,6 +74,8 @@ export async function loadChannelDetail(channel: Channel): Promise<ChannelDetail
     : [];
   const pageIds = slides.flatMap((s) => (s.pageId ? [s.pageId] : []));
   const mediaIds = slides.flatMap((s) => (s.mediaId ? [s.mediaId] : []));
+  const venue = await Venue.findByPk(channel.venueId, { rejectOnEmpty: true });
+  const sunDays = slides.some((s) => followsTheSun(s.schedule)) ? venueSunDays(venue, Date.now()) : [];
   const [pages, media, channels] = await Promise.all([
     pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot'] }) : [],
     mediaIds.length
@@ -84,5 +91,7 @@ export async function loadChannelDetail(channel: Channel): Promise<ChannelDetail
     venueScreens,
     channelOfScreen: new Map(links.map((l) => [l.screenId, l.channelId])),
     channelNames: new Map(channels.map((c) => [c.id, c.name])),
+    timeZone: venue.timeZone,
+    sunDays,
   };
 }

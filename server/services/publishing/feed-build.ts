@@ -6,13 +6,15 @@ import {
   type FeedSlide,
   type KioskFeed,
 } from '@shared/schemas/kiosk-feed.ts';
-import { localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
+import { localDateOf, localToMs, nextDate, nightDateAt } from '@shared/sky/time-zone.ts';
 import { NotFoundError } from '../../errors.ts';
 import { Channel, ChannelSlide, Page, Venue } from '../../models/index.ts';
 import type { FeedDeps } from './feed-fingerprint.ts';
 import { loadPublishedImages, type PublishedImage } from './feed-media.ts';
 import { feedSky, skyHtml } from './feed-sky.ts';
 import { escapeMarkup as e, firstParagraphText, mediaIdsInHtml } from './feed-text.ts';
+import { followsTheSun, venueSunDays } from './feed-sun.ts';
+import { qrFor } from './feed-qr.ts';
 import { getSkySnapshot } from '../sky/index.ts';
 import { publicPageTexts } from '../pages/index.ts';
 import { publicStatements } from '../statements/index.ts';
@@ -105,6 +107,10 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
   for (const s of slides) for (const t of [s.startsAt, s.endsAt]) if (t && t.getTime() > now) until(t.getTime());
 
   const active = slides.filter((s) => inWindow(s, now));
+  // Schedules are left to the player (it follows them offline too); it needs the Sun's times for some.
+  const sunDays = active.some((s) => followsTheSun(s.schedule)) ? venueSunDays(venue, now) : undefined;
+  // Rebuilt at the venue's midnight, so the days roll forward.
+  if (sunDays) until(localToMs(nextDate(localDateOf(now, venue.timeZone)), 0, venue.timeZone));
   let skyDate: string | null = null;
   let sky: Awaited<ReturnType<typeof getSkySnapshot>> = null;
   if (active.some((s) => s.kind === 'sky_tonight')) {
@@ -126,6 +132,7 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
         duration_s: s.durationS,
         starts_at: s.startsAt?.toISOString() ?? null,
         ends_at: s.endsAt?.toISOString() ?? null,
+        ...(s.schedule ? { schedule: s.schedule } : {}),
       };
       const img = images.get(imageOf(s, shownPageId) ?? '');
       if (s.kind === 'page') {
@@ -142,9 +149,18 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
             as_of: statements.get(id)?.asOf ?? snapshot.signedOffAt,
           }));
         const text = firstParagraphText(shown.html);
-        const slide: FeedSlide = { ...base, layout: img ? 'image-text' : 'text', text, statements: chosen, ...imageParts(img) };
-        const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
         const url = pageUrls.get(shownPageId!);
+        // The QR code on object slides leads to the public page of the version on screen.
+        const qr = url && channel?.showQr ? { qr: qrFor(url) } : {};
+        const slide: FeedSlide = {
+          ...base,
+          layout: img ? 'image-text' : 'text',
+          text,
+          statements: chosen,
+          ...imageParts(img),
+          ...qr,
+        };
+        const html = `${img ? figureHtml(img) : ''}<p>${e(text)}</p>${chosen.length ? `<ul>${chosen.map((c) => `<li>${e(c.text)}</li>`).join('')}</ul>` : ''}`;
         items.push({
           id,
           ...(url ? { url } : {}),
@@ -205,6 +221,7 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
       languages,
       venue: { id: venue.id, name: venue.name, time_zone: venue.timeZone },
       holding: items.length === 0,
+      ...(sunDays ? { sun_days: sunDays } : {}),
     },
   };
   return {

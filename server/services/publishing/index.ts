@@ -35,3 +35,5 @@ export { listScreens } from './kiosk-screens.ts';
 export { removeScreen } from './kiosk-screens.ts';
 export { recordHeartbeat } from './kiosk-screens.ts';
 export { setScreenLanguage } from './kiosk-screens.ts';
+export { setScreenOrientation } from './kiosk-screens.ts';
+export { reportSilentScreens, runScreenSilenceJob, SCREEN_SILENCE_JOB } from './screen-silence.ts';

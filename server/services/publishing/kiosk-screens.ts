@@ -1,8 +1,12 @@
+import { Op } from 'sequelize';
 import { getSequelize } from '../../db.ts';
 import { ConflictError } from '../../errors.ts';
 import { KioskScreen, type User, type Venue } from '../../models/index.ts';
+import type { ScreenOrientation } from '@shared/schemas/kiosk.ts';
+import { logger } from '../../logger.ts';
 import { recordAudit } from '../audit.ts';
 import { publishingEvents } from './events.ts';
+import { reportScreenBack } from './screen-silence.ts';
 
 /** A venue's screens, by name. */
 export async function listScreens(venue: Venue): Promise<KioskScreen[]> {
@@ -61,14 +65,54 @@ export async function removeScreen(screen: KioskScreen, actor: User, ip?: string
 export interface Heartbeat {
   playerVersion?: string;
   showing?: KioskScreen['showing'];
+  slideId?: string | null;
+  slideTitle?: string;
+  orientation?: 'landscape' | 'portrait';
 }
 
-/** Records that a screen is alive (and what it plays and shows), by the server's clock. */
+/**
+ * Records that a screen is alive (and what it plays and shows), by the server's clock. A screen
+ * that had been reported silent is marked heard from, and admins get a short note.
+ */
 export async function recordHeartbeat(screen: KioskScreen, beat: Heartbeat): Promise<void> {
   screen.set({ lastSeenAt: new Date() });
   if (beat.playerVersion !== undefined) screen.set({ playerVersion: beat.playerVersion });
   if (beat.showing !== undefined) screen.set({ showing: beat.showing });
+  if (beat.slideId !== undefined) screen.set({ showingSlideId: beat.slideId });
+  if (beat.slideTitle !== undefined) screen.set({ showingSlideTitle: beat.slideTitle });
+  if (beat.orientation !== undefined) screen.set({ reportedOrientation: beat.orientation });
   await screen.save();
+  // Cleared in one statement with its own check, so a silence check running meanwhile cannot leave it set unnoticed.
+  const [, cleared] = await KioskScreen.update(
+    { silenceAlertedAt: null },
+    { where: { id: screen.id, silenceAlertedAt: { [Op.ne]: null } }, returning: true },
+  );
+  screen.set({ silenceAlertedAt: null });
+  if (cleared.length) reportScreenBack(screen).catch((err: unknown) => logger.error({ err }, 'screen back note not sent'));
+}
+
+/** Sets how a screen hangs (its player follows at its next heartbeat), with its audit event. */
+export async function setScreenOrientation(
+  screen: KioskScreen,
+  orientation: ScreenOrientation,
+  actor: User,
+  ip?: string,
+): Promise<KioskScreen> {
+  await getSequelize().transaction(async (transaction) => {
+    await screen.update({ orientation }, { transaction });
+    await recordAudit(
+      {
+        actorId: actor.id,
+        action: 'kiosk.screen_orientation_set',
+        subjectType: 'kiosk_screen',
+        subjectId: screen.id,
+        data: { orientation },
+        ip,
+      },
+      transaction,
+    );
+  });
+  return screen;
 }
 
 /** How many screens each venue has, by venue id (a venue with none is absent). */

@@ -4,6 +4,7 @@ import {
   useAddSlide,
   useAssignScreens,
   useChannel,
+  useChannelSettings,
   useDeleteChannel,
   useRemoveSlide,
   useRenameChannel,
@@ -15,7 +16,9 @@ import { TextField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
+import { ApiRequestError } from '@/lib/api-client.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
+import { ChannelSettingsForm } from '@/features/publishing/components/channel-settings-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ChannelLanguages } from '@/features/publishing/components/channel-languages.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
@@ -33,6 +36,7 @@ export function Component() {
   const reorder = useReorderSlides(channelId);
   const screens = useAssignScreens(channelId);
   const rename = useRenameChannel(channelId);
+  const settings = useChannelSettings(channelId);
   const del = useDeleteChannel();
   const [renaming, setRenaming] = useState<string | null>(null);
   const [confirmDelete, setConfirmDelete] = useState(false);
@@ -118,7 +122,13 @@ export function Component() {
             onRemove={(id) => remove.mutate(id)}
             onUpdate={(slideId, input) => update.mutate({ slideId, ...input })}
             updateError={
-              update.error && update.variables ? { slideId: update.variables.slideId, message: update.error.message } : null
+              update.error && update.variables
+                ? {
+                    slideId: update.variables.slideId,
+                    message: update.error.message,
+                    fields: update.error instanceof ApiRequestError ? update.error.fields : undefined,
+                  }
+                : null
             }
           />
           {c.can.update && <AddSlideForm busy={add.isPending} error={message(add.error)} onAdd={(input) => add.mutate(input)} />}
@@ -143,6 +153,24 @@ export function Component() {
             </h2>
             <ChannelLanguages channel={c} />
           </section>
+          {c.can.update && (
+            <section aria-labelledby="options-heading" className="space-y-2 rounded-lg border border-rule bg-panel p-4">
+              <h2 id="options-heading" className="text-lg font-semibold text-ink">
+                Screen options
+              </h2>
+              <ChannelSettingsForm
+                key={c.version}
+                channel={c}
+                busy={settings.isPending}
+                error={
+                  settings.error instanceof ApiRequestError
+                    ? (settings.error.fields?.silenceAlertMinutes ?? settings.error.message)
+                    : (message(settings.error) ?? undefined)
+                }
+                onSave={(input) => settings.mutate(input)}
+              />
+            </section>
+          )}
         </aside>
       </div>
     </>

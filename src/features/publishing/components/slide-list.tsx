@@ -26,7 +26,7 @@ interface Props {
   onReorder: (ids: string[]) => void;
   onUpdate: (slideId: string, input: SlideUpdateInput) => void;
   onRemove: (slideId: string) => void;
-  updateError: { slideId: string; message: string } | null;
+  updateError: { slideId: string; message: string; fields?: Record<string, string> } | null;
 }
 
 /**
@@ -110,6 +110,7 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
                 {s.kind === 'page' ? ` · ${s.statementIds.length} statement${s.statementIds.length === 1 ? '' : 's'}` : ''}
                 {s.startsAt || s.endsAt ? ' · timed' : ''}
               </p>
+              {s.schedule && <p className="text-xs text-muted">Shown {s.scheduleText} (venue time)</p>}
             </div>
             <SlideStateBadge slide={s} />
             <div className="ml-auto flex gap-1">
@@ -151,7 +152,18 @@ export function SlideList({ channel, busy, onReorder, onUpdate, onRemove, update
             <SlideTimingForm
               slide={s}
               busy={busy}
-              error={updateError?.slideId === s.id ? updateError.message : null}
+              error={
+                updateError?.slideId === s.id && !Object.keys(updateError.fields ?? {}).some((k) => k.startsWith('schedule'))
+                  ? updateError.message
+                  : null
+              }
+              scheduleErrors={
+                updateError?.slideId === s.id
+                  ? Object.entries(updateError.fields ?? {})
+                      .filter(([k]) => k.startsWith('schedule'))
+                      .map(([, v]) => v)
+                  : []
+              }
               onSave={(input) => onUpdate(s.id, input)}
             />
           )}
@@ -170,13 +182,21 @@ function SlideStateBadge({ slide }: { slide: SlideDto }) {
         Showing
       </span>
     );
-  const label = slide.state === 'scheduled' ? 'Scheduled' : slide.state === 'ended' ? 'Ended' : 'Not shown';
+  const label =
+    slide.state === 'scheduled'
+      ? 'Scheduled'
+      : slide.state === 'ended'
+        ? 'Ended'
+        : slide.state === 'off_schedule'
+          ? 'Not now (schedule)'
+          : 'Not shown';
+  const calm = slide.state === 'scheduled' || slide.state === 'off_schedule';
   return (
     <span
-      className={`inline-flex items-center gap-1 text-xs font-medium ${slide.state === 'scheduled' ? 'text-neutral' : 'text-changed'}`}
+      className={`inline-flex items-center gap-1 text-xs font-medium ${calm ? 'text-neutral' : 'text-changed'}`}
       title={slide.stateText ?? undefined}
     >
-      <Icon name={slide.state === 'scheduled' ? 'history' : 'alert'} className="size-3.5" />
+      <Icon name={calm ? 'history' : 'alert'} className="size-3.5" />
       {label}
       <span className="sr-only">: {slide.stateText}</span>
     </span>

@@ -3,6 +3,7 @@ import type { SlideDto, SlideUpdateInput } from '@shared/schemas/channel.ts';
 import { ChannelLimits } from '@shared/validations.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
+import { draftOf, scheduleOf, SlideScheduleFields } from './slide-schedule-fields.tsx';
 
 const pad = (n: number) => String(n).padStart(2, '0');
 
@@ -15,18 +16,22 @@ export function toLocalInput(iso: string | null): string {
 
 const fromLocalInput = (value: string) => (value ? new Date(value).toISOString() : null);
 
-/** Duration and optional start and end of one slide; saved together. */
+/** Duration, optional start and end, and the schedule of one slide; saved together. */
 export function SlideTimingForm({
   slide,
   busy,
   error,
+  scheduleErrors = [],
   onSave,
 }: {
   slide: SlideDto;
   busy: boolean;
   error?: string | null;
+  /** The server's messages about the schedule, field by field. */
+  scheduleErrors?: string[];
   onSave: (input: SlideUpdateInput) => void;
 }) {
+  const [schedule, setSchedule] = useState(draftOf(slide.schedule));
   const [duration, setDuration] = useState(String(slide.durationS));
   const [startsAt, setStartsAt] = useState(toLocalInput(slide.startsAt));
   const [endsAt, setEndsAt] = useState(toLocalInput(slide.endsAt));
@@ -38,7 +43,7 @@ export function SlideTimingForm({
   return (
     <form
       aria-label={`Timing for slide ${slide.position + 1}`}
-      className="mt-3 grid gap-3 border-t border-rule pt-3 sm:grid-cols-[8rem_1fr_1fr_auto] sm:items-end"
+      className="mt-3 space-y-3 border-t border-rule pt-3"
       onSubmit={(e) => {
         e.preventDefault();
         setDuration(String(clamped));
@@ -46,45 +51,49 @@ export function SlideTimingForm({
           durationS: clamped,
           startsAt: fromLocalInput(startsAt),
           endsAt: fromLocalInput(endsAt),
+          schedule: scheduleOf(schedule),
           ...(slide.kind === 'image' ? { caption } : {}),
         });
       }}
     >
-      <TextField
-        label="Seconds on screen"
-        type="number"
-        min={ChannelLimits.durationMin}
-        max={ChannelLimits.durationMax}
-        value={duration}
-        onChange={(e) => setDuration(e.target.value)}
-        hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
-      />
-      <TextField
-        label="Show from (optional)"
-        type="datetime-local"
-        value={startsAt}
-        onChange={(e) => setStartsAt(e.target.value)}
-        hint="Your local time"
-      />
-      <TextField
-        label="Show until (optional)"
-        type="datetime-local"
-        value={endsAt}
-        onChange={(e) => setEndsAt(e.target.value)}
-        error={error ?? undefined}
-      />
-      <Button type="submit" variant="secondary" busy={busy}>
-        Save timing
-      </Button>
-      {slide.kind === 'image' && (
+      <div className="grid gap-3 sm:grid-cols-[8rem_1fr_1fr_auto] sm:items-end xl:grid-cols-2 2xl:grid-cols-[8rem_1fr_1fr_auto]">
         <TextField
-          className="sm:col-span-4"
-          label="Caption"
-          maxLength={ChannelLimits.captionMax}
-          value={caption}
-          onChange={(e) => setCaption(e.target.value)}
+          label="Seconds on screen"
+          type="number"
+          min={ChannelLimits.durationMin}
+          max={ChannelLimits.durationMax}
+          value={duration}
+          onChange={(e) => setDuration(e.target.value)}
+          hint={`${ChannelLimits.durationMin}–${ChannelLimits.durationMax} s`}
         />
-      )}
+        <TextField
+          label="Show from (optional)"
+          type="datetime-local"
+          value={startsAt}
+          onChange={(e) => setStartsAt(e.target.value)}
+          hint="Your local time"
+        />
+        <TextField
+          label="Show until (optional)"
+          type="datetime-local"
+          value={endsAt}
+          onChange={(e) => setEndsAt(e.target.value)}
+          error={error ?? undefined}
+        />
+        <Button type="submit" variant="secondary" busy={busy}>
+          Save timing
+        </Button>
+        {slide.kind === 'image' && (
+          <TextField
+            className="col-span-full"
+            label="Caption"
+            maxLength={ChannelLimits.captionMax}
+            value={caption}
+            onChange={(e) => setCaption(e.target.value)}
+          />
+        )}
+      </div>
+      <SlideScheduleFields draft={schedule} onChange={setSchedule} errors={scheduleErrors} />
     </form>
   );
 }

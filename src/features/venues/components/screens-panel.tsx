@@ -1,6 +1,6 @@
 import { useState, type FormEvent } from 'react';
 import type { KioskScreenDto, PairingCodeDto } from '@shared/schemas/kiosk.ts';
-import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens } from '@/api/screens.ts';
+import { useAddScreen, useRepairScreen, useRevokeScreen, useScreens, useSetScreenOrientation } from '@/api/screens.ts';
 import { ScreenLanguage } from './screen-language.tsx';
 import { Button } from '@/components/ui/button.tsx';
 import { TextField } from '@/components/ui/field.tsx';
@@ -9,7 +9,14 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { ApiRequestError } from '@/lib/api-client.ts';
 import { ModalDialog } from './modal-dialog.tsx';
 import { ScreenHealth } from './screen-health.tsx';
-import { formatTime } from '@/lib/format-date.ts';
+import { formatDateTime, formatTime } from '@/lib/format-date.ts';
+import { SCREEN_ORIENTATIONS, type ScreenOrientation } from '@shared/schemas/kiosk.ts';
+
+const ORIENTATION_LABELS: Record<ScreenOrientation, string> = {
+  auto: 'As the display reports',
+  landscape: 'Landscape',
+  portrait: 'Portrait',
+};
 
 function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onClose: () => void }) {
   return (
@@ -66,6 +73,7 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
   const add = useAddScreen(venueId);
   const repair = useRepairScreen(venueId);
   const revoke = useRevokeScreen(venueId);
+  const orient = useSetScreenOrientation(venueId);
   const [name, setName] = useState('');
   const [nameError, setNameError] = useState<string>();
   const [pairing, setPairing] = useState<PairingCodeDto | null>(null);
@@ -111,8 +119,42 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
             <li key={screen.id} className="flex flex-wrap items-center gap-x-4 gap-y-1 px-4 py-2.5 text-sm">
               <span className="min-w-40 font-medium">{screen.name}</span>
               <ScreenHealth screen={screen} />
+              {screen.lastSeenAt && screen.health === 'online' && (
+                <span className="text-xs text-muted">last seen {formatDateTime(screen.lastSeenAt)}</span>
+              )}
+              {screen.showingSlide && (
+                <span className="min-w-0 break-words text-xs text-muted">
+                  showing <span className="text-ink">{screen.showingSlide.title || 'a slide'}</span>
+                  {screen.reportedOrientation && ` (${screen.reportedOrientation})`}
+                </span>
+              )}
               {screen.playerVersion && <span className="text-xs text-muted">player {screen.playerVersion}</span>}
               <ScreenLanguage venueId={venueId} screen={screen} canManage={canManage} />
+              {screen.silenceAlertedAt && (
+                <span className="inline-flex items-center gap-1 text-xs text-broken">
+                  <Icon name="alert" className="size-3.5" />
+                  Admins e-mailed {formatDateTime(screen.silenceAlertedAt)}
+                </span>
+              )}
+              {canManage ? (
+                <label className="inline-flex items-center gap-2 text-xs text-muted">
+                  Hangs
+                  <select
+                    className="rounded-md border border-rule bg-panel px-2 py-1 text-xs text-ink focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/30"
+                    value={screen.orientation}
+                    disabled={orient.isPending && orient.variables?.screenId === screen.id}
+                    onChange={(e) => orient.mutate({ screenId: screen.id, orientation: e.target.value as ScreenOrientation })}
+                  >
+                    {SCREEN_ORIENTATIONS.map((o) => (
+                      <option key={o} value={o}>
+                        {ORIENTATION_LABELS[o]}
+                      </option>
+                    ))}
+                  </select>
+                </label>
+              ) : (
+                screen.orientation !== 'auto' && <span className="text-xs text-muted">{screen.orientation}</span>
+              )}
               {canManage && (
                 <span className="ml-auto flex gap-2">
                   <Button
@@ -133,9 +175,9 @@ export function ScreensPanel({ venueId, canManage }: { venueId: string; canManag
           ))}
         </ul>
       )}
-      {(repair.error || revoke.error) && (
+      {(repair.error || revoke.error || orient.error) && (
         <p role="alert" className="px-4 py-2 text-sm text-broken">
-          {(repair.error ?? revoke.error)?.message}
+          {(repair.error ?? revoke.error ?? orient.error)?.message}
         </p>
       )}
       {canManage && (
