@@ -33,6 +33,11 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
   declare lastReviewerId: CreationOptional<string | null>;
   /** The statements whose wording moved after sign-off, while the page needs a re-check. */
   declare recheckStatementIds: CreationOptional<string[]>;
+  /** Set while the page is archived: hidden from the desk's lists and from every public output. */
+  declare archivedAt: CreationOptional<Date | null>;
+  declare archivedById: CreationOptional<string | null>;
+  /** When the page first went live; a page ever published may be archived but never deleted. */
+  declare firstPublishedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -55,6 +60,9 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
         submittedAt: { type: DataTypes.DATE },
         lastReviewerId: { type: DataTypes.UUID },
         recheckStatementIds: { type: DataTypes.ARRAY(DataTypes.UUID), allowNull: false, defaultValue: [] },
+        archivedAt: { type: DataTypes.DATE },
+        archivedById: { type: DataTypes.UUID },
+        firstPublishedAt: { type: DataTypes.DATE },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -27,6 +27,8 @@ function slideState(
   media: Media | undefined,
   now: number,
 ): { state: SlideState; stateText: string | null } {
+  if (slide.kind === 'page' && page?.archivedAt)
+    return { state: 'page_archived', stateText: 'Not shown: the page is archived (restore and publish it to show it again)' };
   if (slide.kind === 'page' && !page?.publishedSnapshot)
     return { state: 'page_unpublished', stateText: 'Not shown: the page is not published' };
   if (slide.kind === 'image' && (!media || missingForPublishing(media).length))

@@ -92,7 +92,7 @@ export const ChannelScreensSchema = z.object({
 export type ChannelScreensInput = z.infer<typeof ChannelScreensSchema>;
 
 /** Why a slide is or is not on the screens now. */
-export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'page_unpublished', 'image_not_ready'] as const;
+export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'page_unpublished', 'page_archived', 'image_not_ready'] as const;
 export type SlideState = (typeof SLIDE_STATES)[number];
 
 export interface SlideDto {

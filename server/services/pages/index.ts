@@ -19,3 +19,4 @@ export { addPageComment } from './page-comments.ts';
 export { listPageComments } from './page-comments.ts';
 export { queueRecheckClear } from './page-reactions.ts';
 export { RECHECK_CLEAR_JOB, runRecheckClearJob } from './page-recheck.ts';
+export { archivePage, deletePage, restorePage } from './page-archive.ts';

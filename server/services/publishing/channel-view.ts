@@ -70,7 +70,9 @@ export async function loadChannelDetail(channel: Channel): Promise<ChannelDetail
   const pageIds = slides.flatMap((s) => (s.pageId ? [s.pageId] : []));
   const mediaIds = slides.flatMap((s) => (s.mediaId ? [s.mediaId] : []));
   const [pages, media, channels] = await Promise.all([
-    pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot'] }) : [],
+    pageIds.length
+      ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot', 'archivedAt'] })
+      : [],
     mediaIds.length
       ? Media.findAll({ where: { id: { [Op.in]: mediaIds } }, include: [{ model: MediaRendition, as: 'renditions' }] })
       : [],
