@@ -9,11 +9,13 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageComments } from '@/features/pages/components/page-comments.tsx';
 import { PageHtml } from '@/features/pages/components/page-html.tsx';
+import { ArchivedNotice, PageArchiveActions } from '@/features/pages/components/page-archive-actions.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
 import { PublishPanel } from '@/features/pages/components/publish-panel.tsx';
 import { ReviewFlags } from '@/features/pages/components/review-flags.tsx';
 import { ReviewStatements } from '@/features/pages/components/review-statements.tsx';
 import { StatementWorking } from '@/features/pages/components/statement-working.tsx';
+import { versionLabels } from '@/features/pages/version-labels.ts';
 
 /** The review view: the page as it will read, each statement with its working and sign-off, flags, comments, publishing. */
 export function Component() {
@@ -35,6 +37,7 @@ export function Component() {
   const error = signStatement.error ?? signPage.error ?? resolveFlag.error ?? sendBack.error;
   const moved = p.statements.filter((s) => s.signedText !== null && s.text !== s.signedText);
   const html = showLive ? published.data?.html : preview.data?.html;
+  const labels = versionLabels(p);
 
   return (
     <>
@@ -62,9 +65,11 @@ export function Component() {
             >
               {p.can.edit ? 'Edit' : 'Open in editor'}
             </Link>
+            <PageArchiveActions page={p} />
           </>
         }
       />
+      <ArchivedNotice page={p} />
       {p.status === 'needs_recheck' && (
         <div className="mb-6">
           <Notice tone="warning" title="Needs re-check">
@@ -84,12 +89,13 @@ export function Component() {
       <div className="grid grid-cols-[minmax(0,1fr)] gap-8 [overflow-wrap:anywhere] lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
-          {p.published && (
+          {labels && (
             // biome-ignore lint/a11y/useSemanticElements: two toggle buttons, not form fields; a fieldset would bring form semantics and its own box
             <div
               role="group"
               aria-label="Which version"
-              className="inline-flex rounded-md border border-rule bg-panel p-0.5 text-sm"
+              aria-describedby="version-note"
+              className="inline-flex flex-wrap rounded-md border border-rule bg-panel p-0.5 text-sm"
             >
               <button
                 type="button"
@@ -97,7 +103,7 @@ export function Component() {
                 onClick={() => setShowLive(false)}
                 className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}
               >
-                This revision ({p.revision.number})
+                {labels.working}
               </button>
               <button
                 type="button"
@@ -105,9 +111,14 @@ export function Component() {
                 onClick={() => setShowLive(true)}
                 className={`rounded px-3 py-1 ${showLive ? 'bg-accent text-on-accent' : ''}`}
               >
-                Live version ({p.published.revisionNumber})
+                {labels.live}
               </button>
             </div>
+          )}
+          {labels && (
+            <p id="version-note" className="text-sm text-muted">
+              {labels.note}
+            </p>
           )}
           <article className="rounded-lg border border-rule bg-panel px-4 py-6 sm:px-8">
             <h1 className="mb-4 font-serif text-3xl font-semibold">{showLive ? published.data?.title : p.title}</h1>

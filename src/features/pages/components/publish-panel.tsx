@@ -4,6 +4,7 @@ import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-wo
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatDateTime } from '@/lib/format-date.ts';
+import { publishLabel } from '../version-labels.ts';
 
 /** For editors: publish the approved version now or at a time, or take the live version down. */
 export function PublishPanel({ page }: { page: PageDto }) {
@@ -30,7 +31,7 @@ export function PublishPanel({ page }: { page: PageDto }) {
       <div className="flex flex-wrap gap-2">
         {page.can.publish && (
           <Button busy={publish.isPending} onClick={() => publish.mutate()}>
-            Publish revision {page.approved?.revisionNumber}
+            {publishLabel(page)}
           </Button>
         )}
         {page.can.unpublish && (

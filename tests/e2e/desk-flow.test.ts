@@ -1,0 +1,66 @@
+import { describe, expect, it } from 'vitest';
+import { openBrowser, screenshot } from '../support/browser.ts';
+import { demoSession, ok, openSessionInBrowser, type E2eSession } from '../support/e2e-api.ts';
+
+const WAIT = { timeout: 20_000 };
+
+async function draftPage(writer: E2eSession, title: string) {
+  const objects = await writer.call<{ data: { rows: Array<{ id: string }> } }>('GET', '/api/catalogue/objects?q=3C%20279');
+  return ok(
+    await writer.call<{ data: { id: string; version: number } }>('POST', '/api/pages', {
+      title,
+      objectId: objects.body.data.rows[0]!.id,
+      locale: 'en-GB',
+    }),
+    'create page',
+  ).body.data;
+}
+
+describe('archive and delete pages', () => {
+  it('a writer deletes their draft after giving a reason; an editor archives a page, finds it under "Show archived" and restores it', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const writer = await demoSession(baseUrl, 'writer');
+    const editor = await demoSession(baseUrl, 'editor');
+    const doomed = await draftPage(writer, 'Started by mistake (demo)');
+
+    await openSessionInBrowser(context, baseUrl, writer);
+    await page.goto(`${baseUrl}/pages/${doomed.id}`);
+    await page.getByRole('button', { name: 'Delete', exact: true }).click();
+    const dialog = page.getByRole('dialog', { name: 'Delete this page for good?' });
+    await expect.poll(() => dialog.isVisible(), WAIT).toBe(true);
+    // No reason: refused in words, nothing deleted.
+    await dialog.getByRole('button', { name: 'Delete for good' }).click();
+    await expect.poll(() => dialog.getByText('Give a reason: it is kept with the history.').count()).toBe(1);
+    await dialog.getByLabel(/Why is it deleted/).fill('A duplicate of another draft');
+    await dialog.getByRole('button', { name: 'Delete for good' }).click();
+    await page.waitForURL(/\/pages$/, WAIT);
+    await expect.poll(() => page.getByText('Page deleted').count(), WAIT).toBe(1);
+    expect((await writer.call('GET', `/api/pages/${doomed.id}`)).status).toBe(404);
+
+    const kept = await draftPage(writer, 'Parked for next season (demo)');
+    await context.clearCookies();
+    await openSessionInBrowser(context, baseUrl, editor);
+    await page.goto(`${baseUrl}/pages/${kept.id}`);
+    await page.getByRole('button', { name: 'Archive', exact: true }).click();
+    const archive = page.getByRole('dialog', { name: 'Archive this page?' });
+    await archive.getByLabel(/Why is it archived/).fill('Not needed this season');
+    await archive.getByRole('button', { name: 'Archive' }).click();
+    await expect.poll(() => page.getByText(/hidden from the page lists and from every public output/).count(), WAIT).toBe(1);
+    await screenshot(page, 'desk-flow-archived');
+
+    await page.goto(`${baseUrl}/pages`);
+    await page.getByLabel('Title contains').fill('Parked for next season');
+    await expect.poll(() => page.getByText('No pages match these filters.').count(), WAIT).toBe(1);
+    await page.getByLabel('Archived pages').selectOption('include');
+    const row = page.getByRole('row', { name: /Parked for next season/ });
+    await expect.poll(() => row.count(), WAIT).toBe(1);
+    expect(await row.getByText('Archived', { exact: true }).count()).toBe(1);
+    await row.getByRole('link').click();
+    await page.getByRole('button', { name: 'Restore', exact: true }).click();
+    const restore = page.getByRole('dialog', { name: 'Restore this page?' });
+    await restore.getByLabel(/Why is it coming back/).fill('Needed after all');
+    await restore.getByRole('button', { name: 'Restore' }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Archive', exact: true }).count(), WAIT).toBe(1);
+    expect(await page.getByText(/hidden from the page lists/).count()).toBe(0);
+  });
+});
