@@ -62,9 +62,7 @@ export function PageArchiveActions({ page }: { page: PageDto }) {
           Delete
         </Button>
       )}
-      {step && (
-        <ReasonDialog {...DIALOG[step]} busy={mutation[step].isPending} onConfirm={run} onCancel={close} />
-      )}
+      {step && <ReasonDialog {...DIALOG[step]} busy={mutation[step].isPending} onConfirm={run} onCancel={close} />}
       {error && !step && (
         <p role="alert" className="basis-full text-sm font-medium text-broken">
           {error.message}
@@ -80,9 +78,9 @@ export function ArchivedNotice({ page }: { page: PageDto }) {
   return (
     <div className="mb-4">
       <Notice tone="warning" title="Archived">
-        Archived {formatDateTime(page.archivedAt)}. It is hidden from the page lists and from every public output (the public
-        API, the Atom feed and kiosk screens), and it cannot be changed. Restoring brings it back to the desk as it was; it goes
-        live again only when an editor publishes it.
+        Archived {formatDateTime(page.archivedAt)}. It is hidden from the page lists and from every public output (the public API,
+        the Atom feed and kiosk screens), and it cannot be changed. Restoring brings it back to the desk as it was; it goes live
+        again only when an editor publishes it.
       </Notice>
     </div>
   );
