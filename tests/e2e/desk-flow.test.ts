@@ -64,3 +64,34 @@ describe('archive and delete pages', () => {
     expect(await page.getByText(/hidden from the page lists/).count()).toBe(0);
   });
 });
+
+describe('the new-page object picker', () => {
+  it('says how many objects there are, and searches the server from the first key', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const writer = await demoSession(baseUrl, 'writer');
+    const count = async (q: string) =>
+      (await writer.call<{ data: { total: number } }>('GET', `/api/catalogue/objects?pageSize=1&q=${encodeURIComponent(q)}`)).body
+        .data.total;
+    const all = await count('');
+    await openSessionInBrowser(context, baseUrl, writer);
+    await page.goto(`${baseUrl}/pages`);
+    await page.getByRole('button', { name: 'New page' }).click();
+    const form = page.getByRole('form', { name: 'New page' });
+    const expected =
+      all > 20
+        ? `20 of ${all.toLocaleString('en-GB')} objects shown — type to search`
+        : `All ${all} object${all === 1 ? '' : 's'} shown`;
+    await expect.poll(() => form.getByText(expected).count(), WAIT).toBe(1);
+    await form.getByRole('searchbox').fill('N');
+    const nCount = await count('N');
+    await expect
+      .poll(
+        () => form.getByText(new RegExp(`${nCount.toLocaleString('en-GB')} (matching )?objects? (shown|match)`)).count(),
+        WAIT,
+      )
+      .toBe(1);
+    const listed = await form.getByRole('listbox').getByRole('option').allTextContents();
+    expect(listed.length).toBe(Math.min(20, nCount));
+    await screenshot(page, 'desk-flow-object-picker');
+  });
+});

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import type { PageStatementDto } from '../../../shared/schemas/page.ts';
+import { objectCountText } from '../../../src/features/pages/object-count.ts';
 import { publishLabel, versionLabels } from '../../../src/features/pages/version-labels.ts';
 
 const statement = (text: string, signedText: string | null) => ({ text, signedText }) as PageStatementDto;
@@ -38,5 +39,17 @@ describe('the review view’s version switch', () => {
     expect(
       publishLabel({ approved: { revisionNumber: 11, at: '', by: null }, published: { revisionNumber: 11, at: null, title: '' } }),
     ).toBe('Publish the re-checked wording of revision 11');
+  });
+});
+
+describe('the object picker’s count', () => {
+  it('says how many are shown of how many exist or match', () => {
+    expect(objectCountText(20, 1204, true, '')).toBe('20 of 1,204 objects shown — type to search');
+    expect(objectCountText(7, 7, true, '')).toBe('All 7 objects shown');
+    expect(objectCountText(20, 143, true, 'ngc')).toBe('20 of 143 matching objects shown — keep typing to narrow the list');
+    expect(objectCountText(3, 3, true, ' crab ')).toBe('3 objects match “crab”');
+    expect(objectCountText(1, 1, true, 'M1')).toBe('1 object matches “M1”');
+    expect(objectCountText(0, 0, true, 'zzz')).toBe('No object matches “zzz”.');
+    expect(objectCountText(20, 120000, false, '')).toBe('20 of about 120,000 objects shown — type to search');
   });
 });
