@@ -4,8 +4,27 @@ import { currentUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import { authorize } from '../policies/index.ts';
 import { presentKioskScreen } from '../presenters/kiosk-screen.ts';
-import { issuePairingCode, revokeScreen, addScreen, listScreens, removeScreen } from '../services/publishing/index.ts';
+import {
+  issuePairingCode,
+  revokeScreen,
+  addScreen,
+  listScreens,
+  playerAddress,
+  removeScreen,
+} from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
+
+/** The one-time code with the player's address and its QR code, for the admin to set the screen up. */
+function pairingBody(screen: Parameters<typeof presentKioskScreen>[0], code: string, expiresAt: Date): PairingCodeDto {
+  const { url, qr } = playerAddress();
+  return {
+    screen: presentKioskScreen(screen),
+    pairingCode: code,
+    expiresAt: expiresAt.toISOString(),
+    playerUrl: url,
+    playerQr: qr,
+  };
+}
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });
@@ -24,7 +43,7 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await addScreen(venue, req.body.name, viewer, req.ip);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
-  const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
+  const body = pairingBody(screen, code, expiresAt);
   res.status(201).json({ data: body });
 });
 
@@ -35,7 +54,7 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await loadScreen(venue, req.params.screenId);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
-  const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
+  const body = pairingBody(screen, code, expiresAt);
   res.status(201).json({ data: body });
 });
 

@@ -95,3 +95,24 @@ describe('the new-page object picker', () => {
     await screenshot(page, 'desk-flow-object-picker');
   });
 });
+
+describe('the pairing dialog', () => {
+  it('shows the player’s address and a QR code of it beside the code, at 390 px too', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const admin = await demoSession(baseUrl, 'admin');
+    const venues = await admin.call<{ data: Array<{ id: string }> }>('GET', '/api/venues');
+    await openSessionInBrowser(context, baseUrl, admin);
+    await page.goto(`${baseUrl}/venues/${venues.body.data[0]!.id}`);
+    await page.getByLabel('New screen’s name').fill('Planetarium shop screen');
+    await page.getByRole('button', { name: 'Add screen' }).click();
+    const dialog = page.getByRole('dialog', { name: 'Pairing code for Planetarium shop screen' });
+    await expect.poll(() => dialog.isVisible(), WAIT).toBe(true);
+    const address = `${new URL(baseUrl).origin}/kiosk`;
+    expect(await dialog.getByRole('link', { name: address }).count()).toBe(1);
+    expect(await dialog.getByRole('img', { name: `QR code of the player’s address, ${address}` }).count()).toBe(1);
+    await screenshot(page, 'desk-flow-pairing-1280');
+    await page.setViewportSize({ width: 390, height: 844 });
+    expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+    await screenshot(page, 'desk-flow-pairing-390');
+  });
+});

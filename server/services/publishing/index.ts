@@ -24,3 +24,4 @@ export { countScreensByVenue } from './kiosk-screens.ts';
 export { listScreens } from './kiosk-screens.ts';
 export { removeScreen } from './kiosk-screens.ts';
 export { recordHeartbeat } from './kiosk-screens.ts';
+export { playerAddress } from './player-address.ts';

@@ -37,7 +37,10 @@ describe('the review view’s version switch', () => {
   it('says when publishing replaces the signed wording of a revision already live', () => {
     expect(publishLabel({ approved: { revisionNumber: 12, at: '', by: null }, published: null })).toBe('Publish revision 12');
     expect(
-      publishLabel({ approved: { revisionNumber: 11, at: '', by: null }, published: { revisionNumber: 11, at: null, title: '' } }),
+      publishLabel({
+        approved: { revisionNumber: 11, at: '', by: null },
+        published: { revisionNumber: 11, at: null, title: '' },
+      }),
     ).toBe('Publish the re-checked wording of revision 11');
   });
 });
