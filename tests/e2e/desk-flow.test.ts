@@ -116,3 +116,38 @@ describe('the pairing dialog', () => {
     await screenshot(page, 'desk-flow-pairing-390');
   });
 });
+
+describe('messages that belong to an earlier attempt go', () => {
+  it('the calculator drops its result when a later input is refused', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    await openSessionInBrowser(context, baseUrl, await demoSession(baseUrl, 'reviewer'));
+    await page.goto(`${baseUrl}/calculator`);
+    const form = page.getByRole('form', { name: 'Calculation' });
+    await form.getByLabel('Quantity').selectOption('lookback_time');
+    await form.getByRole('textbox', { name: 'Redshift z', exact: true }).fill('1.5');
+    await form.getByRole('radio', { name: /Planck 2018/ }).check();
+    await form.getByRole('button', { name: 'Calculate' }).click();
+    await expect.poll(() => page.getByTestId('calc-value').count(), WAIT).toBe(1);
+    await form.getByRole('textbox', { name: 'Redshift z', exact: true }).fill('one and a half');
+    await form.getByRole('button', { name: 'Calculate' }).click();
+    await expect.poll(() => page.getByTestId('calc-value').count(), WAIT).toBe(0);
+    await screenshot(page, 'desk-flow-calculator-refused');
+  });
+
+  it('"Choose a time in the future" goes once the page is published', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const editor = await demoSession(baseUrl, 'editor');
+    const pages = await editor.call<{ data: Array<{ id: string; status: string }> }>('GET', '/api/pages?pageSize=100');
+    const target = pages.body.data.find((p) => p.status === 'approved') ?? pages.body.data.find((p) => p.status === 'published')!;
+    if (target.status === 'published') ok(await editor.call('POST', `/api/pages/${target.id}/unpublish`), 'unpublish');
+    await openSessionInBrowser(context, baseUrl, editor);
+    await page.goto(`${baseUrl}/pages/${target.id}/review`);
+    const panel = page.getByRole('region', { name: 'Publishing' });
+    await panel.getByLabel('Publish at').fill('2020-01-01T10:00');
+    await panel.getByRole('button', { name: 'Schedule' }).click();
+    await expect.poll(() => panel.getByText(/Choose a time in the future/).count(), WAIT).toBe(1);
+    await panel.getByRole('button', { name: /^Publish/ }).click();
+    await expect.poll(() => panel.getByText(/^Live: revision/).count(), WAIT).toBe(1);
+    expect(await panel.getByText(/Choose a time in the future/).count()).toBe(0);
+  });
+});

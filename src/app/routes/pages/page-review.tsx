@@ -35,6 +35,11 @@ export function Component() {
   if (page.isPending) return <p className="text-sm text-muted">Loading page…</p>;
   if (page.error || !p) return <Notice tone="error">{page.error?.message}</Notice>;
   const error = signStatement.error ?? signPage.error ?? resolveFlag.error ?? sendBack.error;
+  /** Starts one step and forgets what the others said, so an old refusal never sits beside a later success. */
+  const only = <T,>(step: { mutate: (arg: T) => void; reset: () => void }, arg: T) => {
+    for (const m of [signStatement, signPage, resolveFlag, sendBack]) if (m !== (step as unknown)) m.reset();
+    step.mutate(arg);
+  };
   const moved = p.statements.filter((s) => s.signedText !== null && s.text !== s.signedText);
   const html = showLive ? published.data?.html : preview.data?.html;
   const labels = versionLabels(p);
@@ -134,13 +139,13 @@ export function Component() {
           <ReviewStatements
             page={p}
             busyId={signStatement.isPending ? (signStatement.variables ?? null) : null}
-            onSignOff={(sid) => signStatement.mutate(sid)}
+            onSignOff={(sid) => only(signStatement, sid)}
             onWorking={setWorking}
           />
           <ReviewFlags
             flags={p.flags}
             canReview={p.can.review}
-            onResolve={(text, reason) => resolveFlag.mutate({ text, reason })}
+            onResolve={(text, reason) => only(resolveFlag, { text, reason })}
           />
           {p.eyeSafety.required && (
             <Notice tone={p.eyeSafety.present ? 'success' : 'error'} title="Eye safety">
@@ -163,14 +168,14 @@ export function Component() {
                   Everything is checked. Signing off approves revision {p.revision.number} for an editor to publish.
                 </p>
               )}
-              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => signPage.mutate()}>
+              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => only(signPage, undefined)}>
                 Sign off page
               </Button>
               <form
                 className="space-y-2 border-t border-rule pt-3"
                 onSubmit={(e) => {
                   e.preventDefault();
-                  sendBack.mutate(backNote);
+                  only(sendBack, backNote);
                 }}
               >
                 <label htmlFor="send-back" className="block text-sm font-medium">
