@@ -21,6 +21,7 @@ const EXPECTED: Record<string, Answer[]> = {
   'POST /api/auth/password': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/auth/password-reset': ['ok', 'ok', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/auth/invitation/accept': ['ok', 'ok', 'ok', 'ok', 'ok', 'ok'],
+  'POST /api/auth/invitation/check': ['ok', 'ok', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/auth/password-reset/complete': ['ok', 'ok', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/users': ['401', '401', '403', '403', '403', 'ok'],
   'POST /api/users': ['401', '401', '403', '403', '403', 'ok'],

@@ -151,3 +151,38 @@ describe('messages that belong to an earlier attempt go', () => {
     expect(await panel.getByText(/Choose a time in the future/).count()).toBe(0);
   });
 });
+
+describe('an invitation link is checked when the page opens', () => {
+  it('a fresh link shows the password form; a used or garbage link says so at once, with no password form', async () => {
+    const { page, baseUrl } = await openBrowser();
+    const admin = await demoSession(baseUrl, 'admin');
+    const email = `invited-${Date.now()}@example.test`;
+    ok(await admin.call('POST', '/api/users', { email, name: 'Invited Guide (demo)', role: 'writer' }), 'invite');
+    let token = '';
+    for (let i = 0; i < 100 && !token; i += 1) {
+      const outbox = await admin.call<{ data: Array<{ to: string; text: string }> }>('GET', '/api/outbox');
+      const mail = outbox.body.data.find((m) => m.to.includes(email));
+      token = mail ? decodeURIComponent(/token=([A-Za-z0-9_%-]+)/.exec(mail.text)![1]!) : '';
+      if (!token) await new Promise((r) => setTimeout(r, 100));
+    }
+    expect(token).not.toBe('');
+
+    await page.goto(`${baseUrl}/welcome?token=not-a-real-token`);
+    await expect.poll(() => page.getByText('This invitation link does not work').count(), WAIT).toBe(1);
+    expect(await page.getByLabel('New password').count()).toBe(0);
+    await screenshot(page, 'desk-flow-invitation-invalid');
+
+    await page.goto(`${baseUrl}/welcome?token=${encodeURIComponent(token)}`);
+    await expect.poll(() => page.getByLabel('New password').count(), WAIT).toBeGreaterThan(0);
+    // Used by someone else meanwhile: opening the link again says so before any password is typed.
+    const accepted = await fetch(`${baseUrl}/api/auth/invitation/accept`, {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ token, newPassword: 'nebula-lantern-harbour-92' }),
+    });
+    expect(accepted.status).toBe(200);
+    await page.goto(`${baseUrl}/welcome?token=${encodeURIComponent(token)}`);
+    await expect.poll(() => page.getByText('This invitation has already been used').count(), WAIT).toBe(1);
+    expect(await page.getByLabel('New password').count()).toBe(0);
+  });
+});

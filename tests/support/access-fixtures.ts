@@ -132,6 +132,7 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'POST /api/users': { body: { email: `invited-${randomUUID()}@example.test`, name: 'Invited Person', role: 'writer' } },
     'PATCH /api/users/:id': { body: { name: 'Renamed by the access matrix' } },
     'POST /api/calc': { body: { z: { value: 0.158 } } },
+    'POST /api/auth/invitation/check': { body: { token: 'an-invitation-token-nobody-was-sent' } },
     'POST /api/pages': { body: { title: 'Access matrix page', objectId: ids.object, locale: 'en-GB' } },
     'PUT /api/pages/digest': { body: { enabled: false } },
     'PUT /api/pages/:id': {
