@@ -66,7 +66,9 @@ export function presentChannelDetail(
       caption: s.caption,
       page: page ? { id: page.id, title: page.publishedSnapshot?.title ?? page.title } : null,
       statementIds: s.statementIds ?? [],
-      media: m ? { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText } : null,
+      media: m
+        ? { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText, fileName: m.fileName }
+        : null,
       ...slideState(s, page, m, now),
     };
   });

@@ -105,7 +105,8 @@ export interface SlideDto {
   caption: string;
   page: { id: string; title: string } | null;
   statementIds: string[];
-  media: { id: string; thumbnailUrl: string | null; altText: string } | null;
+  /** `fileName` names an image slide in lists when it has no title (alt text describes the picture; it is no name). */
+  media: { id: string; thumbnailUrl: string | null; altText: string; fileName: string } | null;
   state: SlideState;
   /** For a person: why the slide is not showing, or null. */
   stateText: string | null;

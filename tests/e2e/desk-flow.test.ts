@@ -186,3 +186,61 @@ describe('an invitation link is checked when the page opens', () => {
     expect(await page.getByLabel('New password').count()).toBe(0);
   });
 });
+
+describe('removing a slide', () => {
+  it('can be undone for a few seconds (nothing reaches the server meanwhile), then goes for good; image slides are named by their title', async () => {
+    const { context, page, baseUrl } = await openBrowser();
+    const editor = await demoSession(baseUrl, 'editor');
+    const venues = await editor.call<{ data: Array<{ id: string }> }>('GET', '/api/venues');
+    const channel = ok(
+      await editor.call<{ data: { id: string } }>('POST', '/api/channels', {
+        venueId: venues.body.data[0]!.id,
+        name: `Undo check ${Date.now()} (demo)`,
+      }),
+      'channel',
+    ).body.data;
+    const sources = await editor.call<{ data: { media: Array<{ id: string }> } }>('GET', '/api/channels/slide-sources');
+    ok(await editor.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'sky_tonight' }), 'sky slide');
+    const imageId = sources.body.data.media[0]?.id;
+    if (imageId) {
+      ok(
+        await editor.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'image', mediaId: imageId, caption: '' }),
+        'image',
+      );
+      ok(
+        await editor.call('POST', `/api/channels/${channel.id}/slides`, {
+          kind: 'image',
+          mediaId: imageId,
+          caption: 'Our dome at night',
+        }),
+        'titled image',
+      );
+    }
+    const slidesOnServer = async () =>
+      (await editor.call<{ data: { slides: unknown[] } }>('GET', `/api/channels/${channel.id}`)).body.data.slides.length;
+    const before = await slidesOnServer();
+
+    await openSessionInBrowser(context, baseUrl, editor);
+    await page.goto(`${baseUrl}/publishing/channels/${channel.id}`);
+    if (imageId) {
+      await expect.poll(() => page.getByText('Our dome at night', { exact: true }).count(), WAIT).toBe(1);
+      expect(await page.getByText(/^Image without a title \(.+\)$/).count()).toBe(1);
+    }
+    await page.getByRole('button', { name: 'Remove “The sky tonight”' }).click();
+    const toast = page.getByRole('status').filter({ hasText: '“The sky tonight” removed from the channel.' });
+    await expect.poll(() => toast.count(), WAIT).toBe(1);
+    expect(await page.getByRole('button', { name: 'Remove “The sky tonight”' }).count()).toBe(0);
+    await screenshot(page, 'desk-flow-slide-undo');
+    expect(await slidesOnServer()).toBe(before);
+    await toast.getByRole('button', { name: /^Undo/ }).click();
+    await expect.poll(() => page.getByRole('button', { name: 'Remove “The sky tonight”' }).count(), WAIT).toBe(1);
+    expect(await toast.count()).toBe(0);
+    expect(await slidesOnServer()).toBe(before);
+
+    await page.getByRole('button', { name: 'Remove “The sky tonight”' }).click();
+    await expect.poll(() => toast.count(), WAIT).toBe(1);
+    // After the undo window the removal is sent, once.
+    await expect.poll(() => slidesOnServer(), { timeout: 20_000 }).toBe(before - 1);
+    await expect.poll(() => toast.count(), WAIT).toBe(0);
+  });
+});

@@ -1,8 +1,9 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import {
   useAddSlide,
   useAssignScreens,
+  removeSlide,
   useChannel,
   useDeleteChannel,
   useRemoveSlide,
@@ -18,7 +19,9 @@ import { paths } from '@/config/paths.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
-import { SlideList } from '@/features/publishing/components/slide-list.tsx';
+import { SlideList, slideTitle } from '@/features/publishing/components/slide-list.tsx';
+import { useUndoableRemove } from '@/features/publishing/use-undoable-remove.ts';
+import { UndoToast } from '@/components/ui/undo-toast.tsx';
 
 const message = (e: unknown) => (e instanceof Error ? e.message : null);
 
@@ -35,6 +38,17 @@ export function Component() {
   const del = useDeleteChannel();
   const [renaming, setRenaming] = useState<string | null>(null);
   const [confirmDelete, setConfirmDelete] = useState(false);
+  // While mounted the removal goes through the mutation (the list refreshes); once the screen is left, straight to the server.
+  const mounted = useRef(true);
+  useEffect(
+    () => () => {
+      mounted.current = false;
+    },
+    [],
+  );
+  const undoable = useUndoableRemove((slideId) =>
+    mounted.current ? remove.mutate(slideId) : void removeSlide(channelId, slideId).catch(() => undefined),
+  );
 
   if (channel.isPending) return <p className="text-sm text-muted">Loading channel…</p>;
   if (channel.error) return <Notice tone="error">{channel.error.message}</Notice>;
@@ -111,10 +125,16 @@ export function Component() {
           </h2>
           {listError && <Notice tone="error">{listError}</Notice>}
           <SlideList
-            channel={c}
+            channel={{ ...c, slides: c.slides.filter((s) => s.id !== undoable.waiting?.id) }}
             busy={busy}
-            onReorder={(ids) => reorder.mutate(ids)}
-            onRemove={(id) => remove.mutate(id)}
+            onReorder={(ids) =>
+              // A slide waiting to be removed is still on the server: it keeps its place at the end until it goes.
+              reorder.mutate(undoable.waiting ? [...ids, undoable.waiting.id] : ids)
+            }
+            onRemove={(id) => {
+              const slide = c.slides.find((s) => s.id === id);
+              undoable.remove(id, slide ? slideTitle(slide) : 'The slide');
+            }}
             onUpdate={(slideId, input) => update.mutate({ slideId, ...input })}
             updateError={
               update.error && update.variables ? { slideId: update.variables.slideId, message: update.error.message } : null
@@ -138,6 +158,14 @@ export function Component() {
           </section>
         </aside>
       </div>
+      {undoable.waiting && (
+        <UndoToast
+          key={undoable.waiting.id}
+          message={`“${undoable.waiting.label}” removed from the channel.`}
+          until={undoable.waiting.until}
+          onUndo={undoable.undo}
+        />
+      )}
     </>
   );
 }
