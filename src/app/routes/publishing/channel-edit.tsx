@@ -55,13 +55,15 @@ export function Component() {
   const c = channel.data;
   const busy = add.isPending || update.isPending || remove.isPending || reorder.isPending;
   const listError = message(reorder.error) ?? message(remove.error);
-  const total = c.slides.filter((s) => s.state === 'showing').reduce((sum, s) => sum + s.durationS, 0);
+  // A slide waiting out its undo window is already gone as far as this screen is concerned.
+  const shown = c.slides.filter((s) => s.id !== undoable.waiting?.id);
+  const total = shown.filter((s) => s.state === 'showing').reduce((sum, s) => sum + s.durationS, 0);
 
   return (
     <>
       <PageHeader
         title={c.name}
-        description={`${c.venue.name} · ${c.slides.length} slide${c.slides.length === 1 ? '' : 's'} · one loop takes ${Math.floor(total / 60)} min ${total % 60} s`}
+        description={`${c.venue.name} · ${shown.length} slide${shown.length === 1 ? '' : 's'} · one loop takes ${Math.floor(total / 60)} min ${total % 60} s`}
         actions={
           c.can.update && renaming === null ? (
             <>
@@ -125,7 +127,7 @@ export function Component() {
           </h2>
           {listError && <Notice tone="error">{listError}</Notice>}
           <SlideList
-            channel={{ ...c, slides: c.slides.filter((s) => s.id !== undoable.waiting?.id) }}
+            channel={{ ...c, slides: shown }}
             busy={busy}
             onReorder={(ids) =>
               // A slide waiting to be removed is still on the server: it keeps its place at the end until it goes.
