@@ -77,9 +77,10 @@ export function useCompleteWithToken(kind: 'invitation' | 'reset') {
 }
 
 /** Whether an invitation link still works (valid, used, expired or invalid), asked once when the page opens; never uses it. */
-export const useInvitationCheck = (token: string) =>
+export const useInvitationCheck = (token: string | null) =>
   useQuery({
-    queryKey: authKeys.invitation(token),
+    queryKey: authKeys.invitation(token ?? ''),
+    enabled: !!token,
     queryFn: async () => (await api.post<ApiData<{ state: TokenState }>>('/auth/invitation/check', { token })).data.state,
     staleTime: Number.POSITIVE_INFINITY,
     retry: false,

@@ -25,10 +25,15 @@ const REFUSED: Record<Exclude<TokenState, 'valid'>, { title: string; text: strin
 export function Component() {
   const [params] = useSearchParams();
   const token = params.get('token');
+  const check = useInvitationCheck(token);
+  const refused = check.data && check.data !== 'valid';
   return (
-    <AuthLayout title="Welcome to Starproof" intro="Choose a password to finish setting up your account.">
+    <AuthLayout
+      title="Welcome to Starproof"
+      intro={refused || !token ? 'This invitation cannot be used.' : 'Choose a password to finish setting up your account.'}
+    >
       {token ? (
-        <CheckedInvitation token={token} />
+        <CheckedInvitation token={token} check={check} />
       ) : (
         <Notice tone="error">This link is incomplete. Open the link from your invitation e-mail again.</Notice>
       )}
@@ -36,8 +41,7 @@ export function Component() {
   );
 }
 
-function CheckedInvitation({ token }: { token: string }) {
-  const check = useInvitationCheck(token);
+function CheckedInvitation({ token, check }: { token: string; check: ReturnType<typeof useInvitationCheck> }) {
   if (check.isPending) return <p className="text-sm text-muted">Checking your invitation…</p>;
   // The check itself failing (network, rate limit) must not lock anyone out: the form still works and the server checks again.
   if (check.isError || check.data === 'valid')

@@ -100,13 +100,13 @@ export function Component() {
               role="group"
               aria-label="Which version"
               aria-describedby="version-note"
-              className="inline-flex flex-wrap rounded-md border border-rule bg-panel p-0.5 text-sm"
+              className="grid grid-cols-1 gap-0.5 rounded-md border border-rule bg-panel p-0.5 text-sm sm:grid-cols-2"
             >
               <button
                 type="button"
                 aria-pressed={!showLive}
                 onClick={() => setShowLive(false)}
-                className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}
+                className={`rounded px-3 py-1.5 text-left ${!showLive ? 'bg-accent text-on-accent' : ''}`}
               >
                 {labels.working}
               </button>
@@ -114,7 +114,7 @@ export function Component() {
                 type="button"
                 aria-pressed={showLive}
                 onClick={() => setShowLive(true)}
-                className={`rounded px-3 py-1 ${showLive ? 'bg-accent text-on-accent' : ''}`}
+                className={`rounded px-3 py-1.5 text-left ${showLive ? 'bg-accent text-on-accent' : ''}`}
               >
                 {labels.live}
               </button>

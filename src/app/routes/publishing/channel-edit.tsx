@@ -46,9 +46,11 @@ export function Component() {
     },
     [],
   );
-  const undoable = useUndoableRemove((slideId) =>
-    mounted.current ? remove.mutate(slideId) : void removeSlide(channelId, slideId).catch(() => undefined),
-  );
+  const undoable = useUndoableRemove((slideId) => {
+    if (!mounted.current) return void removeSlide(channelId, slideId).catch(() => undefined);
+    reorder.reset();
+    remove.mutate(slideId);
+  });
 
   if (channel.isPending) return <p className="text-sm text-muted">Loading channel…</p>;
   if (channel.error) return <Notice tone="error">{channel.error.message}</Notice>;
@@ -129,10 +131,11 @@ export function Component() {
           <SlideList
             channel={{ ...c, slides: shown }}
             busy={busy}
-            onReorder={(ids) =>
+            onReorder={(ids) => {
+              remove.reset();
               // A slide waiting to be removed is still on the server: it keeps its place at the end until it goes.
-              reorder.mutate(undoable.waiting ? [...ids, undoable.waiting.id] : ids)
-            }
+              reorder.mutate(undoable.waiting ? [...ids, undoable.waiting.id] : ids);
+            }}
             onRemove={(id) => {
               const slide = c.slides.find((s) => s.id === id);
               undoable.remove(id, slide ? slideTitle(slide) : 'The slide');
