@@ -43,7 +43,7 @@ export function pageAbilities(page: Page, viewer: User): PageCan {
       schedule: false,
       comment: can(viewer, 'page', 'comment', page),
       archive: false,
-      restore: can(viewer, 'page', 'archive', page),
+      restore: can(viewer, 'page', 'restore', page),
       delete: can(viewer, 'page', 'delete', page) && !page.firstPublishedAt,
     };
   return {

@@ -119,6 +119,13 @@ describe('archiving pages', () => {
     const other = await signedInAgent('writer');
     expect((await other.agent.post(`/api/pages/${draft.id}/archive`).send({ reason: 'Not mine' })).status).toBe(403);
     expect((await crew.reviewer.agent.post(`/api/pages/${live.pageId}/archive`).send({ reason: 'Nope' })).status).toBe(403);
+    // What an editor archived, the writer cannot undo; what the writer archived, they can.
+    expect((await crew.editor.agent.post(`/api/pages/${live.pageId}/archive`).send({ reason: 'Out of date' })).status).toBe(200);
+    const undo = await crew.writer.agent.post(`/api/pages/${live.pageId}/restore`).send({ reason: 'I still want it' });
+    expect(undo.status).toBe(403);
+    expect((await crew.writer.agent.get(`/api/pages/${live.pageId}`)).body.data.can).toMatchObject({ restore: false });
+    expect((await crew.writer.agent.post(`/api/pages/${draft.id}/archive`).send({ reason: 'Parked' })).status).toBe(200);
+    expect((await crew.writer.agent.post(`/api/pages/${draft.id}/restore`).send({ reason: 'Back' })).status).toBe(200);
   });
 });
 

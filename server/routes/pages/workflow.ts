@@ -147,7 +147,7 @@ workflowRouter.post('/archive', validate(PageReasonSchema), async (req, res) => 
 workflowRouter.post('/restore', validate(PageReasonSchema), async (req, res) => {
   const viewer = currentUser(req);
   const page = await loadPage(parentParam(req, 'id'));
-  authorize(viewer, 'page', 'archive', page);
+  authorize(viewer, 'page', 'restore', page);
   await restorePage(page.id, req.body.reason, viewer);
   res.json({ data: await detail(req, page.id) });
 });
