@@ -150,6 +150,12 @@ describe('messages that belong to an earlier attempt go', () => {
     await panel.getByRole('button', { name: /^Publish/ }).click();
     await expect.poll(() => panel.getByText(/^Live: revision/).count(), WAIT).toBe(1);
     expect(await panel.getByText(/Choose a time in the future/).count()).toBe(0);
+    // The version switch says which is the working draft and which is what visitors see, never two bare numbers.
+    const which = page.getByRole('group', { name: 'Which version' });
+    await expect.poll(() => which.getByRole('button', { name: /^What visitors see now \(revision \d+/ }).count(), WAIT).toBe(1);
+    const labels = await which.getByRole('button').allTextContents();
+    expect(labels[0]).toMatch(/^(Revision \d+ with today’s wording|Working draft \(revision \d+\))$/);
+    expect(await page.getByText(/^Both are revision \d+|visitors still see revision/).count()).toBe(1);
   });
 });
 
