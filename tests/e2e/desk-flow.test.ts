@@ -1,7 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { openBrowser, screenshot } from '../support/browser.ts';
-import { demoSession, ok, openSessionInBrowser, readyImage, type E2eSession } from '../support/e2e-api.ts';
-import { solidImage } from '../support/media.ts';
+import { demoSession, ok, openSessionInBrowser, type E2eSession } from '../support/e2e-api.ts';
 
 const WAIT = { timeout: 20_000 };
 
@@ -101,9 +100,19 @@ describe('the pairing dialog', () => {
   it('shows the player’s address and a QR code of it beside the code, at 390 px too', async () => {
     const { context, page, baseUrl } = await openBrowser();
     const admin = await demoSession(baseUrl, 'admin');
-    const venues = await admin.call<{ data: Array<{ id: string }> }>('GET', '/api/venues');
+    // A venue of its own: other browser tests count the demo venue's screens.
+    const venue = ok(
+      await admin.call<{ data: { id: string } }>('POST', '/api/venues', {
+        name: `Pairing check ${Date.now()} (demo)`,
+        latitude: 54.62,
+        longitude: -2.95,
+        elevationM: 160,
+        timeZone: 'Europe/London',
+      }),
+      'venue',
+    ).body.data;
     await openSessionInBrowser(context, baseUrl, admin);
-    await page.goto(`${baseUrl}/venues/${venues.body.data[0]!.id}`);
+    await page.goto(`${baseUrl}/venues/${venue.id}`);
     await page.getByLabel('New screen’s name').fill('Planetarium shop screen');
     await page.getByRole('button', { name: 'Add screen' }).click();
     const dialog = page.getByRole('dialog', { name: 'Pairing code for Planetarium shop screen' });
@@ -195,7 +204,7 @@ describe('an invitation link is checked when the page opens', () => {
 });
 
 describe('removing a slide', () => {
-  it('can be undone for a few seconds (nothing reaches the server meanwhile), then goes for good; image slides are named by their title', async () => {
+  it('can be undone for a few seconds (nothing reaches the server meanwhile), then goes for good', async () => {
     const { context, page, baseUrl } = await openBrowser();
     const editor = await demoSession(baseUrl, 'editor');
     const venues = await editor.call<{ data: Array<{ id: string }> }>('GET', '/api/venues');
@@ -207,31 +216,13 @@ describe('removing a slide', () => {
       'channel',
     ).body.data;
     ok(await editor.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'sky_tonight' }), 'sky slide');
-    const imageId = await readyImage(editor, await solidImage(800, 450, '#1b2a4a'), 'Corrie Vale Observatory (demo)');
-    {
-      ok(
-        await editor.call('POST', `/api/channels/${channel.id}/slides`, { kind: 'image', mediaId: imageId, caption: '' }),
-        'image',
-      );
-      ok(
-        await editor.call('POST', `/api/channels/${channel.id}/slides`, {
-          kind: 'image',
-          mediaId: imageId,
-          caption: 'Our dome at night',
-        }),
-        'titled image',
-      );
-    }
     const slidesOnServer = async () =>
       (await editor.call<{ data: { slides: unknown[] } }>('GET', `/api/channels/${channel.id}`)).body.data.slides.length;
     const before = await slidesOnServer();
 
     await openSessionInBrowser(context, baseUrl, editor);
     await page.goto(`${baseUrl}/publishing/channels/${channel.id}`);
-    await expect.poll(() => page.getByText('Our dome at night', { exact: true }).count(), WAIT).toBe(1);
-    expect(await page.getByText('Image without a title (demo-picture.jpg)', { exact: true }).count()).toBe(1);
-    // The alt text describes the picture; it never names the slide.
-    expect(await page.getByText('A dark blue field with a soft glow (demo picture)', { exact: true }).count()).toBe(0);
+    await expect.poll(() => page.getByRole('button', { name: 'Remove “The sky tonight”' }).count(), WAIT).toBe(1);
     await page.getByRole('button', { name: 'Remove “The sky tonight”' }).click();
     const toast = page.getByRole('status').filter({ hasText: '“The sky tonight” removed from the channel.' });
     await expect.poll(() => toast.count(), WAIT).toBe(1);

@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import type { PageStatementDto } from '../../../shared/schemas/page.ts';
 import { objectCountText } from '../../../src/features/pages/object-count.ts';
 import { publishLabel, versionLabels } from '../../../src/features/pages/version-labels.ts';
+import { slideTitle } from '../../../src/features/publishing/slide-title.ts';
 
 const statement = (text: string, signedText: string | null) => ({ text, signedText }) as PageStatementDto;
 const page = (working: number, live: number | null, statements: PageStatementDto[] = []) => ({
@@ -54,5 +55,21 @@ describe('the object picker’s count', () => {
     expect(objectCountText(1, 1, true, 'M1')).toBe('1 object matches “M1”');
     expect(objectCountText(0, 0, true, 'zzz')).toBe('No object matches “zzz”.');
     expect(objectCountText(20, 120000, false, '')).toBe('20 of about 120,000 objects shown — type to search');
+  });
+});
+
+describe('a slide’s name in the channel list', () => {
+  const media = {
+    id: 'm',
+    thumbnailUrl: null,
+    altText: 'A reddish cloud of glowing gas with dark lanes of dust',
+    fileName: 'lagoon.jpg',
+  };
+  it('names an image slide by its title, or its file name, never its alt text', () => {
+    expect(slideTitle({ kind: 'image', page: null, caption: 'Our dome at night', media })).toBe('Our dome at night');
+    expect(slideTitle({ kind: 'image', page: null, caption: '', media })).toBe('Image without a title (lagoon.jpg)');
+    expect(slideTitle({ kind: 'image', page: null, caption: '', media: null })).toBe('Image without a title');
+    expect(slideTitle({ kind: 'page', page: { id: 'p', title: 'The Crab Nebula' }, caption: '', media })).toBe('The Crab Nebula');
+    expect(slideTitle({ kind: 'sky_tonight', page: null, caption: '', media: null })).toBe('The sky tonight');
   });
 });

@@ -19,7 +19,8 @@ import { paths } from '@/config/paths.ts';
 import { AddSlideForm } from '@/features/publishing/components/add-slide-form.tsx';
 import { PlayerPreview } from '@/features/publishing/components/player-preview.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
-import { SlideList, slideTitle } from '@/features/publishing/components/slide-list.tsx';
+import { SlideList } from '@/features/publishing/components/slide-list.tsx';
+import { slideTitle } from '@/features/publishing/slide-title.ts';
 import { useUndoableRemove } from '@/features/publishing/use-undoable-remove.ts';
 import { UndoToast } from '@/components/ui/undo-toast.tsx';
 

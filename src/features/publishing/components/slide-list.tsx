@@ -4,18 +4,7 @@ import { SLIDE_KIND_LABELS } from '@shared/schemas/channel.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { SlideTimingForm } from './slide-timing-form.tsx';
-
-/**
- * The slide's name as the list shows it. An image slide is named by its title (the words shown on the
- * screen); without one, by the image's file name. Never by its alt text, which describes the picture
- * for people who cannot see it and reads badly as a name.
- */
-export const slideTitle = (s: SlideDto) =>
-  s.kind === 'page'
-    ? (s.page?.title ?? 'A page')
-    : s.kind === 'image'
-      ? s.caption || (s.media ? `Image without a title (${s.media.fileName})` : 'Image without a title')
-      : 'The sky tonight';
+import { slideTitle } from '../slide-title.ts';
 
 const moved = (ids: string[], from: number, to: number) => {
   const next = [...ids];

@@ -39,8 +39,8 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
                 In the screen’s browser, go to this address (or scan the code with a tablet or phone used as a screen), then type
                 the code above.
               </p>
-              <p className="mt-2 break-all font-mono text-sm">
-                <a href={pairing.playerUrl} target="_blank" rel="noreferrer" className="text-accent underline">
+              <p className="mt-2 break-all text-sm">
+                <a href={pairing.playerUrl} target="_blank" rel="noreferrer" className="font-mono text-accent underline">
                   {pairing.playerUrl}
                 </a>
               </p>
