@@ -35,6 +35,11 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
   declare recheckStatementIds: CreationOptional<string[]>;
   /** The language versions this page belongs to (PageVersionGroup), or null while it has none. */
   declare versionGroupId: CreationOptional<string | null>;
+  /** Set while the page is archived: hidden from the desk's lists and from every public output. */
+  declare archivedAt: CreationOptional<Date | null>;
+  declare archivedById: CreationOptional<string | null>;
+  /** When the page first went live; a page ever published may be archived but never deleted. */
+  declare firstPublishedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -58,6 +63,9 @@ export class Page extends Model<InferAttributes<Page>, InferCreationAttributes<P
         lastReviewerId: { type: DataTypes.UUID },
         recheckStatementIds: { type: DataTypes.ARRAY(DataTypes.UUID), allowNull: false, defaultValue: [] },
         versionGroupId: { type: DataTypes.UUID },
+        archivedAt: { type: DataTypes.DATE },
+        archivedById: { type: DataTypes.UUID },
+        firstPublishedAt: { type: DataTypes.DATE },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

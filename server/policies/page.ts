@@ -14,6 +14,9 @@ const isPrivateDraft = (page: Page) => page.status === 'draft' && !page.submitte
  * - writers create pages, edit and submit their own; they read colleagues' pages once submitted;
  * - reviewers sign off statements and pages, resolve number flags, send back, comment;
  * - editors publish, unpublish and schedule, and may edit any page;
+ * - editors archive and restore any page; a writer archives their own page while it is not live
+ *   (taking a page off the public is the editors' call, as publishing is) and restores what they archived;
+ * - a writer deletes their own draft; editors delete any page (the service refuses a page ever published);
  * - admins may do everything.
  */
 export const pagePolicy = {
@@ -28,4 +31,9 @@ export const pagePolicy = {
     (owner(user, page) || desk(user) || reviewer(user)) &&
     (owner(user, page) || !isPrivateDraft(page) || desk(user))) as Rule<Page>,
   publish: ((user, page) => !!page && desk(user)) as Rule<Page>,
+  archive: ((user, page) => !!page && (desk(user) || (owner(user, page) && !page.publishedSnapshot))) as Rule<Page>,
+  /** An archive an editor made is theirs to undo: a writer restores only what they archived themselves. */
+  restore: ((user, page) =>
+    !!page && (desk(user) || (owner(user, page) && (!page.archivedAt || page.archivedById === user.id)))) as Rule<Page>,
+  delete: ((user, page) => !!page && (desk(user) || (owner(user, page) && page.status === 'draft'))) as Rule<Page>,
 };

@@ -31,6 +31,8 @@ function slideState(
   now: number,
   onSchedule: boolean,
 ): { state: SlideState; stateText: string | null } {
+  if (slide.kind === 'page' && page?.archivedAt)
+    return { state: 'page_archived', stateText: 'Not shown: the page is archived (restore and publish it to show it again)' };
   if (slide.kind === 'page' && !page?.publishedSnapshot)
     return { state: 'page_unpublished', stateText: 'Not shown: the page is not published' };
   if (slide.kind === 'image' && (!media || missingForPublishing(media).length))
@@ -71,7 +73,9 @@ export function presentChannelDetail(
       caption: s.caption,
       page: page ? { id: page.id, title: page.publishedSnapshot?.title ?? page.title } : null,
       statementIds: s.statementIds ?? [],
-      media: m ? { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText } : null,
+      media: m
+        ? { id: m.id, thumbnailUrl: thumb ? renditionUrl(thumb.storageKey) : null, altText: m.altText, fileName: m.fileName }
+        : null,
       ...slideState(s, page, m, now, isShowingAt(s.schedule, now, context.timeZone, context.sunDays)),
     };
   });

@@ -21,6 +21,7 @@ export function presentPageRow(
     revisionNumber,
     live: !!page.publishedSnapshot,
     scheduledPublishAt: page.scheduledPublishAt?.toISOString() ?? null,
+    archivedAt: page.archivedAt?.toISOString() ?? null,
     updatedAt: page.updatedAt.toISOString(),
   };
 }
@@ -30,7 +31,21 @@ export function presentPageRow(
  * client shows only buttons that will work.
  */
 export function pageAbilities(page: Page, viewer: User): PageCan {
-  const reviewable = page.status === 'in_review' || page.status === 'needs_recheck';
+  const reviewable = (page.status === 'in_review' || page.status === 'needs_recheck') && !page.archivedAt;
+  if (page.archivedAt)
+    return {
+      edit: false,
+      submit: false,
+      withdraw: false,
+      review: false,
+      publish: false,
+      unpublish: false,
+      schedule: false,
+      comment: can(viewer, 'page', 'comment', page),
+      archive: false,
+      restore: can(viewer, 'page', 'restore', page),
+      delete: can(viewer, 'page', 'delete', page) && !page.firstPublishedAt,
+    };
   return {
     edit: can(viewer, 'page', 'edit', page) && page.status !== 'in_review',
     submit: can(viewer, 'page', 'submit', page) && page.status === 'draft',
@@ -40,5 +55,8 @@ export function pageAbilities(page: Page, viewer: User): PageCan {
     unpublish: can(viewer, 'page', 'publish', page) && !!page.publishedSnapshot,
     schedule: can(viewer, 'page', 'publish', page) && page.status === 'approved',
     comment: can(viewer, 'page', 'comment', page),
+    archive: can(viewer, 'page', 'archive', page),
+    restore: false,
+    delete: can(viewer, 'page', 'delete', page) && !page.firstPublishedAt && !page.publishedSnapshot,
   };
 }

@@ -1,14 +1,27 @@
 import { Router, type Request } from 'express';
 import { rateLimit } from 'express-rate-limit';
 import { PgRateLimitStore } from '../middlewares/rate-limit-store.ts';
-import { ChangePasswordSchema, RequestPasswordResetSchema, SignInSchema, TokenPasswordSchema } from '@shared/schemas/auth.ts';
+import {
+  ChangePasswordSchema,
+  RequestPasswordResetSchema,
+  SignInSchema,
+  TokenCheckSchema,
+  TokenPasswordSchema,
+} from '@shared/schemas/auth.ts';
 import { HttpError } from '../errors.ts';
 import { currentUser, requireUser } from '../middlewares/authenticate.ts';
 import { validate } from '../middlewares/validate.ts';
 import type { User } from '../models/index.ts';
 import { presentSessionUser } from '../presenters/user.ts';
 import { config } from '../config.ts';
-import { changePassword, recordSignOut, requestPasswordReset, setPasswordWithToken, signIn } from '../services/users/index.ts';
+import {
+  changePassword,
+  checkToken,
+  recordSignOut,
+  requestPasswordReset,
+  setPasswordWithToken,
+  signIn,
+} from '../services/users/index.ts';
 
 /** Per-address throttle for sign-in and reset requests (per-account throttling is in the database). */
 function addressLimiter(name: string, limit: number) {
@@ -72,6 +85,14 @@ authRouter.post(
     res.status(202).json({ data: { message: 'If that address has an account, a reset link is on its way.' } });
   },
 );
+
+/**
+ * Whether an invitation link still works, without using it, so the welcome page can say so before
+ * anyone types a password. Answers only valid / invalid / used / expired; rate limited per address.
+ */
+authRouter.post('/invitation/check', addressLimiter('invitation-check', 60), validate(TokenCheckSchema), async (req, res) => {
+  res.json({ data: { state: await checkToken(req.body.token, 'invitation') } });
+});
 
 /** Invitation acceptance and password reset: consume the token, set the password, sign in. */
 for (const [path, purpose] of [

@@ -9,11 +9,24 @@ import {
   revokeScreen,
   addScreen,
   listScreens,
+  playerAddress,
   removeScreen,
   setScreenLanguage,
   setScreenOrientation,
 } from '../services/publishing/index.ts';
 import { loadScreen, loadVenue, parentParam } from './load.ts';
+
+/** The one-time code with the player's address and its QR code, for the admin to set the screen up. */
+function pairingBody(screen: Parameters<typeof presentKioskScreen>[0], code: string, expiresAt: Date): PairingCodeDto {
+  const { url, qr } = playerAddress();
+  return {
+    screen: presentKioskScreen(screen),
+    pairingCode: code,
+    expiresAt: expiresAt.toISOString(),
+    playerUrl: url,
+    playerQr: qr,
+  };
+}
 
 /** Screens of the venue in the URL; requireUser runs in the parent router. */
 export const venueScreensRouter = Router({ mergeParams: true });
@@ -32,7 +45,7 @@ venueScreensRouter.post('/', validate(ScreenCreateSchema), async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await addScreen(venue, req.body.name, viewer, req.ip);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
-  const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
+  const body = pairingBody(screen, code, expiresAt);
   res.status(201).json({ data: body });
 });
 
@@ -43,7 +56,7 @@ venueScreensRouter.post('/:screenId/pairing', async (req, res) => {
   authorize(viewer, 'venue', 'manageScreens', venue);
   const screen = await loadScreen(venue, req.params.screenId);
   const { code, expiresAt } = await issuePairingCode(screen, viewer, req.ip);
-  const body: PairingCodeDto = { screen: presentKioskScreen(screen), pairingCode: code, expiresAt: expiresAt.toISOString() };
+  const body = pairingBody(screen, code, expiresAt);
   res.status(201).json({ data: body });
 });
 

@@ -36,4 +36,13 @@ export const TokenPasswordSchema = z.object({
 });
 export type TokenPasswordInput = z.infer<typeof TokenPasswordSchema>;
 
+/** Checking a link's token without using it. Anything short or odd is simply "invalid", not a 400. */
+export const TokenCheckSchema = z.object({
+  token: z.string({ message: 'The link is missing its token' }).max(500, 'The link is not valid'),
+});
+
+/** What a link's token is now: nothing more (no name, no address), so checking tells a guesser nothing. */
+export const TOKEN_STATES = ['valid', 'invalid', 'used', 'expired'] as const;
+export type TokenState = (typeof TOKEN_STATES)[number];
+
 export { email as EmailSchema };

@@ -157,7 +157,15 @@ export const ChannelScreensSchema = z.object({
 export type ChannelScreensInput = z.infer<typeof ChannelScreensSchema>;
 
 /** Why a slide is or is not on the screens now. */
-export const SLIDE_STATES = ['showing', 'scheduled', 'ended', 'off_schedule', 'page_unpublished', 'image_not_ready'] as const;
+export const SLIDE_STATES = [
+  'showing',
+  'scheduled',
+  'ended',
+  'off_schedule',
+  'page_unpublished',
+  'page_archived',
+  'image_not_ready',
+] as const;
 export type SlideState = (typeof SLIDE_STATES)[number];
 
 export interface SlideDto {
@@ -173,7 +181,8 @@ export interface SlideDto {
   caption: string;
   page: { id: string; title: string } | null;
   statementIds: string[];
-  media: { id: string; thumbnailUrl: string | null; altText: string } | null;
+  /** `fileName` names an image slide in lists when it has no title (alt text describes the picture; it is no name). */
+  media: { id: string; thumbnailUrl: string | null; altText: string; fileName: string } | null;
   state: SlideState;
   /** For a person: why the slide is not showing, or null. */
   stateText: string | null;

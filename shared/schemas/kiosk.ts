@@ -109,6 +109,10 @@ export interface PairingCodeDto {
   /** Written like K7Q-4M2. Shown once; only its hash is stored. */
   pairingCode: string;
   expiresAt: string;
+  /** Where the screen's browser goes to show the player (absolute, from PUBLIC_URL). */
+  playerUrl: string;
+  /** A QR code of `playerUrl`, as SVG path data on a `size` × `size` grid (quiet zone included). */
+  playerQr: { size: number; path: string };
 }
 
 /** What the player receives when it pairs. */

@@ -224,9 +224,10 @@ export interface MeasurementDto {
 }
 
 /** One row of an object's measurement history. */
+/** One event in an object's history: a measurement's change, or (`object_created`, no measurement) the object's creation. */
 export interface MeasurementHistoryDto {
   id: string;
-  measurementId: string;
+  measurementId: string | null;
   quantity: string | null;
   action: string;
   changedBy: string | null;

@@ -44,6 +44,8 @@ export const PageListQuerySchema = z.object({
   objectId: z.uuid({ message: 'objectId must be a valid id' }).optional(),
   writerId: z.uuid({ message: 'writerId must be a valid id' }).optional(),
   q: z.string().trim().max(120).optional(),
+  /** Archived pages are hidden unless asked for: `include` lists them with the others, `only` alone. */
+  archived: z.enum(['hide', 'include', 'only'], { message: 'archived must be hide, include or only' }).default('hide'),
   page: z.coerce.number().int().min(1).max(100_000).default(1),
   pageSize: z.coerce.number().int().min(1).max(PageLimits.pageSizeMax).default(50),
 });
@@ -90,6 +92,15 @@ export const PageSubmitSchema = z.object({
 });
 export type PageSubmitInput = z.infer<typeof PageSubmitSchema>;
 
+/** Archiving, restoring or deleting a page: the reason is kept in the audit log. */
+export const PageReasonSchema = z.object({
+  reason: z
+    .string({ message: 'Give a reason' })
+    .trim()
+    .min(1, 'Give a reason: it is kept with the history')
+    .max(PageLimits.reasonMax, `Reasons are at most ${PageLimits.reasonMax} characters`),
+});
+
 export const StatementSignoffSchema = z.object({ statementId: z.uuid({ message: 'statementId must be a valid id' }) });
 
 export const ScheduleSchema = z.object({
@@ -134,6 +145,8 @@ export const PageRowSchema = z.object({
   revisionNumber: z.number(),
   live: z.boolean(),
   scheduledPublishAt: z.string().nullable(),
+  /** When the page was archived (hidden from lists and public outputs), or null. */
+  archivedAt: z.string().nullable(),
   updatedAt: z.string(),
 });
 export type PageRow = z.infer<typeof PageRowSchema>;
@@ -180,6 +193,11 @@ export interface PageCan {
   unpublish: boolean;
   schedule: boolean;
   comment: boolean;
+  /** Hide the page from the desk's lists and every public output (restorable). */
+  archive: boolean;
+  restore: boolean;
+  /** Delete for good: only a page that was never published. */
+  delete: boolean;
 }
 
 /**

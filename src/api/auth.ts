@@ -1,6 +1,12 @@
 /** The session: who is signed in, signing in and out, passwords, invitations. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { ChangePasswordInput, RequestPasswordResetInput, SignInInput, TokenPasswordInput } from '@shared/schemas/auth.ts';
+import type {
+  ChangePasswordInput,
+  RequestPasswordResetInput,
+  SignInInput,
+  TokenPasswordInput,
+  TokenState,
+} from '@shared/schemas/auth.ts';
 import type { SessionUser } from '@shared/schemas/user.ts';
 import { api, ApiRequestError, type ApiData } from '@/lib/api-client.ts';
 
@@ -8,6 +14,7 @@ import { api, ApiRequestError, type ApiData } from '@/lib/api-client.ts';
 export const authKeys = {
   all: ['auth'] as const,
   me: () => [...authKeys.all, 'me'] as const,
+  invitation: (token: string) => [...authKeys.all, 'invitation', token] as const,
 };
 
 /** The signed-in user, or null when nobody is signed in. */
@@ -68,3 +75,13 @@ export function useCompleteWithToken(kind: 'invitation' | 'reset') {
     onSuccess: start,
   });
 }
+
+/** Whether an invitation link still works (valid, used, expired or invalid), asked once when the page opens; never uses it. */
+export const useInvitationCheck = (token: string | null) =>
+  useQuery({
+    queryKey: authKeys.invitation(token ?? ''),
+    enabled: !!token,
+    queryFn: async () => (await api.post<ApiData<{ state: TokenState }>>('/auth/invitation/check', { token })).data.state,
+    staleTime: Number.POSITIVE_INFINITY,
+    retry: false,
+  });

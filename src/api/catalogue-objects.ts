@@ -33,9 +33,12 @@ export const skyObjectsQueryOptions = (query: Partial<SkyObjectListQuery>) =>
 /** One page of the catalogue table, kept on screen while the next page loads. */
 export const useSkyObjects = (query: CatalogueQuery) => useQuery(skyObjectsQueryOptions(query));
 
-/** The first 20 objects matching typed text (name or designation), for the pickers. */
+/** The first 20 objects matching typed text (name or designation), for the pickers, with how many match in all. */
 export const useObjectSearch = (q: string) =>
-  useQuery({ ...skyObjectsQueryOptions({ pageSize: 20, q }), select: (page) => page.rows });
+  useQuery({
+    ...skyObjectsQueryOptions({ pageSize: 20, q }),
+    select: (page) => ({ rows: page.rows, total: page.total, totalExact: page.totalExact }),
+  });
 
 export const skyObjectQueryOptions = (id: string) =>
   queryOptions({

@@ -90,12 +90,11 @@ export const useUpdateSlide = (id: string) =>
     async ({ slideId, ...input }: SlideUpdateInput & { slideId: string }) =>
       (await api.patch<ApiData<ChannelDetailDto>>(`/channels/${id}/slides/${slideId}`, input)).data,
   );
+/** Removes a slide on the server (no cache update: for a delete sent as a screen closes). */
+export const removeSlide = async (id: string, slideId: string) =>
+  (await api.delete<ApiData<ChannelDetailDto>>(`/channels/${id}/slides/${slideId}`)).data;
 /** Removes a slide. */
-export const useRemoveSlide = (id: string) =>
-  useChannelEdit(
-    id,
-    async (slideId: string) => (await api.delete<ApiData<ChannelDetailDto>>(`/channels/${id}/slides/${slideId}`)).data,
-  );
+export const useRemoveSlide = (id: string) => useChannelEdit(id, (slideId: string) => removeSlide(id, slideId));
 /** Puts the slides in a new order. */
 export const useReorderSlides = (id: string) =>
   useChannelEdit(

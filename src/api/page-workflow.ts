@@ -2,9 +2,10 @@
  * The steps a page goes through: submit, send back, sign-offs, flags, publishing. Each answers with
  * the page as it is now (see `usePageChange`).
  */
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { PageDto } from '@shared/schemas/page.ts';
 import { api, type ApiData } from '@/lib/api-client.ts';
-import { usePageChange } from './pages.ts';
+import { pageKeys, usePageChange } from './pages.ts';
 
 const post = (url: string, body?: unknown) => api.post<ApiData<PageDto>>(url, body);
 
@@ -31,3 +32,20 @@ export const useUnpublishPage = (id: string) => usePageChange(id, () => post(`/p
 /** Schedules publishing at a time, or clears the schedule with null. */
 export const useSchedulePage = (id: string) =>
   usePageChange(id, (at: string | null) => api.put<ApiData<PageDto>>(`/pages/${id}/schedule`, { at }));
+/** Archives the page (hidden from lists and every public output), with the person's reason. */
+export const useArchivePage = (id: string) => usePageChange(id, (reason: string) => post(`/pages/${id}/archive`, { reason }));
+/** Brings an archived page back to the desk; it goes live again only when an editor publishes it. */
+export const useRestorePage = (id: string) => usePageChange(id, (reason: string) => post(`/pages/${id}/restore`, { reason }));
+
+/** Deletes a page that was never published, for good; its queries are dropped and the lists refreshed. */
+export function useDeletePage(id: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (reason: string) => api.delete<void>(`/pages/${id}?reason=${encodeURIComponent(reason)}`),
+    onSuccess: () => {
+      queryClient.removeQueries({ queryKey: pageKeys.detail(id) });
+      void queryClient.invalidateQueries({ queryKey: pageKeys.lists() });
+      void queryClient.invalidateQueries({ queryKey: pageKeys.dashboard() });
+    },
+  });
+}

@@ -23,6 +23,8 @@ export interface PageFilters {
   objectId?: string;
   writerId?: string;
   q?: string;
+  /** Archived pages are hidden unless asked for: `include` lists them with the rest, `only` alone. */
+  archived?: 'include' | 'only';
   page?: number;
 }
 

@@ -96,7 +96,7 @@ describe('measurements', () => {
     const twice = await reviewer.post(`/api/catalogue/measurements/${proposed.body.data.id}/review`).send({ decision: 'accept' });
     expect(twice.status).toBe(409);
     const history = await reviewer.get(`/api/catalogue/objects/${object.id}/history`);
-    expect(history.body.data.map((h: { action: string }) => h.action)).toEqual(['declined', 'proposed']);
+    expect(history.body.data.map((h: { action: string }) => h.action)).toEqual(['declined', 'proposed', 'object_created']);
     expect(history.body.data[0]).toMatchObject({
       reason: 'Copied from a press release.',
       oldValues: { status: 'proposed' },
@@ -233,7 +233,7 @@ describe('measurements', () => {
       newValues: Record<string, unknown>;
       reason: string | null;
     }>;
-    expect(history.map((h) => h.action)).toEqual(['retired', 'updated', 'preferred', 'created']);
+    expect(history.map((h) => h.action)).toEqual(['retired', 'updated', 'preferred', 'created', 'object_created']);
     expect(history[1]).toMatchObject({
       reason: 'Corrected a typing error.',
       oldValues: { value: 0.158, uncertainty: null, enteredValue: 0.158 },

@@ -2,7 +2,7 @@ import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, SkyObject } from '../../server/models/index.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
-import { buildMeasurement, buildSkyObject } from '../support/catalogue.ts';
+import { buildMeasurement, buildSkyObject, buildSource } from '../support/catalogue.ts';
 
 beforeAll(async () => {
   await getTestApp();
@@ -26,6 +26,34 @@ describe('catalogue objects', () => {
     expect(res.body.data.raDeg).toBeCloseTo(88.7929, 3);
     expect(res.body.data.decDeg).toBeCloseTo(7.4069, 3);
     expect(await AuditEvent.count({ where: { action: 'catalogue.object_created' } })).toBe(1);
+  });
+
+  it('the object’s history ends with its creation: who created it and when, after every measurement event', async () => {
+    const { agent, user } = await signedInAgent('reviewer');
+    const created = await agent
+      .post('/api/catalogue/objects')
+      .send({ name: 'Corrie Vale test nebula (demo)', kind: 'nebula', ra: '05 35 17.3', dec: '-05 23 28' });
+    expect(created.status).toBe(201);
+    const id = created.body.data.id as string;
+    const empty = await agent.get(`/api/catalogue/objects/${id}/history`);
+    expect(empty.status).toBe(200);
+    expect(empty.body.data).toEqual([
+      expect.objectContaining({
+        action: 'object_created',
+        measurementId: null,
+        changedBy: user.name,
+        newValues: { name: 'Corrie Vale test nebula (demo)', kind: 'nebula' },
+        createdAt: expect.any(String),
+      }),
+    ]);
+    const source = await buildSource();
+    const added = await agent
+      .post(`/api/catalogue/objects/${id}/measurements`)
+      .send({ quantity: 'redshift', value: 0.001, sourceId: source.id });
+    expect(added.status).toBe(201);
+    const { agent: writer } = await signedInAgent('writer');
+    const after = (await writer.get(`/api/catalogue/objects/${id}/history`)).body.data as Array<{ action: string }>;
+    expect(after.map((h) => h.action)).toEqual(['created', 'object_created']);
   });
 
   it('accepts decimal degrees, and recomputes the constellation when the position changes', async () => {

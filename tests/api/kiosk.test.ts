@@ -1,6 +1,7 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { AuditEvent, KioskScreen } from '../../server/models/index.ts';
+import { appBaseUrl } from '../../server/config.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 
 beforeAll(async () => {
@@ -31,6 +32,34 @@ const heartbeat = async (token: string, body: object = {}) =>
   (await kiosk()).post('/api/kiosk/heartbeat').set('Authorization', `Bearer ${token}`).send(body);
 
 describe('kiosk pairing and tokens', () => {
+  it('the pairing answer carries the player’s absolute address and a QR code of it, drawn from a module grid', async () => {
+    const { agent } = await signedInAgent('admin');
+    const venue = (
+      await agent
+        .post('/api/venues')
+        .send({ name: 'QR Test Dome', latitude: 51.5, longitude: -0.1, elevationM: 10, timeZone: 'Europe/London' })
+    ).body.data;
+    const added = await agent.post(`/api/venues/${venue.id}/screens`).send({ name: 'QR foyer' });
+    expect(added.body.data.playerUrl).toBe(`${appBaseUrl()}/kiosk`);
+    expect(added.body.data.playerUrl).toMatch(/^https?:\/\/[^/]+\/kiosk$/);
+    const { size, path } = added.body.data.playerQr as { size: number; path: string };
+    // A version 1–40 code is 21–177 modules wide (ISO/IEC 18004), plus 4 modules of quiet zone each side.
+    expect((size - 8 - 21) % 4).toBe(0);
+    expect(size).toBeGreaterThanOrEqual(29);
+    // Only unit squares, and none in the quiet zone.
+    const squares = [...path.matchAll(/M(\d+) (\d+)h1v1h-1z/g)];
+    expect(squares.map((m) => m[0]).join('')).toBe(path);
+    for (const [, x, y] of squares) {
+      expect(Number(x)).toBeGreaterThanOrEqual(4);
+      expect(Number(y)).toBeLessThan(size - 4);
+    }
+    // The three finder patterns: the top-left corner module of each is dark.
+    const dark = new Set(squares.map(([, x, y]) => `${x},${y}`));
+    for (const corner of ['4,4', `${size - 11},4`, `4,${size - 11}`]) expect(dark.has(corner), corner).toBe(true);
+    const repaired = await agent.post(`/api/venues/${venue.id}/screens/${added.body.data.screen.id}/pairing`);
+    expect(repaired.body.data.playerUrl).toBe(added.body.data.playerUrl);
+  });
+
   it('an admin adds a screen and sees a one-time code like K7Q-4M2; the player trades it for a token', async () => {
     const { agent } = await signedInAgent('admin');
     const { venue, screen, code } = await venueWithScreen(agent);

@@ -73,6 +73,12 @@ describe('the media library, as a writer uses it', () => {
     await expect.poll(() => panel.getByText('Ready to publish').count(), { timeout: 30_000 }).toBe(1);
     await expect.poll(() => panel.getByRole('heading', { name: 'Renditions' }).count(), WAIT).toBe(1);
     await screenshot(page, 'media-details');
+    // A later save refused by the form takes "Saved." away: it spoke of the save before.
+    await form.getByLabel('Source web address').fill('not a web address');
+    await form.getByRole('button', { name: 'Save details' }).click();
+    await expect.poll(() => form.getByText('Enter a full web address starting with https:// or http://').count(), WAIT).toBe(1);
+    expect(await form.getByText('Saved.', { exact: true }).count()).toBe(0);
+    await form.getByLabel('Source web address').fill('https://example.org/corrie-vale/orion');
 
     // Search by credit finds it; a licence it does not have hides it.
     await panel.getByRole('button', { name: 'Close details' }).click();

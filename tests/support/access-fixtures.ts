@@ -139,6 +139,7 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'POST /api/users': { body: { email: `invited-${randomUUID()}@example.test`, name: 'Invited Person', role: 'writer' } },
     'PATCH /api/users/:id': { body: { name: 'Renamed by the access matrix' } },
     'POST /api/calc': { body: { z: { value: 0.158 } } },
+    'POST /api/auth/invitation/check': { body: { token: 'an-invitation-token-nobody-was-sent' } },
     'POST /api/pages': { body: { title: 'Access matrix page', objectId: ids.object, locale: 'en-GB' } },
     'PUT /api/pages/digest': { body: { enabled: false } },
     'PUT /api/pages/:id': {
@@ -148,6 +149,9 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
     'POST /api/pages/:id/signoffs/statements': { body: { statementId: ids.statement } },
     'POST /api/pages/:id/flags': { body: { text: '42', reason: 'It is a catalogue number, not a measurement.' } },
     'PUT /api/pages/:id/schedule': { body: { at: null } },
+    'POST /api/pages/:id/archive': { body: { reason: 'Duplicate of another page' } },
+    'POST /api/pages/:id/restore': { body: { reason: 'Archived by mistake' } },
+    'DELETE /api/pages/:id': { query: 'reason=Started+by+mistake' },
     'POST /api/pages/:id/comments': { body: { body: 'A comment from the access matrix.' } },
     'POST /api/pages/:id/versions': { body: { locale: 'fr-FR' } },
     'GET /api/pages/:id/revisions/diff': { query: 'from=1&to=1' },

@@ -4,9 +4,9 @@ import { SkyObjectInputSchema, SkyObjectListQuerySchema } from '@shared/schemas/
 import { AuthorizationError } from '../../errors.ts';
 import { currentUser } from '../../middlewares/authenticate.ts';
 import { validate, validateQuery } from '../../middlewares/validate.ts';
-import { Measurement, MeasurementHistory, User } from '../../models/index.ts';
+import { Measurement } from '../../models/index.ts';
 import { authorize, can } from '../../policies/index.ts';
-import { presentHistory, presentMeasurement } from '../../presenters/measurement.ts';
+import { presentMeasurement } from '../../presenters/measurement.ts';
 import { presentSkyObject } from '../../presenters/sky-object.ts';
 import {
   createMeasurement,
@@ -14,6 +14,7 @@ import {
   deleteSkyObject,
   updateSkyObject,
   listSkyObjects,
+  loadObjectHistory,
 } from '../../services/catalogue/index.ts';
 import { loadMeasurement, loadSkyObject, measurementIncludes } from '../load.ts';
 
@@ -79,22 +80,10 @@ objectsRouter.post('/:id/measurements', validate(MeasurementInputSchema), async 
   res.status(201).json({ data: presentMeasurement(await loadMeasurement(created.id), viewer) });
 });
 
+/** The object's history: measurement events, newest first, then the object's creation. */
 objectsRouter.get('/:id/history', async (req, res) => {
   const viewer = currentUser(req);
   const object = await loadSkyObject(req.params.id);
   authorize(viewer, 'catalogue', 'read');
-  const [history, measurements] = await Promise.all([
-    MeasurementHistory.findAll({
-      where: { skyObjectId: object.id },
-      include: [{ model: User, as: 'changedBy', attributes: ['id', 'name'] }],
-      order: [
-        ['createdAt', 'DESC'],
-        ['id', 'DESC'],
-      ],
-      limit: 500,
-    }),
-    Measurement.findAll({ where: { skyObjectId: object.id }, attributes: ['id', 'quantity'] }),
-  ]);
-  const quantityOf = new Map(measurements.map((m) => [m.id, m.quantity]));
-  res.json({ data: history.map((h) => presentHistory(h, quantityOf)) });
+  res.json({ data: await loadObjectHistory(object) });
 });

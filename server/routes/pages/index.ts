@@ -1,7 +1,14 @@
 import { Router } from 'express';
 import type { JSONContent } from '@tiptap/core';
 import { validateDoc } from '@shared/editor/schema.ts';
-import { DigestSchema, docBytes, PageCreateSchema, PageListQuerySchema, PageSaveSchema } from '@shared/schemas/page.ts';
+import {
+  DigestSchema,
+  docBytes,
+  PageCreateSchema,
+  PageListQuerySchema,
+  PageReasonSchema,
+  PageSaveSchema,
+} from '@shared/schemas/page.ts';
 import { PageLimits } from '@shared/validations.ts';
 import { HttpError, ValidationError } from '../../errors.ts';
 import { currentUser, requireUser } from '../../middlewares/authenticate.ts';
@@ -16,6 +23,7 @@ import {
   loadPageDetail,
   listPages,
   createPage,
+  deletePage,
   savePage,
   currentText,
   loadStatements,
@@ -91,6 +99,15 @@ pagesRouter.put('/:id', validate(PageSaveSchema), async (req, res) => {
   // A stale version throws PageConflictError: a 409 whose error carries the server's version (`error.current`).
   const { page: saved, saved: changed } = await savePage(page.id, { version: input.version, title: input.title, doc }, viewer);
   res.json({ data: await loadPageDetail(saved, viewer), meta: { saved: changed } });
+});
+
+/** Deletes a page that was never published; the reason comes in the query, as for every delete (409 `page_was_published` otherwise: archive it instead). */
+pagesRouter.delete('/:id', validateQuery(PageReasonSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await loadPage(req.params.id);
+  authorize(viewer, 'page', 'delete', page);
+  await deletePage(page.id, req.query.reason, viewer);
+  res.status(204).end();
 });
 
 /** The working copy rendered as the public would see it, with each statement's current wording. */

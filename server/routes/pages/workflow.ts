@@ -2,6 +2,7 @@ import { Router } from 'express';
 import {
   FlagResolveSchema,
   PageCommentSchema,
+  PageReasonSchema,
   PageSubmitSchema,
   ScheduleSchema,
   SendBackSchema,
@@ -13,6 +14,8 @@ import { authorize } from '../../policies/index.ts';
 import { presentPageComment } from '../../presenters/page-comment.ts';
 import {
   addPageComment,
+  archivePage,
+  restorePage,
   listPageComments,
   loadPageDetail,
   publishPage,
@@ -129,4 +132,22 @@ workflowRouter.post('/comments', validate(PageCommentSchema), async (req, res) =
   const page = await loadPage(parentParam(req, 'id'));
   authorize(viewer, 'page', 'comment', page);
   res.status(201).json({ data: presentPageComment(await addPageComment(page, req.body.body, viewer)) });
+});
+
+/** Hides the page from the desk's lists and every public output (a live page is taken down). */
+workflowRouter.post('/archive', validate(PageReasonSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await loadPage(parentParam(req, 'id'));
+  authorize(viewer, 'page', 'archive', page);
+  await archivePage(page.id, req.body.reason, viewer);
+  res.json({ data: await detail(req, page.id) });
+});
+
+/** Brings an archived page back to the desk; it goes live again only when an editor publishes it. */
+workflowRouter.post('/restore', validate(PageReasonSchema), async (req, res) => {
+  const viewer = currentUser(req);
+  const page = await loadPage(parentParam(req, 'id'));
+  authorize(viewer, 'page', 'restore', page);
+  await restorePage(page.id, req.body.reason, viewer);
+  res.json({ data: await detail(req, page.id) });
 });

@@ -17,3 +17,4 @@ export { createSkyObject, deleteSkyObject, updateSkyObject } from './sky-object-
 export { createSource, updateSource } from './source-write.ts';
 export { listSources } from './source-list.ts';
 export { measurementsCiting } from './source-list.ts';
+export { loadObjectHistory } from './object-history.ts';

@@ -20,3 +20,4 @@ export { listPageComments } from './page-comments.ts';
 export { queueRecheckClear } from './page-reactions.ts';
 export { RECHECK_CLEAR_JOB, runRecheckClearJob } from './page-recheck.ts';
 export { createPageVersion, listPageVersions } from './page-versions.ts';
+export { archivePage, deletePage, restorePage } from './page-archive.ts';

@@ -79,7 +79,7 @@ function sectionsFor(user: User): Section[] {
 export async function dashboardFor(user: User, limit = 8): Promise<DashboardDto> {
   const sections = [];
   for (const s of sectionsFor(user)) {
-    const pages = await Page.findAll({ where: s.where, order: [['updatedAt', 'DESC']], limit });
+    const pages = await Page.findAll({ where: { ...s.where, archivedAt: null }, order: [['updatedAt', 'DESC']], limit });
     sections.push({ id: s.id, title: s.title, hint: s.hint, pages: await pageRows(pages) });
   }
   return { sections, digest: await digestEnabled(user.id) };

@@ -24,3 +24,7 @@ export const WorkflowError = (message: string, code = 'page_state') => ConflictE
 export function ChecksFailedError(what: string, problems: string[]): HttpError {
   return UnprocessableError(`${what}: ${problems.join(' ')}`, 'page_checks_failed');
 }
+
+/** Every step but restoring is refused on an archived page; the message says how to get it back. */
+export const ArchivedPageError = () =>
+  ConflictError('This page is archived. Restore it first (an editor or its writer can), then carry on.', 'page_archived');

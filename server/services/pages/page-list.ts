@@ -38,8 +38,15 @@ export function visibleTo(viewer: User): WhereOptions<Page> {
   } as WhereOptions<Page>;
 }
 
+const ARCHIVED_FILTER: Record<PageListQuery['archived'], WhereOptions<Page>> = {
+  hide: { archivedAt: null },
+  include: {},
+  only: { archivedAt: { [Op.ne]: null } },
+};
+
 /**
- * One page of the pages table, newest change first, filtered by status, object, writer or title.
+ * One page of the pages table, newest change first, filtered by status, object, writer or title;
+ * archived pages only when asked for.
  * @param query the parsed list query
  */
 export async function listPages(query: PageListQuery, viewer: User): Promise<{ rows: PageRow[]; total: number }> {
@@ -50,6 +57,7 @@ export async function listPages(query: PageListQuery, viewer: User): Promise<{ r
       query.objectId ? { skyObjectId: query.objectId } : {},
       query.writerId ? { writerId: query.writerId } : {},
       query.q ? { title: { [Op.iLike]: containsPattern(query.q) } } : {},
+      ARCHIVED_FILTER[query.archived],
     ],
   } as WhereOptions<Page>;
   const { rows, count } = await Page.findAndCountAll({

@@ -33,6 +33,7 @@ export async function publishPage(pageId: string, actor: User | null): Promise<P
         publishedBy: actor ? { id: actor.id, name: actor.name } : null,
       },
       scheduledPublishAt: null,
+      firstPublishedAt: page.firstPublishedAt ?? publishedAt,
     });
     await page.save({ transaction });
     await recordAudit(

@@ -20,7 +20,7 @@ export async function markPagesForRecheck(statementIds: string[]): Promise<strin
   if (!statementIds.length) return [];
   const rows = await getSequelize().query<{ id: string }>(
     `SELECT p.id FROM pages p JOIN page_revisions r ON r.id = p.approved_revision_id
-      WHERE p.status IN ('approved', 'published') AND r.statement_ids && ARRAY[:ids]::uuid[]`,
+      WHERE p.status IN ('approved', 'published') AND p.archived_at IS NULL AND r.statement_ids && ARRAY[:ids]::uuid[]`,
     { replacements: { ids: statementIds }, type: QueryTypes.SELECT },
   );
   const statements = new Map((await Statement.findAll({ where: { id: { [Op.in]: statementIds } } })).map((s) => [s.id, s]));
@@ -28,7 +28,8 @@ export async function markPagesForRecheck(statementIds: string[]): Promise<strin
   for (const { id } of rows) {
     const result = await getSequelize().transaction(async (transaction) => {
       const page = await Page.findByPk(id, { transaction, lock: transaction.LOCK.UPDATE });
-      if (!page || (page.status !== 'approved' && page.status !== 'published') || !page.approvedSnapshot) return null;
+      if (!page || page.archivedAt || (page.status !== 'approved' && page.status !== 'published') || !page.approvedSnapshot)
+        return null;
       const signed = page.approvedSnapshot.statementTexts;
       const moved = statementIds.filter((sid) => {
         const s = statements.get(sid);

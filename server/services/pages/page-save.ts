@@ -5,7 +5,7 @@ import { NotFoundError } from '../../errors.ts';
 import { Page, PageRevision, SkyObject, User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { getSettings } from '../settings/index.ts';
-import { PageConflictError, WorkflowError } from './page-errors.ts';
+import { ArchivedPageError, PageConflictError, WorkflowError } from './page-errors.ts';
 import { appendRevision, EMPTY_DOC } from './page-revisions.ts';
 
 /**
@@ -76,6 +76,7 @@ export async function savePage(
   const outcome = await getSequelize().transaction(async (transaction) => {
     const page = await Page.findByPk(pageId, { transaction, lock: transaction.LOCK.UPDATE });
     if (!page) throw NotFoundError('There is no such page.');
+    if (page.archivedAt) throw ArchivedPageError();
     if (page.version !== input.version) return { page, conflict: true, saved: false };
     const next = STATUS_AFTER_EDIT[page.status as PageStatus];
     if (!next)

@@ -5,7 +5,7 @@ import { normaliseFlagText } from '@shared/editor/number-check.ts';
 import { Page, PageComment, PageRevision, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
 import { approvalProblems, flagsWithResolutions, submissionProblems } from './page-checks.ts';
-import { ChecksFailedError, WorkflowError } from './page-errors.ts';
+import { ArchivedPageError, ChecksFailedError, WorkflowError } from './page-errors.ts';
 import { activeUsers, deliver, reviewersToNotify } from './page-mail.ts';
 import { loadStatements } from './page-statements.ts';
 
@@ -13,6 +13,7 @@ import { loadStatements } from './page-statements.ts';
 export async function lockPage(pageId: string, transaction: import('sequelize').Transaction) {
   const page = await Page.findByPk(pageId, { transaction, lock: transaction.LOCK.UPDATE });
   if (!page) throw NotFoundError('There is no such page.');
+  if (page.archivedAt) throw ArchivedPageError();
   const revision = await PageRevision.findByPk(page.currentRevisionId!, { transaction });
   if (!revision) throw NotFoundError('This page has no saved text yet.');
   return { page, revision };

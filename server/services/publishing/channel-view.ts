@@ -77,7 +77,9 @@ export async function loadChannelDetail(channel: Channel): Promise<ChannelDetail
   const venue = await Venue.findByPk(channel.venueId, { rejectOnEmpty: true });
   const sunDays = slides.some((s) => followsTheSun(s.schedule)) ? venueSunDays(venue, Date.now()) : [];
   const [pages, media, channels] = await Promise.all([
-    pageIds.length ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot'] }) : [],
+    pageIds.length
+      ? Page.findAll({ where: { id: { [Op.in]: pageIds } }, attributes: ['id', 'title', 'publishedSnapshot', 'archivedAt'] })
+      : [],
     mediaIds.length
       ? Media.findAll({ where: { id: { [Op.in]: mediaIds } }, include: [{ model: MediaRendition, as: 'renditions' }] })
       : [],

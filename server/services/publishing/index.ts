@@ -37,3 +37,4 @@ export { recordHeartbeat } from './kiosk-screens.ts';
 export { setScreenLanguage } from './kiosk-screens.ts';
 export { setScreenOrientation } from './kiosk-screens.ts';
 export { reportSilentScreens, runScreenSilenceJob, SCREEN_SILENCE_JOB } from './screen-silence.ts';
+export { playerAddress } from './player-address.ts';

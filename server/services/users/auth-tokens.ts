@@ -3,6 +3,7 @@ import { Op, type Transaction } from 'sequelize';
 import { BadRequestError } from '../../errors.ts';
 import { logger } from '../../logger.ts';
 import { purgeOldSignInAttempts } from './sign-in.ts';
+import type { TokenState } from '@shared/schemas/auth.ts';
 import { AuthToken, User, type TokenPurpose } from '../../models/index.ts';
 
 /** SHA-256 of the token: a leaked table row cannot be turned back into a working link. */
@@ -50,6 +51,19 @@ export async function consumeToken(raw: string, purpose: TokenPurpose, transacti
   token.usedAt = new Date();
   await token.save({ transaction });
   return user;
+}
+
+/**
+ * What a link's token is now, without using it: valid, used, expired, or invalid (unknown, or its
+ * account deactivated). Read only; the page checks it before showing the password form.
+ */
+export async function checkToken(raw: string, purpose: TokenPurpose): Promise<TokenState> {
+  const token = await AuthToken.findOne({ where: { tokenHash: hashToken(raw), purpose } });
+  if (!token) return 'invalid';
+  if (token.usedAt) return 'used';
+  if (token.expiresAt.getTime() < Date.now()) return 'expired';
+  const user = await User.findByPk(token.userId, { attributes: ['active'] });
+  return user?.active ? 'valid' : 'invalid';
 }
 
 /** Every outstanding token of the purpose for this user stops working (a password change revokes reset links). */

@@ -2,7 +2,7 @@
  * People: sign-in, passwords, invitations, one-time tokens, accounts and their sessions.
  * The public face of the domain: other domains and routes import from here, never a file inside.
  */
-export { hashToken, runTokenPurgeJob, TOKEN_PURGE_JOB } from './auth-tokens.ts';
+export { checkToken, hashToken, runTokenPurgeJob, TOKEN_PURGE_JOB } from './auth-tokens.ts';
 export { hashPassword, verifyPassword } from './passwords.ts';
 export { signIn } from './sign-in.ts';
 export { inviteUser, resendInvitation } from './user-invite.ts';

@@ -13,6 +13,7 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
 import { LanguageVersions } from '@/features/pages/components/language-versions.tsx';
+import { ArchivedNotice, PageArchiveActions } from '@/features/pages/components/page-archive-actions.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
 import { PublishPanel } from '@/features/pages/components/publish-panel.tsx';
 import { SubmitFlagsForm } from '@/features/pages/components/submit-flags-form.tsx';
@@ -87,9 +88,11 @@ export function Component() {
                 Withdraw from review
               </Button>
             )}
+            <PageArchiveActions page={p} />
           </>
         }
       />
+      <ArchivedNotice page={p} />
       {p.sentBack && sentBackAt && (
         <div className="mb-4">
           <Notice tone="warning" title={`Sent back by ${p.sentBack.by ?? 'a reviewer'}`}>

@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { useLocation } from 'react-router-dom';
 import { type PageFilters, usePages } from '@/api/pages.ts';
 import { useSettings } from '@/api/settings.ts';
 import { useFormOpener } from '@/lib/use-form-opener.ts';
@@ -21,6 +22,7 @@ export function Component() {
   const creating = useFormOpener();
   const pages = usePages(filters);
   const canCreate = user.role !== 'reviewer';
+  const deleted = (useLocation().state as { deleted?: string } | null)?.deleted;
   return (
     <>
       <PageHeader
@@ -35,6 +37,13 @@ export function Component() {
           ) : undefined
         }
       />
+      {deleted && (
+        <div className="mb-4">
+          <Notice tone="success" title="Page deleted">
+            “{deleted}” was deleted for good. The reason is kept in the audit log.
+          </Notice>
+        </div>
+      )}
       {creating.open && (
         <div className="mb-6">
           <NewPageForm defaultLocale={(settings.data?.defaultLocale ?? 'en-GB') as StatementLocale} onCancel={creating.close} />
@@ -70,6 +79,18 @@ export function Component() {
           value={filters.q ?? ''}
           onChange={(e) => setFilters({ ...filters, q: e.target.value || undefined, page: 1 })}
         />
+        <SelectField
+          label="Archived pages"
+          className="w-48"
+          value={filters.archived ?? ''}
+          onChange={(e) =>
+            setFilters({ ...filters, archived: (e.target.value || undefined) as PageFilters['archived'], page: 1 })
+          }
+        >
+          <option value="">Hide archived</option>
+          <option value="include">Show archived</option>
+          <option value="only">Only archived</option>
+        </SelectField>
       </div>
       {pages.error && <Notice tone="error">{pages.error.message}</Notice>}
       {pages.data &&

@@ -10,11 +10,13 @@ import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
 import { PageComments } from '@/features/pages/components/page-comments.tsx';
 import { PageHtml } from '@/features/pages/components/page-html.tsx';
+import { ArchivedNotice, PageArchiveActions } from '@/features/pages/components/page-archive-actions.tsx';
 import { PageStatusBadge } from '@/features/pages/components/page-status-badge.tsx';
 import { PublishPanel } from '@/features/pages/components/publish-panel.tsx';
 import { ReviewFlags } from '@/features/pages/components/review-flags.tsx';
 import { ReviewStatements } from '@/features/pages/components/review-statements.tsx';
 import { StatementWorking } from '@/features/pages/components/statement-working.tsx';
+import { versionLabels } from '@/features/pages/version-labels.ts';
 
 /** The review view: the page as it will read, each statement with its working and sign-off, flags, comments, publishing. */
 export function Component() {
@@ -34,8 +36,14 @@ export function Component() {
   if (page.isPending) return <p className="text-sm text-muted">Loading page…</p>;
   if (page.error || !p) return <Notice tone="error">{page.error?.message}</Notice>;
   const error = signStatement.error ?? signPage.error ?? resolveFlag.error ?? sendBack.error;
+  /** Starts one step and forgets what the others said, so an old refusal never sits beside a later success. */
+  const only = <T,>(step: { mutate: (arg: T) => void; reset: () => void }, arg: T) => {
+    for (const m of [signStatement, signPage, resolveFlag, sendBack]) if (m !== (step as unknown)) m.reset();
+    step.mutate(arg);
+  };
   const moved = p.statements.filter((s) => s.signedText !== null && s.text !== s.signedText);
   const html = showLive ? published.data?.html : preview.data?.html;
+  const labels = versionLabels(p);
 
   return (
     <>
@@ -63,9 +71,11 @@ export function Component() {
             >
               {p.can.edit ? 'Edit' : 'Open in editor'}
             </Link>
+            <PageArchiveActions page={p} />
           </>
         }
       />
+      <ArchivedNotice page={p} />
       {p.status === 'needs_recheck' && (
         <div className="mb-6">
           <Notice tone="warning" title="Needs re-check">
@@ -85,30 +95,36 @@ export function Component() {
       <div className="grid grid-cols-[minmax(0,1fr)] gap-8 [overflow-wrap:anywhere] lg:grid-cols-[minmax(0,1fr)_22rem] xl:grid-cols-[minmax(0,1fr)_26rem]">
         <div className="min-w-0 space-y-4">
           {working && <StatementWorking id={working} locale={p.locale} onClose={() => setWorking(null)} />}
-          {p.published && (
+          {labels && (
             // biome-ignore lint/a11y/useSemanticElements: two toggle buttons, not form fields; a fieldset would bring form semantics and its own box
             <div
               role="group"
               aria-label="Which version"
-              className="inline-flex rounded-md border border-rule bg-panel p-0.5 text-sm"
+              aria-describedby="version-note"
+              className="grid grid-cols-1 gap-0.5 rounded-md border border-rule bg-panel p-0.5 text-sm sm:grid-cols-2"
             >
               <button
                 type="button"
                 aria-pressed={!showLive}
                 onClick={() => setShowLive(false)}
-                className={`rounded px-3 py-1 ${!showLive ? 'bg-accent text-on-accent' : ''}`}
+                className={`rounded px-3 py-1.5 text-left ${!showLive ? 'bg-accent text-on-accent' : ''}`}
               >
-                This revision ({p.revision.number})
+                {labels.working}
               </button>
               <button
                 type="button"
                 aria-pressed={showLive}
                 onClick={() => setShowLive(true)}
-                className={`rounded px-3 py-1 ${showLive ? 'bg-accent text-on-accent' : ''}`}
+                className={`rounded px-3 py-1.5 text-left ${showLive ? 'bg-accent text-on-accent' : ''}`}
               >
-                Live version ({p.published.revisionNumber})
+                {labels.live}
               </button>
             </div>
+          )}
+          {labels && (
+            <p id="version-note" className="text-sm text-muted">
+              {labels.note}
+            </p>
           )}
           {showLive && published.data?.publicUrl && (
             <p className="text-sm">
@@ -132,13 +148,13 @@ export function Component() {
           <ReviewStatements
             page={p}
             busyId={signStatement.isPending ? (signStatement.variables ?? null) : null}
-            onSignOff={(sid) => signStatement.mutate(sid)}
+            onSignOff={(sid) => only(signStatement, sid)}
             onWorking={setWorking}
           />
           <ReviewFlags
             flags={p.flags}
             canReview={p.can.review}
-            onResolve={(text, reason) => resolveFlag.mutate({ text, reason })}
+            onResolve={(text, reason) => only(resolveFlag, { text, reason })}
           />
           {p.eyeSafety.required && (
             <Notice tone={p.eyeSafety.present ? 'success' : 'error'} title="Eye safety">
@@ -161,14 +177,14 @@ export function Component() {
                   Everything is checked. Signing off approves revision {p.revision.number} for an editor to publish.
                 </p>
               )}
-              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => signPage.mutate()}>
+              <Button busy={signPage.isPending} disabled={!!problems.data?.length} onClick={() => only(signPage, undefined)}>
                 Sign off page
               </Button>
               <form
                 className="space-y-2 border-t border-rule pt-3"
                 onSubmit={(e) => {
                   e.preventDefault();
-                  sendBack.mutate(backNote);
+                  only(sendBack, backNote);
                 }}
               >
                 <label htmlFor="send-back" className="block text-sm font-medium">

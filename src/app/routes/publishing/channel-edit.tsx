@@ -1,8 +1,9 @@
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useNavigate, useParams } from 'react-router-dom';
 import {
   useAddSlide,
   useAssignScreens,
+  removeSlide,
   useChannel,
   useChannelSettings,
   useDeleteChannel,
@@ -23,6 +24,9 @@ import { PlayerPreview } from '@/features/publishing/components/player-preview.t
 import { ChannelLanguages } from '@/features/publishing/components/channel-languages.tsx';
 import { ScreensPicker } from '@/features/publishing/components/screens-picker.tsx';
 import { SlideList } from '@/features/publishing/components/slide-list.tsx';
+import { slideTitle } from '@/features/publishing/slide-title.ts';
+import { useUndoableRemove } from '@/features/publishing/use-undoable-remove.ts';
+import { UndoToast } from '@/components/ui/undo-toast.tsx';
 
 const message = (e: unknown) => (e instanceof Error ? e.message : null);
 
@@ -40,19 +44,34 @@ export function Component() {
   const del = useDeleteChannel();
   const [renaming, setRenaming] = useState<string | null>(null);
   const [confirmDelete, setConfirmDelete] = useState(false);
+  // While mounted the removal goes through the mutation (the list refreshes); once the screen is left, straight to the server.
+  const mounted = useRef(true);
+  useEffect(
+    () => () => {
+      mounted.current = false;
+    },
+    [],
+  );
+  const undoable = useUndoableRemove((slideId) => {
+    if (!mounted.current) return void removeSlide(channelId, slideId).catch(() => undefined);
+    reorder.reset();
+    remove.mutate(slideId);
+  });
 
   if (channel.isPending) return <p className="text-sm text-muted">Loading channel…</p>;
   if (channel.error) return <Notice tone="error">{channel.error.message}</Notice>;
   const c = channel.data;
   const busy = add.isPending || update.isPending || remove.isPending || reorder.isPending;
   const listError = message(reorder.error) ?? message(remove.error);
-  const total = c.slides.filter((s) => s.state === 'showing').reduce((sum, s) => sum + s.durationS, 0);
+  // A slide waiting out its undo window is already gone as far as this screen is concerned.
+  const shown = c.slides.filter((s) => s.id !== undoable.waiting?.id);
+  const total = shown.filter((s) => s.state === 'showing').reduce((sum, s) => sum + s.durationS, 0);
 
   return (
     <>
       <PageHeader
         title={c.name}
-        description={`${c.venue.name} · ${c.slides.length} slide${c.slides.length === 1 ? '' : 's'} · one loop takes ${Math.floor(total / 60)} min ${total % 60} s`}
+        description={`${c.venue.name} · ${shown.length} slide${shown.length === 1 ? '' : 's'} · one loop takes ${Math.floor(total / 60)} min ${total % 60} s`}
         actions={
           c.can.update && renaming === null ? (
             <>
@@ -116,10 +135,17 @@ export function Component() {
           </h2>
           {listError && <Notice tone="error">{listError}</Notice>}
           <SlideList
-            channel={c}
+            channel={{ ...c, slides: shown }}
             busy={busy}
-            onReorder={(ids) => reorder.mutate(ids)}
-            onRemove={(id) => remove.mutate(id)}
+            onReorder={(ids) => {
+              remove.reset();
+              // A slide waiting to be removed is still on the server: it keeps its place at the end until it goes.
+              reorder.mutate(undoable.waiting ? [...ids, undoable.waiting.id] : ids);
+            }}
+            onRemove={(id) => {
+              const slide = c.slides.find((s) => s.id === id);
+              undoable.remove(id, slide ? slideTitle(slide) : 'The slide');
+            }}
             onUpdate={(slideId, input) => update.mutate({ slideId, ...input })}
             updateError={
               update.error && update.variables
@@ -173,6 +199,14 @@ export function Component() {
           )}
         </aside>
       </div>
+      {undoable.waiting && (
+        <UndoToast
+          key={undoable.waiting.id}
+          message={`“${undoable.waiting.label}” removed from the channel.`}
+          until={undoable.waiting.until}
+          onUndo={undoable.undo}
+        />
+      )}
     </>
   );
 }

@@ -74,21 +74,28 @@ export function CalcForm({
   const group = useWatch({ control, name: 'group' });
   const fields = fieldsFor(quantity, Number(group));
 
-  const onSubmit = handleSubmit((values) => {
-    const built = buildRequest(values);
-    if (!('request' in built)) return;
-    setServerError(undefined);
-    calc.mutate(built.request, {
-      onSuccess: (result) => onResult(result, built.request),
-      onError: (error) => {
-        const words = inWords(error.message);
-        const path = error.status === 400 ? fieldForMessage(error.message, values) : undefined;
-        if (path) setError(path as Path<CalcFormValues>, { message: words });
-        setServerError(words);
-        onRefused?.();
-      },
-    });
-  });
+  // An input the form refuses must not leave the previous result on show beneath it, as if it answered this one.
+  const onSubmit = handleSubmit(
+    (values) => {
+      const built = buildRequest(values);
+      setServerError(undefined);
+      if (!('request' in built)) return onRefused?.();
+      calc.mutate(built.request, {
+        onSuccess: (result) => onResult(result, built.request),
+        onError: (error) => {
+          const words = inWords(error.message);
+          const path = error.status === 400 ? fieldForMessage(error.message, values) : undefined;
+          if (path) setError(path as Path<CalcFormValues>, { message: words });
+          setServerError(words);
+          onRefused?.();
+        },
+      });
+    },
+    () => {
+      setServerError(undefined);
+      onRefused?.();
+    },
+  );
 
   const onQuantityChange = () => {
     setValue('group', '0');

@@ -42,14 +42,24 @@ const show = (v: unknown) =>
           : 'no'
         : String(v);
 
-/** Every change to the object's measurements, newest first: who, when, what, old and new. */
+/** Every change to the object's measurements, newest first (who, when, what, old and new), ending with the object's creation. */
 export function HistoryList({ entries, measurements }: { entries: MeasurementHistoryDto[]; measurements: MeasurementDto[] }) {
   if (entries.length === 0) return <p className="text-sm text-muted">No changes recorded yet.</p>;
   const byId = new Map(measurements.map((m) => [m.id, m]));
   return (
     <ol className="divide-y divide-rule rounded-lg border border-rule bg-panel" aria-label="Measurement history">
       {entries.map((e) => {
-        const m = byId.get(e.measurementId);
+        if (e.action === 'object_created')
+          return (
+            <li key={e.id} className="px-4 py-2.5 text-sm">
+              <p>
+                <span className="font-medium">{e.changedBy ?? 'Someone no longer listed'}</span> created the object{' '}
+                <span className="font-medium">{String(e.newValues?.name ?? '')}</span>
+                <span className="ml-2 text-xs text-muted">{formatDateTime(e.createdAt)}</span>
+              </p>
+            </li>
+          );
+        const m = e.measurementId ? byId.get(e.measurementId) : undefined;
         const what = m
           ? `${(findQuantity(m.quantity)?.label ?? m.quantity).toLowerCase()}${m.band ? ` (${m.band})` : ''} ${formatMeasurement(m)}`
           : (findQuantity(e.quantity ?? '')?.label.toLowerCase() ?? 'a measurement');

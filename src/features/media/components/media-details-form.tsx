@@ -33,19 +33,23 @@ export function MediaDetailsForm({ media, preview }: { media: MediaDetailDto; pr
     },
   });
   const licence = findLicence(watch('licenceId'));
-  const onSubmit = handleSubmit((values) => {
-    setFormError(undefined);
-    setSaved(false);
-    update.mutate(
-      { id: media.id, ...values, licenceId: values.licenceId || null, focalPoint: focal, objectIds: objects.map((o) => o.id) },
-      {
-        onSuccess: () => setSaved(true),
-        onError: (error) => setFormError(applyServerErrors(error, setError, ['altText', 'credit', 'licenceId', 'sourceUrl'])),
-      },
-    );
-  });
+  // "Saved." speaks of the last save only: it goes when a later attempt is refused (here or by the server) or a field changes.
+  const onSubmit = handleSubmit(
+    (values) => {
+      setFormError(undefined);
+      setSaved(false);
+      update.mutate(
+        { id: media.id, ...values, licenceId: values.licenceId || null, focalPoint: focal, objectIds: objects.map((o) => o.id) },
+        {
+          onSuccess: () => setSaved(true),
+          onError: (error) => setFormError(applyServerErrors(error, setError, ['altText', 'credit', 'licenceId', 'sourceUrl'])),
+        },
+      );
+    },
+    () => setSaved(false),
+  );
   return (
-    <form onSubmit={onSubmit} noValidate aria-label="Image details" className="space-y-4">
+    <form onSubmit={onSubmit} onChange={() => setSaved(false)} noValidate aria-label="Image details" className="space-y-4">
       {formError && <Notice tone="error">{formError}</Notice>}
       <div>
         <label htmlFor="alt-text" className="mb-1 block text-sm font-medium text-ink">

@@ -1,8 +1,15 @@
 import { useId, useState } from 'react';
 import { useObjectSearch } from '@/api/catalogue-objects.ts';
+import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
+import { objectCountText } from '../object-count.ts';
+
+/** Long enough to skip the keys of a word typed at speed, short enough to feel immediate. */
+const SEARCH_PAUSE_MS = 200;
 
 /**
- * Picks a catalogue object by name or designation; shows the first twenty matches.
+ * Picks a catalogue object by name or designation. The server searches the whole catalogue from the
+ * first key (after a short pause in typing); the list shows the first twenty matches and says how many
+ * there are in all.
  * @param valueLabel how to name `value` when the current matches do not include it
  */
 export function ObjectPicker({
@@ -21,9 +28,11 @@ export function ObjectPicker({
 }) {
   const [q, setQ] = useState('');
   const [picked, setPicked] = useState<{ id: string; text: string } | null>(null);
-  const objects = useObjectSearch(q);
+  const searched = useDebouncedValue(q, SEARCH_PAUSE_MS);
+  const objects = useObjectSearch(searched);
   const id = useId();
-  const rows = objects.data ?? [];
+  const rows = objects.data?.rows ?? [];
+  const waiting = q !== searched || objects.isFetching;
   // A chosen object stays listed while the search moves on. Otherwise React would mark the first match
   // selected on screen while the form still holds the earlier choice (or none).
   const keepChosen = value !== '' && !rows.some((o) => o.id === value);
@@ -38,6 +47,7 @@ export function ObjectPicker({
         value={q}
         onChange={(e) => setQ(e.target.value)}
         placeholder="Search the catalogue, e.g. Andromeda or M31"
+        aria-describedby={`${id}-count`}
         className="block w-full rounded-md border border-rule bg-panel px-3 py-2 text-sm focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/30"
       />
       <select
@@ -62,7 +72,11 @@ export function ObjectPicker({
           </option>
         ))}
       </select>
-      {objects.data?.length === 0 && <p className="text-xs text-muted">No object matches “{q}”.</p>}
+      <p id={`${id}-count`} aria-live="polite" className="text-xs text-muted">
+        {objects.data
+          ? `${objectCountText(rows.length, objects.data.total, objects.data.totalExact, searched)}${waiting ? ' · searching…' : ''}`
+          : 'Loading the catalogue…'}
+      </p>
       {error && <p className="text-xs font-medium text-broken">{error}</p>}
     </div>
   );

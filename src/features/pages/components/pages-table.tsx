@@ -29,6 +29,9 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
             <Link to={pageHref(row)} className="font-medium text-accent hover:underline">
               {row.title}
             </Link>
+            {row.archivedAt && (
+              <span className="ml-2 rounded border border-rule px-1.5 py-0.5 text-xs font-medium text-muted">Archived</span>
+            )}
             {row.live && row.status !== 'published' && (
               <span className="ml-2 text-xs text-muted">(a published version is live)</span>
             )}

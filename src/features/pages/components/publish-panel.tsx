@@ -4,6 +4,7 @@ import { usePublishPage, useSchedulePage, useUnpublishPage } from '@/api/page-wo
 import { Button } from '@/components/ui/button.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatDateTime } from '@/lib/format-date.ts';
+import { publishLabel } from '../version-labels.ts';
 
 /** For editors: publish the approved version now or at a time, or take the live version down. */
 export function PublishPanel({ page }: { page: PageDto }) {
@@ -12,6 +13,10 @@ export function PublishPanel({ page }: { page: PageDto }) {
   const unpublish = useUnpublishPage(page.id);
   const [at, setAt] = useState('');
   const error = publish.error ?? schedule.error ?? unpublish.error;
+  /** Forgets what the other two steps said: an old refusal must not stay beside a later success. */
+  const startOnly = (step: { reset: () => void }) => {
+    for (const m of [publish, schedule, unpublish]) if (m !== step) m.reset();
+  };
   if (!page.can.publish && !page.can.unpublish && !page.can.schedule) return null;
   return (
     <section aria-labelledby="publishing" className="space-y-3 rounded-lg border border-rule bg-panel p-4">
@@ -29,12 +34,25 @@ export function PublishPanel({ page }: { page: PageDto }) {
       {page.scheduledPublishAt && <p className="text-sm">Scheduled to go live {formatDateTime(page.scheduledPublishAt)}.</p>}
       <div className="flex flex-wrap gap-2">
         {page.can.publish && (
-          <Button busy={publish.isPending} onClick={() => publish.mutate()}>
-            Publish revision {page.approved?.revisionNumber}
+          <Button
+            busy={publish.isPending}
+            onClick={() => {
+              startOnly(publish);
+              publish.mutate();
+            }}
+          >
+            {publishLabel(page)}
           </Button>
         )}
         {page.can.unpublish && (
-          <Button variant="danger" busy={unpublish.isPending} onClick={() => unpublish.mutate()}>
+          <Button
+            variant="danger"
+            busy={unpublish.isPending}
+            onClick={() => {
+              startOnly(unpublish);
+              unpublish.mutate();
+            }}
+          >
             Unpublish
           </Button>
         )}
@@ -44,7 +62,9 @@ export function PublishPanel({ page }: { page: PageDto }) {
           className="flex flex-wrap items-end gap-2"
           onSubmit={(e) => {
             e.preventDefault();
-            if (at) schedule.mutate(new Date(at).toISOString());
+            if (!at) return;
+            startOnly(schedule);
+            schedule.mutate(new Date(at).toISOString());
           }}
         >
           <label className="text-sm">
@@ -60,7 +80,14 @@ export function PublishPanel({ page }: { page: PageDto }) {
             Schedule
           </Button>
           {page.scheduledPublishAt && (
-            <Button type="button" variant="quiet" onClick={() => schedule.mutate(null)}>
+            <Button
+              type="button"
+              variant="quiet"
+              onClick={() => {
+                startOnly(schedule);
+                schedule.mutate(null);
+              }}
+            >
               Clear schedule
             </Button>
           )}

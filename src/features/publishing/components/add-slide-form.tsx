@@ -127,7 +127,7 @@ export function AddSlideForm({
       )}
       {kind === 'image' && (
         <TextField
-          label="Caption"
+          label="Title (shown on the screen; names the slide in this list)"
           maxLength={ChannelLimits.captionMax}
           value={caption}
           onChange={(e) => setCaption(e.target.value)}

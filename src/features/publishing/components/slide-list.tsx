@@ -4,14 +4,7 @@ import { SLIDE_KIND_LABELS } from '@shared/schemas/channel.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
 import { SlideTimingForm } from './slide-timing-form.tsx';
-
-/** The slide's name as the list shows it. */
-export const slideTitle = (s: SlideDto) =>
-  s.kind === 'page'
-    ? (s.page?.title ?? 'A page')
-    : s.kind === 'image'
-      ? s.caption || s.media?.altText || 'Image'
-      : 'The sky tonight';
+import { slideTitle } from '../slide-title.ts';
 
 const moved = (ids: string[], from: number, to: number) => {
   const next = [...ids];

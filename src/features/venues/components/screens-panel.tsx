@@ -31,6 +31,29 @@ function PairingCode({ pairing, onClose }: { pairing: PairingCodeDto | null; onC
           <p className="my-5 text-center font-mono text-4xl font-semibold tracking-[0.2em] tabular-nums" aria-hidden="true">
             {pairing.pairingCode}
           </p>
+          <div className="mb-4 flex flex-col items-center gap-3 rounded-md border border-rule p-3 sm:flex-row sm:items-start">
+            <svg
+              role="img"
+              aria-label={`QR code of the player’s address, ${pairing.playerUrl}`}
+              viewBox={`0 0 ${pairing.playerQr.size} ${pairing.playerQr.size}`}
+              shapeRendering="crispEdges"
+              className="size-36 shrink-0 rounded bg-white"
+            >
+              <path d={pairing.playerQr.path} fill="#000" />
+            </svg>
+            <div className="min-w-0 text-sm">
+              <p className="font-medium">Open the player on the screen</p>
+              <p className="mt-1 text-muted">
+                In the screen’s browser, go to this address (or scan the code with a tablet or phone used as a screen), then type
+                the code above.
+              </p>
+              <p className="mt-2 break-all text-sm">
+                <a href={pairing.playerUrl} target="_blank" rel="noreferrer" className="font-mono text-accent underline">
+                  {pairing.playerUrl}
+                </a>
+              </p>
+            </div>
+          </div>
           <Notice tone="warning">It is shown only this once. If it is lost, re-pair the screen for a new one.</Notice>
           <div className="mt-5 flex justify-end">
             <Button onClick={onClose}>Done</Button>
