@@ -58,8 +58,11 @@ export async function buildAccessWorld() {
     .post('/api/catalogue/imports')
     .attach('file', Buffer.from('object,quantity,value\nNo Such Object (demo),redshift,0.2\n', 'utf8'), 'access-matrix.csv');
   if (checked.status !== 201) throw new Error(`import: ${JSON.stringify(checked.body)}`);
+  const timelineEntry = await signed.admin.agent.post('/api/timeline').send(timelineSample('Access matrix entry'));
+  if (timelineEntry.status !== 201) throw new Error(`timeline: ${JSON.stringify(timelineEntry.body)}`);
   const ids: Record<string, string> = {
     import: checked.body.data.id,
+    timeline: timelineEntry.body.data.id,
     page: page.id,
     reviewPage: inReview.id,
     slide: slide.body.data.slides[0].id,
@@ -76,6 +79,19 @@ export async function buildAccessWorld() {
   return { signed, owner, target, ids, kioskToken: screen.token, otherVenue, otherScreen, page };
 }
 
+/** A valid timeline entry (invented values, for access checks only). */
+function timelineSample(label: string) {
+  const phrase = 'around the time of an invented event used only by the access tests';
+  return {
+    label,
+    yearsAgo: 1e6,
+    uncertaintyYears: 1e4,
+    relation: 'around',
+    phrases: { 'en-GB': phrase, 'en-US': phrase, 'fr-FR': 'à l’époque d’un événement inventé pour les tests' },
+    sourceCitation: 'Invented for the access tests',
+  };
+}
+
 /** Fills a path template with the world's ids (random UUIDs where no row is needed). */
 export function fillPath(template: string, ids: Record<string, string>): string {
   const byPrefix: Array<[RegExp, string]> = [
@@ -90,6 +106,7 @@ export function fillPath(template: string, ids: Record<string, string>): string 
     [/^\/api\/venues\/:id/, ids.venue],
     [/^\/api\/channels\/:id/, ids.channel],
     [/^\/api\/catalogue\/imports\/:id/, ids.import],
+    [/^\/api\/timeline\/:id/, ids.timeline],
   ];
   let path = template;
   for (const [re, id] of byPrefix) if (re.test(path)) path = path.replace(':id', id);
@@ -173,6 +190,8 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
       },
     },
     'PATCH /api/venues/:id': { body: { elevationM: 120 } },
+    'POST /api/timeline': { body: timelineSample(`Access matrix entry ${randomUUID().slice(0, 8)}`) },
+    'PATCH /api/timeline/:id': { body: { note: 'Checked by the access matrix.' } },
     'POST /api/venues/:venueId/screens': { body: { name: 'Access matrix screen' } },
     'POST /api/kiosk/heartbeat': { body: { screenId: ids.screen } },
     'POST /api/channels': { body: { venueId: ids.venue, name: `Access matrix channel ${randomUUID().slice(0, 8)}` } },

@@ -1,11 +1,13 @@
 import { EventEmitter } from 'node:events';
 
-/** What each settings event carries: the settings version after the change. */
+/** What each settings event carries: the settings version after the change, or the timeline entry changed. */
 export interface SettingsEventMap {
   /** An admin adopted another cosmology: every statement's numbers may move. */
   cosmologyAdopted: [{ version: number }];
   /** The default band or the default spectral indices changed: magnitudes and luminosities may move. */
   statementDefaultsChanged: [{ version: number }];
+  /** An admin added, changed or removed an entry of Earth's timeline: statements that read it may move. */
+  timelineChanged: [{ entryId: string }];
 }
 
 /**
