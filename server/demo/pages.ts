@@ -36,9 +36,10 @@ async function once(title: string, make: () => Promise<void>): Promise<void> {
 }
 
 /**
- * Three demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: one
- * published, one waiting for review (with a hand-typed number for the reviewer), one draft about
- * the Sun with its eye-safety notice. Idempotent per page.
+ * Four demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: two
+ * published (one placing light-travel times on Earth's timeline), one waiting for review (with a
+ * hand-typed number for the reviewer), one draft about the Sun with its eye-safety notice.
+ * Idempotent per page.
  */
 export async function seedDemoPages(): Promise<void> {
   const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
@@ -92,6 +93,27 @@ export async function seedDemoPages(): Promise<void> {
     await submitPage(quasar.id, undefined, writer, [
       { text: '5 billion light-years', reason: 'Quoted from an old leaflet; please check which distance it means.' },
     ]);
+  });
+
+  const setOutTitle = 'When the light set out (demo)';
+  await once(setOutTitle, async () => {
+    // Each statement names an event of Earth's timeline only where the rule finds one that fits.
+    const andromeda = await statementFor('Andromeda Galaxy', 'light-set-out-timeline', writer);
+    const quasar = await statementFor('3C 279', 'light-set-out-timeline', writer);
+    const sirius = await statementFor('Sirius', 'light-set-out-timeline', writer);
+    const page = await draft(setOutTitle, 'Andromeda Galaxy', writer, {
+      type: 'doc',
+      content: [
+        p(t('Every light in the night sky left its source long ago. Put the times beside the story of our own planet:')),
+        p(s(andromeda)),
+        p(s(quasar)),
+        p(t('Closer to home, the times are human ones. '), s(sirius)),
+      ],
+    });
+    await submitPage(page.id, undefined, writer);
+    for (const id of [andromeda, quasar, sirius]) await signOffStatement(page.id, id, reviewer);
+    await signOffPage(page.id, reviewer);
+    await publishPage(page.id, editor);
   });
 
   const sunTitle = 'Watching the Sun safely (demo)';

@@ -4,7 +4,9 @@
  * that compare with the timeline.
  */
 import { beforeAll, describe, expect, it } from 'vitest';
-import { AuditEvent, Statement, TimelineEntry } from '../../server/models/index.ts';
+import { seedDemo } from '../../server/demo/seed.ts';
+import { TIMELINE_STARTER } from '../../server/migrations/data/timeline-starter.ts';
+import { AuditEvent, Page, Statement, TimelineEntry } from '../../server/models/index.ts';
 import { getTestApp, resetDatabase, signedInAgent } from '../support/app.ts';
 import { buildObjectWithMeasurements } from '../support/sky-fixtures.ts';
 
@@ -134,4 +136,28 @@ describe('a timeline edit recomputes the statements that compare with it', () =>
     expect(working).not.toMatch(/[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}/);
     expect(working).toMatch(/Timeline test galaxy \d+: distance/);
   });
+});
+
+describe('the demo uses the starter timeline on a published page', () => {
+  it('Andromeda beside the oldest stone tools, 3C 279 before the Sun formed, Sirius with no comparison', async () => {
+    await TimelineEntry.destroy({ where: {} });
+    await TimelineEntry.bulkCreate(TIMELINE_STARTER.map((e) => ({ ...e, phrases: { ...e.phrases } })));
+    await seedDemo();
+    const page = await Page.findOne({ where: { title: 'When the light set out (demo)' } });
+    expect(page?.status).toBe('published');
+    const texts = Object.values(page!.publishedSnapshot!.statementTexts).map((t) => String(t));
+    expect(texts).toContainEqual(
+      expect.stringMatching(
+        /^The light we see tonight from the Andromeda Galaxy set out about 2\.5 million years ago, around the time early relatives of ours were making some of the oldest stone tools yet found\.$/,
+      ),
+    );
+    expect(texts).toContainEqual(
+      expect.stringMatching(
+        /^The light we see tonight from 3C 279 set out about [\d.]+ billion years ago, before the Sun and Earth had formed\.$/,
+      ),
+    );
+    expect(texts).toContainEqual(
+      expect.stringMatching(/^The light we see tonight from Sirius set out about [\d.]+ years ago\.$/),
+    );
+  }, 120_000);
 });
