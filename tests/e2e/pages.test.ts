@@ -72,7 +72,9 @@ describe('object pages, from writing to re-check', () => {
       .getByRole('button', { name: /How long its light has travelled, as a phrase/ })
       .click();
     const check = page.getByRole('dialog', { name: 'Check the sentence' });
-    await expect.poll(() => check.getByTestId('replace-preview').textContent()).toMatch(/Its light is about [\d.]+ billion years old\./);
+    await expect
+      .poll(() => check.getByTestId('replace-preview').textContent())
+      .toMatch(/Its light is about [\d.]+ billion years old\./);
     await check.getByRole('button', { name: /^Replace/ }).click();
     await expect.poll(() => page.locator('.page-prose [data-statement-id]').count()).toBe(2);
     await expect.poll(() => page.locator('.page-prose .number-flag').count()).toBe(0);

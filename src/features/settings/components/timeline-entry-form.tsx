@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { TimelineEntryCreateInput, TimelineEntryDto } from '@shared/schemas/timeline.ts';
+import { TimelineEntryCreateSchema, type TimelineEntryCreateInput, type TimelineEntryDto } from '@shared/schemas/timeline.ts';
 import { LOCALE_LABELS, STATEMENT_LOCALES, type StatementLocale } from '@shared/statements/locales.ts';
 import { useCreateTimelineEntry, useUpdateTimelineEntry } from '@/api/timeline.ts';
 import { Button } from '@/components/ui/button.tsx';
@@ -47,10 +47,13 @@ export function TimelineEntryForm({ entry, onDone }: { entry?: TimelineEntryDto;
   const create = useCreateTimelineEntry();
   const update = useUpdateTimelineEntry();
   const mutation = entry ? update : create;
+  // The shared schema checks the form here first (the server checks it again), so mistakes show at once.
+  const [local, setLocal] = useState<Record<string, string>>({});
   const error = mutation.error;
-  const fields = error instanceof ApiRequestError ? (error.fields ?? {}) : {};
+  const fields = { ...(error instanceof ApiRequestError ? (error.fields ?? {}) : {}), ...local };
   const set = (patch: Partial<Draft>) => {
     mutation.reset();
+    setLocal({});
     setDraft((d) => ({ ...d, ...patch }));
   };
   const years = asNumber(draft.yearsAgo);
@@ -67,6 +70,13 @@ export function TimelineEntryForm({ entry, onDone }: { entry?: TimelineEntryDto;
       sourceUrl: draft.sourceUrl || null,
       note: draft.note || null,
     };
+    const checked = TimelineEntryCreateSchema.safeParse(input);
+    if (!checked.success) {
+      const found: Record<string, string> = {};
+      for (const issue of checked.error.issues) found[issue.path.join('.')] ??= issue.message;
+      setLocal(found);
+      return;
+    }
     if (entry) update.mutate({ id: entry.id, input }, { onSuccess: onDone });
     else create.mutate(input, { onSuccess: onDone });
   };
@@ -147,7 +157,7 @@ export function TimelineEntryForm({ entry, onDone }: { entry?: TimelineEntryDto;
         onChange={(e) => set({ note: e.target.value })}
       />
       {error && !Object.keys(fields).length && <Notice tone="error">{error.message}</Notice>}
-      {error && Object.keys(fields).length > 0 && <Notice tone="error">Check the fields marked above.</Notice>}
+      {Object.keys(fields).length > 0 && <Notice tone="error">Check the fields marked above.</Notice>}
       <div className="flex flex-wrap gap-2">
         <Button type="submit" busy={mutation.isPending}>
           {entry ? 'Save the entry' : 'Add the entry'}
