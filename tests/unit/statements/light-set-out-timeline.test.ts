@@ -57,7 +57,7 @@ describe('the timeline rule (shared/statements/timeline.ts)', () => {
     phrases: { 'en-GB': label, 'en-US': label, 'fr-FR': label },
     source: { citation: 'invented for the rule test', url: null },
   });
-  const before = (yearsAgo: number, label = 'B'): TimelineEntry => ({ ...around(yearsAgo, 1, label), relation: 'before' });
+  const beforeEntry = (yearsAgo: number, label = 'B'): TimelineEntry => ({ ...around(yearsAgo, 1, label), relation: 'before' });
 
   it('"around" needs the intervals to overlap', () => {
     expect(chooseTimelineEntry(100, { low: 95, high: 105 }, [around(110, 4)]).entry).toBeNull();
@@ -73,15 +73,15 @@ describe('the timeline rule (shared/statements/timeline.ts)', () => {
     const choice = chooseTimelineEntry(100, { low: 95, high: 105 }, [
       around(100, 5, 'wide'),
       around(102, 2, 'narrow'),
-      before(50),
+      beforeEntry(50),
     ]);
     expect(choice.entry?.id).toBe('narrow');
     expect(choice.compatible.map((e) => e.id).sort()).toEqual(['B', 'narrow', 'wide']);
   });
 
   it('"before" needs the whole interval older than the event, and takes the latest such event', () => {
-    expect(chooseTimelineEntry(100, { low: 50, high: 150 }, [before(60)]).entry).toBeNull();
-    expect(chooseTimelineEntry(100, { low: 70, high: 150 }, [before(60, 'late'), before(20, 'early')]).entry?.id).toBe('late');
+    expect(chooseTimelineEntry(100, { low: 50, high: 150 }, [beforeEntry(60)]).entry).toBeNull();
+    expect(chooseTimelineEntry(100, { low: 70, high: 150 }, [beforeEntry(60, 'late'), beforeEntry(20, 'early')]).entry?.id).toBe('late');
   });
 
   it('without an interval the value alone is compared', () => {
