@@ -81,7 +81,9 @@ describe('the timeline rule (shared/statements/timeline.ts)', () => {
 
   it('"before" needs the whole interval older than the event, and takes the latest such event', () => {
     expect(chooseTimelineEntry(100, { low: 50, high: 150 }, [beforeEntry(60)]).entry).toBeNull();
-    expect(chooseTimelineEntry(100, { low: 70, high: 150 }, [beforeEntry(60, 'late'), beforeEntry(20, 'early')]).entry?.id).toBe('late');
+    expect(chooseTimelineEntry(100, { low: 70, high: 150 }, [beforeEntry(60, 'late'), beforeEntry(20, 'early')]).entry?.id).toBe(
+      'late',
+    );
   });
 
   it('without an interval the value alone is compared', () => {
