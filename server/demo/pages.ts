@@ -105,8 +105,8 @@ export async function seedDemoPages(): Promise<void> {
       type: 'doc',
       content: [
         p(t('Every light in the night sky left its source long ago. Put the times beside the story of our own planet:')),
-        p(s(andromeda)),
         p(s(quasar)),
+        p(s(andromeda)),
         p(t('Closer to home, the times are human ones. '), s(sirius)),
       ],
     });

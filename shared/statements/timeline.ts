@@ -40,7 +40,7 @@ export interface TimelineChoice {
 }
 
 /** The interval an entry's date covers: date ± uncertainty. */
-export const entryInterval = (e: TimelineEntry) => ({
+const entryInterval = (e: TimelineEntry) => ({
   low: e.yearsAgo - e.uncertaintyYears,
   high: e.yearsAgo + e.uncertaintyYears,
 });

@@ -1,7 +1,7 @@
 import { compose, cosmologyFootnote, derivedStep } from '../compose.ts';
 import type { StatementLocale } from '../locales.ts';
 import { frenchOf, nameIn } from '../names.ts';
-import { AROUND_MAX_RELATIVE_WIDTH, chooseTimelineEntry, entryInterval, type TimelineChoice } from '../timeline.ts';
+import { AROUND_MAX_RELATIVE_WIDTH, chooseTimelineEntry, type TimelineChoice } from '../timeline.ts';
 import type { StatementTemplate } from '../types.ts';
 import { travelTime } from './light-travel.ts';
 import { isFrench, yearsPhrase } from './words.ts';
@@ -45,7 +45,7 @@ function timelineStep(choice: TimelineChoice, years: number, lookback: boolean) 
       ? {
           symbol: 'entry',
           name: `${e.relation === 'before' ? 'before' : 'around'}: ${e.label}`,
-          value: entryInterval(e).low,
+          value: e.yearsAgo,
           unit: 'yr ago',
         }
       : { symbol: 'entry', name: 'none', value: 0, unit: '' },
