@@ -1,4 +1,5 @@
 import type PgBoss from 'pg-boss';
+import { TIMELINE_TEMPLATE_IDS } from '@shared/statements/index.ts';
 import { registerBatchJob, registerJob } from './jobs/queue.ts';
 import { RATE_LIMIT_PURGE_JOB, runRateLimitPurgeJob } from './middlewares/rate-limit-store.ts';
 import { forgetKioskAssignments, forgetKioskScreen } from './middlewares/kiosk-feed-auth.ts';
@@ -76,6 +77,8 @@ export function wireServer(): void {
   settingsEvents.on('cosmologyAdopted', () => enqueueRecompute({ scope: { all: true } }));
   // the default band or the default spectral indices change → every statement recomputes
   settingsEvents.on('statementDefaultsChanged', () => enqueueRecompute({ scope: { all: true } }));
+  // an admin edits Earth's timeline → the statements that compare with it ("when the light set out") recompute
+  settingsEvents.on('timelineChanged', () => enqueueRecompute({ scope: { templateIds: [...TIMELINE_TEMPLATE_IDS] } }));
 
   // ── Statements → pages ────────────────────────────────────────────────────────────────────
   // statement text changes → pages using it go to re-check

@@ -89,10 +89,11 @@ async function frenchAndromeda(englishTitle: string, writer: User, reviewer: Use
 }
 
 /**
- * Five demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: three
+ * Six demo pages at Corrie Vale Planetarium (demo), all about demo catalogue objects: four
  * published (Andromeda, with a published French version; 3C 48, worked out from its redshift;
- * sunspots, with the eye-safety notice), one waiting for review (with a hand-typed number for the
- * reviewer), one draft about the Sun with its eye-safety notice. Idempotent per page.
+ * sunspots, with the eye-safety notice; light-travel times placed on Earth's timeline), one waiting
+ * for review (with a hand-typed number for the reviewer), one draft about the Sun with its
+ * eye-safety notice. Idempotent per page.
  */
 export async function seedDemoPages(): Promise<void> {
   const [writer, reviewer, editor] = await Promise.all([account('writer'), account('reviewer'), account('editor')]);
@@ -185,6 +186,27 @@ export async function seedDemoPages(): Promise<void> {
       ],
     });
     await submitPage(page.id, undefined, writer);
+    await signOffPage(page.id, reviewer);
+    await publishPage(page.id, editor);
+  });
+
+  const setOutTitle = 'When the light set out (demo)';
+  await once(setOutTitle, async () => {
+    // Each statement names an event of Earth's timeline only where the rule finds one that fits.
+    const andromeda = await statementFor('Andromeda Galaxy', 'light-set-out-timeline', writer);
+    const quasar = await statementFor('3C 279', 'light-set-out-timeline', writer);
+    const sirius = await statementFor('Sirius', 'light-set-out-timeline', writer);
+    const page = await draft(setOutTitle, 'Andromeda Galaxy', writer, {
+      type: 'doc',
+      content: [
+        p(t('Every light in the night sky left its source long ago. Put the times beside the story of our own planet:')),
+        p(s(quasar)),
+        p(s(andromeda)),
+        p(t('Closer to home, the times are human ones. '), s(sirius)),
+      ],
+    });
+    await submitPage(page.id, undefined, writer);
+    for (const id of [andromeda, quasar, sirius]) await signOffStatement(page.id, id, reviewer);
     await signOffPage(page.id, reviewer);
     await publishPage(page.id, editor);
   });

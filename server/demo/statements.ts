@@ -28,7 +28,8 @@ export async function seedDemoStatements(): Promise<void> {
   for (const name of DEMO_STATEMENT_OBJECTS) {
     const object = await SkyObject.findOne({ where: { name } });
     if (!object || (await Statement.count({ where: { skyObjectId: object.id } })) > 0) continue;
-    for (const template of templatesForKind(object.kind).filter((t) => !t.needsVenue)) {
+    // Phrase forms belong inside a writer's sentence, and the timeline statements to their demo page.
+    for (const template of templatesForKind(object.kind).filter((t) => !t.needsVenue && !t.phraseOf && !t.usesTimeline)) {
       await findOrCreateStatement(object.id, template.id, writer).catch(() => undefined);
     }
   }

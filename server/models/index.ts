@@ -8,6 +8,7 @@ import { MediaRendition } from './media-rendition.ts';
 import { OrganisationSettings } from './organisation-settings.ts';
 import { OutboxMessage } from './outbox-message.ts';
 import { Statement } from './statement.ts';
+import { TimelineEntry } from './timeline-entry.ts';
 import { CosmologyDescription } from './cosmology-description.ts';
 import { User } from './user.ts';
 import { Venue } from './venue.ts';
@@ -20,7 +21,7 @@ export { AuditEvent, AuthToken, OutboxMessage, User, Venue };
 export type { TokenPurpose } from './auth-token.ts';
 export { CatalogueImport, CatalogueProposal, Measurement, MeasurementHistory, SkyObject, Source } from './catalogue-models.ts';
 export { Media, MediaRendition };
-export { CosmologyDescription, OrganisationSettings, Statement };
+export { CosmologyDescription, OrganisationSettings, Statement, TimelineEntry };
 export type { StatementStatus } from './statement.ts';
 export { KioskScreen, SkySnapshot };
 export { Page, PageComment, PageNumberFlag, PageRevision, PageSignoff, PageVersionGroup } from './page-models.ts';
@@ -41,6 +42,7 @@ export function initModels(sequelize: Sequelize = getSequelize()): Sequelize {
   OrganisationSettings.initModel(sequelize);
   CosmologyDescription.initModel(sequelize);
   Statement.initModel(sequelize);
+  TimelineEntry.initModel(sequelize);
 
   KioskScreen.initModel(sequelize);
   SkySnapshot.initModel(sequelize);

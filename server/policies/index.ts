@@ -7,6 +7,7 @@ import { outboxPolicy } from './outbox.ts';
 import { pagePolicy } from './page.ts';
 import { settingsPolicy } from './settings.ts';
 import { statementPolicy } from './statement.ts';
+import { timelinePolicy } from './timeline.ts';
 import { userPolicy } from './user.ts';
 import { venuePolicy } from './venue.ts';
 import type { Rule } from './utils.ts';
@@ -19,6 +20,7 @@ export const policies = {
   catalogue: cataloguePolicy,
   statement: statementPolicy,
   settings: settingsPolicy,
+  timeline: timelinePolicy,
   venue: venuePolicy,
   page: pagePolicy,
   channel: channelPolicy,

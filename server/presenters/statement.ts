@@ -1,4 +1,5 @@
 import { findTemplate } from '@shared/statements/index.ts';
+import { workingForPeople } from '@shared/statements/working-names.ts';
 import type { StatementDto } from '@shared/schemas/statement.ts';
 import type { Step } from '@shared/engine/working.ts';
 import type { SkyObject, Statement, User } from '../models/index.ts';
@@ -36,7 +37,8 @@ export function presentStatement(
     acknowledgedTexts: statement.acknowledgedTexts ?? null,
     acknowledgedAt: statement.acknowledgedAt?.toISOString() ?? null,
     inputs: statement.inputs ?? [],
-    ...(working ? { working } : {}),
+    // People read a measurement by its object, quantity and source, never by its id.
+    ...(working ? { working: workingForPeople(working, statement.inputs ?? [], object.name) } : {}),
     warnings: statement.warnings ?? [],
     model: statement.model ?? null,
     computedAt: statement.computedAt.toISOString(),

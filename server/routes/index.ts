@@ -9,6 +9,7 @@ import { outboxRouter } from './outbox.ts';
 import { pagesRouter } from './pages/index.ts';
 import { settingsRouter } from './settings.ts';
 import { statementsRouter, statementTemplatesRouter } from './statements.ts';
+import { timelineRouter } from './timeline.ts';
 import { usersRouter } from './users.ts';
 import { kioskRouter } from './kiosk.ts';
 import { venuesRouter } from './venues.ts';
@@ -27,6 +28,7 @@ export function apiRouter(): Router {
   router.use('/statements', statementsRouter);
   router.use('/statement-templates', statementTemplatesRouter);
   router.use('/settings', settingsRouter);
+  router.use('/timeline', timelineRouter);
   router.use('/media', mediaRouter);
   router.use('/catalogue', catalogueRouter);
   router.use('/venues', venuesRouter);

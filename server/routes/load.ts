@@ -12,6 +12,7 @@ import {
   SkyObject,
   Source,
   Statement,
+  TimelineEntry,
   User,
   Venue,
 } from '../models/index.ts';
@@ -58,6 +59,10 @@ export function measurementIncludes() {
 
 /** @throws HttpError 404 */
 export const loadPage = (id: unknown) => loadRecord(id, (pk) => Page.findByPk(pk), 'There is no page with that id.');
+
+/** @throws HttpError 404 */
+export const loadTimelineEntry = (id: unknown) =>
+  loadRecord(id, (pk) => TimelineEntry.findByPk(pk), 'There is no timeline entry with that id.');
 
 /** @throws HttpError 404 */
 export const loadVenue = (id: unknown) => loadRecord(id, (pk) => Venue.findByPk(pk), 'There is no venue with that id.');

@@ -20,16 +20,19 @@ statementTemplatesRouter.use(requireUser);
 statementTemplatesRouter.get('/', (req, res) => {
   authorize(currentUser(req), 'statement', 'read');
   res.json({
-    data: STATEMENT_TEMPLATES.map(({ id, title, needs, kinds, kindsReason, usesCosmology, needsVenue, followsTonight }) => ({
-      id,
-      title,
-      needs,
-      kinds: [...kinds],
-      kindsReason,
-      usesCosmology,
-      needsVenue: !!needsVenue,
-      followsTonight: !!followsTonight,
-    })),
+    data: STATEMENT_TEMPLATES.map(
+      ({ id, title, needs, kinds, kindsReason, usesCosmology, needsVenue, followsTonight, phraseOf }) => ({
+        id,
+        title,
+        needs,
+        kinds: [...kinds],
+        kindsReason,
+        usesCosmology,
+        needsVenue: !!needsVenue,
+        followsTonight: !!followsTonight,
+        phraseOf: phraseOf ?? null,
+      }),
+    ),
   });
 });
 

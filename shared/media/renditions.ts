@@ -28,3 +28,36 @@ export const FORMAT_FILES: Record<RenditionFormat, { ext: string; mime: string }
 /** Where an image's renditions are: waiting for the queue, being made, done, or given up after retries. */
 export const RENDITION_STATUSES = ['pending', 'processing', 'ready', 'failed'] as const;
 export type RenditionStatus = (typeof RENDITION_STATUSES)[number];
+
+/** Each rendition's name in words for staff (the codes stay in URLs and the API). */
+export const RENDITION_LABELS: Record<RenditionName, string> = {
+  thumbnail: 'Thumbnail',
+  page: 'Page image',
+  'kiosk-hd': 'HD kiosk screen',
+  'kiosk-4k': '4K kiosk screen',
+};
+
+/**
+ * What a rendition is, for people: its label, the box it is made for, and a warning when it came
+ * out smaller than that box because the original is smaller (renditions are never enlarged), so
+ * the screen will scale it up.
+ * @param name the rendition
+ * @param width its width in pixels as made
+ * @param height its height as made
+ */
+export function describeRendition(
+  name: RenditionName,
+  width: number,
+  height: number,
+): { label: string; target: string; warning: string | null } {
+  const spec = RENDITION_SPECS.find((s) => s.name === name)!;
+  const target = `${spec.width} × ${spec.height}`;
+  const smaller = spec.fit === 'cover' && (width < spec.width || height < spec.height);
+  return {
+    label: RENDITION_LABELS[name],
+    target,
+    warning: smaller
+      ? `Smaller than ${name === 'kiosk-4k' ? '4K' : 'HD'} (${target}): the original is not large enough and images are never enlarged, so the screen will scale it up and it may look soft.`
+      : null,
+  };
+}

@@ -86,5 +86,7 @@ export const StatementTemplateDtoSchema = z.object({
   needsVenue: z.boolean(),
   /** Its number follows the venue's night without a new sign-off. */
   followsTonight: z.boolean(),
+  /** For a phrase form (a number inside a writer's sentence): the sentence template it shortens; null otherwise. */
+  phraseOf: z.string().nullable(),
 });
 export type StatementTemplateDto = z.infer<typeof StatementTemplateDtoSchema>;

@@ -16,6 +16,11 @@ export interface ComposeArgs {
    * ratio that rounds to one can read "about as bright as" (house style, DEVELOPERS.md).
    */
   sentence: (locale: StatementLocale, number: string, shown: number) => string;
+  /**
+   * The same number as a phrase that fits inside a writer's own sentence ("about 2.4 billion
+   * light-years"), for templates that have one (their phrase form: `phraseForm`).
+   */
+  phrase?: (locale: StatementLocale, number: string, shown: number) => string;
   footnote?: (locale: StatementLocale) => string | null;
   working: Step[];
   warnings?: string[];
@@ -45,6 +50,9 @@ export function compose(args: ComposeArgs): TemplateSuccess {
   const n = precision.significantFigures;
   const shown = formatApproximate(args.value, n, 'en-GB').shown;
   const texts = perLocale((locale) => args.sentence(locale, formatApproximate(args.value, n, locale).text, shown));
+  const phrases = args.phrase
+    ? perLocale((locale) => args.phrase!(locale, formatApproximate(args.value, n, locale).text, shown))
+    : undefined;
   const footnotes = args.footnote ? perLocale((locale) => args.footnote!(locale) ?? '') : null;
   const wording: Step = {
     title: 'Public wording: round to what the data supports',
@@ -81,6 +89,7 @@ export function compose(args: ComposeArgs): TemplateSuccess {
     interval: args.interval,
     significantFigures: n,
     texts,
+    ...(phrases ? { phrases } : {}),
     footnotes: footnotes && Object.values(footnotes).some(Boolean) ? footnotes : null,
     working: [...args.working, wording],
     warnings: args.warnings ?? [],

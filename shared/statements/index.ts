@@ -5,9 +5,11 @@
 import { TemplateProblem } from './inputs.ts';
 import { brightnessAt10pc } from './templates/brightness-at-10pc.ts';
 import { distanceTodayTemplate } from './templates/distance-today.ts';
+import { lightSetOutTimeline } from './templates/light-set-out-timeline.ts';
 import { lightTravel } from './templates/light-travel.ts';
 import { luminositySun } from './templates/luminosity-sun.ts';
 import { nakedEye } from './templates/naked-eye.ts';
+import { phraseForm } from './templates/phrase-form.ts';
 import { planetLightTonight } from './templates/planet-light-tonight.ts';
 import { scaleModel } from './templates/scale-model.ts';
 import { KIND_LABELS, type SkyObjectKind } from '../catalogue/kinds.ts';
@@ -19,6 +21,7 @@ export { choosePrecision, roundToSignificant } from './precision.ts';
 export { formatApproximate } from './number-words.ts';
 export { nightFromSky } from './tonight.ts';
 export type { SentenceNames } from './names.ts';
+export { chooseTimelineEntry, type TimelineEntry, type TimelineRelation } from './timeline.ts';
 
 /**
  * The release of the statement rules: raise it whenever a release changes templates' wording, the
@@ -28,19 +31,34 @@ export type { SentenceNames } from './names.ts';
  *    K-correction and extinction rules.
  * 3: intervals include the adopted model's H0 range and a peculiar-velocity term; trailing zeros
  *    kept; Hubble-law figures limited by the law's own error; planet light time holds for the evening.
+ * 4: phrase forms (a number inside a writer's sentence); "when the light set out" on Earth's timeline;
+ *    the working names a measurement by its object, quantity and source, never by its id.
  */
-export const STATEMENT_RULES_VERSION = 3;
+export const STATEMENT_RULES_VERSION = 4;
 
 /** Every template, in the order the picker lists them. */
 export const STATEMENT_TEMPLATES: readonly StatementTemplate[] = [
   luminositySun,
   brightnessAt10pc,
   lightTravel,
+  lightSetOutTimeline,
   distanceTodayTemplate,
   nakedEye,
   scaleModel,
   planetLightTonight,
+  phraseForm(distanceTodayTemplate, {
+    title: 'Distance today in light-years, as a phrase inside your sentence',
+    footnote: {
+      'en-GB': 'The distance given is how far away it is today.',
+      'en-US': 'The distance given is how far away it is today.',
+      'fr-FR': 'La distance indiquée est celle d’aujourd’hui.',
+    },
+  }),
+  phraseForm(lightTravel, { title: 'How long its light has travelled, as a phrase inside your sentence' }),
 ];
+
+/** The templates that read Earth's timeline (a timeline edit recomputes their statements). */
+export const TIMELINE_TEMPLATE_IDS: readonly string[] = STATEMENT_TEMPLATES.filter((t) => t.usesTimeline).map((t) => t.id);
 
 export function findTemplate(id: string): StatementTemplate | undefined {
   return STATEMENT_TEMPLATES.find((t) => t.id === id);

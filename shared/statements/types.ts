@@ -4,6 +4,7 @@ import type { Step } from '../engine/working.ts';
 import type { SkyObjectKind } from '../catalogue/kinds.ts';
 import type { LocalisedText } from './locales.ts';
 import type { SentenceNames } from './names.ts';
+import type { TimelineEntry } from './timeline.ts';
 
 /** An organisation's default spectral index for one kind of object, used only as a stated assumption. */
 export interface SpectralIndexDefault {
@@ -82,6 +83,8 @@ export interface TemplateContext {
   night?: StatementNight | null;
   /** The organisation's stated defaults for missing measurements (absent: none). */
   assumptions?: StatementAssumptions | null;
+  /** Earth's timeline, edited by admins, for comparing a light-travel time (absent: none). */
+  timeline?: readonly TimelineEntry[] | null;
 }
 
 /**
@@ -127,6 +130,8 @@ export interface TemplateSuccess {
   interval: { low: number; high: number } | null;
   significantFigures: number;
   texts: LocalisedText;
+  /** The number as a phrase for inside a sentence, when the template has one (its phrase form shows it). */
+  phrases?: LocalisedText;
   /** Small print: which cosmology, which band. Null when nothing needs saying. */
   footnotes: LocalisedText | null;
   working: Step[];
@@ -176,5 +181,11 @@ export interface StatementTemplate {
    * ephemeris, sentence) is the one last accepted.
    */
   followsTonight?: boolean;
+  /** True when the statement reads the timeline: a timeline edit recomputes its statements. */
+  usesTimeline?: boolean;
+  /** For a phrase form: the id of the sentence template it shortens. */
+  phraseOf?: string;
+  /** For a sentence template with a phrase form: that form's id. */
+  phraseId?: string;
   evaluate(ctx: TemplateContext): TemplateOutcome;
 }

@@ -52,6 +52,7 @@ const router = createBrowserRouter([
           { path: 'organisation', lazy: () => import('./routes/admin/organisation.tsx') },
           { path: 'users', lazy: () => import('./routes/admin/users.tsx') },
           { path: 'outbox', lazy: () => import('./routes/admin/outbox.tsx') },
+          { path: 'timeline', lazy: () => import('./routes/admin/timeline.tsx') },
         ],
       },
       { path: '*', lazy: () => import('./routes/not-found.tsx') },

@@ -26,6 +26,7 @@ export const MAIN_NAV: NavItem[] = [
 /** Administration, at the foot of the rail. */
 export const ADMIN_NAV: NavItem[] = [
   { label: 'Organisation', to: paths.adminOrganisation.href(), icon: 'globe', roles: ['admin'] },
+  { label: 'Earth’s timeline', to: paths.timeline.href(), icon: 'history', roles: ['admin'] },
   { label: 'Users', to: paths.adminUsers.href(), icon: 'users', roles: ['admin'] },
   { label: 'Outbox', to: paths.adminOutbox.href(), icon: 'mail', roles: ['admin'] },
 ];

@@ -27,4 +27,5 @@ export const paths = {
   channel: { path: '/publishing/channels/:channelId', href: (id: string) => `/publishing/channels/${id}` },
   adminUsers: { path: '/admin/users', href: () => '/admin/users' },
   adminOutbox: { path: '/admin/outbox', href: () => '/admin/outbox' },
+  timeline: { path: '/admin/timeline', href: () => '/admin/timeline' },
 } as const;

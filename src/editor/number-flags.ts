@@ -35,6 +35,17 @@ export function flagRanges(doc: PMNode): FlagRange[] {
   return ranges;
 }
 
+/**
+ * The text of the paragraph before and after a range (statements in it read "…"), so a writer sees
+ * the whole sentence a replacement will sit in.
+ */
+export function surroundings(doc: PMNode, range: FlagRange): { before: string; text: string; after: string } {
+  const $from = doc.resolve(range.from);
+  const $to = doc.resolve(range.to);
+  const read = (from: number, to: number) => doc.textBetween(from, to, '\n', '…');
+  return { before: read($from.start(), range.from), text: range.text, after: read(range.to, $to.end()) };
+}
+
 export const numberFlagsKey = new PluginKey<DecorationSet>('numberFlags');
 
 /** Underlines hand-typed numbers as the writer types (a wavy amber line, with a title saying why). */

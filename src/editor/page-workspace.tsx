@@ -8,12 +8,13 @@ import { paths } from '@/config/paths.ts';
 import { ConflictView } from '@/features/pages/components/conflict-view.tsx';
 import { MediaPicker } from '@/features/pages/components/media-picker.tsx';
 import { NumberCheckPanel, type LiveFlag } from '@/features/pages/components/number-check-panel.tsx';
+import type { PhraseFit } from '@/features/pages/components/phrase-fit.ts';
 import { StatementPicker } from '@/features/pages/components/statement-picker.tsx';
 import { StatementWorking } from '@/features/pages/components/statement-working.tsx';
 import { PageEditorContext } from './editor-context.tsx';
 import { clientExtensions } from './extensions.ts';
 import { dropLocalDraft, readLocalDraft, type LocalDraft } from './local-draft.ts';
-import { flagRanges, type FlagRange } from './number-flags.ts';
+import { flagRanges, surroundings, type FlagRange } from './number-flags.ts';
 import { cleanPastedHtml } from './paste-clean.ts';
 import { Toolbar } from './toolbar.tsx';
 import { SaveStatus } from './save-status.tsx';
@@ -112,13 +113,19 @@ export function PageWorkspace({
     setTitle(t);
   };
 
-  const insertStatement = (statementId: string) => {
+  const insertStatement = (statementId: string, fit?: PhraseFit) => {
     const node = { type: 'statementRef', attrs: { statementId } };
     const chain = editor.chain().focus();
-    if (picker?.replace) chain.insertContentAt({ from: picker.replace.from, to: picker.replace.to }, node).run();
+    const replace = picker?.replace;
+    if (replace)
+      chain
+        .insertContentAt({ from: replace.from - (fit?.absorbBefore ?? 0), to: replace.to - (fit?.keepAfter ?? 0) }, node)
+        .run();
     else chain.insertContent(node).run();
     setPicker(null);
   };
+  // The paragraph around a number being replaced, for the picker's preview.
+  const replacing = picker?.replace ? surroundings(editor.state.doc, picker.replace) : undefined;
 
   const context = useMemo(
     () => ({ locale: page.locale, eyeSafetyNotice, openStatement: setWorking }),
@@ -210,7 +217,8 @@ export function PageWorkspace({
           {picker && (
             <StatementPicker
               defaultObject={page.object}
-              replacing={picker.replace?.text}
+              locale={page.locale}
+              replacing={replacing}
               onPick={insertStatement}
               onClose={() => setPicker(null)}
             />

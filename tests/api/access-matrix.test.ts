@@ -94,6 +94,10 @@ const EXPECTED: Record<string, Answer[]> = {
   'POST /api/catalogue/imports/:id/commit': ['401', '401', '403', 'ok', '403', 'ok'],
   'GET /api/catalogue/exports/objects.csv': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'GET /api/catalogue/exports/measurements.csv': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
+  'GET /api/timeline': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
+  'POST /api/timeline': ['401', '401', '403', '403', '403', 'ok'],
+  'PATCH /api/timeline/:id': ['401', '401', '403', '403', '403', 'ok'],
+  'DELETE /api/timeline/:id': ['401', '401', '403', '403', '403', 'ok'],
   'GET /api/venues': ['401', '401', '403', '403', 'ok', 'ok'],
   'GET /api/venues/choices': ['401', '401', 'ok', 'ok', 'ok', 'ok'],
   'POST /api/venues': ['401', '401', '403', '403', '403', 'ok'],
@@ -170,6 +174,7 @@ const LAST = [
   'POST /api/venues/:venueId/screens/:screenId/revoke',
   'DELETE /api/venues/:venueId/screens/:screenId',
   'DELETE /api/venues/:id',
+  'DELETE /api/timeline/:id',
 ];
 
 let world: Awaited<ReturnType<typeof buildAccessWorld>>;

@@ -68,6 +68,7 @@ async function mainScreens(admin: E2eSession, reviewer: E2eSession): Promise<Scr
     { name: 'organisation', url: '/admin/organisation', roles: ['admin'] },
     { name: 'users', url: '/admin/users', roles: ['admin'] },
     { name: 'outbox', url: '/admin/outbox', roles: ['admin'] },
+    { name: 'timeline', url: '/admin/timeline', roles: ['admin'] },
   ];
 }
 

@@ -65,12 +65,17 @@ describe('object pages, from writing to re-check', () => {
       .click();
     await expect.poll(() => page.locator('.page-prose [data-statement-id]').count()).toBe(1);
 
-    // The hand-typed number becomes the second statement.
+    // The hand-typed number becomes the second statement: its phrase form, after the preview.
     await panel.getByRole('button', { name: 'Make it a statement' }).click();
     await page
       .getByRole('dialog', { name: 'Insert a statement' })
-      .getByRole('button', { name: /When its light set out/ })
+      .getByRole('button', { name: /How long its light has travelled, as a phrase/ })
       .click();
+    const check = page.getByRole('dialog', { name: 'Check the sentence' });
+    await expect
+      .poll(() => check.getByTestId('replace-preview').textContent())
+      .toMatch(/Its light is about [\d.]+ billion years old\./);
+    await check.getByRole('button', { name: /^Replace/ }).click();
     await expect.poll(() => page.locator('.page-prose [data-statement-id]').count()).toBe(2);
     await expect.poll(() => page.locator('.page-prose .number-flag').count()).toBe(0);
     await expect

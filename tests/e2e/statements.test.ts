@@ -63,6 +63,8 @@ describe('checked statements in the browser', () => {
     await page.waitForURL(/sign-in/);
 
     await signInThroughForm(page, baseUrl, account('reviewer').email, account('reviewer').password);
+    // Wait for the sign-in to land: navigating away earlier would cancel it and leave no session.
+    await page.waitForURL((url) => !url.pathname.startsWith('/sign-in'));
     const first = page.getByRole('link', { name: /3C 279/ }).first();
     // The recompute runs in the background and the list does not refresh itself: look again until it is done.
     await expect

@@ -63,9 +63,12 @@ export async function buildAccessWorld() {
     .post('/api/catalogue/proposals/sources')
     .send({ citation: 'Access matrix proposed source (invented)', url: 'https://example.test/access-matrix' });
   if (proposal.status !== 201) throw new Error(`proposal: ${JSON.stringify(proposal.body)}`);
+  const timelineEntry = await signed.admin.agent.post('/api/timeline').send(timelineSample('Access matrix entry'));
+  if (timelineEntry.status !== 201) throw new Error(`timeline: ${JSON.stringify(timelineEntry.body)}`);
   const ids: Record<string, string> = {
     import: checked.body.data.id,
     proposal: proposal.body.data.id,
+    timeline: timelineEntry.body.data.id,
     page: page.id,
     reviewPage: inReview.id,
     slide: slide.body.data.slides[0].id,
@@ -80,6 +83,19 @@ export async function buildAccessWorld() {
     user: String(target.user.id),
   };
   return { signed, owner, target, ids, kioskToken: screen.token, otherVenue, otherScreen, page };
+}
+
+/** A valid timeline entry (invented values, for access checks only). */
+function timelineSample(label: string) {
+  const phrase = 'around the time of an invented event used only by the access tests';
+  return {
+    label,
+    yearsAgo: 1e6,
+    uncertaintyYears: 1e4,
+    relation: 'around',
+    phrases: { 'en-GB': phrase, 'en-US': phrase, 'fr-FR': 'à l’époque d’un événement inventé pour les tests' },
+    sourceCitation: 'Invented for the access tests',
+  };
 }
 
 /** Fills a path template with the world's ids (random UUIDs where no row is needed). */
@@ -97,6 +113,7 @@ export function fillPath(template: string, ids: Record<string, string>): string 
     [/^\/api\/channels\/:id/, ids.channel],
     [/^\/api\/catalogue\/imports\/:id/, ids.import],
     [/^\/api\/catalogue\/proposals\/:id/, ids.proposal],
+    [/^\/api\/timeline\/:id/, ids.timeline],
   ];
   let path = template;
   for (const [re, id] of byPrefix) if (re.test(path)) path = path.replace(':id', id);
@@ -198,6 +215,8 @@ export function sampleInput(key: string, ids: Record<string, string>, pageVersio
       },
     },
     'PATCH /api/venues/:id': { body: { elevationM: 120 } },
+    'POST /api/timeline': { body: timelineSample(`Access matrix entry ${randomUUID().slice(0, 8)}`) },
+    'PATCH /api/timeline/:id': { body: { note: 'Checked by the access matrix.' } },
     'POST /api/venues/:venueId/screens': { body: { name: 'Access matrix screen' } },
     'PATCH /api/venues/:venueId/screens/:screenId': { body: { language: 'fr-FR' } },
     'POST /api/kiosk/heartbeat': { body: { screenId: ids.screen } },

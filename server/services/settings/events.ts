@@ -1,6 +1,6 @@
 import { EventEmitter } from 'node:events';
 
-/** What each settings event carries: the settings version after the change. */
+/** What each settings event carries: the settings version after the change, or the timeline entry changed. */
 export interface SettingsEventMap {
   /** An admin adopted another cosmology: every statement's numbers may move. */
   cosmologyAdopted: [{ version: number }];
@@ -8,6 +8,8 @@ export interface SettingsEventMap {
   statementDefaultsChanged: [{ version: number }];
   /** The eye-safety notice's wording changed: public pages that carry it show the new words. */
   eyeSafetyNoticeChanged: [{ version: number }];
+  /** An admin added, changed or removed an entry of Earth's timeline: statements that read it may move. */
+  timelineChanged: [{ entryId: string }];
 }
 
 /**

@@ -7,6 +7,7 @@ import {
   type StatementNight,
   type StatementVenue,
   type TemplateContext,
+  type TimelineEntry,
 } from '@shared/statements/index.ts';
 import type { CalcModel } from '@shared/schemas/calc.ts';
 import type { H0Range } from '@shared/schemas/settings.ts';
@@ -27,6 +28,8 @@ export interface SettingsSnapshot {
   version: number;
   /** Stated defaults for missing measurements (absent: none). */
   assumptions?: StatementAssumptions;
+  /** Earth's timeline, for statements that compare a light-travel time with it (absent: none). */
+  timeline?: TimelineEntry[];
 }
 
 type ObjectRef = { id: string; name: string; kind: string; designations?: string[]; sentenceNames?: SentenceNames | null };
@@ -61,6 +64,7 @@ function contextFor(object: ObjectRef, measurements: StatementMeasurement[], set
     band: settings.band,
     assumptions: settings.assumptions ?? null,
     h0Range: settings.h0Range ?? null,
+    timeline: settings.timeline ?? [],
   };
 }
 

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { BadRequestError, NotFoundError, UnprocessableError } from '../../errors.ts';
 import { SkyObject, Statement, Venue, type User } from '../../models/index.ts';
 import { recordAudit } from '../audit.ts';
-import { getSettings } from '../settings/index.ts';
+import { getSettings, timelineForStatements } from '../settings/index.ts';
 import { applyOutcome } from './apply-outcome.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 import { packForStorage } from './working-pack.ts';
@@ -50,6 +50,7 @@ export async function findOrCreateStatement(
     h0Range: settings.h0Range ?? null,
     version: settings.version,
     assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
+    timeline: template.usesTimeline ? await timelineForStatements() : [],
   });
   const night = venue ? (await buildVenueNights([venue.id], new Date())).get(venue.id) : undefined;
   const ctx = night ? withVenue(base, night) : base;

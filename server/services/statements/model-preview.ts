@@ -4,7 +4,7 @@ import type { PreviewRow } from '@shared/schemas/settings.ts';
 import { STATEMENT_TEMPLATES, findTemplate, type StatementLocale } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
 import { SkyObject, Statement } from '../../models/index.ts';
-import { getSettings } from '../settings/index.ts';
+import { getSettings, timelineForStatements } from '../settings/index.ts';
 import { loadBatchJob } from './batch-load.ts';
 import type { PreviewChange } from './evaluate-batch.ts';
 import { poolSize, runBatch } from './evaluation-pool.ts';
@@ -37,6 +37,7 @@ export async function previewCosmologyChange(model: CalcModel): Promise<{ rows: 
     h0Range: settings.h0Range ?? null,
     version: settings.version,
     assumptions: { spectralIndex: settings.spectralIndexDefaults ?? {} },
+    timeline: await timelineForStatements(),
   };
   const computedAt = new Date();
   const batches: Array<Promise<PreviewChange[]>> = [];

@@ -3,7 +3,7 @@ import { getSequelize } from '../../db.ts';
 import { enqueue, type SendOptions } from '../../jobs/queue.ts';
 import { logger } from '../../logger.ts';
 import { Statement } from '../../models/index.ts';
-import { getSettings } from '../settings/index.ts';
+import { getSettings, timelineForStatements } from '../settings/index.ts';
 import { batchModelFor, loadBatchJob } from './batch-load.ts';
 import type { SettingsSnapshot } from './context.ts';
 import type { WriteBatchResult } from './evaluate-batch.ts';
@@ -18,6 +18,8 @@ export type RecomputeScope =
   | { statementIds: string[] }
   | { measurementId: string }
   | { sourceId: string }
+  /** Every statement of these templates (e.g. those that read Earth's timeline, after it is edited). */
+  | { templateIds: string[] }
   /** The statements about a venue's night, for that night (the venue's night in progress when left out). */
   | { venueId: string; localDate?: string };
 
@@ -30,13 +32,14 @@ export class SettingsMovedError extends Error {}
 
 /** The adopted settings as a statement computation reads them. */
 export async function currentSettingsSnapshot(): Promise<SettingsSnapshot> {
-  const row = await getSettings();
+  const [row, timeline] = await Promise.all([getSettings(), timelineForStatements()]);
   return {
     model: row.cosmologyModel,
     band: row.defaultBand,
     h0Range: row.h0Range ?? null,
     version: row.version,
     assumptions: { spectralIndex: row.spectralIndexDefaults ?? {} },
+    timeline,
   };
 }
 
@@ -47,6 +50,15 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
       await Statement.findAll({
         attributes: ['id'],
         where: { venueId: scope.venueId },
+        order: [['skyObjectId', 'ASC']],
+        raw: true,
+      })
+    ).map((s) => s.id);
+  if ('templateIds' in scope)
+    return (
+      await Statement.findAll({
+        attributes: ['id'],
+        where: { templateId: scope.templateIds },
         order: [['skyObjectId', 'ASC']],
         raw: true,
       })

@@ -13,6 +13,7 @@ export const distanceTodayTemplate: StatementTemplate = {
   kinds: ['star', 'galaxy', 'quasar', 'nebula', 'cluster', 'other'],
   kindsReason: 'a solar-system body’s distance changes through the year; a single figure would be wrong most of the time.',
   usesCosmology: true,
+  phraseId: 'distance-today-phrase',
   evaluate(ctx) {
     const d = computeDistance(ctx);
     const toLy = (mpc: number) => mpc * 1e6 * LY_PER_PC;
@@ -52,6 +53,11 @@ export const distanceTodayTemplate: StatementTemplate = {
         isFrench(locale)
           ? `${nameAtStart(ctx.object, locale)} ${verb(ctx.object, locale, 'se trouve', 'se trouvent')} ${now ? 'aujourd’hui ' : ''}à environ ${frenchCount(n, unitWord(locale, 'light-year'))}.`
           : `${nameAtStart(ctx.object, locale)} ${verb(ctx.object, locale, 'is', 'are')} ${now ? 'now ' : ''}about ${n} ${unitWord(locale, 'light-year')} away.`,
+      // Inside the writer's sentence there is no "now": the phrase form's small print says which distance it is.
+      phrase: (locale, n) =>
+        isFrench(locale)
+          ? `environ ${frenchCount(n, unitWord(locale, 'light-year'))}`
+          : `about ${n} ${unitWord(locale, 'light-year')}`,
       footnote: now ? cosmologyFootnote(d.model) : undefined,
       working: [...d.working, step],
       warnings: d.warnings,

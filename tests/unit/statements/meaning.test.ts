@@ -251,8 +251,11 @@ describe('3. each template is valid for some kinds of object only', () => {
     expect(templatesForKind('galaxy').map((t) => t.id)).toEqual([
       'luminosity-sun',
       'light-travel',
+      'light-set-out-timeline',
       'distance-today',
       'scale-model',
+      'distance-today-phrase',
+      'light-travel-phrase',
     ]);
     expect(templatesForKind('planet').map((t) => t.id)).toEqual(['naked-eye', 'planet-light-tonight']);
     expect(templatesForKind('sun')).toEqual([]);

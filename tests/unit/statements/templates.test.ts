@@ -49,7 +49,8 @@ describe('statement templates', () => {
       const r = ok(t.id, quasar);
       expect(Object.keys(r.texts).sort()).toEqual(['en-GB', 'en-US', 'fr-FR']);
       for (const text of Object.values(r.texts)) {
-        expect(text).toMatch(/Q1/);
+        // A phrase form is only the number's words; the writer's sentence names the object.
+        if (!t.phraseOf) expect(text).toMatch(/Q1/);
         expect(text).not.toMatch(/e\+|NaN|Infinity|undefined/);
       }
       expect(r.working.at(-1)!.title).toMatch(/Public wording/);

@@ -11,6 +11,7 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { PageHeader } from '@/components/ui/page-header.tsx';
 import { paths } from '@/config/paths.ts';
+import { formatDateTime } from '@/lib/format-date.ts';
 import { PageWorkspace, type WorkspaceHandle } from '@/editor/page-workspace.tsx';
 import { LanguageVersions } from '@/features/pages/components/language-versions.tsx';
 import { ArchivedNotice, PageArchiveActions } from '@/features/pages/components/page-archive-actions.tsx';
@@ -98,7 +99,7 @@ export function Component() {
           <Notice tone="warning" title={`Sent back by ${p.sentBack.by ?? 'a reviewer'}`}>
             <p className="whitespace-pre-wrap">{p.sentBack.reason}</p>
             <p className="mt-1 text-xs text-muted">
-              {sentBackAt.toLocaleString(undefined, { dateStyle: 'medium', timeStyle: 'short' })} ·{' '}
+              {formatDateTime(sentBackAt)} ·{' '}
               <Link to={paths.pageReview.href(p.id)} className="text-accent underline">
                 every comment
               </Link>

@@ -63,7 +63,7 @@ export function HistoryList({ entries, measurements }: { entries: MeasurementHis
         const what = m
           ? `${(findQuantity(m.quantity)?.label ?? m.quantity).toLowerCase()}${m.band ? ` (${m.band})` : ''} ${formatMeasurement(m)}`
           : (findQuantity(e.quantity ?? '')?.label.toLowerCase() ?? 'a measurement');
-        const [before, after] = ACTIONS[e.action] ?? [e.action, ''];
+        const [before, after] = ACTIONS[e.action] ?? ['changed', ''];
         const changes =
           e.action === 'updated'
             ? Object.keys(e.newValues ?? {}).filter((k) => k !== 'value' || !('enteredValue' in (e.newValues ?? {})))

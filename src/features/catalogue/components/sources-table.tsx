@@ -2,6 +2,7 @@ import type { SourceDto } from '@shared/schemas/source.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { sourceHref } from './format.ts';
 import { DataTable } from '@/components/ui/data-table.tsx';
+import { formatCalendarDate } from '@/lib/format-date.ts';
 
 /** Sources with their identifiers and how many current measurements cite each. */
 export function SourcesTable({ sources, onEdit }: { sources: SourceDto[]; onEdit: (source: SourceDto) => void }) {
@@ -32,7 +33,7 @@ export function SourcesTable({ sources, onEdit }: { sources: SourceDto[]; onEdit
                 '—'
               )}
             </td>
-            <td className="px-4 py-2 tabular-nums text-muted">{s.retrievedOn ?? '—'}</td>
+            <td className="px-4 py-2 tabular-nums text-muted">{s.retrievedOn ? formatCalendarDate(s.retrievedOn) : '—'}</td>
             <td className="px-4 py-2 text-right tabular-nums">{s.measurementCount}</td>
             <td className="px-4 py-2 text-right">
               {s.can.update && (

@@ -7,6 +7,10 @@ import { Notice } from '@/components/ui/notice.tsx';
 import { MediaDetailsForm } from './media-details-form.tsx';
 import { MediaStatus } from './media-status.tsx';
 import { pickRendition } from '@/lib/renditions.ts';
+import { describeRendition } from '@shared/media/renditions.ts';
+
+/** Where an image is used, in words (the codes are the usage providers' names). */
+const USAGE_KINDS: Record<string, string> = { page: 'Page:', channel: '' };
 
 const sizeFormat = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
 const bytesText = (b: number) =>
@@ -96,10 +100,17 @@ function Renditions({ media }: { media: MediaDetailDto }) {
         <tbody>
           {names.map((name) => {
             const set = media.renditions.filter((r) => r.name === name);
+            const about = describeRendition(name, set[0].width, set[0].height);
             return (
               <tr key={name} className="border-b border-rule last:border-0">
                 <th scope="row" className="py-1.5 pr-2 font-medium">
-                  {name}
+                  {about.label}
+                  {about.warning && (
+                    <p className="mt-0.5 font-normal text-changed">
+                      <Icon name="alert" className="mr-1 inline size-3" />
+                      {about.warning}
+                    </p>
+                  )}
                 </th>
                 <td className="py-1.5 pr-2 tabular-nums text-muted">
                   {set[0].width} × {set[0].height}
@@ -135,7 +146,8 @@ function Usage({ media, onDeleted }: { media: MediaDetailDto; onDeleted: () => v
         <ul className="list-disc pl-5 text-sm">
           {media.usage.map((u) => (
             <li key={`${u.kind}-${u.id}`}>
-              <span className="text-muted">{u.kind}</span> {u.title}
+              {(USAGE_KINDS[u.kind] ?? 'Used by:') && <span className="text-muted">{USAGE_KINDS[u.kind] ?? 'Used by:'}</span>}{' '}
+              {u.title}
             </li>
           ))}
           {media.hiddenUsageCount > 0 && (

@@ -1,3 +1,4 @@
+import { KIND_LABELS, type SkyObjectKind } from '@shared/catalogue/kinds.ts';
 import { useId, useState } from 'react';
 import { useObjectSearch } from '@/api/catalogue-objects.ts';
 import { useDebouncedValue } from '@/lib/use-debounced-value.ts';
@@ -68,7 +69,8 @@ export function ObjectPicker({
         {rows.map((o) => (
           <option key={o.id} value={o.id}>
             {o.name}
-            {o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} · {o.kind}
+            {o.designations.length ? ` (${o.designations.slice(0, 2).join(', ')})` : ''} ·{' '}
+            {KIND_LABELS[o.kind as SkyObjectKind] ?? 'object'}
           </option>
         ))}
       </select>

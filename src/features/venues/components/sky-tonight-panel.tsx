@@ -5,7 +5,7 @@ import { Icon } from '@/components/ui/icon.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatAltitude, formatKm } from './sky-format.ts';
 import { SkyPlanetsTable } from './sky-planets-table.tsx';
-import { formatDateTime } from '@/lib/format-date.ts';
+import { formatCalendarDate, formatDateTime } from '@/lib/format-date.ts';
 
 const percent = new Intl.NumberFormat(undefined, { style: 'percent', maximumFractionDigits: 0 });
 
@@ -78,16 +78,17 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
           </h2>
           {data && (
             <p className="text-sm text-muted">
-              Night of {data.localDate} ({data.timeZone}). Positions at {data.observation.text}.
+              Night of {formatCalendarDate(data.localDate)} ({data.timeZone}). Positions at {data.observation.text}.
             </p>
           )}
         </div>
         <div className="flex items-end gap-3 text-sm">
           <label className="flex flex-col gap-1">
             <span className="font-medium">Night of</span>
+            {/* Shows the night on screen, tonight's included, not an empty field. */}
             <input
               type="date"
-              value={date}
+              value={date || data?.localDate || ''}
               onChange={(e) => setDate(e.target.value)}
               className="rounded-md border border-rule bg-panel px-2 py-1.5"
             />
@@ -96,7 +97,7 @@ export function SkyTonightPanel({ venueId }: { venueId: string }) {
             <span className="font-medium">Positions at</span>
             <input
               type="time"
-              value={at}
+              value={at || data?.observation.localTime || ''}
               onChange={(e) => setAt(e.target.value)}
               className="rounded-md border border-rule bg-panel px-2 py-1.5"
             />
