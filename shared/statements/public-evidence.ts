@@ -139,6 +139,10 @@ const METHOD: Record<string, (inputs: UsedInput[]) => string> = {
     'How bright the object looks (its apparent magnitude) is compared with the faintest stars the unaided eye can see on a dark night, about magnitude 6. Each step of one magnitude is about 2.5 times fainter.',
   'scale-model': (inputs) =>
     `${distanceWords(inputs)} The distance is then shrunk by the same factor that shrinks the Sun to a bead 1 cm across.`,
+  'distance-today-phrase': (inputs) => METHOD['distance-today']!(inputs),
+  'light-travel-phrase': (inputs) => METHOD['light-travel']!(inputs),
+  'light-set-out-timeline': (inputs) =>
+    `${METHOD['light-travel']!(inputs)} That time is set beside Earth’s history from our timeline of dated events, each with its published source; an event is named only when its date, with its uncertainty, fits the light’s travel time.`,
   'planet-light-tonight': () =>
     'The planet’s distance from the Earth tonight is worked out from the planets’ orbits (Meeus’s methods with the VSOP87 theory), for the time given in the note; that distance divided by the speed of light is the time its light takes to reach us.',
 };

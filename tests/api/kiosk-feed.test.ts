@@ -116,6 +116,16 @@ describe('the kiosk feed', () => {
     expect(feed._starproof.valid_until).not.toBeNull();
   });
 
+  it('leaves a phrase form off the slide’s list of statements: alone it would read as a fragment', async () => {
+    const page = await publishedPage(crew, 'A phrase in a sentence', undefined, undefined, { phrase: true });
+    const { channelId, token } = await channelWithScreen('Phrase loop', 'Phrase screen');
+    await addSlide(channelId, { kind: 'page', pageId: page.pageId, statementIds: [page.statementIds[0], page.phraseId] });
+    const feed = await getFeed(token);
+    expect(feed.status).toBe(200);
+    const listed = feed.body.items[0]._starproof.slide.statements.map((s: { id: string }) => s.id);
+    expect(listed).toEqual([page.statementIds[0]]);
+  });
+
   it('answers If-None-Match with 304 from memory, with a strong ETag and no-cache', async () => {
     const { channelId, token } = await channelWithScreen('Revalidation', 'Revalidation screen');
     await addSlide(channelId, { kind: 'sky_tonight' });

@@ -74,15 +74,22 @@ export async function publishedPage(
   title: string,
   mediaId?: string,
   opening = 'A bright quasar you can find with a small telescope.',
-  extra: { caption?: string; blocks?: JSONContent[] } = {},
+  extra: { caption?: string; blocks?: JSONContent[]; phrase?: boolean } = {},
 ) {
   const q = await quasarWithStatements(crew.writer.agent, crew.writer.user);
+  // With `phrase`, a phrase form of the distance inside a sentence of the writer's.
+  const phrase = extra.phrase
+    ? await crew.writer.agent.post('/api/statements').send({ objectId: q.object.id, templateId: 'distance-today-phrase' })
+    : null;
+  if (phrase && phrase.status >= 300) throw new Error(`phrase statement: ${JSON.stringify(phrase.body)}`);
+  const phraseId = (phrase?.body.data.id as string | undefined) ?? null;
   const blocks = [
     ...(mediaId ? [{ type: 'mediaImage', attrs: { mediaId, caption: extra.caption ?? null } }] : []),
     ...(extra.blocks ?? []),
     paragraph(text(opening)),
     paragraph(statement(q.distanceId)),
     paragraph(statement(q.nakedEyeId)),
+    ...(phraseId ? [paragraph(text('It lies '), statement(phraseId), text(' from us.'))] : []),
   ];
   const page = await pageWithBody(crew.writer.agent, q.object.id, doc(...blocks), title);
   const ok = (res: supertest.Response, what: string) => {
@@ -90,14 +97,20 @@ export async function publishedPage(
     return res;
   };
   ok(await crew.writer.agent.post(`/api/pages/${page.id}/submit`).send({ version: page.version }), 'submit');
-  for (const id of [q.distanceId, q.nakedEyeId])
+  for (const id of [q.distanceId, q.nakedEyeId, ...(phraseId ? [phraseId] : [])])
     ok(
       await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/statements`).send({ statementId: id }),
       'sign off statement',
     );
   ok(await crew.reviewer.agent.post(`/api/pages/${page.id}/signoffs/page`), 'sign off page');
   ok(await crew.editor.agent.post(`/api/pages/${page.id}/publish`), 'publish');
-  return { pageId: page.id, statementIds: [q.distanceId, q.nakedEyeId], distanceText: q.distanceText, objectName: q.object.name };
+  return {
+    pageId: page.id,
+    statementIds: [q.distanceId, q.nakedEyeId],
+    phraseId,
+    distanceText: q.distanceText,
+    objectName: q.object.name,
+  };
 }
 
 /** A venue made by an admin through the API. */

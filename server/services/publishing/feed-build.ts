@@ -140,8 +140,9 @@ export async function buildKioskFeed(target: FeedTarget, now = Date.now()): Prom
         if (!snapshot) continue; // unpublished: gone from the screens at once
         const locale = pageLocales.get(shownPageId!) ?? 'en-GB';
         const shown = publicPageTexts(snapshot, statements, locale);
+        // A phrase form alone would read as a fragment on a slide: it stays inside the page's text.
         const chosen = (s.statementIds ?? [])
-          .filter((id) => shown.statementTexts[id])
+          .filter((id) => shown.statementTexts[id] && !statements.get(id)?.phrase)
           .map((id) => ({
             id,
             text: shown.statementTexts[id],

@@ -11,6 +11,8 @@ export interface PublicStatement {
   /** Its wording and small print as last computed: the small print is shown with wording it belongs to. */
   texts: Record<StatementLocale, string> | null;
   footnotes: Record<StatementLocale, string> | null;
+  /** A phrase form ("about 2.2 billion light-years"): it reads only inside its page's sentence. */
+  phrase: boolean;
 }
 
 /**
@@ -38,6 +40,7 @@ export async function publicStatements(statementIds: string[]): Promise<Map<stri
           asOf: (follows ? s.computedAt : (s.acknowledgedAt ?? s.computedAt)).toISOString(),
           texts: s.texts ?? null,
           footnotes: s.footnotes ?? null,
+          phrase: !!findTemplate(s.templateId)?.phraseOf,
         },
       ];
     }),

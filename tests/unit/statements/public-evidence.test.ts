@@ -68,6 +68,8 @@ describe('"How we know": the working retold for visitors', () => {
     const cases: Array<[string, TemplateContext]> = [
       ['distance-today', quasar],
       ['light-travel', quasar],
+      ['distance-today-phrase', quasar],
+      ['light-travel-phrase', star],
       ['scale-model', star],
       ['naked-eye', ctx('star', [m('v', 'apparent_magnitude', 3, { sigma: 0.1, band: 'V', unit: 'mag' })])],
     ];
