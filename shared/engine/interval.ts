@@ -118,8 +118,11 @@ export function quantityInterval(
   }
   const varyH0 = varied.includes(H0_KEY);
   const prepare =
-    spec.modulusInZ && !varyH0 && varied.includes('z')
+    spec.modulusInZ && varied.includes('z')
       ? () => {
+          // Built at the nominal H0: a draw of H0 only divides d_L by its scale, so the draw
+          // subtracts 5 log10(scale) from it (sampleDistanceModulus).
+          env.h0Scale = 1;
           const range = deviateRange(varied.length, varied.indexOf('z'));
           const z = all.z;
           const mass = boundMass(z);
