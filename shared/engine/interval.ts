@@ -8,7 +8,7 @@ import type { QuantitySpec } from './quantities/registry.ts';
 import { H0_SLOT, sampleEnv, SLOT_NAMES, slotOf, Z } from './quantities/sample-env.ts';
 import { propagate, propagateOne } from './monte-carlo.ts';
 import { boundMass, deviateRange, truncatedDeviate, type Measurement, type MonteCarloOutcome } from './uncertainty.ts';
-import { localModulus } from './quantities/local-modulus.ts';
+import { localDistance, localModulus } from './quantities/local-modulus.ts';
 import { exactModulusAt } from './quantities/sample-photometry.ts';
 import type { Sampler } from './quantities/sample-env.ts';
 
@@ -117,19 +117,43 @@ export function quantityInterval(
     return propagateOne(all.z, last, () => propagate({ ...problem, f: (x) => x[Z], last }));
   }
   const varyH0 = varied.includes(H0_KEY);
-  const prepare =
-    spec.modulusInZ && !varyH0 && varied.includes('z')
-      ? () => {
-          const range = deviateRange(varied.length, varied.indexOf('z'));
-          const z = all.z;
-          const mass = boundMass(z);
-          const [min, max] =
-            mass > 0 ? [truncatedDeviate(range.min, mass), truncatedDeviate(range.max, mass)] : [range.min, range.max];
-          env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), z.value + min * z.minus, z.value + max * z.plus);
-        }
-      : undefined;
+  // The redshifts a run draws lie between z's smallest and largest deviate.
+  const zDrawn = (): { lo: number; hi: number } => {
+    const range = deviateRange(varied.length, varied.indexOf('z'));
+    const z = all.z;
+    const mass = boundMass(z);
+    const [min, max] = mass > 0 ? [truncatedDeviate(range.min, mass), truncatedDeviate(range.max, mass)] : [range.min, range.max];
+    return { lo: z.value + min * z.minus, hi: z.value + max * z.plus };
+  };
   const split = spec.split?.applies(present) ? spec.split : undefined;
   const draw = split ? split.before : spec.sample;
+  // A distance or time drawn over z and H0 alone: its part in z at the nominal H0, interpolated
+  // over the run's redshifts, divided by each draw's H0 scale (see inverseH0InZ).
+  let inZ: ((z: number) => number) | null = null;
+  const scaledInZ = spec.inverseH0InZ === true && varyH0 && varied.length === 2 && varied.includes('z');
+  const prepare = scaledInZ
+    ? () => {
+        const { lo, hi } = zDrawn();
+        env.h0Scale = 1;
+        inZ = localDistance(
+          (zz) => {
+            x[Z] = zz;
+            return draw(env, x);
+          },
+          lo,
+          hi,
+        );
+        x[Z] = all.z.value;
+      }
+    : spec.modulusInZ && varied.includes('z')
+      ? () => {
+          // Built at the nominal H0: a draw of H0 only divides d_L by its scale, so the draw
+          // subtracts 5 log10(scale) from it (sampleDistanceModulus).
+          env.h0Scale = 1;
+          const { lo, hi } = zDrawn();
+          env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), lo, hi);
+        }
+      : undefined;
   return propagate({
     ...problem,
     // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
@@ -140,6 +164,7 @@ export function quantityInterval(
       ? (x) => {
           const scale = x[H0_SLOT] / view.H0;
           if (!(scale > 0)) return NaN;
+          if (inZ !== null) return inZ(x[Z]) / scale;
           env.h0Scale = scale;
           return draw(env, x);
         }

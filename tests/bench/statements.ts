@@ -22,7 +22,8 @@ const PG = {
   database: 'starproof_bench',
   fast: true,
 };
-const OBJECTS = 20_000;
+// BENCH_STATEMENTS_OBJECTS shrinks the run (e.g. 2,000 objects, 10,000 statements, for a CPU profile).
+const OBJECTS = Number(process.env.BENCH_STATEMENTS_OBJECTS ?? 20_000);
 const TEMPLATES = ['luminosity-sun', 'brightness-at-10pc', 'light-travel', 'distance-today', 'scale-model'];
 const PEER_ROWS = 2_000;
 const RENDER_CALLS = 300;

@@ -23,16 +23,47 @@ export const LOCAL_MODULUS_TOLERANCE = 1e-10;
  * @returns the interpolant, or null
  */
 export function localModulus(exact: (z: number) => number, lo: number, hi: number): ((z: number) => number) | null {
+  return localInterpolant(exact, lo, hi, false);
+}
+
+/**
+ * The same for a distance or a time at the nominal H0 (a draw divides it by H0's scale), checked
+ * to 1e-10 of its own value rather than in magnitudes: a tenth of what results are compared to.
+ * @param exact the quantity as the draws compute it (NaN where undefined)
+ * @param lo smallest redshift drawn
+ * @param hi largest redshift drawn
+ * @returns the interpolant, or null
+ */
+export function localDistance(exact: (z: number) => number, lo: number, hi: number): ((z: number) => number) | null {
+  return localInterpolant(exact, lo, hi, true);
+}
+
+function localInterpolant(
+  exact: (z: number) => number,
+  lo: number,
+  hi: number,
+  relative: boolean,
+): ((z: number) => number) | null {
   if (!(hi > lo) || !(lo > 0)) return null;
   for (const nodes of NODE_COUNTS) {
-    const at = chebyshev(exact, lo, hi, nodes);
+    const at = chebyshev(exact, lo, hi, nodes, relative);
     if (at) return at;
   }
   return null;
 }
 
-/** The interpolant on `nodes` Chebyshev points, or null unless its series has converged and it matches μ between the nodes. */
-function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: number): ((z: number) => number) | null {
+/**
+ * The interpolant on `nodes` Chebyshev points, or null unless its series has converged and it
+ * matches the exact function between the nodes (to the tolerance, or to the tolerance times the
+ * smallest value met when `relative`).
+ */
+function chebyshev(
+  exact: (z: number) => number,
+  lo: number,
+  hi: number,
+  nodes: number,
+  relative: boolean,
+): ((z: number) => number) | null {
   const mid = 0.5 * (hi + lo);
   const half = 0.5 * (hi - lo);
   const f = new Float64Array(nodes);
@@ -40,6 +71,9 @@ function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: 
     f[k] = exact(mid + half * Math.cos((Math.PI * (k + 0.5)) / nodes));
     if (!Number.isFinite(f[k])) return null;
   }
+  let smallest = Infinity;
+  for (let k = 0; k < nodes; k++) smallest = Math.min(smallest, Math.abs(f[k]));
+  const tolerance = relative ? LOCAL_MODULUS_TOLERANCE * smallest : LOCAL_MODULUS_TOLERANCE;
   const c = new Float64Array(nodes);
   for (let j = 0; j < nodes; j++) {
     let s = 0;
@@ -48,7 +82,7 @@ function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: 
   }
   c[0] *= 0.5;
   // Converged: the last coefficients, which bound what the series leaves out, are negligible.
-  if (!(Math.abs(c[nodes - 1]) + Math.abs(c[nodes - 2]) <= LOCAL_MODULUS_TOLERANCE / 10)) return null;
+  if (!(Math.abs(c[nodes - 1]) + Math.abs(c[nodes - 2]) <= tolerance / 10)) return null;
   const scale = 1 / half;
   // Clenshaw's recurrence for Σ c_j T_j(t), t = (z − mid)/half.
   const at = (z: number): number => {
@@ -67,7 +101,7 @@ function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: 
   for (let k = 0; k <= nodes; k++) {
     const z = mid + half * Math.cos((Math.PI * k) / nodes);
     const e = exact(z);
-    if (!(Math.abs(at(z) - e) <= LOCAL_MODULUS_TOLERANCE)) return null;
+    if (!(Math.abs(at(z) - e) <= (relative ? LOCAL_MODULUS_TOLERANCE * Math.abs(e) : tolerance))) return null;
   }
   return at;
 }

@@ -80,6 +80,12 @@ export interface QuantitySpec {
   monotoneInZ?: 'increasing' | 'decreasing';
   /** Set when a draw computes the distance modulus μ(z): a run that varies z may interpolate it. */
   modulusInZ?: true;
+  /**
+   * Set when a draw is a function of z alone divided by H0's scale (every distance and time here:
+   * each is the Hubble distance or time times an integral over z): a run that varies z and H0 may
+   * interpolate the part in z.
+   */
+  inverseH0InZ?: true;
 }
 
 /** A draw split before a monotonic last step; `applies` says for which inputs it holds. */
@@ -105,6 +111,7 @@ function distance(
 ): QuantitySpec {
   return {
     monotoneInZ,
+    inverseH0InZ: true,
     unit: 'Mpc',
     required: ['z'],
     usesModel: always,
@@ -146,6 +153,7 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     compute: (ctx, v) => (isLaw(ctx) ? hubbleLawTimeSteps(ctx, z(v)) : lookbackSteps(ctx, z(v))),
     sample: (env, x) => (drawIsLaw(env) ? sampleLawTime(env, x[Z]) : sampleLookback(env, x[Z])),
     monotoneInZ: 'increasing',
+    inverseH0InZ: true,
   },
   age_at_z: {
     unit: 'Gyr',
@@ -155,6 +163,7 @@ export const QUANTITY_SPECS: Record<CalcQuantity, QuantitySpec> = {
     compute: (ctx, v) => ageSteps(ctx, z(v), false),
     sample: (env, x) => sampleAge(env, x[Z], false),
     monotoneInZ: 'decreasing',
+    inverseH0InZ: true,
   },
   age_now: {
     unit: 'Gyr',

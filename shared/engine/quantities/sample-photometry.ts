@@ -44,9 +44,14 @@ export function exactModulusAt(env: SampleEnv, z: number): number {
   return dL > 0 ? distanceModulus(dL) : NaN;
 }
 
-/** μ = 5 log10(d_L / 10 pc). */
+/**
+ * μ = 5 log10(d_L / 10 pc). From z through the run's interpolant when there is one: it is built at
+ * the nominal H0, and d_L scales as 1/H0 in every model (D_H = c/H0 multiplies every distance, and
+ * the curvature term reads D_C/D_H), so a drawn H0 moves μ by −5 log10(H0/H0 nominal); with H0
+ * not varied the scale is 1 and the term is exactly 0.
+ */
 export function sampleDistanceModulus(env: SampleEnv, x: Float64Array): number {
-  if (has(env, Z)) return env.modulusAt !== null ? env.modulusAt(x[Z]) : exactModulusAt(env, x[Z]);
+  if (has(env, Z)) return env.modulusAt !== null ? env.modulusAt(x[Z]) - 5 * Math.log10(env.h0Scale) : exactModulusAt(env, x[Z]);
   const dL = sampleLuminosityDistance(env, x);
   return dL > 0 ? distanceModulus(dL) : NaN;
 }
