@@ -83,6 +83,15 @@ export function readFromReplica<T>(work: () => Promise<T>): Promise<T> {
   return replicaScope.run({ wrote: false }, work);
 }
 
+/**
+ * Runs `work` on the primary even inside a public read on the replica (a nested public read asks
+ * the primary where its WAL stands: a replica cannot answer that).
+ * @param work the reading to do
+ */
+export function readFromPrimary<T>(work: () => Promise<T>): Promise<T> {
+  return replicaScope.exit(work);
+}
+
 /** Closes the pool (tests, shutdown). */
 export async function closeSequelize(): Promise<void> {
   if (instance) {

@@ -48,7 +48,8 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
  */
 export function signInWouldWaitTooLong(): boolean {
   const threads = Math.max(1, getPool().options.maxThreads);
-  return expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
+  // With a thread free the hash waits for nothing: a lone sign-in is never refused, however slow the machine.
+  return signInsInFlight >= threads && expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
 }
 
 /** The 429 `busy` answer, with Retry-After. */

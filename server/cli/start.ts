@@ -81,7 +81,8 @@ if (config.isProduction) {
 
 // A web server only queues jobs (a worker runs them); a worker serves nothing but its health.
 const app = servesRequests ? createApp({ serveClient: true }) : createWorkerApp();
-const queue = await startJobQueue(config.databaseUrl ?? '', { workers: runsJobs });
+// Under the start-up lock: servers starting together would create pg-boss's queues at once and deadlock.
+const queue = await underStartUpLock(() => startJobQueue(config.databaseUrl ?? '', { workers: runsJobs }));
 if (runsJobs) {
   await startSchedules(queue);
   if (await recomputeAfterRulesRelease())

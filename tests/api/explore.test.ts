@@ -3,6 +3,7 @@ import xml from 'fast-xml-parser';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
 import { workingSources } from '../../shared/statements/public-evidence.ts';
+import { measurementName } from '../../shared/statements/working-names.ts';
 import { appBaseUrl } from '../../server/config.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
 import { paragraph, text } from '../support/pages.ts';
@@ -78,8 +79,12 @@ describe('the public pages (/explore)', () => {
         .replace(/&amp;/g, '&')
         .replace(/&#39;/g, "'")
         .replace(/&quot;/g, '"');
-      // Every source the staff working names appears, its measurement id taken out.
-      for (const source of workingSources(working)) expect(body).toContain(source);
+      // Every source the staff working names appears, without the staff view's name of the
+      // measurement ("(Page quasar: redshift)"): visitors read what was measured in its own list.
+      const named = (staff.body.data.inputs as Array<{ quantity: string; band: string | null }>).map(
+        (input) => ` (${measurementName(staff.body.data.object.name, input)})`,
+      );
+      for (const source of workingSources(working)) expect(body).toContain(named.reduce((s, n) => s.replace(n, ''), source));
       for (const input of staff.body.data.inputs) expect(body).toContain(input.citation);
       expect(found[i]).not.toMatch(UUID);
       expect(found[i]).toContain('<dt>How it is worked out</dt>');

@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { config } from '../../config.ts';
-import { getSequelize, hasReadReplica, readFromReplica } from '../../db.ts';
+import { getSequelize, hasReadReplica, readFromPrimary, readFromReplica } from '../../db.ts';
 import { logger } from '../../logger.ts';
 
 /** After the replica failed to answer, public reads use the primary without asking it for this long (ms). */
@@ -28,7 +28,9 @@ async function oneLsn(sql: string): Promise<string | null> {
  */
 async function replicaCaughtUp(): Promise<boolean> {
   if (Date.now() < replicaRestsUntil) return false;
-  const primary = lsnValue((await oneLsn('SELECT pg_current_wal_lsn()::text AS lsn'))!);
+  // Asked of the primary even when this read is nested in another on the replica (the kiosk feed
+  // names each page's public address from the public pages, which read for themselves).
+  const primary = lsnValue((await readFromPrimary(() => oneLsn('SELECT pg_current_wal_lsn()::text AS lsn')))!);
   const deadline = Date.now() + config.replicaMaxLagMs;
   try {
     for (;;) {
