@@ -1,6 +1,6 @@
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it } from 'vitest';
-import { runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
+import { admitSignIn, runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { FREE_ATTEMPTS, purgeOldSignInAttempts } from '../../server/services/users/sign-in.ts';
@@ -130,9 +130,16 @@ describe('busy, not down (point 2)', () => {
 
   it('a sign-in the hashing threads cannot take in time is refused before its body is read or a session made', async () => {
     const saved = config.passwordHashMaxWaitMs;
-    // No wait allowed: every sign-in would wait for its own hash, so each is refused at the door.
+    // No wait allowed, and every hashing thread taken by a sign-in in flight: the next one would wait.
     setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
+    const inFlight: Array<() => void> = [];
     try {
+      for (;;) inFlight.push(admitSignIn());
+    } catch {
+      // admitted until every thread was taken
+    }
+    try {
+      expect(inFlight.length).toBeGreaterThan(0);
       const res = await supertest(await getTestApp())
         .post('/api/auth/sign-in')
         .set('Content-Type', 'application/json')
@@ -145,7 +152,27 @@ describe('busy, not down (point 2)', () => {
       expect(res.headers['set-cookie']).toBeUndefined();
       expect(res.headers['x-content-type-options']).toBe('nosniff');
     } finally {
+      for (const release of inFlight) release();
       setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved);
+    }
+  });
+
+  it('a lone sign-in is never refused as busy, however slow hashing has been: a thread is free', async () => {
+    // One hashing thread (as on a 2-core machine) and no wait allowed: still admitted.
+    const saved = { wait: config.passwordHashMaxWaitMs, threads: config.passwordHashThreads };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
+    try {
+      const user = await buildUser();
+      const res = await supertest(await getTestApp())
+        .post('/api/auth/sign-in')
+        .send({ email: user.email, password: TEST_PASSWORD });
+      expect(res.status, JSON.stringify(res.body)).toBe(200);
+    } finally {
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
     }
   });
 
