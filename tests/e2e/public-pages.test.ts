@@ -73,8 +73,10 @@ afterAll(async () => {
 describe('the public pages in a browser', () => {
   it('a visitor without JavaScript goes from the index to a page and opens "How we know"', async () => {
     const pages = await publishedPages();
-    const demo =
-      pages.find((p) => p.title.includes('3C 48') && p.statements.length > 0) ?? pages.find((p) => p.statements.length);
+    // Other browser tests change demo data: a statement whose data moved after sign-off shows no
+    // working until a reviewer looks again, so pick a page with a working to show.
+    const shows = (p: PublicPageDto) => p.statements.some((s) => s.howWeKnow);
+    const demo = pages.find((p) => p.title.includes('3C 48') && shows(p)) ?? pages.find(shows);
     expect(demo, 'a published demo page with a checked statement').toBeTruthy();
     const page = await visitor(1280);
     await page.goto(`${baseUrl}/explore`);
@@ -82,7 +84,7 @@ describe('the public pages in a browser', () => {
     await page.getByRole('link', { name: demo!.title }).click();
     await page.waitForURL(`**/explore/${demo!.slug}`);
     await expect.poll(() => page.getByRole('heading', { level: 1, name: demo!.title }).count()).toBe(1);
-    const details = page.locator('details.how').first();
+    const details = page.locator(`details#how-${demo!.statements.findIndex((st) => st.howWeKnow) + 1}`);
     expect(await details.getAttribute('open')).toBeNull();
     await details.locator('summary').click();
     expect(await details.getAttribute('open')).not.toBeNull();
@@ -120,6 +122,8 @@ describe('the public pages in a browser', () => {
       if (!published.statements.length) continue;
       await page.goto(`${baseUrl}/explore/${published.slug}`);
       for (const [i, statement] of published.statements.entries()) {
+        // Its data moved after sign-off (another test's change): the disclosure says it is being checked again.
+        if (!statement.howWeKnow) continue;
         const staff = await reviewer.call<{
           data: {
             object: { name: string };

@@ -20,7 +20,9 @@ export default async function setup(project: TestProject) {
   const { url, startedCluster } = await freshTestDatabase('starproof_e2e_test');
   // Its own uploads folder: the browser tests never touch the development images.
   const uploadsDir = process.env.UPLOADS_DIR ?? fs.mkdtempSync(path.join(os.tmpdir(), 'starproof-e2e-uploads-'));
-  const server = await startServerProcess({ DATABASE_URL: url, UPLOADS_DIR: uploadsDir });
+  // The browser tests sign in a few hundred times from one address within minutes; the per-address
+  // allowance (counted in the database, so it outlives server restarts) is tested in tests/api.
+  const server = await startServerProcess({ DATABASE_URL: url, UPLOADS_DIR: uploadsDir, STARPROOF_SIGNIN_LIMIT: '100000' });
   // A server that dies under a test (an outage, a bug) says why, instead of tests failing with "fetch failed".
   let stopping = false;
   server.child.once('exit', (code, signal) => {
