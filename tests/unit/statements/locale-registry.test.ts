@@ -16,17 +16,9 @@ import {
   type TemplateContext,
 } from '../../../shared/statements/index.ts';
 import { chooseVersion } from '../../../server/services/publishing/public-languages.ts';
+import { testMeasurement } from '../../support/statement-fixtures.ts';
 
-const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
-  id,
-  quantity,
-  value,
-  unit: '',
-  band: null,
-  source: src,
-  ...extra,
-});
+const m = testMeasurement;
 const context = (kind: string, measurements: StatementMeasurement[]): TemplateContext => ({
   object: { id: 'o', name: 'Test object', kind },
   measurements,

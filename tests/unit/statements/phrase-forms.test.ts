@@ -1,23 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import {
-  evaluateStatement,
-  findTemplate,
-  STATEMENT_LOCALES,
-  type StatementMeasurement,
-  type TemplateContext,
-} from '../../../shared/statements/index.ts';
+import { evaluateStatement, findTemplate, STATEMENT_LOCALES, type TemplateContext } from '../../../shared/statements/index.ts';
 import { workingForPeople } from '../../../shared/statements/working-names.ts';
+import { testMeasurement } from '../../support/statement-fixtures.ts';
 
-const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
-  id,
-  quantity,
-  value,
-  unit: '',
-  band: null,
-  source: src,
-  ...extra,
-});
+const m = testMeasurement;
 const quasar: TemplateContext = {
   object: { id: 'o', name: 'Q1', kind: 'quasar' },
   measurements: [m('3f1c2a9e-0b7d-4c52-9a3e-2f6d8b1c4e70', 'redshift', 0.158, { sigma: 0.0005 })],

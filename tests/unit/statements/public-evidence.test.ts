@@ -1,18 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { evaluateStatement, type StatementMeasurement, type TemplateContext } from '../../../shared/statements/index.ts';
 import { modelInWords, publicEvidence, publicSourceName, workingSources } from '../../../shared/statements/public-evidence.ts';
+import { testMeasurement } from '../../support/statement-fixtures.ts';
 
-// Values for automated checks only (invented for the test, not measurements of a real object).
-const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
-  id,
-  quantity,
-  value,
-  unit: '',
-  band: null,
-  source: src,
-  ...extra,
-});
+const m = testMeasurement;
 const ctx = (kind: string, measurements: StatementMeasurement[]): TemplateContext => ({
   object: { id: 'o', name: 'Test object', kind },
   measurements,

@@ -7,17 +7,9 @@ import {
   type StatementMeasurement,
   type TemplateContext,
 } from '../../../shared/statements/index.ts';
+import { testMeasurement } from '../../support/statement-fixtures.ts';
 
-const src = { id: 'src-1', citation: 'Values for automated checks' };
-const m = (id: string, quantity: string, value: number, extra: Partial<StatementMeasurement> = {}): StatementMeasurement => ({
-  id,
-  quantity,
-  value,
-  unit: '',
-  band: null,
-  source: src,
-  ...extra,
-});
+const m = testMeasurement;
 const ctx = (
   name: string,
   measurements: StatementMeasurement[],
