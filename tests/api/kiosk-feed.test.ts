@@ -5,7 +5,15 @@ import { KioskScreen, Page } from '../../server/models/index.ts';
 import { publicPageUrl } from '../../server/services/publishing/index.ts';
 import { kioskFeedStats } from '../../server/services/publishing/feed-cache.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
-import { buildKioskMedia, getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
+import {
+  buildKioskMedia,
+  channelWithScreen as channelWithScreenAt,
+  getFeed,
+  makeVenue,
+  pairedScreen,
+  publishedPage,
+  publishingCrew,
+} from '../support/publishing.ts';
 
 type Crew = Awaited<ReturnType<typeof publishingCrew>>;
 let crew: Crew;
@@ -18,16 +26,8 @@ beforeAll(async () => {
   venue = await makeVenue(crew.admin.agent, 'Feed Test Dome');
 });
 
-async function channelWithScreen(name: string, screenName: string) {
-  const channel = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name });
-  expect(channel.status, JSON.stringify(channel.body)).toBe(201);
-  const screen = await pairedScreen(crew.admin.agent, venue.id, screenName);
-  const assigned = await crew.editor.agent
-    .put(`/api/channels/${channel.body.data.id}/screens`)
-    .send({ screenIds: [screen.screenId] });
-  expect(assigned.status).toBe(200);
-  return { channelId: channel.body.data.id as string, ...screen };
-}
+/** A channel at this file's venue with one paired screen. */
+const channelWithScreen = (name: string, screenName: string) => channelWithScreenAt(crew, venue.id, name, screenName);
 
 const addSlide = async (channelId: string, body: Record<string, unknown>) => {
   const res = await crew.editor.agent.post(`/api/channels/${channelId}/slides`).send(body);

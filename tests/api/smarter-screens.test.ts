@@ -4,7 +4,14 @@ import { appBaseUrl } from '../../server/config.ts';
 import { KioskScreen, OutboxMessage } from '../../server/models/index.ts';
 import { reportSilentScreens } from '../../server/services/publishing/index.ts';
 import { getTestApp, resetDatabase } from '../support/app.ts';
-import { getFeed, makeVenue, pairedScreen, publishedPage, publishingCrew } from '../support/publishing.ts';
+import {
+  channelWithScreen as channelWithScreenAt,
+  getFeed,
+  makeVenue,
+  pairedScreen,
+  publishedPage,
+  publishingCrew,
+} from '../support/publishing.ts';
 
 type Crew = Awaited<ReturnType<typeof publishingCrew>>;
 let crew: Crew;
@@ -17,16 +24,8 @@ beforeAll(async () => {
   venue = await makeVenue(crew.admin.agent, 'Smarter Screens Dome');
 });
 
-async function channelWithScreen(name: string, screenName: string) {
-  const channel = await crew.editor.agent.post('/api/channels').send({ venueId: venue.id, name });
-  expect(channel.status, JSON.stringify(channel.body)).toBe(201);
-  const screen = await pairedScreen(crew.admin.agent, venue.id, screenName);
-  const assigned = await crew.editor.agent
-    .put(`/api/channels/${channel.body.data.id}/screens`)
-    .send({ screenIds: [screen.screenId] });
-  expect(assigned.status).toBe(200);
-  return { channelId: channel.body.data.id as string, ...screen };
-}
+/** A channel at this file's venue with one paired screen. */
+const channelWithScreen = (name: string, screenName: string) => channelWithScreenAt(crew, venue.id, name, screenName);
 
 const heartbeat = async (token: string, body: object) =>
   supertest(await getTestApp())

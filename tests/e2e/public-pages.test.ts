@@ -59,7 +59,9 @@ async function shot(page: Page, name: string): Promise<void> {
  * so the layout check never depends on what other tests happened to publish first.
  */
 async function publishLongWordPage(): Promise<void> {
-  const [writer, reviewer, editor] = await Promise.all(['writer', 'reviewer', 'editor'].map((r) => demoSession(baseUrl, r)));
+  const [writer, reviewer, editor] = await Promise.all(
+    (['writer', 'reviewer', 'editor'] as const).map((r) => demoSession(baseUrl, r)),
+  );
   type Data<T> = { data: T };
   const word = 'CorrieValeDeepFieldSurveyObjectSeventeenThousandTwelveNorthEastQuadrant';
   const title = `Catalogued as ${word}`;

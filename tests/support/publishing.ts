@@ -133,6 +133,23 @@ export async function pairedScreen(admin: Agent, venueId: string, name: string) 
   return { screenId: added.body.data.screen.id as string, token: paired.body.data.token as string };
 }
 
+/** A channel made by the editor at a venue, with one newly paired screen assigned to it. */
+export async function channelWithScreen(
+  crew: { editor: Signed; admin: Signed },
+  venueId: string,
+  name: string,
+  screenName: string,
+) {
+  const channel = await crew.editor.agent.post('/api/channels').send({ venueId, name });
+  if (channel.status !== 201) throw new Error(`channel: ${JSON.stringify(channel.body)}`);
+  const screen = await pairedScreen(crew.admin.agent, venueId, screenName);
+  const assigned = await crew.editor.agent
+    .put(`/api/channels/${channel.body.data.id}/screens`)
+    .send({ screenIds: [screen.screenId] });
+  if (assigned.status !== 200) throw new Error(`assign: ${JSON.stringify(assigned.body)}`);
+  return { channelId: channel.body.data.id as string, ...screen };
+}
+
 /** GET /api/kiosk/feed with a screen's token (and an If-None-Match when given). */
 export async function getFeed(token: string, etag?: string) {
   let req = supertest(await getTestApp())
