@@ -14,17 +14,17 @@ beforeAll(async () => {
 describe('sources', () => {
   it('a reviewer adds a source; identifiers are checked and normalised; duplicates are refused', async () => {
     const { agent } = await signedInAgent('reviewer');
-    // Willmer (2018), ApJS 236, 47: bibcode and DOI as published.
+    // An invented source (demo) with a well-formed bibcode, and a DOI under 10.5555, the prefix set aside for examples.
     const res = await agent.post('/api/catalogue/sources').send({
-      citation: 'Willmer, C. N. A. (2018), ApJS 236, 47',
-      bibcode: '2018ApJS..236...47W',
-      doi: 'https://doi.org/10.3847/1538-4365/aabfdf',
+      citation: 'Corrie Vale Survey Team (2025), Vale Observatory Notes 12, 3 (demo)',
+      bibcode: '2025CVON...12....3C',
+      doi: 'https://doi.org/10.5555/corrie-vale.2025.12',
       retrievedOn: '2026-11-30',
     });
     expect(res.status).toBe(201);
     expect(res.body.data).toMatchObject({
-      doi: '10.3847/1538-4365/aabfdf',
-      bibcode: '2018ApJS..236...47W',
+      doi: '10.5555/corrie-vale.2025.12',
+      bibcode: '2025CVON...12....3C',
       retrievedOn: '2026-11-30',
       measurementCount: 0,
     });
@@ -41,7 +41,7 @@ describe('sources', () => {
     });
     const again = await agent
       .post('/api/catalogue/sources')
-      .send({ citation: 'Another name for the same paper', doi: '10.3847/1538-4365/AABFDF' });
+      .send({ citation: 'Another name for the same paper', doi: '10.5555/CORRIE-VALE.2025.12' });
     expect(again.status).toBe(409);
     expect(again.body.error.message).toMatch(/this DOI already exists/);
   });

@@ -74,21 +74,21 @@ export function SourceForm({
       <TextField
         label="Citation"
         className="sm:col-span-2"
-        placeholder="Willmer, C. N. A. (2018), ApJS 236, 47"
+        placeholder="Authors (year), journal volume, page"
         autoComplete="off"
         error={errors.citation?.message}
         {...register('citation')}
       />
       <TextField
         label="Bibcode"
-        placeholder="2018ApJS..236...47W"
+        placeholder="19 characters, as the ADS lists it"
         autoComplete="off"
         error={errors.bibcode?.message}
         {...register('bibcode')}
       />
       <TextField
         label="DOI"
-        placeholder="10.3847/1538-4365/aabfdf"
+        placeholder="10.…/…"
         autoComplete="off"
         error={errors.doi?.message}
         {...register('doi')}
