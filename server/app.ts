@@ -11,7 +11,7 @@ import { guardJsonBody } from './middlewares/json-guard.ts';
 import { fixedHeaders } from './middlewares/fixed-headers.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
-import { refuseBusySignIn } from './middlewares/sign-in-admission.ts';
+import { admitSignInRequest } from './middlewares/sign-in-admission.ts';
 import { initModels } from './models/index.ts';
 import { healthRouter } from './routes/health.ts';
 import { apiRouter } from './routes/index.ts';
@@ -51,9 +51,10 @@ export function createApp(options: AppOptions = {}) {
   // user loading, none of which it needs (its own errors still reach the error handler and the log),
   // with the security headers recorded once rather than rebuilt per request.
   app.get('/api/kiosk/feed', fixedHeaders(security), ...kioskFeed);
-  // A burst of sign-ins beyond what the hashing threads can take in time is refused here, before any
-  // of the work below (the refusals are not in the request log; the admitted ones are).
-  app.post('/api/auth/sign-in', fixedHeaders(security), refuseBusySignIn);
+  // A sign-in takes its place in the hashing queue here, and a burst beyond what the hashing threads
+  // can take in time is refused here, before any of the work below (the refusals are not in the
+  // request log; the admitted ones are).
+  app.post('/api/auth/sign-in', fixedHeaders(security), admitSignInRequest);
   app.use(security);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 

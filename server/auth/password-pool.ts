@@ -41,24 +41,18 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
   return (Math.max(0, jobsAhead - threads + 1) * typicalJobMs) / threads;
 }
 
-/**
- * True when a sign-in arriving now would be refused by admitSignIn: lets the app answer it 429
- * before parsing its body, loading a session or writing a log line, so a burst of refusals costs
- * the event loop almost nothing (`refuseBusySignIn`, mounted first in app.ts).
- */
+/** True when a sign-in arriving now would be refused by admitSignIn (its hash would wait too long). */
 export function signInWouldWaitTooLong(): boolean {
   const threads = Math.max(1, getPool().options.maxThreads);
   // With a thread free the hash waits for nothing: a lone sign-in is never refused, however slow the machine.
   return signInsInFlight >= threads && expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
 }
 
-/** The 429 `busy` answer, with Retry-After. */
-export const busyError = (): HttpError => busy();
-
 /**
- * Admits one sign-in before it does any database work, or refuses it at once (429 `busy`) when its
+ * Admits one sign-in before it does any other work, or refuses it at once (429 `busy`) when its
  * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
- * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time.
+ * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time. Taken at the
+ * door of the app (`admitSignInRequest`, mounted first in app.ts), before the body is read.
  * @returns release, to call once the sign-in has its answer
  * @throws HttpError 429 `busy`
  */

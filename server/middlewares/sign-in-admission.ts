@@ -1,16 +1,26 @@
 import type { RequestHandler } from 'express';
-import { busyError, signInWouldWaitTooLong } from '../auth/password-pool.ts';
+import { admitSignIn } from '../auth/password-pool.ts';
 
 /**
- * POST /api/auth/sign-in, ahead of the request log, body parser and sessions: when the hashing
- * threads are already booked for longer than a sign-in may wait, answers 429 `busy` (Retry-After)
- * at once. 200 sign-ins arriving together otherwise each went through JSON parsing, the session
- * store, validation and the log before being refused, back to back in one turn of the event loop.
- * Admitted sign-ins go on to the route, which takes the slot (admitSignIn) and may still refuse.
+ * POST /api/auth/sign-in, ahead of the request log, body parser and sessions: takes the sign-in's
+ * place in the hashing queue at the door, or answers 429 `busy` (Retry-After) at once when the
+ * hashing threads are already booked for longer than a sign-in may wait. The place is held until
+ * the answer is sent (or the connection drops), whatever the answer.
+ *
+ * The place must be taken here, not in the route: the body parser, the session store and the
+ * per-address limiter all wait on I/O, so 200 sign-ins arriving together would otherwise all find
+ * the queue empty at the door, each go through all of that, and only then be refused, back to back
+ * on the one thread that answers requests.
  */
-export const refuseBusySignIn: RequestHandler = (_req, res, next) => {
-  if (!signInWouldWaitTooLong()) return next();
-  // As every sign-in answer (app.ts): never stored.
-  res.setHeader('Cache-Control', 'no-store');
-  next(busyError());
+export const admitSignInRequest: RequestHandler = (_req, res, next) => {
+  let release: () => void;
+  try {
+    release = admitSignIn();
+  } catch (err) {
+    // As every sign-in answer (app.ts): never stored.
+    res.setHeader('Cache-Control', 'no-store');
+    return next(err);
+  }
+  res.once('close', release);
+  next();
 };

@@ -1,6 +1,14 @@
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import supertest from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
-import { admitSignIn, runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
+import {
+  admitSignIn,
+  runHashJob,
+  closePasswordPool,
+  hashJobsCompleted,
+  signInWouldWaitTooLong,
+} from '../../server/auth/password-pool.ts';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { FREE_ATTEMPTS, purgeOldSignInAttempts } from '../../server/services/users/sign-in.ts';
@@ -154,6 +162,61 @@ describe('busy, not down (point 2)', () => {
     } finally {
       for (const release of inFlight) release();
       setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved);
+    }
+  });
+
+  it('a sign-in takes its place at the door: one still sending its body holds it, and the next is refused unread', async () => {
+    // One hashing thread and no wait allowed: one sign-in in flight fills the queue.
+    const saved = { wait: config.passwordHashMaxWaitMs, threads: config.passwordHashThreads };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
+    const server = http.createServer(await getTestApp()).listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    const { port } = server.address() as AddressInfo;
+    const post = (length: number) =>
+      http.request({
+        host: '127.0.0.1',
+        port,
+        method: 'POST',
+        path: '/api/auth/sign-in',
+        headers: { 'Content-Type': 'application/json', 'Content-Length': length },
+      });
+    const answer = (req: http.ClientRequest) =>
+      new Promise<{ status: number; code: string }>((resolve, reject) => {
+        req.once('error', reject);
+        req.once('response', (res) => {
+          let text = '';
+          res.on('data', (chunk) => (text += chunk));
+          res.on('end', () => resolve({ status: res.statusCode ?? 0, code: JSON.parse(text).error?.code ?? '' }));
+        });
+      });
+    try {
+      // The first sign-in sends half its body and waits: it is in the body parser, not yet at the route.
+      const slow = post(40);
+      const slowAnswer = answer(slow);
+      slow.write('{"email": ');
+      slow.flushHeaders();
+      await vi.waitFor(() => expect(signInWouldWaitTooLong()).toBe(true), { timeout: 5_000 });
+      // Malformed JSON would be a 400 had the body parser read it.
+      const malformed = '{"email": not json';
+      const next = post(malformed.length);
+      const nextAnswer = answer(next);
+      next.end(malformed);
+      expect(await nextAnswer).toEqual({ status: 429, code: 'busy' });
+      slow.end('not json at all, this'.padEnd(30, '.'));
+      expect((await slowAnswer).status).toBe(400);
+      // Its answer sent, the place is free again: the next malformed body is read (400).
+      await vi.waitFor(() => expect(signInWouldWaitTooLong()).toBe(false), { timeout: 5_000 });
+      const after = post(malformed.length);
+      const afterAnswer = answer(after);
+      after.end(malformed);
+      expect(await afterAnswer).toEqual({ status: 400, code: 'malformed_json' });
+    } finally {
+      server.close();
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
     }
   });
 
