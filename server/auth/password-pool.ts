@@ -26,8 +26,12 @@ function getPool(): Piscina {
 /** Seconds a refused caller is told to wait. */
 export const BUSY_RETRY_SECONDS = 5;
 
-/** Recent time one hash job takes (ms), smoothed; starts pessimistic for cost 11 on a slow machine. */
+/**
+ * Recent time one hash job takes (ms), smoothed; until a job was timed, a pessimistic guess for
+ * cost 11 on a slow machine (the server times one before it listens: warmPasswordHashing).
+ */
 let typicalJobMs = 500;
+let timed = false;
 
 const busy = () =>
   new HttpError(429, 'busy', 'Too many people are signing in at this moment. Try again in a few seconds.', undefined, {
@@ -41,23 +45,26 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
   return (Math.max(0, jobsAhead - threads + 1) * typicalJobMs) / threads;
 }
 
-/** True when a sign-in arriving now would be refused by admitSignIn (its hash would wait too long). */
+/** True when a sign-in arriving now would be refused by tryAdmitSignIn (its hash would wait too long). */
 export function signInWouldWaitTooLong(): boolean {
   const threads = Math.max(1, getPool().options.maxThreads);
   // With a thread free the hash waits for nothing: a lone sign-in is never refused, however slow the machine.
   return signInsInFlight >= threads && expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
 }
 
+/** The answer to a sign-in refused because hashing is booked up (429 `busy`, Retry-After). */
+export const signInBusyError = busy();
+
 /**
- * Admits one sign-in before it does any other work, or refuses it at once (429 `busy`) when its
- * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
- * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time. Taken at the
- * door of the app (`admitSignInRequest`, mounted first in app.ts), before the body is read.
- * @returns release, to call once the sign-in has its answer
- * @throws HttpError 429 `busy`
+ * Admits one sign-in before it does any other work, or refuses it (undefined) when its hash would
+ * wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so excess sign-ins
+ * cost almost nothing and the admitted ones finish in a bounded time. Taken at the door of the app
+ * (`admitSignInRequest`, mounted first in app.ts), before the body is read. Refusing throws
+ * nothing: an Error's stack trace is a good part of the cost of a refusal.
+ * @returns release, to call once the sign-in has its answer; undefined when refused
  */
-export function admitSignIn(): () => void {
-  if (signInWouldWaitTooLong()) throw busy();
+export function tryAdmitSignIn(): (() => void) | undefined {
+  if (signInWouldWaitTooLong()) return undefined;
   signInsInFlight += 1;
   let released = false;
   return () => {
@@ -80,7 +87,8 @@ export async function runHashJob<R>(
   if (p.queueSize > 0 && expectedWaitMs(p.queueSize + threads, threads) > config.passwordHashMaxWaitMs) throw busy();
   try {
     const { result, ms } = (await p.run(task)) as { result: R; ms: number };
-    typicalJobMs = 0.8 * typicalJobMs + 0.2 * ms;
+    typicalJobMs = timed ? 0.8 * typicalJobMs + 0.2 * ms : ms;
+    timed = true;
     return result;
   } catch (err) {
     if (err instanceof Error && /queue is at limit|No task queue available/i.test(err.message)) throw busy();
@@ -97,5 +105,7 @@ export function hashJobsCompleted(): number {
 export async function closePasswordPool(): Promise<void> {
   const p = pool;
   pool = undefined;
+  timed = false;
+  typicalJobMs = 500;
   await p?.destroy();
 }

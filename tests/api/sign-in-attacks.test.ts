@@ -3,11 +3,11 @@ import type { AddressInfo } from 'node:net';
 import supertest from 'supertest';
 import { beforeAll, describe, expect, it, vi } from 'vitest';
 import {
-  admitSignIn,
   runHashJob,
   closePasswordPool,
   hashJobsCompleted,
   signInWouldWaitTooLong,
+  tryAdmitSignIn,
 } from '../../server/auth/password-pool.ts';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
@@ -141,11 +141,8 @@ describe('busy, not down (point 2)', () => {
     // No wait allowed, and every hashing thread taken by a sign-in in flight: the next one would wait.
     setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
     const inFlight: Array<() => void> = [];
-    try {
-      for (;;) inFlight.push(admitSignIn());
-    } catch {
-      // admitted until every thread was taken
-    }
+    // Admitted until every thread is taken.
+    for (let release = tryAdmitSignIn(); release; release = tryAdmitSignIn()) inFlight.push(release);
     try {
       expect(inFlight.length).toBeGreaterThan(0);
       const res = await supertest(await getTestApp())
