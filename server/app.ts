@@ -15,7 +15,7 @@ import { admitSignInRequest } from './middlewares/sign-in-admission.ts';
 import { initModels } from './models/index.ts';
 import { healthRouter } from './routes/health.ts';
 import { apiRouter } from './routes/index.ts';
-import { kioskFeed } from './routes/kiosk-feed.ts';
+import { kioskFeed, kioskFeedNotModified } from './routes/kiosk-feed.ts';
 import { exploreRouter } from './routes/explore.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
@@ -49,8 +49,9 @@ export function createApp(options: AppOptions = {}) {
   const security = securityHeaders(https);
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
   // user loading, none of which it needs (its own errors still reach the error handler and the log),
-  // with the security headers recorded once rather than rebuilt per request.
-  app.get('/api/kiosk/feed', fixedHeaders(security), ...kioskFeed);
+  // with the security headers recorded once rather than rebuilt per request. A revalidation it can
+  // answer from memory is a 304 before even those (a 304 carries none: the 200 it stands for did).
+  app.get('/api/kiosk/feed', kioskFeedNotModified, fixedHeaders(security), ...kioskFeed);
   // A sign-in takes its place in the hashing queue here, and a burst beyond what the hashing threads
   // can take in time is refused here, before any of the work below (the refusals are not in the
   // request log; the admitted ones are).
