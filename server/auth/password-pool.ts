@@ -55,21 +55,65 @@ export function signInWouldWaitTooLong(): boolean {
 /** The answer to a sign-in refused because hashing is booked up (429 `busy`, Retry-After). */
 export const signInBusyError = busy();
 
+/** An admitted sign-in's place: its turn to run, and giving the place back. */
+export interface SignInTicket {
+  /**
+   * Calls `go` when it is this sign-in's turn to run: at once while fewer sign-ins are running than
+   * there are hashing threads, plus one to have its database work done when a thread comes free.
+   * The others wait in arrival order, holding nothing but their unread request.
+   */
+  whenItsTurn(go: () => void): void;
+  /** Gives the place back: once the sign-in has its answer, or its connection dropped. */
+  release(): void;
+}
+
+/** Admitted sign-ins running now, and those waiting for their turn (first come, first served). */
+let signInsRunning = 0;
+const waitingTurns: Array<() => void> = [];
+
+function startWaitingSignIns(): void {
+  const threads = Math.max(1, getPool().options.maxThreads);
+  while (signInsRunning < threads + 1 && waitingTurns.length > 0) waitingTurns.shift()!();
+}
+
 /**
  * Admits one sign-in before it does any other work, or refuses it (undefined) when its hash would
  * wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so excess sign-ins
  * cost almost nothing and the admitted ones finish in a bounded time. Taken at the door of the app
  * (`admitSignInRequest`, mounted first in app.ts), before the body is read. Refusing throws
  * nothing: an Error's stack trace is a good part of the cost of a refusal.
- * @returns release, to call once the sign-in has its answer; undefined when refused
+ *
+ * Admitted sign-ins then run a few at a time (`whenItsTurn`): a burst's admitted sign-ins would
+ * otherwise all parse their bodies, load sessions, open database connections and query at once,
+ * in the same turns of the event loop as the burst's refusals, only to queue for the hashing
+ * threads; taking turns spreads that work over the time the hashing takes anyway.
+ * @returns the sign-in's ticket; undefined when refused
  */
-export function tryAdmitSignIn(): (() => void) | undefined {
+export function tryAdmitSignIn(): SignInTicket | undefined {
   if (signInWouldWaitTooLong()) return undefined;
   signInsInFlight += 1;
   let released = false;
-  return () => {
-    if (!released) signInsInFlight -= 1;
-    released = true;
+  let running = false;
+  let turn: (() => void) | undefined;
+  return {
+    whenItsTurn(go) {
+      turn = () => {
+        running = true;
+        signInsRunning += 1;
+        go();
+      };
+      waitingTurns.push(turn);
+      startWaitingSignIns();
+    },
+    release() {
+      if (released) return;
+      released = true;
+      signInsInFlight -= 1;
+      if (running) {
+        signInsRunning -= 1;
+        startWaitingSignIns();
+      } else if (turn) waitingTurns.splice(waitingTurns.indexOf(turn), 1);
+    },
   };
 }
 

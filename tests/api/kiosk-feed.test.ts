@@ -260,6 +260,14 @@ describe('the kiosk feed', () => {
     expect(again.headers.etag).toBe(full.headers.etag);
     expect(again.headers['cache-control']).toBe('private, no-cache');
     expect(again.headers.vary).toBe('Authorization');
+    // Answered ahead of Express for the exact path; the app answers any other form of it the same way.
+    const withQuery = await supertest(await getTestApp())
+      .get('/api/kiosk/feed?from=test')
+      .set('Authorization', `Bearer ${token}`)
+      .set('If-None-Match', full.headers.etag as string);
+    expect(withQuery.status).toBe(304);
+    expect(security(withQuery.headers)).toEqual({});
+    expect(withQuery.headers.etag).toBe(full.headers.etag);
     expect(refused.headers['www-authenticate']).toBe('Bearer realm="kiosk", error="invalid_token"');
   });
 

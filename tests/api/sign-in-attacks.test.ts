@@ -6,6 +6,7 @@ import {
   runHashJob,
   closePasswordPool,
   hashJobsCompleted,
+  type SignInTicket,
   signInWouldWaitTooLong,
   tryAdmitSignIn,
 } from '../../server/auth/password-pool.ts';
@@ -140,9 +141,9 @@ describe('busy, not down (point 2)', () => {
     const saved = config.passwordHashMaxWaitMs;
     // No wait allowed, and every hashing thread taken by a sign-in in flight: the next one would wait.
     setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
-    const inFlight: Array<() => void> = [];
+    const inFlight: SignInTicket[] = [];
     // Admitted until every thread is taken.
-    for (let release = tryAdmitSignIn(); release; release = tryAdmitSignIn()) inFlight.push(release);
+    for (let ticket = tryAdmitSignIn(); ticket; ticket = tryAdmitSignIn()) inFlight.push(ticket);
     try {
       expect(inFlight.length).toBeGreaterThan(0);
       const res = await supertest(await getTestApp())
@@ -156,8 +157,16 @@ describe('busy, not down (point 2)', () => {
       expect(res.headers['cache-control']).toBe('no-store');
       expect(res.headers['set-cookie']).toBeUndefined();
       expect(res.headers['x-content-type-options']).toBe('nosniff');
+      // The exact path is refused ahead of Express; another form of it by the app's own door, alike.
+      const other = await supertest(await getTestApp())
+        .post('/api/auth/sign-in?next=/pages')
+        .set('Content-Type', 'application/json')
+        .send('{"email": not json');
+      expect([other.status, other.body.error.code, other.headers['retry-after']]).toEqual([429, 'busy', '5']);
+      expect(other.headers['cache-control']).toBe('no-store');
+      expect(other.headers['x-content-type-options']).toBe('nosniff');
     } finally {
-      for (const release of inFlight) release();
+      for (const ticket of inFlight) ticket.release();
       setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved);
     }
   });

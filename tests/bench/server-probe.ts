@@ -38,7 +38,18 @@ new PerformanceObserver((list) => {
     pauses.push([start, start + Math.round(entry.duration * 1000)]);
   }
 }).observe({ entryTypes: ['gc'] });
+/** CPU time (ms) of the main thread alone, from Linux's per-thread accounting (0 elsewhere). */
+function mainThreadCpuMs(): number {
+  try {
+    const fields = fs.readFileSync(`/proc/self/task/${process.pid}/stat`, 'utf8').split(') ')[1].split(' ');
+    // utime and stime, in clock ticks (100 a second on Linux).
+    return (Number(fields[11]) + Number(fields[12])) * 10;
+  } catch {
+    return 0;
+  }
+}
 let cpuAtReset = process.cpuUsage();
+let mainCpuAtReset = mainThreadCpuMs();
 let eluAtReset = performance.eventLoopUtilization();
 
 const stallMs = Number(process.env.BENCH_STALL_MS ?? 0);
@@ -48,7 +59,7 @@ let gaps: Array<[number, number]> = [];
 if (session) {
   session.connect();
   await session.post('Profiler.enable');
-  await session.post('Profiler.setSamplingInterval', { interval: 250 });
+  await session.post('Profiler.setSamplingInterval', { interval: Number(process.env.BENCH_STALL_SAMPLE_US ?? 250) });
   const now = () => Number(process.hrtime.bigint() / 1000n);
   let last = now();
   setInterval(() => {
@@ -112,6 +123,7 @@ process.on('message', async (message) => {
     pauses = [];
     gaps = [];
     cpuAtReset = process.cpuUsage();
+    mainCpuAtReset = mainThreadCpuMs();
     eluAtReset = performance.eventLoopUtilization();
     await session?.post('Profiler.start');
     process.send?.('ok');
@@ -121,6 +133,7 @@ process.on('message', async (message) => {
       loop: { p50: ms(delay.percentile(50)), p99: ms(delay.percentile(99)), max: ms(delay.max) },
       gc: { count: gc.count, totalMs: Math.round(gc.totalMs), maxMs: Math.round(gc.maxMs * 10) / 10 },
       cpuMs: (used.user + used.system) / 1000,
+      mainCpuMs: mainThreadCpuMs() - mainCpuAtReset,
       // Time the event loop spent running code (not waiting for I/O), this thread only.
       busyMs: Math.round(performance.eventLoopUtilization(eluAtReset).active),
       stalls: undefined as Stall[] | undefined,

@@ -56,6 +56,7 @@ interface ServerReport {
   gc: { count: number; totalMs: number; maxMs: number };
   cpuMs: number;
   busyMs: number;
+  mainCpuMs: number;
   stalls?: Array<{ startMs: number; ms: number; gcMs: number; top: string[] }>;
 }
 const log = fs.openSync(path.join(work, 'server.log'), 'w');
@@ -205,7 +206,7 @@ console.log(
 );
 console.log(
   `  server GC during the burst: ${loaded.gc.totalMs} ms in ${loaded.gc.count} pauses (longest ${loaded.gc.maxMs} ms); ` +
-    `server CPU ${Math.round(loaded.cpuMs)} ms (all threads), its event loop busy ${loaded.busyMs} ms`,
+    `server CPU ${Math.round(loaded.cpuMs)} ms (all threads), its event loop busy ${loaded.busyMs} ms (CPU of that thread ${loaded.mainCpuMs} ms)`,
 );
 const by = (status: number) => times.filter((_, i) => statusOf[i] === status);
 for (const status of [200, 429])
