@@ -38,18 +38,21 @@ new PerformanceObserver((list) => {
     pauses.push([start, start + Math.round(entry.duration * 1000)]);
   }
 }).observe({ entryTypes: ['gc'] });
-/** CPU time (ms) of the main thread alone, from Linux's per-thread accounting (0 elsewhere). */
-function mainThreadCpuMs(): number {
+/**
+ * The main thread's CPU time and its time spent ready to run but waiting for a core (ms), from
+ * Linux's scheduler statistics for that thread alone (zeros elsewhere): on a machine shared with
+ * other work, the second says how much of a stall was the thread not being run at all.
+ */
+function mainThreadSched(): { cpuMs: number; waitMs: number } {
   try {
-    const fields = fs.readFileSync(`/proc/self/task/${process.pid}/stat`, 'utf8').split(') ')[1].split(' ');
-    // utime and stime, in clock ticks (100 a second on Linux).
-    return (Number(fields[11]) + Number(fields[12])) * 10;
+    const [cpu, wait] = fs.readFileSync(`/proc/self/task/${process.pid}/schedstat`, 'utf8').split(' ').map(Number);
+    return { cpuMs: cpu / 1e6, waitMs: wait / 1e6 };
   } catch {
-    return 0;
+    return { cpuMs: 0, waitMs: 0 };
   }
 }
 let cpuAtReset = process.cpuUsage();
-let mainCpuAtReset = mainThreadCpuMs();
+let schedAtReset = mainThreadSched();
 let eluAtReset = performance.eventLoopUtilization();
 
 const stallMs = Number(process.env.BENCH_STALL_MS ?? 0);
@@ -123,7 +126,7 @@ process.on('message', async (message) => {
     pauses = [];
     gaps = [];
     cpuAtReset = process.cpuUsage();
-    mainCpuAtReset = mainThreadCpuMs();
+    schedAtReset = mainThreadSched();
     eluAtReset = performance.eventLoopUtilization();
     await session?.post('Profiler.start');
     process.send?.('ok');
@@ -133,7 +136,8 @@ process.on('message', async (message) => {
       loop: { p50: ms(delay.percentile(50)), p99: ms(delay.percentile(99)), max: ms(delay.max) },
       gc: { count: gc.count, totalMs: Math.round(gc.totalMs), maxMs: Math.round(gc.maxMs * 10) / 10 },
       cpuMs: (used.user + used.system) / 1000,
-      mainCpuMs: mainThreadCpuMs() - mainCpuAtReset,
+      mainCpuMs: Math.round(mainThreadSched().cpuMs - schedAtReset.cpuMs),
+      mainWaitMs: Math.round(mainThreadSched().waitMs - schedAtReset.waitMs),
       // Time the event loop spent running code (not waiting for I/O), this thread only.
       busyMs: Math.round(performance.eventLoopUtilization(eluAtReset).active),
       stalls: undefined as Stall[] | undefined,
