@@ -60,7 +60,8 @@ export function createApp(options: AppOptions = {}) {
   // can take in time is refused here, before any of the work below (the refusals are not in the
   // request log; the admitted ones are).
   app.post('/api/auth/sign-in', fixedSecurity, admitSignInRequest);
-  app.use(security);
+  // The same record for every other answer: helmet would rebuild the same dozen headers per request.
+  app.use(fixedSecurity);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const sessions = sessionMiddleware(databaseUrl, https);

@@ -24,7 +24,9 @@ interface Stall {
 
 const delay = monitorEventLoopDelay({ resolution: 5 });
 delay.enable();
-let gc = { count: 0, totalMs: 0, maxMs: 0 };
+/** GC pauses over the run; `longest` names the kind of the longest (scavenge, mark-compact, …). */
+let gc = { count: 0, totalMs: 0, maxMs: 0, longest: '' };
+const GC_KINDS: Record<number, string> = { 1: 'scavenge', 2: 'mark-compact', 4: 'incremental marking', 8: 'weak callbacks' };
 /** GC pauses as [start, end] in monotonic microseconds, for placing them inside stalls. */
 let pauses: Array<[number, number]> = [];
 /** Microseconds of the monotonic clock (the CPU profile's clock) at performance.now() = 0. */
@@ -33,7 +35,11 @@ new PerformanceObserver((list) => {
   for (const entry of list.getEntries()) {
     gc.count += 1;
     gc.totalMs += entry.duration;
-    gc.maxMs = Math.max(gc.maxMs, entry.duration);
+    if (entry.duration > gc.maxMs) {
+      gc.maxMs = entry.duration;
+      const kind = (entry as { detail?: { kind?: number } }).detail?.kind ?? 0;
+      gc.longest = GC_KINDS[kind] ?? `kind ${kind}`;
+    }
     const start = origin + Math.round(entry.startTime * 1000);
     pauses.push([start, start + Math.round(entry.duration * 1000)]);
   }
@@ -122,7 +128,7 @@ const ms = (ns: number) => Math.round(ns / 1e5) / 10;
 process.on('message', async (message) => {
   if (message === 'reset') {
     delay.reset();
-    gc = { count: 0, totalMs: 0, maxMs: 0 };
+    gc = { count: 0, totalMs: 0, maxMs: 0, longest: '' };
     pauses = [];
     gaps = [];
     cpuAtReset = process.cpuUsage();
@@ -134,7 +140,7 @@ process.on('message', async (message) => {
     const used = process.cpuUsage(cpuAtReset);
     const report = {
       loop: { p50: ms(delay.percentile(50)), p99: ms(delay.percentile(99)), max: ms(delay.max) },
-      gc: { count: gc.count, totalMs: Math.round(gc.totalMs), maxMs: Math.round(gc.maxMs * 10) / 10 },
+      gc: { count: gc.count, totalMs: Math.round(gc.totalMs), maxMs: Math.round(gc.maxMs * 10) / 10, longest: gc.longest },
       cpuMs: (used.user + used.system) / 1000,
       mainCpuMs: Math.round(mainThreadSched().cpuMs - schedAtReset.cpuMs),
       mainWaitMs: Math.round(mainThreadSched().waitMs - schedAtReset.waitMs),

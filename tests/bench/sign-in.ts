@@ -53,7 +53,7 @@ fs.mkdirSync(path.join(work, 'uploads'), { recursive: true });
 
 interface ServerReport {
   loop: { p50: number; p99: number; max: number };
-  gc: { count: number; totalMs: number; maxMs: number };
+  gc: { count: number; totalMs: number; maxMs: number; longest: string };
   cpuMs: number;
   busyMs: number;
   mainCpuMs: number;
@@ -212,7 +212,7 @@ console.log(
     `quiet (same run): max ${quiet.loop.max} ms, p99 ${quiet.loop.p99} ms (target: max under 50 ms)`,
 );
 console.log(
-  `  server GC during the burst: ${loaded.gc.totalMs} ms in ${loaded.gc.count} pauses (longest ${loaded.gc.maxMs} ms); ` +
+  `  server GC during the burst: ${loaded.gc.totalMs} ms in ${loaded.gc.count} pauses (longest ${loaded.gc.maxMs} ms${loaded.gc.longest ? `, ${loaded.gc.longest}` : ''}); ` +
     `server CPU ${Math.round(loaded.cpuMs)} ms (all threads), its event loop busy ${loaded.busyMs} ms (that thread ran ${loaded.mainCpuMs} ms and waited ${loaded.mainWaitMs} ms for a core)`,
 );
 const by = (status: number) => times.filter((_, i) => statusOf[i] === status);
