@@ -1,3 +1,4 @@
+import fs from 'node:fs';
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import supertest from 'supertest';
@@ -225,6 +226,57 @@ describe('busy, not down (point 2)', () => {
       setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
     }
   });
+
+  it('admitted sign-ins take turns, hashing threads + 1 at a time; one that leaves while waiting never runs', async () => {
+    const saved = { wait: config.passwordHashMaxWaitMs, threads: config.passwordHashThreads };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 60_000);
+    const tickets: SignInTicket[] = [];
+    try {
+      const started: number[] = [];
+      for (let i = 0; i < 4; i++) {
+        const ticket = tryAdmitSignIn();
+        expect(ticket).toBeDefined();
+        tickets.push(ticket!);
+        ticket!.whenItsTurn(() => started.push(i));
+      }
+      // One thread: two run (one hashing, one getting ready), two wait in arrival order.
+      expect(started).toEqual([0, 1]);
+      tickets[2].release(); // its connection dropped while it waited
+      tickets[0].release();
+      expect(started).toEqual([0, 1, 3]);
+      tickets[1].release();
+      tickets[3].release();
+      expect(started).toEqual([0, 1, 3]);
+      // Every place given back: a new sign-in runs at once.
+      const next = tryAdmitSignIn()!;
+      tickets.push(next);
+      next.whenItsTurn(() => started.push(4));
+      expect(started).toEqual([0, 1, 3, 4]);
+    } finally {
+      for (const ticket of tickets) ticket.release();
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
+    }
+  });
+
+  it.skipIf(process.platform !== 'linux')(
+    'hashing threads run at a lower priority than the thread that answers requests (Linux)',
+    async () => {
+      await runHashJob({ op: 'hash', password: 'a-priority-check', cost: 4 });
+      const niceOf = (task: string) => {
+        // Field 19 of /proc/<pid>/task/<tid>/stat is the nice value (fields counted after the command's ")").
+        const stat = fs.readFileSync(`/proc/self/task/${task}/stat`, 'utf8');
+        return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[16]);
+      };
+      const main = niceOf(String(process.pid));
+      const nices = fs.readdirSync('/proc/self/task').map(niceOf);
+      // A thread may only be lowered: under a test runner already at nice 10 or more there is nothing to see.
+      expect(nices.some((nice) => nice > main)).toBe(main < 10);
+    },
+  );
 
   it('a lone sign-in is never refused as busy, however slow hashing has been: a thread is free', async () => {
     // One hashing thread (as on a 2-core machine) and no wait allowed: still admitted.
