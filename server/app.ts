@@ -9,13 +9,14 @@ import { loadUser } from './middlewares/authenticate.ts';
 import { errorHandler } from './middlewares/error-handler.ts';
 import { guardJsonBody } from './middlewares/json-guard.ts';
 import { fixedHeaders } from './middlewares/fixed-headers.ts';
+import { installFrontDoor } from './front-door.ts';
 import { sameOrigin } from './middlewares/same-origin.ts';
 import { securityHeaders } from './middlewares/security-headers.ts';
-import { refuseBusySignIn } from './middlewares/sign-in-admission.ts';
+import { admitSignInRequest, refuseBusySignInEarly } from './middlewares/sign-in-admission.ts';
 import { initModels } from './models/index.ts';
 import { healthRouter } from './routes/health.ts';
 import { apiRouter } from './routes/index.ts';
-import { kioskFeed } from './routes/kiosk-feed.ts';
+import { answerFeedNotModified, kioskFeed, kioskFeedNotModified } from './routes/kiosk-feed.ts';
 import { exploreRouter } from './routes/explore.ts';
 import { kioskPage } from './routes/kiosk-page.ts';
 import { mediaFilesRouter } from './routes/media-files.ts';
@@ -47,14 +48,20 @@ export function createApp(options: AppOptions = {}) {
   // per-address limits, or name another host to the same-origin check.
   app.set('trust proxy', trustProxySetting(config.trustProxy));
   const security = securityHeaders(https);
+  const fixedSecurity = fixedHeaders(security);
+  // The revalidated feed and the refused sign-in, answered before Express's per-request set-up.
+  installFrontDoor(app, [answerFeedNotModified, refuseBusySignInEarly(fixedSecurity)]);
   // Polled by every screen every 30 s: mounted ahead of the request log, body parser, sessions and
   // user loading, none of which it needs (its own errors still reach the error handler and the log),
-  // with the security headers recorded once rather than rebuilt per request.
-  app.get('/api/kiosk/feed', fixedHeaders(security), ...kioskFeed);
-  // A burst of sign-ins beyond what the hashing threads can take in time is refused here, before any
-  // of the work below (the refusals are not in the request log; the admitted ones are).
-  app.post('/api/auth/sign-in', fixedHeaders(security), refuseBusySignIn);
-  app.use(security);
+  // with the security headers recorded once rather than rebuilt per request. A revalidation it can
+  // answer from memory is a 304 before even those (a 304 carries none: the 200 it stands for did).
+  app.get('/api/kiosk/feed', kioskFeedNotModified, fixedSecurity, ...kioskFeed);
+  // A sign-in takes its place in the hashing queue here, and a burst beyond what the hashing threads
+  // can take in time is refused here, before any of the work below (the refusals are not in the
+  // request log; the admitted ones are).
+  app.post('/api/auth/sign-in', fixedSecurity, admitSignInRequest);
+  // The same record for every other answer: helmet would rebuild the same dozen headers per request.
+  app.use(fixedSecurity);
   app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
 
   const sessions = sessionMiddleware(databaseUrl, https);

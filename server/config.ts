@@ -93,11 +93,21 @@ export function checkConfig(env: NodeJS.ProcessEnv = process.env): Env {
   throw new ConfigError(`The server's configuration is not usable:\n  ${problems.join('\n  ')}`);
 }
 
-/** One variable, checked against its rule. */
+/** Each variable's last checked value, with the text it was checked from. */
+const checked = new Map<Name, { raw: string | undefined; value: unknown }>();
+
+/**
+ * One variable, checked against its rule. Settings are read on every use (a test may change one
+ * between two), some on hot paths (each sign-in at the door): a value is checked again only when
+ * its text changed.
+ */
 function read<K extends Name>(name: K): Env[K] {
-  const result = EnvSchema.shape[name].safeParse(process.env[name]);
-  if (!result.success)
-    throw new ConfigError(describe(name, result.error.issues[0]?.message ?? 'is not usable', process.env[name]));
+  const raw = process.env[name];
+  const last = checked.get(name);
+  if (last && last.raw === raw) return last.value as Env[K];
+  const result = EnvSchema.shape[name].safeParse(raw);
+  if (!result.success) throw new ConfigError(describe(name, result.error.issues[0]?.message ?? 'is not usable', raw));
+  checked.set(name, { raw, value: result.data });
   return result.data as Env[K];
 }
 

@@ -26,8 +26,12 @@ function getPool(): Piscina {
 /** Seconds a refused caller is told to wait. */
 export const BUSY_RETRY_SECONDS = 5;
 
-/** Recent time one hash job takes (ms), smoothed; starts pessimistic for cost 11 on a slow machine. */
+/**
+ * Recent time one hash job takes (ms), smoothed; until a job was timed, a pessimistic guess for
+ * cost 11 on a slow machine (the server times one before it listens: warmPasswordHashing).
+ */
 let typicalJobMs = 500;
+let timed = false;
 
 const busy = () =>
   new HttpError(429, 'busy', 'Too many people are signing in at this moment. Try again in a few seconds.', undefined, {
@@ -41,34 +45,75 @@ function expectedWaitMs(jobsAhead: number, threads: number): number {
   return (Math.max(0, jobsAhead - threads + 1) * typicalJobMs) / threads;
 }
 
-/**
- * True when a sign-in arriving now would be refused by admitSignIn: lets the app answer it 429
- * before parsing its body, loading a session or writing a log line, so a burst of refusals costs
- * the event loop almost nothing (`refuseBusySignIn`, mounted first in app.ts).
- */
+/** True when a sign-in arriving now would be refused by tryAdmitSignIn (its hash would wait too long). */
 export function signInWouldWaitTooLong(): boolean {
   const threads = Math.max(1, getPool().options.maxThreads);
   // With a thread free the hash waits for nothing: a lone sign-in is never refused, however slow the machine.
   return signInsInFlight >= threads && expectedWaitMs(signInsInFlight + 1, threads) > config.passwordHashMaxWaitMs;
 }
 
-/** The 429 `busy` answer, with Retry-After. */
-export const busyError = (): HttpError => busy();
+/** The answer to a sign-in refused because hashing is booked up (429 `busy`, Retry-After). */
+export const signInBusyError = busy();
+
+/** An admitted sign-in's place: its turn to run, and giving the place back. */
+export interface SignInTicket {
+  /**
+   * Calls `go` when it is this sign-in's turn to run: at once while fewer sign-ins are running than
+   * there are hashing threads, plus one to have its database work done when a thread comes free.
+   * The others wait in arrival order, holding nothing but their unread request.
+   */
+  whenItsTurn(go: () => void): void;
+  /** Gives the place back: once the sign-in has its answer, or its connection dropped. */
+  release(): void;
+}
+
+/** Admitted sign-ins running now, and those waiting for their turn (first come, first served). */
+let signInsRunning = 0;
+const waitingTurns: Array<() => void> = [];
+
+function startWaitingSignIns(): void {
+  const threads = Math.max(1, getPool().options.maxThreads);
+  while (signInsRunning < threads + 1 && waitingTurns.length > 0) waitingTurns.shift()!();
+}
 
 /**
- * Admits one sign-in before it does any database work, or refuses it at once (429 `busy`) when its
- * hash would wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so
- * excess sign-ins cost almost nothing and the admitted ones finish in a bounded time.
- * @returns release, to call once the sign-in has its answer
- * @throws HttpError 429 `busy`
+ * Admits one sign-in before it does any other work, or refuses it (undefined) when its hash would
+ * wait longer than `passwordHashMaxWaitMs` behind the sign-ins already admitted; so excess sign-ins
+ * cost almost nothing and the admitted ones finish in a bounded time. Taken at the door of the app
+ * (`admitSignInRequest`, mounted first in app.ts), before the body is read. Refusing throws
+ * nothing: an Error's stack trace is a good part of the cost of a refusal.
+ *
+ * Admitted sign-ins then run a few at a time (`whenItsTurn`): a burst's admitted sign-ins would
+ * otherwise all parse their bodies, load sessions, open database connections and query at once,
+ * in the same turns of the event loop as the burst's refusals, only to queue for the hashing
+ * threads; taking turns spreads that work over the time the hashing takes anyway.
+ * @returns the sign-in's ticket; undefined when refused
  */
-export function admitSignIn(): () => void {
-  if (signInWouldWaitTooLong()) throw busy();
+export function tryAdmitSignIn(): SignInTicket | undefined {
+  if (signInWouldWaitTooLong()) return undefined;
   signInsInFlight += 1;
   let released = false;
-  return () => {
-    if (!released) signInsInFlight -= 1;
-    released = true;
+  let running = false;
+  let turn: (() => void) | undefined;
+  return {
+    whenItsTurn(go) {
+      turn = () => {
+        running = true;
+        signInsRunning += 1;
+        go();
+      };
+      waitingTurns.push(turn);
+      startWaitingSignIns();
+    },
+    release() {
+      if (released) return;
+      released = true;
+      signInsInFlight -= 1;
+      if (running) {
+        signInsRunning -= 1;
+        startWaitingSignIns();
+      } else if (turn) waitingTurns.splice(waitingTurns.indexOf(turn), 1);
+    },
   };
 }
 
@@ -86,7 +131,8 @@ export async function runHashJob<R>(
   if (p.queueSize > 0 && expectedWaitMs(p.queueSize + threads, threads) > config.passwordHashMaxWaitMs) throw busy();
   try {
     const { result, ms } = (await p.run(task)) as { result: R; ms: number };
-    typicalJobMs = 0.8 * typicalJobMs + 0.2 * ms;
+    typicalJobMs = timed ? 0.8 * typicalJobMs + 0.2 * ms : ms;
+    timed = true;
     return result;
   } catch (err) {
     if (err instanceof Error && /queue is at limit|No task queue available/i.test(err.message)) throw busy();
@@ -103,5 +149,7 @@ export function hashJobsCompleted(): number {
 export async function closePasswordPool(): Promise<void> {
   const p = pool;
   pool = undefined;
+  timed = false;
+  typicalJobMs = 500;
   await p?.destroy();
 }

@@ -15,6 +15,7 @@ import { migrate } from '../migrations/runner.ts';
 import { initModels } from '../models/index.ts';
 import { sweepOrphanMedia } from '../services/media/index.ts';
 import { recomputeAfterRulesRelease } from '../services/statements/index.ts';
+import { warmPasswordHashing } from '../services/users/index.ts';
 import { startSchedules } from '../wiring.ts';
 
 const started = Date.now();
@@ -81,6 +82,9 @@ if (config.isProduction) {
 
 // A web server only queues jobs (a worker runs them); a worker serves nothing but its health.
 const app = servesRequests ? createApp({ serveClient: true }) : createWorkerApp();
+// A hashing thread started and one hash timed, while the job queue starts, before the first sign-in
+// can arrive (about a quarter of a second at cost 11, in the thread).
+const warmingHashes = servesRequests ? warmPasswordHashing() : undefined;
 // Under the start-up lock: servers starting together would create pg-boss's queues at once and deadlock.
 const queue = await underStartUpLock(() => startJobQueue(config.databaseUrl ?? '', { workers: runsJobs }));
 if (runsJobs) {
@@ -88,6 +92,7 @@ if (runsJobs) {
   if (await recomputeAfterRulesRelease())
     console.log('Statement rules changed with this release: every statement is being recomputed.');
 }
+await warmingHashes;
 const server: Server = app.listen(config.port, config.host, () => {
   const url = `http://${config.host}:${config.port}`;
   const what = role === 'both' ? '' : ` as ${role === 'web' ? 'a web server (no jobs)' : 'a worker (jobs and health only)'}`;

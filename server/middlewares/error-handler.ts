@@ -1,3 +1,4 @@
+import type { ServerResponse } from 'node:http';
 import type { ErrorRequestHandler, RequestHandler } from 'express';
 import {
   BaseError,
@@ -72,3 +73,20 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   if (httpError.current !== undefined) body.error.current = httpError.current;
   res.status(httpError.status).json(body);
 };
+
+/**
+ * One error answer rendered once (status, Retry-After and the same JSON body errorHandler writes),
+ * for a refusal sent so often that building it per request would cost the event loop: the sign-in
+ * door refusing a burst. No Error is thrown or built per request, and no ETag is computed.
+ */
+export function preparedErrorAnswer(error: HttpError): (res: ServerResponse) => void {
+  const body = Buffer.from(JSON.stringify({ error: { code: error.code, message: error.message } } satisfies ApiError));
+  const retryAfter = error.options.retryAfterSeconds ? String(error.options.retryAfterSeconds) : undefined;
+  return (res) => {
+    res.statusCode = error.status;
+    if (retryAfter) res.setHeader('Retry-After', retryAfter);
+    res.setHeader('Content-Type', 'application/json; charset=utf-8');
+    res.setHeader('Content-Length', body.length);
+    res.end(body);
+  };
+}

@@ -87,6 +87,23 @@ function checkShared(header: string): Promise<Outcome> {
 }
 
 /**
+ * The remembered check of this Authorization header while it is still trusted (and, past half its
+ * time, the next check started in the background), without waiting; else undefined.
+ * @param header the request's Authorization header
+ */
+export function trustedKioskCheck(header: string): { screen: KioskScreen; channelId: string | null } | undefined {
+  const hit = trusted.get(header);
+  if (!hit) return undefined;
+  const age = Date.now() - hit.checkedAt;
+  if (age >= TRUST_MS) return undefined;
+  if (age >= RECHECK_MS && !checking.has(header)) {
+    // A failed background check is only logged: the next request past the trust checks again and answers for it.
+    checkShared(header).catch((error: unknown) => logger.warn({ err: error }, 'kiosk token recheck failed'));
+  }
+  return hit;
+}
+
+/**
  * requireKiosk for the feed, which players poll every half minute and which must answer a 304
  * without touching the database: the same check (Bearer token of a paired, unrevoked screen, else
  * 401 `kiosk_token_invalid`), remembered for a second together with the screen's channel and
@@ -95,18 +112,11 @@ function checkShared(header: string): Promise<Outcome> {
  */
 export const requireKioskFeed: RequestHandler = (req, res, next) => {
   const header = req.headers.authorization ?? '';
-  const hit = trusted.get(header);
+  const hit = trustedKioskCheck(header);
   if (hit) {
-    const age = Date.now() - hit.checkedAt;
-    if (age < TRUST_MS) {
-      if (age >= RECHECK_MS && !checking.has(header)) {
-        // A failed background check is only logged: the next request past the trust checks again and answers for it.
-        checkShared(header).catch((error: unknown) => logger.warn({ err: error }, 'kiosk token recheck failed'));
-      }
-      req.kioskScreen = hit.screen;
-      req.kioskChannelId = hit.channelId;
-      return next();
-    }
+    req.kioskScreen = hit.screen;
+    req.kioskChannelId = hit.channelId;
+    return next();
   }
   checkShared(header).then((outcome) => {
     if ('challenge' in outcome) return refuseKiosk(res, next, outcome.challenge);

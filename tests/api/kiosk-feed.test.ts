@@ -235,7 +235,7 @@ describe('the kiosk feed', () => {
     expect(feed.items).toEqual([]);
     expect(feed._starproof.venue.id).toBe(venue.id);
   });
-  it('sends the same security headers as the rest of the API on its 200, 304 and 401 answers', async () => {
+  it('sends the same security headers as the rest of the API on its 200 and 401 answers; its 304 carries only the validators and cache rule', async () => {
     const { channelId, token } = await channelWithScreen('Headers', 'Headers screen');
     await addSlide(channelId, { kind: 'sky_tonight' });
     const health = await supertest(await getTestApp()).get('/api/health');
@@ -254,8 +254,20 @@ describe('the kiosk feed', () => {
     const again = await getFeed(token, full.headers.etag);
     const refused = await getFeed('spk_thisTokenWasNeverIssuedToAnyScreen');
     expect([full.status, again.status, refused.status]).toEqual([200, 304, 401]);
-    for (const res of [full, again, refused]) expect(security(res.headers)).toEqual(expected);
+    for (const res of [full, refused]) expect(security(res.headers)).toEqual(expected);
+    // The player (or a cache) keeps the 200's other headers, the security headers among them (RFC 9111, 4.3.4).
+    expect(security(again.headers)).toEqual({});
+    expect(again.headers.etag).toBe(full.headers.etag);
+    expect(again.headers['cache-control']).toBe('private, no-cache');
     expect(again.headers.vary).toBe('Authorization');
+    // Answered ahead of Express for the exact path; the app answers any other form of it the same way.
+    const withQuery = await supertest(await getTestApp())
+      .get('/api/kiosk/feed?from=test')
+      .set('Authorization', `Bearer ${token}`)
+      .set('If-None-Match', full.headers.etag as string);
+    expect(withQuery.status).toBe(304);
+    expect(security(withQuery.headers)).toEqual({});
+    expect(withQuery.headers.etag).toBe(full.headers.etag);
     expect(refused.headers['www-authenticate']).toBe('Bearer realm="kiosk", error="invalid_token"');
   });
 

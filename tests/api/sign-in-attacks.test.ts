@@ -1,6 +1,16 @@
+import fs from 'node:fs';
+import http from 'node:http';
+import type { AddressInfo } from 'node:net';
 import supertest from 'supertest';
-import { beforeAll, describe, expect, it } from 'vitest';
-import { admitSignIn, runHashJob, closePasswordPool, hashJobsCompleted } from '../../server/auth/password-pool.ts';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
+import {
+  runHashJob,
+  closePasswordPool,
+  hashJobsCompleted,
+  type SignInTicket,
+  signInWouldWaitTooLong,
+  tryAdmitSignIn,
+} from '../../server/auth/password-pool.ts';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { FREE_ATTEMPTS, purgeOldSignInAttempts } from '../../server/services/users/sign-in.ts';
@@ -132,12 +142,9 @@ describe('busy, not down (point 2)', () => {
     const saved = config.passwordHashMaxWaitMs;
     // No wait allowed, and every hashing thread taken by a sign-in in flight: the next one would wait.
     setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
-    const inFlight: Array<() => void> = [];
-    try {
-      for (;;) inFlight.push(admitSignIn());
-    } catch {
-      // admitted until every thread was taken
-    }
+    const inFlight: SignInTicket[] = [];
+    // Admitted until every thread is taken.
+    for (let ticket = tryAdmitSignIn(); ticket; ticket = tryAdmitSignIn()) inFlight.push(ticket);
     try {
       expect(inFlight.length).toBeGreaterThan(0);
       const res = await supertest(await getTestApp())
@@ -151,11 +158,125 @@ describe('busy, not down (point 2)', () => {
       expect(res.headers['cache-control']).toBe('no-store');
       expect(res.headers['set-cookie']).toBeUndefined();
       expect(res.headers['x-content-type-options']).toBe('nosniff');
+      // The exact path is refused ahead of Express; another form of it by the app's own door, alike.
+      const other = await supertest(await getTestApp())
+        .post('/api/auth/sign-in?next=/pages')
+        .set('Content-Type', 'application/json')
+        .send('{"email": not json');
+      expect([other.status, other.body.error.code, other.headers['retry-after']]).toEqual([429, 'busy', '5']);
+      expect(other.headers['cache-control']).toBe('no-store');
+      expect(other.headers['x-content-type-options']).toBe('nosniff');
     } finally {
-      for (const release of inFlight) release();
+      for (const ticket of inFlight) ticket.release();
       setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved);
     }
   });
+
+  it('a sign-in takes its place at the door: one still sending its body holds it, and the next is refused unread', async () => {
+    // One hashing thread and no wait allowed: one sign-in in flight fills the queue.
+    const saved = { wait: config.passwordHashMaxWaitMs, threads: config.passwordHashThreads };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 0);
+    const server = http.createServer(await getTestApp()).listen(0, '127.0.0.1');
+    await new Promise((resolve) => server.once('listening', resolve));
+    const { port } = server.address() as AddressInfo;
+    const post = (length: number) =>
+      http.request({
+        host: '127.0.0.1',
+        port,
+        method: 'POST',
+        path: '/api/auth/sign-in',
+        headers: { 'Content-Type': 'application/json', 'Content-Length': length },
+      });
+    const answer = (req: http.ClientRequest) =>
+      new Promise<{ status: number; code: string }>((resolve, reject) => {
+        req.once('error', reject);
+        req.once('response', (res) => {
+          let text = '';
+          res.on('data', (chunk) => (text += chunk));
+          res.on('end', () => resolve({ status: res.statusCode ?? 0, code: JSON.parse(text).error?.code ?? '' }));
+        });
+      });
+    try {
+      // The first sign-in sends half its body and waits: it is in the body parser, not yet at the route.
+      const slow = post(40);
+      const slowAnswer = answer(slow);
+      slow.write('{"email": ');
+      slow.flushHeaders();
+      await vi.waitFor(() => expect(signInWouldWaitTooLong()).toBe(true), { timeout: 5_000 });
+      // Malformed JSON would be a 400 had the body parser read it.
+      const malformed = '{"email": not json';
+      const next = post(malformed.length);
+      const nextAnswer = answer(next);
+      next.end(malformed);
+      expect(await nextAnswer).toEqual({ status: 429, code: 'busy' });
+      slow.end('not json at all, this'.padEnd(30, '.'));
+      expect((await slowAnswer).status).toBe(400);
+      // Its answer sent, the place is free again: the next malformed body is read (400).
+      await vi.waitFor(() => expect(signInWouldWaitTooLong()).toBe(false), { timeout: 5_000 });
+      const after = post(malformed.length);
+      const afterAnswer = answer(after);
+      after.end(malformed);
+      expect(await afterAnswer).toEqual({ status: 400, code: 'malformed_json' });
+    } finally {
+      server.close();
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
+    }
+  });
+
+  it('admitted sign-ins take turns, hashing threads + 1 at a time; one that leaves while waiting never runs', async () => {
+    const saved = { wait: config.passwordHashMaxWaitMs, threads: config.passwordHashThreads };
+    await closePasswordPool();
+    setEnv('PASSWORD_HASH_THREADS', 1);
+    setEnv('PASSWORD_HASH_MAX_WAIT_MS', 60_000);
+    const tickets: SignInTicket[] = [];
+    try {
+      const started: number[] = [];
+      for (let i = 0; i < 4; i++) {
+        const ticket = tryAdmitSignIn();
+        expect(ticket).toBeDefined();
+        tickets.push(ticket!);
+        ticket!.whenItsTurn(() => started.push(i));
+      }
+      // One thread: two run (one hashing, one getting ready), two wait in arrival order.
+      expect(started).toEqual([0, 1]);
+      tickets[2].release(); // its connection dropped while it waited
+      tickets[0].release();
+      expect(started).toEqual([0, 1, 3]);
+      tickets[1].release();
+      tickets[3].release();
+      expect(started).toEqual([0, 1, 3]);
+      // Every place given back: a new sign-in runs at once.
+      const next = tryAdmitSignIn()!;
+      tickets.push(next);
+      next.whenItsTurn(() => started.push(4));
+      expect(started).toEqual([0, 1, 3, 4]);
+    } finally {
+      for (const ticket of tickets) ticket.release();
+      await closePasswordPool();
+      setEnv('PASSWORD_HASH_THREADS', saved.threads);
+      setEnv('PASSWORD_HASH_MAX_WAIT_MS', saved.wait);
+    }
+  });
+
+  it.skipIf(process.platform !== 'linux')(
+    'hashing threads run at a lower priority than the thread that answers requests (Linux)',
+    async () => {
+      await runHashJob({ op: 'hash', password: 'a-priority-check', cost: 4 });
+      const niceOf = (task: string) => {
+        // Field 19 of /proc/<pid>/task/<tid>/stat is the nice value (fields counted after the command's ")").
+        const stat = fs.readFileSync(`/proc/self/task/${task}/stat`, 'utf8');
+        return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[16]);
+      };
+      const main = niceOf(String(process.pid));
+      const nices = fs.readdirSync('/proc/self/task').map(niceOf);
+      // A thread may only be lowered: under a test runner already at nice 10 or more there is nothing to see.
+      expect(nices.some((nice) => nice > main)).toBe(main < 10);
+    },
+  );
 
   it('a lone sign-in is never refused as busy, however slow hashing has been: a thread is free', async () => {
     // One hashing thread (as on a 2-core machine) and no wait allowed: still admitted.

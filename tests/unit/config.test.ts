@@ -1,5 +1,5 @@
-import { afterEach, describe, expect, it } from 'vitest';
-import { checkConfig, ConfigError, config } from '../../server/config.ts';
+import { afterEach, describe, expect, it, vi } from 'vitest';
+import { checkConfig, ConfigError, config, EnvSchema } from '../../server/config.ts';
 
 const saved = { ...process.env };
 afterEach(() => {
@@ -24,6 +24,25 @@ describe('the server configuration', () => {
     });
     expect(env.DATABASE_URL).toBeUndefined();
     expect(env.STARPROOF_SIGNIN_LIMIT).toBeUndefined();
+  });
+
+  it('reads a setting again when its text changes, and checks an unchanged one only once', () => {
+    const check = vi.spyOn(EnvSchema.shape.PASSWORD_HASH_MAX_WAIT_MS, 'safeParse');
+    try {
+      process.env.PASSWORD_HASH_MAX_WAIT_MS = '250';
+      expect(config.passwordHashMaxWaitMs).toBe(250);
+      const checks = check.mock.calls.length;
+      expect(config.passwordHashMaxWaitMs).toBe(250);
+      expect(check.mock.calls.length).toBe(checks);
+      process.env.PASSWORD_HASH_MAX_WAIT_MS = '900';
+      expect(config.passwordHashMaxWaitMs).toBe(900);
+      process.env.PASSWORD_HASH_MAX_WAIT_MS = 'soon';
+      expect(() => config.passwordHashMaxWaitMs).toThrow(ConfigError);
+      delete process.env.PASSWORD_HASH_MAX_WAIT_MS;
+      expect(config.passwordHashMaxWaitMs).toBe(5000);
+    } finally {
+      check.mockRestore();
+    }
   });
 
   it('an empty variable counts as unset', () => {

@@ -1,5 +1,4 @@
 import { QueryTypes } from 'sequelize';
-import { admitSignIn } from '../../auth/password-pool.ts';
 import { getSequelize } from '../../db.ts';
 import { AuthenticationError, HttpError } from '../../errors.ts';
 import { User } from '../../models/index.ts';
@@ -63,15 +62,6 @@ export async function releaseAttempts(email: string): Promise<void> {
  * @throws HttpError 401 `wrong_credentials`, 429 `too_many_attempts` or `busy`
  */
 export async function signIn(email: string, password: string, ip: string | undefined): Promise<User> {
-  const release = admitSignIn();
-  try {
-    return await checkCredentials(email, password, ip);
-  } finally {
-    release();
-  }
-}
-
-async function checkCredentials(email: string, password: string, ip: string | undefined): Promise<User> {
   await takeAttempt(email);
   const user = await User.findOne({ where: { email } });
   const ok = await verifyPassword(password, user?.passwordHash);
