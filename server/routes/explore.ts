@@ -25,6 +25,7 @@ import { EXPLORE_PATH, venueSkyPath } from '../public-site/paths.ts';
 import { sitemapXml } from '../public-site/sitemap.ts';
 import { skyTonight } from '../public-site/sky-view.ts';
 import { PUBLIC_CACHE_CONTROL } from './public/index.ts';
+import { TalliedPgRateLimitStore } from '../middlewares/rate-limit-store.ts';
 
 const HTML = 'text/html; charset=utf-8';
 const SITE_NAME = config.publisherName;
@@ -45,6 +46,7 @@ const IMMUTABLE = 'public, max-age=31536000, immutable';
 const limiter = rateLimit({
   windowMs: 60_000,
   limit: config.limits.publicApi,
+  store: new TalliedPgRateLimitStore('explore'),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>

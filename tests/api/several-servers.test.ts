@@ -4,7 +4,7 @@ import { beforeAll, describe, expect, it, vi } from 'vitest';
 import { config } from '../../server/config.ts';
 import { getSequelize } from '../../server/db.ts';
 import { enqueue, registerJob, startJobQueue, stopJobQueue } from '../../server/jobs/queue.ts';
-import { PgRateLimitStore, runRateLimitPurgeJob } from '../../server/middlewares/rate-limit-store.ts';
+import { PgRateLimitStore, runRateLimitPurgeJob, TalliedPgRateLimitStore } from '../../server/middlewares/rate-limit-store.ts';
 import { SkySnapshot, Venue } from '../../server/models/index.ts';
 import { skyEvents } from '../../server/services/sky/index.ts';
 import { refreshVenueSky } from '../../server/services/sky/sky-snapshots.ts';
@@ -72,6 +72,57 @@ describe('rate limits counted in PostgreSQL', () => {
       type: QueryTypes.SELECT,
     });
     expect(keys.map((k) => k.key)).toEqual(['purge-test:192.0.2.51']);
+  });
+});
+
+/** A tallied store as one server would build it for a public limiter. */
+function talliedFor(name: string, windowMs: number) {
+  const store = new TalliedPgRateLimitStore(name);
+  store.init({ windowMs } as Parameters<TalliedPgRateLimitStore['init']>[0]);
+  return store;
+}
+
+async function sharedHits(key: string): Promise<number | undefined> {
+  const [row] = await getSequelize().query<{ hits: number }>('SELECT hits FROM rate_limit_hits WHERE key = :key', {
+    replacements: { key },
+    type: QueryTypes.SELECT,
+  });
+  return row?.hits;
+}
+
+describe('public rate limits tallied in memory and shared once a second', () => {
+  it("counts a page view without a query, then adds a server's hits to the shared counter in one go", async () => {
+    const store = talliedFor('tally-test', 60_000);
+    for (let i = 1; i <= 50; i++) expect((await store.increment('203.0.113.20')).totalHits).toBe(i);
+    expect(await sharedHits('tally-test:203.0.113.20')).toBeUndefined();
+    await store.flush();
+    expect(await sharedHits('tally-test:203.0.113.20')).toBe(50);
+    expect((await store.get('203.0.113.20'))?.totalHits).toBe(50);
+  });
+
+  it("two servers see each other's hits after their next flush, so a client cannot double its allowance", async () => {
+    const a = talliedFor('tally-two', 60_000);
+    const b = talliedFor('tally-two', 60_000);
+    for (let i = 0; i < 30; i++) await a.increment('198.51.100.20');
+    for (let i = 0; i < 20; i++) await b.increment('198.51.100.20');
+    await a.flush();
+    await b.flush();
+    expect((await b.get('198.51.100.20'))?.totalHits).toBe(50);
+    expect((await a.increment('198.51.100.20')).totalHits).toBe(31);
+    await a.flush();
+    expect((await a.increment('198.51.100.20')).totalHits).toBe(52);
+  });
+
+  it('flushes by itself within about a second, and a window that has ended starts again', async () => {
+    const store = talliedFor('tally-window', 400);
+    await store.increment('192.0.2.20');
+    await store.increment('192.0.2.20');
+    await expect.poll(() => sharedHits('tally-window:192.0.2.20'), { timeout: 3000 }).toBe(2);
+    await new Promise((r) => setTimeout(r, 500));
+    expect(await store.get('192.0.2.20')).toBeUndefined();
+    expect((await store.increment('192.0.2.20')).totalHits).toBe(1);
+    await store.flush();
+    expect(await sharedHits('tally-window:192.0.2.20')).toBe(1);
   });
 });
 

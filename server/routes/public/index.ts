@@ -2,7 +2,7 @@ import { type Request, type RequestHandler, type Response, Router } from 'expres
 import { PublicLangQuerySchema } from '@shared/schemas/page-version.ts';
 import type { PublicPageDto } from '@shared/schemas/public-page.ts';
 import { rateLimit } from 'express-rate-limit';
-import { PgRateLimitStore } from '../../middlewares/rate-limit-store.ts';
+import { TalliedPgRateLimitStore } from '../../middlewares/rate-limit-store.ts';
 import { appBaseUrl, config } from '../../config.ts';
 import { HttpError, NotFoundError } from '../../errors.ts';
 import { etagMatches, sendCached } from '../../middlewares/http-cache.ts';
@@ -26,7 +26,7 @@ const PUBLISHER = config.publisherName;
 const limiter = rateLimit({
   windowMs: 60_000,
   limit: config.limits.publicApi,
-  store: new PgRateLimitStore('public'),
+  store: new TalliedPgRateLimitStore('public'),
   standardHeaders: 'draft-8',
   legacyHeaders: false,
   handler: (_req, _res, next) =>
