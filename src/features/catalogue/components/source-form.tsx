@@ -86,13 +86,7 @@ export function SourceForm({
         error={errors.bibcode?.message}
         {...register('bibcode')}
       />
-      <TextField
-        label="DOI"
-        placeholder="10.…/…"
-        autoComplete="off"
-        error={errors.doi?.message}
-        {...register('doi')}
-      />
+      <TextField label="DOI" placeholder="10.…/…" autoComplete="off" error={errors.doi?.message} {...register('doi')} />
       <TextField
         label="URL"
         type="url"
