@@ -77,7 +77,9 @@ describe('computing statement batches on worker threads', () => {
     expect(first).toEqual(inline);
     expect(second).toEqual(inline);
     expect(inline.broken.length).toBeGreaterThan(0);
-    expect(JSON.parse(inline.computedRows).length + JSON.parse(inline.brokenRows).length).toBe(JSON.parse(batch.statements).length);
+    expect(JSON.parse(inline.computedRows).length + JSON.parse(inline.brokenRows).length).toBe(
+      JSON.parse(batch.statements).length,
+    );
   });
 
   it('passes a failure back as an error instead of hanging', { timeout: 30_000 }, async () => {
