@@ -68,8 +68,14 @@ async function idsFor(scope: RecomputeScope): Promise<string[]> {
       (s) => s.id,
     );
   // Ordered by object, so a batch holds whole objects and their statements share Monte Carlo runs.
-  if ('all' in scope)
-    return (await Statement.findAll({ attributes: ['id'], order: [['skyObjectId', 'ASC']], raw: true })).map((s) => s.id);
+  // One text of every id, split here: a hundred thousand row objects held the server's thread for tens of milliseconds.
+  if ('all' in scope) {
+    const [{ ids }] = await getSequelize().query<{ ids: string }>(
+      "SELECT coalesce(string_agg(id::text, ',' ORDER BY sky_object_id), '') AS ids FROM statements",
+      { type: QueryTypes.SELECT },
+    );
+    return ids === '' ? [] : ids.split(',');
+  }
   // Statements whose inputs used this measurement or source.
   const rows = await getSequelize().query<{ id: string }>(
     'measurementId' in scope
@@ -132,7 +138,7 @@ async function writeBatch(result: WriteBatchResult, settings: SettingsSnapshot):
     if (current.version !== settings.version)
       throw new SettingsMovedError('The organisation settings changed during the recompute.');
     await saveSkeletons(result.skeletons, transaction);
-    if (result.computedRows !== '[]') await sequelize.query(UPDATE_COMPUTED, { bind: [result.computedRows], transaction });
+    for (const rows of result.computedRows) await sequelize.query(UPDATE_COMPUTED, { bind: [rows], transaction });
     if (result.brokenRows !== '[]') await sequelize.query(UPDATE_BROKEN, { bind: [result.brokenRows], transaction });
     if (result.relinked.length > 0) {
       await sequelize.query(UNLINK_INPUTS, { bind: [result.relinked], transaction });
