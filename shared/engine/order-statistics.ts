@@ -116,10 +116,29 @@ export function quantileRanks(n: number, ps: number[]): number[] {
  * (see bucketedStatistics), else by selection over all of them.
  * @param a the draws (may be reordered in place), no NaN
  * @param ranks ascending ranks
+ * @param range the draws' smallest and largest, when the caller has them
  * @returns each rank's value, by rank
  */
-export function orderStatistics(a: Float64Array, ranks: number[]): Map<number, number> {
-  return (a.length >= MANY_DRAWS && bucketedStatistics(a, ranks)) || selectedStatistics(a, ranks);
+export function orderStatistics(
+  a: Float64Array,
+  ranks: number[],
+  range: { min: number; max: number } = rangeOf(a),
+): Map<number, number> {
+  return (a.length >= MANY_DRAWS && bucketedStatistics(a, ranks, range)) || selectedStatistics(a, ranks);
+}
+
+/**
+ * The smallest and largest of the draws.
+ * @param a the draws, no NaN
+ */
+export function rangeOf(a: Float64Array): { min: number; max: number } {
+  let min = Infinity;
+  let max = -Infinity;
+  for (let i = 0; i < a.length; i++) {
+    if (a[i] < min) min = a[i];
+    if (a[i] > max) max = a[i];
+  }
+  return { min, max };
 }
 
 /** From this many draws on, buckets beat selecting over all of them. */
@@ -140,16 +159,15 @@ const collections: Float64Array[] = [];
  * the same way in both passes.
  * @param a the draws (left as they are), no NaN
  * @param ranks ascending ranks
+ * @param range the draws' smallest and largest
  * @returns each rank's value by rank, or null when the draws are all equal or their range overflows
  */
-function bucketedStatistics(a: Float64Array, ranks: number[]): Map<number, number> | null {
+function bucketedStatistics(
+  a: Float64Array,
+  ranks: number[],
+  { min, max }: { min: number; max: number },
+): Map<number, number> | null {
   const n = a.length;
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = 0; i < n; i++) {
-    if (a[i] < min) min = a[i];
-    if (a[i] > max) max = a[i];
-  }
   const scale = BUCKETS / (max - min);
   if (!(max > min) || !(scale > 0) || !Number.isFinite(scale)) return null;
   counts.fill(0);
