@@ -11,7 +11,7 @@ import { evaluateBatch, type BatchJob } from './evaluate-batch.ts';
  * How much lower than the server's thread the workers run (a nice value). With both workers busy,
  * the server's thread and PostgreSQL share the cores with them, and the event loop waited for its
  * turn (tens of milliseconds inside a socket write); at a lower priority the workers take what the
- * others leave (measured, 20,000 statements: loop max 31–35 ms against 38–63 ms at the same
+ * others leave (measured, 20,000 statements: loop max 31–35 ms against 38–44 ms at the same
  * priority, same wall time). Linux gives each thread its own nice value (/proc/thread-self names this one);
  * elsewhere the workers keep the process's.
  */
