@@ -11,6 +11,10 @@ import { boundMass, deviateRange, truncatedDeviate, type Measurement, type Monte
 import { localDistance, localModulus } from './quantities/local-modulus.ts';
 import { exactModulusAt } from './quantities/sample-photometry.ts';
 import type { Sampler } from './quantities/sample-env.ts';
+import { EXTINCTION, ALPHA, has } from './quantities/sample-env.ts';
+import { fillAbsoluteMagnitude, fillScaledInZ, type ColumnRun } from './column-draws.ts';
+import { sampleAbsoluteMagnitude } from './quantities/sample-photometry.ts';
+import type { ZInterpolant } from './quantities/local-modulus.ts';
 
 /** The name under which an H0 range is varied. */
 export const H0_KEY = 'H0';
@@ -129,7 +133,7 @@ export function quantityInterval(
   const draw = split ? split.before : spec.sample;
   // A distance or time drawn over z and H0 alone: its part in z at the nominal H0, interpolated
   // over the run's redshifts, divided by each draw's H0 scale (see inverseH0InZ).
-  let inZ: ((z: number) => number) | null = null;
+  let inZ: ZInterpolant | null = null;
   const scaledInZ = spec.inverseH0InZ === true && varyH0 && varied.length === 2 && varied.includes('z');
   const prepare = scaledInZ
     ? () => {
@@ -154,8 +158,17 @@ export function quantityInterval(
           env.modulusAt = localModulus((zz) => exactModulusAt(env, zz), lo, hi);
         }
       : undefined;
+  // The two shapes the column fill computes (column-draws.ts); any other run draws one by one.
+  const columns: ColumnRun = { varied: varied.map((name) => ({ name, m: all[name] })), nominalH0: view.H0 };
+  const onlyVaried = (...wanted: string[]) => varied.length === wanted.length && wanted.every((k) => varied.includes(k));
+  const fill = scaledInZ
+    ? (out: Float64Array) => inZ !== null && fillScaledInZ(columns, inZ, out)
+    : draw === sampleAbsoluteMagnitude && onlyVaried('m', 'z', H0_KEY) && !has(env, EXTINCTION) && !has(env, ALPHA)
+      ? (out: Float64Array) => env.modulusAt !== null && fillAbsoluteMagnitude(columns, env.modulusAt, out)
+      : undefined;
   return propagate({
     ...problem,
+    fill,
     // Two varied inputs or more cost thousands of draws; a statement about the same object often asks again.
     drawsKey: varied.length > 1 ? drawsKey(draw, view, spec.band && !split ? env.Msun : null, names, all) : undefined,
     prepare,

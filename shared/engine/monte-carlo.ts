@@ -46,6 +46,12 @@ export interface SlotProblem {
   drawsKey?: string;
   /** Called once before drawing (not when earlier draws are reused): set up what only drawing needs. */
   prepare?: () => void;
+  /**
+   * Computes every draw of f a column at a time (column-draws.ts), after prepare: the same values
+   * as the loop, for less. Returns false, leaving the loop to draw, when it does not apply or
+   * some draw is not finite.
+   */
+  fill?: (out: Float64Array) => boolean;
 }
 
 /** True when a monotonic map is finite (and does not throw) at both ends of the draws, hence at all. */
@@ -131,7 +137,7 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   };
   const last = p.last;
   // Drawing again with the last step folded in; prepare is repeated so the draws are the same whether or not this run was reused.
-  const fold = () => propagate({ ...p, f: (x) => last!.map(p.f(x)), last: undefined, drawsKey: undefined });
+  const fold = () => propagate({ ...p, f: (x) => last!.map(p.f(x)), last: undefined, drawsKey: undefined, fill: undefined });
   const fromSummary = ({ stats }: DrawSummary): MonteCarloOutcome => {
     const at = (rank: number) => stats.get(rank)!;
     return {
@@ -150,6 +156,10 @@ export function propagate(p: SlotProblem): MonteCarloOutcome {
   p.prepare?.();
   const run: Run = { draw: 0, kept: 0 };
   const out = takeScratch();
+  if (p.fill?.(out)) {
+    run.draw = SAMPLES;
+    run.kept = SAMPLES;
+  }
   while (run.draw < SAMPLES) {
     try {
       drawAll(run, p, slots, centre, minus, plus, mass, out, failed);

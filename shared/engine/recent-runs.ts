@@ -4,7 +4,7 @@
  * absolute magnitudes, and the second then selects and draws nothing. Keyed by `drawsKey`
  * (see interval.ts), which names everything the draws depend on.
  */
-import { orderStatistics, quantileRanks } from './order-statistics.ts';
+import { orderStatistics, quantileRanks, rangeOf } from './order-statistics.ts';
 
 /**
  * What a later run with the same draws needs of an earlier one: the order statistics its
@@ -25,13 +25,8 @@ const RECENT_RUNS = 4;
 
 /** Summarises a run's draws (reordering them) and keeps the summary under its key. */
 export function rememberRun(key: string, draws: Float64Array): DrawSummary {
-  let min = Infinity;
-  let max = -Infinity;
-  for (let i = 0; i < draws.length; i++) {
-    if (draws[i] < min) min = draws[i];
-    if (draws[i] > max) max = draws[i];
-  }
-  const summary = { stats: orderStatistics(draws, quantileRanks(draws.length, [...LEVELS])), min, max };
+  const { min, max } = rangeOf(draws);
+  const summary = { stats: orderStatistics(draws, quantileRanks(draws.length, [...LEVELS]), { min, max }), min, max };
   if (recentRuns.size >= RECENT_RUNS) recentRuns.delete(recentRuns.keys().next().value as string);
   recentRuns.set(key, summary);
   return summary;

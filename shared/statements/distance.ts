@@ -21,12 +21,27 @@ function intervalOf(m: { value: number; sigma?: number | null; minus?: number | 
   return undefined;
 }
 
+// The distance-today and scale-model statements about one object read the same distance: it is
+// worked out once per context (a recompute hands all of an object's statements one context, which
+// nothing changes) and only read afterwards.
+const worked = new WeakMap<TemplateContext, DistanceToday>();
+
 /**
  * How far away the object is today: the proper distance from a redshift in the Hubble flow (the
  * comoving distance, which is what "now" means in an expanding universe), else a stored distance,
  * else the inverse of the parallax.
+ * @returns the distance, shared by every caller with this context (do not change it)
  */
 export function distanceToday(ctx: TemplateContext): DistanceToday {
+  let d = worked.get(ctx);
+  if (d === undefined) {
+    d = workOutDistanceToday(ctx);
+    worked.set(ctx, d);
+  }
+  return d;
+}
+
+function workOutDistanceToday(ctx: TemplateContext): DistanceToday {
   const basis = requireDistance(ctx);
   const m = basis.measurement;
   if (basis.kind === 'z') {

@@ -2,25 +2,34 @@ import { QueryTypes } from 'sequelize';
 import { resolveModel } from '@shared/engine/model-resolve.ts';
 import type { SentenceNames, StatementLocale } from '@shared/statements/index.ts';
 import { getSequelize } from '../../db.ts';
-import type { StatementStatus } from '../../models/index.ts';
-import { contextKey, type BatchJob, type BatchModel, type BatchStatement } from './evaluate-batch.ts';
+import { contextKey, type BatchJob, type BatchModel } from './evaluate-batch.ts';
 import { buildTemplateContexts, buildVenueNights, withVenue, type SettingsSnapshot } from './context.ts';
 import { cosmologyDescriptionId } from './cosmology-descriptions.ts';
 
-interface StatementRow {
-  id: string;
-  sky_object_id: string;
-  template_id: string;
-  venue_id: string | null;
-  status: StatementStatus;
-  /** JSON text, parsed where the batch is computed. */
-  acknowledged_texts: string | null;
-  inputs: string | null;
-  night: string | null;
-  model_label: string | null;
-  model_h0: number | null;
-  preview_text: string | null;
+/** A batch's statements as one JSON text, and what the server's thread needs of them to build the contexts. */
+interface BatchRow {
+  statements: string;
+  object_ids: string[];
+  venue_ids: string[];
+  /** Object and venue of each statement about a venue's night, as contextKey writes them. */
+  venue_keys: string[];
 }
+
+// One row per batch: PostgreSQL writes the statements as the JSON of BatchStatement[] (their JSON
+// columns embedded as they are stored, the model's H0 as float8), so this thread never builds the
+// rows (see BatchJob.statements).
+const LOAD_STATEMENTS = `
+SELECT coalesce(json_agg(json_build_object(
+         'id', s.id, 'skyObjectId', s.sky_object_id, 'templateId', s.template_id, 'venueId', s.venue_id, 'status', s.status,
+         'model', CASE WHEN d.label IS NOT NULL AND d.description->>'H0' IS NOT NULL
+                       THEN json_build_object('label', d.label, 'H0', (d.description->>'H0')::float8) END,
+         'acknowledgedTexts', s.acknowledged_texts, 'inputs', coalesce(s.inputs, '[]'::jsonb), 'night', s.night,
+         'previewText', CASE WHEN $2::text IS NULL THEN NULL ELSE s.texts->>$2::text END)), '[]')::text AS statements,
+       coalesce(array_agg(DISTINCT s.sky_object_id::text), '{}')::text[] AS object_ids,
+       coalesce(array_agg(DISTINCT s.venue_id::text) FILTER (WHERE s.venue_id IS NOT NULL), '{}')::text[] AS venue_ids,
+       coalesce(array_agg(DISTINCT s.sky_object_id::text || '@' || s.venue_id::text) FILTER (WHERE s.venue_id IS NOT NULL), '{}')::text[] AS venue_keys
+  FROM statements s LEFT JOIN cosmology_descriptions d ON d.id = s.model_id
+ WHERE s.id = ANY($1::uuid[])`;
 
 /**
  * The cosmology a batch computed under these settings names, stored (once) so statements can
@@ -56,46 +65,28 @@ export async function loadBatchJob(
   options: { computedAt: Date; night?: { venueId: string; localDate: string }; previewLocale?: StatementLocale },
 ): Promise<BatchJob> {
   const sequelize = getSequelize();
-  const rows = await sequelize.query<StatementRow>(
-    `SELECT s.id, s.sky_object_id, s.template_id, s.venue_id, s.status,
-            s.acknowledged_texts::text AS acknowledged_texts, s.inputs::text AS inputs, s.night::text AS night,
-            d.label AS model_label, (d.description->>'H0')::float8 AS model_h0,
-            CASE WHEN $2::text IS NULL THEN NULL ELSE s.texts->>$2::text END AS preview_text
-       FROM statements s LEFT JOIN cosmology_descriptions d ON d.id = s.model_id
-      WHERE s.id = ANY($1::uuid[])`,
-    { bind: [ids, options.previewLocale ?? null], type: QueryTypes.SELECT },
-  );
-  const objectIds = [...new Set(rows.map((r) => r.sky_object_id))];
-  const objects = objectIds.length
+  const [batch] = await sequelize.query<BatchRow>(LOAD_STATEMENTS, {
+    bind: [ids, options.previewLocale ?? null],
+    type: QueryTypes.SELECT,
+  });
+  const objects = batch.object_ids.length
     ? await sequelize.query<{ id: string; name: string; kind: string; designations: string[]; sentenceNames: SentenceNames }>(
         'SELECT id, name, kind, designations, sentence_names AS "sentenceNames" FROM sky_objects WHERE id = ANY($1::uuid[])',
         {
-          bind: [objectIds],
+          bind: [batch.object_ids],
           type: QueryTypes.SELECT,
         },
       )
     : [];
   const contexts = await buildTemplateContexts(objects, settings);
-  const venues = await buildVenueNights(
-    [...new Set(rows.flatMap((r) => (r.venue_id ? [r.venue_id] : [])))],
-    options.computedAt,
-    options.night,
-  );
-  for (const r of rows) {
-    const base = contexts.get(r.sky_object_id);
-    const venue = r.venue_id ? venues.get(r.venue_id) : undefined;
-    if (base && venue) contexts.set(contextKey(r.sky_object_id, r.venue_id), withVenue(base, venue));
+  const venues = await buildVenueNights(batch.venue_ids, options.computedAt, options.night);
+  for (const key of batch.venue_keys) {
+    const [objectId, venueId] = key.split('@');
+    const base = contexts.get(objectId);
+    const venue = venues.get(venueId);
+    if (base && venue) contexts.set(contextKey(objectId, venueId), withVenue(base, venue));
   }
-  const statements: BatchStatement[] = rows.map((r) => ({
-    id: r.id,
-    skyObjectId: r.sky_object_id,
-    templateId: r.template_id,
-    venueId: r.venue_id,
-    status: r.status,
-    model: r.model_label !== null && r.model_h0 !== null ? { label: r.model_label, H0: r.model_h0 } : null,
-    json: { acknowledgedTexts: r.acknowledged_texts, inputs: r.inputs ?? '[]', night: r.night },
-    ...(options.previewLocale ? { previewText: r.preview_text } : {}),
-  }));
+  const statements = batch.statements;
   return {
     statements,
     contexts: Object.fromEntries(contexts),

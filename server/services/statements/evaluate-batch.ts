@@ -9,34 +9,15 @@ import type { SkeletonJson } from '@shared/statements/working-codec.ts';
 import { applyOutcome, type PreviousComputation } from './apply-outcome.ts';
 import { packForStorage } from './working-pack.ts';
 
-/** One statement of a batch, as loaded: what it is and what its last computation was. */
-export interface BatchStatement {
+/** One statement of a batch, as loaded: what it is and its last computation (the status rule reads it). */
+export interface BatchStatement extends PreviousComputation {
   id: string;
   skyObjectId: string;
   templateId: string;
   /** The venue whose night it describes, or null. */
   venueId: string | null;
-  status: PreviousComputation['status'];
-  model: PreviousComputation['model'];
-  /**
-   * Its last computation's JSON columns as the database gave their text: parsed where the batch is
-   * computed, so the server's thread neither parses nor copies them (they are most of a batch).
-   */
-  json: { acknowledgedTexts: string | null; inputs: string; night: string | null };
   /** Its current public text in the preview's locale (previews only). */
   previewText?: string | null;
-}
-
-/** A loaded statement's last computation, its JSON columns parsed. */
-function previousComputation(statement: BatchStatement): PreviousComputation {
-  const { acknowledgedTexts, inputs, night } = statement.json;
-  return {
-    status: statement.status,
-    model: statement.model,
-    acknowledgedTexts: acknowledgedTexts === null ? null : JSON.parse(acknowledgedTexts),
-    inputs: JSON.parse(inputs) ?? [],
-    night: night === null ? null : JSON.parse(night),
-  };
 }
 
 /** The cosmology every statement of the batch is computed under, as stored. */
@@ -56,7 +37,13 @@ export const contextKey = (skyObjectId: string, venueId: string | null): string 
 
 /** A batch of statements to compute: plain data, so it can cross to a worker thread. */
 export interface BatchJob {
-  statements: BatchStatement[];
+  /**
+   * The statements as one JSON text (an array of BatchStatement), as PostgreSQL aggregates it: the
+   * server's thread holds one string instead of a thousand rows with their texts and inputs (which
+   * lived long enough to make its young-generation collections pause for tens of milliseconds),
+   * hands it to the worker as a copy of its bytes, and the worker parses it.
+   */
+  statements: string;
   /** Each template context, by contextKey (object id, or object and venue). */
   contexts: Record<string, TemplateContext>;
   /** Null when the adopted settings use no cosmology a statement could name. */
@@ -70,8 +57,13 @@ export interface BatchJob {
 
 /** A batch computed for writing: the rows as JSON text, ready to be a single query parameter. */
 export interface WriteBatchResult {
-  /** JSON array of computed rows (columns named as in the table). */
-  computedRows: string;
+  /**
+   * The computed rows (columns named as in the table) as JSON arrays of at most WRITE_ROWS rows
+   * each, one UPDATE apiece: the server's thread then encodes and sends under a megabyte at a time
+   * and serves requests between them, where a whole batch's three megabytes held it for tens of
+   * milliseconds.
+   */
+  computedRows: string[];
   /** JSON array of broken rows: id, status_reason, settings_version, computed_at. */
   brokenRows: string;
   /** Statements whose measurements or sources changed, and the links they now have (JSON array). */
@@ -93,6 +85,15 @@ export interface PreviewChange {
   newText: string | null;
   newStatus: 'current' | 'changed' | 'broken';
   reason: string | null;
+}
+
+/** Rows per UPDATE (see WriteBatchResult.computedRows). */
+const WRITE_ROWS = 250;
+
+function chunks<T>(items: T[], size: number): T[][] {
+  const out: T[][] = [];
+  for (let i = 0; i < items.length; i += size) out.push(items.slice(i, i + size));
+  return out;
 }
 
 const INPUT_FIELDS = [
@@ -132,7 +133,7 @@ function sameLinks(a: UsedInput[], b: UsedInput[]): boolean {
 export function evaluateBatch(job: BatchJob & { previewLocale: StatementLocale }): PreviewChange[];
 export function evaluateBatch(job: BatchJob): WriteBatchResult;
 export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[] {
-  const ordered = [...job.statements].sort((a, b) =>
+  const ordered = (JSON.parse(job.statements) as BatchStatement[]).sort((a, b) =>
     a.skyObjectId < b.skyObjectId ? -1 : a.skyObjectId > b.skyObjectId ? 1 : 0,
   );
   const computed: Record<string, unknown>[] = [];
@@ -148,7 +149,9 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   for (const statement of ordered) {
     const ctx = job.contexts[contextKey(statement.skyObjectId, statement.venueId)];
     if (!ctx) continue;
-    const previous = previousComputation(statement);
+    // Stored inputs may be JSON null (nothing recorded yet): none.
+    statement.inputs ??= [];
+    const previous: PreviousComputation = statement;
     const result = applyOutcome(previous, evaluateStatement(statement.templateId, ctx), findTemplate(statement.templateId));
     if (job.previewLocale) {
       const newText = result.status === 'broken' ? null : (result.texts[job.previewLocale] ?? null);
@@ -217,7 +220,7 @@ export function evaluateBatch(job: BatchJob): WriteBatchResult | PreviewChange[]
   }
   if (job.previewLocale) return preview;
   return {
-    computedRows: JSON.stringify(computed),
+    computedRows: chunks(computed, WRITE_ROWS).map((rows) => JSON.stringify(rows)),
     brokenRows: JSON.stringify(brokenRows),
     skeletons: [...skeletons],
     relinked,

@@ -7,6 +7,7 @@
  */
 import { SOLAR_MAGNITUDES } from '../solar-magnitudes.ts';
 import type { Ctx, ModelView } from './context.ts';
+import type { ZInterpolant } from './local-modulus.ts';
 import type { Values } from './photometry.ts';
 
 /** Every input a draw can vary, in slot order; H0 (from an H0 range) comes last. */
@@ -60,7 +61,7 @@ export interface SampleEnv {
   /** Bit i set when the input in slot i was given. */
   given: number;
   /** μ(z) over this run's redshift draws (see local-modulus.ts), or null to compute it exactly. */
-  modulusAt: ((z: number) => number) | null;
+  modulusAt: ZInterpolant | null;
 }
 
 /** One draw of a quantity from the inputs in x: NaN where the quantity is not defined. */
