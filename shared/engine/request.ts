@@ -11,6 +11,7 @@ import {
   CustomModelSchema,
   HubbleLawModelSchema,
   PresetModelSchema,
+  SOURCE_LABEL_MAX,
   type CalcRequest,
   type MeasuredInput,
 } from '../schemas/calc.ts';
@@ -74,7 +75,11 @@ const QUANTITIES: readonly string[] = CALC_QUANTITIES;
 /** A measured input as the schema gives it back (keys in its order), or null unless it plainly fits. */
 function plainInput(x: unknown): MeasuredInput | null {
   if (isNumber(x)) return x;
-  if (!isPlain(x) || !isNumber(x.value) || (x.source !== undefined && !(typeof x.source === 'string' && x.source.length <= 500)))
+  if (
+    !isPlain(x) ||
+    !isNumber(x.value) ||
+    (x.source !== undefined && !(typeof x.source === 'string' && x.source.length <= SOURCE_LABEL_MAX))
+  )
     return null;
   const source = x.source === undefined ? {} : { source: x.source };
   if (hasOnly(x, ['value', 'sigma', 'source'])) {

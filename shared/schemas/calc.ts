@@ -4,6 +4,7 @@
  * (zod's number rejects NaN and ±Infinity); the engine adds the domain checks.
  */
 import { z } from 'zod';
+import { CatalogueLimits } from '../validations.ts';
 import { SkyTonightSchema } from './sky-tonight.ts';
 
 /** Every quantity the engine computes, in the order a user interface may list them. */
@@ -36,7 +37,12 @@ export const CALC_UNITS = ['Mpc', 'Gyr', 'mag', 'km/s/Mpc', 'pc', ''] as const;
 
 const finite = z.number();
 const sigma = z.number().nonnegative();
-const source = z.string().max(500).optional();
+/**
+ * Longest source label on an input: a catalogue citation at its longest plus the reference to its
+ * measurement that statements append (" (measurement <uuid>)"), with room to spare.
+ */
+export const SOURCE_LABEL_MAX = CatalogueLimits.citationMax + 100;
+const source = z.string().max(SOURCE_LABEL_MAX).optional();
 
 /**
  * A numeric input: a plain number, or a value with a symmetric (`sigma`) or

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { plainRequest } from '../../../shared/engine/request.ts';
-import { CalcRequestSchema } from '../../../shared/schemas/calc.ts';
+import { CalcRequestSchema, SOURCE_LABEL_MAX } from '../../../shared/schemas/calc.ts';
 import { calcCases } from './mc-regression.cases.ts';
 
 /** Every key of every level, in order: the engine draws inputs in their key order, so it must match zod's. */
@@ -47,7 +47,7 @@ describe('requests that plainly fit the contract, checked without zod', () => {
       { quantity: 'lookback_time', inputs: { z: { value: 1, sigma: -0.1 } } },
       { quantity: 'lookback_time', inputs: { z: { value: 1, sigma: 0.1, minus: 0.1, plus: 0.1 } } },
       { quantity: 'lookback_time', inputs: { z: { value: 1, minus: 0.1 } } },
-      { quantity: 'lookback_time', inputs: { z: { value: 1, sigma: 0.1, source: 'x'.repeat(501) } } },
+      { quantity: 'lookback_time', inputs: { z: { value: 1, sigma: 0.1, source: 'x'.repeat(SOURCE_LABEL_MAX + 1) } } },
       { quantity: 'lookback_time', inputs: { z: 1, band: 'V'.repeat(41) } },
       { quantity: 'lookback_time', inputs: { z: 1, redshift: 1 } },
       { quantity: 'lookback_time', inputs: { z: 1 }, model: { preset: 'planck15' } },

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { calculate } from '../../../shared/engine/calculate.ts';
 import { LY_PER_PC } from '../../../shared/engine/units.ts';
+import { CatalogueLimits } from '../../../shared/validations.ts';
 import {
   evaluateStatement,
   STATEMENT_TEMPLATES,
@@ -47,6 +48,20 @@ describe('statement templates', () => {
       }
       expect(r.working.at(-1)!.title).toMatch(/Public wording/);
     }
+  });
+
+  it('a measurement citing a source at the longest citation allowed still gives every template its figure', () => {
+    const longest = {
+      id: 'src-long',
+      citation: `Corrie Vale Survey Team (demo), ${'a long catalogue title '.repeat(30)}`.slice(0, CatalogueLimits.citationMax),
+    };
+    const id = '3f1c2a9e-5b7d-4c1e-9a2f-0d6b8e4c7a11';
+    const cited = ctx('Q1', [
+      m(id, 'redshift', 0.241, { sigma: 0.0005, source: longest }),
+      m('v', 'apparent_magnitude', 14.6, { sigma: 0.1, band: 'V', unit: 'mag', source: longest }),
+      m('a', 'spectral_index', -0.5, { sigma: 0.2 }),
+    ]);
+    for (const t of STATEMENT_TEMPLATES.filter((x) => !x.needsVenue)) expect(evaluateStatement(t.id, cited).ok, t.id).toBe(true);
   });
 
   it('light-travel uses the engine’s lookback time and age (reference-tested) with the cosmology named', () => {
