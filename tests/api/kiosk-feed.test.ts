@@ -4,30 +4,24 @@ import { appBaseUrl } from '../../server/config.ts';
 import { KioskScreen, Page } from '../../server/models/index.ts';
 import { publicPageUrl } from '../../server/services/publishing/index.ts';
 import { kioskFeedStats } from '../../server/services/publishing/feed-cache.ts';
-import { getTestApp, resetDatabase } from '../support/app.ts';
+import { getTestApp } from '../support/app.ts';
 import {
   buildKioskMedia,
-  channelWithScreen as channelWithScreenAt,
+  freshPublishingDesk,
   getFeed,
   makeVenue,
   pairedScreen,
   publishedPage,
-  publishingCrew,
+  type PublishingDesk,
 } from '../support/publishing.ts';
 
-type Crew = Awaited<ReturnType<typeof publishingCrew>>;
-let crew: Crew;
-let venue: { id: string; name: string };
+let crew: PublishingDesk['crew'];
+let venue: PublishingDesk['venue'];
+let channelWithScreen: PublishingDesk['channelWithScreen'];
 
 beforeAll(async () => {
-  await getTestApp();
-  await resetDatabase();
-  crew = await publishingCrew();
-  venue = await makeVenue(crew.admin.agent, 'Feed Test Dome');
+  ({ crew, venue, channelWithScreen } = await freshPublishingDesk('Feed Test Dome'));
 });
-
-/** A channel at this file's venue with one paired screen. */
-const channelWithScreen = (name: string, screenName: string) => channelWithScreenAt(crew, venue.id, name, screenName);
 
 const addSlide = async (channelId: string, body: Record<string, unknown>) => {
   const res = await crew.editor.agent.post(`/api/channels/${channelId}/slides`).send(body);

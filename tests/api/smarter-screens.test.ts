@@ -3,29 +3,16 @@ import { beforeAll, describe, expect, it } from 'vitest';
 import { appBaseUrl } from '../../server/config.ts';
 import { KioskScreen, OutboxMessage } from '../../server/models/index.ts';
 import { reportSilentScreens } from '../../server/services/publishing/index.ts';
-import { getTestApp, resetDatabase } from '../support/app.ts';
-import {
-  channelWithScreen as channelWithScreenAt,
-  getFeed,
-  makeVenue,
-  pairedScreen,
-  publishedPage,
-  publishingCrew,
-} from '../support/publishing.ts';
+import { getTestApp } from '../support/app.ts';
+import { freshPublishingDesk, getFeed, pairedScreen, publishedPage, type PublishingDesk } from '../support/publishing.ts';
 
-type Crew = Awaited<ReturnType<typeof publishingCrew>>;
-let crew: Crew;
-let venue: { id: string; name: string };
+let crew: PublishingDesk['crew'];
+let venue: PublishingDesk['venue'];
+let channelWithScreen: PublishingDesk['channelWithScreen'];
 
 beforeAll(async () => {
-  await getTestApp();
-  await resetDatabase();
-  crew = await publishingCrew();
-  venue = await makeVenue(crew.admin.agent, 'Smarter Screens Dome');
+  ({ crew, venue, channelWithScreen } = await freshPublishingDesk('Smarter Screens Dome'));
 });
-
-/** A channel at this file's venue with one paired screen. */
-const channelWithScreen = (name: string, screenName: string) => channelWithScreenAt(crew, venue.id, name, screenName);
 
 const heartbeat = async (token: string, body: object) =>
   supertest(await getTestApp())

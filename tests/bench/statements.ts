@@ -10,10 +10,9 @@
  * second, bulk against per-row).
  * The issue's targets: recompute under 20 s, one statement under 5 ms.
  */
-import fs from 'node:fs';
-import path from 'node:path';
 import { monitorEventLoopDelay, performance } from 'node:perf_hooks';
 import { ensureDatabase, startLocalPostgres, stopLocalPostgres } from '../../server/db/local-postgres.ts';
+import { postgresCpuSeconds } from './postgres-cpu.ts';
 
 // BENCH_PG_PORT lets two checkouts run it one after the other on a machine shared with others.
 const PG = {
@@ -62,27 +61,6 @@ async function seed(query: (sql: string) => Promise<unknown>): Promise<void> {
     SELECT gen_random_uuid(), o.id, t, 'broken', 'Not computed yet.', 1, now(), now(), now()
       FROM sky_objects o CROSS JOIN unnest(ARRAY['${TEMPLATES.join("','")}']) t`);
   await query('ANALYZE');
-}
-
-const TICKS = 100; // USER_HZ on Linux
-
-/** CPU seconds used so far by the cluster: the postmaster, its live children, and the children it has reaped. */
-function postgresCpuSeconds(dataDir: string): number {
-  const pid = Number(fs.readFileSync(path.join(dataDir, 'postmaster.pid'), 'utf8').split('\n')[0]);
-  const stat = (p: number | string) => fs.readFileSync(`/proc/${p}/stat`, 'utf8').split(') ')[1].split(' ');
-  // Fields after the command: state ppid … utime (12th) stime cutime cstime.
-  const own = stat(pid);
-  let ticks = Number(own[11]) + Number(own[12]) + Number(own[13]) + Number(own[14]);
-  for (const entry of fs.readdirSync('/proc')) {
-    if (!/^\d+$/.test(entry)) continue;
-    try {
-      const f = stat(entry);
-      if (Number(f[1]) === pid) ticks += Number(f[11]) + Number(f[12]);
-    } catch {
-      // The process ended meanwhile; the postmaster's cutime has it.
-    }
-  }
-  return ticks / TICKS;
 }
 
 /** Wall time, this process's CPU (every thread, the workers included) and PostgreSQL's CPU over fn. */

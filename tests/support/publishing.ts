@@ -2,7 +2,7 @@ import type { JSONContent } from '@tiptap/core';
 import supertest from 'supertest';
 import type { Agent } from 'supertest';
 import { Media, MediaRendition, type User } from '../../server/models/index.ts';
-import { getTestApp, signedInAgent } from './app.ts';
+import { getTestApp, resetDatabase, signedInAgent } from './app.ts';
 import { doc, pageWithBody, paragraph, quasarWithStatements, statement, text } from './pages.ts';
 
 type Signed = Awaited<ReturnType<typeof signedInAgent>>;
@@ -149,6 +149,24 @@ export async function channelWithScreen(
   if (assigned.status !== 200) throw new Error(`assign: ${JSON.stringify(assigned.body)}`);
   return { channelId: channel.body.data.id as string, ...screen };
 }
+
+/**
+ * What the feed and screen tests start from: an empty database, the four roles signed in, a venue,
+ * and a way to make a channel there with one paired screen.
+ * @param venueName the venue's name
+ */
+export async function freshPublishingDesk(venueName: string) {
+  await getTestApp();
+  await resetDatabase();
+  const crew = await publishingCrew();
+  const venue = await makeVenue(crew.admin.agent, venueName);
+  return {
+    crew,
+    venue,
+    channelWithScreen: (name: string, screenName: string) => channelWithScreen(crew, venue.id, name, screenName),
+  };
+}
+export type PublishingDesk = Awaited<ReturnType<typeof freshPublishingDesk>>;
 
 /** GET /api/kiosk/feed with a screen's token (and an If-None-Match when given). */
 export async function getFeed(token: string, etag?: string) {
