@@ -2,6 +2,7 @@ import type { IncomingMessage, ServerResponse } from 'node:http';
 import type { RequestHandler } from 'express';
 import { signInBusyError, signInWouldWaitTooLong, tryAdmitSignIn } from '../auth/password-pool.ts';
 import type { FrontAnswer } from '../front-door.ts';
+import { answerInTurns } from './answer-in-turns.ts';
 import { preparedErrorAnswer } from './error-handler.ts';
 
 const answerBusy = preparedErrorAnswer(signInBusyError);
@@ -33,19 +34,23 @@ export const admitSignInRequest: RequestHandler = (_req, res, next) => {
 /**
  * The door's refusal once more, ahead of Express (server/front-door.ts), for the exact request a
  * sign-in form sends (POST /api/auth/sign-in): while the hashing threads are booked up, the security
- * headers, no-store and the prepared 429 `busy`. Admitted sign-ins, and any other form of the path,
- * go on to the app, where admitSignInRequest takes their place.
+ * headers, no-store and the prepared 429 `busy`, written a slice of a burst per turn of the event
+ * loop (answerInTurns). Admitted sign-ins, and any other form of the path, go on to the app, where
+ * admitSignInRequest takes their place.
  * @param security the app's security headers, recorded once (fixedHeaders)
  */
 export function refuseBusySignInEarly(
   security: (req: IncomingMessage, res: ServerResponse, next: () => void) => void,
 ): FrontAnswer {
   const noop = () => undefined;
-  return (req, res) => {
-    if (req.method !== 'POST' || req.url !== '/api/auth/sign-in' || !signInWouldWaitTooLong()) return false;
-    security(req, res, noop);
+  const refuse = answerInTurns((res) => {
+    security(res.req, res, noop);
     res.setHeader('Cache-Control', 'no-store');
     answerBusy(res);
+  });
+  return (req, res) => {
+    if (req.method !== 'POST' || req.url !== '/api/auth/sign-in' || !signInWouldWaitTooLong()) return false;
+    refuse(res);
     return true;
   };
 }

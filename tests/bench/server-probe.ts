@@ -9,8 +9,11 @@
  * time of its own): the report also says what ran during each stall of the event loop longer than
  * that, from a CPU profile of the run: the functions with the most time of their own, and the
  * GC pauses that fell inside it; the last entry is the whole run. BENCH_PROFILE_OUT=<file> keeps
- * that profile.
+ * that profile. With BENCH_STALL_PROFILE=0 there is no profiler (much cheaper): each stall says
+ * instead how long the thread ran in it, how long it waited for a core, and how many requests
+ * began in it.
  */
+import diagnostics from 'node:diagnostics_channel';
 import fs from 'node:fs';
 import { Session } from 'node:inspector/promises';
 import { monitorEventLoopDelay, PerformanceObserver, performance } from 'node:perf_hooks';
@@ -62,19 +65,41 @@ let schedAtReset = mainThreadSched();
 let eluAtReset = performance.eventLoopUtilization();
 
 const stallMs = Number(process.env.BENCH_STALL_MS ?? 0);
-const session = stallMs > 0 ? new Session() : undefined;
+const session = stallMs > 0 && process.env.BENCH_STALL_PROFILE !== '0' ? new Session() : undefined;
 /** Gaps between ticks of a 2-ms timer longer than stallMs, as [start, end] in monotonic µs. */
 let gaps: Array<[number, number]> = [];
-if (session) {
-  session.connect();
-  await session.post('Profiler.enable');
-  await session.post('Profiler.setSamplingInterval', { interval: Number(process.env.BENCH_STALL_SAMPLE_US ?? 250) });
+/** For each gap: what the thread did in it (ms ran, ms waited for a core, requests begun). */
+let gapSched: Array<{ ranMs: number; waitMs: number; requests: number }> = [];
+let requestsBegun = 0;
+let requestsAtReset = 0;
+let resetAtUs = Number(process.hrtime.bigint() / 1000n);
+if (stallMs > 0) {
+  diagnostics.subscribe('http.server.request.start', () => {
+    requestsBegun += 1;
+  });
+  if (session) {
+    session.connect();
+    await session.post('Profiler.enable');
+    await session.post('Profiler.setSamplingInterval', { interval: Number(process.env.BENCH_STALL_SAMPLE_US ?? 250) });
+  }
   const now = () => Number(process.hrtime.bigint() / 1000n);
   let last = now();
+  let lastSched = mainThreadSched();
+  let lastRequests = 0;
   setInterval(() => {
     const t = now();
-    if (t - last > stallMs * 1000) gaps.push([last, t]);
+    const sched = mainThreadSched();
+    if (t - last > stallMs * 1000) {
+      gaps.push([last, t]);
+      gapSched.push({
+        ranMs: Math.round((sched.cpuMs - lastSched.cpuMs) * 10) / 10,
+        waitMs: Math.round((sched.waitMs - lastSched.waitMs) * 10) / 10,
+        requests: requestsBegun - lastRequests,
+      });
+    }
     last = t;
+    lastSched = sched;
+    lastRequests = requestsBegun;
   }, 2).unref();
 }
 
@@ -131,6 +156,9 @@ process.on('message', async (message) => {
     gc = { count: 0, totalMs: 0, maxMs: 0, longest: '' };
     pauses = [];
     gaps = [];
+    gapSched = [];
+    resetAtUs = Number(process.hrtime.bigint() / 1000n);
+    requestsAtReset = requestsBegun;
     cpuAtReset = process.cpuUsage();
     schedAtReset = mainThreadSched();
     eluAtReset = performance.eventLoopUtilization();
@@ -148,6 +176,22 @@ process.on('message', async (message) => {
       busyMs: Math.round(performance.eventLoopUtilization(eluAtReset).active),
       stalls: undefined as Stall[] | undefined,
     };
+    if (stallMs > 0 && !session) {
+      report.stalls = gaps.map(([a, b], i) => ({
+        startMs: Math.round((a - resetAtUs) / 1000),
+        ms: Math.round((b - a) / 100) / 10,
+        gcMs: Math.round(pauses.reduce((sum, [s, e]) => sum + Math.max(0, Math.min(e, b) - Math.max(s, a)), 0) / 100) / 10,
+        top: [
+          `thread ran ${gapSched[i].ranMs} ms, waited ${gapSched[i].waitMs} ms for a core; ${gapSched[i].requests} requests begun`,
+        ],
+      }));
+      report.stalls.push({
+        startMs: 0,
+        ms: Math.round((Number(process.hrtime.bigint() / 1000n) - resetAtUs) / 1000),
+        gcMs: gc.totalMs,
+        top: [`${requestsBegun - requestsAtReset} requests begun`],
+      });
+    }
     if (session) {
       const { profile } = await session.post('Profiler.stop');
       report.stalls = explainStalls(profile as Profile);

@@ -8,12 +8,14 @@
  * NODE_ENV=production and the default log level; only the client build is a stand-in page, and the
  * per-address limit is lifted (one client sends all 200). The event-loop delay, GC pauses and CPU
  * time printed are measured inside that server (tests/bench/server-probe.ts); the 200 clients run
- * in this process. Prints how many answered 200, 429 and 5xx, p50/p99 latency, and, as a peer
+ * in a process of their own at low priority (tests/bench/sign-in-clients.ts). Prints how many answered 200, 429 and 5xx, p50/p99 latency, and, as a peer
  * measured in the same run, the latency of a cheap request (`/api/health`) sent while the
  * sign-ins were in flight, and the same figures for a quiet stretch before the burst.
  * BENCH_STALL_MS=40 also prints what ran in each event-loop stall over 40 ms (diagnostics: the
  * profiler it runs slows the server down) and keeps the burst's CPU profile in
  * .data/bench-sign-in/burst.cpuprofile.
+ * Each client first loads a page (as a browser loads the sign-in form), so the sign-ins arrive on
+ * open connections; BENCH_SIGN_IN_FRESH_CONNECTIONS=1 makes each open its own in the burst.
  * Targets (issue 15): no 5xx; the event loop never blocked over 50 ms.
  */
 import { type ChildProcess, spawn } from 'node:child_process';
@@ -21,8 +23,8 @@ import fs from 'node:fs';
 import net from 'node:net';
 import path from 'node:path';
 import { ensureDatabase, localDatabaseUrl, startLocalPostgres, stopLocalPostgres } from '../../server/db/local-postgres.ts';
-import { Worker } from 'node:worker_threads';
 import { productionNodeOptions } from './node-options.ts';
+import type { SignInResult } from './sign-in-clients.ts';
 
 const CONCURRENT = Number(process.env.SIGN_INS ?? 200);
 const dataDir = path.resolve('.data/bench-sign-in-pg');
@@ -139,42 +141,23 @@ await ask('reset');
 await healthPings(quietHealth);
 const quiet = (await ask('report')) as ServerReport;
 
-// The 200 clients run in a worker thread, so the health pings below keep a loop of their own. They
-// stand in for browsers on other machines: the thread runs at nice 10 (Linux), so it takes a core
-// only when the server's threads do not want it, and the server's figures stay the server's.
-const clientCode = `
-try {
-  const tid = Number(require('node:fs').readlinkSync('/proc/thread-self').split('/').pop());
-  require('node:os').setPriority(tid, 10);
-} catch {}
-const { parentPort, workerData } = require('node:worker_threads');
-const { base, emails, password } = workerData;
-Promise.all(emails.map(async (email) => {
-  const t0 = performance.now();
-  const res = await fetch(base + '/api/auth/sign-in', {
-    method: 'POST', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ email, password }),
+// The 200 clients run in a process of their own under `nice -n 10` (tests/bench/sign-in-clients.ts),
+// standing in for browsers on other machines; the health pings below keep this process's loop.
+const clients: ChildProcess = spawn('nice', ['-n', '10', process.execPath, '--import', 'tsx', 'tests/bench/sign-in-clients.ts'], {
+  stdio: ['ignore', 'inherit', 'inherit', 'ipc'],
+});
+const fromClients = <T>() =>
+  new Promise<T>((resolve, reject) => {
+    clients.once('message', (m) => resolve(m as T));
+    clients.once('exit', (code) => reject(new Error(`the clients' process exited (${code})`)));
   });
-  const body = await res.text();
-  let code = '';
-  try { code = JSON.parse(body).error?.code ?? ''; } catch {}
-  return { status: res.status, code, ms: performance.now() - t0, retryAfter: res.headers.get('retry-after') };
-})).then((results) => parentPort.postMessage(results));
-`;
-// The worker starts (and compiles fetch) before the server's figures are reset.
-const go = new SharedArrayBuffer(4);
-const client = new Worker(`Atomics.wait(new Int32Array(require('node:worker_threads').workerData.go), 0, 0);${clientCode}`, {
-  eval: true,
-  workerData: { base, emails, password, go },
-});
-const burst = new Promise<Array<{ status: number; code: string; ms: number; retryAfter: string | null }>>((resolve, reject) => {
-  client.once('message', resolve);
-  client.once('error', reject);
-});
-await new Promise((r) => client.once('online', r));
+const clientsReady = fromClients<'ready'>();
+clients.send({ base, emails, password, freshConnections: process.env.BENCH_SIGN_IN_FRESH_CONNECTIONS === '1' });
+await clientsReady;
+const burst = fromClients<SignInResult[]>();
 await ask('reset');
 const started = Date.now();
-Atomics.store(new Int32Array(go), 0, 1);
-Atomics.notify(new Int32Array(go), 0);
+clients.send('go');
 const healthTimes: number[] = [];
 const peer = healthPings(healthTimes);
 const [results] = await Promise.all([burst, peer]);
@@ -191,7 +174,7 @@ const pct = (xs: number[], p: number) => {
 };
 const fivexx = [...statuses].filter(([s]) => s >= 500).reduce((n, [, c]) => n + c, 0);
 console.log(
-  `sign-in bench: ${CONCURRENT} correct sign-ins at once, bcrypt cost 11, ${elapsed} ms in all; ` +
+  `sign-in bench: ${CONCURRENT} correct sign-ins at once (${process.env.BENCH_SIGN_IN_FRESH_CONNECTIONS === '1' ? 'each on a new connection' : 'on kept-alive connections'}), bcrypt cost 11, ${elapsed} ms in all; ` +
     `server as npm start runs it (Node ${process.version} ${productionNodeOptions().join(' ') || '(no options)'}, tsx), ready in ${readyMs} ms`,
 );
 console.log(`  answers: ${[...statuses].map(([s, c]) => `${c} × ${s}`).join(', ')} (5xx: ${fivexx}, target 0)`);
