@@ -59,6 +59,9 @@ describe('checked statements in the browser', () => {
     await screenshot(page, 'cosmology-preview');
     await page.getByRole('button', { name: /Switch to WMAP/ }).click();
     await expect.poll(() => page.getByText(/Switched\. Every statement is being recomputed/).count()).toBe(1);
+    // A new preview starts a new decision: the last switch's confirmation goes.
+    await page.getByRole('button', { name: 'Preview the change' }).click();
+    await expect.poll(() => page.getByText(/Switched\. Every statement is being recomputed/).count()).toBe(0);
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL(/sign-in/);
 

@@ -51,7 +51,17 @@ export function Component() {
             }}
           />
           <div className="flex flex-wrap items-center gap-2">
-            <Button variant="secondary" disabled={!model} busy={preview.isPending} onClick={() => model && preview.mutate(model)}>
+            <Button
+              variant="secondary"
+              disabled={!model}
+              busy={preview.isPending}
+              onClick={() => {
+                if (!model) return;
+                // A new preview starts a new decision: the last switch's "Switched." no longer applies.
+                change.reset();
+                preview.mutate(model);
+              }}
+            >
               Preview the change
             </Button>
             {!model && <span className="text-sm text-broken">Correct the field marked above to preview this model.</span>}
