@@ -1,4 +1,5 @@
 import type { CalcRequest, CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
+import { engineMessageInWords } from '../contract/words.ts';
 import { calculate } from '../engine/calculate.ts';
 import { resolveModel } from '../engine/model-resolve.ts';
 import { budgetStep, h0RangeFor, withPeculiarVelocity } from './model-uncertainty.ts';
@@ -83,6 +84,19 @@ export function distanceInputs(basis: DistanceBasis): Partial<Record<'z' | 'dist
   return { parallax_mas: asInput(basis.measurement) };
 }
 
+const lowerFirst = (s: string) => `${s.charAt(0).toLowerCase()}${s.slice(1)}`;
+
+/**
+ * A statement's reason for failing, from the engine's message: in words rather than contract keys
+ * ("parallax_mas"), and without the calculator's advice to type a smaller uncertainty (a statement's
+ * uncertainty is its measurement's).
+ * @param message the engine's message
+ * @returns e.g. "The calculation failed: parallax (mas) must be greater than 0 (the value is −130)."
+ */
+export function failureInWords(message: string): string {
+  return `The calculation failed: ${lowerFirst(engineMessageInWords(message).replace(/; give a smaller uncertainty$/, ''))}.`;
+}
+
 /** Runs the engine; a failure becomes a TemplateProblem that names the engine's reason. */
 export function run(request: CalcRequest): CalcSuccess {
   const result = calculate(request);
@@ -90,7 +104,7 @@ export function run(request: CalcRequest): CalcSuccess {
     throw new TemplateProblem({
       ok: false,
       code: 'calculation_failed',
-      reason: `The calculation failed: ${result.error.message}.`,
+      reason: failureInWords(result.error.message),
     });
   }
   return result;

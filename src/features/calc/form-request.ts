@@ -1,12 +1,11 @@
 /**
- * Turns the calculator form into a calculation request, and server messages back
- * into words on the right field. Which inputs a quantity takes comes from the
+ * Turns the calculator form into a calculation request, and finds the field a server
+ * message is about (the message itself is put in words by shared/contract/words.ts). Which inputs a quantity takes comes from the
  * engine's own QUANTITY_SPECS, so the form never offers an input the engine would refuse.
  */
 import { QUANTITY_SPECS } from '@shared/engine/quantities/registry.ts';
 import {
   CALC_NUMERIC_INPUTS,
-  CALC_QUANTITIES,
   CalcRequestSchema,
   type CalcModel,
   type CalcNumericInput,
@@ -14,7 +13,7 @@ import {
   type CalcRequest,
   type MeasuredInput,
 } from '@shared/schemas/calc.ts';
-import { INPUT_LABELS, QUANTITY_LABELS } from './labels.ts';
+import { INPUT_LABELS } from '@shared/contract/words.ts';
 
 /** One numeric input as typed: a value and an optional symmetric or asymmetric uncertainty. */
 export interface MeasuredField {
@@ -223,30 +222,6 @@ export function buildRequest(v: CalcFormValues): { request: CalcRequest } | { pr
   if (!parsed.success)
     return { problems: [{ path: 'root', message: parsed.error.issues[0]?.message ?? 'The request is not valid.' }] };
   return { request: parsed.data };
-}
-
-const KEY_PATTERN = new RegExp(
-  `\\b(${[...CALC_NUMERIC_INPUTS, ...CALC_QUANTITIES].sort((a, b) => b.length - a.length).join('|')})\\b`,
-  'g',
-);
-
-/**
- * Rewrites an engine message in the form's words: input and quantity keys become their labels.
- * @param message e.g. "parallax_mas must be greater than 0 (got -1)"
- * @returns e.g. "Parallax (mas) must be greater than 0 (got −1)"
- */
-export function inWords(message: string): string {
-  const text = message
-    .replace(KEY_PATTERN, (key) => {
-      if (key in INPUT_LABELS) {
-        const l = INPUT_LABELS[key as CalcNumericInput];
-        return `${l.label.toLowerCase()}${l.unit ? ` (${l.unit})` : ''}`;
-      }
-      return QUANTITY_LABELS[key as CalcQuantity].toLowerCase();
-    })
-    .replace(/\bmodel\.(\w+)/g, 'the model’s $1')
-    .replace(/(\(got )-/g, '$1−');
-  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 /**

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { calculate } from '../../../shared/engine/calculate.ts';
 import type { CalcSuccess } from '../../../shared/schemas/calc.ts';
 import { formatSig } from '../../../src/components/working/format-number.ts';
-import { buildRequest, defaultFormValues, fieldForMessage, fieldsFor, inWords } from '../../../src/features/calc/form-request.ts';
+import { engineMessageInWords } from '../../../shared/contract/words.ts';
+import { buildRequest, defaultFormValues, fieldForMessage, fieldsFor } from '../../../src/features/calc/form-request.ts';
 import { HUBBLE_KEY, chartModel, chartRows, seriesKey } from '../../../src/features/charts/distance-curves.ts';
 
 describe('the calculator form', () => {
@@ -54,7 +55,9 @@ describe('the calculator form', () => {
     expect(fieldForMessage('the uncertainty on z reaches values where lookback_time is not defined (3.0 % of draws)', v)).toBe(
       'inputs.z.sigma',
     );
-    expect(inWords('parallax_mas must be greater than 0 (got -1)')).toBe('Parallax (mas) must be greater than 0 (got −1)');
+    expect(engineMessageInWords('parallax_mas must be greater than 0 (got -1)')).toBe(
+      'Parallax (mas) must be greater than 0 (the value is −1)',
+    );
   });
 });
 

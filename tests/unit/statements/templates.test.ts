@@ -96,6 +96,25 @@ describe('statement templates', () => {
     expect(r.footnotes).toBeNull();
   });
 
+  it('a statement that cannot be worked out says why in words, not in the contract keys', () => {
+    // A parallax typed with the wrong sign (the catalogue warns, but accepts it when confirmed).
+    const r = evaluateStatement('distance-today', ctx('S2', [m('p', 'parallax', -130.23, { sigma: 0.36, unit: 'mas' })]));
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.code).toBe('calculation_failed');
+      expect(r.reason).toBe('The calculation failed: parallax (mas) must be greater than 0 (the value is −130.23).');
+    }
+    // A statement's uncertainty is its measurement's: no advice to type a smaller one (z 0.02 ± 0.5:
+    // about 2 % of draws fall below z = −1, where no lookback time exists).
+    const vague = evaluateStatement('light-travel', ctx('Q4', [m('z', 'redshift', 0.02, { sigma: 0.5 })]));
+    expect(vague.ok).toBe(false);
+    if (!vague.ok) {
+      expect(vague.reason).toMatch(
+        /^The calculation failed: the uncertainty on redshift z reaches values where lookback time is not defined \([\d.]+ % of draws\)\.$/,
+      );
+    }
+  });
+
   it('refuses to render without its inputs and says which', () => {
     const r = evaluateStatement('luminosity-sun', ctx('Q2', [m('z', 'redshift', 0.5)]));
     expect(r.ok).toBe(false);

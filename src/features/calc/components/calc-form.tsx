@@ -6,8 +6,9 @@ import { useCalculate } from '@/api/calc.ts';
 import { Button } from '@/components/ui/button.tsx';
 import { SelectField } from '@/components/ui/field.tsx';
 import { Notice } from '@/components/ui/notice.tsx';
-import { buildRequest, defaultFormValues, fieldForMessage, fieldsFor, inWords, type CalcFormValues } from '../form-request.ts';
-import { GROUP_LABELS, QUANTITY_LABELS, bandLabel } from '../labels.ts';
+import { engineMessageInWords, QUANTITY_LABELS } from '@shared/contract/words.ts';
+import { buildRequest, defaultFormValues, fieldForMessage, fieldsFor, type CalcFormValues } from '../form-request.ts';
+import { GROUP_LABELS, bandLabel } from '../labels.ts';
 import { MeasuredInputField } from './measured-input-field.tsx';
 import { ModelPicker } from './model-picker.tsx';
 
@@ -83,7 +84,7 @@ export function CalcForm({
       calc.mutate(built.request, {
         onSuccess: (result) => onResult(result, built.request),
         onError: (error) => {
-          const words = inWords(error.message);
+          const words = engineMessageInWords(error.message);
           const path = error.status === 400 ? fieldForMessage(error.message, values) : undefined;
           if (path) setError(path as Path<CalcFormValues>, { message: words });
           setServerError(words);

@@ -1,7 +1,8 @@
 import type { CalcSuccess } from '@shared/schemas/calc.ts';
 import { Notice } from '@/components/ui/notice.tsx';
 import { formatFull, formatInWords, formatSig } from '@/components/working/format-number.ts';
-import { QUANTITY_LABELS, UNIT_WORDS } from '../labels.ts';
+import { QUANTITY_LABELS } from '@shared/contract/words.ts';
+import { UNIT_WORDS } from '../labels.ts';
 
 function conversionText(c: { value: number; unit: string }): string | undefined {
   if (c.unit === 'Gly') return undefined; // the light-year line already says "billion light-years"

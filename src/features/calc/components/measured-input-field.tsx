@@ -1,7 +1,7 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import type { CalcNumericInput } from '@shared/schemas/calc.ts';
 import type { CalcFormValues } from '../form-request.ts';
-import { INPUT_LABELS } from '../labels.ts';
+import { INPUT_LABELS } from '@shared/contract/words.ts';
 
 const BOX =
   'block w-full rounded-md border bg-panel px-3 py-2 text-sm text-ink tabular-nums placeholder:text-muted/70 focus:border-accent focus:outline-none focus:ring-2 focus:ring-accent/30';
