@@ -5,6 +5,8 @@ export interface DataColumn {
   label: string;
   align?: 'right';
   hidden?: boolean;
+  /** Extra classes for the heading, e.g. `hidden sm:table-cell` for a column only wide screens show (its cells take the same). */
+  className?: string;
 }
 
 /** What the shared table frame takes besides its columns. */
@@ -37,7 +39,7 @@ export function DataTable({ columns, children, caption, compact = false, footer 
                 <th
                   key={c.label}
                   scope="col"
-                  className={`${cell} py-2.5 font-semibold ${c.align === 'right' ? 'text-right' : ''}`}
+                  className={`${cell} py-2.5 font-semibold ${c.align === 'right' ? 'text-right' : ''} ${c.className ?? ''}`}
                 >
                   {c.hidden ? <span className="sr-only">{c.label}</span> : c.label}
                 </th>

@@ -10,6 +10,8 @@ const uncertainty = (i: StatementDto['inputs'][number]) =>
       ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}`
       : 'not stated';
 
+const WIDE_ONLY = 'hidden sm:table-cell';
+
 /** The preferred measurements the statement used, each with its source (or why there are none). */
 export function StatementInputs({ statement }: { statement: StatementDto }) {
   if (statement.inputs.length === 0) {
@@ -33,22 +35,33 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
       <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">
         Measurements used
       </h2>
-      <DataTable columns={[{ label: 'Quantity' }, { label: 'Value' }, { label: 'Uncertainty (68 %)' }, { label: 'Source' }]}>
-        {statement.inputs.map((i) => (
-          <tr key={i.measurementId} className="h-10 border-b border-rule last:border-0">
-            <td className="px-4 py-2">
-              {i.quantity.replaceAll('_', ' ')}
-              {i.band ? ` (${i.band})` : ''}
-            </td>
-            <td className="px-4 py-2 tabular-nums">
-              {formatSig(i.value)} {i.unit}
-            </td>
-            <td className={`px-4 py-2 tabular-nums ${i.sigma == null && i.minus == null ? 'text-changed' : ''}`}>
-              {uncertainty(i)}
-            </td>
-            <td className="px-4 py-2 text-muted">{i.citation}</td>
-          </tr>
-        ))}
+      {/* On a phone the uncertainty goes under the value and the source under the quantity. */}
+      <DataTable
+        columns={[
+          { label: 'Quantity' },
+          { label: 'Value' },
+          { label: 'Uncertainty (68 %)', className: WIDE_ONLY },
+          { label: 'Source', className: WIDE_ONLY },
+        ]}
+      >
+        {statement.inputs.map((i) => {
+          const unstated = i.sigma == null && i.minus == null ? 'text-changed' : '';
+          return (
+            <tr key={i.measurementId} className="h-10 border-b border-rule align-baseline last:border-0">
+              <td className="px-4 py-2">
+                {i.quantity.replaceAll('_', ' ')}
+                {i.band ? ` (${i.band})` : ''}
+                <span className="mt-0.5 block text-xs text-muted sm:hidden">{i.citation}</span>
+              </td>
+              <td className="px-4 py-2 tabular-nums">
+                {formatSig(i.value)} {i.unit}
+                <span className={`mt-0.5 block text-xs sm:hidden ${unstated || 'text-muted'}`}>{uncertainty(i)}</span>
+              </td>
+              <td className={`px-4 py-2 tabular-nums ${unstated} ${WIDE_ONLY}`}>{uncertainty(i)}</td>
+              <td className={`px-4 py-2 text-muted ${WIDE_ONLY}`}>{i.citation}</td>
+            </tr>
+          );
+        })}
       </DataTable>
     </section>
   );
