@@ -23,6 +23,12 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
         {row.original.designations.length > 0 && (
           <span className="block truncate text-xs text-muted">{row.original.designations.slice(0, 3).join(' · ')}</span>
         )}
+        {/* On a phone the kind and constellation columns give way; they are read here instead. */}
+        <span className="block text-xs text-muted sm:hidden">
+          {[KIND_LABELS[row.original.kind], row.original.constellation && constellationName(row.original.constellation)]
+            .filter(Boolean)
+            .join(' · ')}
+        </span>
       </div>
     ),
   },
@@ -55,6 +61,13 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
     ),
   },
 ];
+
+/** Columns a narrow screen leaves out (the name cell repeats the kind and constellation there). */
+const WIDE_ONLY: Record<string, string> = {
+  kind: 'hidden sm:table-cell',
+  ra: 'hidden md:table-cell',
+  constellation: 'hidden sm:table-cell',
+};
 
 interface Props {
   rows: SkyObjectRowDto[];
@@ -102,7 +115,7 @@ export function CatalogueTable({ rows, total, totalExact, page, pageSize, sort, 
                     <th
                       key={header.id}
                       scope="col"
-                      className="px-4 py-2.5 font-semibold"
+                      className={`px-4 py-2.5 font-semibold ${WIDE_ONLY[header.column.id] ?? ''}`}
                       aria-sort={sorted ? (sorted === 'asc' ? 'ascending' : 'descending') : undefined}
                     >
                       {header.column.getCanSort() ? (
@@ -127,7 +140,7 @@ export function CatalogueTable({ rows, total, totalExact, page, pageSize, sort, 
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="h-10 border-b border-rule last:border-0">
                 {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-4 py-1.5 align-middle">
+                  <td key={cell.id} className={`px-4 py-1.5 align-middle ${WIDE_ONLY[cell.column.id] ?? ''}`}>
                     {flexRender(cell.column.columnDef.cell, cell.getContext())}
                   </td>
                 ))}
