@@ -50,8 +50,86 @@ const columns = (atTime: string): DataColumn[] => [
   { label: 'Light takes', align: 'right' },
 ];
 
-/** The planets tonight: one row each, figures in tabular numerals, words where a time cannot be given. */
+/** One planet as a card, for a phone: the table's eight columns do not fit 390 px. */
+function PlanetCard({ planet: p, atTime }: { planet: PlanetTonight; atTime: string }) {
+  const rows: Array<[string, string]> =
+    p.times.state === 'rises-and-sets'
+      ? [
+          ['Rises', p.times.rise.text],
+          ['Highest', p.times.transit.text],
+          ['Sets', p.times.set.text],
+        ]
+      : [];
+  const earlier = p.times.state === 'rises-and-sets' ? p.times.earlierSet : undefined;
+  const later = p.times.state === 'rises-and-sets' ? p.times.laterRise : undefined;
+  return (
+    <li className="rounded-lg border border-rule bg-panel p-3 text-sm">
+      <p className="font-medium">{p.name}</p>
+      <div className="mt-1">
+        <Visible planet={p} />
+      </div>
+      <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
+        {/* In the order they happen: a planet up at noon sets before it rises again. */}
+        {earlier && (
+          <>
+            <dt className="text-muted">Up at noon</dt>
+            <dd className="tabular-nums">until {earlier.text}</dd>
+          </>
+        )}
+        {rows.map(([label, text]) => (
+          <div key={label} className="contents">
+            <dt className="text-muted">{label}</dt>
+            <dd className="tabular-nums">{text}</dd>
+          </div>
+        ))}
+        {later && (
+          <>
+            <dt className="text-muted">Rises again</dt>
+            <dd className="tabular-nums">{later.text}</dd>
+          </>
+        )}
+        {p.times.state !== 'rises-and-sets' && (
+          <>
+            <dt className="text-muted">Rising</dt>
+            <dd>{p.times.summary}</dd>
+          </>
+        )}
+        <dt className="text-muted">At {atTime}</dt>
+        <dd className="tabular-nums">
+          {formatAltitude(p.altitudeDeg)} {p.direction}
+          {!p.aboveHorizon && ', below the horizon'}
+        </dd>
+        <dt className="text-muted">Distance</dt>
+        <dd className="tabular-nums">
+          {formatAu(p.distanceAu)} ({formatKm(p.distanceKm)})
+        </dd>
+        <dt className="text-muted">Light takes</dt>
+        <dd className="tabular-nums">{formatLightTime(p.lightTimeSeconds)}</dd>
+      </dl>
+    </li>
+  );
+}
+
+/**
+ * The planets tonight: on a phone a card each; from 640 px one row each, figures in tabular
+ * numerals, words where a time cannot be given.
+ */
 export function SkyPlanetsTable({ planets, atTime }: { planets: PlanetTonight[]; atTime: string }) {
+  return (
+    <>
+      <ul aria-label="Planets tonight" className="space-y-2 sm:hidden">
+        {planets.map((p) => (
+          <PlanetCard key={p.id} planet={p} atTime={atTime} />
+        ))}
+      </ul>
+      <div className="hidden sm:block">
+        <PlanetRows planets={planets} atTime={atTime} />
+      </div>
+    </>
+  );
+}
+
+function PlanetRows({ planets, atTime }: { planets: PlanetTonight[]; atTime: string }) {
   return (
     <DataTable compact caption="Planets tonight" columns={columns(atTime)}>
       {planets.map((p) => (
