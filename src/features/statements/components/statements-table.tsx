@@ -7,10 +7,22 @@ import { DataTable } from '@/components/ui/data-table.tsx';
 import { paths } from '@/config/paths.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
 
-/** Statements with their public text, dense but calm; each row opens the statement. */
+const WIDE_ONLY = 'hidden sm:table-cell';
+
+/**
+ * Statements with their public text, dense but calm; each row opens the statement. On a phone the
+ * statement takes the row's whole width, with its object and status beneath it.
+ */
 export function StatementsTable({ statements, locale }: { statements: StatementDto[]; locale: StatementLocale }) {
   return (
-    <DataTable columns={[{ label: 'Statement' }, { label: 'Object' }, { label: 'Status' }, { label: 'Computed' }]}>
+    <DataTable
+      columns={[
+        { label: 'Statement' },
+        { label: 'Object', className: WIDE_ONLY },
+        { label: 'Status', className: WIDE_ONLY },
+        { label: 'Computed', className: 'hidden md:table-cell' },
+      ]}
+    >
       {statements.map((s) => (
         <tr key={s.id} className="border-b border-rule align-top last:border-0 hover:bg-wash/60">
           <td className="max-w-xl px-4 py-2.5">
@@ -24,12 +36,16 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
               {s.template.title}
               {s.venue ? ` · ${venueNightText(s)}` : ''}
             </span>
+            <span className="mt-1.5 flex flex-wrap items-center gap-2 text-xs text-muted sm:hidden">
+              <StatementStatusBadge status={s.status} />
+              {s.object.name}
+            </span>
           </td>
-          <td className="px-4 py-2.5">{s.object.name}</td>
-          <td className="px-4 py-2.5">
+          <td className={`px-4 py-2.5 ${WIDE_ONLY}`}>{s.object.name}</td>
+          <td className={`px-4 py-2.5 ${WIDE_ONLY}`}>
             <StatementStatusBadge status={s.status} />
           </td>
-          <td className="whitespace-nowrap px-4 py-2.5 text-muted">{formatDateTime(s.computedAt)}</td>
+          <td className="hidden whitespace-nowrap px-4 py-2.5 text-muted md:table-cell">{formatDateTime(s.computedAt)}</td>
         </tr>
       ))}
     </DataTable>
