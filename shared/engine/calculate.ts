@@ -7,7 +7,7 @@
 import type { CalcQuantity, CalcRequest, CalcResult, CalcSuccess, MeasuredInput } from '../schemas/calc.ts';
 import { CalcError } from './errors.ts';
 import { resolveModel } from './model-resolve.ts';
-import type { Ctx } from './quantities/context.ts';
+import { INPUT_INFO, type Ctx } from './quantities/context.ts';
 import type { Values } from './quantities/photometry.ts';
 import { QUANTITY_SPECS, checkInputs } from './quantities/registry.ts';
 import { parseRequest, requestId } from './request.ts';
@@ -60,6 +60,8 @@ function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
   return { value: H0, minus: H0 - r.low, plus: r.high - H0, source: 'H0_range in the request' };
 }
 
+const H0_INFO = { symbol: 'H₀', name: 'Hubble constant', unit: 'km/s/Mpc' };
+
 function uncertaintyStep(
   measured: Record<string, Measurement>,
   quantity: string,
@@ -84,15 +86,20 @@ function uncertaintyStep(
   return {
     title: 'Uncertainty: 68 % interval by Monte Carlo propagation',
     formula: 'interval = [16th, 84th] percentile of the result over random draws of the inputs',
-    inputs: varied.map(([k, m]) => ({
-      symbol: k,
-      name: m.minus === m.plus ? `${k} ± ${m.plus}` : `${k} −${m.minus} +${m.plus}`,
-      value: m.value,
-      unit: '',
-      source: m.source,
-    })),
+    inputs: varied.map(([k, m]) => {
+      // Named as in the other steps (ϖ, parallax), never by the request's key (parallax_mas).
+      const info = k === H0_KEY ? H0_INFO : (INPUT_INFO[k] ?? { symbol: k, name: k, unit: '' });
+      const spread = m.minus === m.plus ? `± ${m.plus}` : `−${m.minus} +${m.plus}`;
+      return {
+        symbol: info.symbol,
+        name: `${info.name}, ${spread}${info.unit && !info.unit.includes(' ') ? ` ${info.unit}` : ''}`,
+        value: m.value,
+        unit: info.unit,
+        source: m.source,
+      };
+    }),
     constants: [],
-    result: { symbol: 'Δ', name: `width of the 68 % interval of ${quantity}`, value: high - low, unit },
+    result: { symbol: 'Δ', name: 'width of the 68 % interval of the result', value: high - low, unit },
     note: `${SAMPLES} draws from a seeded generator (mulberry32, seed ${SEED}), so the interval is reproducible. Each input is drawn from a two-piece normal whose 16th and 84th percentiles are value − minus and value + plus. H0 draws hold the density parameters fixed, so distances and times scale as 1/H0.${boundNote}${failedNote} Interval: ${low} to ${high}.`,
   };
 }

@@ -115,7 +115,7 @@ describe('catalogue forms that never lie', () => {
       sourceId: source.id,
     });
     await api.call('PUT', `/catalogue/measurements/${published.id}/preferred`, { preferred: true });
-    await api.call('POST', '/statements', { objectId: star.id, templateId: 'distance-today' });
+    const statement = await api.call<{ id: string }>('POST', '/statements', { objectId: star.id, templateId: 'distance-today' });
 
     await signInAs(page, baseUrl, 'reviewer');
     await page.goto(`${baseUrl}/catalogue/${star.id}`);
@@ -145,6 +145,21 @@ describe('catalogue forms that never lie', () => {
     await atThreeWidths(page, 'catalogue-parallax-preferred');
     await confirm.getByRole('button', { name: 'Make it preferred anyway' }).click();
     await expect.poll(() => row.getByText('Preferred', { exact: true }).count()).toBe(1);
+
+    // The statement says why in words, and that the measurements it lists are those of its last working.
+    await expect
+      .poll(async () => (await api.call<{ status: string }>('GET', `/statements/${statement.id}`)).status, {
+        timeout: 60_000,
+        interval: 500,
+      })
+      .toBe('broken');
+    await page.goto(`${baseUrl}/statements/${statement.id}`);
+    const why = page.getByText('The calculation failed: parallax (mas) must be greater than 0 (the value is −130).', {
+      exact: false,
+    });
+    await expect.poll(() => why.count()).toBe(1);
+    await expect.poll(() => page.getByText(/^When it was last worked out\./).count()).toBe(1);
+    expect(await page.getByText('parallax_mas').count()).toBe(0);
     expect(errors.filter((e) => !/409 \(Conflict\)/.test(e))).toEqual([]);
   });
 

@@ -64,6 +64,20 @@ describe('calculate', () => {
     const asym = ok({ quantity: 'parallax_distance', inputs: { parallax_mas: { value: 10, minus: 0.1, plus: 1 } } });
     // d = 1000/ϖ: the larger plus on ϖ pulls the low end of d further down.
     expect(asym.value - asym.interval!.low).toBeGreaterThan(asym.interval!.high - asym.value);
+    // The uncertainty step names its inputs as the other steps do, never by the request's keys.
+    const step = asym.working.at(-1)!;
+    expect(step.inputs.map((i) => [i.symbol, i.name, i.unit])).toEqual([['ϖ', 'parallax, −0.1 +1 mas', 'mas']]);
+    expect(step.result.name).toBe('width of the 68 % interval of the result');
+    const ranged = ok({
+      quantity: 'comoving_distance',
+      inputs: { z: { value: 1, sigma: 0.001 } },
+      model: { H0: 70, Om0: 0.3 },
+      H0_range: { low: 68, high: 72 },
+    });
+    expect(ranged.working.at(-1)!.inputs.map((i) => [i.symbol, i.name])).toEqual([
+      ['z', 'redshift, ± 0.001'],
+      ['H₀', 'Hubble constant, ± 2 km/s/Mpc'],
+    ]);
   });
 
   it('propagates an H0 range with the densities fixed (distance ∝ 1/H0)', () => {

@@ -21,11 +21,11 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
           Measurements used
         </h2>
         <p className="text-sm text-muted">
-          None from the catalogue
-          {statement.venue
-            ? `: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working)`
-            : ''}
-          .
+          {statement.status === 'broken' && !statement.working?.length
+            ? 'None yet: it has never been worked out.'
+            : statement.venue
+              ? `None from the catalogue: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working).`
+              : 'None from the catalogue.'}
         </p>
       </section>
     );
@@ -35,6 +35,12 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
       <h2 id="inputs-heading" className="text-lg font-semibold tracking-tight">
         Measurements used
       </h2>
+      {statement.status === 'broken' && (
+        // The stored inputs are those of the last working that succeeded, not the catalogue's values now.
+        <p className="text-sm text-muted">
+          When it was last worked out. The catalogue’s preferred values now are the ones that cannot be worked out (above).
+        </p>
+      )}
       {/* On a phone the uncertainty goes under the value and the source under the quantity. */}
       <DataTable
         columns={[
