@@ -61,10 +61,11 @@ function h0Measurement(req: CalcRequest, H0: number): Measurement | undefined {
 }
 
 const H0_INFO = { symbol: 'H₀', name: 'Hubble constant', unit: 'km/s/Mpc' };
+/** An input's symbol, name and unit as the working shows them (the request's key only for one unknown here). */
+const infoOf = (key: string) => (key === H0_KEY ? H0_INFO : (INPUT_INFO[key] ?? { symbol: key, name: key, unit: '' }));
 
 function uncertaintyStep(
   measured: Record<string, Measurement>,
-  quantity: string,
   low: number,
   high: number,
   unit: string,
@@ -73,11 +74,11 @@ function uncertaintyStep(
   const failedCount = [...failed.values()].reduce((a, b) => a + b, 0);
   const failedNote =
     failedCount > 0
-      ? ` ${failedCount} of ${SAMPLES} draws fell where ${quantity} is not defined (${[...failed].map(([k, n]) => `${n} from ${k}`).join(', ')}) and are left out of the percentiles; the interval is from the other ${SAMPLES - failedCount}.`
+      ? ` ${failedCount} of ${SAMPLES} draws fell where the result is not defined (${[...failed].map(([k, n]) => `${n} from ${infoOf(k).symbol}`).join(', ')}) and are left out of the percentiles; the interval is from the other ${SAMPLES - failedCount}.`
       : '';
   const bounds = Object.entries(measured)
     .filter(([k, m]) => (m.minus > 0 || m.plus > 0) && LOWER_BOUND[k] !== undefined && boundMass(bounded(k, m)) > 0)
-    .map(([k]) => `${k} ≥ ${LOWER_BOUND[k]}`);
+    .map(([k]) => `${infoOf(k).symbol} ≥ ${LOWER_BOUND[k]}`);
   const boundNote =
     bounds.length > 0
       ? ` Draws respect the physical bound${bounds.length > 1 ? 's' : ''} ${bounds.join(', ')}: the two-piece normal is truncated there (drawn conditioned on lying above it).`
@@ -88,7 +89,7 @@ function uncertaintyStep(
     formula: 'interval = [16th, 84th] percentile of the result over random draws of the inputs',
     inputs: varied.map(([k, m]) => {
       // Named as in the other steps (ϖ, parallax), never by the request's key (parallax_mas).
-      const info = k === H0_KEY ? H0_INFO : (INPUT_INFO[k] ?? { symbol: k, name: k, unit: '' });
+      const info = infoOf(k);
       const spread = m.minus === m.plus ? `± ${m.plus}` : `−${m.minus} +${m.plus}`;
       return {
         symbol: info.symbol,
@@ -192,7 +193,7 @@ function compute(req: CalcRequest, id: string | number | undefined): CalcSuccess
         `${outcome.failed} of ${SAMPLES} uncertainty draws fell where ${quantity} is not defined and were left out of the interval (see the working).`,
       );
     }
-    steps.push(uncertaintyStep(all, quantity, outcome.low, outcome.high, spec.unit, outcome.failures));
+    steps.push(uncertaintyStep(all, outcome.low, outcome.high, spec.unit, outcome.failures));
   }
   if (resolved && view.kind === 'hubble_law') {
     const law = lawComparison(req, measured, value, spec.unit, view.H0);
