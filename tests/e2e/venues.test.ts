@@ -66,6 +66,13 @@ describe('venues, kiosk screens and the sky tonight', () => {
     await expect.poll(() => page.getByRole('table').getByRole('rowheader').count()).toBe(7);
     expect(await page.getByText(/all day and night/).count()).toBeGreaterThanOrEqual(7);
     await screenshot(page, 'venue-pole-sky');
+    // On a phone the planets are cards, each saying in words why it has no rise or set.
+    await page.setViewportSize({ width: 390, height: 844 });
+    const cards = page.getByRole('list', { name: 'Planets tonight' }).getByRole('listitem');
+    await expect.poll(() => cards.count()).toBe(7);
+    await expect.poll(() => cards.filter({ hasText: /Rising and setting.*all day and night/ }).count()).toBe(7);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
+    await screenshot(page, 'venue-pole-sky-390');
     expect(errors).toEqual([]);
   });
 

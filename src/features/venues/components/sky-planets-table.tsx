@@ -52,16 +52,15 @@ const columns = (atTime: string): DataColumn[] => [
 
 /** One planet as a card, for a phone: the table's eight columns do not fit 390 px. */
 function PlanetCard({ planet: p, atTime }: { planet: PlanetTonight; atTime: string }) {
-  const rows: Array<[string, string]> =
-    p.times.state === 'rises-and-sets'
-      ? [
-          ['Rises', p.times.rise.text],
-          ['Highest', p.times.transit.text],
-          ['Sets', p.times.set.text],
-        ]
-      : [];
-  const earlier = p.times.state === 'rises-and-sets' ? p.times.earlierSet : undefined;
-  const later = p.times.state === 'rises-and-sets' ? p.times.laterRise : undefined;
+  // A planet that rises and sets has times; one that stays up or down has a sentence instead.
+  const times = p.times.state === 'rises-and-sets' ? p.times : undefined;
+  const rows: Array<[string, string]> = times
+    ? [
+        ['Rises', times.rise.text],
+        ['Highest', times.transit.text],
+        ['Sets', times.set.text],
+      ]
+    : [];
   return (
     <li className="rounded-lg border border-rule bg-panel p-3 text-sm">
       <p className="font-medium">{p.name}</p>
@@ -70,10 +69,10 @@ function PlanetCard({ planet: p, atTime }: { planet: PlanetTonight; atTime: stri
       </div>
       <dl className="mt-2 grid grid-cols-[auto_1fr] gap-x-3 gap-y-1">
         {/* In the order they happen: a planet up at noon sets before it rises again. */}
-        {earlier && (
+        {times?.earlierSet && (
           <>
             <dt className="text-muted">Up at noon</dt>
-            <dd className="tabular-nums">until {earlier.text}</dd>
+            <dd className="tabular-nums">until {times.earlierSet.text}</dd>
           </>
         )}
         {rows.map(([label, text]) => (
@@ -82,15 +81,15 @@ function PlanetCard({ planet: p, atTime }: { planet: PlanetTonight; atTime: stri
             <dd className="tabular-nums">{text}</dd>
           </div>
         ))}
-        {later && (
+        {times?.laterRise && (
           <>
             <dt className="text-muted">Rises again</dt>
-            <dd className="tabular-nums">{later.text}</dd>
+            <dd className="tabular-nums">{times.laterRise.text}</dd>
           </>
         )}
         {p.times.state !== 'rises-and-sets' && (
           <>
-            <dt className="text-muted">Rising</dt>
+            <dt className="text-muted">Rising and setting</dt>
             <dd>{p.times.summary}</dd>
           </>
         )}
