@@ -11,16 +11,21 @@ export const pageHref = (row: PageRow) =>
     ? paths.pageReview.href(row.id)
     : paths.pageEdit.href(row.id);
 
-/** The pages table: title, object, status, writer, last change. */
+const WIDE_ONLY = 'hidden sm:table-cell';
+
+/**
+ * The pages table: title, object, status, writer, last change. On a phone the title takes the row,
+ * with the status, object and writer beneath it.
+ */
 export function PagesTable({ rows }: { rows: PageRow[] }) {
   return (
     <DataTable
       columns={[
         { label: 'Title' },
-        { label: 'Object' },
-        { label: 'Status' },
-        { label: 'Writer' },
-        { label: 'Last change', align: 'right' },
+        { label: 'Object', className: WIDE_ONLY },
+        { label: 'Status', className: WIDE_ONLY },
+        { label: 'Writer', className: WIDE_ONLY },
+        { label: 'Last change', align: 'right', className: 'hidden md:table-cell' },
       ]}
     >
       {rows.map((row) => (
@@ -35,13 +40,17 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
             {row.live && row.status !== 'published' && (
               <span className="ml-2 text-xs text-muted">(a published version is live)</span>
             )}
+            <span className="mt-1 flex flex-wrap items-center gap-x-2 gap-y-1 text-xs text-muted sm:hidden">
+              <PageStatusBadge status={row.status} />
+              {row.object.name} · {row.writer.name}
+            </span>
           </td>
-          <td className="px-4 py-2">{row.object.name}</td>
-          <td className="px-4 py-2">
+          <td className={`px-4 py-2 ${WIDE_ONLY}`}>{row.object.name}</td>
+          <td className={`px-4 py-2 ${WIDE_ONLY}`}>
             <PageStatusBadge status={row.status} />
           </td>
-          <td className="px-4 py-2 text-muted">{row.writer.name}</td>
-          <td className="px-4 py-2 text-right tabular-nums text-muted">{formatDateTime(row.updatedAt)}</td>
+          <td className={`px-4 py-2 text-muted ${WIDE_ONLY}`}>{row.writer.name}</td>
+          <td className="hidden px-4 py-2 text-right tabular-nums text-muted md:table-cell">{formatDateTime(row.updatedAt)}</td>
         </tr>
       ))}
     </DataTable>
