@@ -4,7 +4,17 @@ import { describe, expect, it } from 'vitest';
 import { answerInTurns } from '../../server/middlewares/answer-in-turns.ts';
 
 /** A stand-in answer: only what answerInTurns reads. */
-const fakeAnswer = (id: number, destroyed = false) => ({ id, destroyed, writableEnded: false }) as unknown as ServerResponse;
+const fakeAnswer = (id: number, destroyed = false) => {
+  const res = {
+    id,
+    destroyed,
+    writableEnded: false,
+    destroy: () => {
+      res.destroyed = true;
+    },
+  };
+  return res as unknown as ServerResponse;
+};
 const idOf = (res: ServerResponse) => (res as unknown as { id: number }).id;
 
 describe('answerInTurns', () => {
@@ -44,6 +54,24 @@ describe('answerInTurns', () => {
     answer(fakeAnswer(3));
     await new Promise((r) => setImmediate(r));
     expect(written).toEqual([1, 3]);
+    answer(fakeAnswer(4));
+    await new Promise((r) => setImmediate(r));
+    expect(written).toEqual([1, 3, 4]);
+  });
+
+  it('an answer whose writing throws is closed, and the rest of the burst and later bursts still go out', async () => {
+    const written: number[] = [];
+    const faulty = fakeAnswer(2);
+    const answer = answerInTurns((res) => {
+      if (idOf(res) === 2) throw new Error('headers already sent');
+      written.push(idOf(res));
+    });
+    answer(fakeAnswer(1));
+    answer(faulty);
+    answer(fakeAnswer(3));
+    await new Promise((r) => setImmediate(r));
+    expect(written).toEqual([1, 3]);
+    expect(faulty.destroyed).toBe(true);
     answer(fakeAnswer(4));
     await new Promise((r) => setImmediate(r));
     expect(written).toEqual([1, 3, 4]);

@@ -1,11 +1,14 @@
 import type { ReactNode } from 'react';
 
+/** Classes for a column (heading and cells) that a phone leaves out; its row shows the value some other way. */
+export const WIDE_COLUMN = 'hidden sm:table-cell';
+
 /** A column heading; `hidden` keeps it for screen readers only (e.g. an actions column). */
 export interface DataColumn {
   label: string;
   align?: 'right';
   hidden?: boolean;
-  /** Extra classes for the heading, e.g. `hidden sm:table-cell` for a column only wide screens show (its cells take the same). */
+  /** Extra classes for the heading, e.g. `WIDE_COLUMN` for a column only wide screens show (its cells take the same). */
   className?: string;
 }
 

@@ -4,6 +4,7 @@ import { Link } from 'react-router-dom';
 import { KIND_LABELS } from '@shared/catalogue/kinds.ts';
 import type { SkyObjectListQuery, SkyObjectRowDto } from '@shared/schemas/sky-object.ts';
 import { Button } from '@/components/ui/button.tsx';
+import { WIDE_COLUMN } from '@/components/ui/data-table.tsx';
 import { paths } from '@/config/paths.ts';
 import { constellationName, formatPosition } from './format.ts';
 
@@ -64,9 +65,9 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
 
 /** Columns a narrow screen leaves out (the name cell repeats the kind and constellation there). */
 const WIDE_ONLY: Record<string, string> = {
-  kind: 'hidden sm:table-cell',
+  kind: WIDE_COLUMN,
   ra: 'hidden md:table-cell',
-  constellation: 'hidden sm:table-cell',
+  constellation: WIDE_COLUMN,
 };
 
 interface Props {

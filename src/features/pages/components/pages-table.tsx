@@ -2,7 +2,7 @@ import { Link } from 'react-router-dom';
 import type { PageRow } from '@shared/schemas/page.ts';
 import { paths } from '@/config/paths.ts';
 import { PageStatusBadge } from './page-status-badge.tsx';
-import { DataTable } from '@/components/ui/data-table.tsx';
+import { DataTable, WIDE_COLUMN } from '@/components/ui/data-table.tsx';
 import { formatDateTime } from '@/lib/format-date.ts';
 
 /** Where a row's title leads: reviewers and editors usually want the review view. */
@@ -10,8 +10,6 @@ export const pageHref = (row: PageRow) =>
   row.status === 'in_review' || row.status === 'needs_recheck' || row.status === 'approved'
     ? paths.pageReview.href(row.id)
     : paths.pageEdit.href(row.id);
-
-const WIDE_ONLY = 'hidden sm:table-cell';
 
 /**
  * The pages table: title, object, status, writer, last change. On a phone the title takes the row,
@@ -22,9 +20,9 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
     <DataTable
       columns={[
         { label: 'Title' },
-        { label: 'Object', className: WIDE_ONLY },
-        { label: 'Status', className: WIDE_ONLY },
-        { label: 'Writer', className: WIDE_ONLY },
+        { label: 'Object', className: WIDE_COLUMN },
+        { label: 'Status', className: WIDE_COLUMN },
+        { label: 'Writer', className: WIDE_COLUMN },
         { label: 'Last change', align: 'right', className: 'hidden md:table-cell' },
       ]}
     >
@@ -45,11 +43,11 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
               {row.object.name} · {row.writer.name}
             </span>
           </td>
-          <td className={`px-4 py-2 ${WIDE_ONLY}`}>{row.object.name}</td>
-          <td className={`px-4 py-2 ${WIDE_ONLY}`}>
+          <td className={`px-4 py-2 ${WIDE_COLUMN}`}>{row.object.name}</td>
+          <td className={`px-4 py-2 ${WIDE_COLUMN}`}>
             <PageStatusBadge status={row.status} />
           </td>
-          <td className={`px-4 py-2 text-muted ${WIDE_ONLY}`}>{row.writer.name}</td>
+          <td className={`px-4 py-2 text-muted ${WIDE_COLUMN}`}>{row.writer.name}</td>
           <td className="hidden px-4 py-2 text-right tabular-nums text-muted md:table-cell">{formatDateTime(row.updatedAt)}</td>
         </tr>
       ))}

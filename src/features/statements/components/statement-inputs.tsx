@@ -1,5 +1,5 @@
 import type { StatementDto } from '@shared/schemas/statement.ts';
-import { DataTable } from '@/components/ui/data-table.tsx';
+import { DataTable, WIDE_COLUMN } from '@/components/ui/data-table.tsx';
 import { formatSig } from '@/components/working/format-number.ts';
 
 // Stored values come back from unit conversion with float noise (16399999.999999998); the working shows six figures too.
@@ -10,8 +10,6 @@ const uncertainty = (i: StatementDto['inputs'][number]) =>
       ? `−${formatSig(i.minus)} / +${formatSig(i.plus)}`
       : 'not stated';
 
-const WIDE_ONLY = 'hidden sm:table-cell';
-
 /** The preferred measurements the statement used, each with its source (or why there are none). */
 export function StatementInputs({ statement }: { statement: StatementDto }) {
   if (statement.inputs.length === 0) {
@@ -21,11 +19,9 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
           Measurements used
         </h2>
         <p className="text-sm text-muted">
-          {statement.status === 'broken' && !statement.working?.length
-            ? 'None yet: it has never been worked out.'
-            : statement.venue
-              ? `None from the catalogue: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working).`
-              : 'None from the catalogue.'}
+          {statement.venue
+            ? `None from the catalogue: the distance comes from the sky computed for the night at ${statement.venue.name} (step 1 of the working).`
+            : 'None from the catalogue.'}
         </p>
       </section>
     );
@@ -36,7 +32,7 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
         Measurements used
       </h2>
       {statement.status === 'broken' && (
-        // The stored inputs are those of the last working that succeeded, not the catalogue's values now.
+        // A statement is never created broken, and a failed recompute keeps the last working's inputs.
         <p className="text-sm text-muted">
           When it was last worked out. The catalogue’s preferred values now are the ones that cannot be worked out (above).
         </p>
@@ -46,8 +42,8 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
         columns={[
           { label: 'Quantity' },
           { label: 'Value' },
-          { label: 'Uncertainty (68 %)', className: WIDE_ONLY },
-          { label: 'Source', className: WIDE_ONLY },
+          { label: 'Uncertainty (68 %)', className: WIDE_COLUMN },
+          { label: 'Source', className: WIDE_COLUMN },
         ]}
       >
         {statement.inputs.map((i) => {
@@ -63,8 +59,8 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
                 {formatSig(i.value)} {i.unit}
                 <span className={`mt-0.5 block text-xs sm:hidden ${unstated || 'text-muted'}`}>{uncertainty(i)}</span>
               </td>
-              <td className={`px-4 py-2 tabular-nums ${unstated} ${WIDE_ONLY}`}>{uncertainty(i)}</td>
-              <td className={`px-4 py-2 text-muted ${WIDE_ONLY}`}>{i.citation}</td>
+              <td className={`px-4 py-2 tabular-nums ${unstated} ${WIDE_COLUMN}`}>{uncertainty(i)}</td>
+              <td className={`px-4 py-2 text-muted ${WIDE_COLUMN}`}>{i.citation}</td>
             </tr>
           );
         })}

@@ -3,11 +3,9 @@ import type { StatementDto } from '@shared/schemas/statement.ts';
 import type { StatementLocale } from '@shared/statements/locales.ts';
 import { StatementStatusBadge } from '@/components/statements/statement-status-badge.tsx';
 import { venueNightText } from '@/components/statements/venue-night.ts';
-import { DataTable } from '@/components/ui/data-table.tsx';
+import { DataTable, WIDE_COLUMN } from '@/components/ui/data-table.tsx';
 import { paths } from '@/config/paths.ts';
 import { formatDateTime } from '@/lib/format-date.ts';
-
-const WIDE_ONLY = 'hidden sm:table-cell';
 
 /**
  * Statements with their public text, dense but calm; each row opens the statement. On a phone the
@@ -18,8 +16,8 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
     <DataTable
       columns={[
         { label: 'Statement' },
-        { label: 'Object', className: WIDE_ONLY },
-        { label: 'Status', className: WIDE_ONLY },
+        { label: 'Object', className: WIDE_COLUMN },
+        { label: 'Status', className: WIDE_COLUMN },
         { label: 'Computed', className: 'hidden md:table-cell' },
       ]}
     >
@@ -41,8 +39,8 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
               {s.object.name}
             </span>
           </td>
-          <td className={`px-4 py-2.5 ${WIDE_ONLY}`}>{s.object.name}</td>
-          <td className={`px-4 py-2.5 ${WIDE_ONLY}`}>
+          <td className={`px-4 py-2.5 ${WIDE_COLUMN}`}>{s.object.name}</td>
+          <td className={`px-4 py-2.5 ${WIDE_COLUMN}`}>
             <StatementStatusBadge status={s.status} />
           </td>
           <td className="hidden whitespace-nowrap px-4 py-2.5 text-muted md:table-cell">{formatDateTime(s.computedAt)}</td>

@@ -1,3 +1,4 @@
+import { Fragment } from 'react';
 import type { PlanetTonight, SkyEvent } from '@shared/sky/types.ts';
 import { DataTable, type DataColumn } from '@/components/ui/data-table.tsx';
 import { Icon } from '@/components/ui/icon.tsx';
@@ -76,10 +77,10 @@ function PlanetCard({ planet: p, atTime }: { planet: PlanetTonight; atTime: stri
           </>
         )}
         {rows.map(([label, text]) => (
-          <div key={label} className="contents">
+          <Fragment key={label}>
             <dt className="text-muted">{label}</dt>
             <dd className="tabular-nums">{text}</dd>
-          </div>
+          </Fragment>
         ))}
         {times?.laterRise && (
           <>
