@@ -30,6 +30,9 @@ const firstId = async (s: E2eSession, path: string): Promise<string> => {
   return id;
 };
 
+/** A made-up survey designation with no place to break, as real catalogues have. */
+const LONG_WORD = 'CorrieValeDeepSkySurveySourceNineteenThousandAndFortyTwoSouthWest';
+
 /** Every main screen of the desk, with the demo scenario's first page, object, statement, venue and channel. */
 async function mainScreens(admin: E2eSession, reviewer: E2eSession): Promise<Screen[]> {
   // A page the reviewer sees is one every role may open (not a writer's private draft).
@@ -53,6 +56,8 @@ async function mainScreens(admin: E2eSession, reviewer: E2eSession): Promise<Scr
       tablesFit: '[aria-labelledby="inputs-heading"]',
     },
     { name: 'catalogue', url: '/catalogue', tablesFit: 'main' },
+    // The object planted below, whatever else other tests have added to the first page.
+    { name: 'catalogue-long-name', url: `/catalogue?q=${LONG_WORD}`, tablesFit: 'main' },
     { name: 'object', url: `/catalogue/${objectId}` },
     { name: 'sources', url: '/sources' },
     {
@@ -108,6 +113,16 @@ describe('phones and tablets', () => {
     const { context, page, baseUrl } = await openBrowser();
     const admin = await demoSession(baseUrl, 'admin');
     const reviewer = await demoSession(baseUrl, 'reviewer');
+    // An object whose name and designation cannot break, so the catalogue's check does not depend on
+    // which other tests ran first (the name stays unique so reruns on a kept database add no twin).
+    const planted = await admin.call('POST', '/api/catalogue/objects', {
+      name: `${LONG_WORD}${Date.now().toString(36)} (demo)`,
+      designations: `${LONG_WORD.toUpperCase().slice(0, 58)}`,
+      kind: 'galaxy',
+      ra: '12 00 00',
+      dec: '+12 00 00',
+    });
+    expect(planted.status, JSON.stringify(planted.body)).toBe(201);
     const screens = await mainScreens(admin, reviewer);
     const wide: string[] = [];
     for (const role of ROLES) {

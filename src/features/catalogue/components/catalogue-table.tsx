@@ -17,12 +17,13 @@ const columns: ColumnDef<SkyObjectRowDto>[] = [
     // Accessors make the columns sortable for the table; the server does the sorting.
     accessorFn: (r) => r.name,
     cell: ({ row }) => (
-      <div>
+      // A long unbroken name or designation wraps anywhere rather than widening the column past a phone.
+      <div className="[overflow-wrap:anywhere]">
         <Link to={paths.catalogueObject.href(row.original.id)} className="font-medium text-accent hover:underline">
           {row.original.name}
         </Link>
         {row.original.designations.length > 0 && (
-          <span className="block truncate text-xs text-muted">{row.original.designations.slice(0, 3).join(' · ')}</span>
+          <span className="block text-xs text-muted">{row.original.designations.slice(0, 3).join(' · ')}</span>
         )}
         {/* On a phone the kind and constellation columns give way; they are read here instead. */}
         <span className="block text-xs text-muted sm:hidden">

@@ -28,7 +28,7 @@ export function PagesTable({ rows }: { rows: PageRow[] }) {
     >
       {rows.map((row) => (
         <tr key={row.id} className="h-10 border-t border-rule">
-          <td className="px-4 py-2">
+          <td className="px-4 py-2 [overflow-wrap:anywhere]">
             <Link to={pageHref(row)} className="font-medium text-accent hover:underline">
               {row.title}
             </Link>

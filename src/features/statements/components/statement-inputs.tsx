@@ -50,7 +50,7 @@ export function StatementInputs({ statement }: { statement: StatementDto }) {
           const unstated = i.sigma == null && i.minus == null ? 'text-changed' : '';
           return (
             <tr key={i.measurementId} className="h-10 border-b border-rule align-baseline last:border-0">
-              <td className="px-4 py-2">
+              <td className="px-4 py-2 [overflow-wrap:anywhere]">
                 {i.quantity.replaceAll('_', ' ')}
                 {i.band ? ` (${i.band})` : ''}
                 <span className="mt-0.5 block text-xs text-muted sm:hidden">{i.citation}</span>

@@ -23,7 +23,7 @@ export function StatementsTable({ statements, locale }: { statements: StatementD
     >
       {statements.map((s) => (
         <tr key={s.id} className="border-b border-rule align-top last:border-0 hover:bg-wash/60">
-          <td className="max-w-xl px-4 py-2.5">
+          <td className="max-w-xl px-4 py-2.5 [overflow-wrap:anywhere]">
             <Link
               to={paths.statement.href(s.id)}
               className="font-serif text-[15px] leading-snug text-ink hover:text-accent hover:underline"
